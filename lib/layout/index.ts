@@ -1,0 +1,6 @@
+export * from './schema';
+export * from './parse';
+export * from './kinds';
+export * from './units';
+export * from './templates';
+export * from './systems';
