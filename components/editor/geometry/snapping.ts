@@ -1,0 +1,148 @@
+/**
+ * Snapping for moves and resizes: to the lining and bare walls, to wheel-arch faces, to other
+ * modules' edges (those win, within a few screen pixels) and otherwise to the grid step. Returns
+ * the snapped offset and the guide lines to show. Pure math on mm; never reads the store.
+ */
+import type { LayoutDoc, Arrangement } from '@/lib/layout';
+import { linedInterior, wheelArchRects, type Rect } from './bayGeometry';
+
+export const GRID_STEPS = [10, 50, 100] as const;
+export type GridStep = (typeof GRID_STEPS)[number];
+
+/** A line to draw while snapping: along `axis` at `at`, spanning `from`..`to` on the other axis. */
+export interface SnapGuide {
+  axis: 'x' | 'y';
+  at: number;
+  from: number;
+  to: number;
+}
+
+export interface SnapTargets {
+  /** Candidate x values (lines across the bay) and y values (lines along it), with their extents. */
+  xs: { at: number; from: number; to: number }[];
+  ys: { at: number; from: number; to: number }[];
+}
+
+export interface SnapOptions {
+  enabled: boolean;
+  step: GridStep;
+  /** How close, in mm, an edge must come to a target to stick to it (a few px at current zoom). */
+  threshold: number;
+}
+
+/** Edges worth sticking to, leaving out the modules being moved. */
+export function snapTargets(doc: LayoutDoc, arrangement: Arrangement, exclude: ReadonlySet<string>): SnapTargets {
+  const lined = linedInterior(doc);
+  const { length, width } = doc.bay;
+  const xs: SnapTargets['xs'] = [
+    { at: 0, from: 0, to: width },
+    { at: length, from: 0, to: width },
+  ];
+  const ys: SnapTargets['ys'] = [
+    { at: lined.y, from: 0, to: length },
+    { at: lined.y + lined.width, from: 0, to: length },
+    { at: 0, from: 0, to: length },
+    { at: width, from: 0, to: length },
+  ];
+  for (const r of wheelArchRects(doc)) addRect(r);
+  for (const m of doc.modules) {
+    if (exclude.has(m.id) || !m.arrangements.includes(arrangement)) continue;
+    addRect(m);
+  }
+  return { xs, ys };
+
+  function addRect(r: Rect) {
+    xs.push({ at: r.x, from: r.y, to: r.y + r.width }, { at: r.x + r.length, from: r.y, to: r.y + r.width });
+    ys.push({ at: r.y, from: r.x, to: r.x + r.length }, { at: r.y + r.width, from: r.x, to: r.x + r.length });
+  }
+}
+
+function nearest(edges: number[], targets: { at: number }[], threshold: number): { delta: number; at: number } | null {
+  let best: { delta: number; at: number } | null = null;
+  for (const e of edges) {
+    for (const t of targets) {
+      const d = t.at - e;
+      if (Math.abs(d) <= threshold && (!best || Math.abs(d) < Math.abs(best.delta))) best = { delta: d, at: t.at };
+    }
+  }
+  return best;
+}
+
+export function snapToStep(value: number, step: number): number {
+  return Math.round(value / step) * step;
+}
+
+/**
+ * Snap a move of the box `box` by (dx, dy). Each axis is snapped on its own: an edge (either side
+ * or the centre) that comes within `threshold` of a target sticks to it; otherwise the box's
+ * near corner lands on the grid step.
+ */
+export function snapMove(box: Rect, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { dx: number; dy: number; guides: SnapGuide[] } {
+  if (!opts.enabled) return { dx: Math.round(dx), dy: Math.round(dy), guides: [] };
+  const guides: SnapGuide[] = [];
+  const nx = box.x + dx;
+  const ny = box.y + dy;
+  const sx = nearest([nx, nx + box.length], targets.xs, opts.threshold);
+  const sy = nearest([ny, ny + box.width], targets.ys, opts.threshold);
+  let outDx: number, outDy: number;
+  if (sx) {
+    outDx = dx + sx.delta;
+  } else {
+    outDx = snapToStep(nx, opts.step) - box.x;
+  }
+  if (sy) {
+    outDy = dy + sy.delta;
+  } else {
+    outDy = snapToStep(ny, opts.step) - box.y;
+  }
+  outDx = Math.round(outDx);
+  outDy = Math.round(outDy);
+  const fx = box.x + outDx, fy = box.y + outDy;
+  if (sx) guides.push({ axis: 'x', at: sx.at, ...span(targets.xs, sx.at, fy, fy + box.width) });
+  if (sy) guides.push({ axis: 'y', at: sy.at, ...span(targets.ys, sy.at, fx, fx + box.length) });
+  return { dx: outDx, dy: outDy, guides };
+}
+
+function span(targets: { at: number; from: number; to: number }[], at: number, a: number, b: number) {
+  let from = a, to = b;
+  for (const t of targets) if (t.at === at) { from = Math.min(from, t.from); to = Math.max(to, t.to); }
+  return { from, to };
+}
+
+export type HandleId = 'n' | 's' | 'e' | 'w' | 'ne' | 'nw' | 'se' | 'sw';
+export const HANDLES: HandleId[] = ['nw', 'n', 'ne', 'e', 'se', 's', 'sw', 'w'];
+/** The smallest module side a resize may leave (mm). */
+export const MIN_SIDE = 20;
+
+/**
+ * Resize `rect` by dragging handle `handle` by (dx, dy) in plan. 'n' is the top of the screen
+ * (y = 0, the left wall), 'w' is the left of the screen (x = 0, the cab end). The moving edges
+ * snap like a move; the opposite edges stay put; no side shrinks below MIN_SIDE.
+ */
+export function snapResize(rect: Rect, handle: HandleId, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { rect: Rect; guides: SnapGuide[] } {
+  let x0 = rect.x, x1 = rect.x + rect.length, y0 = rect.y, y1 = rect.y + rect.width;
+  const guides: SnapGuide[] = [];
+  const moveX = handle.includes('w') ? 'x0' : handle.includes('e') ? 'x1' : null;
+  const moveY = handle.includes('n') ? 'y0' : handle.includes('s') ? 'y1' : null;
+  if (moveX) {
+    const raw = (moveX === 'x0' ? x0 : x1) + dx;
+    const v = snapEdge(raw, targets.xs, opts);
+    if (moveX === 'x0') x0 = Math.min(v.value, x1 - MIN_SIDE); else x1 = Math.max(v.value, x0 + MIN_SIDE);
+    if (v.snapped) guides.push({ axis: 'x', at: v.value, ...span(targets.xs, v.value, y0, y1) });
+  }
+  if (moveY) {
+    const raw = (moveY === 'y0' ? y0 : y1) + dy;
+    const v = snapEdge(raw, targets.ys, opts);
+    if (moveY === 'y0') y0 = Math.min(v.value, y1 - MIN_SIDE); else y1 = Math.max(v.value, y0 + MIN_SIDE);
+    if (v.snapped) guides.push({ axis: 'y', at: v.value, ...span(targets.ys, v.value, x0, x1) });
+  }
+  x0 = Math.round(x0); x1 = Math.round(x1); y0 = Math.round(y0); y1 = Math.round(y1);
+  return { rect: { x: x0, y: y0, length: x1 - x0, width: y1 - y0 }, guides };
+}
+
+function snapEdge(raw: number, targets: { at: number }[], opts: SnapOptions): { value: number; snapped: boolean } {
+  if (!opts.enabled) return { value: Math.round(raw), snapped: false };
+  const hit = nearest([raw], targets, opts.threshold);
+  if (hit) return { value: hit.at, snapped: true };
+  return { value: snapToStep(raw, opts.step), snapped: false };
+}

@@ -1,0 +1,358 @@
+/**
+ * The editor's store (zustand, vanilla so tests drive it headlessly): the layout document, the
+ * selection, the arrangement on show, the viewport, the gesture in progress and the undo history.
+ * Every action below says how undo treats it. The document validates against the schema after
+ * every write (lengths rounded to whole mm). Must never hold Konva nodes, DOM objects or fetch.
+ */
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import {
+  baySchema, buildUpSchema, occupantsSchema,
+  type Arrangement, type Bay, type BuildUp, type LayoutDoc, type LengthUnit, type Module, type ModuleKind, type Occupants,
+} from '@/lib/layout';
+import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
+import type { GridStep, HandleId } from '../geometry/snapping';
+import { emptyHistory, pushEntry, type History } from './history';
+import * as edits from './moduleEdits';
+import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
+import { px } from '../types';
+
+export interface EditorOptions {
+  doc: LayoutDoc;
+  version: number;
+  readOnly?: boolean;
+  units?: LengthUnit;
+  /** Injected clock for nudge bursts (tests). */
+  now?: () => number;
+}
+
+/** Result of an action that may be refused: the message is for a toast. */
+export type EditResult = { ok: true } | { ok: false; error: string };
+
+/** Snap threshold on screen (px): an edge this close sticks (common practice, no source). */
+export const SNAP_PX = 8;
+
+export interface EditorState {
+  doc: LayoutDoc;
+  /** Last saved document and its version; the document is unsaved while `doc !== savedDoc`. */
+  savedDoc: LayoutDoc;
+  version: number;
+  readOnly: boolean;
+  units: LengthUnit;
+  selection: string[];
+  /** Modules a clicked finding names: drawn highlighted until the selection changes. */
+  highlight: string[];
+  arrangement: Arrangement;
+  /** Another arrangement drawn ghosted over the current one, or null. */
+  ghost: Arrangement | null;
+  viewport: Viewport;
+  /** Screen pixels per mm that make the drawing real size on this display (1:1). */
+  actualPxPerMm: number;
+  snap: { enabled: boolean; step: GridStep };
+  gesture: Gesture | null;
+  history: History;
+  shortcutSheetOpen: boolean;
+
+  // Document edits: each is ONE undo entry (nudges within a burst merge into one).
+  addModule(kind: ModuleKind, centre?: { x: number; y: number }): EditResult & { id?: string };
+  moveSelection(dx: number, dy: number): EditResult;
+  nudgeSelection(dx: number, dy: number): EditResult;
+  rotateSelection(): EditResult;
+  duplicateSelection(): EditResult;
+  deleteSelection(): EditResult;
+  updateModule(id: string, patch: Partial<Omit<Module, 'id'>>, label?: string): EditResult;
+  toggleMembership(id: string, arrangement: Arrangement): EditResult;
+  updateBay(patch: Partial<Bay>): EditResult;
+  updateBuildUp(buildUp: BuildUp): EditResult;
+  updateOccupants(occupants: Occupants): EditResult;
+  renameLayout(name: string): EditResult;
+  undo(): void;
+  redo(): void;
+
+  // Gestures: begin and drag change no document; commit is ONE undo entry; cancel leaves none.
+  beginMove(ids: string[]): void;
+  beginResize(id: string, handle: HandleId): void;
+  beginMarquee(x: number, y: number, additive: boolean): void;
+  dragTo(dx: number, dy: number): void;
+  commitGesture(): EditResult;
+  cancelGesture(): void;
+
+  // View state: not part of the document, never in undo.
+  select(ids: string[], mode?: 'replace' | 'toggle' | 'add'): void;
+  selectAll(): void;
+  setHighlight(ids: string[]): void;
+  setArrangement(a: Arrangement): void;
+  setGhost(a: Arrangement | null): void;
+  setViewport(v: Viewport): void;
+  resizeViewport(width: number, height: number): void;
+  zoomBy(factor: number, sx?: number, sy?: number): void;
+  panBy(dx: number, dy: number): void;
+  fit(): void;
+  actualSize(): void;
+  setActualPxPerMm(v: number): void;
+  setSnap(s: Partial<EditorState['snap']>): void;
+  setUnits(u: LengthUnit): void;
+  setShortcutSheet(open: boolean): void;
+
+  // Saving: never in undo. `replaceDoc` (their version after a conflict) clears history.
+  markSaved(doc: LayoutDoc, version: number): void;
+  replaceDoc(doc: LayoutDoc, version: number): void;
+}
+
+export type EditorStore = StoreApi<EditorState>;
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+export function createEditorStore(opts: EditorOptions): EditorStore {
+  const now = opts.now ?? (() => Date.now());
+  const initialViewport: Viewport = { scale: 0.25, originX: px(60), originY: px(60), width: px(1000), height: px(600) };
+
+  return createStore<EditorState>()((set, get) => {
+    /** Write a new document as one undo entry; refuse (and say why) on any schema error. */
+    function commit(label: string, change: () => { doc: LayoutDoc; selection?: string[] }, mergeKey?: string): EditResult {
+      const s = get();
+      if (s.readOnly) return { ok: false, error: 'This layout is read-only.' };
+      try {
+        const { doc, selection } = change();
+        if (doc === s.doc) return { ok: true };
+        const sel = selection ?? s.selection;
+        set({
+          doc,
+          selection: sel,
+          history: pushEntry(s.history, { label, before: s.doc, after: doc, selectionBefore: s.selection, selectionAfter: sel, mergeKey, at: now() }),
+        });
+        return { ok: true };
+      } catch (e) {
+        if (e instanceof edits.EditError) return { ok: false, error: e.message };
+        throw e;
+      }
+    }
+    const selected = () => get().selection.filter((id) => get().doc.modules.some((m) => m.id === id));
+    const snapOpts = () => {
+      const s = get();
+      return { enabled: s.snap.enabled, step: s.snap.step, threshold: screenToMm(s.viewport, SNAP_PX) };
+    };
+
+    return {
+      doc: opts.doc,
+      savedDoc: opts.doc,
+      version: opts.version,
+      readOnly: opts.readOnly ?? false,
+      units: opts.units ?? 'mm',
+      selection: [],
+      highlight: [],
+      arrangement: 'lounge',
+      ghost: null,
+      viewport: fitToBay(initialViewport, opts.doc.bay.length, opts.doc.bay.width),
+      actualPxPerMm: CSS_PX_PER_MM,
+      snap: { enabled: true, step: 10 },
+      gesture: null,
+      history: emptyHistory(),
+      shortcutSheetOpen: false,
+
+      addModule(kind, centre) {
+        let id: string | undefined;
+        const r = commit('Place module', () => {
+          const placed = edits.placeModule(get().doc, kind, centre, get().snap.enabled ? get().snap.step : 1);
+          id = placed.module.id;
+          return { doc: placed.doc, selection: [placed.module.id] };
+        });
+        if (r.ok && id) {
+          const m = get().doc.modules.find((o) => o.id === id)!;
+          // A kind that does not exist in the arrangement on show (a table while showing sleep): show one it exists in.
+          if (!m.arrangements.includes(get().arrangement)) set({ arrangement: m.arrangements[0] });
+        }
+        return { ...r, id };
+      },
+      moveSelection(dx, dy) {
+        const ids = selected();
+        if (ids.length === 0) return { ok: true };
+        return commit(`Move ${plural(ids.length, 'module')}`, () => ({ doc: edits.moveModules(get().doc, ids, dx, dy) }));
+      },
+      nudgeSelection(dx, dy) {
+        const ids = selected();
+        if (ids.length === 0) return { ok: true };
+        return commit(`Nudge ${plural(ids.length, 'module')}`, () => ({ doc: edits.moveModules(get().doc, ids, dx, dy) }), `nudge:${ids.join(',')}`);
+      },
+      rotateSelection() {
+        const ids = selected();
+        if (ids.length === 0) return { ok: true };
+        return commit(`Rotate ${plural(ids.length, 'module')}`, () => ({ doc: edits.rotateModules(get().doc, ids) }));
+      },
+      duplicateSelection() {
+        const ids = selected();
+        if (ids.length === 0) return { ok: true };
+        return commit(`Duplicate ${plural(ids.length, 'module')}`, () => {
+          const d = edits.duplicateModules(get().doc, ids);
+          return { doc: d.doc, selection: d.ids };
+        });
+      },
+      deleteSelection() {
+        const ids = selected();
+        if (ids.length === 0) return { ok: true };
+        return commit(`Delete ${plural(ids.length, 'module')}`, () => ({ doc: edits.deleteModules(get().doc, ids), selection: [] }));
+      },
+      updateModule(id, patch, label = 'Edit module') {
+        return commit(label, () => ({ doc: edits.patchModule(get().doc, id, patch) }));
+      },
+      toggleMembership(id, arrangement) {
+        return commit(`Change arrangements`, () => ({ doc: edits.toggleMembership(get().doc, id, arrangement) }));
+      },
+      updateBay(patch) {
+        return commit('Edit bay', () => {
+          const parsed = baySchema.safeParse({ ...get().doc.bay, ...patch });
+          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.') || 'bay'}: ${i.message}`).join('; '));
+          return { doc: { ...get().doc, bay: parsed.data } };
+        });
+      },
+      updateBuildUp(buildUp) {
+        return commit('Edit build-up', () => {
+          const parsed = buildUpSchema.safeParse(buildUp);
+          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+          return { doc: { ...get().doc, buildUp: parsed.data } };
+        });
+      },
+      updateOccupants(occupants) {
+        return commit('Edit occupants', () => {
+          const parsed = occupantsSchema.safeParse(occupants);
+          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+          return { doc: { ...get().doc, occupants: parsed.data } };
+        });
+      },
+      renameLayout(name) {
+        const trimmed = name.trim();
+        if (!trimmed) return { ok: false, error: 'Give the layout a name.' };
+        if (trimmed.length > 120) return { ok: false, error: 'A layout name has at most 120 characters.' };
+        return commit('Rename layout', () => ({ doc: { ...get().doc, name: trimmed } }));
+      },
+      undo() {
+        const s = get();
+        if (s.gesture) return s.cancelGesture();
+        const entry = s.history.past[s.history.past.length - 1];
+        if (!entry) return;
+        const ids = new Set(entry.before.modules.map((m) => m.id));
+        set({ doc: entry.before, selection: entry.selectionBefore.filter((id) => ids.has(id)), history: { past: s.history.past.slice(0, -1), future: [entry, ...s.history.future] } });
+      },
+      redo() {
+        const s = get();
+        const entry = s.history.future[0];
+        if (!entry || s.gesture) return;
+        const ids = new Set(entry.after.modules.map((m) => m.id));
+        set({ doc: entry.after, selection: entry.selectionAfter.filter((id) => ids.has(id)), history: { past: [...s.history.past, { ...entry, mergeKey: undefined }], future: s.history.future.slice(1) } });
+      },
+
+      beginMove(ids) {
+        const s = get();
+        if (s.readOnly) return;
+        set({ gesture: startMove(s.doc, s.arrangement, ids) });
+      },
+      beginResize(id, handle) {
+        const s = get();
+        if (s.readOnly) return;
+        set({ gesture: startResize(s.doc, s.arrangement, id, handle) });
+      },
+      beginMarquee(x, y, additive) {
+        set({ gesture: startMarquee(x, y, additive, additive ? get().selection : []) });
+      },
+      dragTo(dx, dy) {
+        const s = get();
+        if (!s.gesture) return;
+        set({ gesture: dragGesture(s.gesture, dx, dy, snapOpts(), s.doc, s.arrangement) });
+      },
+      commitGesture() {
+        const g = get().gesture;
+        if (!g) return { ok: true };
+        set({ gesture: null });
+        if (g.kind === 'marquee') {
+          const ids = g.additive ? Array.from(new Set([...g.base, ...g.preview.hits])) : g.preview.hits;
+          set({ selection: ids, highlight: [] });
+          return { ok: true };
+        }
+        if (g.kind === 'move') {
+          const { dx, dy } = g.preview;
+          if (dx === 0 && dy === 0) return { ok: true };
+          return commit(`Move ${plural(g.ids.length, 'module')}`, () => ({ doc: edits.moveModules(get().doc, g.ids, dx, dy) }));
+        }
+        const r = g.preview.rect;
+        if (r.x === g.start.x && r.y === g.start.y && r.length === g.start.length && r.width === g.start.width) return { ok: true };
+        return commit('Resize module', () => ({ doc: edits.resizeModule(get().doc, g.ids[0], r) }));
+      },
+      cancelGesture() {
+        if (get().gesture) set({ gesture: null });
+      },
+
+      select(ids, mode = 'replace') {
+        const cur = get().selection;
+        let next: string[];
+        if (mode === 'replace') next = ids;
+        else if (mode === 'add') next = Array.from(new Set([...cur, ...ids]));
+        else next = [...cur.filter((id) => !ids.includes(id)), ...ids.filter((id) => !cur.includes(id))];
+        set({ selection: next, highlight: [] });
+      },
+      selectAll() {
+        const s = get();
+        set({ selection: s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement)).map((m) => m.id) });
+      },
+      setHighlight(ids) {
+        set({ highlight: ids, selection: ids.filter((id) => get().doc.modules.some((m) => m.id === id)) });
+      },
+      setArrangement(a) {
+        const s = get();
+        if (s.gesture) set({ gesture: null });
+        // Keep only selected modules that exist in the arrangement now shown.
+        const inA = new Set(s.doc.modules.filter((m) => m.arrangements.includes(a)).map((m) => m.id));
+        set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), ghost: s.ghost === a ? null : s.ghost });
+      },
+      setGhost(a) {
+        set({ ghost: a === get().arrangement ? null : a });
+      },
+      setViewport(v) {
+        set({ viewport: v });
+      },
+      resizeViewport(width, height) {
+        const v = get().viewport;
+        if (v.width === width && v.height === height) return;
+        const first = v.width === 1000 && v.height === 600;
+        const next = { ...v, width: px(width), height: px(height) };
+        set({ viewport: first ? fitToBay(next, get().doc.bay.length, get().doc.bay.width) : next });
+      },
+      zoomBy(factor, sx, sy) {
+        const v = get().viewport;
+        set({ viewport: zoomAt(v, factor, sx ?? v.width / 2, sy ?? v.height / 2) });
+      },
+      panBy(dx, dy) {
+        set({ viewport: panBy(get().viewport, dx, dy) });
+      },
+      fit() {
+        const s = get();
+        set({ viewport: fitToBay(s.viewport, s.doc.bay.length, s.doc.bay.width) });
+      },
+      actualSize() {
+        const s = get();
+        set({ viewport: actualSize(s.viewport, s.actualPxPerMm, s.viewport.width / 2, s.viewport.height / 2) });
+      },
+      setActualPxPerMm(v) {
+        if (Number.isFinite(v) && v > 0.5 && v < 20) set({ actualPxPerMm: v });
+      },
+      setSnap(snap) {
+        set({ snap: { ...get().snap, ...snap } });
+      },
+      setUnits(units) {
+        set({ units });
+      },
+      setShortcutSheet(open) {
+        set({ shortcutSheetOpen: open });
+      },
+
+      markSaved(doc, version) {
+        set({ savedDoc: doc, version });
+      },
+      replaceDoc(doc, version) {
+        set({ doc, savedDoc: doc, version, selection: [], highlight: [], gesture: null, history: emptyHistory() });
+      },
+    };
+  });
+}
+
+export const isDirty = (s: Pick<EditorState, 'doc' | 'savedDoc'>) => s.doc !== s.savedDoc;
+export const canUndo = (s: EditorState) => s.history.past.length > 0 || s.gesture !== null;
+export const canRedo = (s: EditorState) => s.history.future.length > 0;
