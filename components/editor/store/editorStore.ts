@@ -51,6 +51,8 @@ export interface EditorState {
   gesture: Gesture | null;
   history: History;
   shortcutSheetOpen: boolean;
+  /** Bumped by "Save now"; the autosave hook watches it. */
+  saveRequest: number;
 
   // Document edits: each is ONE undo entry (nudges within a burst merge into one).
   addModule(kind: ModuleKind, centre?: { x: number; y: number }): EditResult & { id?: string };
@@ -94,6 +96,7 @@ export interface EditorState {
   setShortcutSheet(open: boolean): void;
 
   // Saving: never in undo. `replaceDoc` (their version after a conflict) clears history.
+  requestSave(): void;
   markSaved(doc: LayoutDoc, version: number): void;
   replaceDoc(doc: LayoutDoc, version: number): void;
 }
@@ -148,6 +151,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       gesture: null,
       history: emptyHistory(),
       shortcutSheetOpen: false,
+      saveRequest: 0,
 
       addModule(kind, centre) {
         let id: string | undefined;
@@ -343,6 +347,9 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         set({ shortcutSheetOpen: open });
       },
 
+      requestSave() {
+        set({ saveRequest: get().saveRequest + 1 });
+      },
       markSaved(doc, version) {
         set({ savedDoc: doc, version });
       },
