@@ -1,0 +1,163 @@
+/**
+ * Masses and axle loads of the converted van in its laden travel case.
+ *
+ * `computeAxleLoads(doc)` gathers every mass with a position — the base vehicle in running order
+ * (placed from its front-axle share), each module (its `massKg`, else its kind's default), water
+ * at the chosen fill (1 kg per litre; fresh water at 20 °C is 0.998 kg/L, handbook value, so the
+ * round figure errs heavy), gas cylinders (content plus tare), passengers at 75 kg on their seats
+ * (the driver is already in the mass in running order), personal effects and free payload items —
+ * and splits each between the axles by the lever rule. It reports the total, the axle loads,
+ * the centre of mass for the plan, and what is missing or assumed.
+ *
+ * DTO for the Weight panel and the plan sheet: `MassReport`. Pure: never import UI, framework or
+ * database code; never throws on a valid LayoutDoc (missing data comes back in `missing`).
+ */
+import type { LayoutDoc } from '../layout';
+import { leverSplit } from './lever';
+import { beltedTravelSeats, moduleCentre, moduleMassKg, moduleName, numericProp, tankLitres } from './module-facts';
+import { OCCUPANT_KG, personalEffectsAllowance } from './payload';
+
+/** kg per litre used for tank contents (round figure, errs heavy; see header). */
+export const WATER_KG_PER_L = 1;
+
+export type MassGroup = 'vehicle' | 'module' | 'water' | 'gas' | 'occupant' | 'effects' | 'payload';
+
+export interface MassItem {
+  id: string;
+  label: string;
+  group: MassGroup;
+  massKg: number;
+  /** Plan position in bay coordinates, mm. */
+  x: number;
+  y: number;
+  moduleId?: string;
+  /** Share on each axle, when the axle geometry is known. */
+  frontKg?: number;
+  rearKg?: number;
+}
+
+export interface MassReport {
+  items: MassItem[];
+  /** Everything aboard in the laden travel case. */
+  totalKg: number;
+  /** The van as built, ready to go but without passengers, personal effects or free payload. */
+  builtKg: number;
+  axles: { frontKg: number; rearKg: number } | null;
+  /** Centre of mass in bay coordinates (null when the base vehicle cannot be placed). */
+  centreOfMass: { x: number; y: number } | null;
+  /** Seats used for allowances: driver included. */
+  seats: number;
+  travellers: number;
+  /** Overall length used for the allowances, m (null when not entered). */
+  lengthM: number | null;
+  /** Fields to enter before a rule can be evaluated, as `systems.…` paths. */
+  missing: string[];
+  /** Stand-in values used, in words. */
+  assumptions: string[];
+}
+
+function seatCount(doc: LayoutDoc): number {
+  return doc.systems?.vehicle?.seats ?? Math.max(1, doc.bay.cabSeats + beltedTravelSeats(doc).length);
+}
+
+export function computeAxleLoads(doc: LayoutDoc): MassReport {
+  const vehicle = doc.systems?.vehicle ?? {};
+  const load = doc.systems?.load ?? {};
+  const missing: string[] = [];
+  const assumptions: string[] = [];
+  const items: MassItem[] = [];
+  const midY = doc.bay.width / 2;
+
+  const canPlace = vehicle.wheelbaseMm !== undefined && vehicle.frontAxleX !== undefined;
+  if (vehicle.wheelbaseMm === undefined) missing.push('systems.vehicle.wheelbaseMm');
+  if (vehicle.frontAxleX === undefined) missing.push('systems.vehicle.frontAxleX');
+
+  // The base vehicle, placed where its own front/rear split puts it.
+  if (vehicle.massInRunningOrderKg === undefined) missing.push('systems.vehicle.massInRunningOrderKg');
+  let vehiclePlaced = false;
+  if (vehicle.massInRunningOrderKg !== undefined) {
+    const miro = vehicle.massInRunningOrderKg;
+    let x = 0;
+    if (canPlace && vehicle.frontAxleRunningOrderKg !== undefined && miro > 0) {
+      if (vehicle.frontAxleRunningOrderKg > miro) missing.push('systems.vehicle.frontAxleRunningOrderKg (more than the whole mass in running order)');
+      else {
+        x = vehicle.frontAxleX! + ((miro - vehicle.frontAxleRunningOrderKg) / miro) * vehicle.wheelbaseMm!;
+        vehiclePlaced = true;
+      }
+    } else if (vehicle.frontAxleRunningOrderKg === undefined) missing.push('systems.vehicle.frontAxleRunningOrderKg');
+    items.push({ id: 'vehicle', label: 'Base vehicle in running order (driver included)', group: 'vehicle', massKg: miro, x, y: midY });
+  }
+
+  for (const m of doc.modules) {
+    const c = moduleCentre(m);
+    items.push({ id: `module:${m.id}`, label: moduleName(m), group: 'module', massKg: moduleMassKg(m), x: c.x, y: c.y, moduleId: m.id });
+    if (m.kind === 'fresh-water-tank' || m.kind === 'grey-water-tank') {
+      const fill = (m.kind === 'fresh-water-tank' ? load.freshFillPct ?? 100 : load.greyFillPct ?? 0) / 100;
+      const kg = tankLitres(m) * fill * WATER_KG_PER_L;
+      if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleName(m)} at ${Math.round(fill * 100)} %`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
+    }
+    if (m.kind === 'gas-locker') {
+      const cylinders = Math.max(0, Math.round(numericProp(m, 'cylinders') ?? 0));
+      const contentKg = Math.max(0, numericProp(m, 'cylinderKg') ?? 0);
+      const tareKg = doc.systems?.gas?.cylinderTareKg ?? contentKg;
+      if (doc.systems?.gas?.cylinderTareKg === undefined && cylinders > 0) assumptions.push(`cylinder tare taken as its gas content (${contentKg} kg); enter systems.gas.cylinderTareKg from the stamp`);
+      const kg = cylinders * (contentKg + tareKg);
+      if (kg > 0) items.push({ id: `gas:${m.id}`, label: `${cylinders} × ${contentKg} kg gas cylinder, full`, group: 'gas', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
+    }
+  }
+
+  // Passengers: cab seats first, then belted travel seats. The driver is in running order.
+  const seats = seatCount(doc);
+  const travellers = load.travellers ?? seats;
+  if (travellers > seats) missing.push(`systems.load.travellers (${travellers} travellers but ${seats} seats)`);
+  const cabX = vehicle.cabSeatX ?? vehicle.frontAxleX ?? 0;
+  if (vehicle.cabSeatX === undefined && doc.bay.cabSeats > 1 && travellers > 1) {
+    assumptions.push('cab passengers placed over the front axle; enter systems.vehicle.cabSeatX');
+  }
+  const seatSpots: { label: string; x: number; y: number; moduleId?: string }[] = [];
+  for (let i = 1; i < doc.bay.cabSeats; i++) seatSpots.push({ label: `Cab passenger ${i}`, x: cabX, y: midY });
+  for (const s of beltedTravelSeats(doc)) {
+    const c = moduleCentre(s);
+    seatSpots.push({ label: `Passenger on ${moduleName(s)}`, x: c.x, y: c.y, moduleId: s.id });
+  }
+  seatSpots.slice(0, Math.max(0, Math.min(travellers, seats) - 1)).forEach((spot, i) => {
+    items.push({ id: `occupant:${i + 1}`, label: spot.label, group: 'occupant', massKg: OCCUPANT_KG, x: spot.x, y: spot.y, moduleId: spot.moduleId });
+  });
+
+  const lengthM = vehicle.overallLengthMm !== undefined ? vehicle.overallLengthMm / 1000 : null;
+  let effectsKg = load.personalEffectsKg;
+  if (effectsKg === undefined) {
+    if (lengthM !== null) {
+      effectsKg = personalEffectsAllowance(seats, lengthM);
+      assumptions.push(`personal effects taken as the EN 1646-2 allowance, ${round1(effectsKg)} kg`);
+    } else {
+      missing.push('systems.vehicle.overallLengthMm (or systems.load.personalEffectsKg)');
+      effectsKg = 0;
+    }
+  }
+  if (effectsKg > 0) items.push({ id: 'effects', label: 'Personal effects', group: 'effects', massKg: effectsKg, x: load.personalEffectsX ?? doc.bay.length / 2, y: midY });
+  for (const p of load.items ?? []) {
+    items.push({ id: `payload:${p.id}`, label: p.label, group: 'payload', massKg: p.massKg, x: p.x, y: p.y ?? midY });
+  }
+
+  const totalKg = sum(items.map((i) => i.massKg));
+  const builtKg = sum(items.filter((i) => i.group !== 'occupant' && i.group !== 'effects' && i.group !== 'payload').map((i) => i.massKg));
+  let axles: MassReport['axles'] = null;
+  let centreOfMass: MassReport['centreOfMass'] = null;
+  if (canPlace && vehiclePlaced) {
+    for (const item of items) Object.assign(item, leverSplit(item.massKg, item.x - vehicle.frontAxleX!, vehicle.wheelbaseMm!));
+    axles = { frontKg: sum(items.map((i) => i.frontKg!)), rearKg: sum(items.map((i) => i.rearKg!)) };
+    if (totalKg > 0) {
+      centreOfMass = { x: sum(items.map((i) => i.massKg * i.x)) / totalKg, y: sum(items.map((i) => i.massKg * i.y)) / totalKg };
+    }
+  }
+  return { items, totalKg, builtKg, axles, centreOfMass, seats, travellers, lengthM, missing, assumptions };
+}
+
+function sum(values: number[]): number {
+  return values.reduce((a, b) => a + b, 0);
+}
+
+function round1(n: number): number {
+  return Math.round(n * 10) / 10;
+}

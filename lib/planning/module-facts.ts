@@ -1,0 +1,55 @@
+/**
+ * Facts about placed modules that build planning reads: mass (the module's own `massKg`
+ * overrides its kind's default), plan centre, numeric props with kind defaults, and which
+ * modules are travel seats, tanks, gas appliances.
+ *
+ * Pure: reads a LayoutDoc, returns plain data. Must never import UI, framework or database code.
+ */
+import { kindSpec, type LayoutDoc, type Module } from '../layout';
+
+export function moduleMassKg(m: Module): number {
+  return m.massKg ?? kindSpec(m.kind).massKg;
+}
+
+export function moduleCentre(m: Module): { x: number; y: number } {
+  return { x: m.x + m.length / 2, y: m.y + m.width / 2 };
+}
+
+/** A numeric prop of the module, else its kind's default, else undefined. */
+export function numericProp(m: Module, name: string): number | undefined {
+  const own = m.props?.[name];
+  if (typeof own === 'number' && Number.isFinite(own)) return own;
+  const dflt = kindSpec(m.kind).props?.[name];
+  return typeof dflt === 'number' && Number.isFinite(dflt) ? dflt : undefined;
+}
+
+export function stringProp(m: Module, name: string): string | undefined {
+  const own = m.props?.[name];
+  return typeof own === 'string' ? own : undefined;
+}
+
+export function booleanProp(m: Module, name: string): boolean | undefined {
+  const own = m.props?.[name];
+  if (typeof own === 'boolean') return own;
+  const dflt = kindSpec(m.kind).props?.[name];
+  return typeof dflt === 'boolean' ? dflt : undefined;
+}
+
+export function modulesOfKind(doc: LayoutDoc, kind: Module['kind']): Module[] {
+  return doc.modules.filter((m) => m.kind === kind);
+}
+
+/** Travel seats with a belt (kind `seat`, present in the travel arrangement, `belted` not false). */
+export function beltedTravelSeats(doc: LayoutDoc): Module[] {
+  return doc.modules.filter((m) => m.kind === 'seat' && m.arrangements.includes('travel') && booleanProp(m, 'belted') !== false);
+}
+
+/** Name for messages: the label, else the kind's title, with the id. */
+export function moduleName(m: Module): string {
+  return `${m.label ?? kindSpec(m.kind).title} (${m.id})`;
+}
+
+/** Litres a tank module holds (`props.litres`, else the kind's default). */
+export function tankLitres(m: Module): number {
+  return Math.max(0, numericProp(m, 'litres') ?? 0);
+}
