@@ -1,10 +1,11 @@
 import { defineConfig } from 'vitest/config';
 import path from 'node:path';
-import tsconfigPaths from 'vite-tsconfig-paths';
 
 export default defineConfig({
-  plugins: [tsconfigPaths()],
-  resolve: { alias: { 'server-only': path.resolve(__dirname, 'tests/setup/server-only.ts') } },
+  resolve: {
+    tsconfigPaths: true,
+    alias: { 'server-only': path.resolve(import.meta.dirname, 'tests/setup/server-only.ts') },
+  },
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],

@@ -1,0 +1,21 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { currentActor } from '@/lib/auth/session';
+import { getStudio } from '@/db/studios';
+import { MembersPanel } from '@/components/settings/MembersPanel';
+import { StudioPanel } from '@/components/settings/StudioPanel';
+
+export const metadata: Metadata = { title: 'Settings' };
+
+export default async function SettingsPage() {
+  const actor = await currentActor();
+  if (!actor) redirect('/sign-in');
+  const studio = await getStudio(actor);
+  return (
+    <main className="mx-auto max-w-4xl space-y-6 px-6 py-8">
+      <h1 className="text-2xl font-semibold">Settings</h1>
+      <StudioPanel studio={studio} />
+      <MembersPanel isOwner={actor.role === 'owner'} selfId={actor.userId} />
+    </main>
+  );
+}

@@ -1,0 +1,4 @@
+// Auth.js's own endpoints (sign-in callback, session, CSRF token, sign-out).
+import { handlers } from '@/auth';
+
+export const { GET, POST } = handlers;

@@ -1,0 +1,21 @@
+import { handle, HttpError, invalid, json, readJson, requireActor } from '@/lib/api/respond';
+import { RateLimiter } from '@/lib/api/rate-limit';
+import { parseLayoutDoc } from '@/lib/layout/parse';
+import { runChecks } from '@/lib/checks';
+import { studioCheckDefaults, withStudioDefaults } from '@/db/studios';
+
+export const dynamic = 'force-dynamic';
+
+/** Live checks while editing: a burst of 20, then 10 a second per user. */
+const limiter = new RateLimiter(20, 10);
+
+/** Runs the checks on a posted layout document. Nothing is stored. */
+export const POST = handle(async (req) => {
+  const actor = await requireActor(req);
+  if (!limiter.take(actor.userId)) {
+    throw new HttpError(429, 'Too many check requests; wait a moment.', { retryAfter: limiter.retryAfter(actor.userId) });
+  }
+  const parsed = parseLayoutDoc(await readJson(req));
+  if (!parsed.ok) throw invalid(parsed.issues);
+  return json(runChecks(withStudioDefaults(parsed.value, await studioCheckDefaults(actor))));
+});

@@ -1,0 +1,15 @@
+import { handle, json, requireActor } from '@/lib/api/respond';
+import { getLayout } from '@/db/layouts';
+import { runChecks } from '@/lib/checks';
+import { studioCheckDefaults, withStudioDefaults } from '@/db/studios';
+
+export const dynamic = 'force-dynamic';
+
+type Ctx = { params: Promise<{ id: string }> };
+
+/** The check report of the stored layout: anyone who may read the layout may read its checks. */
+export const GET = handle<Ctx>(async (req, { params }) => {
+  const actor = await requireActor(req);
+  const layout = await getLayout(actor, (await params).id);
+  return json(runChecks(withStudioDefaults(layout.doc, await studioCheckDefaults(actor))), { headers: { ETag: `"${layout.version}"` } });
+});

@@ -1,0 +1,20 @@
+import type { Metadata } from 'next';
+import type { ReactNode } from 'react';
+import { textFace, monoFace } from './fonts';
+import { Providers } from './providers';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Baywright', template: '%s · Baywright' },
+  description: 'Plan camper-van conversions to scale, checked against the rules of the trade, shared with your client.',
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en-GB" className={`${textFace.variable} ${monoFace.variable}`}>
+      <body className="min-h-screen bg-paper text-ink">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,38 @@
+/**
+ * The database-free half of Auth.js: session strategy, pages and the callbacks that carry the
+ * user id and role in the JWT. Shared by the proxy and by `auth.ts`.
+ * The proxy only redirects signed-out visitors for comfort; every route handler checks again.
+ */
+import type { NextAuthConfig } from 'next-auth';
+import { authSecret, SESSION_MAX_AGE_S, useSecureCookies } from './lib/auth/secret';
+
+export const authConfig = {
+  trustHost: true,
+  secret: authSecret(),
+  useSecureCookies: useSecureCookies(),
+  session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_S },
+  pages: { signIn: '/sign-in' },
+  providers: [],
+  callbacks: {
+    jwt({ token, user }) {
+      if (user) {
+        token.uid = user.id as string;
+        token.role = user.role;
+        token.studioId = user.studioId;
+        token.sv = user.sessionVersion;
+      }
+      return token;
+    },
+    session({ session, token }) {
+      session.user.id = token.uid as string;
+      session.user.role = token.role;
+      session.user.studioId = token.studioId;
+      return session;
+    },
+    authorized({ auth, request }) {
+      const path = request.nextUrl.pathname;
+      const needsUser = ['/layouts', '/clients', '/settings', '/outbox'].some((p) => path === p || path.startsWith(`${p}/`));
+      return needsUser ? Boolean(auth?.user) : true;
+    },
+  },
+} satisfies NextAuthConfig;

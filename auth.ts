@@ -1,0 +1,47 @@
+/**
+ * Auth.js with e-mail + password. The Credentials provider checks the password against the
+ * database and applies the failed-sign-in limit; the rest of the configuration is DB-free and
+ * lives in auth.config.ts.
+ */
+import NextAuth, { CredentialsSignin } from 'next-auth';
+import Credentials from 'next-auth/providers/credentials';
+import { z } from 'zod';
+import { authConfig } from './auth.config';
+import { authenticate, endSessions } from './db/accounts';
+import { clientAddress } from './lib/auth/address';
+
+class RateLimited extends CredentialsSignin {
+  code = 'rate_limited';
+}
+class InvalidCredentials extends CredentialsSignin {
+  code = 'invalid_credentials';
+}
+
+const credentialsSchema = z.object({
+  email: z.string().trim().email().max(254),
+  password: z.string().min(1).max(200),
+});
+
+export const { handlers, auth, signIn, signOut } = NextAuth({
+  ...authConfig,
+  events: {
+    // Sign-out ends every session of the user, not only this cookie.
+    async signOut(message) {
+      const uid = 'token' in message ? message.token?.uid : undefined;
+      if (uid) await endSessions(uid);
+    },
+  },
+  providers: [
+    Credentials({
+      credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
+      async authorize(raw, request) {
+        const parsed = credentialsSchema.safeParse(raw);
+        if (!parsed.success) throw new InvalidCredentials();
+        const result = await authenticate(parsed.data.email, parsed.data.password, clientAddress(request));
+        if (!result.ok) throw result.reason === 'rate_limited' ? new RateLimited() : new InvalidCredentials();
+        const { id, email, name, role, studioId, sessionVersion } = result.user;
+        return { id, email, name, role, studioId, sessionVersion };
+      },
+    }),
+  ],
+});

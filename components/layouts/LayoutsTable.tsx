@@ -1,0 +1,122 @@
+'use client';
+// The studio's layouts: sortable, filterable, fetched in the browser.
+import Link from 'next/link';
+import { useMemo, useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import {
+  createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState,
+} from '@tanstack/react-table';
+import { ArrowDown, ArrowUp, Plus, Search } from 'lucide-react';
+import { apiFetch } from '@/lib/api/client-fetch';
+import type { LayoutSummaryDto } from '@/db/layouts';
+
+const col = createColumnHelper<LayoutSummaryDto>();
+const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+
+export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
+  const query = useQuery({ queryKey: ['layouts'], queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>('/api/layouts') });
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
+  const [filter, setFilter] = useState('');
+
+  const columns = useMemo(
+    () => [
+      col.accessor('name', {
+        header: 'Name',
+        cell: (c) => <Link className="font-medium text-ink underline-offset-2 hover:text-copper hover:underline" href={`/layouts/${c.row.original.id}`}>{c.getValue()}</Link>,
+      }),
+      col.accessor((r) => r.client?.name ?? '', { id: 'client', header: 'Client', cell: (c) => c.getValue() || <span className="text-ink-faint">—</span> }),
+      col.accessor('sizeClass', {
+        header: 'Bay',
+        cell: (c) => (
+          <span className="font-mono text-xs">
+            {c.getValue()} <span className="text-ink-soft">{c.row.original.bay.length} × {c.row.original.bay.width} × {c.row.original.bay.height} mm</span>
+          </span>
+        ),
+      }),
+      col.accessor('moduleCount', { header: 'Modules', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      col.accessor('updatedAt', {
+        header: 'Last change',
+        cell: (c) => (
+          <span className="text-ink-soft">{when.format(new Date(c.getValue()))}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
+        ),
+      }),
+    ],
+    [],
+  );
+
+  const table = useReactTable({
+    data: query.data?.layouts ?? [],
+    columns,
+    state: { sorting, globalFilter: filter },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setFilter,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+
+  return (
+    <div>
+      <div className="mb-4 flex items-center gap-3">
+        <label className="relative flex-1 sm:max-w-xs">
+          <span className="sr-only">Filter layouts</span>
+          <Search size={14} className="absolute left-2 top-2.5 text-ink-faint" aria-hidden="true" />
+          <input className="field pl-7" placeholder="Filter by name, client or bay…" value={filter} onChange={(e) => setFilter(e.target.value)} />
+        </label>
+        {canCreate && (
+          <Link href="/layouts/new" className="btn-primary ml-auto"><Plus size={14} aria-hidden="true" /> New layout</Link>
+        )}
+      </div>
+      {query.isPending ? (
+        <p className="panel p-6 text-sm text-ink-soft" role="status">Loading layouts…</p>
+      ) : query.isError ? (
+        <div className="panel border-brick p-6 text-sm" role="alert">
+          Could not load the layouts: {query.error.message}{' '}
+          <button className="text-copper underline" onClick={() => query.refetch()}>Try again</button>
+        </div>
+      ) : query.data.layouts.length === 0 ? (
+        <div className="panel p-10 text-center">
+          <p className="font-medium">No layouts yet</p>
+          <p className="mt-1 text-sm text-ink-soft">
+            {canCreate ? 'Start from a bay template or a starter layout.' : 'Your workshop has not shared a layout with you yet.'}
+          </p>
+          {canCreate && <Link href="/layouts/new" className="btn-primary mt-4">Create the first layout</Link>}
+        </div>
+      ) : (
+        <div className="panel overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <thead className="border-b border-paper-edge bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id}>
+                  {hg.headers.map((h) => {
+                    const sorted = h.column.getIsSorted();
+                    return (
+                      <th key={h.id} className="px-3 py-2 font-medium" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : 'none'}>
+                        <button type="button" className="inline-flex items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          {sorted === 'asc' ? <ArrowUp size={12} aria-hidden="true" /> : sorted === 'desc' ? <ArrowDown size={12} aria-hidden="true" /> : null}
+                        </button>
+                      </th>
+                    );
+                  })}
+                </tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((row) => (
+                <tr key={row.id} className="border-b border-paper-edge last:border-0 hover:bg-paper-deep/50">
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                  ))}
+                </tr>
+              ))}
+              {table.getRowModel().rows.length === 0 && (
+                <tr><td colSpan={5} className="px-3 py-6 text-center text-ink-soft">No layout matches “{filter}”.</td></tr>
+              )}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </div>
+  );
+}

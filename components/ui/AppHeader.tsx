@@ -1,0 +1,40 @@
+'use client';
+// The 48 px bar above every signed-in page.
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+import { signOut } from 'next-auth/react';
+import { LogOut } from 'lucide-react';
+import { Wordmark } from './Wordmark';
+
+const ROLE_WORD = { owner: 'Owner', designer: 'Designer', client: 'Client' } as const;
+
+export function AppHeader({ name, role }: { name: string; role: keyof typeof ROLE_WORD }) {
+  const path = usePathname();
+  const links = [
+    { href: '/layouts', label: 'Layouts' },
+    ...(role !== 'client' ? [{ href: '/clients', label: 'Clients' }] : []),
+    { href: '/settings', label: 'Settings' },
+  ];
+  return (
+    <header className="flex h-12 items-center gap-6 border-b border-paper-edge bg-paper px-4">
+      <Link href="/layouts" aria-label="Baywright home"><Wordmark /></Link>
+      <nav className="flex gap-1 text-sm" aria-label="Main">
+        {links.map((l) => {
+          const active = path === l.href || path.startsWith(`${l.href}/`);
+          return (
+            <Link key={l.href} href={l.href} aria-current={active ? 'page' : undefined}
+              className={`rounded-sm px-2 py-1 ${active ? 'bg-paper-deep font-medium text-ink' : 'text-ink-soft hover:text-ink'}`}>
+              {l.label}
+            </Link>
+          );
+        })}
+      </nav>
+      <div className="ml-auto flex items-center gap-3 text-sm">
+        <span className="text-ink-soft">{name} · {ROLE_WORD[role]}</span>
+        <button type="button" className="btn-quiet px-2 py-1" onClick={() => signOut({ redirectTo: '/' })}>
+          <LogOut size={14} aria-hidden="true" /> Sign out
+        </button>
+      </div>
+    </header>
+  );
+}

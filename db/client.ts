@@ -1,0 +1,155 @@
+/**
+ * The one database handle of a process. PGlite (embedded PostgreSQL) under `./data/<BAYWRIGHT_DB>`
+ * by default; a PostgreSQL server through node-postgres when DATABASE_URL is set. Both sit behind
+ * the same drizzle interface, so nothing above this file knows which one it has.
+ *
+ * Opened lazily (never during `next build`), held once per process on globalThis (dev hot reload
+ * would otherwise open the folder again), guarded by a pid lock file because PGlite has no lock
+ * of its own, closed on SIGTERM/SIGINT. Must never be imported by client components.
+ */
+import 'server-only';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import * as schema from './schema';
+
+export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
+
+interface DbHandle {
+  db: Db;
+  kind: 'pglite' | 'postgres';
+  close: () => Promise<void>;
+}
+
+const MIGRATIONS = path.join(process.cwd(), 'drizzle');
+
+type GlobalWithDb = typeof globalThis & { __baywrightDb?: Promise<DbHandle> };
+const g = globalThis as GlobalWithDb;
+
+/** The folder PGlite keeps its data in: ./data/<name>, name from BAYWRIGHT_DB (default "dev"). */
+export function dataDir(name = process.env.BAYWRIGHT_DB ?? 'dev'): string {
+  if (!/^[a-z0-9][a-z0-9_-]*$/i.test(name)) throw new Error(`BAYWRIGHT_DB must be a plain folder name, got "${name}"`);
+  return path.join(process.env.BAYWRIGHT_DATA_ROOT ?? path.join(process.cwd(), 'data'), name);
+}
+
+export function getDb(): Promise<Db> {
+  return getHandle().then((h) => h.db);
+}
+
+export function getHandle(): Promise<DbHandle> {
+  if (!g.__baywrightDb) {
+    g.__baywrightDb = open().catch((err) => {
+      g.__baywrightDb = undefined;
+      throw err;
+    });
+  }
+  return g.__baywrightDb;
+}
+
+/** Tests hand in their own (cloned, migrated) instance. */
+export function useDbHandle(handle: DbHandle): void {
+  g.__baywrightDb = Promise.resolve(handle);
+}
+
+export async function closeDb(): Promise<void> {
+  const pending = g.__baywrightDb;
+  g.__baywrightDb = undefined;
+  if (pending) await (await pending).close();
+}
+
+async function open(): Promise<DbHandle> {
+  const url = process.env.DATABASE_URL;
+  const handle = url ? await openPostgres(url) : await openPglite(dataDir());
+  registerShutdown();
+  return handle;
+}
+
+async function openPostgres(url: string): Promise<DbHandle> {
+  const { Pool } = await import('pg');
+  const { drizzle } = await import('drizzle-orm/node-postgres');
+  const { migrate } = await import('drizzle-orm/node-postgres/migrator');
+  const pool = new Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_MAX ?? 10) });
+  const db = drizzle(pool, { schema }) as unknown as Db;
+  await migrate(drizzle(pool, { schema }), { migrationsFolder: MIGRATIONS });
+  return { db, kind: 'postgres', close: () => pool.end() };
+}
+
+export async function openPglite(dir: string, options: { migrate?: boolean } = {}): Promise<DbHandle> {
+  const { PGlite } = await import('@electric-sql/pglite');
+  const { drizzle } = await import('drizzle-orm/pglite');
+  const { migrate } = await import('drizzle-orm/pglite/migrator');
+  // PGlite creates only the last folder of its path.
+  fs.mkdirSync(path.dirname(dir), { recursive: true });
+  const releaseLock = acquireLock(dir);
+  try {
+    const client = await PGlite.create({ dataDir: dir });
+    const db = drizzle(client, { schema });
+    if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
+    return {
+      db: db as unknown as Db,
+      kind: 'pglite',
+      close: async () => {
+        await client.close();
+        releaseLock();
+      },
+    };
+  } catch (err) {
+    releaseLock();
+    throw err;
+  }
+}
+
+/**
+ * PGlite has no lock: two processes on one folder both open it and rows are lost. A pid file
+ * beside the folder makes the second one fail loudly instead.
+ */
+export function acquireLock(dir: string): () => void {
+  const lockFile = `${dir}.pid`;
+  try {
+    fs.writeFileSync(lockFile, String(process.pid), { flag: 'wx' });
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+    const holder = Number(fs.readFileSync(lockFile, 'utf8').trim());
+    if (holder && holder !== process.pid && isAlive(holder)) {
+      throw new DatabaseLockedError(dir, holder);
+    }
+    // A stale lock from a process that died: take it over.
+    fs.writeFileSync(lockFile, String(process.pid));
+  }
+  return () => {
+    try {
+      if (fs.readFileSync(lockFile, 'utf8').trim() === String(process.pid)) fs.unlinkSync(lockFile);
+    } catch {
+      /* already gone */
+    }
+  };
+}
+
+export class DatabaseLockedError extends Error {
+  constructor(dir: string, pid: number) {
+    super(`The embedded database at ${dir} is already open in process ${pid}. Stop that process, or point BAYWRIGHT_DB at another folder.`);
+    this.name = 'DatabaseLockedError';
+  }
+}
+
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+let shutdownRegistered = false;
+function registerShutdown() {
+  if (shutdownRegistered || process.env.VITEST) return;
+  shutdownRegistered = true;
+  const shutdown = (signal: NodeJS.Signals) => {
+    closeDb()
+      .catch(() => undefined)
+      .finally(() => process.exit(signal === 'SIGINT' ? 130 : 143));
+  };
+  process.once('SIGTERM', shutdown);
+  process.once('SIGINT', shutdown);
+}

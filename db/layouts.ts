@@ -1,0 +1,184 @@
+/**
+ * Layouts: the studio's plans. Every function takes the Actor and checks rights inside:
+ * owners and designers read and write their studio's layouts; a client reads only layouts shared
+ * with them; anyone else gets "not found" (404, never 403, for ids they may not know).
+ * Returns DTOs, never rows.
+ */
+import 'server-only';
+import { and, desc, eq, sql } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/pg-core';
+import { getDb } from './client';
+import { layouts, memberships, users } from './schema';
+import { BadRequestError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
+import { canEditLayouts, type Actor } from './actor';
+import type { LayoutDoc } from '../lib/layout/schema';
+import { sizeClassOf } from '../lib/layout/templates';
+
+export interface LayoutSummaryDto {
+  id: string;
+  name: string;
+  client: { id: string; name: string } | null;
+  sizeClass: string;
+  bay: { length: number; width: number; height: number };
+  moduleCount: number;
+  version: number;
+  updatedAt: string;
+  updatedBy: string | null;
+}
+
+export interface LayoutDto extends LayoutSummaryDto {
+  doc: LayoutDoc;
+  createdAt: string;
+  canEdit: boolean;
+}
+
+const updater = alias(users, 'updater');
+const client = alias(users, 'client');
+
+function baseSelect() {
+  return {
+    id: layouts.id,
+    studioId: layouts.studioId,
+    name: layouts.name,
+    doc: layouts.doc,
+    version: layouts.version,
+    createdAt: layouts.createdAt,
+    updatedAt: layouts.updatedAt,
+    clientId: layouts.clientId,
+    clientName: client.name,
+    updatedByName: updater.name,
+  };
+}
+
+type Row = {
+  id: string;
+  name: string;
+  doc: LayoutDoc;
+  version: number;
+  createdAt: Date;
+  updatedAt: Date;
+  clientId: string | null;
+  clientName: string | null;
+  updatedByName: string | null;
+};
+
+function toSummary(row: Row): LayoutSummaryDto {
+  return {
+    id: row.id,
+    name: row.name,
+    client: row.clientId && row.clientName ? { id: row.clientId, name: row.clientName } : null,
+    sizeClass: sizeClassOf(row.doc.bay),
+    bay: { length: row.doc.bay.length, width: row.doc.bay.width, height: row.doc.bay.height },
+    moduleCount: row.doc.modules.length,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+    updatedBy: row.updatedByName,
+  };
+}
+
+function toDto(row: Row, actor: Actor): LayoutDto {
+  return { ...toSummary(row), doc: row.doc, createdAt: row.createdAt.toISOString(), canEdit: canEditLayouts(actor) };
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export async function listLayouts(actor: Actor): Promise<LayoutSummaryDto[]> {
+  const db = await getDb();
+  const visible = canEditLayouts(actor)
+    ? eq(layouts.studioId, actor.studioId)
+    : and(eq(layouts.studioId, actor.studioId), eq(layouts.clientId, actor.userId));
+  const rows = await db
+    .select(baseSelect())
+    .from(layouts)
+    .leftJoin(client, eq(client.id, layouts.clientId))
+    .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .where(visible)
+    .orderBy(desc(layouts.updatedAt));
+  return rows.map(toSummary);
+}
+
+/** The stored row if the actor may read it; NotFoundError otherwise. */
+async function readable(actor: Actor, id: string): Promise<Row> {
+  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
+  const db = await getDb();
+  const [row] = await db
+    .select(baseSelect())
+    .from(layouts)
+    .leftJoin(client, eq(client.id, layouts.clientId))
+    .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .where(eq(layouts.id, id))
+    .limit(1);
+  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such layout.');
+  if (!canEditLayouts(actor) && row.clientId !== actor.userId) throw new NotFoundError('No such layout.');
+  return row;
+}
+
+export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {
+  return toDto(await readable(actor, id), actor);
+}
+
+async function assertClientOfStudio(studioId: string, clientId: string | null | undefined): Promise<void> {
+  if (!clientId) return;
+  if (!UUID.test(clientId)) throw new BadRequestError('That client is not a client of this studio.');
+  const db = await getDb();
+  const [m] = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.studioId, studioId), eq(memberships.userId, clientId)))
+    .limit(1);
+  if (!m || m.role !== 'client') throw new BadRequestError('That client is not a client of this studio.');
+}
+
+export async function createLayout(actor: Actor, input: { name: string; doc: LayoutDoc; clientId?: string | null }): Promise<LayoutDto> {
+  if (!canEditLayouts(actor)) throw new ForbiddenError('Clients cannot create layouts.');
+  await assertClientOfStudio(actor.studioId, input.clientId);
+  const db = await getDb();
+  const doc = { ...input.doc, name: input.name };
+  const [row] = await db
+    .insert(layouts)
+    .values({ studioId: actor.studioId, clientId: input.clientId ?? null, name: input.name, doc, createdBy: actor.userId, updatedBy: actor.userId })
+    .returning({ id: layouts.id });
+  return getLayout(actor, row.id);
+}
+
+export interface SaveInput {
+  doc: LayoutDoc;
+  name?: string;
+  clientId?: string | null;
+}
+
+/**
+ * Saves a new document over version `baseVersion`. The compare-and-set happens in one UPDATE,
+ * so of two saves based on the same version exactly one wins; the other gets the current copy.
+ */
+export async function saveLayout(actor: Actor, id: string, baseVersion: number, input: SaveInput): Promise<LayoutDto> {
+  const row = await readable(actor, id);
+  if (!canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
+  if (input.clientId !== undefined) await assertClientOfStudio(actor.studioId, input.clientId);
+  const name = input.name ?? input.doc.name ?? row.name;
+  const db = await getDb();
+  const updated = await db
+    .update(layouts)
+    .set({
+      doc: { ...input.doc, name },
+      name,
+      ...(input.clientId !== undefined ? { clientId: input.clientId } : {}),
+      version: sql`${layouts.version} + 1`,
+      updatedBy: actor.userId,
+      updatedAt: new Date(),
+    })
+    .where(and(eq(layouts.id, id), eq(layouts.version, baseVersion)))
+    .returning({ id: layouts.id });
+  if (updated.length === 0) {
+    const current = await getLayout(actor, id);
+    throw new VersionConflictError({ version: current.version, doc: current.doc, updatedAt: current.updatedAt, updatedBy: current.updatedBy });
+  }
+  return getLayout(actor, id);
+}
+
+export async function deleteLayout(actor: Actor, id: string): Promise<void> {
+  await readable(actor, id);
+  if (!canEditLayouts(actor)) throw new ForbiddenError('Clients cannot delete layouts.');
+  const db = await getDb();
+  await db.delete(layouts).where(eq(layouts.id, id));
+}

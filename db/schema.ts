@@ -1,0 +1,76 @@
+/**
+ * The database tables (drizzle). Rows never leave `db/`: data-access files map them to DTOs.
+ * Migrations are generated from this file by drizzle-kit into `drizzle/`.
+ */
+import { sql } from 'drizzle-orm';
+import { pgTable, text, timestamp, integer, jsonb, uniqueIndex, index, primaryKey, pgEnum, uuid } from 'drizzle-orm/pg-core';
+import type { LayoutDoc } from '../lib/layout/schema';
+
+export const roleEnum = pgEnum('studio_role', ['owner', 'designer', 'client']);
+export const unitEnum = pgEnum('length_unit', ['mm', 'cm', 'in']);
+
+export const users = pgTable(
+  'users',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    email: text('email').notNull(),
+    name: text('name').notNull(),
+    passwordHash: text('password_hash'),
+    /** Bumped on sign-out: session tokens carrying an older number are refused. */
+    sessionVersion: integer('session_version').notNull().default(0),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('users_email_unique').on(sql`lower(${t.email})`)],
+);
+
+export const studios = pgTable('studios', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  name: text('name').notNull(),
+  /** Preferred display unit for lengths; documents always hold millimetres. */
+  units: unitEnum('units').notNull().default('mm'),
+  /** Studio-wide check defaults layered under each layout's own settings (walkway width, mattress region…). */
+  checkDefaults: jsonb('check_defaults').$type<Record<string, unknown>>().notNull().default({}),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const memberships = pgTable(
+  'memberships',
+  {
+    userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    studioId: uuid('studio_id').notNull().references(() => studios.id, { onDelete: 'cascade' }),
+    role: roleEnum('role').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.userId, t.studioId] }), index('memberships_studio').on(t.studioId)],
+);
+
+export const layouts = pgTable(
+  'layouts',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    studioId: uuid('studio_id').notNull().references(() => studios.id, { onDelete: 'cascade' }),
+    /** The client the layout is shared with, if any: a user with the `client` role in the same studio. */
+    clientId: uuid('client_id').references(() => users.id, { onDelete: 'set null' }),
+    name: text('name').notNull(),
+    doc: jsonb('doc').$type<LayoutDoc>().notNull(),
+    /** Optimistic-concurrency version: a save must name the version it was based on. */
+    version: integer('version').notNull().default(1),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    updatedBy: uuid('updated_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('layouts_studio').on(t.studioId), index('layouts_client').on(t.clientId)],
+);
+
+/** Failed sign-ins, counted per account and per address to slow down guessing. */
+export const signInFailures = pgTable(
+  'sign_in_failures',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    email: text('email').notNull(),
+    address: text('address').notNull(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('sign_in_failures_email').on(t.email, t.at), index('sign_in_failures_address').on(t.address, t.at)],
+);

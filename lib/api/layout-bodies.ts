@@ -1,0 +1,60 @@
+/**
+ * Request bodies of the layout routes. A new layout starts from exactly one of: a posted
+ * document (import, "keep mine as a copy"), a bay template, a starter layout or a custom bay.
+ */
+import { z } from 'zod';
+import { baySchema, type LayoutDoc } from '@/lib/layout/schema';
+import { parseLayoutDoc } from '@/lib/layout/parse';
+import { bayTemplate, emptyLayout, starterLayout } from '@/lib/layout/templates';
+import { invalid } from './respond';
+
+const name = z.string().trim().min(1, 'give the layout a name').max(120);
+const clientId = z.uuid('choose a client from the list').nullable().optional();
+
+export const createLayoutBody = z
+  .strictObject({
+    name,
+    clientId,
+    doc: z.unknown().optional(),
+    bayTemplateId: z.string().max(40).optional(),
+    starterId: z.string().max(40).optional(),
+    bay: baySchema.optional(),
+  })
+  .refine((b) => [b.doc, b.bayTemplateId, b.starterId, b.bay].filter((v) => v !== undefined).length === 1, {
+    message: 'start from exactly one of: doc, bayTemplateId, starterId or bay',
+    path: ['doc'],
+  });
+export type CreateLayoutBody = z.infer<typeof createLayoutBody>;
+
+export function docForNewLayout(body: CreateLayoutBody): LayoutDoc {
+  if (body.doc !== undefined) {
+    const parsed = parseLayoutDoc(body.doc);
+    if (!parsed.ok) throw invalid(parsed.issues.map((i) => ({ path: i.path ? `doc.${i.path}` : 'doc', message: i.message })));
+    return { ...parsed.value, name: body.name };
+  }
+  if (body.starterId !== undefined) {
+    const starter = starterLayout(body.starterId);
+    if (!starter) throw invalid([{ path: 'starterId', message: 'no such starter layout' }]);
+    return { ...starter, name: body.name };
+  }
+  if (body.bayTemplateId !== undefined) {
+    const template = bayTemplate(body.bayTemplateId);
+    if (!template) throw invalid([{ path: 'bayTemplateId', message: 'no such bay template' }]);
+    return emptyLayout(body.name, template.bay);
+  }
+  return emptyLayout(body.name, body.bay!);
+}
+
+export const saveLayoutBody = z.strictObject({
+  doc: z.unknown(),
+  name: name.optional(),
+  clientId,
+});
+
+/** `If-Match: 7` or `If-Match: "7"`: the version the edit was based on. */
+export function baseVersionFrom(req: Request): number | null {
+  const raw = req.headers.get('if-match');
+  if (raw === null) return null;
+  const m = /^\s*(?:W\/)?"?(\d{1,9})"?\s*$/.exec(raw);
+  return m ? Number(m[1]) : NaN;
+}

@@ -1,0 +1,44 @@
+/**
+ * The key that signs session tokens. AUTH_SECRET in production; for a local run without one, a
+ * random key is made once and kept in ./data/.auth-secret so sessions survive restarts.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import crypto from 'node:crypto';
+
+let cached: string | undefined;
+
+export function authSecret(): string {
+  if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
+  if (cached) return cached;
+  if (process.env.NODE_ENV === 'production' && process.env.BAYWRIGHT_REQUIRE_SECRET === '1') {
+    throw new Error('AUTH_SECRET must be set in production');
+  }
+  const root = process.env.BAYWRIGHT_DATA_ROOT ?? path.join(process.cwd(), 'data');
+  const file = path.join(root, '.auth-secret');
+  try {
+    cached = fs.readFileSync(file, 'utf8').trim();
+  } catch {
+    fs.mkdirSync(root, { recursive: true });
+    const secret = crypto.randomBytes(32).toString('base64url');
+    try {
+      fs.writeFileSync(file, secret, { flag: 'wx', mode: 0o600 });
+    } catch {
+      /* another process wrote it first */
+    }
+    cached = fs.readFileSync(file, 'utf8').trim();
+  }
+  process.env.AUTH_SECRET = cached;
+  return cached;
+}
+
+/** Cookies are Secure when the app is served over HTTPS. */
+export function useSecureCookies(): boolean {
+  return (process.env.AUTH_URL ?? '').startsWith('https://');
+}
+
+export const SESSION_MAX_AGE_S = 12 * 60 * 60;
+
+export function sessionCookieName(): string {
+  return useSecureCookies() ? '__Secure-authjs.session-token' : 'authjs.session-token';
+}

@@ -1,0 +1,28 @@
+import type { DefaultSession } from 'next-auth';
+
+export type StudioRole = 'owner' | 'designer' | 'client';
+
+declare module 'next-auth' {
+  interface User {
+    role?: StudioRole;
+    studioId?: string;
+    sessionVersion?: number;
+  }
+  interface Session {
+    user: {
+      id: string;
+      /** A snapshot from sign-in; writes re-read the membership from the database. */
+      role?: StudioRole;
+      studioId?: string;
+    } & DefaultSession['user'];
+  }
+}
+
+declare module '@auth/core/jwt' {
+  interface JWT {
+    uid?: string;
+    role?: StudioRole;
+    studioId?: string;
+    sv?: number;
+  }
+}
