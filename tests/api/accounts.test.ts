@@ -1,0 +1,83 @@
+// Sign-up, sign-in, wrong password, the failed-sign-in limit and sign-out ending sessions.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import * as signUpRoute from '@/app/api/sign-up/route';
+import * as list from '@/app/api/layouts/route';
+import { authenticate, endSessions, SIGN_IN_FAILURE_LIMIT } from '@/db/accounts';
+import { memberships, users } from '@/db/schema';
+import type { Db } from '@/db/client';
+import { useFreshDb } from '../helpers/db';
+import { call } from '../helpers/http';
+
+let db: Db;
+beforeAll(async () => {
+  db = await useFreshDb();
+});
+
+describe('sign-up', () => {
+  it('creates a user, a studio of their own and makes them its owner, storing only a bcrypt hash', async () => {
+    const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Sam Okafor', email: 'Sam@SelfBuild.test', password: 'a-long-enough-password' } });
+    expect(res.status).toBe(201);
+    expect(res.body).toEqual({ id: expect.any(String), email: 'sam@selfbuild.test', name: 'Sam Okafor' });
+    const [user] = await db.select().from(users).where(eq(users.id, res.body.id));
+    // bcrypt, cost 11 (OWASP ASVS 4.0 §2.4.4: work factor ≥ 10)
+    expect(user.passwordHash).toMatch(/^\$2[aby]\$11\$/);
+    const [m] = await db.select().from(memberships).where(eq(memberships.userId, user.id));
+    expect(m.role).toBe('owner');
+  });
+
+  it('refuses a second account on the same address, whatever its case', async () => {
+    const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Sam Again', email: 'SAM@selfbuild.test', password: 'another-long-password' } });
+    expect(res.status).toBe(409);
+    expect(res.body.error).toMatch(/already exists/);
+  });
+
+  it.each([
+    [{ name: 'A', email: 'a@b.test', password: 'short' }, 'password', /12 characters/],
+    [{ name: 'A', email: 'not-an-address', password: 'a-long-enough-password' }, 'email', /e-mail/],
+    [{ name: '', email: 'a@b.test', password: 'a-long-enough-password' }, 'name', /name/],
+    [{ name: 'A', email: 'a@b.test', password: 'ü'.repeat(40) }, 'password', /72 bytes/],
+  ])('rejects %j with a field message', async (json, path, message) => {
+    const res = await call(signUpRoute.POST, { method: 'POST', json });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toContainEqual({ path, message: expect.stringMatching(message) });
+  });
+});
+
+describe('sign-in', () => {
+  it('accepts the right password and names the studio and role', async () => {
+    const result = await authenticate('sam@selfbuild.test', 'a-long-enough-password', '10.0.0.1');
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.user.role).toBe('owner');
+  });
+
+  it('refuses a wrong password and an unknown account alike', async () => {
+    expect(await authenticate('sam@selfbuild.test', 'wrong-password-here', '10.0.0.1')).toEqual({ ok: false, reason: 'invalid' });
+    expect(await authenticate('nobody@selfbuild.test', 'whatever-password', '10.0.0.1')).toEqual({ ok: false, reason: 'invalid' });
+  });
+
+  it(`refuses the ${SIGN_IN_FAILURE_LIMIT + 1}th attempt after ${SIGN_IN_FAILURE_LIMIT} failures, even with the right password`, async () => {
+    await call(signUpRoute.POST, { method: 'POST', json: { name: 'Rate Test', email: 'rate@selfbuild.test', password: 'the-right-password' }, headers: { 'x-forwarded-for': '10.9.9.9' } });
+    for (let i = 0; i < SIGN_IN_FAILURE_LIMIT; i++) {
+      expect((await authenticate('rate@selfbuild.test', `wrong-${i}-password`, `10.1.0.${i}`)).ok).toBe(false);
+    }
+    expect(await authenticate('rate@selfbuild.test', 'the-right-password', '10.2.0.1')).toEqual({ ok: false, reason: 'rate_limited' });
+  });
+
+  it('limits failures per address across accounts too', async () => {
+    for (let i = 0; i < SIGN_IN_FAILURE_LIMIT; i++) await authenticate(`guess${i}@selfbuild.test`, 'guess-password', '10.3.3.3');
+    expect(await authenticate('sam@selfbuild.test', 'a-long-enough-password', '10.3.3.3')).toEqual({ ok: false, reason: 'rate_limited' });
+    expect((await authenticate('sam@selfbuild.test', 'a-long-enough-password', '10.4.4.4')).ok).toBe(true);
+  });
+});
+
+describe('sign-out', () => {
+  it('ends every session: an old cookie no longer opens the API', async () => {
+    const result = await authenticate('sam@selfbuild.test', 'a-long-enough-password', '10.5.5.5');
+    if (!result.ok) throw new Error('sign-in failed');
+    const as = { id: result.user.id, studioId: result.user.studioId, sessionVersion: result.user.sessionVersion };
+    expect((await call(list.GET, { as })).status).toBe(200);
+    await endSessions(result.user.id);
+    expect((await call(list.GET, { as })).status).toBe(401);
+  });
+});
