@@ -74,3 +74,7 @@ export const signInFailures = pgTable(
   },
   (t) => [index('sign_in_failures_email').on(t.email, t.at), index('sign_in_failures_address').on(t.address, t.at)],
 );
+
+export * from './schema-sharing';
+export * from './schema-files';
+export * from './schema-planning';
