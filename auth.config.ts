@@ -29,10 +29,5 @@ export const authConfig = {
       session.user.studioId = token.studioId;
       return session;
     },
-    authorized({ auth, request }) {
-      const path = request.nextUrl.pathname;
-      const needsUser = ['/layouts', '/clients', '/settings', '/outbox'].some((p) => path === p || path.startsWith(`${p}/`));
-      return needsUser ? Boolean(auth?.user) : true;
-    },
   },
 } satisfies NextAuthConfig;

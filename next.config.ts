@@ -1,5 +1,6 @@
 import path from 'node:path';
 import type { NextConfig } from 'next';
+import { SECURITY_HEADERS } from './lib/security/csp';
 
 const root = path.resolve(__dirname);
 
@@ -12,6 +13,9 @@ const nextConfig: NextConfig = {
   outputFileTracingRoot: root,
   poweredByHeader: false,
   typedRoutes: false,
+  async headers() {
+    return [{ source: '/:path*', headers: SECURITY_HEADERS }];
+  },
 };
 
 export default nextConfig;

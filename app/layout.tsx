@@ -4,6 +4,9 @@ import { textFace, monoFace } from './fonts';
 import { Providers } from './providers';
 import './globals.css';
 
+// Every page carries a per-request CSP nonce, so none may be rendered ahead of time.
+export const dynamic = 'force-dynamic';
+
 export const metadata: Metadata = {
   title: { default: 'Baywright', template: '%s · Baywright' },
   description: 'Plan camper-van conversions to scale, checked against the rules of the trade, shared with your client.',
