@@ -129,8 +129,11 @@ export function nestCutList(parts: NestPart[], sheet: SheetSize = STANDARD_SHEET
     if (best === null) {
       const s = newSheet();
       open.push(s);
-      const o = orientations.find((c) => c.l <= usableL && c.w <= usableW)!;
-      best = { sheet: s, rect: 0, o, score: 0 };
+      // On a fresh sheet too, take the orientation that leaves the tighter fit.
+      const fitting = orientations.filter((c) => c.l <= usableL && c.w <= usableW);
+      const score = (c: (typeof orientations)[number]) => Math.min(regionL - c.l - kerf, regionW - c.w - kerf);
+      const o = fitting.reduce((a, c) => (score(c) < score(a) ? c : a));
+      best = { sheet: s, rect: 0, o, score: score(o) };
     }
     const { sheet: s, rect, o } = best;
     const r = s.free[rect];
