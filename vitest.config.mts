@@ -8,7 +8,7 @@ export default defineConfig({
   },
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
-    exclude: ['tests/e2e/**', 'node_modules/**'],
+    exclude: ['tests/e2e/**', 'tests/system/**', 'node_modules/**'],
     environment: 'node',
     globalSetup: ['tests/setup/global.ts'],
     setupFiles: ['tests/setup/each.ts'],

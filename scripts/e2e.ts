@@ -1,7 +1,9 @@
-// `npm run test:e2e`: Playwright in Debian's Chromium against the production build on a fresh,
+// `npm run test:e2e`: builds the production app if needed, runs the system tests against
+// `next start` (crash safety, a second process), then Playwright in Debian's Chromium on a fresh,
 // seeded database. Fails with a clear message when Chromium is missing.
 import fs from 'node:fs';
 import { spawnSync } from 'node:child_process';
+import { buildIfNeeded } from './lib/build';
 import { startTestServer } from './lib/test-server';
 
 const chromium = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -10,16 +12,23 @@ if (!fs.existsSync(chromium)) {
   process.exit(1);
 }
 
+function run(cmd: string, args: string[], env: Record<string, string> = {}): number {
+  const result = spawnSync(cmd, args, { stdio: 'inherit', env: { ...process.env, ...env } });
+  return result.status ?? 1;
+}
+
 async function main() {
+  buildIfNeeded();
+  const playwrightArgs = process.argv.slice(2);
+  if (!playwrightArgs.length && process.env.SKIP_SYSTEM_TESTS !== '1') {
+    const status = run('npx', ['vitest', 'run', '--config', 'vitest.system.config.mts']);
+    if (status !== 0) process.exit(status);
+  }
   const port = Number(process.env.E2E_PORT ?? 3210);
   const server = await startTestServer({ port, db: 'e2e', seed: true, fresh: true, quiet: !process.env.E2E_VERBOSE, env: { BAYWRIGHT_DEMO: '1' } });
   let status = 1;
   try {
-    const result = spawnSync('npx', ['playwright', 'test', ...process.argv.slice(2)], {
-      stdio: 'inherit',
-      env: { ...process.env, E2E_BASE_URL: server.url, CHROMIUM_PATH: chromium },
-    });
-    status = result.status ?? 1;
+    status = run('npx', ['playwright', 'test', ...playwrightArgs], { E2E_BASE_URL: server.url, CHROMIUM_PATH: chromium });
   } finally {
     await server.stop();
   }

@@ -1,0 +1,30 @@
+/**
+ * Starts the local fakes of hosted services that this process needs, once per process (guarded
+ * on globalThis so dev reloads do not start them twice). Each fake is registered here with the
+ * condition under which it runs; production deployments point at the real services instead.
+ */
+type Starter = { name: string; wanted: () => boolean; start: () => Promise<void> };
+
+const g = globalThis as typeof globalThis & { __baywrightServices?: Promise<void> };
+
+/** Fakes are wanted everywhere except a real production deployment (which sets BAYWRIGHT_REAL_SERVICES=1). */
+export function fakesWanted(): boolean {
+  return process.env.BAYWRIGHT_REAL_SERVICES !== '1';
+}
+
+/** The fakes this app starts itself; each entry imports its fake lazily. */
+const STARTERS: Starter[] = [];
+
+export function startLocalServices(): Promise<void> {
+  g.__baywrightServices ??= (async () => {
+    for (const s of STARTERS) {
+      if (!s.wanted()) continue;
+      try {
+        await s.start();
+      } catch (err) {
+        console.error(`[baywright] could not start the local ${s.name}:`, err instanceof Error ? err.message : err);
+      }
+    }
+  })();
+  return g.__baywrightServices;
+}
