@@ -22,7 +22,7 @@ export const theme = {
 } as const;
 
 /** Canvas font stacks: the same faces the page loads through next/font (CSS variables). */
-export const canvasFonts = {
+export const canvasFonts: { text: string; mono: string } = {
   text: 'IBM Plex Sans, system-ui, sans-serif',
   mono: 'IBM Plex Mono, ui-monospace, monospace',
-} as const;
+};

@@ -12,13 +12,14 @@ export interface KeyTarget {
   type?: string;
 }
 
-const TYPING_INPUTS = new Set(['text', 'number', 'search', 'email', 'password', 'url', 'tel', '']);
+/** Inputs whose keys are their own (text, numbers, sliders…): all but the push-button kinds. */
+const NON_TYPING_INPUTS = new Set(['checkbox', 'radio', 'button', 'submit', 'reset', 'file', 'color']);
 
 export function isTypingTarget(t: KeyTarget | null | undefined): boolean {
   if (!t || !t.tagName) return false;
   const tag = t.tagName.toUpperCase();
   if (tag === 'TEXTAREA' || tag === 'SELECT' || t.isContentEditable) return true;
-  return tag === 'INPUT' && TYPING_INPUTS.has((t.type ?? '').toLowerCase());
+  return tag === 'INPUT' && !NON_TYPING_INPUTS.has((t.type ?? 'text').toLowerCase());
 }
 
 export function commandForKey(e: KeyLike, isMac: boolean, commands: Command[] = COMMANDS): Command | undefined {

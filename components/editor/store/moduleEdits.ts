@@ -100,9 +100,9 @@ export function placeModule(doc: LayoutDoc, kind: ModuleKind, centre?: { x: numb
   } else {
     pos = freeSpot(doc, base);
   }
-  const module = checkedModule({ ...base, ...pos });
+  const placed = checkedModule({ ...base, ...pos });
   if (doc.modules.length >= 5000) throw new EditError('a layout holds at most 5000 modules');
-  return { doc: { ...doc, modules: [...doc.modules, module] }, module };
+  return { doc: { ...doc, modules: [...doc.modules, placed] }, module: placed };
 }
 
 export function moveModules(doc: LayoutDoc, ids: readonly string[], dx: number, dy: number): LayoutDoc {

@@ -1,0 +1,112 @@
+'use client';
+/**
+ * The layout editor screen: Parts shelf on the left, the plan in the middle with Checks and the
+ * side section below it, Details and Bay on the right, the toolbar above. It creates the store
+ * once, wires live checks, autosave and the keyboard, and composes panels; it draws nothing and
+ * holds no editing logic itself. Read-only (canEdit false): same drawing, no shelf, no saving.
+ */
+import { useCallback, useMemo, useRef, useState } from 'react';
+import { useShallow } from 'zustand/react/shallow';
+import { CircleX, CircleAlert, CircleCheck } from 'lucide-react';
+import type { EditorProps } from './types';
+import { createEditorStore } from './store/editorStore';
+import { EditorStoreProvider, useEditor, useEditorApi } from './store/EditorStoreContext';
+import { PlanStage } from './canvas/PlanStage';
+import { PartsShelf } from './panels/PartsShelf';
+import { DetailsPanel } from './panels/DetailsPanel';
+import { BayPanel } from './panels/BayPanel';
+import { ChecksPanel } from './panels/ChecksPanel';
+import { SectionView } from './section/SectionView';
+import { Toolbar } from './panels/Toolbar';
+import { Tabs } from './panels/Tabs';
+import { ContextMenu } from './panels/ContextMenu';
+import { ShortcutSheet } from './panels/ShortcutSheet';
+import { ConflictDialog } from './panels/ConflictDialog';
+import { SelectionAnnouncer } from './panels/SelectionAnnouncer';
+import { useLiveChecks } from './api/useLiveChecks';
+import { useAutosave } from './api/useAutosave';
+import { useEditorKeyboard } from './commands/useEditorKeyboard';
+import { countByStatus, failingModuleIds } from './panels/findingGroups';
+
+export default function Editor(props: EditorProps) {
+  const [store] = useState(() => createEditorStore({ doc: props.initialDoc, version: props.initialVersion, readOnly: !props.canEdit, units: props.units }));
+  return (
+    <EditorStoreProvider store={store}>
+      <EditorScreen {...props} />
+    </EditorStoreProvider>
+  );
+}
+
+function EditorScreen({ layoutId, canEdit }: EditorProps) {
+  const api = useEditorApi();
+  const { doc, arrangement } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement })));
+  const checks = useLiveChecks(doc);
+  const save = useAutosave(api, layoutId, canEdit);
+  useEditorKeyboard(api);
+  const [menu, setMenu] = useState<{ x: number; y: number } | null>(null);
+  const [side, setSide] = useState('details');
+  const [bottom, setBottom] = useState('checks');
+  const planBox = useRef<HTMLDivElement>(null);
+
+  const findings = useMemo(() => checks.report?.findings ?? [], [checks.report]);
+  const failing = useMemo(() => failingModuleIds(findings, arrangement), [findings, arrangement]);
+  const counts = countByStatus(findings);
+  const openMenu = useCallback((x: number, y: number) => setMenu({ x, y }), []);
+  const closeMenu = useCallback(() => setMenu(null), []);
+  const focusPlan = useCallback(() => planBox.current?.querySelector<HTMLElement>('[data-testid="plan"]')?.focus(), []);
+
+  const checksTab = (
+    <span className="flex items-center gap-2">
+      Checks
+      {checks.report && (
+        <span className="flex items-center gap-1.5 font-mono text-xs" data-testid="checks-counts">
+          <span className="inline-flex items-center gap-0.5 text-brick"><CircleX size={12} aria-hidden />{counts.fail}</span>
+          <span className="inline-flex items-center gap-0.5 text-ochre"><CircleAlert size={12} aria-hidden />{counts.warn}</span>
+          <span className="inline-flex items-center gap-0.5 text-moss"><CircleCheck size={12} aria-hidden />{counts.pass}</span>
+        </span>
+      )}
+    </span>
+  );
+
+  return (
+    <div className="flex h-full min-h-0 flex-col bg-paper text-ink" data-testid="editor" data-read-only={!canEdit}>
+      <Toolbar saveStatus={save.status} saveDetail={save.lastError} />
+      <div className="flex min-h-0 flex-1">
+        {canEdit && <PartsShelf focusPlan={focusPlan} />}
+        <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">
+          <div ref={planBox} className="relative min-h-0 flex-1">
+            <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" />
+            {menu && <ContextMenu at={menu} onClose={closeMenu} />}
+          </div>
+          <Tabs
+            className="h-64 shrink-0 border-t border-paper-edge"
+            active={bottom}
+            onChange={setBottom}
+            tabs={[
+              { id: 'checks', title: checks.report ? `Checks: ${counts.fail} fail, ${counts.warn} warn, ${counts.pass} pass` : 'Checks', label: checksTab },
+              { id: 'section', title: 'Side section', label: 'Side section' },
+            ]}
+          >
+            {bottom === 'checks' ? <ChecksPanel checks={checks} /> : <SectionView />}
+          </Tabs>
+        </main>
+        <aside className="flex w-80 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Details and bay">
+          <Tabs
+            className="h-full"
+            active={side}
+            onChange={setSide}
+            tabs={[
+              { id: 'details', title: 'Details panel', label: 'Details' },
+              { id: 'bay', title: 'Bay panel', label: 'Bay' },
+            ]}
+          >
+            {side === 'details' ? <DetailsPanel /> : <BayPanel />}
+          </Tabs>
+        </aside>
+      </div>
+      <SelectionAnnouncer id="selection-announcer" />
+      <ShortcutSheet />
+      {canEdit && <ConflictDialog conflict={save.conflict} onTakeTheirs={save.takeTheirs} onClose={save.closeConflict} />}
+    </div>
+  );
+}

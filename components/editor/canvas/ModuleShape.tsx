@@ -1,0 +1,44 @@
+'use client';
+/**
+ * One module on the plan as ONE Konva shape whose scene function draws its kind's symbol.
+ * Memoised on the module object, so only modules that changed are redrawn by React. Does not
+ * listen for events: hit testing is done in mm by the pointer hook.
+ */
+import { memo } from 'react';
+import { Shape } from 'react-konva';
+import type Konva from 'konva';
+import type { Module } from '@/lib/layout';
+import { drawModule } from './moduleSymbols';
+import type { CanvasFonts } from './useCanvasFonts';
+
+export function moduleSceneFunc(ghost: boolean) {
+  return (context: Konva.Context, shape: Konva.Shape) => {
+    const m = shape.getAttr('module') as Module;
+    const fonts = shape.getAttr('fonts') as CanvasFonts | undefined;
+    // World layers carry the viewport scale (px per mm); width/height attrs may differ from the
+    // module's own during a live resize.
+    const scale = shape.getLayer()?.scaleX() || 1;
+    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props }, { scale, ghost, fonts });
+  };
+}
+
+const solid = moduleSceneFunc(false);
+const ghosted = moduleSceneFunc(true);
+
+export const ModuleShape = memo(function ModuleShape({ module, fonts, ghost = false, fontsReady = 0 }: { module: Module; fonts: CanvasFonts; ghost?: boolean; fontsReady?: number }) {
+  return (
+    <Shape
+      id={ghost ? undefined : `module-${module.id}`}
+      x={module.x}
+      y={module.y}
+      width={module.length}
+      height={module.width}
+      module={module}
+      fonts={fonts}
+      fontsReady={fontsReady}
+      sceneFunc={ghost ? ghosted : solid}
+      listening={false}
+      perfectDrawEnabled={false}
+    />
+  );
+});

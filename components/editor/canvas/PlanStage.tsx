@@ -1,0 +1,79 @@
+'use client';
+/**
+ * The plan: composes the layers (sheet, modules, overlay, drag, rulers) in one Konva stage sized
+ * to its box, and wires pointer input. It only composes; drawing lives in the layers and input in
+ * usePlanPointer. Must never draw anything itself.
+ */
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { Stage } from 'react-konva';
+import { useShallow } from 'zustand/react/shallow';
+import { useEditor, useEditorApi } from '../store/EditorStoreContext';
+import { SheetLayer } from './SheetLayer';
+import { ModulesLayer } from './ModulesLayer';
+import { OverlayLayer } from './OverlayLayer';
+import { DragLayer } from './DragLayer';
+import { RulerLayer } from './RulerLayer';
+import { usePlanPointer } from './usePlanPointer';
+import { useCanvasFonts } from './useCanvasFonts';
+
+const NONE: string[] = [];
+
+export function PlanStage({ failing, onContextMenu, describedBy }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string }) {
+  const api = useEditorApi();
+  const box = useRef<HTMLDivElement>(null);
+  const [size, setSize] = useState<{ w: number; h: number } | null>(null);
+  const { fonts, ready } = useCanvasFonts();
+  const s = useEditor(
+    useShallow((st) => ({
+      doc: st.doc,
+      arrangement: st.arrangement,
+      ghost: st.ghost,
+      selection: st.selection,
+      highlight: st.highlight,
+      viewport: st.viewport,
+      units: st.units,
+      readOnly: st.readOnly,
+      gestureKind: st.gesture?.kind ?? null,
+      gestureIds: st.gesture && st.gesture.kind !== 'marquee' ? st.gesture.ids : NONE,
+    })),
+  );
+
+  useEffect(() => {
+    const el = box.current;
+    if (!el) return;
+    const ro = new ResizeObserver(([entry]) => {
+      const w = Math.max(50, Math.floor(entry.contentRect.width));
+      const h = Math.max(50, Math.floor(entry.contentRect.height));
+      setSize({ w, h });
+      api.getState().resizeViewport(w, h);
+    });
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [api]);
+
+  const menu = useCallback((x: number, y: number) => onContextMenu(x, y), [onContextMenu]);
+  usePlanPointer(box, api, menu);
+
+  const moving = s.gestureKind === 'move' || s.gestureKind === 'resize';
+  return (
+    <div
+      ref={box}
+      tabIndex={0}
+      role="application"
+      aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts."
+      aria-describedby={describedBy}
+      data-testid="plan"
+      className="relative h-full w-full overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-copper focus-visible:ring-inset touch-none select-none"
+    >
+      {size && (
+        <Stage width={size.w} height={size.h}>
+          <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
+          <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} ghost={s.ghost} hidden={moving ? s.gestureIds : NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
+          <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
+          <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />
+          <RulerLayer viewport={s.viewport} units={s.units} fonts={fonts} />
+        </Stage>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,240 @@
+'use client';
+/**
+ * Pointer input on the plan: click / shift-click / marquee selection, move by drag, resize by
+ * handles, zoom by wheel and pinch, pan by space-drag or the middle button, drops from the Parts
+ * shelf, and the context menu. Hit testing is done in mm against the store (no Konva hit graph).
+ * Each gesture is begun, dragged and committed through store actions; Escape (a command)
+ * cancels it, and the rest of that pointer stroke is ignored. Must never write the document
+ * directly.
+ */
+import { useEffect, useRef, type RefObject } from 'react';
+import { toast } from 'sonner';
+import { MODULE_KINDS, type ModuleKind } from '@/lib/layout';
+import type { EditorStore } from '../store/editorStore';
+import { toWorld, screenToMm } from '../geometry/viewport';
+import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitTest';
+import { HANDLE_PX } from './OverlayLayer';
+import { isTypingTarget } from '../commands/keyboard';
+
+export const KIND_DRAG_TYPE = 'application/x-baywright-kind';
+/** Pointer travel (px) before a press on a module becomes a drag rather than a click. */
+const DRAG_START_PX = 3;
+
+type Stroke =
+  | { mode: 'pan'; lastX: number; lastY: number }
+  | { mode: 'press'; startX: number; startY: number; ids: string[]; hitId: string; shift: boolean }
+  | { mode: 'gesture'; startX: number; startY: number }
+  | { mode: 'ignored' };
+
+export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api: EditorStore, onContextMenu: (x: number, y: number) => void) {
+  const stroke = useRef<Stroke | null>(null);
+  const space = useRef(false);
+  const touches = useRef(new Map<number, { x: number; y: number }>());
+  const pinch = useRef<{ dist: number; midX: number; midY: number } | null>(null);
+
+  useEffect(() => {
+    const el = container.current;
+    if (!el) return;
+    const local = (e: { clientX: number; clientY: number }) => {
+      const r = el.getBoundingClientRect();
+      return { x: e.clientX - r.left, y: e.clientY - r.top };
+    };
+    const world = (p: { x: number; y: number }) => toWorld(api.getState().viewport, p.x, p.y);
+    const report = (r: { ok: boolean; error?: string }) => {
+      if (!r.ok && r.error) toast.error(r.error);
+    };
+
+    function hoverCursor(p: { x: number; y: number }) {
+      const s = api.getState();
+      if (space.current) return (el!.style.cursor = 'grab');
+      const w = world(p);
+      if (!s.readOnly && s.selection.length === 1) {
+        const m = s.doc.modules.find((o) => o.id === s.selection[0] && o.arrangements.includes(s.arrangement));
+        const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
+        if (h) return (el!.style.cursor = cursorForHandle(h));
+      }
+      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      el!.style.cursor = hit && !s.readOnly ? 'move' : hit ? 'pointer' : 'default';
+    }
+
+    function onPointerDown(e: PointerEvent) {
+      if (e.pointerType === 'touch') {
+        touches.current.set(e.pointerId, local(e));
+        if (touches.current.size === 2) {
+          api.getState().cancelGesture();
+          stroke.current = { mode: 'ignored' };
+          const [a, b] = [...touches.current.values()];
+          pinch.current = { dist: Math.hypot(a.x - b.x, a.y - b.y), midX: (a.x + b.x) / 2, midY: (a.y + b.y) / 2 };
+          return;
+        }
+      }
+      el!.focus({ preventScroll: true });
+      const p = local(e);
+      if (e.button === 1 || (e.button === 0 && space.current)) {
+        e.preventDefault();
+        stroke.current = { mode: 'pan', lastX: p.x, lastY: p.y };
+        el!.setPointerCapture(e.pointerId);
+        el!.style.cursor = 'grabbing';
+        return;
+      }
+      if (e.button !== 0) return;
+      const s = api.getState();
+      const w = world(p);
+      el!.setPointerCapture(e.pointerId);
+      if (!s.readOnly && s.selection.length === 1) {
+        const m = s.doc.modules.find((o) => o.id === s.selection[0] && o.arrangements.includes(s.arrangement));
+        const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
+        if (m && h) {
+          s.beginResize(m.id, h);
+          stroke.current = { mode: 'gesture', startX: w.x, startY: w.y };
+          return;
+        }
+      }
+      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      if (hit) {
+        if (e.shiftKey) s.select([hit.id], 'toggle');
+        else if (!s.selection.includes(hit.id)) s.select([hit.id]);
+        const sel = api.getState().selection;
+        stroke.current = !s.readOnly && sel.includes(hit.id) ? { mode: 'press', startX: w.x, startY: w.y, ids: sel, hitId: hit.id, shift: e.shiftKey } : { mode: 'ignored' };
+        return;
+      }
+      s.beginMarquee(w.x, w.y, e.shiftKey);
+      stroke.current = { mode: 'gesture', startX: w.x, startY: w.y };
+    }
+
+    function onPointerMove(e: PointerEvent) {
+      if (e.pointerType === 'touch' && touches.current.has(e.pointerId)) {
+        touches.current.set(e.pointerId, local(e));
+        if (pinch.current && touches.current.size === 2) {
+          const [a, b] = [...touches.current.values()];
+          const dist = Math.hypot(a.x - b.x, a.y - b.y);
+          const midX = (a.x + b.x) / 2, midY = (a.y + b.y) / 2;
+          const s = api.getState();
+          s.panBy(midX - pinch.current.midX, midY - pinch.current.midY);
+          if (pinch.current.dist > 0) s.zoomBy(dist / pinch.current.dist, midX, midY);
+          pinch.current = { dist, midX, midY };
+          return;
+        }
+      }
+      const p = local(e);
+      const st = stroke.current;
+      if (!st) return hoverCursor(p);
+      const s = api.getState();
+      if (st.mode === 'pan') {
+        s.panBy(p.x - st.lastX, p.y - st.lastY);
+        stroke.current = { ...st, lastX: p.x, lastY: p.y };
+        return;
+      }
+      if (st.mode === 'ignored') return;
+      const w = world(p);
+      if (st.mode === 'press') {
+        const moved = Math.hypot(w.x - st.startX, w.y - st.startY) * s.viewport.scale;
+        if (moved < DRAG_START_PX) return;
+        s.beginMove(st.ids);
+        stroke.current = { mode: 'gesture', startX: st.startX, startY: st.startY };
+      } else if (!s.gesture) {
+        // Escape dropped the gesture: ignore the rest of this stroke.
+        stroke.current = { mode: 'ignored' };
+        return;
+      }
+      api.getState().dragTo(w.x - st.startX, w.y - st.startY);
+    }
+
+    function onPointerUp(e: PointerEvent) {
+      if (e.pointerType === 'touch') {
+        touches.current.delete(e.pointerId);
+        if (touches.current.size < 2) pinch.current = null;
+      }
+      const st = stroke.current;
+      stroke.current = null;
+      if (el!.hasPointerCapture(e.pointerId)) el!.releasePointerCapture(e.pointerId);
+      if (st?.mode === 'gesture') report(api.getState().commitGesture());
+      // A plain click (no drag) on one of several selected modules selects just that one.
+      if (st?.mode === 'press' && !st.shift && st.ids.length > 1) api.getState().select([st.hitId]);
+      hoverCursor(local(e));
+    }
+
+    function onPointerCancel(e: PointerEvent) {
+      touches.current.delete(e.pointerId);
+      pinch.current = null;
+      stroke.current = null;
+      api.getState().cancelGesture();
+    }
+
+    function onWheel(e: WheelEvent) {
+      e.preventDefault();
+      const p = local(e);
+      // Pinch on a trackpad arrives as ctrl+wheel with small deltas.
+      const k = e.ctrlKey ? 0.01 : 0.0015;
+      const delta = e.deltaMode === 1 ? e.deltaY * 16 : e.deltaY;
+      api.getState().zoomBy(Math.exp(-delta * k), p.x, p.y);
+    }
+
+    function onContext(e: MouseEvent) {
+      e.preventDefault();
+      const p = local(e);
+      const s = api.getState();
+      const w = world(p);
+      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      if (hit && !s.selection.includes(hit.id)) s.select([hit.id]);
+      onContextMenu(p.x, p.y);
+    }
+
+    function onDragOver(e: DragEvent) {
+      if (api.getState().readOnly) return;
+      if (e.dataTransfer?.types.includes(KIND_DRAG_TYPE)) {
+        e.preventDefault();
+        e.dataTransfer.dropEffect = 'copy';
+      }
+    }
+
+    function onDrop(e: DragEvent) {
+      const kind = e.dataTransfer?.getData(KIND_DRAG_TYPE);
+      if (!kind) return;
+      e.preventDefault();
+      if (!(MODULE_KINDS as readonly string[]).includes(kind)) return void toast.error(`Unknown module kind "${kind}".`);
+      const w = world(local(e));
+      report(api.getState().addModule(kind as ModuleKind, w));
+      el!.focus({ preventScroll: true });
+    }
+
+    function onKeyDown(e: KeyboardEvent) {
+      if (e.key === ' ' && !isTypingTarget(e.target as HTMLElement)) {
+        if (!space.current) {
+          space.current = true;
+          el!.style.cursor = 'grab';
+        }
+        if (e.target === el || el!.contains(e.target as Node) || e.target === document.body) e.preventDefault();
+      }
+    }
+    function onKeyUp(e: KeyboardEvent) {
+      if (e.key === ' ') {
+        space.current = false;
+        el!.style.cursor = 'default';
+      }
+    }
+
+    el.addEventListener('pointerdown', onPointerDown);
+    el.addEventListener('pointermove', onPointerMove);
+    el.addEventListener('pointerup', onPointerUp);
+    el.addEventListener('pointercancel', onPointerCancel);
+    el.addEventListener('wheel', onWheel, { passive: false });
+    el.addEventListener('contextmenu', onContext);
+    el.addEventListener('dragover', onDragOver);
+    el.addEventListener('drop', onDrop);
+    window.addEventListener('keydown', onKeyDown);
+    window.addEventListener('keyup', onKeyUp);
+    return () => {
+      el.removeEventListener('pointerdown', onPointerDown);
+      el.removeEventListener('pointermove', onPointerMove);
+      el.removeEventListener('pointerup', onPointerUp);
+      el.removeEventListener('pointercancel', onPointerCancel);
+      el.removeEventListener('wheel', onWheel);
+      el.removeEventListener('contextmenu', onContext);
+      el.removeEventListener('dragover', onDragOver);
+      el.removeEventListener('drop', onDrop);
+      window.removeEventListener('keydown', onKeyDown);
+      window.removeEventListener('keyup', onKeyUp);
+    };
+  }, [container, api, onContextMenu]);
+}

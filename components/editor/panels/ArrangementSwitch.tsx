@@ -1,0 +1,46 @@
+'use client';
+/**
+ * The arrangement switch (travel / lounge / sleep) and the ghost overlay option that shows another
+ * arrangement dashed over this one. Switching is a view change: instant, never in undo.
+ */
+import { useShallow } from 'zustand/react/shallow';
+import { ARRANGEMENTS, type Arrangement } from '@/lib/layout';
+import { useEditor, useEditorApi } from '../store/EditorStoreContext';
+
+const WORDS: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
+
+export function ArrangementSwitch() {
+  const api = useEditorApi();
+  const { arrangement, ghost } = useEditor(useShallow((s) => ({ arrangement: s.arrangement, ghost: s.ghost })));
+  return (
+    <div className="flex items-center gap-3">
+      <div role="radiogroup" aria-label="Arrangement" className="flex overflow-hidden rounded border border-ink-faint">
+        {ARRANGEMENTS.map((a) => (
+          <button
+            key={a}
+            type="button"
+            role="radio"
+            aria-checked={arrangement === a}
+            data-testid={`arrangement-${a}`}
+            onClick={() => api.getState().setArrangement(a)}
+            className={`px-3 py-1 text-sm ${arrangement === a ? 'bg-ink text-paper' : 'bg-paper text-ink hover:bg-paper-deep'}`}
+          >
+            {WORDS[a]}
+          </button>
+        ))}
+      </div>
+      <label className="flex items-center gap-1.5 text-sm text-ink-soft">
+        Ghost
+        <select
+          value={ghost ?? ''}
+          onChange={(e) => api.getState().setGhost((e.target.value || null) as Arrangement | null)}
+          className="rounded border border-paper-edge bg-paper px-1 py-0.5 text-sm"
+          aria-label="Show another arrangement ghosted"
+        >
+          <option value="">none</option>
+          {ARRANGEMENTS.filter((a) => a !== arrangement).map((a) => <option key={a} value={a}>{a}</option>)}
+        </select>
+      </label>
+    </div>
+  );
+}

@@ -1,0 +1,106 @@
+'use client';
+/**
+ * The Checks panel: findings from the server grouped by arrangement and status, each with what
+ * was measured, what is required and where the rule comes from. Clicking one selects and
+ * highlights the modules it names (switching to its arrangement). Shows "checking…" while the
+ * server works, marks findings from an older document as out of date, and says plainly when the
+ * check service is unavailable. Never computes or invents a finding.
+ */
+import { useState } from 'react';
+import { CircleCheck, CircleAlert, CircleX, Loader2, CloudOff } from 'lucide-react';
+import { formatLength, type LengthUnit } from '@/lib/layout';
+import type { Finding, FindingStatus } from '@/lib/checks/types';
+import { useEditorApi, useEditor } from '../store/EditorStoreContext';
+import type { LiveChecks } from '../api/useLiveChecks';
+import { groupFindings } from './findingGroups';
+
+export const STATUS_LOOK: Record<FindingStatus, { word: string; Icon: typeof CircleCheck; cls: string }> = {
+  fail: { word: 'Fail', Icon: CircleX, cls: 'text-brick bg-brick-light' },
+  warn: { word: 'Warn', Icon: CircleAlert, cls: 'text-ochre bg-ochre-light' },
+  pass: { word: 'Pass', Icon: CircleCheck, cls: 'text-moss bg-moss-light' },
+};
+
+function amount(v: number | undefined, unit: string | undefined, units: LengthUnit): string | undefined {
+  if (v === undefined || !Number.isFinite(v)) return undefined;
+  if (unit === 'mm') return formatLength(v, units);
+  return `${Math.round(v * 100) / 100}${unit ? ` ${unit}` : ''}`;
+}
+
+export function ChecksPanel({ checks }: { checks: LiveChecks }) {
+  const api = useEditorApi();
+  const units = useEditor((s) => s.units);
+  const highlight = useEditor((s) => s.highlight);
+  const [showPass, setShowPass] = useState(false);
+  const { report, status, stale, message } = checks;
+
+  const focus = (f: Finding) => {
+    const s = api.getState();
+    if (f.arrangement && f.arrangement !== s.arrangement) s.setArrangement(f.arrangement);
+    api.getState().setHighlight(f.moduleIds ?? []);
+  };
+
+  return (
+    <div className="flex h-full flex-col text-sm" data-testid="checks-panel">
+      <div className="flex items-center gap-3 border-b border-paper-edge px-4 py-1.5 text-xs text-ink-soft">
+        <span role="status" aria-live="polite" className="flex items-center gap-1.5" data-testid="checks-status">
+          {status === 'checking' && (<><Loader2 size={13} className="animate-spin" aria-hidden /> checking…</>)}
+          {status === 'ready' && (<><CircleCheck size={13} aria-hidden /> up to date</>)}
+          {status === 'unavailable' && (<><CloudOff size={13} aria-hidden /> checks unavailable{message ? `: ${message}` : ''}</>)}
+          {status === 'refused' && (<><CircleX size={13} aria-hidden /> the check service refused this layout{message ? `: ${message}` : ''}</>)}
+        </span>
+        {stale && report && <span className="rounded bg-ochre-light px-1.5 text-ochre">showing results for an earlier version</span>}
+        <label className="ml-auto flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={showPass} onChange={(e) => setShowPass(e.target.checked)} /> show passes</label>
+      </div>
+      <div className={`min-h-0 flex-1 overflow-auto px-4 py-2 ${stale ? 'opacity-60' : ''}`}>
+        {!report && status !== 'checking' && (
+          <p className="py-4 text-ink-soft">No findings to show. {status === 'unavailable' ? 'The plan can still be edited and saved; checks will appear when the service answers.' : ''}</p>
+        )}
+        {!report && status === 'checking' && <p className="py-4 text-ink-soft">Checking the layout…</p>}
+        {report && report.findings.length === 0 && <p className="py-4 text-ink-soft">The check service returned no findings for this layout.</p>}
+        {report && groupFindings(report.findings).map((g) => (
+          <section key={g.arrangement} className="mb-3" aria-label={g.arrangement === 'all' ? 'Whole layout' : `${g.arrangement} arrangement`}>
+            <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">{g.arrangement === 'all' ? 'Whole layout' : g.arrangement}</h3>
+            {g.byStatus.filter((b) => showPass || b.status !== 'pass').map((b) => (
+              <ul key={b.status} className="space-y-1">
+                {b.findings.map((f, i) => {
+                  const look = STATUS_LOOK[f.status];
+                  const measured = amount(f.measured, f.unit, units);
+                  const required = amount(f.required, f.unit, units);
+                  const active = !!f.moduleIds?.length && f.moduleIds.every((id) => highlight.includes(id));
+                  return (
+                    <li key={`${f.id}-${i}`}>
+                      <button
+                        type="button"
+                        onClick={() => focus(f)}
+                        data-finding={f.id}
+                        data-status={f.status}
+                        data-arrangement={f.arrangement ?? 'all'}
+                        className={`flex w-full items-start gap-2 rounded border px-2 py-1.5 text-left ${active ? 'border-copper bg-copper-light' : 'border-transparent hover:border-paper-edge hover:bg-paper-deep'}`}
+                      >
+                        <span className={`mt-0.5 inline-flex shrink-0 items-center gap-1 rounded px-1.5 text-xs font-medium ${look.cls}`}>
+                          <look.Icon size={12} aria-hidden /> {look.word}
+                        </span>
+                        <span className="min-w-0">
+                          <span className="block text-ink">{f.message}</span>
+                          <span className="mt-0.5 block font-mono text-[11px] text-ink-soft">
+                            {f.id}
+                            {measured && <> · measured {measured}</>}
+                            {required && <> · required {required}</>}
+                          </span>
+                          {f.source && <span className="block text-[11px] text-ink-faint">Source: {f.source}</span>}
+                        </span>
+                      </button>
+                    </li>
+                  );
+                })}
+              </ul>
+            ))}
+          </section>
+        ))}
+        <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-faint">
+          Checks are planning aids, not certification. Gas, 230 V, heating, seat belts and weight limits must follow your local codes and be fitted and signed off by a qualified, licensed person.
+        </p>
+      </div>
+    </div>
+  );
+}

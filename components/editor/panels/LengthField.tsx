@@ -1,0 +1,66 @@
+'use client';
+/**
+ * A length input in the person's units that commits whole millimetres when left or on Enter.
+ * Text that is not a length is shown as an error and never committed. Never edits the store
+ * itself: the caller's onCommit does, and its refusal is shown beside the field.
+ */
+import { useId, useState } from 'react';
+import { parseLength, toUnit, type LengthUnit } from '@/lib/layout';
+
+export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0, testId, compact = false }: {
+  label: string;
+  valueMm: number;
+  unit: LengthUnit;
+  onCommit: (mm: number) => { ok: boolean; error?: string };
+  disabled?: boolean;
+  min?: number;
+  testId?: string;
+  compact?: boolean;
+}) {
+  const id = useId();
+  const shown = String(toUnit(valueMm, unit));
+  const [draft, setDraft] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const commit = () => {
+    if (draft === null) return;
+    const v = parseLength(draft, unit);
+    if (v === null) return setError('Type a length, e.g. 1200, 120 cm or 47 in');
+    if (v < min) return setError(`At least ${min} mm`);
+    if (v === valueMm) {
+      setDraft(null);
+      setError(null);
+      return;
+    }
+    const r = onCommit(v);
+    if (!r.ok) return setError(r.error ?? 'Refused');
+    setDraft(null);
+    setError(null);
+  };
+  return (
+    <div className={compact ? '' : 'block'}>
+      <label htmlFor={id} className={compact ? 'sr-only' : 'text-xs text-ink-soft'}>{label}</label>
+      <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
+        <input
+          id={id}
+          value={draft ?? shown}
+          disabled={disabled}
+          inputMode="decimal"
+          aria-invalid={!!error}
+          data-testid={testId}
+          onChange={(e) => setDraft(e.target.value)}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') commit();
+            if (e.key === 'Escape') {
+              setDraft(null);
+              setError(null);
+            }
+          }}
+          className="w-full min-w-0 bg-transparent px-2 py-1 font-mono text-sm outline-none disabled:text-ink-soft"
+        />
+        <span className="pr-2 font-mono text-xs text-ink-faint">{unit}</span>
+      </span>
+      {error && <span className="mt-0.5 block text-xs text-brick" role="alert">{error}</span>}
+    </div>
+  );
+}

@@ -1,0 +1,99 @@
+'use client';
+/**
+ * The Parts shelf: every module kind with its default size, searchable by name and trade words.
+ * Drag a part onto the plan to place it there, or press it (mouse or keyboard) to place it in the
+ * first free spot. Never edits the document except through the store's addModule.
+ */
+import { useMemo, useState } from 'react';
+import { Search } from 'lucide-react';
+import { toast } from 'sonner';
+import { KIND_LIST, formatLength, type KindSpec, type MaterialFamily } from '@/lib/layout';
+import { useEditor, useEditorApi } from '../store/EditorStoreContext';
+import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
+
+export function matchKinds(query: string, kinds: KindSpec[] = KIND_LIST): KindSpec[] {
+  const q = query.trim().toLowerCase();
+  if (!q) return kinds;
+  const words = q.split(/\s+/);
+  return kinds.filter((k) => {
+    const hay = [k.title, k.kind, ...k.keywords, k.family].join(' ').toLowerCase();
+    return words.every((w) => hay.includes(w));
+  });
+}
+
+const FAMILY_SWATCH: Record<MaterialFamily, string> = {
+  timber: 'repeating-linear-gradient(135deg, #8A969B 0 1px, transparent 1px 5px)',
+  upholstery: 'radial-gradient(#4A5A61 0.8px, transparent 1px) 0 0 / 5px 5px',
+  water: 'linear-gradient(to bottom, transparent 40%, #4A5A61 40% 46%, #DDD6C4 46%)',
+  electrics: 'none',
+  gas: 'none',
+  appliance: 'none',
+  sanitary: 'none',
+};
+
+function Swatch({ family }: { family: MaterialFamily }) {
+  const border = family === 'electrics' ? 'border-dotted border-2' : family === 'gas' ? 'border-double border-[3px]' : 'border';
+  return <span aria-hidden className={`inline-block h-6 w-8 shrink-0 border-ink bg-paper ${border}`} style={{ background: FAMILY_SWATCH[family] }} />;
+}
+
+export function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
+  const api = useEditorApi();
+  const units = useEditor((s) => s.units);
+  const [query, setQuery] = useState('');
+  const kinds = useMemo(() => matchKinds(query), [query]);
+
+  const place = (k: KindSpec) => {
+    const r = api.getState().addModule(k.kind);
+    if (!r.ok) return void toast.error(r.error);
+    toast.success(`${k.title} placed. Arrow keys move it; R rotates.`, { duration: 2500 });
+    focusPlan();
+  };
+
+  return (
+    <nav aria-label="Parts shelf" className="flex h-full w-60 shrink-0 flex-col border-r border-paper-edge bg-paper-deep">
+      <div className="border-b border-paper-edge p-3">
+        <h2 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">Parts shelf</h2>
+        <label className="flex items-center gap-2 rounded border border-paper-edge bg-paper px-2 py-1.5 focus-within:ring-2 focus-within:ring-copper">
+          <Search size={14} aria-hidden className="text-ink-faint" />
+          <span className="sr-only">Search parts</span>
+          <input
+            type="search"
+            value={query}
+            onChange={(e) => setQuery(e.target.value)}
+            placeholder="Search: sink, tank, bed…"
+            className="w-full bg-transparent text-sm outline-none placeholder:text-ink-faint"
+            data-testid="shelf-search"
+          />
+        </label>
+      </div>
+      <ul className="min-h-0 flex-1 overflow-auto p-2" aria-label="Module kinds">
+        {kinds.map((k) => (
+          <li key={k.kind}>
+            <button
+              type="button"
+              draggable
+              onDragStart={(e) => {
+                e.dataTransfer.setData(KIND_DRAG_TYPE, k.kind);
+                e.dataTransfer.setData('text/plain', k.title);
+                e.dataTransfer.effectAllowed = 'copy';
+              }}
+              onClick={() => place(k)}
+              data-kind={k.kind}
+              aria-label={`Place ${k.title}, ${formatLength(k.length, units)} by ${formatLength(k.width, units)}`}
+              className="flex w-full cursor-grab items-center gap-2 rounded px-2 py-1.5 text-left hover:bg-paper focus-visible:outline-2 focus-visible:outline-copper active:cursor-grabbing"
+            >
+              <Swatch family={k.family} />
+              <span className="min-w-0">
+                <span className="block truncate text-sm text-ink">{k.title}</span>
+                <span className="block font-mono text-[11px] text-ink-soft">
+                  {formatLength(k.length, units)} × {formatLength(k.width, units)}
+                </span>
+              </span>
+            </button>
+          </li>
+        ))}
+        {kinds.length === 0 && <li className="px-2 py-4 text-sm text-ink-soft">No part matches “{query}”.</li>}
+      </ul>
+    </nav>
+  );
+}

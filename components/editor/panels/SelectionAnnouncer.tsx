@@ -1,0 +1,17 @@
+'use client';
+/** Tells screen readers what is selected and where it is, as it changes (aria-live). */
+import { useShallow } from 'zustand/react/shallow';
+import { KINDS, formatLength } from '@/lib/layout';
+import { useEditor } from '../store/EditorStoreContext';
+
+export function SelectionAnnouncer({ id }: { id: string }) {
+  const { sel, units, arrangement } = useEditor(useShallow((s) => ({ sel: s.doc.modules.filter((m) => s.selection.includes(m.id)), units: s.units, arrangement: s.arrangement })));
+  let text = `Showing ${arrangement}. Nothing selected.`;
+  if (sel.length === 1) {
+    const m = sel[0];
+    text = `${m.label || KINDS[m.kind].title} selected: ${formatLength(m.x, units)} from the bulkhead, ${formatLength(m.y, units)} from the left wall, ${formatLength(m.length, units)} by ${formatLength(m.width, units)}.`;
+  } else if (sel.length > 1) text = `${sel.length} modules selected.`;
+  return (
+    <p id={id} aria-live="polite" className="sr-only" data-testid="selection-announcer">{text}</p>
+  );
+}

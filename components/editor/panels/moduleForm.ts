@@ -1,0 +1,120 @@
+/**
+ * The Details panel's form model: what the fields hold (text, so lengths can be typed in any unit:
+ * "1200", "120 cm", "47.2 in") and the zod schema that turns them into a module patch in whole
+ * millimetres. Pure: no React, so it is tested on its own.
+ */
+import { z } from 'zod';
+import { ARRANGEMENTS, FACINGS, MODULE_KINDS, SURFACES, parseLength, toUnit, type LengthUnit, type Module } from '@/lib/layout';
+
+export interface ModuleFormValues {
+  label: string;
+  kind: Module['kind'];
+  x: string;
+  y: string;
+  length: string;
+  width: string;
+  elevation: string;
+  height: string;
+  facing: Module['facing'];
+  arrangements: Module['arrangements'];
+  surface: '' | NonNullable<Module['surface']>;
+  massKg: string;
+  props: Record<string, string | boolean>;
+}
+
+function lengthField(unit: LengthUnit, min: number, max: number, what: string) {
+  return z.string().transform((s, ctx) => {
+    const v = parseLength(s, unit);
+    if (v === null) {
+      ctx.addIssue({ code: 'custom', message: `${what}: type a length, e.g. 1200, 120 cm or 47 in` });
+      return z.NEVER;
+    }
+    if (v < min || v > max) {
+      ctx.addIssue({ code: 'custom', message: `${what} must be between ${min} and ${max} mm` });
+      return z.NEVER;
+    }
+    return v;
+  });
+}
+
+export function moduleFormSchema(unit: LengthUnit) {
+  return z.object({
+    label: z.string().max(80, 'at most 80 characters').refine((s) => !/[\u0000-\u001F\u007F]/.test(s), 'no control characters'),
+    kind: z.enum(MODULE_KINDS),
+    x: lengthField(unit, -100_000, 100_000, 'Position along'),
+    y: lengthField(unit, -100_000, 100_000, 'Position across'),
+    length: lengthField(unit, 1, 100_000, 'Length'),
+    width: lengthField(unit, 1, 100_000, 'Width'),
+    elevation: lengthField(unit, 0, 5000, 'Elevation'),
+    height: lengthField(unit, 1, 5000, 'Height'),
+    facing: z.enum(FACINGS),
+    arrangements: z.array(z.enum(ARRANGEMENTS)).min(1, 'a module exists in at least one arrangement'),
+    surface: z.union([z.literal(''), z.enum(SURFACES)]),
+    massKg: z.string().transform((s, ctx) => {
+      const t = s.trim().replace(/\s*kg$/i, '');
+      if (t === '') return undefined;
+      const v = Number(t.replace(',', '.'));
+      if (!Number.isFinite(v) || v < 0 || v > 5000) {
+        ctx.addIssue({ code: 'custom', message: 'Mass: a number of kg from 0 to 5000' });
+        return z.NEVER;
+      }
+      return Math.round(v * 10) / 10;
+    }),
+    props: z.record(z.string(), z.union([z.string(), z.boolean()])),
+  });
+}
+
+export type ModuleFormOutput = z.output<ReturnType<typeof moduleFormSchema>>;
+
+export function formValuesOf(m: Module, unit: LengthUnit): ModuleFormValues {
+  const len = (v: number) => String(toUnit(v, unit));
+  const props: Record<string, string | boolean> = {};
+  for (const [k, v] of Object.entries(m.props ?? {})) props[k] = typeof v === 'boolean' ? v : String(v);
+  return {
+    label: m.label ?? '',
+    kind: m.kind,
+    x: len(m.x),
+    y: len(m.y),
+    length: len(m.length),
+    width: len(m.width),
+    elevation: len(m.elevation),
+    height: len(m.height),
+    facing: m.facing,
+    arrangements: [...m.arrangements],
+    surface: m.surface ?? '',
+    massKg: m.massKg === undefined ? '' : String(m.massKg),
+    props,
+  };
+}
+
+/** Props typed as text go back as numbers when they read as numbers, as they were stored. */
+function propsOut(values: Record<string, string | boolean>, before: Module['props']): Module['props'] {
+  const out: NonNullable<Module['props']> = {};
+  for (const [k, v] of Object.entries(values)) {
+    if (typeof v === 'boolean') out[k] = v;
+    else if (typeof before?.[k] === 'number' || /^-?\d+(\.\d+)?$/.test(v.trim())) {
+      const n = Number(v.trim().replace(',', '.'));
+      out[k] = Number.isFinite(n) ? n : v;
+    } else out[k] = v;
+  }
+  return Object.keys(out).length ? out : undefined;
+}
+
+/** The fields that changed, as a patch for the store (undefined clears an optional field). */
+export function patchFrom(m: Module, v: ModuleFormOutput): Partial<Omit<Module, 'id'>> {
+  const next: Partial<Omit<Module, 'id'>> = {
+    label: v.label.trim() === '' ? undefined : v.label.trim(),
+    kind: v.kind,
+    x: v.x, y: v.y, length: v.length, width: v.width, elevation: v.elevation, height: v.height,
+    facing: v.facing,
+    arrangements: ARRANGEMENTS.filter((a) => v.arrangements.includes(a)),
+    surface: v.surface === '' ? undefined : v.surface,
+    massKg: v.massKg,
+    props: propsOut(v.props, m.props),
+  };
+  const patch: Partial<Omit<Module, 'id'>> = {};
+  for (const key of Object.keys(next) as (keyof typeof next)[]) {
+    if (JSON.stringify(next[key]) !== JSON.stringify(m[key])) (patch as Record<string, unknown>)[key] = next[key];
+  }
+  return patch;
+}
