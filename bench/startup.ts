@@ -1,0 +1,47 @@
+/**
+ * Start-up time of the production server to its first 200: cold (a new, empty data folder, so
+ * the embedded database is created and migrated) and warm (the same folder again).
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { spawn } from 'node:child_process';
+import { buildIfNeeded } from '../scripts/lib/build';
+import { stopProcessGroup } from '../scripts/lib/test-server';
+import { round } from './stats';
+
+async function timeToFirst200(db: string, port: number): Promise<number> {
+  const started = performance.now();
+  const child = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
+    env: { ...process.env, BAYWRIGHT_DB: db, NODE_ENV: 'production' },
+    stdio: 'ignore',
+    detached: true,
+  });
+  try {
+    for (;;) {
+      try {
+        const res = await fetch(`http://127.0.0.1:${port}/sign-in`);
+        if (res.status === 200) return (performance.now() - started) / 1000;
+      } catch {
+        /* not yet */
+      }
+      if (performance.now() - started > 60_000) throw new Error('no 200 within 60 s');
+      await new Promise((r) => setTimeout(r, 25));
+    }
+  } finally {
+    await stopProcessGroup(child);
+  }
+}
+
+export async function benchStartup(): Promise<{ coldS: number; warmS: number }> {
+  buildIfNeeded();
+  const db = 'bench-startup';
+  const dir = path.join(process.cwd(), 'data', db);
+  fs.rmSync(dir, { recursive: true, force: true });
+  fs.rmSync(`${dir}.pid`, { force: true });
+  const coldS = await timeToFirst200(db, 3310);
+  const warm: number[] = [];
+  for (let i = 0; i < 3; i++) warm.push(await timeToFirst200(db, 3310));
+  return { coldS: round(coldS, 2), warmS: round(Math.min(...warm), 2) };
+}
+
+if (process.argv[1]?.endsWith('startup.ts')) benchStartup().then((r) => console.log(r));
