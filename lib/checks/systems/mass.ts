@@ -29,6 +29,10 @@ export const MIN_FRONT_SHARE = 0.2;
 
 const WEIGHT_SOURCE = 'Maximum masses from the vehicle plate / certificate of conformity (Reg. (EU) 1230/2012)';
 
+function passengers(n: number): string {
+  return `${n} ${n === 1 ? 'passenger' : 'passengers'}`;
+}
+
 function breakdown(r: MassReport): string {
   const groups: [string, string][] = [
     ['vehicle', 'vehicle in running order'],
@@ -86,7 +90,7 @@ export function massChecks(doc: LayoutDoc): Finding[] {
         measured: round(a.kg, 1),
         required: a.max,
         unit: 'kg',
-        message: `${a.name} carries ${num(a.kg)} kg laden against its ${num(a.max)} kg limit (${spare < 0 ? `${num(-spare)} kg over` : `${num(spare)} kg to spare`}), by moments about the front axle.${assumed}`,
+        message: `${a.name} carries ${num(a.kg)} kg laden against its ${num(a.max)} kg limit (${spare < 0 ? `${num(-spare)} kg over` : `${num(spare)} kg to spare`}), by moments about the front axle; centre of mass ${num(r.centreOfMass?.x ?? 0)} mm from the front of the bay.`,
         source: `${WEIGHT_SOURCE}; lever rule (statics)`,
       });
     }
@@ -113,7 +117,7 @@ export function massChecks(doc: LayoutDoc): Finding[] {
       measured: round(available, 1),
       required: round(en, 1),
       unit: 'kg',
-      message: `User payload left: ${num(available)} kg (maximum authorised mass less the van as built, ${num(r.builtKg)} kg). EN 1646-2 needs ${num(en)} kg for ${r.seats} seats and ${num(r.lengthM, 2)} m: ${r.seats - 1} passengers at 75 kg plus personal effects 10 × ${r.seats} + 10 × ${num(r.lengthM, 2)} + 30 = ${num(en - 75 * (r.seats - 1))} kg.`,
+      message: `User payload left: ${num(available)} kg (maximum authorised mass less the van as built, ${num(r.builtKg)} kg). EN 1646-2 needs ${num(en)} kg for ${r.seats} seats and ${num(r.lengthM, 2)} m: ${passengers(r.seats - 1)} at 75 kg plus personal effects 10 × ${r.seats} + 10 × ${num(r.lengthM, 2)} + 30 = ${num(en - 75 * (r.seats - 1))} kg.`,
       source: 'EN 1646-2 (user payload of motor caravans; as cited, clause not checked)',
     });
     const reg = reg1230UserPayload(r.seats, r.lengthM);
@@ -123,7 +127,7 @@ export function massChecks(doc: LayoutDoc): Finding[] {
       measured: round(available, 1),
       required: round(reg, 1),
       unit: 'kg',
-      message: `User payload left: ${num(available)} kg. Reg. (EU) 1230/2012 asks motor caravans for ${r.seats - 1} passengers at 75 kg plus 10 × (${r.seats} persons + ${num(r.lengthM, 2)} m) = ${num(reg - 75 * (r.seats - 1))} kg, ${num(reg)} kg in all.`,
+      message: `User payload left: ${num(available)} kg. Reg. (EU) 1230/2012 asks motor caravans for ${passengers(r.seats - 1)} at 75 kg plus 10 × (${r.seats} persons + ${num(r.lengthM, 2)} m) = ${num(reg - 75 * (r.seats - 1))} kg, ${num(reg)} kg in all.`,
       source: 'Reg. (EU) 1230/2012, minimum payload of motor caravans (as cited; read as on top of passengers, from memory)',
     });
   }
