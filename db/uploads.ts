@@ -1,0 +1,190 @@
+/**
+ * Reference uploads of a layout: photos and PDF drawings. Every function takes the Actor and
+ * checks rights inside: owners and designers of the layout's studio list, add, place and delete;
+ * the layout's own client lists and views; anyone else gets "not found". Returns DTOs, never rows
+ * (the stored name on disk never leaves this file).
+ *
+ * Tracing placements are studio data: they are returned only here, to signed-in members who may
+ * read the layout, and are never part of the LayoutDoc a viewer link shows.
+ */
+import 'server-only';
+import { and, count, desc, eq } from 'drizzle-orm';
+import { getDb } from './client';
+import { layouts, uploads, users } from './schema';
+import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
+import { canEditLayouts, type Actor } from './actor';
+import { getLayout } from './layouts';
+import { cleanFileName, withExtension } from '../lib/uploads/file-name';
+import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
+import { readStored, removeStored, storedExists, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
+import type { TracingPlacement } from '../lib/tracing/calibration';
+
+export interface UploadDto {
+  id: string;
+  layoutId: string;
+  fileName: string;
+  contentType: string;
+  kind: 'photo' | 'drawing';
+  sizeBytes: number;
+  uploadedBy: string | null;
+  createdAt: string;
+  /** Where to fetch the bytes (rights checked there too). */
+  url: string;
+  /** Where the image sits under the plan, or null when it is not placed. */
+  tracing: TracingPlacement | null;
+}
+
+/** A layout keeps at most this many reference files (common practice, no source: a tidy folder). */
+export const MAX_UPLOADS_PER_LAYOUT = 40;
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+const uploadColumns = {
+  id: uploads.id,
+  layoutId: uploads.layoutId,
+  studioId: uploads.studioId,
+  storedName: uploads.storedName,
+  fileName: uploads.fileName,
+  contentType: uploads.contentType,
+  sizeBytes: uploads.sizeBytes,
+  tracing: uploads.tracing,
+  createdAt: uploads.createdAt,
+  uploaderName: users.name,
+  layoutClientId: layouts.clientId,
+};
+
+type Row = {
+  id: string;
+  layoutId: string;
+  studioId: string;
+  storedName: string;
+  fileName: string;
+  contentType: string;
+  sizeBytes: number;
+  tracing: TracingPlacement | null;
+  createdAt: Date;
+  uploaderName: string | null;
+  layoutClientId: string | null;
+};
+
+function toDto(row: Row): UploadDto {
+  return {
+    id: row.id,
+    layoutId: row.layoutId,
+    fileName: row.fileName,
+    contentType: row.contentType,
+    kind: uploadKind(row.contentType),
+    sizeBytes: row.sizeBytes,
+    uploadedBy: row.uploaderName,
+    createdAt: row.createdAt.toISOString(),
+    url: `/api/uploads/${row.id}`,
+    tracing: row.tracing ?? null,
+  };
+}
+
+/** The upload's row if the actor may see its layout; NotFoundError otherwise. */
+async function readable(actor: Actor, uploadId: string): Promise<Row> {
+  if (!UUID.test(uploadId)) throw new NotFoundError('No such file.');
+  const db = await getDb();
+  const [row] = await db
+    .select(uploadColumns)
+    .from(uploads)
+    .innerJoin(layouts, eq(layouts.id, uploads.layoutId))
+    .leftJoin(users, eq(users.id, uploads.uploadedBy))
+    .where(eq(uploads.id, uploadId))
+    .limit(1);
+  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such file.');
+  if (!canEditLayouts(actor) && row.layoutClientId !== actor.userId) throw new NotFoundError('No such file.');
+  return row;
+}
+
+function requireEditor(actor: Actor, what: string) {
+  if (!canEditLayouts(actor)) throw new ForbiddenError(`Only the studio's owners and designers can ${what}.`);
+}
+
+export async function listUploads(actor: Actor, layoutId: string): Promise<UploadDto[]> {
+  await getLayout(actor, layoutId); // 404 for anyone who may not see the layout
+  const db = await getDb();
+  const rows = await db
+    .select(uploadColumns)
+    .from(uploads)
+    .innerJoin(layouts, eq(layouts.id, uploads.layoutId))
+    .leftJoin(users, eq(users.id, uploads.uploadedBy))
+    .where(and(eq(uploads.layoutId, layoutId), eq(uploads.studioId, actor.studioId)))
+    .orderBy(desc(uploads.createdAt));
+  return rows.map(toDto);
+}
+
+export interface IncomingFile {
+  body: ReadableStream<Uint8Array> | null;
+  fileName: string | null;
+  contentType: string;
+  declaredLength?: number;
+}
+
+/**
+ * Adds a file to a layout: rights first (so a stranger learns nothing, and no byte is written
+ * for them), then the stream goes to disk with its size and type checked, then the row.
+ */
+export async function addUpload(actor: Actor, layoutId: string, file: IncomingFile, limit = MAX_UPLOAD_BYTES): Promise<UploadDto> {
+  const layout = await getLayout(actor, layoutId);
+  if (!layout.canEdit) throw new ForbiddenError("Only the studio's owners and designers can add files.");
+  const db = await getDb();
+  const [{ n }] = await db.select({ n: count() }).from(uploads).where(eq(uploads.layoutId, layoutId));
+  if (n >= MAX_UPLOADS_PER_LAYOUT) throw new ConflictError(`This layout already has ${MAX_UPLOADS_PER_LAYOUT} reference files; delete one first.`);
+
+  const cleaned = cleanFileName(file.fileName);
+  const stored = await storeUpload(file.body, { contentType: file.contentType, fileName: cleaned, declaredLength: file.declaredLength }, limit);
+  try {
+    const [row] = await db
+      .insert(uploads)
+      .values({
+        layoutId,
+        studioId: actor.studioId,
+        storedName: stored.storedName,
+        fileName: withExtension(cleaned, extensionOf(stored.contentType)),
+        contentType: stored.contentType,
+        sizeBytes: stored.sizeBytes,
+        uploadedBy: actor.userId,
+      })
+      .returning({ id: uploads.id });
+    return toDto(await readable(actor, row.id));
+  } catch (err) {
+    await removeStored(stored.storedName).catch(() => undefined);
+    throw err;
+  }
+}
+
+/** The file's details and a stream of its bytes, for the download route. */
+export async function openUpload(actor: Actor, uploadId: string): Promise<{ upload: UploadDto; body: ReadableStream<Uint8Array> }> {
+  const row = await readable(actor, uploadId);
+  if (!(await storedExists(row.storedName))) throw new NotFoundError('The file is missing from storage.');
+  return { upload: toDto(row), body: readStored(row.storedName) };
+}
+
+/** Removes the row first (so no one is offered a file that is going), then the bytes. */
+export async function deleteUpload(actor: Actor, uploadId: string): Promise<void> {
+  const row = await readable(actor, uploadId);
+  requireEditor(actor, 'delete files');
+  const db = await getDb();
+  await db.delete(uploads).where(eq(uploads.id, row.id));
+  await removeStored(row.storedName).catch((err) => console.error('[baywright] could not remove a stored upload', err));
+}
+
+/** Rights for placing an image, checked before the request body is read (404 / 403). */
+export async function checkCanPlace(actor: Actor, uploadId: string): Promise<void> {
+  await readable(actor, uploadId);
+  requireEditor(actor, 'place tracing images');
+}
+
+/** Places an image under the plan (or takes it away with null). Photos only. */
+export async function setTracing(actor: Actor, uploadId: string, placement: TracingPlacement | null): Promise<UploadDto> {
+  const row = await readable(actor, uploadId);
+  requireEditor(actor, 'place tracing images');
+  if (placement && !isImage(row.contentType as UploadType)) {
+    throw new BadRequestError('Only photos (JPEG, PNG, WebP) can be placed under the plan; open the PDF drawing to read it.');
+  }
+  const db = await getDb();
+  await db.update(uploads).set({ tracing: placement }).where(eq(uploads.id, row.id));
+  return toDto(await readable(actor, row.id));
+}
