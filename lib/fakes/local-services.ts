@@ -13,7 +13,17 @@ export function fakesWanted(): boolean {
 }
 
 /** The fakes this app starts itself; each entry imports its fake lazily. */
-const STARTERS: Starter[] = [];
+const STARTERS: Starter[] = [
+  {
+    // Development mail server: invitations and notifications land in /outbox (lib/fakes/smtp).
+    name: 'mail server',
+    wanted: () => fakesWanted() && !process.env.SMTP_URL,
+    start: async () => {
+      const { startFakeSmtpOnce } = await import('./smtp/server');
+      await startFakeSmtpOnce();
+    },
+  },
+];
 
 export function startLocalServices(): Promise<void> {
   g.__baywrightServices ??= (async () => {
