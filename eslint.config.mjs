@@ -33,7 +33,7 @@ const config = [
     },
   },
   {
-    files: ['lib/layout/**/*.ts', 'lib/checks/**/*.ts'],
+    files: ['lib/layout/**/*.ts', 'lib/checks/**/*.ts', 'lib/planning/**/*.ts'],
     rules: { 'no-restricted-imports': ['error', { paths: uiAndServer, patterns: uiAndServerPatterns }] },
   },
   {
