@@ -54,11 +54,14 @@ export function conductivityOf(material: string, overrides: Record<string, numbe
   for (const [key, lambda] of Object.entries(overrides)) {
     if (key.trim().toLowerCase() === name) return { lambda, source: 'declared λ entered for this layout', title: material };
   }
-  for (const c of CONDUCTIVITIES) {
-    if (c.match.some((w) => new RegExp(`(^|[^a-z])${escapeRe(w)}([^a-z]|$)`).test(name))) return { lambda: c.lambda, source: c.source, title: c.title };
+  for (const [c, patterns] of MATCHERS) {
+    if (patterns.some((re) => re.test(name))) return { lambda: c.lambda, source: c.source, title: c.title };
   }
   return null;
 }
+
+/** Whole-word patterns, built once. */
+const MATCHERS: [MaterialConductivity, RegExp[]][] = CONDUCTIVITIES.map((c) => [c, c.match.map((w) => new RegExp(`(^|[^a-z])${escapeRe(w)}([^a-z]|$)`))]);
 
 function escapeRe(s: string): string {
   return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');

@@ -5,9 +5,13 @@
  */
 import type { Finding } from '../types';
 
+const formats = new Map<number, Intl.NumberFormat>();
+
 export function num(n: number, digits = 0): string {
   if (!Number.isFinite(n)) return n > 0 ? 'unlimited' : 'n/a';
-  return n.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+  let f = formats.get(digits);
+  if (!f) formats.set(digits, (f = new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits })));
+  return f.format(n);
 }
 
 export function round(n: number, digits = 2): number {
