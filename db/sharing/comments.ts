@@ -1,0 +1,148 @@
+/**
+ * Comments on a layout: a thread starts with a pin at a point of the plan (whole millimetres, in
+ * one arrangement), others reply, and either side resolves it (or reopens it). The workshop's
+ * owners and designers and the layout's client take part; nobody else even learns the layout
+ * exists. Authors' names are kept with the comment; their addresses are never returned.
+ * Must never let a viewer link (no account) read or write comments.
+ */
+import 'server-only';
+import { and, asc, count, eq, inArray, isNull } from 'drizzle-orm';
+import { getDb } from '../client';
+import { comments } from '../schema';
+import { BadRequestError, NotFoundError } from '../errors';
+import type { Actor, StudioRole } from '../actor';
+import { ARRANGEMENTS, type Arrangement } from '../../lib/layout/schema';
+import { layoutFor, UUID, type LayoutAccess } from './access';
+
+export const COMMENT_MAX = 2000;
+/** How far outside the bare-metal outline a pin may sit (a note about the cab or the rear door). */
+export const PIN_MARGIN_MM = 500;
+
+export interface CommentDto {
+  id: string;
+  body: string;
+  author: { name: string; role: StudioRole; isYou: boolean };
+  createdAt: string;
+}
+
+export interface ThreadDto extends CommentDto {
+  arrangement: Arrangement;
+  x: number;
+  y: number;
+  resolved: { at: string } | null;
+  replies: CommentDto[];
+}
+
+type Row = typeof comments.$inferSelect;
+
+function asRole(r: string): StudioRole {
+  return r === 'owner' || r === 'designer' ? r : 'client';
+}
+
+function commentDto(r: Row, actor: Actor): CommentDto {
+  return {
+    id: r.id,
+    body: r.body,
+    author: { name: r.authorName, role: asRole(r.authorRole), isYou: r.authorId === actor.userId },
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+function threads(rows: Row[], actor: Actor): ThreadDto[] {
+  const roots = rows.filter((r) => !r.parentId);
+  return roots.map((root) => ({
+    ...commentDto(root, actor),
+    arrangement: (ARRANGEMENTS as readonly string[]).includes(root.arrangement ?? '') ? (root.arrangement as Arrangement) : 'travel',
+    x: root.x ?? 0,
+    y: root.y ?? 0,
+    resolved: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
+    replies: rows.filter((r) => r.parentId === root.id).map((r) => commentDto(r, actor)),
+  }));
+}
+
+export async function listThreads(actor: Actor, layoutId: string): Promise<ThreadDto[]> {
+  await layoutFor(actor, layoutId);
+  const db = await getDb();
+  const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
+  return threads(rows, actor);
+}
+
+export type NewComment =
+  | { kind: 'pin'; arrangement: Arrangement; x: number; y: number; body: string }
+  | { kind: 'reply'; parentId: string; body: string };
+
+function checkBody(body: string): string {
+  const text = body.trim();
+  if (!text) throw new BadRequestError('Write something in the comment.');
+  if (text.length > COMMENT_MAX) throw new BadRequestError(`Keep a comment under ${COMMENT_MAX} characters.`);
+  return text;
+}
+
+function checkPin(layout: LayoutAccess, x: number, y: number): void {
+  const { length, width } = layout.doc.bay;
+  if (x < -PIN_MARGIN_MM || x > length + PIN_MARGIN_MM || y < -PIN_MARGIN_MM || y > width + PIN_MARGIN_MM) {
+    throw new BadRequestError(`Pin the comment on the plan: x from 0 to ${length} mm, y from 0 to ${width} mm.`);
+  }
+}
+
+/** Returns the thread the new comment belongs to, and who else should hear of it. */
+export async function addComment(actor: Actor, layoutId: string, input: NewComment): Promise<{ thread: ThreadDto; layout: LayoutAccess; commentId: string; threadAuthorId: string | null }> {
+  const layout = await layoutFor(actor, layoutId);
+  const body = checkBody(input.body);
+  const db = await getDb();
+  let rootId: string;
+  let threadAuthorId: string | null = actor.userId;
+  let commentId: string;
+  const author = { authorId: actor.userId, authorName: actor.name, authorRole: actor.role };
+  if (input.kind === 'pin') {
+    checkPin(layout, input.x, input.y);
+    const [row] = await db
+      .insert(comments)
+      .values({ layoutId, arrangement: input.arrangement, x: Math.round(input.x), y: Math.round(input.y), body, ...author })
+      .returning({ id: comments.id });
+    rootId = row.id;
+    commentId = row.id;
+  } else {
+    if (!UUID.test(input.parentId)) throw new BadRequestError('That comment is not on this layout.');
+    const [parent] = await db.select().from(comments).where(and(eq(comments.id, input.parentId), eq(comments.layoutId, layoutId))).limit(1);
+    if (!parent) throw new BadRequestError('That comment is not on this layout.');
+    // Replies hang off the thread's first comment: threads are one level deep.
+    rootId = parent.parentId ?? parent.id;
+    const [root] = rootId === parent.id ? [parent] : await db.select().from(comments).where(eq(comments.id, rootId)).limit(1);
+    threadAuthorId = root?.authorId ?? null;
+    const [row] = await db.insert(comments).values({ layoutId, parentId: rootId, body, ...author }).returning({ id: comments.id });
+    commentId = row.id;
+  }
+  const rows = await db.select().from(comments).where(and(eq(comments.layoutId, layoutId))).orderBy(asc(comments.createdAt));
+  const thread = threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor)[0];
+  return { thread, layout, commentId, threadAuthorId };
+}
+
+export async function setResolved(actor: Actor, layoutId: string, commentId: string, resolved: boolean): Promise<ThreadDto> {
+  await layoutFor(actor, layoutId);
+  if (!UUID.test(commentId)) throw new NotFoundError('No such comment.');
+  const db = await getDb();
+  const [row] = await db.select().from(comments).where(and(eq(comments.id, commentId), eq(comments.layoutId, layoutId))).limit(1);
+  if (!row) throw new NotFoundError('No such comment.');
+  if (row.parentId) throw new BadRequestError('Resolve the thread from its first comment.');
+  await db
+    .update(comments)
+    .set(resolved ? { resolvedAt: new Date(), resolvedBy: actor.userId } : { resolvedAt: null, resolvedBy: null })
+    .where(eq(comments.id, commentId));
+  const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
+  return threads(rows.filter((r) => r.id === commentId || r.parentId === commentId), actor)[0];
+}
+
+/** Open (unresolved) threads per layout, for the layouts table. */
+export async function openThreadCounts(layoutIds: string[]): Promise<Map<string, number>> {
+  const out = new Map<string, number>(layoutIds.map((id) => [id, 0]));
+  if (!layoutIds.length) return out;
+  const db = await getDb();
+  const rows = await db
+    .select({ layoutId: comments.layoutId, n: count() })
+    .from(comments)
+    .where(and(inArray(comments.layoutId, layoutIds), isNull(comments.parentId), isNull(comments.resolvedAt)))
+    .groupBy(comments.layoutId);
+  for (const r of rows) out.set(r.layoutId, r.n);
+  return out;
+}

@@ -1,0 +1,60 @@
+/**
+ * Comparing two states of a layout — two revisions, or a revision and the layout as last saved:
+ * both documents, what changed between them (lib/layout/revision-diff) and which check findings
+ * changed status (both documents checked with the studio's defaults). Anyone who may see the
+ * layout may compare its revisions. Must never reach a revision of another layout.
+ */
+import 'server-only';
+import { eq } from 'drizzle-orm';
+import { getDb } from '../client';
+import { studios } from '../schema';
+import { NotFoundError } from '../errors';
+import type { Actor } from '../actor';
+import { settingsSchema, type LayoutDoc } from '../../lib/layout/schema';
+import { diffFindings, diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
+import { runChecks } from '../../lib/checks';
+import { withStudioDefaults } from '../studios';
+import { layoutFor, UUID } from './access';
+import { getRevision, revisionIdByLetter } from './revisions';
+
+export interface ComparedSide {
+  label: string;
+  letter: string | null;
+  at: string;
+  doc: LayoutDoc;
+  ok: boolean;
+}
+
+export interface ComparisonDto {
+  from: ComparedSide;
+  to: ComparedSide;
+  diff: RevisionDiff;
+  findings: FindingChange[];
+}
+
+async function side(actor: Actor, layoutId: string, ref: string): Promise<Omit<ComparedSide, 'ok'>> {
+  if (ref === 'current') {
+    const layout = await layoutFor(actor, layoutId);
+    return { label: `Current draft (version ${layout.version})`, letter: null, at: new Date().toISOString(), doc: layout.doc };
+  }
+  const id = UUID.test(ref) ? ref : await revisionIdByLetter(actor, layoutId, ref.toUpperCase());
+  const rev = await getRevision(actor, layoutId, id);
+  return { label: `Revision ${rev.letter}`, letter: rev.letter, at: rev.issuedAt, doc: rev.doc };
+}
+
+export async function compareRevisions(actor: Actor, layoutId: string, fromRef: string, toRef: string): Promise<ComparisonDto> {
+  await layoutFor(actor, layoutId);
+  if (fromRef.length > 64 || toRef.length > 64) throw new NotFoundError('No such revision.');
+  const [from, to] = await Promise.all([side(actor, layoutId, fromRef), side(actor, layoutId, toRef)]);
+  const db = await getDb();
+  const [s] = await db.select({ checkDefaults: studios.checkDefaults }).from(studios).where(eq(studios.id, actor.studioId)).limit(1);
+  const defaults = settingsSchema.safeParse(s?.checkDefaults).data ?? {};
+  const before = runChecks(withStudioDefaults(from.doc, defaults));
+  const after = runChecks(withStudioDefaults(to.doc, defaults));
+  return {
+    from: { ...from, ok: before.ok },
+    to: { ...to, ok: after.ok },
+    diff: diffRevisions(from.doc, to.doc),
+    findings: diffFindings(before.findings, after.findings),
+  };
+}

@@ -1,0 +1,196 @@
+/**
+ * What changed between two revisions of a layout, for the side-by-side comparison: modules
+ * added, removed, moved (x, y or elevation) or resized (length, width, height; a 90° turn shows
+ * as a swap), other edits to a module (label, facing, arrangements, surface, mass, props), the
+ * bay's own measurements, and which check findings changed status.
+ *
+ * Pure data in, data out. Findings are taken structurally (id, status, arrangement, moduleIds),
+ * so this file needs nothing from lib/checks. Must never import React, Next, the database or the
+ * check engine.
+ */
+import type { Arrangement, LayoutDoc, Module } from './schema';
+
+export interface Moved {
+  dx: number;
+  dy: number;
+  /** Change of elevation (underside above the finished floor). */
+  dz: number;
+}
+
+export interface Resized {
+  dLength: number;
+  dWidth: number;
+  dHeight: number;
+  /** Length and width swapped: the module was turned by 90°. */
+  rotated: boolean;
+}
+
+export type OtherField = 'kind' | 'label' | 'facing' | 'arrangements' | 'surface' | 'massKg' | 'props';
+
+export interface ModuleChange {
+  id: string;
+  before: Module;
+  after: Module;
+  moved: Moved | null;
+  resized: Resized | null;
+  other: OtherField[];
+}
+
+export interface BayChange {
+  field: 'length' | 'width' | 'height' | 'bulkhead' | 'cabSeats' | 'wheelArches' | 'doors' | 'buildUp' | 'occupants';
+  before: string;
+  after: string;
+}
+
+export interface RevisionDiff {
+  added: Module[];
+  removed: Module[];
+  /** Modules present in both whose placement, size or details differ. */
+  changed: ModuleChange[];
+  /** Ids of changed modules that moved / were resized (a module may be in both). */
+  moved: string[];
+  resized: string[];
+  unchanged: number;
+  bay: BayChange[];
+}
+
+function same(a: unknown, b: unknown): boolean {
+  return JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+}
+
+function sortedProps(p: Module['props']): [string, unknown][] {
+  return Object.entries(p ?? {}).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+}
+
+function moduleChange(before: Module, after: Module): ModuleChange | null {
+  const dx = after.x - before.x;
+  const dy = after.y - before.y;
+  const dz = after.elevation - before.elevation;
+  const moved = dx || dy || dz ? { dx, dy, dz } : null;
+  const dLength = after.length - before.length;
+  const dWidth = after.width - before.width;
+  const dHeight = after.height - before.height;
+  const rotated = (dLength !== 0 || dWidth !== 0) && after.length === before.width && after.width === before.length;
+  const resized = dLength || dWidth || dHeight ? { dLength, dWidth, dHeight, rotated } : null;
+  const other: OtherField[] = [];
+  if (before.kind !== after.kind) other.push('kind');
+  if ((before.label ?? '') !== (after.label ?? '')) other.push('label');
+  if (before.facing !== after.facing) other.push('facing');
+  if (!same([...before.arrangements].sort(), [...after.arrangements].sort())) other.push('arrangements');
+  if (before.surface !== after.surface) other.push('surface');
+  if (before.massKg !== after.massKg) other.push('massKg');
+  if (!same(sortedProps(before.props), sortedProps(after.props))) other.push('props');
+  if (!moved && !resized && !other.length) return null;
+  return { id: after.id, before, after, moved, resized, other };
+}
+
+function bayChanges(before: LayoutDoc, after: LayoutDoc): BayChange[] {
+  const out: BayChange[] = [];
+  for (const field of ['length', 'width', 'height', 'cabSeats'] as const) {
+    if (before.bay[field] !== after.bay[field]) out.push({ field, before: String(before.bay[field]), after: String(after.bay[field]) });
+  }
+  if (before.bay.bulkhead !== after.bay.bulkhead) out.push({ field: 'bulkhead', before: before.bay.bulkhead ? 'yes' : 'no', after: after.bay.bulkhead ? 'yes' : 'no' });
+  if (!same(before.bay.wheelArches, after.bay.wheelArches)) out.push({ field: 'wheelArches', before: `${before.bay.wheelArches.length}`, after: `${after.bay.wheelArches.length}` });
+  if (!same(before.bay.doors, after.bay.doors)) out.push({ field: 'doors', before: `${before.bay.doors.length}`, after: `${after.bay.doors.length}` });
+  const thickness = (d: LayoutDoc) => (['floor', 'roof', 'walls'] as const).map((s) => `${s} ${d.buildUp[s].reduce((t, l) => t + l.thickness, 0)} mm`).join(', ');
+  if (!same(before.buildUp, after.buildUp)) out.push({ field: 'buildUp', before: thickness(before), after: thickness(after) });
+  if (!same(before.occupants, after.occupants)) {
+    const words = (d: LayoutDoc) => `standing ${d.occupants.standingHeight} mm, ${d.occupants.sleepers.length} sleeper(s)`;
+    out.push({ field: 'occupants', before: words(before), after: words(after) });
+  }
+  return out;
+}
+
+/** Modules are matched by id: an id in both documents is the same module, whatever else changed. */
+export function diffRevisions(before: LayoutDoc, after: LayoutDoc): RevisionDiff {
+  const beforeById = new Map(before.modules.map((m) => [m.id, m]));
+  const afterById = new Map(after.modules.map((m) => [m.id, m]));
+  const added = after.modules.filter((m) => !beforeById.has(m.id));
+  const removed = before.modules.filter((m) => !afterById.has(m.id));
+  const changed: ModuleChange[] = [];
+  let unchanged = 0;
+  for (const a of after.modules) {
+    const b = beforeById.get(a.id);
+    if (!b) continue;
+    const c = moduleChange(b, a);
+    if (c) changed.push(c);
+    else unchanged += 1;
+  }
+  return {
+    added,
+    removed,
+    changed,
+    moved: changed.filter((c) => c.moved).map((c) => c.id),
+    resized: changed.filter((c) => c.resized).map((c) => c.id),
+    unchanged,
+    bay: bayChanges(before, after),
+  };
+}
+
+/** The part of a check finding the comparison needs (lib/checks `Finding` fits it). */
+export interface FindingLike {
+  id: string;
+  status: 'pass' | 'warn' | 'fail';
+  arrangement?: Arrangement;
+  moduleIds?: string[];
+  message: string;
+}
+
+export interface FindingChange {
+  /** Rule id, arrangement and modules: what identifies "the same finding" in both reports. */
+  key: string;
+  id: string;
+  arrangement?: Arrangement;
+  moduleIds?: string[];
+  before: FindingLike['status'] | null;
+  after: FindingLike['status'] | null;
+  /** better: towards pass (or a warn/fail gone); worse: towards fail (or a new warn/fail). */
+  direction: 'better' | 'worse';
+  message: string;
+}
+
+const RANK = { pass: 0, warn: 1, fail: 2 } as const;
+
+function keyed(findings: FindingLike[]): Map<string, FindingLike> {
+  const out = new Map<string, FindingLike>();
+  for (const f of findings) {
+    const base = `${f.id}|${f.arrangement ?? ''}|${[...(f.moduleIds ?? [])].sort().join(',')}`;
+    let key = base;
+    // The same rule may say two things about the same place: number the repeats.
+    for (let n = 2; out.has(key); n++) key = `${base}#${n}`;
+    out.set(key, f);
+  }
+  return out;
+}
+
+/**
+ * Findings whose status differs between the two reports. A finding present on one side only
+ * counts when it is a warn or fail there (a pass appearing or vanishing with a module is not
+ * news); findings that kept their status are left out.
+ */
+export function diffFindings(before: FindingLike[], after: FindingLike[]): FindingChange[] {
+  const b = keyed(before);
+  const a = keyed(after);
+  const out: FindingChange[] = [];
+  for (const key of new Set([...b.keys(), ...a.keys()])) {
+    const fb = b.get(key);
+    const fa = a.get(key);
+    const sb = fb?.status ?? null;
+    const sa = fa?.status ?? null;
+    if (sb === sa) continue;
+    if (sb === null && sa === 'pass') continue;
+    if (sa === null && sb === 'pass') continue;
+    const rb = sb === null ? 0 : RANK[sb];
+    const ra = sa === null ? 0 : RANK[sa];
+    const f = (fa ?? fb)!;
+    out.push({
+      key, id: f.id,
+      ...(f.arrangement ? { arrangement: f.arrangement } : {}),
+      ...(f.moduleIds?.length ? { moduleIds: f.moduleIds } : {}),
+      before: sb, after: sa,
+      direction: ra > rb ? 'worse' : 'better',
+      message: f.message,
+    });
+  }
+  return out.sort((x, y) => (x.direction === y.direction ? x.key.localeCompare(y.key) : x.direction === 'worse' ? -1 : 1));
+}

@@ -1,0 +1,61 @@
+/**
+ * The words of every mail Baywright sends about working with a client: the invitation, a new
+ * revision, the client's decision, a new comment. Pure functions of their inputs (names, links,
+ * letters); the caller supplies absolute links. Must never look anything up or send anything.
+ */
+import { compose, oneLine, type ComposedMail } from './compose';
+
+export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null }): ComposedMail {
+  const until = p.expiresAt.toISOString().slice(0, 10);
+  return compose(`${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
+    greeting: `Hello ${oneLine(p.clientName, 80)},`,
+    paragraphs: [
+      `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, comment on the drawing and approve revisions.`,
+      ...(p.layoutName ? [`The layout waiting for you: ${p.layoutName}.`] : []),
+      `Set a password to join. The link works once and until ${until}.`,
+    ],
+    action: { label: 'Set your password', url: p.url },
+    footer: 'If you were not expecting this, ignore the mail: nothing happens unless the link is used.',
+  });
+}
+
+export function revisionIssuedMail(p: { clientName: string; studioName: string; layoutName: string; letter: string; note: string; url: string }): ComposedMail {
+  return compose(`Revision ${p.letter} of ${oneLine(p.layoutName, 80)} is ready for you`, {
+    greeting: `Hello ${oneLine(p.clientName, 80)},`,
+    paragraphs: [
+      `${p.studioName} has issued revision ${p.letter} of ${p.layoutName}. Look it over, then approve it or ask for changes.`,
+    ],
+    quote: p.note || undefined,
+    action: { label: `Open revision ${p.letter}`, url: p.url },
+  });
+}
+
+export function decisionMail(p: { recipientName: string; clientName: string; layoutName: string; letter: string; decision: 'approved' | 'changes-asked'; message: string; url: string }): ComposedMail {
+  const approved = p.decision === 'approved';
+  return compose(
+    approved ? `${oneLine(p.clientName, 80)} approved revision ${p.letter} of ${oneLine(p.layoutName, 80)}`
+      : `${oneLine(p.clientName, 80)} asked for changes to revision ${p.letter} of ${oneLine(p.layoutName, 80)}`,
+    {
+      greeting: `Hello ${oneLine(p.recipientName, 80)},`,
+      paragraphs: [
+        approved
+          ? `${p.clientName} approved revision ${p.letter} of ${p.layoutName}. The approval is recorded and cannot be changed.`
+          : `${p.clientName} asked for changes to revision ${p.letter} of ${p.layoutName}.`,
+      ],
+      quote: p.message || undefined,
+      action: { label: 'See the revisions', url: p.url },
+    },
+  );
+}
+
+export function commentMail(p: { recipientName: string; authorName: string; layoutName: string; body: string; reply: boolean; url: string }): ComposedMail {
+  return compose(
+    p.reply ? `${oneLine(p.authorName, 80)} replied on ${oneLine(p.layoutName, 80)}` : `${oneLine(p.authorName, 80)} commented on ${oneLine(p.layoutName, 80)}`,
+    {
+      greeting: `Hello ${oneLine(p.recipientName, 80)},`,
+      paragraphs: [p.reply ? `${p.authorName} replied to a comment on ${p.layoutName}:` : `${p.authorName} pinned a comment on ${p.layoutName}:`],
+      quote: p.body,
+      action: { label: 'Open the layout', url: p.url },
+    },
+  );
+}

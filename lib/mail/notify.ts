@@ -1,0 +1,107 @@
+/**
+ * Sends the mail that goes with working with a client, after the change it reports has been
+ * stored: the invitation, a new revision (to the client), a decision (to the workshop), a new
+ * comment (to the other side). A mail that cannot be sent never undoes the change: the answer
+ * says `mail: 'not-sent'` and the server log says why.
+ * Must never include another studio's people, and never send a token to anyone but its invitee.
+ */
+import 'server-only';
+import type { Actor } from '@/db/actor';
+import type { IssuedInvitation } from '@/db/sharing/invitations';
+import { invitationPath, markInvitationSent } from '@/db/sharing/invitations';
+import type { RevisionDto } from '@/db/sharing/revisions';
+import type { ThreadDto } from '@/db/sharing/comments';
+import { layoutClient, revisionIssuerId, workshopFor, type Recipient } from '@/db/sharing/recipients';
+import { studioName } from '@/db/sharing/access';
+import { commentMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
+import { publicUrl } from './public-url';
+import { sendMail } from './transport';
+import type { ComposedMail } from './compose';
+
+export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
+
+async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail): Promise<MailOutcome> {
+  if (!to.length) return 'no-recipient';
+  let ok = true;
+  for (const r of to) {
+    try {
+      await sendMail({ ...build(r), to: r, studioId });
+    } catch (err) {
+      ok = false;
+      console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    }
+  }
+  return ok ? 'sent' : 'not-sent';
+}
+
+export async function sendInvitation(req: Request, actor: Actor, issued: IssuedInvitation): Promise<MailOutcome> {
+  let url: string;
+  try {
+    url = publicUrl(req, invitationPath(issued.token));
+  } catch (err) {
+    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    return 'not-sent';
+  }
+  const inv = issued.invitation;
+  const outcome = await deliver(actor.studioId, [{ email: inv.email, name: inv.name }], () =>
+    invitationMail({
+      clientName: inv.name, studioName: issued.studioName, inviterName: issued.inviterName, url,
+      expiresAt: new Date(inv.expiresAt), layoutName: inv.layout?.name ?? null,
+    }),
+  );
+  if (outcome === 'sent') await markInvitationSent(inv.id);
+  return outcome;
+}
+
+function linkOrNull(req: Request, path: string): string | null {
+  try {
+    return publicUrl(req, path);
+  } catch (err) {
+    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    return null;
+  }
+}
+
+export async function notifyRevisionIssued(req: Request, actor: Actor, layout: { id: string; name: string }, rev: RevisionDto): Promise<MailOutcome> {
+  const client = await layoutClient(layout.id);
+  if (!client) return 'no-recipient';
+  const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
+  if (!url) return 'not-sent';
+  const studio = await studioName(actor.studioId);
+  return deliver(actor.studioId, [client], (r) =>
+    revisionIssuedMail({ clientName: r.name, studioName: studio, layoutName: layout.name, letter: rev.letter, note: rev.note, url }),
+  );
+}
+
+export async function notifyDecision(req: Request, actor: Actor, layout: { id: string; name: string }, rev: RevisionDto): Promise<MailOutcome> {
+  const last = rev.decisions[rev.decisions.length - 1];
+  if (!last) return 'no-recipient';
+  const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
+  if (!url) return 'not-sent';
+  const to = await workshopFor(layout.id, [await revisionIssuerId(rev.id)]);
+  return deliver(actor.studioId, to, (r) =>
+    decisionMail({ recipientName: r.name, clientName: actor.name, layoutName: layout.name, letter: rev.letter, decision: last.decision, message: last.message, url }),
+  );
+}
+
+export async function notifyComment(
+  req: Request,
+  actor: Actor,
+  layout: { id: string; name: string; createdBy: string | null },
+  thread: ThreadDto,
+  reply: boolean,
+  threadAuthorId: string | null,
+): Promise<MailOutcome> {
+  const url = linkOrNull(req, `/layouts/${layout.id}?comment=${thread.id}`);
+  if (!url) return 'not-sent';
+  let to: Recipient[];
+  if (actor.role === 'client') {
+    to = await workshopFor(layout.id, [layout.createdBy, threadAuthorId !== actor.userId ? threadAuthorId : null]);
+  } else {
+    const client = await layoutClient(layout.id);
+    to = client ? [client] : [];
+  }
+  to = to.filter((r) => r.email.toLowerCase() !== actor.email.toLowerCase());
+  const body = reply ? thread.replies[thread.replies.length - 1]?.body ?? '' : thread.body;
+  return deliver(actor.studioId, to, (r) => commentMail({ recipientName: r.name, authorName: actor.name, layoutName: layout.name, body, reply, url }));
+}
