@@ -1,0 +1,35 @@
+/**
+ * Where each rule's numbers come from, as the strings a finding carries in `source`. Every value
+ * names its published source (standard and clause, handbook table, published chart) or says
+ * plainly that it is common practice or from memory; secondary citations are marked as such.
+ * Pure text; must never import UI, framework or database code.
+ */
+
+export interface Source {
+  /** The full citation, for `Finding.source`. */
+  cite: string;
+  /** A few words for the end of a message. */
+  brief: string;
+}
+
+export const SOURCES = {
+  /** Walkway / escape width default. */
+  walkwayMin: { brief: 'EN 1645-1 aisle width (secondary citation)', cite: 'EN 1645-1 (leisure accommodation vehicles, habitation requirements): 450 mm aisle and escape width — secondary citation, as quoted in trade literature; the standard text was not consulted (motor caravans: EN 1646-1, from memory)' },
+  walkwayComfort: { brief: 'Common practice, no source', cite: 'Common practice, no source: a comfortable walkway is 500–600 mm, i.e. at least the minimum plus 100 mm' },
+  armReach: { brief: 'Common practice, no source', cite: 'Common practice, no source: a person works a unit standing within 700 mm (arm’s reach) of its front, squarely in front of it' },
+  floorBlock: { brief: 'Common practice, no source', cite: 'Common practice, no source: anything with its underside below 1000 mm above the floor is in the way of feet and legs' },
+  headroom: { brief: 'Common practice, no source', cite: 'Common practice, no source: clear standing height = bare-metal height − floor build-up − roof build-up, compared with the tallest person’s stature plus a margin' },
+  headStrike: { brief: 'Common practice, no source', cite: 'Common practice, no source: a fixture whose underside is below the tallest person’s stature and that hangs over the walkway is a head strike' },
+  statureTables: { brief: 'Pheasant & Haslegrave, Bodyspace, Table 10.1 (secondary)', cite: 'Stature of British adults aged 19–65: Pheasant & Haslegrave, Bodyspace, 3rd ed. (2006), Table 10.1 (men 5th/50th/95th percentile 1625/1740/1855 mm, women 1505/1610/1710 mm), as reproduced by the City University of Hong Kong online anthropometry notes (secondary); shoe allowance 25 mm (men), from the same tables, from memory' },
+  bedLength: { brief: 'Common practice, no source', cite: 'Common practice, no source: a bed should be at least 100 mm longer than the tallest person sleeping in it' },
+  bedWidth: { brief: 'Common practice, no source', cite: 'Common practice, no source: about 600 mm of bed width per sleeper' },
+  bedLevel: { brief: 'Common practice, no source', cite: 'Common practice, no source: boards and cushions made up into one bed should sit level to within 20 mm; pieces closer than that in plan count as one bed and the mattress bridges the seam' },
+  mattressUk: { brief: 'Sizes from published UK bed size charts', cite: 'UK mattress sizes (single 90×190, small double 120×190, double 135×190, king 150×200, super king 180×200 cm) from published UK bed size charts, e.g. gnomon.org.uk/bed-sizes.html and barkerandstonehouse.co.uk/mattress-size-guide' },
+  mattressEu: { brief: 'Sizes from published European size charts', cite: 'Continental European mattress sizes (90, 140, 160, 180 × 200 cm) from published size charts, e.g. gnomon.org.uk/bed-sizes.html (no single standard fixes them)' },
+  mattressUs: { brief: 'Sizes from the Better Sleep Council chart, converted with convert-units', cite: 'US mattress sizes (twin 38×75, full 54×75, queen 60×80, king 76×80, California king 72×84 in) from the Better Sleep Council size chart, bettersleep.org/mattress-sizes; inches converted to millimetres with the convert-units library' },
+  egress: { brief: 'Common practice, no source', cite: 'Common practice, no source: from every bed a way out — the bed next to a door, or a clear corridor at least 400 mm wide to one; check your local rules for escape routes in habitation vehicles' },
+  seats: { brief: 'Common practice; follow your local vehicle rules', cite: 'Common practice: everyone travelling needs a belted seat. Seats used while driving must be type-approved and anchored as local vehicle rules require (in Europe UN ECE Regulations 14 (anchorages), 16 (belts) and 17 (seats) — from memory); have the fitting inspected by a qualified tester' },
+  geometry: { brief: 'Layout geometry, no outside source', cite: 'Layout geometry: the lined interior after wall and roof build-up (no outside source)' },
+  wheelArch: { brief: 'Layout geometry, no outside source', cite: 'Layout geometry: a module standing over a wheel arch must clear the arch box (no outside source; measure your own van’s arches)' },
+  overlap: { brief: 'Layout geometry, no outside source', cite: 'Layout geometry: two solid modules cannot share space (no outside source)' },
+} as const satisfies Record<string, Source>;

@@ -1,0 +1,150 @@
+/**
+ * Walkway rules, in the travel and lounge arrangements:
+ *   walkway.reach  a person (disk of diameter walkwayMin, EN 1645-1 450 mm — secondary citation)
+ *                  coming in at a door can stand squarely in front of every module worked from
+ *                  its front, within arm's reach (700 mm, common practice)
+ *   walkway.width  the narrowest corridor on the way: the widest disk, in whole mm, that still
+ *                  gets from a door to every module the walkway reaches; warns below
+ *                  walkwayMin + 100 mm (common practice 500–600 mm)
+ * Pure: must never import UI, framework or database code.
+ */
+import { widestRouteBounds, widestRouteIntoZone } from '../geometry';
+import type { Arrangement } from '../layout/schema';
+import { describeDoor, doorOpenings } from './bayModel';
+import type { CheckContext } from './context';
+import type { FloorAnalysis } from './floorAnalysis';
+import { listNames, mm, moduleName, plural } from './naming';
+import { RULE_CONSTANTS } from './settings';
+import { SOURCES } from './sources';
+import type { Finding } from './types';
+
+export const WALKWAY_ARRANGEMENTS: Arrangement[] = ['travel', 'lounge'];
+
+const reachSource = `${SOURCES.walkwayMin.cite}; ${SOURCES.armReach.cite}`;
+const reachBrief = 'Walkway width from EN 1645-1 (secondary citation); arm’s reach is common practice, no source';
+const widthSource = `${SOURCES.walkwayComfort.cite}; ${SOURCES.walkwayMin.cite}`;
+const widthBrief = 'Comfortable width is common practice, no source; minimum from EN 1645-1 (secondary citation)';
+
+export function walkwayReach(ctx: CheckContext, arrangement: Arrangement): Finding {
+  const { walkwayMin } = ctx.settings;
+  const a = ctx.floor(arrangement);
+  const total = a.targets.length;
+  if (!a.hasDoors) {
+    return { id: 'walkway.reach', status: 'warn', arrangement, measured: 0, required: 1, unit: 'doors', message: `No door opening is drawn in the bay, so the ${arrangement} walkway cannot be checked: add the sliding, side or rear door. ${reachBrief}.`, source: reachSource };
+  }
+  if (total === 0) {
+    return { id: 'walkway.reach', status: 'pass', arrangement, measured: 0, required: 0, unit: 'modules', message: `Nothing in the ${arrangement} arrangement is worked from its front, so no walkway is needed to reach it. ${reachBrief}.`, source: reachSource };
+  }
+  const missed = a.targets.filter((t) => !t.reached);
+  const reached = total - missed.length;
+  if (missed.length === 0) {
+    return {
+      id: 'walkway.reach',
+      status: 'pass',
+      arrangement,
+      moduleIds: a.targets.map((t) => t.module.id),
+      measured: reached,
+      required: total,
+      unit: 'modules',
+      message: `In ${arrangement}, a ${mm(walkwayMin)} walkway from a door reaches the front of all ${plural(total, 'module')} worked from the front, within ${mm(RULE_CONSTANTS.armReach)}. ${reachBrief}.`,
+      source: reachSource,
+    };
+  }
+  const entry = a.floor.anyEntry
+    ? ''
+    : ` No door lets a ${mm(walkwayMin)} person in at all (${listNames(doorOpenings(ctx.doc).map((d) => describeDoor(d.door)))}): each is narrower than that or blocked just inside.`;
+  return {
+    id: 'walkway.reach',
+    status: 'fail',
+    arrangement,
+    moduleIds: missed.map((t) => t.module.id),
+    measured: reached,
+    required: total,
+    unit: 'modules',
+    message: `In ${arrangement}, a person ${mm(walkwayMin)} wide coming in at a door cannot stand squarely in front of ${listNames(missed.map((t) => `${moduleName(t.module)} (facing ${t.module.facing})`))} within ${mm(RULE_CONSTANTS.armReach)}; ${reached} of ${total} can be reached.${entry} ${reachBrief}.`,
+    source: reachSource,
+  };
+}
+
+interface Probe {
+  ok: boolean;
+  cutOff: string[];
+}
+
+/**
+ * Largest whole-mm diameter D in [lo, hi] for which every target of `a` still connects to a door
+ * (the caller knows lo works). Each probe is a sweep; the first guess is the upper bound the
+ * walkway sweep already gives (the widest free span at each target), so the usual case costs two
+ * sweeps: the bound works, bound + 1 does not. Otherwise bisection in whole millimetres.
+ */
+function widestPassage(a: FloorAnalysis, lo: number, hi: number): { diameter: number; cutOff: string[] } {
+  const wanted = a.targets.filter((t) => t.reached);
+  const cache = new Map<number, Probe>();
+  const probe = (d: number): Probe => {
+    let p = cache.get(d);
+    if (!p) {
+      const floor = a.model.sweep(d / 2);
+      const cutOff = wanted.length === 0 ? [] : wanted.filter((t) => !floor.reachesZone(t.zone)).map((t) => moduleName(t.module));
+      p = { ok: wanted.length === 0 ? floor.anyEntry : cutOff.length === 0, cutOff };
+      cache.set(d, p);
+    }
+    return p;
+  };
+  const routes = widestRouteBounds(a.floor);
+  let bound = hi;
+  if (wanted.length === 0) {
+    for (let i = 0; i < routes.length; i++) if (a.floor.entryWidth[i] > 0) bound = Math.max(lo, Math.min(hi, Math.floor(routes[i])));
+  }
+  for (const t of wanted) bound = Math.min(bound, Math.floor(widestRouteIntoZone(a.floor, routes, t.zone)));
+  bound = Math.max(lo, bound);
+
+  let good = lo;
+  let bad = hi + 1;
+  if (probe(bound).ok) {
+    good = bound;
+    // Gallop upwards in case the bound was not tight (it can miss a span between sweep columns).
+    for (let step = 1; good < hi; step *= 2) {
+      const next = Math.min(hi, good + step);
+      if (probe(next).ok) good = next;
+      else {
+        bad = next;
+        break;
+      }
+    }
+  } else {
+    bad = bound;
+  }
+  while (bad - good > 1) {
+    const mid = Math.floor((good + bad) / 2);
+    if (probe(mid).ok) good = mid;
+    else bad = mid;
+  }
+  return { diameter: good, cutOff: bad <= hi ? probe(bad).cutOff : [] };
+}
+
+export function walkwayWidth(ctx: CheckContext, arrangement: Arrangement): Finding {
+  const { walkwayMin } = ctx.settings;
+  const comfortable = walkwayMin + RULE_CONSTANTS.walkwayComfortExtra;
+  const a = ctx.floor(arrangement);
+  const base = { id: 'walkway.width', arrangement, required: comfortable, unit: 'mm', source: widthSource } as const;
+  if (!a.hasDoors) {
+    return { ...base, status: 'warn', measured: 0, message: `No door opening is drawn in the bay, so the ${arrangement} walkway width cannot be measured: add the doors. ${widthBrief}.` };
+  }
+  const anyReached = a.targets.some((t) => t.reached);
+  if (!a.floor.anyEntry || (a.targets.length > 0 && !anyReached)) {
+    return { ...base, status: 'warn', measured: 0, message: `In ${arrangement} there is no walkway at least ${mm(walkwayMin)} wide leading in from a door, so its width is 0 mm; a comfortable walkway is ${mm(comfortable)}. ${widthBrief}.` };
+  }
+  const doors = ctx.doc.bay.doors;
+  const { t } = ctx;
+  const hi = Math.floor(Math.min(ctx.doc.bay.width - 2 * t.wallT, ctx.doc.bay.length, Math.max(...doors.map((d) => d.width))));
+  const { diameter, cutOff } = widestPassage(a, walkwayMin, Math.max(hi, walkwayMin));
+  const what = anyReached ? 'every module the walkway reaches' : 'inside from a door';
+  const squeeze = cutOff.length > 0 ? ` The squeeze is at or on the way to ${listNames(cutOff)}.` : '';
+  const ok = diameter >= comfortable;
+  return {
+    ...base,
+    status: ok ? 'pass' : 'warn',
+    measured: diameter,
+    message: `The narrowest part of the ${arrangement} walkway is ${mm(diameter)} (the widest person who still gets ${what}); ${ok ? 'at least' : 'below'} the comfortable ${mm(comfortable)} (minimum ${mm(walkwayMin)} + 100 mm).${squeeze} ${widthBrief}.`,
+  };
+}
