@@ -2,7 +2,7 @@ import { handle, HttpError, invalid, json, readJson, requireActor } from '@/lib/
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { runChecks } from '@/lib/checks';
-import { studioCheckDefaults, withStudioDefaults } from '@/db/studios';
+import { studioCheckDefaults } from '@/db/studios';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,5 +18,5 @@ export const POST = handle(async (req) => {
   }
   const parsed = parseLayoutDoc(await readJson(req));
   if (!parsed.ok) throw invalid(parsed.issues);
-  return json(runChecks(withStudioDefaults(parsed.value, await studioCheckDefaults(actor))));
+  return json(runChecks(parsed.value, { studioDefaults: await studioCheckDefaults(actor) }));
 });
