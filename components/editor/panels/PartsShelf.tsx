@@ -7,19 +7,10 @@
 import { useMemo, useState } from 'react';
 import { Search } from 'lucide-react';
 import { toast } from 'sonner';
-import { KIND_LIST, formatLength, type KindSpec, type MaterialFamily } from '@/lib/layout';
+import { formatLength, type KindSpec, type MaterialFamily } from '@/lib/layout';
+import { matchKinds } from './partsSearch';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
-
-export function matchKinds(query: string, kinds: KindSpec[] = KIND_LIST): KindSpec[] {
-  const q = query.trim().toLowerCase();
-  if (!q) return kinds;
-  const words = q.split(/\s+/);
-  return kinds.filter((k) => {
-    const hay = [k.title, k.kind, ...k.keywords, k.family].join(' ').toLowerCase();
-    return words.every((w) => hay.includes(w));
-  });
-}
 
 const FAMILY_SWATCH: Record<MaterialFamily, string> = {
   timber: 'repeating-linear-gradient(135deg, #8A969B 0 1px, transparent 1px 5px)',

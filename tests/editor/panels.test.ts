@@ -1,0 +1,77 @@
+import { describe, expect, it } from 'vitest';
+import { matchKinds } from '@/components/editor/panels/partsSearch';
+import { formValuesOf, moduleFormSchema, patchFrom } from '@/components/editor/panels/moduleForm';
+import { countByStatus, failingModuleIds, groupFindings } from '@/components/editor/panels/findingGroups';
+import { KIND_LIST } from '@/lib/layout';
+import type { Finding } from '@/lib/checks/types';
+import { mod } from './harness';
+
+describe('Parts shelf', () => {
+  it('offers at least the 18 kinds the brief lists, each with a size and mass', () => {
+    const needed = ['bed-platform', 'bench-seat', 'bed-infill', 'table', 'kitchen-counter', 'sink-unit', 'hob', 'fridge', 'wardrobe', 'drawer-unit', 'overhead-locker', 'fresh-water-tank', 'grey-water-tank', 'gas-locker', 'electrics-bay', 'heater', 'toilet-cabinet', 'shower-tray', 'step'];
+    const kinds = KIND_LIST.map((k) => k.kind);
+    for (const k of needed) expect(kinds).toContain(k);
+    for (const k of KIND_LIST) expect(k.length > 0 && k.width > 0 && k.massKg > 0).toBe(true);
+  });
+
+  it('searches titles and trade words; every word must match', () => {
+    expect(matchKinds('tank').map((k) => k.kind).sort()).toEqual(['fresh-water-tank', 'grey-water-tank']);
+    expect(matchKinds('grey tank').map((k) => k.kind)).toEqual(['grey-water-tank']);
+    expect(matchKinds('cylinder').map((k) => k.kind)).toEqual(['gas-locker']);
+    expect(matchKinds('  ').length).toBe(KIND_LIST.length);
+    expect(matchKinds('spaceship')).toEqual([]);
+  });
+});
+
+describe('Details form model', () => {
+  const m = mod('a', { x: 1000, y: 36, length: 1100, width: 550, massKg: 22 });
+
+  it('shows lengths in the person’s units and reads any unit back as whole mm', () => {
+    const v = formValuesOf(m, 'cm');
+    expect(v.x).toBe('100');
+    const parsed = moduleFormSchema('cm').safeParse({ ...v, x: '1205 mm', length: '43.3 in', width: '55' });
+    expect(parsed.success).toBe(true);
+    if (!parsed.success) return;
+    // 43.3 in is 1099.8 mm -> 1100 (unchanged); 55 cm is 550 mm (unchanged): only x moves.
+    expect(patchFrom(m, parsed.data)).toEqual({ x: 1205 });
+  });
+
+  it('only changed fields go into the patch', () => {
+    const v = formValuesOf(m, 'mm');
+    const parsed = moduleFormSchema('mm').parse({ ...v, x: '1010', label: 'Lounge bench' });
+    expect(patchFrom(m, parsed)).toEqual({ x: 1010, label: 'Lounge bench' });
+  });
+
+  it('refuses text that is not a length, a zero height, no arrangement, a silly mass', () => {
+    const v = formValuesOf(m, 'mm');
+    const bad = moduleFormSchema('mm').safeParse({ ...v, x: 'twelve', height: '0', arrangements: [], massKg: '-3' });
+    expect(bad.success).toBe(false);
+    if (bad.success) return;
+    const paths = bad.error.issues.map((i) => i.path.join('.'));
+    expect(paths).toEqual(expect.arrayContaining(['x', 'height', 'arrangements', 'massKg']));
+  });
+
+  it('numeric props stay numbers, text props text, an emptied mass clears it', () => {
+    const fridge = mod('f', { kind: 'fridge', props: { litres: 49, watts: 45, dutyCycle: 0.33 }, massKg: 18 });
+    const v = formValuesOf(fridge, 'mm');
+    const out = moduleFormSchema('mm').parse({ ...v, props: { ...v.props, litres: '40' }, massKg: '' });
+    expect(patchFrom(fridge, out)).toEqual({ props: { litres: 40, watts: 45, dutyCycle: 0.33 }, massKg: undefined });
+  });
+});
+
+describe('Checks grouping', () => {
+  const f = (id: string, status: Finding['status'], arrangement?: Finding['arrangement'], moduleIds?: string[]): Finding => ({ id, status, arrangement, moduleIds, message: id });
+  const findings = [f('fit.inside', 'fail', undefined, ['a']), f('sleep.length', 'fail', 'sleep', ['bed']), f('walkway.width', 'warn', 'lounge'), f('headroom.standing', 'pass')];
+
+  it('groups by arrangement (whole layout first) then status, fail before warn before pass', () => {
+    const g = groupFindings(findings);
+    expect(g.map((x) => x.arrangement)).toEqual(['all', 'lounge', 'sleep']);
+    expect(g[0].byStatus.map((b) => b.status)).toEqual(['fail', 'pass']);
+    expect(countByStatus(findings)).toEqual({ fail: 2, warn: 1, pass: 1 });
+  });
+
+  it('outlines only modules failing in the arrangement on show or layout-wide', () => {
+    expect(failingModuleIds(findings, 'lounge')).toEqual(['a']);
+    expect(failingModuleIds(findings, 'sleep').sort()).toEqual(['a', 'bed']);
+  });
+});
