@@ -1,0 +1,29 @@
+import { z } from 'zod';
+import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { createInvitation, listInvitations } from '@/db/sharing/invitations';
+import { requireEditor } from '@/db/sharing/access';
+import { sendInvitation } from '@/lib/mail/notify';
+
+export const dynamic = 'force-dynamic';
+
+const inviteBody = z.strictObject({
+  email: z.email('enter a valid e-mail address').max(254),
+  name: z.string().trim().min(1, 'give the client’s name').max(80),
+  layoutId: z.uuid('choose one of this studio’s layouts').nullable().optional(),
+});
+
+/** The studio's invitations and their state (owners and designers). */
+export const GET = handle(async (req) => {
+  const actor = await requireActor(req);
+  return json({ invitations: await listInvitations(actor) });
+});
+
+/** Invites a client by mail: the link lets them set a password and join as a client. */
+export const POST = handle(async (req) => {
+  const actor = await requireActor(req);
+  requireEditor(actor, 'invite clients');
+  const body = parseWith(inviteBody, await readJson(req, 16 * 1024));
+  const issued = await createInvitation(actor, body);
+  const mail = await sendInvitation(req, actor, issued);
+  return json({ invitation: issued.invitation, mail }, { status: 201 });
+});
