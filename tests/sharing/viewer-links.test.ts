@@ -15,6 +15,7 @@ import * as viewerVersion from '@/app/api/v/[token]/version/route';
 import { viewerLinks } from '@/db/schema';
 import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import type { Db } from '@/db/client';
+import type { LayoutDoc } from '@/lib/layout/schema';
 import type { FakeSmtp } from '@/lib/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
@@ -45,7 +46,7 @@ async function open(token: string) {
   return call(viewer.GET, { params: { token } });
 }
 
-async function save(layoutId: string, change: (doc: any) => void) {
+async function save(layoutId: string, change: (doc: LayoutDoc) => void) {
   const cur = await call(layoutRoute.GET, { params: { id: layoutId }, as: w.designer });
   const doc = structuredClone(cur.body.doc);
   change(doc);
