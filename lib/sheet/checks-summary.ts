@@ -1,0 +1,56 @@
+/**
+ * The check summary on the sheet: counts by status, then every finding — failures first — with
+ * its status in words and a mark (never colour alone), the arrangement, what was measured and
+ * needed, and where the rule comes from. When the checks could not run, the sheet says so
+ * plainly instead of showing an empty list. Pure.
+ */
+import type { CheckReport, Finding, FindingStatus } from '../checks/types';
+import type { ColumnFlow } from './flow';
+import { TYPE } from './drafting';
+import type { Ink, SheetItem } from './primitives';
+import { lineHeight, wrap } from './typography';
+
+const ORDER: FindingStatus[] = ['fail', 'warn', 'pass'];
+const WORD: Record<FindingStatus, string> = { fail: 'FAIL', warn: 'WARN', pass: 'PASS' };
+const MARK: Record<FindingStatus, string> = { fail: 'x', warn: '!', pass: '+' };
+const INK: Record<FindingStatus, Ink> = { fail: 'brick', warn: 'ochre', pass: 'moss' };
+
+export function sortFindings(findings: Finding[]): Finding[] {
+  return [...findings].sort((a, b) => ORDER.indexOf(a.status) - ORDER.indexOf(b.status) || a.id.localeCompare(b.id));
+}
+
+export function countByStatus(findings: Finding[]): Record<FindingStatus, number> {
+  const counts = { fail: 0, warn: 0, pass: 0 };
+  for (const f of findings) counts[f.status] += 1;
+  return counts;
+}
+
+export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavailable?: string): void {
+  const size = TYPE.label;
+  const lh = lineHeight(size);
+  flow.place(8, (x, y) => [{ type: 'text', x, y: y + 5, text: 'Checks', size: TYPE.heading, font: 'sans-bold' }], lh * 4);
+  if (!report) {
+    const lines = wrap(`The checks could not be run for this sheet${unavailable ? `: ${unavailable}` : ''}. Open the layout in the editor to see them, and do not build from this sheet until they have been read.`, size, flow.columnWidth);
+    flow.place(lines.length * lh + 2, (x, y) => lines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, ink: 'brick' })));
+    return;
+  }
+  const counts = countByStatus(report.findings);
+  const summary = `${counts.fail} failing, ${counts.warn} to watch, ${counts.pass} passing${report.ok ? ' — nothing fails.' : ' — resolve every failure before building.'}`;
+  flow.place(lh + 2, (x, y) => [{ type: 'text', x, y: y + lh, text: summary, size, font: 'sans-bold' }]);
+  if (report.findings.length === 0) {
+    flow.place(lh, (x, y) => [{ type: 'text', x, y: y + lh, text: 'The checks found nothing to report.', size, ink: 'soft' }]);
+    return;
+  }
+  for (const f of sortFindings(report.findings)) {
+    const head = [`${MARK[f.status]} ${WORD[f.status]}`, f.arrangement, f.id].filter(Boolean).join(' · ');
+    const body = wrap(f.message, size, flow.columnWidth - 3);
+    const source = f.source ? wrap(`Source: ${f.source}`, TYPE.small, flow.columnWidth - 3) : [];
+    const height = lh * (1 + body.length) + lineHeight(TYPE.small) * source.length + 1.6;
+    flow.place(height, (x, y) => {
+      const items: SheetItem[] = [{ type: 'text', x, y: y + lh, text: head, size, font: 'sans-bold', ink: INK[f.status] }];
+      body.forEach((t, i) => items.push({ type: 'text', x: x + 3, y: y + lh * (i + 2), text: t, size }));
+      source.forEach((t, i) => items.push({ type: 'text', x: x + 3, y: y + lh * (body.length + 1) + lineHeight(TYPE.small) * (i + 1), text: t, size: TYPE.small, ink: 'soft' }));
+      return items;
+    });
+  }
+}

@@ -1,0 +1,185 @@
+/**
+ * The dimensioned plan of one arrangement, drawn to scale for the sheet: bare metal as a heavy
+ * line with door openings as gaps, the wall build-up band lightly hatched, wheel arches
+ * cross-hatched, each module in its material family's hatching with its schedule number, the
+ * overall length and width as dimension strings, and the cab marked at the front. Cab on the
+ * left, x rearwards to the right, the left wall at the top (as in the editor).
+ * Pure: a document in, sheet items out; must never render or measure the page.
+ */
+import { kindSpec, formatLength, type Arrangement, type LayoutDoc, type LengthUnit, type Module } from '../layout';
+import { dimension, hatch, LINE, stipple, TYPE } from './drafting';
+import { onPaper } from './paper';
+import type { SheetItem } from './primitives';
+import { fit } from './typography';
+
+/** Paper space around the bay for dimension strings (left, top) and the caption (bottom). */
+export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
+
+export const ARRANGEMENT_CAPTION: Record<Arrangement, string> = {
+  travel: 'Travel: driving, belted seats in use',
+  lounge: 'Lounge: parked, daytime',
+  sleep: 'Sleep: beds made up',
+};
+
+export function planSize(doc: LayoutDoc, scale: number): { width: number; height: number } {
+  return {
+    width: PLAN_MARGIN.left + onPaper(doc.bay.length, scale) + PLAN_MARGIN.right,
+    height: PLAN_MARGIN.top + onPaper(doc.bay.width, scale) + PLAN_MARGIN.bottom,
+  };
+}
+
+export function thickness(layers: { thickness: number }[]): number {
+  return layers.reduce((sum, l) => sum + l.thickness, 0);
+}
+
+/** Schedule numbers: the module's position in the document, from 1, so plan and table agree. */
+export function scheduleNumbers(doc: LayoutDoc): Map<string, number> {
+  return new Map(doc.modules.map((m, i) => [m.id, i + 1]));
+}
+
+export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, oy: number, scale: number, units: LengthUnit): SheetItem[] {
+  const { bay } = doc;
+  const s = (mm: number) => onPaper(mm, scale);
+  const bx = ox + PLAN_MARGIN.left;
+  const by = oy + PLAN_MARGIN.top;
+  const L = s(bay.length);
+  const W = s(bay.width);
+  const wallT = s(thickness(doc.buildUp.walls));
+  const items: SheetItem[] = [];
+
+  // Build-up band along both side walls (the lined interior runs from wallT to width − wallT).
+  if (wallT > 0) {
+    for (const y of [by, by + W - wallT]) {
+      items.push(...hatch(bx, y, L, wallT, 0.9, 45, 'faint'));
+      items.push({ type: 'rect', x: bx, y, w: L, h: wallT, stroke: 'soft', width: LINE.hair });
+    }
+  }
+
+  // Wheel arches, cross-hatched.
+  for (const arch of bay.wheelArches) {
+    const y = arch.side === 'left' ? by : by + W - s(arch.width);
+    const x = bx + s(arch.x);
+    items.push(...hatch(x, y, s(arch.length), s(arch.width), 1.2, 45, 'soft'), ...hatch(x, y, s(arch.length), s(arch.width), 1.2, -45, 'soft'));
+    items.push({ type: 'rect', x, y, w: s(arch.length), h: s(arch.width), stroke: 'ink', width: LINE.thin });
+  }
+
+  // Modules present in this arrangement.
+  const numbers = scheduleNumbers(doc);
+  // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top.
+  const present = doc.modules.filter((m) => m.arrangements.includes(arrangement)).sort((a, b) => a.elevation - b.elevation);
+  for (const m of present) {
+    items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0));
+  }
+
+  // Bare metal: heavy outline with the door openings left as gaps.
+  items.push(...bareMetal(doc, bx, by, L, W, s));
+
+  // Cab arrow at the front.
+  items.push(
+    { type: 'polygon', points: [[bx - 7.5, by + W / 2], [bx - 4.5, by + W / 2 - 1.6], [bx - 4.5, by + W / 2 + 1.6]], fill: 'ink' },
+    { type: 'text', x: bx - 6, y: by + W / 2 + 4.5, text: 'cab', size: TYPE.small, align: 'center', ink: 'soft' },
+  );
+
+  // Overall dimensions: length above, width at the left.
+  items.push(...dimension({ from: [bx, by], to: [bx + L, by], offset: 7, text: formatLength(bay.length, units), tag: `dimension:bay-length:${arrangement}` }));
+  items.push(...dimension({ from: [bx, by], to: [bx, by + W], offset: 9, text: formatLength(bay.width, units), tag: `dimension:bay-width:${arrangement}` }));
+
+  // Caption.
+  const count = doc.modules.filter((m) => m.arrangements.includes(arrangement)).length;
+  items.push({ type: 'text', x: bx, y: by + W + 6.5, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
+  items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
+  return items;
+}
+
+function bareMetal(doc: LayoutDoc, bx: number, by: number, L: number, W: number, s: (mm: number) => number): SheetItem[] {
+  const items: SheetItem[] = [];
+  const gaps = (wall: 'left' | 'right' | 'rear') => doc.bay.doors.filter((d) => d.wall === wall).map((d) => [s(d.offset), s(d.offset + d.width)] as [number, number]);
+  const run = (length: number, cuts: [number, number][], seg: (a: number, b: number) => void) => {
+    let at = 0;
+    for (const [a, b] of [...cuts].sort((p, q) => p[0] - q[0])) {
+      if (a > at) seg(at, a);
+      at = Math.max(at, b);
+    }
+    if (at < length) seg(at, length);
+  };
+  const heavy = (x1: number, y1: number, x2: number, y2: number) => items.push({ type: 'line', x1, y1, x2, y2, width: LINE.heavy, ink: 'ink' });
+  run(L, gaps('left'), (a, b) => heavy(bx + a, by, bx + b, by));
+  run(L, gaps('right'), (a, b) => heavy(bx + a, by + W, bx + b, by + W));
+  run(W, gaps('rear'), (a, b) => heavy(bx + L, by + a, bx + L, by + b));
+  // The front: a bulkhead is a wall; an open cab end is drawn dashed.
+  items.push({ type: 'line', x1: bx, y1: by, x2: bx, y2: by + W, width: doc.bay.bulkhead ? LINE.heavy : LINE.thin, ink: 'ink', dash: doc.bay.bulkhead ? undefined : [1.5, 1] });
+  // Door marks: a sliding door's track outside its wall; a rear door's two leaves swung open.
+  for (const d of doc.bay.doors) {
+    const a = s(d.offset);
+    const b = s(d.offset + d.width);
+    if (d.wall === 'left' || d.wall === 'right') {
+      const y = d.wall === 'left' ? by - 1.2 : by + W + 1.2;
+      items.push({ type: 'line', x1: bx + a, y1: y, x2: bx + b, y2: y, width: LINE.thin, ink: 'soft', dash: [1.2, 0.8] });
+      items.push({ type: 'line', x1: bx + a, y1: d.wall === 'left' ? by : by + W, x2: bx + a, y2: y, width: LINE.thin, ink: 'soft' });
+    } else {
+      // Two leaves hinged at the ends of the opening, drawn ajar: a short swing mark each.
+      const mid = (a + b) / 2;
+      for (const [hinge, toward] of [[a, mid], [b, mid]] as [number, number][]) {
+        const mark = Math.min(Math.abs(toward - hinge) * 0.4, 4.5);
+        const dir = Math.sign(toward - hinge);
+        items.push({ type: 'line', x1: bx + L, y1: by + hinge, x2: bx + L + mark * 0.8, y2: by + hinge + dir * mark * 0.6, width: LINE.thin, ink: 'soft' });
+      }
+    }
+  }
+  return items;
+}
+
+function drawModule(m: Module, x: number, y: number, w: number, h: number, number: number): SheetItem[] {
+  const family = kindSpec(m.kind).family;
+  if (m.elevation >= 1000) {
+    // Hangs overhead: outline only, dashed, so what stands below stays readable.
+    return [
+      { type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.thin, dash: [1.2, 0.8] },
+      { type: 'text', x: x + 0.8, y: y + 2.6, text: String(number), size: TYPE.small, font: 'sans-bold', ink: 'soft' },
+    ];
+  }
+  const items: SheetItem[] = [{ type: 'rect', x, y, w, h, fill: 'white' }];
+  switch (family) {
+    case 'timber':
+      items.push(...hatch(x, y, w, h, 1.4, 45, 'faint'));
+      break;
+    case 'upholstery':
+      items.push(...stipple(x, y, w, h, 2.4));
+      break;
+    case 'water':
+      // The fill line at the tank's level (two thirds full as drawn).
+      items.push({ type: 'line', x1: x + 0.4, y1: y + h / 3, x2: x + w - 0.4, y2: y + h / 3, width: LINE.thin, ink: 'soft' });
+      items.push(...hatch(x, y + h / 3, w, (h * 2) / 3, 1.6, 0, 'faint'));
+      break;
+    case 'sanitary':
+      items.push({ type: 'rect', x: x + Math.min(1, w / 6), y: y + Math.min(1, h / 6), w: w - 2 * Math.min(1, w / 6), h: h - 2 * Math.min(1, h / 6), stroke: 'soft', width: LINE.hair });
+      break;
+    case 'appliance':
+      items.push({ type: 'line', x1: x, y1: y, x2: x + w, y2: y + h, width: LINE.hair, ink: 'faint' }, { type: 'line', x1: x + w, y1: y, x2: x, y2: y + h, width: LINE.hair, ink: 'faint' });
+      break;
+    default:
+      break;
+  }
+  if (family === 'electrics') items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: [0.4, 0.6] });
+  else items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
+  if (family === 'gas' && w > 1.6 && h > 1.6) items.push({ type: 'rect', x: x + 0.6, y: y + 0.6, w: w - 1.2, h: h - 1.2, stroke: 'ink', width: LINE.thin });
+  items.push(...numberTag(m, x, y, w, h, number));
+  return items;
+}
+
+/** Schedule number in a white tag, and a short label when there is room. */
+function numberTag(m: Module, x: number, y: number, w: number, h: number, number: number): SheetItem[] {
+  const items: SheetItem[] = [];
+  const tag = String(number);
+  const cx = x + w / 2;
+  const cy = y + h / 2;
+  if (w >= 4 && h >= 3.5) {
+    items.push({ type: 'rect', x: cx - 2.4, y: cy - 2.2, w: 4.8, h: 3.2, fill: 'white', stroke: 'ink', width: LINE.hair });
+    items.push({ type: 'text', x: cx, y: cy + 0.2, text: tag, size: TYPE.small, font: 'sans-bold', align: 'center' });
+    const label = fit(m.label ?? kindSpec(m.kind).title, TYPE.small, w - 1.5);
+    if (h >= 9 && label) items.push({ type: 'text', x: cx, y: cy + 3.8, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
+  } else {
+    items.push({ type: 'text', x: x + w + 0.6, y: y + 2, text: tag, size: TYPE.small, font: 'sans-bold' });
+  }
+  return items;
+}

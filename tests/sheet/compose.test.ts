@@ -1,0 +1,159 @@
+// Laying out the plan sheet: what fits where, what is suggested when it does not, and that every
+// required part (plans, section, schedule, checks with sources, cautions, title block) is there.
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { composeSheet, fitOf, renderPdf, suggestFit, type SheetRequest } from '@/lib/sheet';
+import { printable, textWidth, wrap } from '@/lib/sheet/typography';
+import { starterLayout, bayTemplate, emptyLayout, type LayoutDoc } from '@/lib/layout';
+import type { CheckReport } from '@/lib/checks/types';
+
+const lounge = starterLayout('starter-l-lounge')!;
+const details = { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: 'Nair — L2H2 weekender', revision: 'B', date: '2025-12-02' };
+const report: CheckReport = {
+  ok: false,
+  findings: [
+    { id: 'sleep.length', status: 'fail', arrangement: 'sleep', measured: 1850, required: 1900, unit: 'mm', message: 'Bed 1850 mm long; needs 1900 mm for the tallest sleeper (1800 mm + 100 mm).', source: 'Common practice, no source' },
+    { id: 'headroom.standing', status: 'pass', measured: 1910, required: 1800, unit: 'mm', message: 'Clear standing height 1910 mm ≥ 1800 mm.', source: 'Common practice, no source' },
+    { id: 'walkway.width', status: 'warn', arrangement: 'lounge', message: 'Narrowest corridor 480 mm.', source: 'EN 1645-1 (secondary citation)' },
+  ],
+};
+
+function request(over: Partial<SheetRequest> = {}): SheetRequest {
+  return { doc: lounge, report, paper: 'a4', scale: 20, units: 'mm', details, ...over };
+}
+
+function textsOf(page: { items: { type: string }[] }): string[] {
+  return page.items.filter((i): i is { type: 'text'; text: string } => i.type === 'text').map((i) => i.text);
+}
+
+function bay(length: number, width: number, height: number): LayoutDoc {
+  return emptyLayout('Big', { length, width, height, wheelArches: [], doors: [], bulkhead: true, cabSeats: 2 });
+}
+
+describe('fitting the bay to the paper', () => {
+  it('fits an L2H2 bay on A4 at 1:20 and 1:25 but not at 1:10 (177 mm of plan height + dimensions > 158 mm)', () => {
+    expect(fitOf(lounge, 'a4', 20).fits).toBe(true);
+    expect(fitOf(lounge, 'a4', 25).fits).toBe(true);
+    const tight = fitOf(lounge, 'a4', 10);
+    expect(tight.fits).toBe(false);
+    expect(tight.available).toEqual({ width: 269, height: 158 });
+  });
+
+  it('says so clearly and suggests 1:20 on A4 for an L2H2 bay at 1:10', () => {
+    const r = composeSheet(request({ scale: 10 }));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.message).toMatch(/does not fit on A4 landscape at 1:10/);
+    expect(r.message).toMatch(/3100 × 1770 mm/);
+    expect(r.message).toMatch(/Choose 1:20 on A4/);
+    expect(r.suggestion).toEqual({ paper: 'a4', scale: 20 });
+  });
+
+  it('suggests A3 when no scale fits on A4 (a 7 m bay), and nothing for a 12 m one', () => {
+    expect(suggestFit(bay(7000, 2000, 2500), 'a4')).toEqual({ paper: 'a3', scale: 20 });
+    const r = composeSheet(request({ doc: bay(7000, 2000, 2500), scale: 25 }));
+    expect(!r.ok && r.message).toMatch(/No scale fits on A4; choose 1:20 on A3/);
+    const huge = composeSheet(request({ doc: bay(12000, 2500, 3000), paper: 'a3', scale: 25 }));
+    expect(huge.ok).toBe(false);
+    if (!huge.ok) {
+      expect(huge.suggestion).toBeNull();
+      expect(huge.message).toMatch(/None of 1:10, 1:20 or 1:25 fits/);
+    }
+  });
+
+  it('puts all three plans and the section on one A3 page at 1:20, one per page on A4', () => {
+    const a3 = composeSheet(request({ paper: 'a3' }));
+    const a4 = composeSheet(request());
+    expect(a3.ok && a3.figurePages).toBe(1);
+    expect(a4.ok && a4.figurePages).toBe(4);
+  });
+
+  it('fits a long L4H3 bay at 1:20 on A4', () => {
+    const l4 = emptyLayout('L4', bayTemplate('l4h3')!.bay);
+    expect(composeSheet(request({ doc: l4 })).ok).toBe(true);
+  });
+});
+
+describe('what the sheet holds', () => {
+  const r = composeSheet(request({ paper: 'a3' }));
+  if (!r.ok) throw new Error(r.message);
+  const all = r.sheet.pages.flatMap(textsOf).join('\n');
+
+  it('has a plan per arrangement and the side section', () => {
+    for (const caption of ['Travel: driving, belted seats in use', 'Lounge: parked, daytime', 'Sleep: beds made up', 'Side section along the length']) expect(all).toContain(caption);
+    const tags = r.sheet.pages[0].items.filter((i) => i.type === 'line' && i.tag).map((i) => (i as { tag: string }).tag);
+    expect(tags).toEqual(expect.arrayContaining(['dimension:bay-length:travel', 'dimension:bay-length:lounge', 'dimension:bay-length:sleep', 'dimension:clear-height']));
+  });
+
+  it('puts the title block on every page, with the sheet number', () => {
+    r.sheet.pages.forEach((page, i) => {
+      const t = textsOf(page);
+      expect(t).toEqual(expect.arrayContaining(['Saltmarsh Van Works', 'Nair — L2H2 weekender', 'Priya Nair', 'B', '2025-12-02', '1:20', 'millimetres (mm)', `${i + 1} of ${r.sheet.pages.length} · A3`]));
+    });
+  });
+
+  it('says "working copy" when there is no revision letter, and names a missing client', () => {
+    const w = composeSheet(request({ details: { ...details, revision: null, client: null } }));
+    if (!w.ok) throw new Error(w.message);
+    expect(textsOf(w.sheet.pages[0])).toEqual(expect.arrayContaining(['Working copy', 'No client named']));
+  });
+
+  it('lists every module in the schedule with kind, size, elevation and mass', () => {
+    expect(all).toContain('Module schedule');
+    for (const [i, m] of lounge.modules.entries()) {
+      expect(all).toContain(`${m.length} × ${m.width} × ${m.height}`);
+      expect(all.split('\n')).toContain(String(i + 1));
+    }
+    expect(all).toContain(`${lounge.modules.length} modules`);
+  });
+
+  it('shows the check summary, failures first, with each status in words and each source', () => {
+    expect(all).toContain('1 failing, 1 to watch, 1 passing');
+    const fail = all.indexOf('x FAIL · sleep · sleep.length');
+    const warn = all.indexOf('! WARN · lounge · walkway.width');
+    const pass = all.indexOf('+ PASS · headroom.standing');
+    expect(fail).toBeGreaterThan(-1);
+    expect(fail).toBeLessThan(warn);
+    expect(warn).toBeLessThan(pass);
+    expect(all).toContain('Source: EN 1645-1 (secondary citation)');
+    expect(all).toContain('Clear standing height 1910 mm >= 1800 mm.');
+  });
+
+  it('carries the safety cautions for gas, 230 V, heating, seats and belts, weight limits', () => {
+    for (const topic of ['Safety cautions', 'Gas', '230 V', 'Heating', 'Seats and belts', 'Weight limits']) expect(all.split('\n')).toContain(topic);
+    expect(all).toMatch(/local/);
+  });
+
+  it('says plainly when the checks could not run', () => {
+    const none = composeSheet(request({ report: null, checksUnavailable: 'the check engine is not available' }));
+    if (!none.ok) throw new Error(none.message);
+    const text = none.sheet.pages.flatMap(textsOf).join(' ');
+    expect(text).toMatch(/The checks could not be run for this sheet: the check engine is not available/);
+  });
+
+  it('writes dimensions in the studio’s units', () => {
+    const inches = composeSheet(request({ units: 'in', paper: 'a3' }));
+    if (!inches.ok) throw new Error(inches.message);
+    const t = inches.sheet.pages[0].items.filter((i) => i.type === 'text').map((i) => (i as { text: string }).text);
+    expect(t).toContain('122.05 in'); // 3100 mm / 25.4
+    expect(inches.sheet.pages.flatMap(textsOf)).toContain('inches (in)');
+  });
+});
+
+describe('text for the standard fonts', () => {
+  it('spells out symbols the standard fonts lack and never throws on any text (property)', async () => {
+    expect(printable('≤ 5 → 6 λ')).toBe('<= 5 -> 6 lambda ');
+    fc.assert(fc.property(fc.string({ unit: 'grapheme', maxLength: 60 }), (s) => {
+      const p = printable(s);
+      expect(typeof textWidth(p, 8)).toBe('number');
+      for (const line of wrap(s, 8, 30)) expect(textWidth(line, 8)).toBeLessThanOrEqual(30 + 1e-9);
+    }), { numRuns: 200 });
+  });
+
+  it('renders a sheet whose names use scripts the fonts cannot show', async () => {
+    const r = composeSheet(request({ details: { ...details, client: '山田 花子', layout: 'Ferienbus „Möwe“ ✓' } }));
+    if (!r.ok) throw new Error(r.message);
+    const bytes = await renderPdf(r.sheet);
+    expect(bytes.byteLength).toBeGreaterThan(1000);
+  });
+});
