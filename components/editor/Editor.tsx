@@ -5,7 +5,7 @@
  * once, wires live checks, autosave and the keyboard, and composes panels; it draws nothing and
  * holds no editing logic itself. Read-only (canEdit false): same drawing, no shelf, no saving.
  */
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { CircleX, CircleAlert, CircleCheck } from 'lucide-react';
 import type { EditorProps } from './types';
@@ -37,10 +37,14 @@ export default function Editor(props: EditorProps) {
   );
 }
 
-function EditorScreen({ layoutId, canEdit }: EditorProps) {
+function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
   const api = useEditorApi();
   const { doc, arrangement } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement })));
-  const checks = useLiveChecks(doc);
+  const checks = useLiveChecks(doc, extensions?.fetchChecks);
+  const incoming = extensions?.incoming;
+  useEffect(() => {
+    if (incoming && !canEdit && incoming.version !== api.getState().version) api.getState().replaceDoc(incoming.doc, incoming.version);
+  }, [incoming, canEdit, api]);
   const save = useAutosave(api, layoutId, canEdit);
   useEditorKeyboard(api);
   const [menu, setMenu] = useState<{ x: number; y: number } | null>(null);
@@ -70,12 +74,12 @@ function EditorScreen({ layoutId, canEdit }: EditorProps) {
 
   return (
     <div className="flex h-full min-h-0 flex-col bg-paper text-ink" data-testid="editor" data-read-only={!canEdit}>
-      <Toolbar saveStatus={save.status} saveDetail={save.lastError} />
+      <Toolbar saveStatus={save.status} saveDetail={save.lastError} extra={extensions?.toolbarExtra} />
       <div className="flex min-h-0 flex-1">
         {canEdit && <PartsShelf focusPlan={focusPlan} />}
         <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">
           <div ref={planBox} className="relative min-h-0 flex-1">
-            <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" />
+            <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" overlay={extensions?.planOverlay} />
             {menu && <ContextMenu at={menu} onClose={closeMenu} />}
           </div>
           <Tabs

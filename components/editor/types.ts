@@ -3,7 +3,10 @@
  * that keep millimetres (the document) and pixels (the screen) from being mixed up.
  * Must never hold behaviour: types and tiny constructors only.
  */
-import type { LayoutDoc, LengthUnit } from '@/lib/layout';
+import type { ReactNode } from 'react';
+import type { Arrangement, LayoutDoc, LengthUnit } from '@/lib/layout';
+import type { CheckReport } from '@/lib/checks/types';
+import type { Viewport } from './geometry/viewport';
 
 /** What the layout page passes to `<EditorLoader />` (fixed contract with the app shell). */
 export interface EditorProps {
@@ -13,6 +16,20 @@ export interface EditorProps {
   /** False for clients and viewer links: the same drawing, read-only (no shelf, no drag, no save). */
   canEdit: boolean;
   units: LengthUnit;
+  /** Optional additions from other features (sharing: comment pins, viewer links); none by default. */
+  extensions?: EditorExtensions;
+}
+
+/** Hooks other features plug into the editor without the editor knowing what they are. */
+export interface EditorExtensions {
+  /** Extra Konva layers drawn over the plan (world space through the viewport given). */
+  planOverlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
+  /** Extra controls at the right end of the toolbar. */
+  toolbarExtra?: ReactNode;
+  /** Where findings come from instead of POST /api/checks (a viewer link has no session). */
+  fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>;
+  /** A newer stored copy to show while read-only (live viewer links): replaces the document when its version moves on. */
+  incoming?: { doc: LayoutDoc; version: number } | null;
 }
 
 declare const mmBrand: unique symbol;

@@ -33,7 +33,8 @@ declare global {
   }
 }
 
-export function useLiveChecks(doc: LayoutDoc): LiveChecks {
+/** `fetchChecks` replaces POST /api/checks (a viewer link reads its own checks route). */
+export function useLiveChecks(doc: LayoutDoc, fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>): LiveChecks {
   const [sent, setSent] = useState<{ doc: LayoutDoc; key: string }>(() => ({ doc, key: contentKey(doc) }));
   const changedAt = useRef(new Map<string, number>());
   const throttle = useMemo(() => createThrottle<LayoutDoc>(CHECKS_WINDOW_MS, (d) => setSent({ doc: d, key: contentKey(d) })), []);
@@ -47,8 +48,8 @@ export function useLiveChecks(doc: LayoutDoc): LiveChecks {
   useEffect(() => () => throttle.cancel(), [throttle]);
 
   const q = useQuery<CheckReport, Error>({
-    queryKey: ['checks', sent.key],
-    queryFn: ({ signal }) => postChecks(fetch, sent.doc, signal),
+    queryKey: ['checks', fetchChecks ? 'own-source' : 'post', sent.key],
+    queryFn: ({ signal }) => (fetchChecks ? fetchChecks(sent.doc, signal) : postChecks(fetch, sent.doc, signal)),
     placeholderData: keepPreviousData,
     staleTime: Infinity,
     gcTime: 60_000,

@@ -15,10 +15,11 @@ import { DragLayer } from './DragLayer';
 import { RulerLayer } from './RulerLayer';
 import { usePlanPointer } from './usePlanPointer';
 import { useCanvasFonts } from './useCanvasFonts';
+import type { EditorExtensions } from '../types';
 
 const NONE: string[] = [];
 
-export function PlanStage({ failing, onContextMenu, describedBy }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string }) {
+export function PlanStage({ failing, onContextMenu, describedBy, overlay }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string; overlay?: EditorExtensions['planOverlay'] }) {
   const api = useEditorApi();
   const box = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState<{ w: number; h: number } | null>(null);
@@ -70,6 +71,7 @@ export function PlanStage({ failing, onContextMenu, describedBy }: { failing: st
           <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
           <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} ghost={s.ghost} hidden={moving ? s.gestureIds : NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
+          {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />
           <RulerLayer viewport={s.viewport} units={s.units} fonts={fonts} />
         </Stage>

@@ -4,6 +4,7 @@
  * same command objects as the keyboard), snap step, display units, the 1:1 screen scale and the
  * save indicator. Never edits the document except through commands and store actions.
  */
+import type { ReactNode } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { LENGTH_UNITS, type LengthUnit } from '@/lib/layout';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
@@ -13,7 +14,7 @@ import { ArrangementSwitch } from './ArrangementSwitch';
 import { SaveIndicator } from './SaveIndicator';
 import type { SaveStatus } from '../api/useAutosave';
 
-export function Toolbar({ saveStatus, saveDetail }: { saveStatus: SaveStatus; saveDetail?: string | null }) {
+export function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveStatus; saveDetail?: string | null; extra?: ReactNode }) {
   const api = useEditorApi();
   const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, snap: st.snap, units: st.units, scale: st.viewport.scale, actual: st.actualPxPerMm, ghost: st.ghost, version: st.version })));
   return (
@@ -57,6 +58,7 @@ export function Toolbar({ saveStatus, saveDetail }: { saveStatus: SaveStatus; sa
         </select>
       </label>
       <div className="ml-auto flex items-center gap-3">
+        {extra}
         <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} />
         <CommandButton id="help.shortcuts" />
       </div>
