@@ -1,0 +1,33 @@
+import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
+import { composeSheet, renderPdf } from '@/lib/sheet';
+import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
+import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
+
+export const dynamic = 'force-dynamic';
+
+type Ctx = { params: Promise<{ id: string }> };
+
+/**
+ * The plan sheet as a PDF: `?paper=a4|a3&scale=10|20|25`. Anyone who may read the layout may
+ * print it. A bay that does not fit the paper at that scale gets 422 with the reason and a
+ * suggested scale (or paper) that fits.
+ */
+export const GET = handle<Ctx>(async (req, { params }) => {
+  const actor = await requireActor(req);
+  const { id } = await params;
+  const ctx = await sheetRequestFor(actor, id); // rights first, so a stranger learns nothing from the query rules
+  const q = parseWith(sheetQuerySchema, queryOf(req.url));
+  const result = composeSheet({ ...ctx.request, paper: q.paper, scale: q.scale });
+  if (!result.ok) throw new HttpError(422, result.message, { suggestion: result.suggestion, needed: result.needed, available: result.available });
+  const bytes = await renderPdf(result.sheet, { author: ctx.request.details.studio });
+  return new Response(Buffer.from(bytes), {
+    status: 200,
+    headers: {
+      'Content-Type': 'application/pdf',
+      'Content-Length': String(bytes.byteLength),
+      'Content-Disposition': contentDisposition(cleanFileName(sheetFileName(ctx.layoutName, q, ctx.request.details.revision)), 'attachment'),
+      'X-Content-Type-Options': 'nosniff',
+      'Cache-Control': 'private, no-store',
+    },
+  });
+});

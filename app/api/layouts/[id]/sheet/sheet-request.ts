@@ -1,0 +1,75 @@
+/**
+ * Gathers what a plan sheet of a stored layout needs — the document, the studio, the client, the
+ * studio's units and check defaults, the check report — for the PDF route and the HTML print
+ * view alike, after the rights checks of `getLayout` (404 for anyone who may not see it). The
+ * revisions feature can pass a frozen revision (letter and document) to print that instead of
+ * the working copy. Server only; never trusts a query string beyond its schema.
+ */
+import 'server-only';
+import { z } from 'zod';
+import type { Actor } from '@/db/actor';
+import { getLayout } from '@/db/layouts';
+import { getStudio, withStudioDefaults } from '@/db/studios';
+import { runChecks } from '@/lib/checks';
+import type { CheckReport } from '@/lib/checks/types';
+import type { LayoutDoc } from '@/lib/layout';
+import { REVISION_LETTER, type SheetRequest } from '@/lib/sheet';
+
+/** `?paper=a4|a3&scale=10|20|25`; both optional (A4 at 1:20). */
+export const sheetQuerySchema = z.strictObject({
+  paper: z.enum(['a4', 'a3'], 'paper is a4 or a3').default('a4'),
+  scale: z.enum(['10', '20', '25'], 'scale is 10, 20 or 25 (for 1:10, 1:20, 1:25)').default('20').transform((s) => Number(s) as 10 | 20 | 25),
+});
+export type SheetQuery = z.infer<typeof sheetQuerySchema>;
+
+export function queryOf(url: string | URLSearchParams): Record<string, string> {
+  const params = typeof url === 'string' ? new URL(url).searchParams : url;
+  return Object.fromEntries(params.entries());
+}
+
+export interface FrozenRevision {
+  letter: string;
+  doc: LayoutDoc;
+}
+
+export interface SheetContext {
+  /** Everything but the paper and scale, which the caller chooses. */
+  request: Omit<SheetRequest, 'paper' | 'scale'>;
+  layoutId: string;
+  layoutName: string;
+}
+
+export function today(now = new Date()): string {
+  return now.toISOString().slice(0, 10);
+}
+
+export async function sheetRequestFor(actor: Actor, layoutId: string, revision?: FrozenRevision): Promise<SheetContext> {
+  const layout = await getLayout(actor, layoutId);
+  if (revision && !REVISION_LETTER.test(revision.letter)) throw new Error(`not a revision letter: ${revision.letter}`);
+  const studio = await getStudio(actor);
+  const doc = revision?.doc ?? layout.doc;
+  let report: CheckReport | null = null;
+  let checksUnavailable: string | undefined;
+  try {
+    report = runChecks(withStudioDefaults(doc, studio.checkDefaults));
+  } catch (err) {
+    console.error('[baywright] checks failed while making a plan sheet', err);
+    checksUnavailable = 'the check engine stopped on this layout';
+  }
+  return {
+    layoutId: layout.id,
+    layoutName: layout.name,
+    request: {
+      doc,
+      report,
+      checksUnavailable,
+      units: studio.units,
+      details: { studio: studio.name, client: layout.client?.name ?? null, layout: layout.name, revision: revision?.letter ?? null, date: today() },
+    },
+  };
+}
+
+/** A download name like "Nair — L2H2 weekender, plan sheet A4 1-20.pdf". */
+export function sheetFileName(layoutName: string, query: SheetQuery, revision?: string | null): string {
+  return `${layoutName}, plan sheet${revision ? ` rev ${revision}` : ''} ${query.paper.toUpperCase()} 1-${query.scale}.pdf`;
+}
