@@ -46,7 +46,7 @@ function bedName(bed: Bed, count: number): string {
 
 function mattressWords(ctx: CheckContext, bed: Bed): string {
   const region = ctx.settings.mattressRegion;
-  const charts = mattressSource(region).brief.toLowerCase();
+  const charts = mattressSource(region).brief;
   if (bed.mattress) return `It takes a ${formatMattress(bed.mattress)} slept ${bed.lengthways ? 'lengthways (along the van)' : 'across the van'} (${charts}).`;
   const smallest = MATTRESSES[region].reduce((a, b) => (a.width * a.length <= b.width * b.length ? a : b));
   return `No standard ${region.toUpperCase()} mattress fits; the smallest, ${formatMattress(smallest)}, needs more (${charts}).`;
@@ -97,7 +97,7 @@ export function sleepChecks(ctx: CheckContext): Finding[] {
         measured: bed.long,
         required: needLong,
         unit: 'mm',
-        message: `${name}, for ${who}: clear length ${mm(bed.long)}; needs ${mm(needLong)} for the tallest (${mm(on[0])} + ${mm(bedAllowance)}). ${mattressWords(ctx, bed)} ${SOURCES.bedLength.brief}.`,
+        message: `${name}, for ${who}: clear length ${mm(bed.long)} (lying ${bed.lengthways ? 'lengthways, along the van' : 'across the van'}); needs ${mm(needLong)} for the tallest (${mm(on[0])} + ${mm(bedAllowance)}). ${mattressWords(ctx, bed)} ${SOURCES.bedLength.brief}.`,
         source: lengthSource,
       });
       const needWide = bedWidthPerSleeper * on.length;

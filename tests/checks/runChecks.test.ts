@@ -1,0 +1,205 @@
+// The whole engine: our starter layouts, the two facts of the trade built from our own L2H2
+// template (common practice, stated by a practising builder: a person 1870 mm tall stands upright
+// in a high-roof van after floor and roof insulation; an L-shaped lounge makes up into a UK king
+// bed, 1500 × 2000 mm, slept lengthways), the report contract on every finding, and properties.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { checkLayoutInput, runChecks, SOURCES } from '@/lib/checks';
+import { bayTemplate, DEFAULT_BUILD_UP, layoutDocSchema, parseLayoutDoc, starterLayout, type LayoutDoc } from '@/lib/layout';
+import { generateLayout } from './fixtures/generatedLayout';
+import { findings, l2h2Doc, mod, only } from './helpers';
+
+const OURS = /^(fit|walkway|headroom|sleep|egress|travel)\./;
+const ourFindings = (doc: LayoutDoc) => runChecks(doc).findings.filter((f) => OURS.test(f.id));
+
+describe('starter layouts', () => {
+  it('the L-shaped lounge passes every geometry rule; its one warning is the 510 mm squeeze between table and right wheel arch', () => {
+    const doc = starterLayout('starter-l-lounge')!;
+    const report = runChecks(doc);
+    const mine = report.findings.filter((f) => OURS.test(f.id));
+    expect(mine.filter((f) => f.status === 'fail')).toEqual([]);
+    expect(mine.filter((f) => f.status === 'warn').map((f) => [f.id, f.arrangement, f.measured])).toEqual([['walkway.width', 'lounge', 510]]);
+    const length = only(doc, 'sleep.length', 'sleep');
+    expect(length).toMatchObject({ measured: 2000 });
+    expect(length.message).toMatch(/UK king \(1500 × 2000 mm\) slept lengthways/);
+    expect(only(doc, 'sleep.width', 'sleep').measured).toBe(1500);
+    expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'pass', measured: 1900, required: 1870 });
+  });
+  it('the fixed rear bed: the electrics bay facing the rear doors under the bed cannot be worked from inside', () => {
+    const doc = starterLayout('starter-rear-bed')!;
+    for (const a of ['travel', 'lounge']) expect(only(doc, 'walkway.reach', a)).toMatchObject({ status: 'fail', moduleIds: ['electrics'], measured: 6, required: 7 });
+    const mine = ourFindings(doc).filter((f) => f.status === 'fail');
+    expect(mine.map((f) => f.id)).toEqual(['walkway.reach', 'walkway.reach']);
+    expect(only(doc, 'sleep.length', 'sleep').message).toMatch(/UK double/);
+    expect(only(doc, 'egress.sleep', 'sleep').status).toBe('pass');
+  });
+});
+
+describe('facts of the trade (common practice, stated by a practising builder), built from our L2H2 template', () => {
+  const bay = bayTemplate('l2h2')!.bay;
+  // Our own L-shaped lounge: a side bench along the left wall, a rear bench across the back, and an
+  // infill board that slides out between them at night, all cushions at 300 mm on the 24 mm floor.
+  const cushions = { elevation: 300, height: 160, surface: 'sleep' as const };
+  const lounge = (sleepers: number[]) =>
+    layoutDocSchema.parse({
+      schemaVersion: 1,
+      name: 'L-lounge from the L2H2 template',
+      bay,
+      buildUp: DEFAULT_BUILD_UP,
+      occupants: { standingHeight: 1870, sleepers },
+      modules: [
+        mod({ id: 'galley', kind: 'kitchen-counter', x: 0, y: 36, length: 1100, width: 550, facing: 'right' }),
+        mod({ id: 'side-bench', kind: 'bench-seat', x: 1100, y: 36, length: 2000, width: 500, facing: 'right', arrangements: ['lounge', 'sleep'], ...cushions }),
+        mod({ id: 'rear-bench', kind: 'bench-seat', x: 2600, y: 536, length: 500, width: 1198, facing: 'front', arrangements: ['lounge', 'sleep'], ...cushions }),
+        mod({ id: 'slide-out', kind: 'bed-infill', x: 1100, y: 536, length: 1500, width: 1000, facing: 'front', arrangements: ['sleep'], ...cushions }),
+      ],
+    });
+  it('a person 1870 mm tall stands upright after the floor (24 mm) and roof (26 mm) build-up', () => {
+    expect(only(lounge([1870, 1700]), 'headroom.standing').status).toBe('pass');
+  });
+  it('the L-shaped lounge converts into a UK king (1500 × 2000 mm) slept lengthways, long and wide enough for two', () => {
+    const doc = lounge([1870, 1700]);
+    const length = only(doc, 'sleep.length', 'sleep');
+    expect(length).toMatchObject({ status: 'pass', measured: 2000 });
+    expect(length.message).toMatch(/UK king \(1500 × 2000 mm\) slept lengthways/);
+    expect(only(doc, 'sleep.width', 'sleep')).toMatchObject({ status: 'pass', measured: 1500, required: 1200 });
+    expect(only(doc, 'sleep.level', 'sleep').status).toBe('pass');
+    expect(only(doc, 'egress.sleep', 'sleep').status).toBe('pass');
+    expect(ourFindings(doc).filter((f) => f.status === 'fail')).toEqual([]);
+  });
+  it('a 1910 mm sleeper would need 2010 mm: the same bed fails its length', () => {
+    expect(only(lounge([1910]), 'sleep.length', 'sleep')).toMatchObject({ status: 'fail', required: 2010 });
+  });
+});
+
+describe('the report contract', () => {
+  const docs = [starterLayout('starter-l-lounge')!, starterLayout('starter-rear-bed')!, l2h2Doc(), generateLayout(20), l2h2Doc({ occupants: { sleepers: [] }, bay: { doors: [] } })];
+  it('every finding of ours carries measured, required, unit, message and source, and per-arrangement rules name theirs', () => {
+    for (const doc of docs) {
+      for (const f of ourFindings(doc)) {
+        expect(Number.isFinite(f.measured), `${f.id} measured`).toBe(true);
+        expect(Number.isFinite(f.required), `${f.id} required`).toBe(true);
+        expect(f.unit, f.id).toBeTruthy();
+        expect(f.message.length, f.id).toBeGreaterThan(20);
+        expect(f.source, f.id).toBeTruthy();
+        if (/^(walkway|sleep|egress|travel|headroom\.overhead)/.test(f.id)) expect(f.arrangement, f.id).toBeDefined();
+        expect(f.message).not.toMatch(/undefined|NaN/);
+      }
+    }
+  });
+  it('ok is true exactly when nothing fails', () => {
+    for (const doc of docs) {
+      const r = runChecks(doc);
+      expect(r.ok).toBe(!r.findings.some((f) => f.status === 'fail'));
+    }
+  });
+  it('every rule id of DESIGN.md appears for a full layout', () => {
+    const ids = new Set(runChecks(starterLayout('starter-l-lounge')!).findings.map((f) => f.id));
+    for (const id of ['fit.inside', 'fit.wheel-arch', 'fit.overlap', 'walkway.width', 'walkway.reach', 'headroom.standing', 'headroom.overhead', 'sleep.length', 'sleep.width', 'sleep.level', 'travel.seats', 'egress.sleep']) expect(ids.has(id), id).toBe(true);
+  });
+  it('no doors and no sleepers: clear warnings saying what is missing, no crash', () => {
+    const doc = l2h2Doc({ occupants: { sleepers: [] }, bay: { doors: [] }, modules: [mod({ id: 'bed', kind: 'bed-platform', x: 1100, y: 36, length: 2000, width: 1400, elevation: 600, height: 300, surface: 'sleep', facing: 'front' })] });
+    const warned = runChecks(doc).findings.filter((f) => f.status === 'warn').map((f) => f.message);
+    expect(warned.some((m) => /No door opening is drawn/.test(m))).toBe(true);
+    expect(warned.some((m) => /no sleepers are listed/.test(m))).toBe(true);
+  });
+  it('every source string names a source or says it is common practice, from memory, or plain geometry', () => {
+    for (const [key, s] of Object.entries(SOURCES)) {
+      expect(s.cite, key).toMatch(/EN \d|Table|chart|common practice|from memory|no outside source|Regulation/i);
+      expect(s.brief.length, key).toBeGreaterThan(5);
+    }
+  });
+  it('is deterministic', () => {
+    const doc = starterLayout('starter-l-lounge')!;
+    expect(runChecks(doc)).toEqual(runChecks(doc));
+  });
+});
+
+describe('properties (fast-check)', () => {
+  const base = starterLayout('starter-l-lounge')!;
+  const only1 = (doc: LayoutDoc, a: string) => JSON.stringify(runChecks(doc).findings.filter((f) => f.arrangement === a));
+  it('moving a module never changes the result of an arrangement it is not in', () => {
+    const expected = { travel: only1(base, 'travel'), sleep: only1(base, 'sleep') };
+    fc.assert(
+      fc.property(fc.integer({ min: -300, max: 2800 }), fc.integer({ min: -100, max: 1500 }), (x, y) => {
+        // The table lives only in the lounge arrangement.
+        const moved: LayoutDoc = { ...base, modules: base.modules.map((m) => (m.id === 'table' ? { ...m, x, y } : m)) };
+        expect(only1(moved, 'travel')).toBe(expected.travel);
+        expect(only1(moved, 'sleep')).toBe(expected.sleep);
+      }),
+      { numRuns: 25 },
+    );
+    const travelLounge = { travel: only1(base, 'travel'), lounge: only1(base, 'lounge') };
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 2000 }), fc.integer({ min: 0, max: 900 }), (x, y) => {
+        const moved: LayoutDoc = { ...base, modules: base.modules.map((m) => (m.id === 'infill' ? { ...m, x, y } : m)) };
+        expect(only1(moved, 'travel')).toBe(travelLounge.travel);
+        expect(only1(moved, 'lounge')).toBe(travelLounge.lounge);
+      }),
+      { numRuns: 25 },
+    );
+  });
+  it('random documents never crash a rule family', () => {
+    const kinds = ['bed-platform', 'bed-infill', 'bench-seat', 'seat', 'table', 'kitchen-counter', 'fridge', 'wardrobe', 'overhead-locker', 'electrics-bay'] as const;
+    const moduleArb = fc.record({
+      kind: fc.constantFrom(...kinds),
+      x: fc.integer({ min: -500, max: 4000 }),
+      y: fc.integer({ min: -200, max: 2000 }),
+      length: fc.integer({ min: 1, max: 2500 }),
+      width: fc.integer({ min: 1, max: 2000 }),
+      elevation: fc.integer({ min: 0, max: 2500 }),
+      height: fc.integer({ min: 1, max: 2500 }),
+      facing: fc.constantFrom('front', 'rear', 'left', 'right'),
+      arrangements: fc.subarray(['travel', 'lounge', 'sleep'] as const, { minLength: 1 }),
+      surface: fc.option(fc.constantFrom('sleep', 'seat', 'counter'), { nil: undefined }),
+    });
+    const docArb = fc.record({
+      modules: fc.array(moduleArb, { maxLength: 25 }),
+      doors: fc.array(fc.record({ wall: fc.constantFrom('left', 'right', 'rear'), offset: fc.integer({ min: 0, max: 1500 }), width: fc.integer({ min: 0, max: 1700 }) }), { maxLength: 4 }),
+      sleepers: fc.array(fc.integer({ min: 300, max: 2300 }), { maxLength: 5 }),
+      walls: fc.integer({ min: 0, max: 900 }),
+      walkwayMin: fc.integer({ min: 0, max: 2000 }),
+    });
+    fc.assert(
+      fc.property(docArb, (g) => {
+        const input = {
+          schemaVersion: 1,
+          name: 'random',
+          bay: { length: 3100, width: 1770, height: 1950, wheelArches: bayTemplate('l2h2')!.bay.wheelArches, doors: g.doors.map((d, i) => ({ ...d, id: `d${i}` })).filter((d) => d.offset + d.width <= (d.wall === 'rear' ? 1770 : 3100)) },
+          buildUp: { floor: [], roof: [], walls: [{ material: 'foam', thickness: g.walls }] },
+          occupants: { standingHeight: 1800, sleepers: g.sleepers },
+          modules: g.modules.map((m, i) => ({ ...m, id: `m${i}` })),
+          settings: { walkwayMin: g.walkwayMin },
+        };
+        const parsed = parseLayoutDoc(input);
+        expect(parsed.ok).toBe(true);
+        if (!parsed.ok) return;
+        const report = runChecks(parsed.value);
+        expect(report.findings.filter((f) => f.id.endsWith('.unchecked'))).toEqual([]);
+        expect(report.ok).toBe(!report.findings.some((f) => f.status === 'fail'));
+      }),
+      { numRuns: 60 },
+    );
+  });
+});
+
+describe('untrusted input and scale', () => {
+  it('checkLayoutInput returns field issues for bad input and a report for good input, never throwing', () => {
+    for (const bad of [null, 42, 'layout', [], {}, { schemaVersion: 1, name: 'x' }, { ...starterLayout('starter-l-lounge')!, modules: [{ id: 'a b', kind: 'rocket' }] }]) {
+      const r = checkLayoutInput(bad);
+      expect(r.ok).toBe(false);
+      if (!r.ok) expect(r.issues.length).toBeGreaterThan(0);
+    }
+    const good = checkLayoutInput(JSON.parse(JSON.stringify(starterLayout('starter-l-lounge'))));
+    expect(good.ok && good.report.ok).toBe(true);
+  });
+  it('a generated 2000-module layout is checked in well under a few seconds, with pairs and beds found', () => {
+    const doc = generateLayout(2000);
+    const t0 = performance.now();
+    const report = runChecks(doc);
+    expect(performance.now() - t0).toBeLessThan(5000);
+    expect(findings(report, 'fit.overlap')).toEqual([expect.objectContaining({ status: 'pass' })]);
+    expect(findings(report, 'sleep.length', 'sleep')).toHaveLength(100);
+    expect(findings(report, 'walkway.reach', 'lounge')[0]).toMatchObject({ status: 'pass', required: 1300 });
+  });
+});

@@ -1,0 +1,32 @@
+// Settings: the built-in defaults (each with its source), layered studio defaults under
+// doc.settings, and clear errors for bad studio defaults.
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_SETTINGS, resolveSettings, runChecks, SOURCES } from '@/lib/checks';
+import { checkLayoutInput } from '@/lib/checks';
+import { l2h2Doc } from './helpers';
+
+describe('check settings', () => {
+  it('defaults: 450 mm walkway (EN 1645-1, secondary citation), 100 mm bed allowance, 600 mm per sleeper, 20 mm level and head margins, UK mattresses', () => {
+    expect(DEFAULT_SETTINGS).toEqual({ walkwayMin: 450, bedAllowance: 100, bedWidthPerSleeper: 600, levelTolerance: 20, headMargin: 20, mattressRegion: 'uk' });
+    expect(SOURCES.walkwayMin.cite).toMatch(/EN 1645-1/);
+    expect(SOURCES.walkwayMin.cite).toMatch(/secondary citation/);
+    expect(SOURCES.bedWidth.cite).toMatch(/common practice/i);
+  });
+  it('layers built-in < studio < layout', () => {
+    const doc = l2h2Doc({ settings: { walkwayMin: 500 } });
+    expect(resolveSettings(doc)).toMatchObject({ walkwayMin: 500, bedAllowance: 100 });
+    expect(resolveSettings(doc, { walkwayMin: 600, bedAllowance: 150, mattressRegion: 'eu' })).toMatchObject({ walkwayMin: 500, bedAllowance: 150, mattressRegion: 'eu' });
+    expect(resolveSettings(l2h2Doc(), { headMargin: 50 })).toMatchObject({ headMargin: 50, walkwayMin: 450 });
+  });
+  it('a studio default changes the outcome of a run', () => {
+    const doc = l2h2Doc({ occupants: { standingHeight: 1870 } }); // clear height 1900
+    expect(runChecks(doc).findings.find((f) => f.id === 'headroom.standing')!.status).toBe('pass');
+    expect(runChecks(doc, { studioDefaults: { headMargin: 40 } }).findings.find((f) => f.id === 'headroom.standing')!.status).toBe('warn');
+  });
+  it('bad studio defaults give a clear error naming the field', () => {
+    expect(() => resolveSettings(l2h2Doc(), { walkwayMin: -5 } as never)).toThrow(/Studio check defaults are not valid: walkwayMin/);
+    expect(() => resolveSettings(l2h2Doc(), { colour: 'red' } as never)).toThrow(RangeError);
+    const viaInput = checkLayoutInput(l2h2Doc(), { studioDefaults: { mattressRegion: 'mars' } as never });
+    expect(viaInput.ok).toBe(false);
+  });
+});
