@@ -23,6 +23,15 @@ const STARTERS: Starter[] = [
       await startFakeSmtpOnce();
     },
   },
+  {
+    // Local test payment API for the deposit flow: hosted checkout and signed webhooks (lib/fakes/stripe).
+    name: 'payment API',
+    wanted: () => fakesWanted(),
+    start: async () => {
+      const { startFakeStripeOnce } = await import('./stripe/start-once');
+      await startFakeStripeOnce();
+    },
+  },
 ];
 
 export function startLocalServices(): Promise<void> {

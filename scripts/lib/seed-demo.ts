@@ -4,10 +4,11 @@
  */
 import { eq } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { layouts, memberships, studios, users } from '../../db/schema';
+import { layouts, memberships, priceLists, studios, users } from '../../db/schema';
 import { hashPassword } from '../../lib/auth/password';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_STUDIO } from '../../lib/demo-accounts';
 import { bayTemplate, emptyLayout, starterLayout } from '../../lib/layout/templates';
+import { demoPriceList } from './demo-prices';
 
 export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, DEMO_ACCOUNTS[0].email)).limit(1);
@@ -36,6 +37,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         studioId: studio.id, clientId: r.clientId, name: r.name, doc: { ...r.doc, name: r.name }, createdBy: designer, updatedBy: designer,
       });
     }
+    await tx.insert(priceLists).values({ studioId: studio.id, ...demoPriceList(), updatedBy: ids['maren@saltmarsh.test'] });
   });
   return { created: true };
 }
