@@ -1,0 +1,39 @@
+// The build-planning summary for the plan sheet: numbers agree with the planning functions,
+// lines carry units, and missing inputs are named rather than guessed.
+import { describe, expect, it } from 'vitest';
+import { starterLayout, emptyLayout, bayTemplate } from '@/lib/layout';
+import { buildPlanSummary } from '@/lib/planning/summary';
+import { computeAxleLoads, powerBudget, waterPlan } from '@/lib/planning';
+
+describe('buildPlanSummary', () => {
+  it('agrees with the planning functions on the rear-bed starter', () => {
+    const doc = starterLayout('starter-rear-bed')!;
+    const s = buildPlanSummary(doc);
+    const m = computeAxleLoads(doc);
+    expect(s.mass.totalKg).toBeCloseTo(m.totalKg, 6);
+    expect(s.mass.frontKg! + s.mass.rearKg!).toBeCloseTo(m.totalKg, 6);
+    expect(s.mass.payloadLeftKg).toBeCloseTo(3500 - m.builtKg, 6);
+    expect(s.power.dailyUseWh).toBeCloseTo(powerBudget(doc).dailyUseWh, 6);
+    expect(s.power.seasons).toHaveLength(3);
+    expect(s.water.freshL).toBe(waterPlan(doc).freshL);
+    expect(s.lines.map((l) => l.topic)).toEqual(['Mass', 'Axles', 'Payload', 'Power', 'Water']);
+    expect(s.lines.find((l) => l.topic === 'Mass')!.text).toMatch(/^Laden [\d,]+ kg of 3,500 kg maximum authorised mass/);
+    expect(s.lines.find((l) => l.topic === 'Water')!.text).toMatch(/Fresh 70 L, grey 70 L; 4\.4 days at 8 L per person a day for 2/);
+    for (const l of s.lines) expect(l.text).toMatch(/\d+(\.\d)? ?(kg|Wh|L|days)|need|enter|No water/);
+  });
+
+  it('marks an axle over its limit', () => {
+    const doc = starterLayout('starter-rear-bed')!;
+    const over = { ...doc, systems: { ...doc.systems, vehicle: { ...doc.systems!.vehicle, maxRearAxleKg: 900 } } };
+    expect(buildPlanSummary(over).lines.find((l) => l.topic === 'Axles')!.status).toBe('attention');
+  });
+
+  it('names what is missing on an empty bay and never invents a balance', () => {
+    const doc = emptyLayout('Empty', bayTemplate('l2h2')!.bay);
+    const s = buildPlanSummary(doc);
+    expect(s.mass.frontKg).toBeNull();
+    expect(s.power.seasons).toBeNull();
+    expect(s.missing).toEqual(expect.arrayContaining(['systems.vehicle.wheelbaseMm', 'systems.power.battery']));
+    expect(s.lines.every((l) => l.status === 'unknown')).toBe(true);
+  });
+});
