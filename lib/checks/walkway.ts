@@ -73,9 +73,11 @@ interface Probe {
 
 /**
  * Largest whole-mm diameter D in [lo, hi] for which every target of `a` still connects to a door
- * (the caller knows lo works). Each probe is a sweep; the first guess is the upper bound the
- * walkway sweep already gives (the widest free span at each target), so the usual case costs two
- * sweeps: the bound works, bound + 1 does not. Otherwise bisection in whole millimetres.
+ * (the caller knows lo works). Each probe is a sweep. The first guess is the route bound from the
+ * walkway sweep (lib/geometry/widestPath: the narrowest span on the best route to each target);
+ * when a sweep at that diameter gets through, it is the answer, since a wider disk cannot stand
+ * in a narrower span — only where a diagonal squeeze hides between sweep columns could a wider
+ * one pass, and there the engine errs on the safe side anyway. Otherwise bisection in whole mm.
  */
 function widestPassage(a: FloorAnalysis, lo: number, hi: number): { diameter: number; cutOff: string[] } {
   const wanted = a.targets.filter((t) => t.reached);
@@ -91,35 +93,23 @@ function widestPassage(a: FloorAnalysis, lo: number, hi: number): { diameter: nu
     return p;
   };
   const routes = widestRouteBounds(a.floor);
-  let bound = hi;
-  if (wanted.length === 0) {
-    for (let i = 0; i < routes.length; i++) if (a.floor.entryWidth[i] > 0) bound = Math.max(lo, Math.min(hi, Math.floor(routes[i])));
-  }
-  for (const t of wanted) bound = Math.min(bound, Math.floor(widestRouteIntoZone(a.floor, routes, t.zone)));
-  bound = Math.max(lo, bound);
+  let entryBound = lo;
+  for (let i = 0; i < routes.length; i++) if (a.floor.entryWidth[i] > 0) entryBound = Math.max(entryBound, Math.floor(routes[i]));
+  const bounds = wanted.map((t) => Math.floor(widestRouteIntoZone(a.floor, routes, t.zone)));
+  const bound = Math.max(lo, Math.min(hi, wanted.length === 0 ? entryBound : Math.min(...bounds)));
 
-  let good = lo;
-  let bad = hi + 1;
   if (probe(bound).ok) {
-    good = bound;
-    // Gallop upwards in case the bound was not tight (it can miss a span between sweep columns).
-    for (let step = 1; good < hi; step *= 2) {
-      const next = Math.min(hi, good + step);
-      if (probe(next).ok) good = next;
-      else {
-        bad = next;
-        break;
-      }
-    }
-  } else {
-    bad = bound;
+    const cutOff = wanted.filter((_, k) => bounds[k] <= bound).map((t) => moduleName(t.module));
+    return { diameter: bound, cutOff: bound < hi ? cutOff : [] };
   }
+  let good = lo;
+  let bad = bound;
   while (bad - good > 1) {
     const mid = Math.floor((good + bad) / 2);
     if (probe(mid).ok) good = mid;
     else bad = mid;
   }
-  return { diameter: good, cutOff: bad <= hi ? probe(bad).cutOff : [] };
+  return { diameter: good, cutOff: probe(bad).cutOff };
 }
 
 export function walkwayWidth(ctx: CheckContext, arrangement: Arrangement): Finding {
