@@ -11,10 +11,24 @@ const nextConfig: NextConfig = {
   serverExternalPackages: ['@electric-sql/pglite', 'pg', 'smtp-server', 'mailparser', 'nodemailer', '@node-rs/argon2'],
   turbopack: { root },
   outputFileTracingRoot: root,
+  // Runtime data and other build folders are never part of the server bundle.
+  outputFileTracingExcludes: { '*': ['data/**', '.next-*/**', 'artifacts/**', 'test-results/**'] },
   poweredByHeader: false,
   typedRoutes: false,
   async headers() {
-    return [{ source: '/:path*', headers: SECURITY_HEADERS }];
+    return [
+      { source: '/:path*', headers: SECURITY_HEADERS },
+      // Viewer links and invitations (app/v, app/api/v, app/invite): never indexed, and the token in
+      // the address never leaks through a Referer header. Later entries override the same key.
+      ...['/v/:path*', '/api/v/:path*', '/invite/:path*'].map((source) => ({
+        source,
+        headers: [
+          { key: 'X-Robots-Tag', value: 'noindex, nofollow' },
+          { key: 'Referrer-Policy', value: 'no-referrer' },
+          { key: 'Cache-Control', value: 'no-store, private' },
+        ],
+      })),
+    ];
   },
 };
 

@@ -12,6 +12,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import * as schema from './schema';
+import { dataRoot } from '../lib/data-root';
 
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
 
@@ -21,7 +22,7 @@ interface DbHandle {
   close: () => Promise<void>;
 }
 
-const MIGRATIONS = path.join(process.cwd(), 'drizzle');
+const MIGRATIONS = path.join(/* turbopackIgnore: true */ process.cwd(), 'drizzle');
 
 type GlobalWithDb = typeof globalThis & { __baywrightDb?: Promise<DbHandle> };
 const g = globalThis as GlobalWithDb;
@@ -29,7 +30,7 @@ const g = globalThis as GlobalWithDb;
 /** The folder PGlite keeps its data in: ./data/<name>, name from BAYWRIGHT_DB (default "dev"). */
 export function dataDir(name = process.env.BAYWRIGHT_DB ?? 'dev'): string {
   if (!/^[a-z0-9][a-z0-9_-]*$/i.test(name)) throw new Error(`BAYWRIGHT_DB must be a plain folder name, got "${name}"`);
-  return path.join(process.env.BAYWRIGHT_DATA_ROOT ?? path.join(process.cwd(), 'data'), name);
+  return path.join(dataRoot(), name);
 }
 
 export function getDb(): Promise<Db> {
@@ -47,7 +48,7 @@ export function getHandle(): Promise<DbHandle> {
 }
 
 /** Tests hand in their own (cloned, migrated) instance. */
-export function useDbHandle(handle: DbHandle): void {
+export function installDbHandle(handle: DbHandle): void {
   g.__baywrightDb = Promise.resolve(handle);
 }
 

@@ -5,6 +5,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
+import { dataRoot } from '../data-root';
 
 let cached: string | undefined;
 
@@ -14,7 +15,7 @@ export function authSecret(): string {
   if (process.env.NODE_ENV === 'production' && process.env.BAYWRIGHT_REQUIRE_SECRET === '1') {
     throw new Error('AUTH_SECRET must be set in production');
   }
-  const root = process.env.BAYWRIGHT_DATA_ROOT ?? path.join(process.cwd(), 'data');
+  const root = dataRoot();
   const file = path.join(root, '.auth-secret');
   try {
     cached = fs.readFileSync(file, 'utf8').trim();
@@ -33,12 +34,12 @@ export function authSecret(): string {
 }
 
 /** Cookies are Secure when the app is served over HTTPS. */
-export function useSecureCookies(): boolean {
+export function secureCookiesWanted(): boolean {
   return (process.env.AUTH_URL ?? '').startsWith('https://');
 }
 
 export const SESSION_MAX_AGE_S = 12 * 60 * 60;
 
 export function sessionCookieName(): string {
-  return useSecureCookies() ? '__Secure-authjs.session-token' : 'authjs.session-token';
+  return secureCookiesWanted() ? '__Secure-authjs.session-token' : 'authjs.session-token';
 }

@@ -7,13 +7,13 @@ import 'server-only';
 import { headers } from 'next/headers';
 import { getToken } from 'next-auth/jwt';
 import { loadActor, type Actor } from '@/db/actor';
-import { authSecret, sessionCookieName, useSecureCookies } from './secret';
+import { authSecret, sessionCookieName, secureCookiesWanted } from './secret';
 
 export async function actorFromRequest(req: Request): Promise<Actor | null> {
   const token = await getToken({
     req,
     secret: authSecret(),
-    secureCookie: useSecureCookies(),
+    secureCookie: secureCookiesWanted(),
     cookieName: sessionCookieName(),
     salt: sessionCookieName(),
   });

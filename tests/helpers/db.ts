@@ -10,19 +10,19 @@ import crypto from 'node:crypto';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import * as schema from '../../db/schema';
-import { useDbHandle, closeDb, type Db } from '../../db/client';
+import { installDbHandle, closeDb, type Db } from '../../db/client';
 
 export async function useFreshDb(): Promise<Db> {
-  if (process.env.TEST_DATABASE_URL) return useFreshPostgres(process.env.TEST_DATABASE_URL);
+  if (process.env.TEST_DATABASE_URL) return freshPostgres(process.env.TEST_DATABASE_URL);
   const file = process.env.BAYWRIGHT_TEST_TEMPLATE;
   if (!file) throw new Error('the vitest global setup did not build the database template');
   const client = await PGlite.create({ loadDataDir: new Blob([fs.readFileSync(file)]) });
   const db = drizzlePglite(client, { schema }) as unknown as Db;
-  useDbHandle({ db, kind: 'pglite', close: () => client.close() });
+  installDbHandle({ db, kind: 'pglite', close: () => client.close() });
   return db;
 }
 
-async function useFreshPostgres(serverUrl: string): Promise<Db> {
+async function freshPostgres(serverUrl: string): Promise<Db> {
   const { Pool, Client } = await import('pg');
   const { drizzle } = await import('drizzle-orm/node-postgres');
   const { migrate } = await import('drizzle-orm/node-postgres/migrator');
@@ -36,7 +36,7 @@ async function useFreshPostgres(serverUrl: string): Promise<Db> {
   const pool = new Pool({ connectionString: url.toString(), max: 5 });
   const db = drizzle(pool, { schema });
   await migrate(db, { migrationsFolder: path.join(process.cwd(), 'drizzle') });
-  useDbHandle({
+  installDbHandle({
     db: db as unknown as Db,
     kind: 'postgres',
     close: async () => {

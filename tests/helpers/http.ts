@@ -23,7 +23,6 @@ export async function sessionCookie(user: SessionUser): Promise<string> {
   return `${name}=${token}`;
 }
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- each route types its own params
 type Handler = (req: Request, ctx: any) => Promise<Response>;
 
 export interface CallOptions {

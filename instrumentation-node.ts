@@ -1,0 +1,21 @@
+/**
+ * Server start (Node runtime only, never during `next build`): opens the database at once, so a
+ * second process on the same embedded-database folder stops with a clear message instead of
+ * failing on its first request; then starts the local fakes of hosted services (mail, payments)
+ * where this environment wants them.
+ */
+import { DatabaseLockedError, getHandle } from './db/client';
+import { startLocalServices } from './lib/fakes/local-services';
+
+export async function startServer(): Promise<void> {
+  try {
+    await getHandle();
+  } catch (err) {
+    if (err instanceof DatabaseLockedError) {
+      console.error(`[baywright] ${err.message}`);
+      process.exit(1);
+    }
+    throw err;
+  }
+  await startLocalServices();
+}
