@@ -14,6 +14,8 @@ const nextConfig: NextConfig = {
   // Runtime data and other build folders are never part of the server bundle.
   outputFileTracingExcludes: { '*': ['data/**', '.next-*/**', 'artifacts/**', 'test-results/**'] },
   poweredByHeader: false,
+  // `npm test` type-checks the whole project (tests included) as its own first step; the build need not repeat it.
+  typescript: { ignoreBuildErrors: true },
   typedRoutes: false,
   async headers() {
     return [

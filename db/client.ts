@@ -30,7 +30,7 @@ const g = globalThis as GlobalWithDb;
 /** The folder PGlite keeps its data in: ./data/<name>, name from BAYWRIGHT_DB (default "dev"). */
 export function dataDir(name = process.env.BAYWRIGHT_DB ?? 'dev'): string {
   if (!/^[a-z0-9][a-z0-9_-]*$/i.test(name)) throw new Error(`BAYWRIGHT_DB must be a plain folder name, got "${name}"`);
-  return path.join(dataRoot(), name);
+  return path.join(/* turbopackIgnore: true */ dataRoot(), name);
 }
 
 export function getDb(): Promise<Db> {
