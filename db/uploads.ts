@@ -18,21 +18,9 @@ import { cleanFileName, withExtension } from '../lib/uploads/file-name';
 import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
 import { readStored, removeStored, storedExists, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
 import type { TracingPlacement } from '../lib/tracing/calibration';
+import type { UploadDto } from '../lib/uploads/dto';
 
-export interface UploadDto {
-  id: string;
-  layoutId: string;
-  fileName: string;
-  contentType: string;
-  kind: 'photo' | 'drawing';
-  sizeBytes: number;
-  uploadedBy: string | null;
-  createdAt: string;
-  /** Where to fetch the bytes (rights checked there too). */
-  url: string;
-  /** Where the image sits under the plan, or null when it is not placed. */
-  tracing: TracingPlacement | null;
-}
+export type { UploadDto };
 
 /** A layout keeps at most this many reference files (common practice, no source: a tidy folder). */
 export const MAX_UPLOADS_PER_LAYOUT = 40;

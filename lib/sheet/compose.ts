@@ -97,14 +97,22 @@ export function composeSheet(req: SheetRequest): SheetResult {
     return page.items;
   };
 
-  // Figures: shelf packing, in order travel, lounge, sleep, section.
+  // Figures: shelf packing, in order travel, lounge, sleep, section; each row centred.
   const { area } = frame;
   let items = newPage();
+  let row: { f: Figure; x: number }[] = [];
   let x = 0;
   let y = 0;
   let rowHeight = 0;
+  const closeRow = () => {
+    const used = row.length ? row[row.length - 1].x + row[row.length - 1].f.width : 0;
+    const shift = (area.width - used) / 2;
+    for (const r of row) items.push(...r.f.draw(area.x + shift + r.x, area.y + y));
+    row = [];
+  };
   for (const f of figures(req)) {
     if (x > 0 && x + f.width > area.width) {
+      closeRow();
       x = 0;
       y += rowHeight + FIGURE_GAP;
       rowHeight = 0;
@@ -115,10 +123,11 @@ export function composeSheet(req: SheetRequest): SheetResult {
       y = 0;
       rowHeight = 0;
     }
-    items.push(...f.draw(area.x + x, area.y + y));
+    row.push({ f, x });
     x += f.width + FIGURE_GAP;
     rowHeight = Math.max(rowHeight, f.height);
   }
+  closeRow();
   const figurePages = pages.length;
 
   // Text: the schedule full width, then checks and cautions in columns.

@@ -17,9 +17,10 @@ import path from 'node:path';
 import crypto from 'node:crypto';
 import { Readable } from 'node:stream';
 import { SNIFF_BYTES, sniffType, typeMismatch, type UploadType } from './file-type';
+import { UPLOAD_LIMIT_BYTES } from './dto';
 
 /** 15 MB (as 15 × 1024 × 1024 bytes): enough for a phone photo or a scanned A3 drawing. */
-export const MAX_UPLOAD_BYTES = 15 * 1024 * 1024;
+export const MAX_UPLOAD_BYTES = UPLOAD_LIMIT_BYTES;
 
 export class PayloadTooLargeError extends Error {
   readonly status = 413;

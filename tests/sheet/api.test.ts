@@ -87,6 +87,7 @@ describe('GET /api/layouts/:id/sheet', () => {
   it('prints an empty bay too (no modules, no doors)', async () => {
     const made = await layoutsRoute.POST(
       new Request('http://localhost:3000/api/layouts', { method: 'POST', headers: { host: 'localhost:3000', 'content-type': 'application/json', cookie: await sessionCookie(w.designer) }, body: JSON.stringify({ name: 'Bare L1H1', bayTemplateId: 'l1h1' }) }),
+      undefined as never,
     );
     const { id } = await made.json();
     const res = await get(id, w.designer);

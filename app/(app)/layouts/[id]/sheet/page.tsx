@@ -1,0 +1,78 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound, redirect } from 'next/navigation';
+import { currentActor } from '@/lib/auth/session';
+import { NotFoundError } from '@/db/errors';
+import { composeSheet, PAPER_MM } from '@/lib/sheet';
+import { sheetQuerySchema, sheetRequestFor } from '@/app/api/layouts/[id]/sheet/sheet-request';
+import { SheetSvg } from '@/components/sheet/SheetSvg';
+import { SheetControls } from '@/components/sheet/SheetControls';
+import { UploadsPanel } from '@/components/uploads/UploadsPanel';
+
+export const metadata: Metadata = { title: 'Plan sheet' };
+
+type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+/**
+ * The printable plan sheet: the same pages as the PDF, drawn as SVG in real millimetres so the
+ * browser prints them true to scale at 100 %; the bar above and the reference files beside it
+ * are left out of print.
+ */
+export default async function SheetPage({ params, searchParams }: Props) {
+  const actor = await currentActor();
+  if (!actor) redirect('/sign-in');
+  const { id } = await params;
+  const ctx = await sheetRequestFor(actor, id).catch((err) => {
+    if (err instanceof NotFoundError) notFound();
+    throw err;
+  });
+  const raw = Object.fromEntries(Object.entries(await searchParams).filter((e): e is [string, string] => typeof e[1] === 'string'));
+  const parsed = sheetQuerySchema.safeParse(raw);
+  const query = parsed.success ? parsed.data : sheetQuerySchema.parse({});
+  const result = composeSheet({ ...ctx.request, paper: query.paper, scale: query.scale });
+  const paper = PAPER_MM[query.paper];
+  const canEdit = actor.role !== 'client';
+
+  return (
+    <div className="sheet-view min-h-[calc(100vh-48px)] bg-paper-deep">
+      <style>{`
+        @page { size: ${paper.label} landscape; margin: 0; }
+        @media print {
+          header, .no-print { display: none !important; }
+          html, body, .sheet-view { background: white !important; }
+          .sheet-stack { padding: 0 !important; gap: 0 !important; }
+          .sheet-page { box-shadow: none !important; break-after: page; width: ${paper.width}mm !important; height: ${paper.height}mm !important; max-width: none !important; }
+          .sheet-page:last-child { break-after: auto; }
+        }
+      `}</style>
+      <SheetControls layoutId={ctx.layoutId} paper={query.paper} scale={query.scale} canDownload={result.ok} />
+      {!parsed.success && (
+        <p role="alert" className="no-print mx-4 mt-3 rounded-sm border border-ochre bg-ochre-light px-3 py-2 text-sm text-ink">
+          That paper or scale is not one we print; showing A4 at 1:20. Choose from the lists above.
+        </p>
+      )}
+      <div className="flex flex-col gap-4 p-4 xl:flex-row xl:items-start">
+        <main className="sheet-stack flex min-w-0 flex-1 flex-col items-center gap-6" aria-label="Plan sheet pages">
+          {result.ok ? (
+            result.sheet.pages.map((page, i) => (
+              <SheetSvg key={i} page={page} label={`Sheet ${i + 1} of ${result.sheet.pages.length}, ${paper.label} landscape at 1:${query.scale}`} />
+            ))
+          ) : (
+            <div role="alert" className="panel max-w-2xl border-brick bg-brick-light p-4 text-sm text-ink" data-testid="sheet-does-not-fit">
+              <p className="mb-2 font-semibold">The bay does not fit this paper at 1:{query.scale}.</p>
+              <p className="mb-3">{result.message}</p>
+              {result.suggestion && (
+                <Link className="btn-primary" href={`/layouts/${ctx.layoutId}/sheet?paper=${result.suggestion.paper}&scale=${result.suggestion.scale}`}>
+                  Show it at 1:{result.suggestion.scale} on {PAPER_MM[result.suggestion.paper].label}
+                </Link>
+              )}
+            </div>
+          )}
+        </main>
+        <aside className="no-print w-full shrink-0 xl:w-80">
+          <UploadsPanel layoutId={ctx.layoutId} canEdit={canEdit} />
+        </aside>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+'use client';
+/**
+ * The bar above the HTML plan sheet (hidden in print): paper and scale, print, download the PDF,
+ * back to the editor. Changing paper or scale reloads the sheet with the new query; it never
+ * lays anything out itself.
+ */
+import Link from 'next/link';
+import { useRouter } from 'next/navigation';
+import { ArrowLeft, Download, Printer } from 'lucide-react';
+
+interface Props {
+  layoutId: string;
+  paper: 'a4' | 'a3';
+  scale: 10 | 20 | 25;
+  /** False when the bay does not fit: the PDF link would only answer 422. */
+  canDownload: boolean;
+}
+
+export function SheetControls({ layoutId, paper, scale, canDownload }: Props) {
+  const router = useRouter();
+  const go = (p: string, s: number) => router.push(`/layouts/${layoutId}/sheet?paper=${p}&scale=${s}`);
+  const pdf = `/api/layouts/${layoutId}/sheet?paper=${paper}&scale=${scale}`;
+  return (
+    <div className="no-print flex flex-wrap items-end gap-4 border-b border-paper-edge bg-paper px-4 py-3">
+      <Link href={`/layouts/${layoutId}`} className="btn-quiet px-2 py-1 text-sm">
+        <ArrowLeft size={14} aria-hidden="true" /> Back to the editor
+      </Link>
+      <h1 className="mr-auto text-lg font-semibold text-ink">Plan sheet</h1>
+      <label className="flex flex-col text-sm">
+        <span className="label">Paper</span>
+        <select className="field" value={paper} onChange={(e) => go(e.target.value, scale)} aria-label="Paper">
+          <option value="a4">A4 landscape</option>
+          <option value="a3">A3 landscape</option>
+        </select>
+      </label>
+      <label className="flex flex-col text-sm">
+        <span className="label">Scale</span>
+        <select className="field font-mono" value={scale} onChange={(e) => go(paper, Number(e.target.value))} aria-label="Scale">
+          <option value={10}>1:10</option>
+          <option value={20}>1:20</option>
+          <option value={25}>1:25</option>
+        </select>
+      </label>
+      <button type="button" className="btn-quiet px-3 py-2" onClick={() => window.print()} disabled={!canDownload}>
+        <Printer size={16} aria-hidden="true" /> Print
+      </button>
+      {canDownload ? (
+        <a className="btn-primary px-3 py-2" href={pdf} download data-testid="download-pdf">
+          <Download size={16} aria-hidden="true" /> Download PDF
+        </a>
+      ) : (
+        <span className="btn-primary cursor-not-allowed px-3 py-2 opacity-50" aria-disabled="true">
+          <Download size={16} aria-hidden="true" /> Download PDF
+        </span>
+      )}
+    </div>
+  );
+}
