@@ -13,6 +13,7 @@ import { BadRequestError, ForbiddenError, NotFoundError, VersionConflictError } 
 import { canEditLayouts, type Actor } from './actor';
 import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
+import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -24,6 +25,8 @@ export interface LayoutSummaryDto {
   version: number;
   updatedAt: string;
   updatedBy: string | null;
+  /** In lists only: state with the client and open comment threads (db/sharing). */
+  sharing?: LayoutSharingSummary;
 }
 
 export interface LayoutDto extends LayoutSummaryDto {
@@ -94,7 +97,9 @@ export async function listLayouts(actor: Actor): Promise<LayoutSummaryDto[]> {
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
     .where(visible)
     .orderBy(desc(layouts.updatedAt));
-  return rows.map(toSummary);
+  const summaries = rows.map(toSummary);
+  const sharing = await sharingSummaries(summaries.map((l) => l.id));
+  return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
 }
 
 /** The stored row if the actor may read it; NotFoundError otherwise. */

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
 import { AppHeader } from '@/components/ui/AppHeader';
+import { outboxEnabled } from '@/lib/mail/outbox-mode';
 
 export const dynamic = 'force-dynamic';
 
@@ -11,7 +12,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   if (!actor) redirect('/sign-in');
   return (
     <div className="flex min-h-screen flex-col">
-      <AppHeader name={actor.name} role={actor.role} />
+      <AppHeader name={actor.name} role={actor.role} showOutbox={actor.role === 'owner' && outboxEnabled()} />
       <div className="flex-1">{children}</div>
     </div>
   );

@@ -6,9 +6,10 @@ import { useQuery } from '@tanstack/react-query';
 import {
   createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState,
 } from '@tanstack/react-table';
-import { ArrowDown, ArrowUp, Plus, Search } from 'lucide-react';
+import { ArrowDown, ArrowUp, MessageSquare, Plus, Search } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { LayoutSummaryDto } from '@/db/layouts';
+import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
 
 const col = createColumnHelper<LayoutSummaryDto>();
 const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
@@ -32,6 +33,21 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
             {c.getValue()} <span className="text-ink-soft">{c.row.original.bay.length} × {c.row.original.bay.width} × {c.row.original.bay.height} mm</span>
           </span>
         ),
+      }),
+      // Working with the client (components/sharing): state from the latest revision, open comment threads.
+      col.accessor((r) => stateWord(r.sharing?.state ?? 'draft'), {
+        id: 'state',
+        header: 'State',
+        cell: (c) => <LayoutStateBadge state={c.row.original.sharing?.state ?? 'draft'} letter={c.row.original.sharing?.latestRevision} />,
+      }),
+      col.accessor((r) => r.sharing?.openComments ?? 0, {
+        id: 'comments',
+        header: 'Comments',
+        cell: (c) => c.getValue() ? (
+          <Link href={`/layouts/${c.row.original.id}`} className="inline-flex items-center gap-1 font-mono" aria-label={`${c.getValue()} open comments`}>
+            <MessageSquare size={12} aria-hidden="true" />{c.getValue()}
+          </Link>
+        ) : <span className="font-mono text-ink-faint">0</span>,
       }),
       col.accessor('moduleCount', { header: 'Modules', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
       col.accessor('updatedAt', {
@@ -111,7 +127,7 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
                 </tr>
               ))}
               {table.getRowModel().rows.length === 0 && (
-                <tr><td colSpan={5} className="px-3 py-6 text-center text-ink-soft">No layout matches “{filter}”.</td></tr>
+                <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-ink-soft">No layout matches “{filter}”.</td></tr>
               )}
             </tbody>
           </table>

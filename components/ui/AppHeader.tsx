@@ -8,12 +8,14 @@ import { Wordmark } from './Wordmark';
 
 const ROLE_WORD = { owner: 'Owner', designer: 'Designer', client: 'Client' } as const;
 
-export function AppHeader({ name, role }: { name: string; role: keyof typeof ROLE_WORD }) {
+export function AppHeader({ name, role, showOutbox = false }: { name: string; role: keyof typeof ROLE_WORD; showOutbox?: boolean }) {
   const path = usePathname();
   const links = [
     { href: '/layouts', label: 'Layouts' },
     ...(role !== 'client' ? [{ href: '/clients', label: 'Clients' }] : []),
     { href: '/settings', label: 'Settings' },
+    // The development outbox (components/sharing): owners only, never in production.
+    ...(showOutbox ? [{ href: '/outbox', label: 'Outbox' }] : []),
   ];
   return (
     <header className="flex h-12 items-center gap-6 border-b border-paper-edge bg-paper px-4">

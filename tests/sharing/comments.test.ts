@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { count } from 'drizzle-orm';
 import * as threads from '@/app/api/layouts/[id]/comments/route';
 import * as oneThread from '@/app/api/layouts/[id]/comments/[commentId]/route';
+import * as layoutList from '@/app/api/layouts/route';
 import { comments } from '@/db/schema';
 import { openThreadCounts } from '@/db/sharing/comments';
 import type { Db } from '@/db/client';
@@ -110,5 +111,12 @@ describe('resolving threads', () => {
     expect(other.body.threads).toEqual([]);
     const mine = await call(threads.GET, { params: { id: w.clientLayoutId }, as: w.client });
     expect(mine.body.threads.map((t: { arrangement: string }) => t.arrangement)).toEqual(['sleep', 'travel']);
+  });
+
+  it('counts open threads per layout in the layouts list', async () => {
+    const res = await call(layoutList.GET, { as: w.owner });
+    const count = (id: string) => res.body.layouts.find((l: { id: string }) => l.id === id).sharing.openComments;
+    expect(count(w.clientLayoutId)).toBe(2);
+    expect(count(w.otherLayoutId)).toBe(0);
   });
 });

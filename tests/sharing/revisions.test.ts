@@ -7,6 +7,7 @@ import * as one from '@/app/api/layouts/[id]/revisions/[revisionId]/route';
 import * as decision from '@/app/api/layouts/[id]/revisions/[revisionId]/decision/route';
 import * as compare from '@/app/api/layouts/[id]/revisions/compare/route';
 import * as layoutRoute from '@/app/api/layouts/[id]/route';
+import * as layoutList from '@/app/api/layouts/route';
 import { layouts, revisionDecisions, revisions } from '@/db/schema';
 import type { Db } from '@/db/client';
 import type { FakeSmtp } from '@/lib/fakes/smtp/server';
@@ -189,6 +190,15 @@ describe('approving and asking for changes', () => {
     }
     const rows = await db.select().from(revisionDecisions).where(eq(revisionDecisions.revisionId, B));
     expect(rows.filter((r) => r.decision === 'approved')).toHaveLength(1);
+  });
+
+  it('shows each layout’s state in the layouts list: approved, sent, draft', async () => {
+    const res = await call(layoutList.GET, { as: w.designer });
+    const state = (name: string) => res.body.layouts.find((l: { name: string }) => l.name === name).sharing;
+    expect(state('Nair — L2H2 weekender')).toMatchObject({ state: 'approved', latestRevision: 'B' });
+    expect(state('Adeyemi — L3H2 touring')).toMatchObject({ state: 'draft', latestRevision: null });
+    const mine = await call(layoutList.GET, { as: w.client });
+    expect(mine.body.layouts.map((l: { sharing: { state: string } }) => l.sharing.state)).toEqual(['approved']);
   });
 
   it('lets only one of two racing approvals land', async () => {

@@ -107,9 +107,11 @@ describe('opening a viewer link', () => {
     expect(res.headers.get('cache-control')).toMatch(/no-store/);
   });
 
-  it('records when a person opened it, but not the background poll', async () => {
+  it('records when a person opened the page, but not the document refetches nor the poll', async () => {
     const { token, link } = await newLink();
-    await open(token);
+    // The page (app/v/[token]) resolves with touch; the API routes never do.
+    expect((await resolveViewerLink(token, { touch: true })).status).toBe('active');
+    expect((await resolveViewerLink(token, { touch: true })).status).toBe('active');
     await open(token);
     for (let i = 0; i < 3; i++) expect((await call(viewerVersion.GET, { params: { token } })).status).toBe(200);
     const listed = await call(links.GET, { params: { id: w.clientLayoutId }, as: w.designer });

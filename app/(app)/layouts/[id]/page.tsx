@@ -4,11 +4,11 @@ import { currentActor } from '@/lib/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';
-import { EditorLoader } from '@/components/editor/EditorLoader';
+import { LayoutWorkspace } from '@/components/sharing/LayoutWorkspace';
 
 export const metadata: Metadata = { title: 'Layout' };
 
-export default async function LayoutPage({ params }: { params: Promise<{ id: string }> }) {
+export default async function LayoutPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
   const { id } = await params;
@@ -17,9 +17,11 @@ export default async function LayoutPage({ params }: { params: Promise<{ id: str
     throw err;
   });
   const studio = await getStudio(actor);
+  const { comment } = await searchParams;
   return (
     <div className="h-[calc(100vh-48px)]">
-      <EditorLoader layoutId={layout.id} initialDoc={layout.doc} initialVersion={layout.version} canEdit={layout.canEdit} units={studio.units} />
+      {/* The editor with comment pins, the comments column and the sharing entry points (components/sharing). */}
+      <LayoutWorkspace layoutId={layout.id} initialDoc={layout.doc} initialVersion={layout.version} canEdit={layout.canEdit} units={studio.units} focusComment={typeof comment === 'string' ? comment : null} />
     </div>
   );
 }

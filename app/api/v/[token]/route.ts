@@ -8,11 +8,12 @@ type Ctx = { params: Promise<{ token: string }> };
 
 /**
  * What a viewer link shows: one document (the live layout or the frozen revision), its name and
- * the studio's name. No session is read; nothing here can write.
+ * the studio's name. No session is read; nothing here can write. Opening the page (app/v) counts
+ * as a visit; this fetch, which a live page repeats after each save, does not.
  */
 const get = handle<Ctx>(async (req, { params }) => {
   takeViewerToken(req);
-  const resolved = await resolveViewerLink((await params).token, { touch: true });
+  const resolved = await resolveViewerLink((await params).token);
   if (resolved.status !== 'active') refuseUnusable(resolved);
   const { checkDefaults: _defaults, ...content } = resolved.content;
   return json(content, { headers: { ETag: `"${content.version}"` } });
