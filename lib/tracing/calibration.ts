@@ -96,3 +96,18 @@ export function calibrate(current: TracingPlacement, first: Point, second: Point
 export function drawnSize(imageWidthPx: number, imageHeightPx: number, placement: TracingPlacement): { length: number; width: number } {
   return { length: imageWidthPx * placement.mmPerPx, width: imageHeightPx * placement.mmPerPx };
 }
+
+/**
+ * A placement at scale `mmPerPx` and `rotation` that puts image point `imagePoint` on bay point
+ * `bayPoint` — e.g. the corner of the bulkhead and the left wall clicked on a photo, placed at
+ * bay (0, 0).
+ */
+export function placeByAnchor(imagePoint: Point, bayPoint: Point, mmPerPx: number, rotation = 0, opacity = UNCALIBRATED.opacity): TracingPlacement {
+  const offset = imageToBay(imagePoint, { x: 0, y: 0, mmPerPx, rotation, opacity });
+  return { x: bayPoint.x - offset.x, y: bayPoint.y - offset.y, mmPerPx, rotation, opacity };
+}
+
+/** Calibration straight from clicks on the image: two image points, the real distance, and where the first point is in the bay. */
+export function calibrateFromImage(first: Point, second: Point, realMm: number, firstInBay: Point, rotation = 0, opacity = UNCALIBRATED.opacity): TracingPlacement {
+  return placeByAnchor(first, firstInBay, scaleFromTwoPoints(first, second, realMm), rotation, opacity);
+}

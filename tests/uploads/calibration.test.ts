@@ -102,3 +102,25 @@ describe('placement bounds', () => {
     expect(drawnSize(4000, 3000, { ...UNCALIBRATED, mmPerPx: 0.75 })).toEqual({ length: 3000, width: 2250 });
   });
 });
+
+describe('calibrating from clicks on the image', () => {
+  it('puts the first point on the bay point and scales by the typed distance (worked by hand)', async () => {
+    const { calibrateFromImage } = await import('@/lib/tracing/calibration');
+    // A photo of the floor: the bulkhead-left-wall corner at image (40, 60), a tape mark 1000 mm
+    // along the wall at image (440, 60): 400 px = 1000 mm → 2.5 mm/px. Corner at bay (0, 0):
+    // origin = (0 − 2.5·40, 0 − 2.5·60) = (−100, −150).
+    const p = calibrateFromImage({ x: 40, y: 60 }, { x: 440, y: 60 }, 1000, { x: 0, y: 0 });
+    expect(p).toEqual({ x: -100, y: -150, mmPerPx: 2.5, rotation: 0, opacity: 0.5 });
+    const mark = imageToBay({ x: 440, y: 60 }, p);
+    expect(mark.x).toBeCloseTo(1000, 9);
+    expect(mark.y).toBeCloseTo(0, 9);
+  });
+
+  it('turned 90°, the tape along the image x axis runs across the bay', async () => {
+    const { calibrateFromImage } = await import('@/lib/tracing/calibration');
+    const p = calibrateFromImage({ x: 0, y: 0 }, { x: 200, y: 0 }, 500, { x: 300, y: 40 }, 90);
+    const far = imageToBay({ x: 200, y: 0 }, p);
+    expect(far.x).toBeCloseTo(300, 9);
+    expect(far.y).toBeCloseTo(540, 9);
+  });
+});

@@ -1,0 +1,98 @@
+'use client';
+/**
+ * The editor toolbar's "File" menu: open the plan sheet, export the plan as PNG or the layout as
+ * JSON, import a JSON layout as a new layout (owners and designers). Import validates the file
+ * with the layout schema first and lists each problem with its field path; the server checks it
+ * again. Reads the editor's store; never changes the open document.
+ */
+import { useRef, useState } from 'react';
+import Link from 'next/link';
+import { useRouter } from 'next/navigation';
+import { toast } from 'sonner';
+import { ChevronDown, FileDown, FileImage, FileJson, FileUp, Printer } from 'lucide-react';
+import { apiFetch, ApiError } from '@/lib/api/client-fetch';
+import { Dialog } from '@/components/editor/panels/Dialog';
+import { useEditorApi } from '@/components/editor/store/EditorStoreContext';
+import { downloadBlob, planToPng } from './exportPlan';
+import { issueLines, layoutFileName, layoutFileText, readLayoutFile } from './layoutFile';
+
+export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdit: boolean }) {
+  const api = useEditorApi();
+  const router = useRouter();
+  const [open, setOpen] = useState(false);
+  const [problems, setProblems] = useState<{ file: string; lines: string[] } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const root = useRef<HTMLDivElement>(null);
+  const input = useRef<HTMLInputElement>(null);
+
+  async function exportPng() {
+    setOpen(false);
+    const plan = root.current?.closest('[data-testid="editor"]')?.querySelector<HTMLElement>('[data-testid="plan"]');
+    try {
+      if (!plan) throw new Error('The plan is not on screen.');
+      downloadBlob(await planToPng(plan), layoutFileName(api.getState().doc.name, `${api.getState().arrangement}.png`));
+    } catch (err) {
+      toast.error(err instanceof Error ? err.message : 'The PNG could not be made.');
+    }
+  }
+
+  function exportJson() {
+    setOpen(false);
+    const { doc } = api.getState();
+    downloadBlob(new Blob([layoutFileText(doc)], { type: 'application/json' }), layoutFileName(doc.name));
+  }
+
+  async function importFile(file: File) {
+    setBusy(true);
+    try {
+      const result = readLayoutFile(await file.text(), file.size);
+      if (!result.ok) return setProblems({ file: file.name, lines: issueLines(result.issues) });
+      const name = `${result.name} (imported)`.slice(0, 120);
+      const created = await apiFetch<{ id: string }>('/api/layouts', { method: 'POST', json: { name, doc: result.doc } });
+      toast.success(`Imported as “${name}”.`);
+      router.push(`/layouts/${created.id}`);
+    } catch (err) {
+      if (err instanceof ApiError && err.issues.length) setProblems({ file: file.name, lines: issueLines(err.issues) });
+      else toast.error(err instanceof Error ? err.message : 'The import failed.');
+    } finally {
+      setBusy(false);
+      if (input.current) input.current.value = '';
+    }
+  }
+
+  const item = 'flex w-full items-center gap-2 px-3 py-1.5 text-left text-sm hover:bg-paper-deep focus-visible:bg-paper-deep focus-visible:outline-none';
+  return (
+    <div ref={root} className="relative" onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}>
+      <button type="button" className="btn-quiet px-2 py-1" aria-haspopup="menu" aria-expanded={open} onClick={() => setOpen((o) => !o)} disabled={busy}>
+        <FileDown size={14} aria-hidden="true" /> File <ChevronDown size={12} aria-hidden="true" />
+      </button>
+      {open && (
+        <div role="menu" aria-label="File" className="absolute right-0 z-30 mt-1 w-56 rounded-sm border border-paper-edge bg-paper py-1 shadow-lg">
+          <Link role="menuitem" href={`/layouts/${layoutId}/sheet`} className={item} onClick={() => setOpen(false)}>
+            <Printer size={14} aria-hidden="true" /> Plan sheet (print, PDF)
+          </Link>
+          <button role="menuitem" type="button" className={item} onClick={exportPng}>
+            <FileImage size={14} aria-hidden="true" /> Export PNG of this view
+          </button>
+          <button role="menuitem" type="button" className={item} onClick={exportJson}>
+            <FileJson size={14} aria-hidden="true" /> Export JSON
+          </button>
+          {canEdit && (
+            <button role="menuitem" type="button" className={item} onClick={() => { setOpen(false); input.current?.click(); }}>
+              <FileUp size={14} aria-hidden="true" /> Import JSON as a new layout…
+            </button>
+          )}
+        </div>
+      )}
+      <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to import"
+        onChange={(e) => e.target.files?.[0] && importFile(e.target.files[0])} />
+      <Dialog open={problems !== null} title="This file is not a layout Baywright can read" onClose={() => setProblems(null)} testId="import-problems">
+        <p className="mb-2 text-sm">{problems?.file} has these problems (field path: what is wrong):</p>
+        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 font-mono text-xs">
+          {problems?.lines.map((l, i) => <li key={i}>{l}</li>)}
+        </ul>
+        <button type="button" className="btn-primary" onClick={() => setProblems(null)}>Close</button>
+      </Dialog>
+    </div>
+  );
+}
