@@ -13,22 +13,28 @@ const OURS = /^(fit|walkway|headroom|sleep|egress|travel)\./;
 const ourFindings = (doc: LayoutDoc) => runChecks(doc).findings.filter((f) => OURS.test(f.id));
 
 describe('starter layouts', () => {
-  it('the L-shaped lounge passes every geometry rule; its one warning is the 510 mm squeeze between table and right wheel arch', () => {
+  it('the L-shaped lounge passes every geometry rule, the table leaving a 600 mm corridor to the right wheel arch', () => {
     const doc = starterLayout('starter-l-lounge')!;
     const report = runChecks(doc);
     const mine = report.findings.filter((f) => OURS.test(f.id));
-    expect(mine.filter((f) => f.status === 'fail')).toEqual([]);
-    expect(mine.filter((f) => f.status === 'warn').map((f) => [f.id, f.arrangement, f.measured])).toEqual([['walkway.width', 'lounge', 510]]);
+    expect(mine.filter((f) => f.status !== 'pass')).toEqual([]);
+    // Moved back 40 mm onto the bench's edge (table at y 560–960, arch from y 1560), the warning at 510 mm is gone.
+    expect(only(doc, 'walkway.width', 'lounge').measured).toBeGreaterThanOrEqual(550);
+    // The same layout with the table where it was (y 650–1050) is squeezed to 510 mm: a warning, not a failure.
+    const squeezed = { ...doc, modules: doc.modules.map((m) => (m.id === 'table' ? { ...m, y: 650 } : m)) };
+    expect(only(squeezed, 'walkway.width', 'lounge')).toMatchObject({ status: 'warn', measured: 510 });
     const length = only(doc, 'sleep.length', 'sleep');
     expect(length).toMatchObject({ measured: 2000 });
     expect(length.message).toMatch(/UK king \(1500 × 2000 mm\) slept lengthways/);
     expect(only(doc, 'sleep.width', 'sleep').measured).toBe(1500);
     expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'pass', measured: 1900, required: 1870 });
   });
-  it('the fixed rear bed: the electrics bay facing the rear doors under the bed cannot be worked from inside', () => {
+  it('the fixed rear bed: every unit can be worked from inside; turned to face the rear doors under the bed, the electrics bay cannot', () => {
     const doc = starterLayout('starter-rear-bed')!;
-    for (const a of ['travel', 'lounge']) expect(only(doc, 'walkway.reach', a)).toMatchObject({ status: 'fail', moduleIds: ['electrics'], measured: 6, required: 7 });
-    const mine = ourFindings(doc).filter((f) => f.status === 'fail');
+    expect(ourFindings(doc).filter((f) => f.status === 'fail')).toEqual([]);
+    const turned = { ...doc, modules: doc.modules.map((m) => (m.id === 'electrics' ? { ...m, x: 3150, y: 900, facing: 'rear' as const } : m)) };
+    for (const a of ['travel', 'lounge']) expect(only(turned, 'walkway.reach', a)).toMatchObject({ status: 'fail', moduleIds: ['electrics'], measured: 6, required: 7 });
+    const mine = ourFindings(turned).filter((f) => f.status === 'fail');
     expect(mine.map((f) => f.id)).toEqual(['walkway.reach', 'walkway.reach']);
     expect(only(doc, 'sleep.length', 'sleep').message).toMatch(/UK double/);
     expect(only(doc, 'egress.sleep', 'sleep').status).toBe('pass');
