@@ -79,7 +79,7 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
         {canEdit && <PartsShelf focusPlan={focusPlan} />}
         <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">
           <div ref={planBox} className="relative min-h-0 flex-1">
-            <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" overlay={extensions?.planOverlay} />
+            <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" overlay={extensions?.planOverlay} underlay={extensions?.planUnderlay} />
             {menu && <ContextMenu at={menu} onClose={closeMenu} />}
           </div>
           <Tabs

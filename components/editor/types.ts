@@ -24,6 +24,8 @@ export interface EditorProps {
 export interface EditorExtensions {
   /** Extra Konva layers drawn over the plan (world space through the viewport given). */
   planOverlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
+  /** Extra Konva layers drawn under the plan (tracing photos), never listening for events. */
+  planUnderlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
   /** Extra controls at the right end of the toolbar. */
   toolbarExtra?: ReactNode;
   /** Where findings come from instead of POST /api/checks (a viewer link has no session). */

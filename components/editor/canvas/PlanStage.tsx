@@ -19,7 +19,7 @@ import type { EditorExtensions } from '../types';
 
 const NONE: string[] = [];
 
-export function PlanStage({ failing, onContextMenu, describedBy, overlay }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string; overlay?: EditorExtensions['planOverlay'] }) {
+export function PlanStage({ failing, onContextMenu, describedBy, overlay, underlay }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string; overlay?: EditorExtensions['planOverlay']; underlay?: EditorExtensions['planUnderlay'] }) {
   const api = useEditorApi();
   const box = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState<{ w: number; h: number } | null>(null);
@@ -68,6 +68,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay }: { fa
     >
       {size && (
         <Stage width={size.w} height={size.h}>
+          {underlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
           <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} ghost={s.ghost} hidden={moving ? s.gestureIds : NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
