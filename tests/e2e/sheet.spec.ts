@@ -1,0 +1,76 @@
+// The plan sheet and reference files in the browser: a designer opens the sheet, downloads the
+// PDF (read back: A4 landscape per ISO 216, title block), uploads a photo and sees it listed;
+// a scale that does not fit says so; the layout's client sees the files but cannot add any.
+import fs from 'node:fs';
+import { expect, test, type Page } from '@playwright/test';
+import { keepScreenshot, signIn } from './helpers';
+import { pngBytes } from '../uploads/fixtures';
+import { readPdf } from '../sheet/read-pdf';
+
+async function openSheet(page: Page, layout = 'Nair — L2H2 weekender') {
+  const href = await page.getByRole('link', { name: layout }).first().getAttribute('href');
+  expect(href).toMatch(/^\/layouts\/[0-9a-f-]{36}$/);
+  await page.goto(`${href}/sheet`);
+  await expect(page.getByRole('heading', { name: 'Plan sheet' })).toBeVisible();
+  return href!;
+}
+
+test('a designer opens the plan sheet, downloads the PDF and adds a reference photo', async ({ page }, info) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openSheet(page);
+
+  const first = page.getByRole('img', { name: /^Sheet 1 of \d+, A4 landscape at 1:20$/ });
+  await expect(first).toBeVisible();
+  await expect(first).toHaveAttribute('width', '297mm');
+  await expect(first).toHaveAttribute('height', '210mm');
+  await expect(first.getByText('Saltmarsh Van Works')).toBeVisible();
+  await keepScreenshot(page, 'sheet-a4-1-20');
+
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('download-pdf').click()]);
+  expect(download.suggestedFilename()).toMatch(/plan sheet A4 1-20\.pdf$/);
+  const file = info.outputPath('sheet.pdf');
+  await download.saveAs(file);
+  const bytes = new Uint8Array(fs.readFileSync(file));
+  expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-');
+  const read = await readPdf(bytes);
+  expect(read.pages[0].width).toBeCloseTo(841.89, 1); // 297 mm at 72 pt per 25.4 mm
+  expect(read.pages[0].height).toBeCloseTo(595.28, 1);
+  expect(read.pages[0].texts.map((t) => t.str)).toEqual(expect.arrayContaining(['Nair — L2H2 weekender', 'Priya Nair', '1:20']));
+
+  const list = page.getByRole('list', { name: 'Reference files' });
+  await expect(page.getByText(/No reference files yet|Reference files/).first()).toBeVisible();
+  await page.getByLabel('Choose a photo or drawing').setInputFiles({ name: 'side door open.png', mimeType: 'image/png', buffer: pngBytes(320, 200, [110, 130, 140]) });
+  await expect(list.getByRole('link', { name: 'side door open.png' })).toBeVisible();
+  await expect(list).toContainText('Photo');
+  await keepScreenshot(page, 'sheet-with-reference-photo');
+
+  // A file that is not what it claims is refused with the server's reason.
+  await page.getByLabel('Choose a photo or drawing').setInputFiles({ name: 'notes.png', mimeType: 'image/png', buffer: Buffer.from('not really a picture') });
+  await expect(page.getByRole('alert').filter({ hasText: 'not a JPEG, PNG, WebP or PDF' })).toBeVisible();
+
+  // After a reload the photo is still there (stored, not just shown).
+  await page.reload();
+  await expect(page.getByRole('list', { name: 'Reference files' }).getByRole('link', { name: 'side door open.png' })).toBeVisible();
+});
+
+test('a scale the bay does not fit at says so and offers one that fits', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openSheet(page);
+  await page.getByLabel('Scale').selectOption('10');
+  const alert = page.getByTestId('sheet-does-not-fit');
+  await expect(alert).toContainText('does not fit on A4 landscape at 1:10');
+  await keepScreenshot(page, 'sheet-does-not-fit');
+  await alert.getByRole('link', { name: 'Show it at 1:20 on A4' }).click();
+  await expect(page.getByRole('img', { name: /A4 landscape at 1:20$/ }).first()).toBeVisible();
+  await page.getByLabel('Paper').selectOption('a3');
+  await expect(page.getByRole('img', { name: /^Sheet 1 of \d+, A3 landscape at 1:20$/ })).toHaveAttribute('width', '420mm');
+});
+
+test('the layout’s client sees the sheet and the files but cannot add or delete', async ({ page }) => {
+  await signIn(page, 'priya@client.test');
+  await openSheet(page);
+  await expect(page.getByRole('img', { name: /^Sheet 1 of/ })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Reference files' })).toBeVisible();
+  await expect(page.getByLabel('Choose a photo or drawing')).toHaveCount(0);
+  await expect(page.getByRole('button', { name: /^Delete / })).toHaveCount(0);
+});
