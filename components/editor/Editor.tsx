@@ -64,9 +64,9 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
       Checks
       {checks.report && (
         <span className="flex items-center gap-1.5 font-mono text-xs" data-testid="checks-counts">
-          <span className="inline-flex items-center gap-0.5 text-brick"><CircleX size={12} aria-hidden />{counts.fail}</span>
-          <span className="inline-flex items-center gap-0.5 text-ochre"><CircleAlert size={12} aria-hidden />{counts.warn}</span>
-          <span className="inline-flex items-center gap-0.5 text-moss"><CircleCheck size={12} aria-hidden />{counts.pass}</span>
+          <span className="inline-flex items-center gap-0.5 text-ink"><CircleX size={12} aria-hidden className="text-brick" />{counts.fail}</span>
+          <span className="inline-flex items-center gap-0.5 text-ink"><CircleAlert size={12} aria-hidden className="text-ochre" />{counts.warn}</span>
+          <span className="inline-flex items-center gap-0.5 text-ink"><CircleCheck size={12} aria-hidden className="text-moss" />{counts.pass}</span>
         </span>
       )}
     </span>

@@ -65,13 +65,36 @@ describe('live checks client', () => {
     expect(contentKey(a)).not.toBe(contentKey(b));
   });
 
+  it('throttle with real timers: folds a burst into a trailing call (the browser calls setTimeout unbound)', async () => {
+    const original = globalThis.setTimeout;
+    // Like a browser: setTimeout called as a method of some other object is an "Illegal invocation".
+    const strict = function (this: unknown, fn: () => void, ms?: number) {
+      if (this !== undefined && this !== globalThis) throw new TypeError('Illegal invocation');
+      return original(fn, ms);
+    };
+    vi.stubGlobal('setTimeout', strict);
+    try {
+      const emitted: number[] = [];
+      const t = createThrottle<number>(30, (v) => emitted.push(v));
+      t.push(1);
+      t.push(2);
+      t.push(3);
+      expect(emitted).toEqual([1]);
+      await new Promise((r) => original(r, 60));
+      expect(emitted).toEqual([1, 3]);
+      t.cancel();
+    } finally {
+      vi.unstubAllGlobals();
+    }
+  });
+
   it('throttle: the first change goes at once, a burst folds into one trailing call', () => {
     let now = 0;
     const timers: { at: number; fn: () => void }[] = [];
     const emitted: number[] = [];
     const t = createThrottle<number>(150, (v) => emitted.push(v), {
-      set: ((fn: () => void, ms: number) => { timers.push({ at: now + ms, fn }); return timers.length as unknown as ReturnType<typeof setTimeout>; }) as unknown as typeof setTimeout,
-      clear: (() => undefined) as typeof clearTimeout,
+      set: (fn: () => void, ms: number) => { timers.push({ at: now + ms, fn }); return timers.length; },
+      clear: () => undefined,
       now: () => now,
     });
     t.push(1);

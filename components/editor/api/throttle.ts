@@ -8,10 +8,23 @@ export interface Throttle<T> {
   cancel(): void;
 }
 
-export function createThrottle<T>(windowMs: number, emit: (value: T) => void, timers: { set: typeof setTimeout; clear: typeof clearTimeout; now: () => number } = { set: setTimeout, clear: clearTimeout, now: () => Date.now() }): Throttle<T> {
+export interface ThrottleTimers {
+  set: (fn: () => void, ms: number) => unknown;
+  clear: (handle: unknown) => void;
+  now: () => number;
+}
+
+/** Real timers, called as plain functions (a browser refuses setTimeout called as a method of another object). */
+const realTimers: ThrottleTimers = {
+  set: (fn, ms) => setTimeout(fn, ms),
+  clear: (handle) => clearTimeout(handle as ReturnType<typeof setTimeout>),
+  now: () => Date.now(),
+};
+
+export function createThrottle<T>(windowMs: number, emit: (value: T) => void, timers: ThrottleTimers = realTimers): Throttle<T> {
   let last = -Infinity;
   let pending: { value: T } | null = null;
-  let timer: ReturnType<typeof setTimeout> | null = null;
+  let timer: unknown = null;
   const fire = () => {
     timer = null;
     if (!pending) return;

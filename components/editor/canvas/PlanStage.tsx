@@ -64,6 +64,8 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts."
       aria-describedby={describedBy}
       data-testid="plan"
+      data-scale={s.viewport.scale}
+      data-origin={`${Math.round(s.viewport.originX)},${Math.round(s.viewport.originY)}`}
       className="relative h-full w-full overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-copper focus-visible:ring-inset touch-none select-none"
     >
       {size && (

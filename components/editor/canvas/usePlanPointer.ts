@@ -35,6 +35,11 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
   useEffect(() => {
     const el = container.current;
     if (!el) return;
+    const setStroke = (next: Stroke | null) => {
+      stroke.current = next;
+      el.dataset.stroke = next?.mode ?? 'none';
+    };
+    el.dataset.stroke = 'none';
     const local = (e: { clientX: number; clientY: number }) => {
       const r = el.getBoundingClientRect();
       return { x: e.clientX - r.left, y: e.clientY - r.top };
@@ -62,7 +67,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         touches.current.set(e.pointerId, local(e));
         if (touches.current.size === 2) {
           api.getState().cancelGesture();
-          stroke.current = { mode: 'ignored' };
+          setStroke({ mode: 'ignored' });
           const [a, b] = [...touches.current.values()];
           pinch.current = { dist: Math.hypot(a.x - b.x, a.y - b.y), midX: (a.x + b.x) / 2, midY: (a.y + b.y) / 2 };
           return;
@@ -72,7 +77,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const p = local(e);
       if (e.button === 1 || (e.button === 0 && space.current)) {
         e.preventDefault();
-        stroke.current = { mode: 'pan', lastX: p.x, lastY: p.y };
+        setStroke({ mode: 'pan', lastX: p.x, lastY: p.y });
         el!.setPointerCapture(e.pointerId);
         el!.style.cursor = 'grabbing';
         return;
@@ -86,7 +91,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
         if (m && h) {
           s.beginResize(m.id, h);
-          stroke.current = { mode: 'gesture', startX: w.x, startY: w.y };
+          setStroke({ mode: 'gesture', startX: w.x, startY: w.y });
           return;
         }
       }
@@ -95,11 +100,11 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         if (e.shiftKey) s.select([hit.id], 'toggle');
         else if (!s.selection.includes(hit.id)) s.select([hit.id]);
         const sel = api.getState().selection;
-        stroke.current = !s.readOnly && sel.includes(hit.id) ? { mode: 'press', startX: w.x, startY: w.y, ids: sel, hitId: hit.id, shift: e.shiftKey } : { mode: 'ignored' };
+        setStroke(!s.readOnly && sel.includes(hit.id) ? { mode: 'press', startX: w.x, startY: w.y, ids: sel, hitId: hit.id, shift: e.shiftKey } : { mode: 'ignored' });
         return;
       }
       s.beginMarquee(w.x, w.y, e.shiftKey);
-      stroke.current = { mode: 'gesture', startX: w.x, startY: w.y };
+      setStroke({ mode: 'gesture', startX: w.x, startY: w.y });
     }
 
     function onPointerMove(e: PointerEvent) {
@@ -122,7 +127,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const s = api.getState();
       if (st.mode === 'pan') {
         s.panBy(p.x - st.lastX, p.y - st.lastY);
-        stroke.current = { ...st, lastX: p.x, lastY: p.y };
+        setStroke({ ...st, lastX: p.x, lastY: p.y });
         return;
       }
       if (st.mode === 'ignored') return;
@@ -131,10 +136,10 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         const moved = Math.hypot(w.x - st.startX, w.y - st.startY) * s.viewport.scale;
         if (moved < DRAG_START_PX) return;
         s.beginMove(st.ids);
-        stroke.current = { mode: 'gesture', startX: st.startX, startY: st.startY };
+        setStroke({ mode: 'gesture', startX: st.startX, startY: st.startY });
       } else if (!s.gesture) {
         // Escape dropped the gesture: ignore the rest of this stroke.
-        stroke.current = { mode: 'ignored' };
+        setStroke({ mode: 'ignored' });
         return;
       }
       api.getState().dragTo(w.x - st.startX, w.y - st.startY);
@@ -146,7 +151,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         if (touches.current.size < 2) pinch.current = null;
       }
       const st = stroke.current;
-      stroke.current = null;
+      setStroke(null);
       if (el!.hasPointerCapture(e.pointerId)) el!.releasePointerCapture(e.pointerId);
       if (st?.mode === 'gesture') report(api.getState().commitGesture());
       // A plain click (no drag) on one of several selected modules selects just that one.
@@ -157,7 +162,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     function onPointerCancel(e: PointerEvent) {
       touches.current.delete(e.pointerId);
       pinch.current = null;
-      stroke.current = null;
+      setStroke(null);
       api.getState().cancelGesture();
     }
 

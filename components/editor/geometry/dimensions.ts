@@ -46,8 +46,9 @@ export function moduleDimensions(doc: LayoutDoc, m: Module, arrangement: Arrange
     { role: 'size', axis: 'x', from: m.x, to: m.x + m.length, at: m.y - 1, value: m.length },
     { role: 'size', axis: 'y', from: m.y, to: m.y + m.width, at: m.x - 1, value: m.width },
   ];
-  const midX = m.x + m.length / 2;
-  const midY = m.y + m.width / 2;
+  // Gap strings run off-centre so they do not cross the module's own size strings.
+  const midX = m.x + m.length * 0.72;
+  const midY = m.y + m.width * 0.72;
 
   // Towards the left wall (smaller y)
   const up = nearestBefore(others, m, 'y');

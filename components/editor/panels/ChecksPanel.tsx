@@ -15,9 +15,10 @@ import type { LiveChecks } from '../api/useLiveChecks';
 import { groupFindings } from './findingGroups';
 
 export const STATUS_LOOK: Record<FindingStatus, { word: string; Icon: typeof CircleCheck; cls: string }> = {
-  fail: { word: 'Fail', Icon: CircleX, cls: 'text-brick bg-brick-light' },
-  warn: { word: 'Warn', Icon: CircleAlert, cls: 'text-ochre bg-ochre-light' },
-  pass: { word: 'Pass', Icon: CircleCheck, cls: 'text-moss bg-moss-light' },
+  // Words in ink on the light status tint (contrast); the icon carries the status colour.
+  fail: { word: 'Fail', Icon: CircleX, cls: 'text-ink bg-brick-light [&>svg]:text-brick' },
+  warn: { word: 'Warn', Icon: CircleAlert, cls: 'text-ink bg-ochre-light [&>svg]:text-ochre' },
+  pass: { word: 'Pass', Icon: CircleCheck, cls: 'text-ink bg-moss-light [&>svg]:text-moss' },
 };
 
 function amount(v: number | undefined, unit: string | undefined, units: LengthUnit): string | undefined {
@@ -48,7 +49,7 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
           {status === 'unavailable' && (<><CloudOff size={13} aria-hidden /> checks unavailable{message ? `: ${message}` : ''}</>)}
           {status === 'refused' && (<><CircleX size={13} aria-hidden /> the check service refused this layout{message ? `: ${message}` : ''}</>)}
         </span>
-        {stale && report && <span className="rounded bg-ochre-light px-1.5 text-ochre">showing results for an earlier version</span>}
+        {stale && report && <span className="rounded bg-ochre-light px-1.5 text-ink">showing results for an earlier version</span>}
         <label className="ml-auto flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={showPass} onChange={(e) => setShowPass(e.target.checked)} /> show passes</label>
       </div>
       <div className={`min-h-0 flex-1 overflow-auto px-4 py-2 ${stale ? 'opacity-60' : ''}`}>
@@ -87,7 +88,7 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
                             {measured && <> · measured {measured}</>}
                             {required && <> · required {required}</>}
                           </span>
-                          {f.source && <span className="block text-[11px] text-ink-faint">Source: {f.source}</span>}
+                          {f.source && <span className="block text-[11px] text-ink-soft">Source: {f.source}</span>}
                         </span>
                       </button>
                     </li>
@@ -97,7 +98,7 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
             ))}
           </section>
         ))}
-        <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-faint">
+        <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-soft">
           Checks are planning aids, not certification. Gas, 230 V, heating, seat belts and weight limits must follow your local codes and be fitted and signed off by a qualified, licensed person.
         </p>
       </div>

@@ -20,6 +20,8 @@ export function CommandButton({ id, withLabel = false, pressed }: { id: string; 
   const api = useEditorApi();
   const c = command(id);
   const enabled = useEditor((s) => c.enabled(s));
+  // Undo and redo name the step they would take ("Undo Move 1 module").
+  const step = useEditor((s) => (id === 'edit.undo' ? s.history.past[s.history.past.length - 1]?.label : id === 'edit.redo' ? s.history.future[0]?.label : undefined));
   const Icon = ICONS[id];
   const keys = formatShortcut(c.shortcut[0], isMacPlatform());
   return (
@@ -28,7 +30,7 @@ export function CommandButton({ id, withLabel = false, pressed }: { id: string; 
       disabled={!enabled}
       aria-pressed={pressed}
       aria-keyshortcuts={c.shortcut[0].replace('Mod', isMacPlatform() ? 'Meta' : 'Control')}
-      title={`${c.label} (${keys})`}
+      title={`${c.label}${step ? `: ${step}` : ''} (${keys})`}
       aria-label={withLabel ? undefined : c.label}
       onClick={() => {
         const r = c.run(api.getState());

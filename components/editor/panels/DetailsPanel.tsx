@@ -95,10 +95,10 @@ function ModuleForm({ module }: { module: Module }) {
 
   const field = (name: 'x' | 'y' | 'length' | 'width' | 'elevation' | 'height', label: string, hint?: string) => (
     <label className="block">
-      <span className="text-xs text-ink-soft">{label}{hint ? <span className="text-ink-faint"> · {hint}</span> : null}</span>
+      <span className="text-xs text-ink-soft">{label}{hint ? <span className="text-ink-soft"> · {hint}</span> : null}</span>
       <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
         <input {...register(name, onBlurApply)} inputMode="decimal" aria-invalid={!!err(name)} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
-        <span className="pr-2 font-mono text-xs text-ink-faint">{units}</span>
+        <span className="pr-2 font-mono text-xs text-ink-soft">{units}</span>
       </span>
       {err(name) && <span className="mt-0.5 block text-xs text-brick" role="alert">{err(name)}</span>}
     </label>
@@ -165,7 +165,7 @@ function ModuleForm({ module }: { module: Module }) {
           <span className="text-xs text-ink-soft">Mass</span>
           <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
             <input {...register('massKg', onBlurApply)} inputMode="decimal" className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
-            <span className="pr-2 font-mono text-xs text-ink-faint">kg</span>
+            <span className="pr-2 font-mono text-xs text-ink-soft">kg</span>
           </span>
           {err('massKg') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('massKg')}</span>}
         </label>
@@ -196,7 +196,7 @@ function ModuleForm({ module }: { module: Module }) {
           <CommandButton id="edit.delete" withLabel />
         </div>
       )}
-      <p className="text-xs text-ink-faint">Lengths may be typed in mm, cm or in (e.g. “120 cm”, “47 in”).</p>
+      <p className="text-xs text-ink-soft">Lengths may be typed in mm, cm or in (e.g. “120 cm”, “47 in”).</p>
     </form>
   );
 }

@@ -58,7 +58,7 @@ export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0,
           }}
           className="w-full min-w-0 bg-transparent px-2 py-1 font-mono text-sm outline-none disabled:text-ink-soft"
         />
-        <span className="pr-2 font-mono text-xs text-ink-faint">{unit}</span>
+        <span className="pr-2 font-mono text-xs text-ink-soft">{unit}</span>
       </span>
       {error && <span className="mt-0.5 block text-xs text-brick" role="alert">{error}</span>}
     </div>

@@ -45,7 +45,7 @@ export function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
       <div className="border-b border-paper-edge p-3">
         <h2 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">Parts shelf</h2>
         <label className="flex items-center gap-2 rounded border border-paper-edge bg-paper px-2 py-1.5 focus-within:ring-2 focus-within:ring-copper">
-          <Search size={14} aria-hidden className="text-ink-faint" />
+          <Search size={14} aria-hidden className="text-ink-soft" />
           <span className="sr-only">Search parts</span>
           <input
             type="search"

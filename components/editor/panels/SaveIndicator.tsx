@@ -5,9 +5,9 @@ import type { SaveStatus } from '../api/useAutosave';
 
 const LOOK: Record<SaveStatus, { text: string; Icon: typeof CircleCheck; cls: string; spin?: boolean }> = {
   saved: { text: 'Saved', Icon: CircleCheck, cls: 'text-moss' },
-  unsaved: { text: 'Unsaved changes', Icon: CircleDot, cls: 'text-ochre' },
+  unsaved: { text: 'Unsaved changes', Icon: CircleDot, cls: 'text-ink' },
   saving: { text: 'Saving…', Icon: Loader2, cls: 'text-ink-soft', spin: true },
-  conflict: { text: 'Not saved: someone else saved first', Icon: TriangleAlert, cls: 'text-brick' },
+  conflict: { text: 'Not saved: conflict', Icon: TriangleAlert, cls: 'text-brick' },
   error: { text: 'Not saved', Icon: TriangleAlert, cls: 'text-brick' },
   'read-only': { text: 'View only', Icon: Eye, cls: 'text-ink-soft' },
 };
@@ -15,10 +15,10 @@ const LOOK: Record<SaveStatus, { text: string; Icon: typeof CircleCheck; cls: st
 export function SaveIndicator({ status, version, detail }: { status: SaveStatus; version: number; detail?: string | null }) {
   const l = LOOK[status];
   return (
-    <span role="status" aria-live="polite" data-testid="save-status" data-status={status} title={detail ?? undefined} className={`inline-flex items-center gap-1.5 text-sm ${l.cls}`}>
+    <span role="status" aria-live="polite" data-testid="save-status" data-status={status} title={detail ?? undefined} className={`inline-flex w-44 items-center gap-1.5 truncate text-sm ${l.cls}`}>
       <l.Icon size={15} aria-hidden className={l.spin ? 'animate-spin' : undefined} />
       {l.text}
-      <span className="font-mono text-xs text-ink-faint">v{version}</span>
+      <span className="font-mono text-xs text-ink-soft">v{version}</span>
     </span>
   );
 }

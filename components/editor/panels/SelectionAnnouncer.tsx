@@ -5,7 +5,8 @@ import { KINDS, formatLength } from '@/lib/layout';
 import { useEditor } from '../store/EditorStoreContext';
 
 export function SelectionAnnouncer({ id }: { id: string }) {
-  const { sel, units, arrangement } = useEditor(useShallow((s) => ({ sel: s.doc.modules.filter((m) => s.selection.includes(m.id)), units: s.units, arrangement: s.arrangement })));
+  const { modules, selection, units, arrangement } = useEditor(useShallow((s) => ({ modules: s.doc.modules, selection: s.selection, units: s.units, arrangement: s.arrangement })));
+  const sel = modules.filter((m) => selection.includes(m.id));
   let text = `Showing ${arrangement}. Nothing selected.`;
   if (sel.length === 1) {
     const m = sel[0];

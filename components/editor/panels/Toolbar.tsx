@@ -32,7 +32,7 @@ export function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveSta
       )}
       <div className="flex items-center gap-1" role="group" aria-label="View">
         <CommandButton id="view.zoom-out" />
-        <span className="w-14 text-center font-mono text-xs text-ink-soft" aria-label="Zoom">{Math.round((s.scale / s.actual) * 100)}%</span>
+        <span className="w-16 text-center font-mono text-xs text-ink-soft" title="Drawing scale on this screen (1:1 is real size)">{drawingScale(s.scale, s.actual)}</span>
         <CommandButton id="view.zoom-in" />
         <CommandButton id="view.fit" />
         <CommandButton id="view.actual" />
@@ -64,4 +64,12 @@ export function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveSta
       </div>
     </div>
   );
+}
+
+/** The drawing scale as a drafter writes it: 1:20 when zoomed out, 2:1 when zoomed in. */
+export function drawingScale(scale: number, actual: number): string {
+  const r = actual / scale;
+  if (r >= 1) return `1:${r >= 10 ? Math.round(r) : Math.round(r * 10) / 10}`;
+  const inv = 1 / r;
+  return `${inv >= 10 ? Math.round(inv) : Math.round(inv * 10) / 10}:1`;
 }

@@ -1,0 +1,137 @@
+// The layout editor in Chromium, as a designer uses it: place a bench from the Parts shelf by
+// drag, move it with the mouse, watch the Details panel and the sleep findings follow, undo,
+// and find the save after a reload. Also: axe on the editor, keyboard-only placing and moving,
+// and the read-only view a client gets. Screenshots of lounge and sleep kept as artifacts.
+import { expect, test, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
+import { signIn, keepScreenshot } from './helpers';
+
+const STOCK = 'Workshop stock — L4H3 empty bay';
+
+async function openLayout(page: Page, name: string) {
+  await page.getByRole('link', { name }).first().click();
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+}
+
+async function planGeometry(page: Page) {
+  const plan = page.getByTestId('plan');
+  const box = (await plan.boundingBox())!;
+  const scale = Number(await plan.getAttribute('data-scale'));
+  const [ox, oy] = (await plan.getAttribute('data-origin'))!.split(',').map(Number);
+  /** Screen point of a bay point in mm. */
+  const at = (x: number, y: number) => ({ x: box.x + ox + x * scale, y: box.y + oy + y * scale });
+  return { plan, box, scale, at };
+}
+
+const detail = (page: Page, field: string) => page.getByTestId(`details-${field}`);
+const numberIn = async (page: Page, field: string) => Number(await detail(page, field).inputValue());
+
+test.describe('layout editor', () => {
+  test('place by drag, move with the mouse, sleep findings follow, undo, saved after reload', async ({ page }) => {
+    await signIn(page, 'ivo@saltmarsh.test');
+    await openLayout(page, STOCK);
+    const { plan, box, scale, at } = await planGeometry(page);
+    await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'saved');
+    expect(scale).toBeGreaterThan(0);
+
+    // Place a bench seat by dragging it from the Parts shelf to the middle of the bay (x 2150, y 885).
+    const drop = at(2150, 885);
+    await page.locator('[data-kind="bench-seat"]').dragTo(plan, { targetPosition: { x: drop.x - box.x, y: drop.y - box.y } });
+    await expect(detail(page, 'x')).toBeVisible();
+    const placedX = await numberIn(page, 'x');
+    const placedY = await numberIn(page, 'y');
+    expect(Math.abs(placedX + 550 - 2150)).toBeLessThanOrEqual(20); // centred on the drop, 10 mm grid
+    expect(Math.abs(placedY + 275 - 885)).toBeLessThanOrEqual(20);
+
+    // Move it 300 px rearwards with the mouse: the Details panel shows the new position.
+    await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'none');
+    const grab = (await planGeometry(page)).at(placedX + 550, placedY + 275);
+    await page.mouse.move(grab.x, grab.y);
+    await page.mouse.down();
+    await page.mouse.move(grab.x + 300, grab.y, { steps: 15 });
+    await page.mouse.up();
+    await expect.poll(() => numberIn(page, 'x')).not.toBe(placedX);
+    const movedX = await numberIn(page, 'x');
+    expect(Math.abs(movedX - placedX - 300 / scale)).toBeLessThanOrEqual(40);
+    expect(await numberIn(page, 'y')).toBe(placedY);
+    await keepScreenshot(page, 'editor-lounge');
+
+    // Sleep: no bed yet, so the bed-length finding warns; placing a bed turns it to a pass.
+    await page.getByTestId('arrangement-sleep').click();
+    await page.getByLabel('show passes').check();
+    const sleepLength = page.locator('[data-finding="sleep.length"][data-arrangement="sleep"]').first();
+    await expect(sleepLength).toHaveAttribute('data-status', 'warn');
+    await page.locator('[data-kind="bed-platform"]').click();
+    await expect(sleepLength).toHaveAttribute('data-status', 'pass');
+    await expect(page.getByTestId('checks-status')).toContainText('up to date');
+    await keepScreenshot(page, 'editor-sleep');
+
+    // Undo the bed (the finding goes back), then undo the move (the position comes back).
+    await plan.focus();
+    await page.keyboard.press('Control+z');
+    await expect(sleepLength).toHaveAttribute('data-status', 'warn');
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => numberIn(page, 'x')).toBe(placedX);
+
+    // Autosave, then a reload shows the bench where the undo left it.
+    await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'saved', { timeout: 15_000 });
+    await page.reload();
+    await expect(plan.locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+    await page.getByTestId('arrangement-lounge').click();
+    await plan.focus();
+    await page.keyboard.press(']');
+    await expect.poll(() => numberIn(page, 'x')).toBe(placedX);
+    expect(await numberIn(page, 'y')).toBe(placedY);
+  });
+
+  test('a module can be placed and moved with the keyboard alone', async ({ page }) => {
+    await signIn(page, 'ivo@saltmarsh.test');
+    await openLayout(page, STOCK);
+    await page.getByTestId('shelf-search').fill('drawer');
+    await page.keyboard.press('Tab');
+    await expect(page.locator('[data-kind="drawer-unit"]')).toBeFocused();
+    await page.keyboard.press('Enter');
+    await expect(page.getByTestId('plan')).toBeFocused();
+    const x0 = await numberIn(page, 'x');
+    const y0 = await numberIn(page, 'y');
+    await page.keyboard.press('Shift+ArrowRight');
+    await page.keyboard.press('Shift+ArrowRight');
+    await page.keyboard.press('ArrowDown');
+    await expect.poll(() => numberIn(page, 'x')).toBe(x0 + 20);
+    await expect.poll(() => numberIn(page, 'y')).toBe(y0 + 1);
+    await page.keyboard.press('r');
+    await expect.poll(() => numberIn(page, 'length')).toBe(450);
+    // The shortcut sheet lists the commands.
+    await page.keyboard.press('?');
+    await expect(page.getByTestId('shortcut-sheet')).toContainText('Nudge rearwards 10 mm');
+    await page.keyboard.press('Escape');
+    // Typed lengths in another unit land as whole mm.
+    await detail(page, 'x').fill('150 cm');
+    await detail(page, 'x').press('Enter');
+    await expect.poll(() => numberIn(page, 'x')).toBe(1500);
+    await page.keyboard.press('Control+z');
+  });
+
+  test('axe finds no serious or critical problems in the editor', async ({ page }) => {
+    await signIn(page, 'ivo@saltmarsh.test');
+    await openLayout(page, STOCK);
+    await page.locator('[data-kind="kitchen-counter"]').click();
+    const results = await new AxeBuilder({ page }).include('[data-testid="editor"]').analyze();
+    const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+    expect(bad.map((v) => `${v.id}: ${v.help} (${v.nodes.length})`)).toEqual([]);
+    await page.keyboard.press('Control+z');
+  });
+
+  test('a client sees the same drawing read-only: no shelf, no saving', async ({ page }) => {
+    await signIn(page, 'priya@client.test');
+    await openLayout(page, 'Nair — L2H2 weekender');
+    await expect(page.getByRole('navigation', { name: 'Parts shelf' })).toHaveCount(0);
+    await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'read-only');
+    await expect(page.getByTestId('editor')).toHaveAttribute('data-read-only', 'true');
+    await page.getByTestId('plan').focus();
+    await page.keyboard.press(']');
+    await expect(detail(page, 'x')).toBeDisabled();
+    await page.keyboard.press('ArrowRight');
+    await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'read-only');
+  });
+});
