@@ -37,9 +37,9 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     if (!el) return;
     const setStroke = (next: Stroke | null) => {
       stroke.current = next;
-      el.dataset.stroke = next?.mode ?? 'none';
+      el.setAttribute('data-stroke', next?.mode ?? 'none');
     };
-    el.dataset.stroke = 'none';
+    el.setAttribute('data-stroke', 'none');
     const local = (e: { clientX: number; clientY: number }) => {
       const r = el.getBoundingClientRect();
       return { x: e.clientX - r.left, y: e.clientY - r.top };

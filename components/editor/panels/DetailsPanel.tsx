@@ -189,6 +189,8 @@ function ModuleForm({ module }: { module: Module }) {
           </fieldset>
         )}
       </fieldset>
+      {/* Enter in a field applies it: implicit submission needs a submit button in the form. */}
+      <button type="submit" className="sr-only" tabIndex={-1} disabled={readOnly}>Apply changes</button>
       {!readOnly && (
         <div className="flex flex-wrap gap-2 border-t border-paper-edge pt-3">
           <CommandButton id="edit.rotate" withLabel />
