@@ -19,8 +19,10 @@ import { apiFetch } from '@/lib/api/client-fetch';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { CommentsPanel, type PendingPin } from './CommentsPanel';
 import { SharePanel } from './SharePanel';
+import { BuildPlanLink } from '@/components/planning/BuildPlanLink';
 import { pinAt, planPointAt, type PinView } from './pinGeometry';
 import type { CommentPinsLayerProps } from './CommentPinsLayer';
+import { useStudioTools } from '@/components/uploads/useStudioTools';
 
 /** New comments from the other side show up within this long (common practice, no source). */
 const COMMENTS_POLL_MS = 10_000;
@@ -32,6 +34,7 @@ export interface LayoutWorkspaceProps extends Omit<EditorProps, 'extensions'> {
 
 export function LayoutWorkspace(props: LayoutWorkspaceProps) {
   const { layoutId, canEdit, focusComment } = props;
+  const studioTools = useStudioTools(layoutId, canEdit, props.units); // tracing photos and the File menu (studio only)
   const threadsQuery = useQuery({
     queryKey: ['comments', layoutId],
     queryFn: () => apiFetch<{ threads: ThreadDto[] }>(`/api/layouts/${layoutId}/comments`),
@@ -82,15 +85,19 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
 
   const openCount = threads.filter((t) => !t.resolved).length;
   const toolbarExtra = (
+    <>
+    {studioTools.toolbar}
     <div className="flex items-center gap-1" role="group" aria-label="Working with the client">
       <button type="button" className={`btn-quiet px-2 py-1 ${open ? 'border-ink' : ''}`} aria-pressed={open} onClick={() => setOpen((o) => !o)}>
         <MessageSquare size={14} aria-hidden="true" /> Comments <span className="font-mono text-xs">{openCount}</span>
       </button>
       <Link href={`/layouts/${layoutId}/revisions`} className="btn-quiet px-2 py-1"><History size={14} aria-hidden="true" /> Revisions</Link>
+      <BuildPlanLink layoutId={layoutId} />
       {canEdit && (
         <button type="button" className="btn-quiet px-2 py-1" onClick={() => setSharing(true)}><Share2 size={14} aria-hidden="true" /> Share</button>
       )}
     </div>
+    </>
   );
 
   const planOverlay = ({ viewport, arrangement }: { viewport: Viewport; arrangement: Arrangement }) =>
@@ -99,7 +106,7 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
   return (
     <div className={`flex h-full min-h-0 ${placing ? '[&_[data-testid=plan]]:cursor-crosshair' : ''}`} data-placing={placing || undefined}>
       <div className="h-full min-w-0 flex-1" onClickCapture={onPlanClick}>
-        <EditorLoader {...props} extensions={{ planOverlay, toolbarExtra }} />
+        <EditorLoader {...props} extensions={{ planOverlay, toolbarExtra, planUnderlay: studioTools.planUnderlay }} />
       </div>
       {open && (
         <CommentsPanel

@@ -25,8 +25,8 @@ const STATUS = {
 const name = (m: Module) => m.label ?? KINDS[m.kind].title;
 const signed = (n: number) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${Math.abs(n)} mm`;
 
-function Status({ s }: { s: 'pass' | 'warn' | 'fail' | null }) {
-  if (!s) return <span className="text-ink-soft">not found</span>;
+function Status({ s, side }: { s: 'pass' | 'warn' | 'fail' | null; side: 'before' | 'after' }) {
+  if (!s) return <span className="text-ink-soft">{side === 'before' ? 'not raised' : 'no longer raised'}</span>;
   const { word, Icon, className } = STATUS[s];
   return <span className={`inline-flex items-center gap-1 ${className}`}><Icon size={12} aria-hidden="true" />{word}</span>;
 }
@@ -121,7 +121,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                         {f.direction === 'worse' ? <ArrowDownRight size={14} className="mt-0.5 text-brick" aria-label="worse" /> : <ArrowUpRight size={14} className="mt-0.5 text-moss" aria-label="better" />}
                         <span>
                           <span className="font-mono text-xs">{f.id}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
-                          <Status s={f.before} /> → <Status s={f.after} />
+                          <Status s={f.before} side="before" /> → <Status s={f.after} side="after" />
                           <span className="block text-xs text-ink-soft">{f.message}</span>
                         </span>
                       </li>

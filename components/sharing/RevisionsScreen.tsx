@@ -8,6 +8,7 @@
  */
 import Link from 'next/link';
 import { useState } from 'react';
+import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { CheckCircle2, GitCompare, Lock, MessageSquareWarning, Stamp } from 'lucide-react';
@@ -27,7 +28,14 @@ interface Props {
 
 export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props) {
   const qc = useQueryClient();
+  const router = useRouter();
   const key = ['revisions', layoutId];
+  /** After a change: our list, the layouts table, and the server-drawn state badge above. */
+  const changed = () => {
+    qc.invalidateQueries({ queryKey: key });
+    qc.invalidateQueries({ queryKey: ['layouts'] });
+    router.refresh();
+  };
   const q = useQuery({ queryKey: key, queryFn: () => apiFetch<{ revisions: RevisionDto[] }>(`/api/layouts/${layoutId}/revisions`), initialData: { revisions: initial } });
   const revisions = q.data.revisions;
   const [note, setNote] = useState('');
@@ -36,8 +44,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
     onSuccess: ({ revision, mail }) => {
       setNote('');
       toast.success(`Revision ${revision.letter} issued${mail === 'sent' ? ' and the client told by mail' : mail === 'no-recipient' ? ' (no client on this layout yet)' : ' — the mail could not be sent'}`);
-      qc.invalidateQueries({ queryKey: key });
-      qc.invalidateQueries({ queryKey: ['layouts'] });
+      changed();
     },
     onError: (err) => toast.error(err.message),
   });
@@ -62,7 +69,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
       ) : (
         <ol className="space-y-4" data-testid="revisions-list">
           {revisions.map((r, i) => (
-            <RevisionCard key={r.id} layoutId={layoutId} revision={r} isClient={isClient} previous={revisions[i + 1]?.letter ?? null} onChanged={() => { qc.invalidateQueries({ queryKey: key }); qc.invalidateQueries({ queryKey: ['layouts'] }); }} />
+            <RevisionCard key={r.id} layoutId={layoutId} revision={r} isClient={isClient} previous={revisions[i + 1]?.letter ?? null} onChanged={changed} />
           ))}
         </ol>
       )}
