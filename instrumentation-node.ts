@@ -18,4 +18,9 @@ export async function startServer(): Promise<void> {
     throw err;
   }
   await startLocalServices();
+  // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
+  void import('./db/uploads')
+    .then((m) => m.sweepOrphanUploads())
+    .then((r) => r.removed && console.log(`[baywright] removed ${r.removed} stored upload file(s) no layout uses any more`))
+    .catch((err) => console.error('[baywright] the upload sweep failed', err));
 }

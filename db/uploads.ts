@@ -8,7 +8,8 @@
  * read the layout, and are never part of the LayoutDoc a viewer link shows.
  */
 import 'server-only';
-import { and, count, desc, eq } from 'drizzle-orm';
+import fs from 'node:fs';
+import { and, count, desc, eq, inArray } from 'drizzle-orm';
 import { getDb } from './client';
 import { layouts, uploads, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
@@ -16,7 +17,7 @@ import { canEditLayouts, type Actor } from './actor';
 import { getLayout } from './layouts';
 import { cleanFileName, withExtension } from '../lib/uploads/file-name';
 import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
-import { readStored, removeStored, storedExists, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
+import { listStored, readStored, removeStored, storedExists, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
 import type { TracingPlacement } from '../lib/tracing/calibration';
 import type { UploadDto } from '../lib/uploads/dto';
 
@@ -175,4 +176,30 @@ export async function setTracing(actor: Actor, uploadId: string, placement: Trac
   const db = await getDb();
   await db.update(uploads).set({ tracing: placement }).where(eq(uploads.id, row.id));
   return toDto(await readable(actor, row.id));
+}
+
+/**
+ * Removes stored files that no row names any more: left behind when a layout (and so its rows)
+ * was deleted, or by an upload that died between the disk and the row. Files younger than
+ * `graceMs` are kept, since an upload in another process may be between those two steps.
+ * Maintenance, not a user action: it takes no Actor and touches only unreferenced files.
+ */
+export async function sweepOrphanUploads(graceMs = 60 * 60 * 1000, now = Date.now()): Promise<{ removed: number; kept: number }> {
+  const files = await listStored();
+  const old = files.filter((f) => now - f.modifiedMs > graceMs);
+  if (old.length === 0) return { removed: 0, kept: files.length };
+  const db = await getDb();
+  const known = new Set<string>();
+  const names = [...new Set(old.map((f) => f.storedName))];
+  for (let i = 0; i < names.length; i += 500) {
+    const rows = await db.select({ storedName: uploads.storedName }).from(uploads).where(inArray(uploads.storedName, names.slice(i, i + 500)));
+    rows.forEach((r) => known.add(r.storedName));
+  }
+  let removed = 0;
+  for (const f of old) {
+    if (!f.incoming && known.has(f.storedName)) continue;
+    await fs.promises.rm(f.path, { force: true });
+    removed += 1;
+  }
+  return { removed, kept: files.length - removed };
 }

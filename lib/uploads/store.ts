@@ -143,3 +143,29 @@ export async function storedExists(storedName: string): Promise<boolean> {
 export async function removeStored(storedName: string): Promise<void> {
   await fs.promises.rm(storedPath(storedName), { force: true });
 }
+
+export interface StoredEntry {
+  storedName: string;
+  path: string;
+  /** A temporary file of an upload still streaming (or one that died). */
+  incoming: boolean;
+  modifiedMs: number;
+}
+
+/** Every file in the uploads folder that has the shape of one of ours; anything else is left alone. */
+export async function listStored(): Promise<StoredEntry[]> {
+  const root = uploadsRoot();
+  const out: StoredEntry[] = [];
+  const fans = await fs.promises.readdir(root).catch(() => [] as string[]);
+  for (const fan of fans) {
+    if (!/^[0-9a-f]{2}$/.test(fan)) continue;
+    for (const name of await fs.promises.readdir(path.join(root, fan)).catch(() => [] as string[])) {
+      const m = /^([0-9a-f]{32})(\.incoming)?$/.exec(name);
+      if (!m || !m[1].startsWith(fan)) continue;
+      const full = path.join(root, fan, name);
+      const stat = await fs.promises.stat(full).catch(() => null);
+      if (stat?.isFile()) out.push({ storedName: m[1], path: full, incoming: Boolean(m[2]), modifiedMs: stat.mtimeMs });
+    }
+  }
+  return out;
+}
