@@ -11,6 +11,8 @@ export function setFakeSmtpAddress(address: { host: string; port: number } | nul
     g.__baywrightFakeSmtp = address;
     process.env.BAYWRIGHT_SMTP_PORT = String(address.port);
   } else {
+    // Forget the address, and the environment copy if it is still ours, so nothing sends to a closed port.
+    if (g.__baywrightFakeSmtp && process.env.BAYWRIGHT_SMTP_PORT === String(g.__baywrightFakeSmtp.port)) delete process.env.BAYWRIGHT_SMTP_PORT;
     delete g.__baywrightFakeSmtp;
   }
 }
