@@ -5,6 +5,10 @@
  */
 import { compose, oneLine, type ComposedMail } from './compose';
 
+/** Said wherever a plan is sent or approved: the plan does not replace licensed sign-off. */
+export const SIGN_OFF_CAUTION =
+  'Gas, 230 V, heating, seat belts and anchorages, and the van’s weight limits are installed, tested and signed off by qualified fitters to local rules; an approved plan does not replace that.';
+
 export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null }): ComposedMail {
   const until = p.expiresAt.toISOString().slice(0, 10);
   return compose(`${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
@@ -27,6 +31,7 @@ export function revisionIssuedMail(p: { clientName: string; studioName: string; 
     ],
     quote: p.note || undefined,
     action: { label: `Open revision ${p.letter}`, url: p.url },
+    footer: SIGN_OFF_CAUTION,
   });
 }
 
@@ -44,6 +49,7 @@ export function decisionMail(p: { recipientName: string; clientName: string; lay
       ],
       quote: p.message || undefined,
       action: { label: 'See the revisions', url: p.url },
+      ...(approved ? { footer: SIGN_OFF_CAUTION } : {}),
     },
   );
 }

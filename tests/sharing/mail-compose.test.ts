@@ -1,7 +1,7 @@
 // The mail words: user text is escaped in HTML, subjects stay on one line, only http(s) links.
 import { describe, expect, it } from 'vitest';
 import { compose, escapeHtml, oneLine } from '@/lib/mail/compose';
-import { commentMail, decisionMail, invitationMail, revisionIssuedMail } from '@/lib/mail/messages';
+import { commentMail, decisionMail, invitationMail, revisionIssuedMail, SIGN_OFF_CAUTION } from '@/lib/mail/messages';
 import { publicUrl, PublicUrlMissing } from '@/lib/mail/public-url';
 import { outboxEnabled } from '@/lib/mail/outbox-mode';
 
@@ -32,6 +32,9 @@ describe('compose', () => {
     const d = decisionMail({ recipientName: 'Ivo', clientName: 'Sam', layoutName: 'Stock van', letter: 'A', decision: 'approved', message: '', url: 'https://a.test/r' });
     expect(d.subject).toBe('Sam approved revision A of Stock van');
     expect(d.text).toMatch(/cannot be changed/);
+    // Approvals and new revisions carry the sign-off caution (gas, 230 V, heating, belts, weight).
+    expect(d.text).toContain(SIGN_OFF_CAUTION);
+    expect(revisionIssuedMail({ clientName: 'P', studioName: 'S', layoutName: 'L', letter: 'B', note: '', url: 'https://a.test/r' }).html).toContain('qualified fitters');
     expect(escapeHtml(`"'`)).toBe('&quot;&#39;');
   });
 });
