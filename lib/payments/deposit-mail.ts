@@ -10,7 +10,7 @@ import type { QuoteDto } from '@/db/quotes';
 import { markReceiptSent, receiptFacts } from '@/db/quotes';
 import { layoutClient } from '@/db/sharing/recipients';
 import { depositReceiptMail, quoteSentMail } from '@/lib/mail/receipt';
-import { publicUrl } from '@/lib/mail/public-url';
+import { returnOrigin } from './return-origin';
 import { sendMail } from '@/lib/mail/transport';
 
 export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
@@ -28,7 +28,7 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
   const client = await layoutClient(quote.layoutId);
   if (!client) return 'no-recipient';
   try {
-    const url = publicUrl(req, quotePath(quote.layoutId));
+    const url = `${returnOrigin(req)}${quotePath(quote.layoutId)}`;
     await sendMail({
       ...quoteSentMail({
         clientName: client.name, studioName: quote.studioName, designerName: actor.name, layoutName: quote.layoutName,
@@ -44,12 +44,12 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
 }
 
 /** The receipt for a quote just marked paid; `req` supplies the link's origin where no public URL is set. */
-export async function mailReceipt(req: Request | null, quoteId: string, paymentRef: string | null): Promise<MailOutcome> {
+export async function mailReceipt(req: Request, quoteId: string, paymentRef: string | null): Promise<MailOutcome> {
   const facts = await receiptFacts(quoteId);
   if (!facts?.client || facts.quote.status !== 'paid') return 'no-recipient';
   const q = facts.quote;
   try {
-    const url = publicUrl(req, quotePath(q.layoutId));
+    const url = `${returnOrigin(req)}${quotePath(q.layoutId)}`;
     await sendMail({
       ...depositReceiptMail({
         clientName: facts.client.name, studioName: facts.studioName, layoutName: facts.layoutName,

@@ -13,9 +13,9 @@ import 'server-only';
 import type Stripe from 'stripe';
 import type { Actor } from '@/db/actor';
 import { checkoutSessionOfLayout, quoteForCheckout, recordCheckoutOpened, recordDepositPaid, type PaidOutcome, type ProviderPayment } from '@/db/quotes';
-import { publicOrigin } from '@/lib/mail/public-url';
 import { webhookSecret } from './config';
 import { mailReceipt, quotePath, type MailOutcome } from './deposit-mail';
+import { returnOrigin } from './return-origin';
 import { stripeClient } from './stripe';
 
 /** A checkout page stays usable this long before we open a fresh one (the API's own expiry is 24 h). */
@@ -34,8 +34,7 @@ export async function openDepositCheckout(req: Request, actor: Actor, layoutId: 
     if (again.status === 'open' && again.url) return { url: again.url, sessionId: again.id };
   }
   const q = target.quote;
-  const origin = publicOrigin(req);
-  const back = `${origin}${quotePath(layoutId)}`;
+  const back = `${returnOrigin(req)}${quotePath(layoutId)}`;
   const session = await stripe.checkout.sessions.create({
     mode: 'payment',
     line_items: [{

@@ -39,7 +39,7 @@ function startForwarder(): Promise<Server> {
       const headers = new Headers();
       for (const [k, v] of Object.entries(req.headers)) if (typeof v === 'string') headers.set(k, v);
       headers.set('host', 'localhost:3000');
-      const out = await webhook.POST(new Request('http://localhost:3000/api/payments/webhook', { method: 'POST', headers, body: Buffer.concat(chunks) }));
+      const out = await webhook.POST(new Request('http://localhost:3000/api/payments/webhook', { method: 'POST', headers, body: Buffer.concat(chunks) }), { params: Promise.resolve({}) });
       res.writeHead(out.status, { 'content-type': 'application/json' }).end(await out.text());
     });
   });

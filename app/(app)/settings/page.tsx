@@ -4,6 +4,7 @@ import { currentActor } from '@/lib/auth/session';
 import { getStudio } from '@/db/studios';
 import { MembersPanel } from '@/components/settings/MembersPanel';
 import { StudioPanel } from '@/components/settings/StudioPanel';
+import { PriceListPanel } from '@/components/planning/PriceListPanel';
 
 export const metadata: Metadata = { title: 'Settings' };
 
@@ -16,6 +17,7 @@ export default async function SettingsPage() {
       <h1 className="text-2xl font-semibold">Settings</h1>
       <StudioPanel studio={studio} />
       <MembersPanel isOwner={actor.role === 'owner'} selfId={actor.userId} />
+      {actor.role !== 'client' && <PriceListPanel canEdit={actor.role === 'owner'} />}
     </main>
   );
 }

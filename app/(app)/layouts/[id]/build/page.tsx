@@ -1,0 +1,54 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound, redirect } from 'next/navigation';
+import { ArrowLeft, Receipt } from 'lucide-react';
+import { currentActor } from '@/lib/auth/session';
+import { getLayout } from '@/db/layouts';
+import { getStudio } from '@/db/studios';
+import { NotFoundError } from '@/db/errors';
+import { BuildPlanner } from '@/components/planning/BuildPlanner';
+import { buildTabFrom } from '@/components/planning/buildTabs';
+
+export const metadata: Metadata = { title: 'Build plan' };
+
+/** Build planning for one layout: weight, power, water, gas, heat, parts, cut list and quote. */
+export default async function BuildPlanPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const actor = await currentActor();
+  if (!actor) redirect('/sign-in');
+  const { id } = await params;
+  const layout = await getLayout(actor, id).catch((err) => {
+    if (err instanceof NotFoundError) notFound();
+    throw err;
+  });
+  const studio = await getStudio(actor);
+  const tab = buildTabFrom((await searchParams).tab);
+  return (
+    <main className="mx-auto max-w-[1440px] space-y-3 px-4 py-4">
+      <nav className="flex flex-wrap items-center gap-4 text-sm" aria-label="Layout">
+        <Link href={`/layouts/${layout.id}`} className="inline-flex items-center gap-1 text-ink-soft hover:text-ink"><ArrowLeft size={14} aria-hidden="true" /> Back to the plan</Link>
+        <Link href={`/layouts/${layout.id}/quote`} className="inline-flex items-center gap-1 text-ink-soft hover:text-ink"><Receipt size={14} aria-hidden="true" /> Quote</Link>
+      </nav>
+      <header>
+        <h1 className="text-xl font-semibold">Build plan · {layout.name}</h1>
+        <p className="text-sm text-ink-soft">
+          Bay <span className="font-mono">{layout.bay.length} × {layout.bay.width} × {layout.bay.height} mm</span> · version <span className="font-mono">{layout.version}</span>
+          {layout.client ? ` · for ${layout.client.name}` : ''}
+          {layout.canEdit ? '' : ' · read-only'}
+        </p>
+        {layout.doc.systems?.note && <p className="mt-1 text-sm text-ink-soft">{layout.doc.systems.note}</p>}
+        <p className="mt-1 text-xs text-ink-soft">
+          Figures here help plan the build; they do not replace the vehicle&apos;s plate, a weighbridge, the makers&apos; instructions or local codes. Gas, 230 V and heater installations need qualified installers.
+        </p>
+      </header>
+      <BuildPlanner
+        layoutId={layout.id}
+        initialDoc={layout.doc}
+        initialVersion={layout.version}
+        canEdit={layout.canEdit}
+        units={studio.units}
+        clientName={layout.client?.name ?? null}
+        initialTab={tab}
+      />
+    </main>
+  );
+}
