@@ -1,0 +1,133 @@
+/**
+ * Hostile input: for every state-changing route in the access matrix, 1000 fast-check runs of
+ * mutated valid bodies and arbitrary JSON, wrong content types, huge and deeply nested bodies,
+ * `__proto__` keys, numbers out of range and strings with control characters. No response may
+ * be a 5xx or carry a stack trace, nothing may reject unhandled, and after every refused request
+ * the database must be exactly as it was.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { sql } from 'drizzle-orm';
+import type { Db } from '@/db/client';
+import { useFreshDb } from '../helpers/db';
+import { call, type CallOptions } from '../helpers/http';
+import { buildWorld } from '../helpers/world';
+import { ROWS, type Fixture } from './access-rows';
+
+const RUNS = Number(process.env.FUZZ_RUNS ?? 1000);
+let db: Db;
+let fx: Fixture;
+const unhandled: unknown[] = [];
+const onUnhandled = (reason: unknown) => unhandled.push(reason);
+
+beforeAll(async () => {
+  db = await useFreshDb();
+  fx = { world: await buildWorld(db), db };
+  process.on('unhandledRejection', onUnhandled);
+});
+afterAll(() => {
+  process.off('unhandledRejection', onUnhandled);
+});
+
+let digestSql: ReturnType<typeof sql.raw> | undefined;
+
+/** A digest of every table's content in one statement: any change to any row changes it. */
+async function digest(): Promise<string> {
+  if (!digestSql) {
+    const tables = await db.execute(sql`select tablename from pg_tables where schemaname = 'public' order by tablename`);
+    const names = rowsOf<{ tablename: string }>(tables).map((t) => t.tablename);
+    digestSql = sql.raw(names.map((n) => `select '${n}' as t, md5(coalesce(string_agg(x::text, '|' order by x::text), '')) as h from "${n}" x`).join(' union all '));
+  }
+  return rowsOf<{ t: string; h: string }>(await db.execute(digestSql)).map((r) => `${r.t}:${r.h}`).join(',');
+}
+
+function rowsOf<T>(res: unknown): T[] {
+  return ((res as { rows?: T[] }).rows ?? (res as T[]));
+}
+
+const nasty = fc.oneof(
+  fc.string({ unit: 'binary' }),
+  fc.constantFrom('\u0000', '\u0007bell', '\u202eevil', '${7*7}', '<script>x</script>', "'; drop table layouts; --", '../../etc/passwd'),
+  fc.constantFrom(1e308, -1e308, Number.MAX_SAFE_INTEGER + 2, -0, 0.5, 2 ** 53, -1),
+  fc.constantFrom(null, true, [], {}),
+);
+
+/** Replaces one value somewhere inside `base` with something hostile. */
+function mutate(base: unknown): fc.Arbitrary<unknown> {
+  const paths: (string | number)[][] = [];
+  const walk = (v: unknown, p: (string | number)[]) => {
+    paths.push(p);
+    if (p.length > 6) return;
+    if (Array.isArray(v)) v.slice(0, 4).forEach((x, i) => walk(x, [...p, i]));
+    else if (v && typeof v === 'object') Object.entries(v).forEach(([k, x]) => walk(x, [...p, k]));
+  };
+  walk(base, []);
+  return fc.tuple(fc.constantFrom(...paths), fc.oneof(nasty, fc.jsonValue({ maxDepth: 3 }))).map(([p, value]) => {
+    if (!p.length) return value;
+    const copy = structuredClone(base) as Record<string | number, unknown>;
+    let at: Record<string | number, unknown> = copy;
+    for (const k of p.slice(0, -1)) at = at[k] as Record<string | number, unknown>;
+    at[p[p.length - 1]] = value;
+    return copy;
+  });
+}
+
+/** JSON nested n levels deep, written as text (JSON.stringify itself would overflow the stack). */
+function deepJson(n: number, key = 'a'): string {
+  return `{"${key}":[`.repeat(n) + '1' + ']}'.repeat(n);
+}
+
+type Attack = { body: string; contentType: string };
+
+function attacks(base: unknown): fc.Arbitrary<Attack> {
+  const asJson = (v: unknown) => ({ body: JSON.stringify(v) ?? 'null', contentType: 'application/json' });
+  return fc.oneof(
+    { weight: 5, arbitrary: mutate(base).map(asJson) },
+    { weight: 2, arbitrary: fc.jsonValue({ maxDepth: 4 }).map(asJson) },
+    { weight: 1, arbitrary: fc.string().map((s) => ({ body: s, contentType: 'application/json' })) },
+    { weight: 1, arbitrary: fc.constantFrom('text/plain', 'application/x-www-form-urlencoded', 'multipart/form-data', '').map((t) => ({ body: JSON.stringify(base), contentType: t })) },
+    { weight: 1, arbitrary: fc.constant({ body: `{"__proto__": {"admin": true}, "constructor": {"prototype": {"x": 1}}, "name": "p"}`, contentType: 'application/json' }) },
+    { weight: 1, arbitrary: fc.tuple(fc.integer({ min: 500, max: 20000 }), fc.constantFrom('a', 'doc', 'name', 'modules')).map(([n, k]) => ({ body: deepJson(n, k), contentType: 'application/json' })) },
+    { weight: 1, arbitrary: fc.constant({ body: JSON.stringify({ name: 'x'.repeat(2_200_000) }), contentType: 'application/json' }) },
+  );
+}
+
+const writes = ROWS.filter((r) => r.method !== 'GET' && !['/api/sign-up'].includes(r.route));
+
+describe.each(writes.map((r) => [`${r.method} ${r.route}`, r] as const))('%s', (_name, row) => {
+  it(`survives ${RUNS} hostile requests with no 5xx, no stack and no change on refusal`, async () => {
+    const template: CallOptions = await row.request(fx, 'designer');
+    const base = template.json ?? {};
+    let state: string | undefined;
+    await fc.assert(
+      fc.asyncProperty(attacks(base), async (attack) => {
+        const before = (state ??= await digest());
+        const res = await call(await routeHandler(row.route, row.method), {
+          method: row.method,
+          params: template.params,
+          headers: { ...template.headers, 'content-type': attack.contentType },
+          body: attack.body,
+          as: fx.world.designer,
+        });
+        expect(res.status).toBeLessThan(500);
+        const text = typeof res.body === 'string' ? res.body : JSON.stringify(res.body);
+        expect(text).not.toMatch(/\n\s+at |node_modules|SELECT |INSERT |UPDATE |ZodError/);
+        const after = await digest();
+        if (res.status >= 400) expect(after).toBe(before);
+        state = after;
+      }),
+      { numRuns: RUNS, seed: 20261202 },
+    );
+    expect(unhandled).toEqual([]);
+  }, 300_000);
+});
+
+const handlers = new Map<string, (req: Request, ctx: unknown) => Promise<Response>>();
+async function routeHandler(route: string, method: string) {
+  const key = `${method} ${route}`;
+  if (!handlers.has(key)) {
+    const mod = await import(/* @vite-ignore */ `@/app${route}/route.ts`);
+    handlers.set(key, mod[method]);
+  }
+  return handlers.get(key)!;
+}
