@@ -8,6 +8,7 @@
 import { ARRANGEMENTS, type LayoutDoc, type LengthUnit } from '../layout';
 import type { CheckReport } from '../checks/types';
 import { flowCautions } from './cautions';
+import { flowBuildPlan } from './build-plan';
 import { flowChecks } from './checks-summary';
 import { ColumnFlow } from './flow';
 import { LINE } from './drafting';
@@ -134,6 +135,8 @@ export function composeSheet(req: SheetRequest): SheetResult {
   flowSchedule(new ColumnFlow(area, 1, newPage), doc, req.units);
   const columns = paper === 'a3' ? 3 : 2;
   const text = new ColumnFlow(area, columns, newPage);
+  flowBuildPlan(text, doc);
+  text.gap(6);
   flowChecks(text, req.report, req.checksUnavailable);
   text.gap(6);
   flowCautions(text);

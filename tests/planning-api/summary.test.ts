@@ -37,3 +37,19 @@ describe('buildPlanSummary', () => {
     expect(s.lines.every((l) => l.status === 'unknown')).toBe(true);
   });
 });
+
+describe('the plan sheet carries the build-plan section', () => {
+  it('puts one worded line per topic, with its state, before the checks', async () => {
+    const { composeSheet } = await import('@/lib/sheet');
+    const doc = starterLayout('starter-rear-bed')!;
+    const r = composeSheet({ doc, report: { ok: true, findings: [] }, paper: 'a4', scale: 20, units: 'mm', details: { studio: 'S', client: 'C', layout: 'L', revision: 'A', date: '2025-12-02' } });
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    const texts = r.sheet.pages.flatMap((p) => p.items.filter((i): i is Extract<typeof i, { type: 'text' }> => i.type === 'text').map((i) => i.text));
+    const at = texts.indexOf('Build plan');
+    expect(at).toBeGreaterThan(-1);
+    expect(texts.indexOf('Checks')).toBeGreaterThan(at);
+    for (const topic of ['Mass · OK', 'Axles · OK', 'Payload · OK', 'Power · OK', 'Water · OK']) expect(texts).toContain(topic);
+    expect(texts.join(' ')).toMatch(/Laden [\d,]+ kg of 3,500 kg maximum authorised mass/);
+  });
+});
