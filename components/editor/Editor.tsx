@@ -5,7 +5,7 @@
  * once, wires live checks, autosave and the keyboard, and composes panels; it draws nothing and
  * holds no editing logic itself. Read-only (canEdit false): same drawing, no shelf, no saving.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { CircleX, CircleAlert, CircleCheck } from 'lucide-react';
 import type { EditorProps } from './types';
@@ -14,9 +14,7 @@ import { EditorStoreProvider, useEditor, useEditorApi } from './store/EditorStor
 import { PlanStage } from './canvas/PlanStage';
 import { PartsShelf } from './panels/PartsShelf';
 import { DetailsPanel } from './panels/DetailsPanel';
-import { BayPanel } from './panels/BayPanel';
 import { ChecksPanel } from './panels/ChecksPanel';
-import { SectionView } from './section/SectionView';
 import { Toolbar } from './panels/Toolbar';
 import { Tabs } from './panels/Tabs';
 import { ContextMenu } from './panels/ContextMenu';
@@ -27,6 +25,11 @@ import { useLiveChecks } from './api/useLiveChecks';
 import { useAutosave } from './api/useAutosave';
 import { useEditorKeyboard } from './commands/useEditorKeyboard';
 import { countByStatus, failingModuleIds } from './panels/findingGroups';
+
+// Behind tabs: loaded when first opened, so the editor's first load stays small.
+const BayPanel = lazy(() => import('./panels/BayPanel').then((m) => ({ default: m.BayPanel })));
+const SectionView = lazy(() => import('./section/SectionView').then((m) => ({ default: m.SectionView })));
+const loading = <p className="p-4 text-sm text-ink-soft">Loading…</p>;
 
 export default function Editor(props: EditorProps) {
   const [store] = useState(() => createEditorStore({ doc: props.initialDoc, version: props.initialVersion, readOnly: !props.canEdit, units: props.units }));
@@ -91,7 +94,7 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
               { id: 'section', title: 'Side section', label: 'Side section' },
             ]}
           >
-            {bottom === 'checks' ? <ChecksPanel checks={checks} /> : <SectionView />}
+            {bottom === 'checks' ? <ChecksPanel checks={checks} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
           </Tabs>
         </main>
         <aside className="flex w-80 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Details and bay">
@@ -104,7 +107,7 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
               { id: 'bay', title: 'Bay panel', label: 'Bay' },
             ]}
           >
-            {side === 'details' ? <DetailsPanel /> : <BayPanel />}
+            {side === 'details' ? <DetailsPanel /> : <Suspense fallback={loading}><BayPanel /></Suspense>}
           </Tabs>
         </aside>
       </div>

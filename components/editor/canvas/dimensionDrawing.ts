@@ -3,7 +3,7 @@
  * 45° slashes, never arrowheads) and the value in the mono face, in the person's units.
  * Draws in mm on a transformed context. Never decides which dimensions to show.
  */
-import { formatLength, type LengthUnit } from '@/lib/layout';
+import { formatLength, type LengthUnit } from '@/lib/layout/units';
 import { theme, canvasFonts } from '../theme';
 import type { DimensionString } from '../geometry/dimensions';
 

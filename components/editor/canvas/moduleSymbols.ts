@@ -5,7 +5,8 @@
  * its label. Draws in mm on a context already transformed by the layer; line widths and text are
  * sized in screen pixels via `scale`. Never reads the store; never creates Konva nodes.
  */
-import { KINDS, type Facing, type Module } from '@/lib/layout';
+import { KINDS } from '@/lib/layout/kinds';
+import type { Facing, Module } from '@/lib/layout/schema';
 import { theme, canvasFonts } from '../theme';
 import { fillHatch } from './hatching';
 

@@ -2,7 +2,7 @@
  * Rulers along the top and left edge of the plan, in screen pixels, ticked in the person's units
  * at a spacing that stays readable at any zoom. Never draws in world space.
  */
-import { MM_PER_INCH, type LengthUnit } from '@/lib/layout';
+import { MM_PER_INCH, type LengthUnit } from '@/lib/layout/units';
 import type { Viewport } from '../geometry/viewport';
 import { theme, canvasFonts } from '../theme';
 

@@ -9,7 +9,8 @@
  */
 import { useEffect, useRef, type RefObject } from 'react';
 import { toast } from 'sonner';
-import { MODULE_KINDS, type ModuleKind } from '@/lib/layout';
+import { KINDS } from '@/lib/layout/kinds';
+import type { ModuleKind } from '@/lib/layout/schema';
 import type { EditorStore } from '../store/editorStore';
 import { toWorld, screenToMm } from '../geometry/viewport';
 import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitTest';
@@ -197,7 +198,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const kind = e.dataTransfer?.getData(KIND_DRAG_TYPE);
       if (!kind) return;
       e.preventDefault();
-      if (!(MODULE_KINDS as readonly string[]).includes(kind)) return void toast.error(`Unknown module kind "${kind}".`);
+      if (!Object.prototype.hasOwnProperty.call(KINDS, kind)) return void toast.error(`Unknown module kind "${kind}".`);
       const w = world(local(e));
       report(api.getState().addModule(kind as ModuleKind, w));
       el!.focus({ preventScroll: true });

@@ -16,7 +16,7 @@ export interface Viewport {
   height: Px;
 }
 
-export const MIN_SCALE = 0.02;
+export const MIN_SCALE = 0.002;
 export const MAX_SCALE = 12;
 /** Space kept around the bay by "fit to bay", for rulers and dimension strings. */
 export const FIT_MARGIN_PX = 72;

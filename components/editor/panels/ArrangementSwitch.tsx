@@ -4,7 +4,8 @@
  * arrangement dashed over this one. Switching is a view change: instant, never in undo.
  */
 import { useShallow } from 'zustand/react/shallow';
-import { ARRANGEMENTS, type Arrangement } from '@/lib/layout';
+import type { Arrangement } from '@/lib/layout/schema';
+import { EDITOR_ARRANGEMENTS as ARRANGEMENTS } from '../store/docRules';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 
 const WORDS: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };

@@ -8,12 +8,12 @@
 import { Plus, X } from 'lucide-react';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
-import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout';
+import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout/schema';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { LengthField } from './LengthField';
 import { LAYER_PRESETS } from './buildUpPresets';
 import { clearHeight, layersThickness } from '../geometry/bayGeometry';
-import { formatLength } from '@/lib/layout';
+import { formatLength } from '@/lib/layout/units';
 
 const section = 'space-y-2 border-b border-paper-edge p-4';
 const h3 = 'text-xs font-semibold uppercase tracking-wide text-ink-soft';

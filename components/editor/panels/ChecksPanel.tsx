@@ -8,7 +8,7 @@
  */
 import { useState } from 'react';
 import { CircleCheck, CircleAlert, CircleX, Loader2, CloudOff } from 'lucide-react';
-import { formatLength, type LengthUnit } from '@/lib/layout';
+import { formatLength, type LengthUnit } from '@/lib/layout/units';
 import type { Finding, FindingStatus } from '@/lib/checks/types';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
 import type { LiveChecks } from '../api/useLiveChecks';

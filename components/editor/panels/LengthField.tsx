@@ -5,7 +5,7 @@
  * itself: the caller's onCommit does, and its refusal is shown beside the field.
  */
 import { useId, useState } from 'react';
-import { parseLength, toUnit, type LengthUnit } from '@/lib/layout';
+import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0, testId, compact = false }: {
   label: string;

@@ -7,7 +7,8 @@
 import { useMemo, useState } from 'react';
 import { Search } from 'lucide-react';
 import { toast } from 'sonner';
-import { formatLength, type KindSpec, type MaterialFamily } from '@/lib/layout';
+import { formatLength } from '@/lib/layout/units';
+import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';
 import { matchKinds } from './partsSearch';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';

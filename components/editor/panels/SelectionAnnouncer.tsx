@@ -1,7 +1,8 @@
 'use client';
 /** Tells screen readers what is selected and where it is, as it changes (aria-live). */
 import { useShallow } from 'zustand/react/shallow';
-import { KINDS, formatLength } from '@/lib/layout';
+import { KINDS } from '@/lib/layout/kinds';
+import { formatLength } from '@/lib/layout/units';
 import { useEditor } from '../store/EditorStoreContext';
 
 export function SelectionAnnouncer({ id }: { id: string }) {

@@ -6,7 +6,7 @@
  */
 import type { ReactNode } from 'react';
 import { useShallow } from 'zustand/react/shallow';
-import { LENGTH_UNITS, type LengthUnit } from '@/lib/layout';
+import { LENGTH_UNITS, type LengthUnit } from '@/lib/layout/units';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { GRID_STEPS, type GridStep } from '../geometry/snapping';
 import { CommandButton } from './CommandButton';

@@ -4,7 +4,8 @@
  * millimetres. Pure: no React, so it is tested on its own.
  */
 import { z } from 'zod';
-import { ARRANGEMENTS, FACINGS, MODULE_KINDS, SURFACES, parseLength, toUnit, type LengthUnit, type Module } from '@/lib/layout';
+import { ARRANGEMENTS, FACINGS, MODULE_KINDS, SURFACES, type Module } from '@/lib/layout/schema';
+import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 export interface ModuleFormValues {
   label: string;

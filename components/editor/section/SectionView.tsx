@@ -7,7 +7,8 @@
  */
 import { useEffect, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
-import { KINDS, formatLength } from '@/lib/layout';
+import { KINDS } from '@/lib/layout/kinds';
+import { formatLength } from '@/lib/layout/units';
 import { useEditor } from '../store/EditorStoreContext';
 import { clearHeight, floorThickness, roofThickness } from '../geometry/bayGeometry';
 import { drawOrder } from '../geometry/hitTest';

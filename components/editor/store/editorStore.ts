@@ -5,10 +5,9 @@
  * every write (lengths rounded to whole mm). Must never hold Konva nodes, DOM objects or fetch.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import {
-  baySchema, buildUpSchema, occupantsSchema,
-  type Arrangement, type Bay, type BuildUp, type LayoutDoc, type LengthUnit, type Module, type ModuleKind, type Occupants,
-} from '@/lib/layout';
+import type { Arrangement, Bay, BuildUp, LayoutDoc, Module, ModuleKind, Occupants } from '@/lib/layout/schema';
+import type { LengthUnit } from '@/lib/layout/units';
+import { bayProblem, buildUpProblem, occupantsProblem } from './docRules';
 import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
 import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
@@ -203,23 +202,24 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       },
       updateBay(patch) {
         return commit('Edit bay', () => {
-          const parsed = baySchema.safeParse({ ...get().doc.bay, ...patch });
-          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.') || 'bay'}: ${i.message}`).join('; '));
-          return { doc: { ...get().doc, bay: parsed.data } };
+          const bay = { ...get().doc.bay, ...patch };
+          const problem = bayProblem(bay);
+          if (problem) throw new edits.EditError(problem);
+          return { doc: { ...get().doc, bay } };
         });
       },
       updateBuildUp(buildUp) {
         return commit('Edit build-up', () => {
-          const parsed = buildUpSchema.safeParse(buildUp);
-          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
-          return { doc: { ...get().doc, buildUp: parsed.data } };
+          const problem = buildUpProblem(buildUp);
+          if (problem) throw new edits.EditError(problem);
+          return { doc: { ...get().doc, buildUp } };
         });
       },
       updateOccupants(occupants) {
         return commit('Edit occupants', () => {
-          const parsed = occupantsSchema.safeParse(occupants);
-          if (!parsed.success) throw new edits.EditError(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
-          return { doc: { ...get().doc, occupants: parsed.data } };
+          const problem = occupantsProblem(occupants);
+          if (problem) throw new edits.EditError(problem);
+          return { doc: { ...get().doc, occupants } };
         });
       },
       renameLayout(name) {

@@ -4,7 +4,9 @@
  * untouched for undo). Every length written is rounded to whole millimetres and checked against
  * the document schema. Must never touch React, Konva or the network.
  */
-import { KINDS, moduleSchema, type Arrangement, type Facing, type LayoutDoc, type Module, type ModuleKind } from '@/lib/layout';
+import { KINDS } from '@/lib/layout/kinds';
+import type { Arrangement, Facing, LayoutDoc, Module, ModuleKind } from '@/lib/layout/schema';
+import { moduleProblem } from './docRules';
 import { linedInterior, rectsOverlap, type Rect } from '../geometry/bayGeometry';
 import { snapToStep } from '../geometry/snapping';
 import { newModuleId } from './ids';
@@ -31,12 +33,9 @@ export function checkedModule(m: Module): Module {
     elevation: Math.round(m.elevation),
     height: Math.round(m.height),
   };
-  const parsed = moduleSchema.safeParse(rounded);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    throw new EditError(`${issue.path.join('.') || 'module'}: ${issue.message}`);
-  }
-  return parsed.data;
+  const problem = moduleProblem(rounded);
+  if (problem) throw new EditError(problem);
+  return rounded;
 }
 
 function replaceModules(doc: LayoutDoc, changed: Map<string, Module>): LayoutDoc {

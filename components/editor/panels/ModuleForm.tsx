@@ -1,0 +1,177 @@
+'use client';
+/**
+ * The Details panel's form for one module, with react-hook-form and zod: lengths typed in any
+ * unit, a change applied when the field is left or Enter is pressed, as one undo entry. Loaded
+ * on first selection (it carries the form libraries), so the editor's first load stays small.
+ * Never writes the document except through store actions.
+ */
+import { useEffect, useMemo } from 'react';
+import { useForm, type FieldErrors } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { toast } from 'sonner';
+import { useShallow } from 'zustand/react/shallow';
+import { ARRANGEMENTS, FACINGS, SURFACES, type Module } from '@/lib/layout/schema';
+import { KINDS, KIND_LIST } from '@/lib/layout/kinds';
+import { useEditor, useEditorApi } from '../store/EditorStoreContext';
+import { formValuesOf, moduleFormSchema, patchFrom, type ModuleFormValues, type ModuleFormOutput } from './moduleForm';
+import { CommandButton } from './CommandButton';
+
+const FACING_WORDS: Record<Module['facing'], string> = { front: 'front (towards the cab)', rear: 'rear', left: 'left wall', right: 'right wall' };
+
+function firstError(errors: FieldErrors<ModuleFormValues>): string | undefined {
+  for (const v of Object.values(errors)) {
+    if (v && typeof v === 'object' && 'message' in v && typeof v.message === 'string') return v.message;
+  }
+  return undefined;
+}
+
+export default function ModuleForm({ module }: { module: Module }) {
+  const api = useEditorApi();
+  const { units, readOnly } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly })));
+  const schema = useMemo(() => moduleFormSchema(units), [units]);
+  const form = useForm<ModuleFormValues, unknown, ModuleFormOutput>({ resolver: zodResolver(schema), defaultValues: formValuesOf(module, units), mode: 'onSubmit' });
+  const { register, handleSubmit, reset, formState } = form;
+
+  // The store is the truth: when the module changes (drag, undo), the fields follow.
+  useEffect(() => {
+    reset(formValuesOf(module, units));
+  }, [module, units, reset]);
+
+  const apply = handleSubmit(
+    (v) => {
+      const patch = patchFrom(module, v);
+      if (Object.keys(patch).length === 0) return;
+      const label = `Edit ${Object.keys(patch).join(', ')}`;
+      const r = api.getState().updateModule(module.id, patch, label);
+      if (!r.ok) toast.error(r.error);
+    },
+    (errors) => {
+      const msg = firstError(errors);
+      if (msg) toast.error(msg);
+    },
+  );
+  const onBlurApply = { onBlur: () => void apply() };
+  const spec = KINDS[module.kind];
+  const propKeys = Array.from(new Set([...Object.keys(spec.props ?? {}), ...Object.keys(module.props ?? {})]));
+  const err = (name: keyof ModuleFormValues) => {
+    const e = formState.errors[name];
+    return e && 'message' in e && typeof e.message === 'string' ? e.message : undefined;
+  };
+
+  const field = (name: 'x' | 'y' | 'length' | 'width' | 'elevation' | 'height', label: string, hint?: string) => (
+    <label className="block">
+      <span className="text-xs text-ink-soft">{label}{hint ? <span className="text-ink-soft"> · {hint}</span> : null}</span>
+      <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
+        <input {...register(name, onBlurApply)} inputMode="decimal" aria-invalid={!!err(name)} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+        <span className="pr-2 font-mono text-xs text-ink-soft">{units}</span>
+      </span>
+      {err(name) && <span className="mt-0.5 block text-xs text-brick" role="alert">{err(name)}</span>}
+    </label>
+  );
+
+  return (
+    <form
+      onSubmit={(e) => {
+        e.preventDefault();
+        void apply();
+      }}
+      className="space-y-4 p-4 text-sm"
+      aria-label={`Details of ${module.label || spec.title}`}
+    >
+      <fieldset disabled={readOnly} className="space-y-4">
+        <div className="grid grid-cols-2 gap-3">
+          <label className="col-span-2 block">
+            <span className="text-xs text-ink-soft">Label</span>
+            <input {...register('label', onBlurApply)} placeholder={spec.title} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 outline-none focus:ring-2 focus:ring-copper" />
+          </label>
+          <label className="col-span-2 block">
+            <span className="text-xs text-ink-soft">Kind</span>
+            <select {...register('kind', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+              {KIND_LIST.map((k) => <option key={k.kind} value={k.kind}>{k.title}</option>)}
+            </select>
+          </label>
+        </div>
+        <div className="grid grid-cols-2 gap-3">
+          {field('x', 'Along (x)', 'from bulkhead')}
+          {field('y', 'Across (y)', 'from left wall')}
+          {field('length', 'Length (x)')}
+          {field('width', 'Width (y)')}
+          {field('elevation', 'Elevation', 'above floor')}
+          {field('height', 'Height')}
+        </div>
+        <div className="grid grid-cols-2 gap-3">
+          <label className="block">
+            <span className="text-xs text-ink-soft">Facing</span>
+            <select {...register('facing', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+              {FACINGS.map((f) => <option key={f} value={f}>{FACING_WORDS[f]}</option>)}
+            </select>
+          </label>
+          <label className="block">
+            <span className="text-xs text-ink-soft">Surface</span>
+            <select {...register('surface', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+              <option value="">none</option>
+              {SURFACES.map((s) => <option key={s} value={s}>{s}</option>)}
+            </select>
+          </label>
+        </div>
+        <fieldset>
+          <legend className="text-xs text-ink-soft">Exists in</legend>
+          <div className="mt-1 flex gap-3">
+            {ARRANGEMENTS.map((a) => (
+              <label key={a} className="flex items-center gap-1.5">
+                <input type="checkbox" value={a} {...register('arrangements', { onChange: () => void apply() })} className="accent-copper" data-testid={`details-in-${a}`} />
+                {a}
+              </label>
+            ))}
+          </div>
+          {err('arrangements') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('arrangements')}</span>}
+        </fieldset>
+        <label className="block">
+          <span className="text-xs text-ink-soft">Mass</span>
+          <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
+            <input {...register('massKg', onBlurApply)} inputMode="decimal" className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+            <span className="pr-2 font-mono text-xs text-ink-soft">kg</span>
+          </span>
+          {err('massKg') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('massKg')}</span>}
+        </label>
+        {propKeys.length > 0 && (
+          <fieldset className="space-y-2">
+            <legend className="text-xs font-medium text-ink-soft">{spec.title} details</legend>
+            {propKeys.map((k) => {
+              const sample = module.props?.[k] ?? spec.props?.[k];
+              return typeof sample === 'boolean' ? (
+                <label key={k} className="flex items-center gap-2">
+                  <input type="checkbox" {...register(`props.${k}`, { onChange: () => void apply() })} className="accent-copper" />
+                  {propLabel(k)}
+                </label>
+              ) : (
+                <label key={k} className="block">
+                  <span className="text-xs text-ink-soft">{propLabel(k)}</span>
+                  <input {...register(`props.${k}`, onBlurApply)} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
+                </label>
+              );
+            })}
+          </fieldset>
+        )}
+      </fieldset>
+      {/* Enter in a field applies it: implicit submission needs a submit button in the form. */}
+      <button type="submit" className="sr-only" tabIndex={-1} disabled={readOnly}>Apply changes</button>
+      {!readOnly && (
+        <div className="flex flex-wrap gap-2 border-t border-paper-edge pt-3">
+          <CommandButton id="edit.rotate" withLabel />
+          <CommandButton id="edit.duplicate" withLabel />
+          <CommandButton id="edit.delete" withLabel />
+        </div>
+      )}
+      <p className="text-xs text-ink-soft">Lengths may be typed in mm, cm or in (e.g. “120 cm”, “47 in”).</p>
+    </form>
+  );
+}
+
+const PROP_WORDS: Record<string, string> = {
+  litres: 'Capacity (litres)', watts: 'Power (W)', dutyCycle: 'Duty cycle (0–1)', burners: 'Burners', cylinders: 'Cylinders',
+  cylinderKg: 'Cylinder size (kg)', belted: 'Belted seat', fillLevel: 'Fill level drawn (0–1)',
+};
+function propLabel(k: string) {
+  return PROP_WORDS[k] ?? k.replace(/([A-Z])/g, ' $1').toLowerCase();
+}
