@@ -37,7 +37,6 @@ describe('editor document rules agree with the schema', () => {
       const clean = Object.fromEntries(Object.entries(m).filter(([, v]) => v !== undefined));
       const zodOk = moduleSchema.safeParse(clean).success;
       if (zodOk) accepted += 1;
-      // eslint-disable-next-line @typescript-eslint/no-explicit-any
       expect(moduleProblem(clean as any) === null).toBe(zodOk);
     }), { numRuns: 3000 });
     // Both sides of the equivalence are exercised, not only "both refuse".
@@ -48,7 +47,6 @@ describe('editor document rules agree with the schema', () => {
     let accepted = 0;
     fc.assert(fc.property(bayArb, (b) => {
       if (baySchema.safeParse(b).success) accepted += 1;
-      // eslint-disable-next-line @typescript-eslint/no-explicit-any
       expect(bayProblem(b as any) === null).toBe(baySchema.safeParse(b).success);
     }), { numRuns: 3000 });
     expect(accepted).toBeGreaterThan(30);
@@ -57,11 +55,9 @@ describe('editor document rules agree with the schema', () => {
   it('build-up and occupants: accepted exactly when their schemas accept (property)', () => {
     const layer = fc.record({ material: textish, thickness: length });
     fc.assert(fc.property(fc.record({ floor: fc.array(layer, { maxLength: 3 }), roof: fc.array(layer, { maxLength: 13 }), walls: fc.array(layer, { maxLength: 2 }) }), (b) => {
-      // eslint-disable-next-line @typescript-eslint/no-explicit-any
       expect(buildUpProblem(b as any) === null).toBe(buildUpSchema.safeParse(b).success);
     }), { numRuns: 1000 });
     fc.assert(fc.property(fc.record({ standingHeight: length, sleepers: fc.array(length, { maxLength: 13 }) }), (o) => {
-      // eslint-disable-next-line @typescript-eslint/no-explicit-any
       expect(occupantsProblem(o as any) === null).toBe(occupantsSchema.safeParse(o).success);
     }), { numRuns: 1000 });
   });
