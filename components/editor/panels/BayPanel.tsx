@@ -57,17 +57,21 @@ export function BayPanel() {
             <button type="button" className={smallBtn} onClick={() => setBay({ wheelArches: [...bay.wheelArches, { side: bay.wheelArches.some((a) => a.side === 'left') ? 'right' : 'left', x: Math.max(0, Math.round(bay.length / 2) - 475), length: 950, width: 210, height: 320 }] })}><Plus size={12} aria-hidden /> Add</button>
           </div>
           {bay.wheelArches.map((a, i) => (
-            <div key={i} className="grid grid-cols-[auto_1fr_1fr_1fr_1fr_auto] items-end gap-1">
-              <label className="text-xs"><span className="sr-only">Side</span>
-                <select value={a.side} onChange={(e) => setArch(i, { side: e.target.value as WheelArch['side'] })} className="rounded border border-paper-edge bg-paper px-1 py-1">
-                  <option value="left">left</option><option value="right">right</option>
-                </select>
-              </label>
-              <LengthField label={`Arch ${i + 1} from bulkhead`} unit={units} valueMm={a.x} onCommit={(v) => setArch(i, { x: v })} />
-              <LengthField label="Length" unit={units} valueMm={a.length} onCommit={(v) => setArch(i, { length: v })} />
-              <LengthField label="Stands in" unit={units} valueMm={a.width} onCommit={(v) => setArch(i, { width: v })} />
-              <LengthField label="Height" unit={units} valueMm={a.height} onCommit={(v) => setArch(i, { height: v })} />
-              <button type="button" aria-label={`Remove wheel arch ${i + 1}`} className={smallBtn} onClick={() => setBay({ wheelArches: bay.wheelArches.filter((_, j) => j !== i) })}><X size={12} aria-hidden /></button>
+            <div key={i} className="space-y-1 rounded border border-paper-edge p-2">
+              <div className="flex items-center justify-between">
+                <label className="flex items-center gap-1.5 text-xs text-ink-soft">Arch {i + 1}, side
+                  <select value={a.side} onChange={(e) => setArch(i, { side: e.target.value as WheelArch['side'] })} className="rounded border border-paper-edge bg-paper px-1 py-0.5 text-ink">
+                    <option value="left">left</option><option value="right">right</option>
+                  </select>
+                </label>
+                <button type="button" aria-label={`Remove wheel arch ${i + 1}`} className={smallBtn} onClick={() => setBay({ wheelArches: bay.wheelArches.filter((_, j) => j !== i) })}><X size={12} aria-hidden /></button>
+              </div>
+              <div className="grid grid-cols-2 gap-2">
+                <LengthField label="From bulkhead" unit={units} valueMm={a.x} onCommit={(v) => setArch(i, { x: v })} />
+                <LengthField label="Length" unit={units} valueMm={a.length} onCommit={(v) => setArch(i, { length: v })} />
+                <LengthField label="Stands in from wall" unit={units} valueMm={a.width} onCommit={(v) => setArch(i, { width: v })} />
+                <LengthField label="Height" unit={units} valueMm={a.height} onCommit={(v) => setArch(i, { height: v })} />
+              </div>
             </div>
           ))}
         </div>

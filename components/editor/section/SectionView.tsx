@@ -14,7 +14,7 @@ import { clearHeight, floorThickness, roofThickness } from '../geometry/bayGeome
 import { drawOrder } from '../geometry/hitTest';
 import { theme } from '../theme';
 
-const PAD = { left: 56, right: 24, top: 18, bottom: 26 };
+const PAD = { left: 40, right: 16, top: 12, bottom: 18 };
 
 export function SectionView() {
   const { doc, arrangement, units, selection } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement, units: s.units, selection: s.selection })));
@@ -45,18 +45,18 @@ export function SectionView() {
 
   return (
     <div className="flex h-full flex-col text-sm">
-      <div className="flex flex-wrap items-center gap-4 border-b border-paper-edge px-4 py-1.5 text-xs text-ink-soft">
-        <span>Side section, looking at the left wall, cab on the left ({arrangement}).</span>
+      <div className="flex items-center gap-3 overflow-hidden whitespace-nowrap border-b border-paper-edge px-4 py-1 text-xs text-ink-soft">
+        <span title="Looking at the left wall, cab on the left">Section ({arrangement})</span>
         <label className="flex items-center gap-1.5">Figure
           <select value={who} onChange={(e) => setStature(Number(e.target.value))} className="rounded border border-paper-edge bg-paper px-1 py-0.5 font-mono">
             {statureOptions.map((s) => <option key={s} value={s}>{formatLength(s, units)}</option>)}
           </select>
         </label>
         <label className="flex items-center gap-1.5">stands at
-          <input type="range" min={150} max={Math.max(151, L - 150)} step={10} value={fx} onChange={(e) => setFigureX(Number(e.target.value))} aria-valuetext={formatLength(fx, units)} className="accent-copper" />
+          <input type="range" min={150} max={Math.max(151, L - 150)} step={10} value={fx} onChange={(e) => setFigureX(Number(e.target.value))} aria-valuetext={formatLength(fx, units)} className="w-28 accent-copper" />
           <span className="font-mono">{formatLength(fx, units)}</span>
         </label>
-        <span className="font-mono">clear height {formatLength(clear, units)} · headroom for {formatLength(who, units)}: {headroom >= 0 ? formatLength(headroom, units) : `−${formatLength(-headroom, units)}`}</span>
+        <span className="truncate font-mono">headroom {headroom >= 0 ? formatLength(headroom, units) : `−${formatLength(-headroom, units)}`}</span>
       </div>
       <div ref={box} className="relative min-h-0 flex-1">
         <svg width={size.w} height={size.h} role="img" aria-label={`Side section: clear height ${formatLength(clear, units)}, ${modules.length} modules in ${arrangement}`} className="absolute inset-0">
