@@ -17,7 +17,7 @@ import type { PriceList } from '@/lib/planning';
 import type { PriceListDto } from '@/db/prices';
 import { moneyText, parseMoneyMinor } from './money';
 import { parseWithUnit, shown } from './quantities';
-import { usePriceList } from './parts/PartsListPanel';
+import { usePriceList } from './usePriceList';
 
 const CATEGORY_TITLE: Record<PriceKeyInfo['category'], string> = { module: 'Modules', sheet: 'Sheet goods', cable: 'Cable', electrics: 'Electrics', safety: 'Safety' };
 
@@ -103,7 +103,7 @@ function PriceListForm({ list, canEdit }: { list: PriceListDto; canEdit: boolean
           <div><label className="label" htmlFor="pl-vat">VAT (%)</label><input id="pl-vat" className="field font-mono" inputMode="decimal" {...form.register('vatPct')} />{e.vatPct && <p className="field-error">{e.vatPct.message}</p>}</div>
         </div>
         {groups.map((g) => (
-          <details key={g} className="rounded-sm border border-paper-edge" open={g === 'module'}>
+          <details key={g} className="rounded-sm border border-paper-edge" open={g === 'module' || rows.some((r, i) => r.category === g && !!e.rows?.[i])}>
             <summary className="cursor-pointer px-3 py-2 text-sm font-semibold">{CATEGORY_TITLE[g]}</summary>
             <table className="w-full text-left text-sm">
               <thead className="text-xs text-ink-soft"><tr><th className="px-3 py-1">Item</th><th>Per</th><th>Price ({currency}, net)</th><th>Workshop hours</th></tr></thead>

@@ -8,13 +8,11 @@
  */
 import { useMemo, useState } from 'react';
 import Link from 'next/link';
-import { useQuery } from '@tanstack/react-query';
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { ArrowDown, ArrowUp, Download, CircleAlert } from 'lucide-react';
-import { apiFetch } from '@/lib/api/client-fetch';
 import { computePartsList, type PartsLine } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
-import type { PriceListDto } from '@/db/prices';
+import { usePriceList } from '../usePriceList';
 import { formatMoney, quantityText } from '../money';
 import type { CutOptions } from '../cut/CutListPanel';
 
@@ -24,10 +22,6 @@ const CATEGORY = { module: 'Module', sheet: 'Sheet goods', cable: 'Cable', elect
 export function csvHref(layoutId: string, cut: CutOptions): string {
   const q = new URLSearchParams({ format: 'csv', kerf: String(cut.kerfMm), trim: String(cut.trimMm), grain: cut.respectGrain ? '1' : '0' });
   return `/api/layouts/${encodeURIComponent(layoutId)}/quote/parts?${q}`;
-}
-
-export function usePriceList() {
-  return useQuery({ queryKey: ['price-list'], queryFn: () => apiFetch<PriceListDto>('/api/studio/prices') });
 }
 
 export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string; doc: LayoutDoc; cut: CutOptions; dirty: boolean }) {

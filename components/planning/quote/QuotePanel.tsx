@@ -20,7 +20,7 @@ import type { LayoutDoc } from '@/lib/layout';
 import type { QuoteDto } from '@/db/quotes';
 import { formatMoney } from '../money';
 import { parseWithUnit } from '../quantities';
-import { usePriceList } from '../parts/PartsListPanel';
+import { usePriceList } from '../usePriceList';
 import type { CutOptions } from '../cut/CutListPanel';
 import { QuoteStatus } from './QuoteView';
 
