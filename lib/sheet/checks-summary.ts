@@ -11,6 +11,12 @@ import type { Ink, SheetItem } from './primitives';
 import { lineHeight, wrap } from './typography';
 
 const ORDER: FindingStatus[] = ['fail', 'warn', 'pass'];
+
+/**
+ * At most this many findings are written out in full (failures first); the rest are counted, so
+ * a layout with thousands of findings still makes a sheet a person can read.
+ */
+export const MAX_FINDINGS_LISTED = 120;
 const WORD: Record<FindingStatus, string> = { fail: 'FAIL', warn: 'WARN', pass: 'PASS' };
 const MARK: Record<FindingStatus, string> = { fail: 'x', warn: '!', pass: '+' };
 const INK: Record<FindingStatus, Ink> = { fail: 'brick', warn: 'ochre', pass: 'moss' };
@@ -41,7 +47,9 @@ export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavail
     flow.place(lh, (x, y) => [{ type: 'text', x, y: y + lh, text: 'The checks found nothing to report.', size, ink: 'soft' }]);
     return;
   }
-  for (const f of sortFindings(report.findings)) {
+  const sorted = sortFindings(report.findings);
+  const listed = sorted.slice(0, MAX_FINDINGS_LISTED);
+  for (const f of listed) {
     const head = [`${MARK[f.status]} ${WORD[f.status]}`, f.arrangement, f.id].filter(Boolean).join(' · ');
     const body = wrap(f.message, size, flow.columnWidth - 3);
     const source = f.source ? wrap(`Source: ${f.source}`, TYPE.small, flow.columnWidth - 3) : [];
@@ -52,5 +60,11 @@ export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavail
       source.forEach((t, i) => items.push({ type: 'text', x: x + 3, y: y + lh * (body.length + 1) + lineHeight(TYPE.small) * (i + 1), text: t, size: TYPE.small, ink: 'soft' }));
       return items;
     });
+  }
+  if (sorted.length > listed.length) {
+    const rest = countByStatus(sorted.slice(listed.length));
+    const words = (['fail', 'warn', 'pass'] as const).filter((k) => rest[k]).map((k) => `${rest[k]} ${k === 'fail' ? 'failing' : k === 'warn' ? 'to watch' : 'passing'}`);
+    const lines = wrap(`…and ${sorted.length - listed.length} more findings not listed here (${words.join(', ')}). Open the Checks in the editor for all of them.`, size, flow.columnWidth);
+    flow.place(lines.length * lh + 2, (x, y) => lines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, font: 'sans-bold' })));
   }
 }

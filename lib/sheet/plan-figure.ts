@@ -15,6 +15,12 @@ import { fit } from './typography';
 /** Paper space around the bay for dimension strings (left, top) and the caption (bottom). */
 export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
 
+/**
+ * Above this many modules the material hatching is left out: the drawing would be a grey mass,
+ * and the PDF slow to make (measured: ~75 strokes per hatched module). Outlines and numbers stay.
+ */
+export const HATCH_MODULE_LIMIT = 300;
+
 export const ARRANGEMENT_CAPTION: Record<Arrangement, string> = {
   travel: 'Travel: driving, belted seats in use',
   lounge: 'Lounge: parked, daytime',
@@ -68,7 +74,7 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top.
   const present = doc.modules.filter((m) => m.arrangements.includes(arrangement)).sort((a, b) => a.elevation - b.elevation);
   for (const m of present) {
-    items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0));
+    items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0, doc.modules.length <= HATCH_MODULE_LIMIT));
   }
 
   // Bare metal: heavy outline with the door openings left as gaps.
@@ -87,7 +93,8 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   // Caption.
   const count = doc.modules.filter((m) => m.arrangements.includes(arrangement)).length;
   items.push({ type: 'text', x: bx, y: by + W + 6.5, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
-  items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
+  const note = doc.modules.length > HATCH_MODULE_LIMIT ? ' · hatching left out (many modules)' : '';
+  items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'}${note} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
   return items;
 }
 
@@ -129,7 +136,7 @@ function bareMetal(doc: LayoutDoc, bx: number, by: number, L: number, W: number,
   return items;
 }
 
-function drawModule(m: Module, x: number, y: number, w: number, h: number, number: number): SheetItem[] {
+function drawModule(m: Module, x: number, y: number, w: number, h: number, number: number, hatched: boolean): SheetItem[] {
   const family = kindSpec(m.kind).family;
   if (m.elevation >= 1000) {
     // Hangs overhead: outline only, dashed, so what stands below stays readable.
@@ -139,7 +146,7 @@ function drawModule(m: Module, x: number, y: number, w: number, h: number, numbe
     ];
   }
   const items: SheetItem[] = [{ type: 'rect', x, y, w, h, fill: 'white' }];
-  switch (family) {
+  switch (hatched ? family : 'none') {
     case 'timber':
       items.push(...hatch(x, y, w, h, 1.4, 45, 'faint'));
       break;

@@ -8,7 +8,7 @@
 import { formatLength, type LayoutDoc, type LengthUnit } from '../layout';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
-import { scheduleNumbers, thickness } from './plan-figure';
+import { HATCH_MODULE_LIMIT, scheduleNumbers, thickness } from './plan-figure';
 import type { SheetItem } from './primitives';
 
 export const SECTION_MARGIN = { left: 13, top: 6, right: 16, bottom: 10 } as const;
@@ -66,7 +66,7 @@ export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: numbe
     const h = s(m.height);
     if (dayModule(m)) {
       items.push({ type: 'rect', x, y, w, h, fill: 'white', stroke: 'ink', width: LINE.medium });
-      items.push(...hatch(x, y, w, h, 1.6, 45, 'faint'));
+      if (doc.modules.length <= HATCH_MODULE_LIMIT) items.push(...hatch(x, y, w, h, 1.6, 45, 'faint'));
       items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
     } else {
       items.push({ type: 'rect', x, y, w, h, stroke: 'soft', width: LINE.thin, dash: [1, 0.7] });

@@ -157,3 +157,19 @@ describe('text for the standard fonts', () => {
     expect(bytes.byteLength).toBeGreaterThan(1000);
   });
 });
+
+describe('a layout with very many findings', () => {
+  it('lists the first findings (failures first) and counts the rest', async () => {
+    const { MAX_FINDINGS_LISTED } = await import('@/lib/sheet/checks-summary');
+    const many: CheckReport = {
+      ok: false,
+      findings: Array.from({ length: 400 }, (_, i) => ({ id: `fit.overlap`, status: i < 300 ? ('pass' as const) : ('fail' as const), message: `Finding ${i}`, source: 'Layout geometry' })),
+    };
+    const r = composeSheet(request({ report: many, paper: 'a3' }));
+    if (!r.ok) throw new Error(r.message);
+    const text = r.sheet.pages.flatMap(textsOf).join('\n');
+    expect(text.match(/x FAIL · fit\.overlap/g)).toHaveLength(100);
+    expect(text.match(/\+ PASS · fit\.overlap/g)).toHaveLength(MAX_FINDINGS_LISTED - 100);
+    expect(text).toContain(`…and ${400 - MAX_FINDINGS_LISTED} more findings not listed here (${400 - MAX_FINDINGS_LISTED} passing).`);
+  });
+});
