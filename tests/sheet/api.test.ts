@@ -84,6 +84,18 @@ describe('GET /api/layouts/:id/sheet', () => {
     expect((await get(w.clientLayoutId, w.foreignOwner, '?paper=letter')).status).toBe(404);
   });
 
+  it('answers 429 after a burst of sheets from one user, and serves the next user', async () => {
+    const who = w.foreignClient;
+    const statuses: number[] = [];
+    for (let i = 0; i < 12; i++) statuses.push((await get(w.clientLayoutId, who)).status); // 404s spend tokens too: no free probing
+    expect(statuses.slice(0, 9).every((s) => s === 404)).toBe(true);
+    expect(statuses.slice(-1)).toEqual([429]);
+    const res = await get(w.foreignLayoutId, who); // even their own layout, until the bucket refills
+    expect(res.status).toBe(429);
+    expect(res.json?.error).toMatch(/wait a few seconds/);
+    expect((await get(w.foreignLayoutId, w.foreignOwner)).status).toBe(200);
+  });
+
   it('prints an empty bay too (no modules, no doors)', async () => {
     const made = await layoutsRoute.POST(
       new Request('http://localhost:3000/api/layouts', { method: 'POST', headers: { host: 'localhost:3000', 'content-type': 'application/json', cookie: await sessionCookie(w.designer) }, body: JSON.stringify({ name: 'Bare L1H1', bayTemplateId: 'l1h1' }) }),

@@ -1,4 +1,5 @@
 import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
+import { RateLimiter } from '@/lib/api/rate-limit';
 import { composeSheet, renderPdf } from '@/lib/sheet';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
 import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
@@ -8,12 +9,21 @@ export const dynamic = 'force-dynamic';
 type Ctx = { params: Promise<{ id: string }> };
 
 /**
+ * A sheet costs up to a second or two of this process's time: a burst of 10, then one every
+ * 3 s per user (common practice, no source) — plenty for printing, not enough to tie the server up.
+ */
+export const sheetLimiter = new RateLimiter(10, 1 / 3);
+
+/**
  * The plan sheet as a PDF: `?paper=a4|a3&scale=10|20|25`. Anyone who may read the layout may
  * print it. A bay that does not fit the paper at that scale gets 422 with the reason and a
  * suggested scale (or paper) that fits.
  */
 export const GET = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
+  if (!sheetLimiter.take(actor.userId)) {
+    throw new HttpError(429, 'Too many plan sheets at once; wait a few seconds.', { retryAfter: sheetLimiter.retryAfter(actor.userId) });
+  }
   const { id } = await params;
   const ctx = await sheetRequestFor(actor, id); // rights first, so a stranger learns nothing from the query rules
   const q = parseWith(sheetQuerySchema, queryOf(req.url));
