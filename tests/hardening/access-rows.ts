@@ -7,6 +7,7 @@ import type { World } from '../helpers/world';
 import type { Db } from '@/db/client';
 import { starterLayout } from '@/lib/layout/templates';
 import { SHARING_ROWS } from '../sharing/access-rows';
+import { PLANNING_ROWS } from '../planning-api/access-rows';
 
 export const WHO = ['anonymous', 'viewer', 'foreignClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
@@ -104,4 +105,4 @@ const CORE_ROWS: Row[] = [
   },
 ];
 
-export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS];
+export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS];
