@@ -4,7 +4,7 @@
  * shared commands for a multi-selection, or a hint when nothing is selected. Read-only viewers
  * see the same values, disabled. Never writes the document except through store actions.
  */
-import { lazy, Suspense, useMemo } from 'react';
+import { lazy, Suspense, useDeferredValue, useMemo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
@@ -14,7 +14,10 @@ import { CommandButton } from './CommandButton';
 const ModuleForm = lazy(() => import('./ModuleForm'));
 
 export function DetailsPanel() {
-  const { selection, modules, units, readOnly } = useEditor(useShallow((s) => ({ selection: s.selection, modules: s.doc.modules, units: s.units, readOnly: s.readOnly })));
+  const live = useEditor(useShallow((s) => ({ selection: s.selection, modules: s.doc.modules })));
+  const { units, readOnly } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly })));
+  // The form follows the selection at low priority, so selecting and starting a drag stays smooth.
+  const { selection, modules } = useDeferredValue(live);
   const selected = useMemo(() => modules.filter((m) => selection.includes(m.id)), [modules, selection]);
   if (selected.length === 0) {
     return (
