@@ -12,20 +12,23 @@ interface Props {
   layoutId: string;
   paper: 'a4' | 'a3';
   scale: 10 | 20 | 25;
+  /** The issued revision on show, or null for the working copy. */
+  revision: string | null;
   /** False when the bay does not fit: the PDF link would only answer 422. */
   canDownload: boolean;
 }
 
-export function SheetControls({ layoutId, paper, scale, canDownload }: Props) {
+export function SheetControls({ layoutId, paper, scale, revision, canDownload }: Props) {
   const router = useRouter();
-  const go = (p: string, s: number) => router.push(`/layouts/${layoutId}/sheet?paper=${p}&scale=${s}`);
-  const pdf = `/api/layouts/${layoutId}/sheet?paper=${paper}&scale=${scale}`;
+  const rev = revision ? `&revision=${revision}` : '';
+  const go = (p: string, s: number) => router.push(`/layouts/${layoutId}/sheet?paper=${p}&scale=${s}${rev}`);
+  const pdf = `/api/layouts/${layoutId}/sheet?paper=${paper}&scale=${scale}${rev}`;
   return (
     <div className="no-print flex flex-wrap items-end gap-4 border-b border-paper-edge bg-paper px-4 py-3">
       <Link href={`/layouts/${layoutId}`} className="btn-quiet px-2 py-1 text-sm">
         <ArrowLeft size={14} aria-hidden="true" /> Back to the editor
       </Link>
-      <h1 className="mr-auto text-lg font-semibold text-ink">Plan sheet</h1>
+      <h1 className="mr-auto text-lg font-semibold text-ink">Plan sheet{revision ? <span className="ml-2 text-sm font-normal text-ink-soft">revision {revision}</span> : null}</h1>
       <label className="flex flex-col text-sm">
         <span className="label">Paper</span>
         <select className="field" value={paper} onChange={(e) => go(e.target.value, scale)} aria-label="Paper">

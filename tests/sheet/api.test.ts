@@ -2,6 +2,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as sheet from '@/app/api/layouts/[id]/sheet/route';
 import * as layoutsRoute from '@/app/api/layouts/route';
+import * as oneLayout from '@/app/api/layouts/[id]/route';
+import * as revisions from '@/app/api/layouts/[id]/revisions/route';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { sessionCookie, type SessionUser } from '../helpers/http';
@@ -94,6 +96,39 @@ describe('GET /api/layouts/:id/sheet', () => {
     expect(res.status).toBe(429);
     expect(res.json?.error).toMatch(/wait a few seconds/);
     expect((await get(w.foreignLayoutId, w.foreignOwner)).status).toBe(200);
+  });
+
+  it('prints an issued revision by its letter: the frozen document, with the letter in the title block', async () => {
+    const cookie = { cookie: await sessionCookie(w.designer), host: 'localhost:3000', 'content-type': 'application/json' };
+    const issued = await revisions.POST(new Request(`http://localhost:3000/api/layouts/${w.otherLayoutId}/revisions`, { method: 'POST', headers: cookie, body: JSON.stringify({ note: 'First issue' }) }), { params: Promise.resolve({ id: w.otherLayoutId }) });
+    expect(issued.status).toBe(201);
+    const { revision: { letter } } = await issued.json();
+    expect(letter).toMatch(/^[A-Z]+$/);
+    // Change the working copy after issuing: the revision's sheet must not follow.
+    const cur = await (await oneLayout.GET(new Request(`http://localhost:3000/api/layouts/${w.otherLayoutId}`, { headers: cookie }), { params: Promise.resolve({ id: w.otherLayoutId }) })).json();
+    const doc = structuredClone(cur.doc);
+    doc.modules[0].label = 'Relabelled after the issue';
+    const saved = await oneLayout.PUT(new Request(`http://localhost:3000/api/layouts/${w.otherLayoutId}`, { method: 'PUT', headers: { ...cookie, 'if-match': String(cur.version) }, body: JSON.stringify({ doc }) }), { params: Promise.resolve({ id: w.otherLayoutId }) });
+    expect(saved.status).toBe(200);
+
+    const frozen = await get(w.otherLayoutId, w.otherClient, `?revision=${letter}`);
+    expect(frozen.status).toBe(200);
+    expect(frozen.headers.get('content-disposition')).toMatch(new RegExp(`rev ${letter} A4 1-20\\.pdf`));
+    const read = await readPdf(frozen.bytes);
+    expect(read.pages[0].texts.map((t) => t.str)).toContain(letter);
+    const all = read.pages.map((p) => p.text).join(' ');
+    expect(all).not.toContain('Relabelled after the issue');
+    const working = await readPdf((await get(w.otherLayoutId, w.designer)).bytes);
+    expect(working.pages.map((p) => p.text).join(' ')).toContain('Relabelled after the issue');
+    expect(working.pages[0].texts.map((t) => t.str)).toContain('Working copy');
+  });
+
+  it('answers 404 for a revision that was never issued and 400 for a malformed letter', async () => {
+    expect((await get(w.clientLayoutId, w.designer, '?revision=Q')).status).toBe(404);
+    const bad = await get(w.clientLayoutId, w.designer, '?revision=b');
+    expect(bad.status).toBe(400);
+    expect((bad.json?.issues as { path: string }[]).map((i) => i.path)).toContain('revision');
+    expect((await get(w.clientLayoutId, w.foreignOwner, '?revision=A')).status).toBe(404);
   });
 
   it('prints an empty bay too (no modules, no doors)', async () => {

@@ -22,13 +22,13 @@ export default async function SheetPage({ params, searchParams }: Props) {
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
   const { id } = await params;
-  const ctx = await sheetRequestFor(actor, id).catch((err) => {
-    if (err instanceof NotFoundError) notFound();
-    throw err;
-  });
   const raw = Object.fromEntries(Object.entries(await searchParams).filter((e): e is [string, string] => typeof e[1] === 'string'));
   const parsed = sheetQuerySchema.safeParse(raw);
   const query = parsed.success ? parsed.data : sheetQuerySchema.parse({});
+  const ctx = await sheetRequestFor(actor, id, query.revision).catch((err) => {
+    if (err instanceof NotFoundError) notFound();
+    throw err;
+  });
   const result = composeSheet({ ...ctx.request, paper: query.paper, scale: query.scale });
   const paper = PAPER_MM[query.paper];
   const canEdit = actor.role !== 'client';
@@ -45,10 +45,10 @@ export default async function SheetPage({ params, searchParams }: Props) {
           .sheet-page:last-child { break-after: auto; }
         }
       `}</style>
-      <SheetControls layoutId={ctx.layoutId} paper={query.paper} scale={query.scale} canDownload={result.ok} />
+      <SheetControls layoutId={ctx.layoutId} paper={query.paper} scale={query.scale} revision={query.revision ?? null} canDownload={result.ok} />
       {!parsed.success && (
         <p role="alert" className="no-print mx-4 mt-3 rounded-sm border border-ochre bg-ochre-light px-3 py-2 text-sm text-ink">
-          That paper or scale is not one we print; showing A4 at 1:20. Choose from the lists above.
+          That paper, scale or revision is not one we can print; showing the working copy on A4 at 1:20. Choose from the lists above.
         </p>
       )}
       <div className="flex flex-col gap-4 p-4 xl:flex-row xl:items-start">
@@ -62,7 +62,7 @@ export default async function SheetPage({ params, searchParams }: Props) {
               <p className="mb-2 font-semibold">The bay does not fit this paper at 1:{query.scale}.</p>
               <p className="mb-3">{result.message}</p>
               {result.suggestion && (
-                <Link className="btn-primary" href={`/layouts/${ctx.layoutId}/sheet?paper=${result.suggestion.paper}&scale=${result.suggestion.scale}`}>
+                <Link className="btn-primary" href={`/layouts/${ctx.layoutId}/sheet?paper=${result.suggestion.paper}&scale=${result.suggestion.scale}${query.revision ? `&revision=${query.revision}` : ''}`}>
                   Show it at 1:{result.suggestion.scale} on {PAPER_MM[result.suggestion.paper].label}
                 </Link>
               )}

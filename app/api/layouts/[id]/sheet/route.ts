@@ -2,6 +2,7 @@ import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { composeSheet, renderPdf } from '@/lib/sheet';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
+import { getLayout } from '@/db/layouts';
 import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
 
 export const dynamic = 'force-dynamic';
@@ -15,7 +16,7 @@ type Ctx = { params: Promise<{ id: string }> };
 export const sheetLimiter = new RateLimiter(10, 1 / 3);
 
 /**
- * The plan sheet as a PDF: `?paper=a4|a3&scale=10|20|25`. Anyone who may read the layout may
+ * The plan sheet as a PDF: `?paper=a4|a3&scale=10|20|25[&revision=B]`. Anyone who may read the layout may
  * print it. A bay that does not fit the paper at that scale gets 422 with the reason and a
  * suggested scale (or paper) that fits.
  */
@@ -25,8 +26,13 @@ export const GET = handle<Ctx>(async (req, { params }) => {
     throw new HttpError(429, 'Too many plan sheets at once; wait a few seconds.', { retryAfter: sheetLimiter.retryAfter(actor.userId) });
   }
   const { id } = await params;
-  const ctx = await sheetRequestFor(actor, id); // rights first, so a stranger learns nothing from the query rules
-  const q = parseWith(sheetQuerySchema, queryOf(req.url));
+  const parsed = sheetQuerySchema.safeParse(queryOf(req.url));
+  if (!parsed.success) {
+    await getLayout(actor, id); // rights first, so a stranger learns nothing from the query rules
+    parseWith(sheetQuerySchema, queryOf(req.url)); // throws the 400 with field paths
+  }
+  const q = parsed.data!;
+  const ctx = await sheetRequestFor(actor, id, q.revision);
   const result = composeSheet({ ...ctx.request, paper: q.paper, scale: q.scale });
   if (!result.ok) throw new HttpError(422, result.message, { suggestion: result.suggestion, needed: result.needed, available: result.available });
   const bytes = await renderPdf(result.sheet, { author: ctx.request.details.studio });

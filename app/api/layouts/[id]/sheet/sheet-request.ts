@@ -3,13 +3,14 @@
  * studio's units and check defaults, the check report — for the PDF route and the HTML print
  * view alike, after the rights checks of `getLayout` (404 for anyone who may not see it). The
  * revisions feature can pass a frozen revision (letter and document) to print that instead of
- * the working copy. Server only; never trusts a query string beyond its schema.
+ * the working copy (`?revision=B`). Server only; never trusts a query string beyond its schema.
  */
 import 'server-only';
 import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
 import { getStudio, withStudioDefaults } from '@/db/studios';
+import { getRevision, revisionIdByLetter } from '@/db/sharing/revisions';
 import { runChecks } from '@/lib/checks';
 import type { CheckReport } from '@/lib/checks/types';
 import type { LayoutDoc } from '@/lib/layout';
@@ -19,6 +20,8 @@ import { REVISION_LETTER, type SheetRequest } from '@/lib/sheet';
 export const sheetQuerySchema = z.strictObject({
   paper: z.enum(['a4', 'a3'], 'paper is a4 or a3').default('a4'),
   scale: z.enum(['10', '20', '25'], 'scale is 10, 20 or 25 (for 1:10, 1:20, 1:25)').default('20').transform((s) => Number(s) as 10 | 20 | 25),
+  /** An issued revision's letter: print that frozen copy instead of the working copy. */
+  revision: z.string().regex(REVISION_LETTER, 'a revision letter, e.g. A or B').optional(),
 });
 export type SheetQuery = z.infer<typeof sheetQuerySchema>;
 
@@ -43,8 +46,15 @@ export function today(now = new Date()): string {
   return now.toISOString().slice(0, 10);
 }
 
-export async function sheetRequestFor(actor: Actor, layoutId: string, revision?: FrozenRevision): Promise<SheetContext> {
+/** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
+export async function frozenRevision(actor: Actor, layoutId: string, letter: string): Promise<FrozenRevision> {
+  const rev = await getRevision(actor, layoutId, await revisionIdByLetter(actor, layoutId, letter));
+  return { letter: rev.letter, doc: rev.doc };
+}
+
+export async function sheetRequestFor(actor: Actor, layoutId: string, revision?: FrozenRevision | string): Promise<SheetContext> {
   const layout = await getLayout(actor, layoutId);
+  if (typeof revision === 'string') revision = await frozenRevision(actor, layoutId, revision);
   if (revision && !REVISION_LETTER.test(revision.letter)) throw new Error(`not a revision letter: ${revision.letter}`);
   const studio = await getStudio(actor);
   const doc = revision?.doc ?? layout.doc;
