@@ -4,6 +4,7 @@
  * viewer-link holder, a client of another studio, the layout's client, a designer, the owner and
  * the owner of another studio, asserting the status and that no other studio's data is in any body.
  */
+import os from 'node:os';
 import fs from 'node:fs';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -53,6 +54,8 @@ let w: World;
 let fx: Fixture;
 
 beforeAll(async () => {
+  // Uploaded files of these tests go to a folder of their own.
+  process.env.BAYWRIGHT_DATA_ROOT = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-matrix-'));
   db = await useFreshDb();
   w = await buildWorld(db);
   fx = { world: w, db };

@@ -7,6 +7,7 @@ import type { World } from '../helpers/world';
 import type { Db } from '@/db/client';
 import { starterLayout } from '@/lib/layout/templates';
 import { SHARING_ROWS } from '../sharing/access-rows';
+import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
 
 export const WHO = ['anonymous', 'viewer', 'foreignClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
@@ -105,4 +106,4 @@ const CORE_ROWS: Row[] = [
   },
 ];
 
-export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS];
+export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS];

@@ -5,6 +5,9 @@
  * be a 5xx or carry a stack trace, nothing may reject unhandled, and after every refused request
  * the database must be exactly as it was.
  */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { sql } from 'drizzle-orm';
@@ -21,6 +24,8 @@ const unhandled: unknown[] = [];
 const onUnhandled = (reason: unknown) => unhandled.push(reason);
 
 beforeAll(async () => {
+  // Uploaded files of these tests go to a folder of their own.
+  process.env.BAYWRIGHT_DATA_ROOT = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-matrix-'));
   db = await useFreshDb();
   fx = { world: await buildWorld(db), db };
   process.on('unhandledRejection', onUnhandled);
