@@ -5,7 +5,7 @@
  *  1. Drag one module across a 200-module layout (and a 2000-module one) for 120 pointer steps and
  *     report the frame-interval p95, the Konva draw time per frame p95 and the frames over 50 ms.
  *     Goals at 200 modules: frame p95 ≤ 17 ms, draw p95 ≤ 8 ms, no frame over 50 ms.
- *  2. Drop a module 20 times in a 30-module layout and time drop → updated findings (the editor
+ *  2. Drop a module 40 times in a 30-module layout and time drop → updated findings (the editor
  *     records document change → findings arrival per document). Goal: p95 ≤ 150 ms.
  *  3. Gzipped JavaScript transferred for the editor route and for /layouts, each from an empty
  *     cache. Goals: editor ≤ 300 KB, other routes ≤ 170 KB.
@@ -123,12 +123,15 @@ async function dragBench(page: Page, base: string, id: string, doc: LayoutDoc): 
   };
 }
 
-async function dropToFindings(page: Page, base: string, id: string, doc: LayoutDoc): Promise<{ samples: number; p50: number; p95: number }> {
+const DROPS = 40;
+
+async function dropToFindings(page: Page, base: string, id: string, doc: LayoutDoc): Promise<{ samples: number; p50: number; p95: number; requestP95: number }> {
   await openEditor(page, base, id);
   await page.getByTestId('checks-status').filter({ hasText: 'up to date' }).waitFor({ timeout: 30_000 });
   await page.evaluate('if (window.__baywrightChecks) window.__baywrightChecks.latencies = []');
   const m = doc.modules.filter((o) => o.arrangements.includes('lounge') && o.elevation === 0 && o.kind === 'drawer-unit')[0] ?? doc.modules[0];
-  for (let i = 0; i < 20; i++) {
+  await page.evaluate('performance.clearResourceTimings()');
+  for (let i = 0; i < DROPS; i++) {
     const dir = i % 2 === 0 ? 1 : -1;
     const p = await screenOf(page, m.x + m.length / 2 + (i % 2 === 0 ? 0 : 40), m.y + m.width / 2);
     await page.mouse.move(p.x, p.y);
@@ -140,7 +143,9 @@ async function dropToFindings(page: Page, base: string, id: string, doc: LayoutD
     await page.waitForTimeout(250);
   }
   const lat = (await page.evaluate('window.__baywrightChecks ? window.__baywrightChecks.latencies : []')) as number[];
-  return { samples: lat.length, p50: round(percentile(lat, 50), 1), p95: round(percentile(lat, 95), 1) };
+  // The POST /api/checks round trips alone (server and network), to tell them from the page's own work.
+  const requests = (await page.evaluate("performance.getEntriesByType('resource').filter((e) => e.name.endsWith('/api/checks')).map((e) => e.duration)")) as number[];
+  return { samples: lat.length, p50: round(percentile(lat, 50), 1), p95: round(percentile(lat, 95), 1), requestP95: round(percentile(requests, 95), 1) };
 }
 
 async function scriptKb(browser: Browser, base: string, path: (p: Page) => Promise<string>, ready: (p: Page) => Promise<unknown>): Promise<number> {
@@ -193,7 +198,7 @@ async function main() {
           (d.modules === 200 ? `  [goals: frame ≤ 17 ${mark(d.frameP95 <= 17)}, draw ≤ 8 ${mark(d.drawP95 <= 8)}, 0 over 50 ${mark(d.over50 === 0)}]` : ''),
       );
     }
-    console.log(`drop → updated findings, 30 modules, ${checks.samples} drops: p50 ${checks.p50} ms, p95 ${checks.p95} ms  [goal ≤ 150 ms ${mark(checks.p95 <= 150)}]`);
+    console.log(`drop → updated findings, 30 modules, ${checks.samples} drops: p50 ${checks.p50} ms, p95 ${checks.p95} ms (POST /api/checks round trip p95 ${checks.requestP95} ms)  [goal ≤ 150 ms ${mark(checks.p95 <= 150)}]`);
     console.log(`gzipped JavaScript: editor route ${editorKb} KB [≤ 300 ${mark(editorKb <= 300)}], /layouts ${layoutsKb} KB [≤ 170 ${mark(layoutsKb <= 170)}]`);
     return { drag200, drag2000, checks, editorKb, layoutsKb };
   } finally {

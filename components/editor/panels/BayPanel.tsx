@@ -5,6 +5,7 @@
  * sleepers' statures). Each change is one undo entry through the store; the schema refuses
  * impossible values (a door past the end of its wall) with a message. Never writes otherwise.
  */
+import { memo } from 'react';
 import { Plus, X } from 'lucide-react';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
@@ -19,7 +20,7 @@ const section = 'space-y-2 border-b border-paper-edge p-4';
 const h3 = 'text-xs font-semibold uppercase tracking-wide text-ink-soft';
 const smallBtn = 'inline-flex items-center gap-1 rounded border border-paper-edge bg-paper px-2 py-0.5 text-xs hover:border-ink-faint disabled:opacity-40';
 
-export function BayPanel() {
+export const BayPanel = memo(function BayPanel() {
   const api = useEditorApi();
   const { doc, units, readOnly } = useEditor(useShallow((s) => ({ doc: s.doc, units: s.units, readOnly: s.readOnly })));
   const bay = doc.bay;
@@ -146,4 +147,4 @@ export function BayPanel() {
       </fieldset>
     </div>
   );
-}
+});

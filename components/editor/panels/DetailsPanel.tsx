@@ -4,7 +4,7 @@
  * shared commands for a multi-selection, or a hint when nothing is selected. Read-only viewers
  * see the same values, disabled. Never writes the document except through store actions.
  */
-import { lazy, Suspense, useDeferredValue, useMemo } from 'react';
+import { memo, lazy, Suspense, useDeferredValue, useMemo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
@@ -13,7 +13,7 @@ import { CommandButton } from './CommandButton';
 
 const ModuleForm = lazy(() => import('./ModuleForm'));
 
-export function DetailsPanel() {
+export const DetailsPanel = memo(function DetailsPanel() {
   const live = useEditor(useShallow((s) => ({ selection: s.selection, modules: s.doc.modules })));
   const { units, readOnly } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly })));
   // The form follows the selection at low priority, so selecting and starting a drag stays smooth.
@@ -53,5 +53,5 @@ export function DetailsPanel() {
       <ModuleForm key={selected[0].id} module={selected[0]} />
     </Suspense>
   );
-}
+});
 

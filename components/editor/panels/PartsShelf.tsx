@@ -4,7 +4,7 @@
  * Drag a part onto the plan to place it there, or press it (mouse or keyboard) to place it in the
  * first free spot. Never edits the document except through the store's addModule.
  */
-import { useMemo, useState } from 'react';
+import { memo, useMemo, useState } from 'react';
 import { Search } from 'lucide-react';
 import { toast } from 'sonner';
 import { formatLength } from '@/lib/layout/units';
@@ -28,7 +28,7 @@ function Swatch({ family }: { family: MaterialFamily }) {
   return <span aria-hidden className={`inline-block h-6 w-8 shrink-0 border-ink bg-paper ${border}`} style={{ background: FAMILY_SWATCH[family] }} />;
 }
 
-export function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
+export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
   const api = useEditorApi();
   const units = useEditor((s) => s.units);
   const [query, setQuery] = useState('');
@@ -88,4 +88,4 @@ export function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
       </ul>
     </nav>
   );
-}
+});

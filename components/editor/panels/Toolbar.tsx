@@ -4,7 +4,7 @@
  * same command objects as the keyboard), snap step, display units, the 1:1 screen scale and the
  * save indicator. Never edits the document except through commands and store actions.
  */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { LENGTH_UNITS, type LengthUnit } from '@/lib/layout/units';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
@@ -14,7 +14,7 @@ import { ArrangementSwitch } from './ArrangementSwitch';
 import { SaveIndicator } from './SaveIndicator';
 import type { SaveStatus } from '../api/useAutosave';
 
-export function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveStatus; saveDetail?: string | null; extra?: ReactNode }) {
+export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveStatus; saveDetail?: string | null; extra?: ReactNode }) {
   const api = useEditorApi();
   const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, snap: st.snap, units: st.units, scale: st.viewport.scale, actual: st.actualPxPerMm, ghost: st.ghost, version: st.version })));
   return (
@@ -64,7 +64,7 @@ export function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveSta
       </div>
     </div>
   );
-}
+});
 
 /** The drawing scale as a drafter writes it: 1:20 when zoomed out, 2:1 when zoomed in. */
 export function drawingScale(scale: number, actual: number): string {

@@ -5,7 +5,7 @@
  * the clear-height line, and a standing figure of the chosen stature that can be moved along the
  * bay. A drawing, not a check: pass/fail comes from the check engine. Never edits the document.
  */
-import { useEffect, useRef, useState } from 'react';
+import { memo, useEffect, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
@@ -16,7 +16,7 @@ import { theme } from '../theme';
 
 const PAD = { left: 40, right: 16, top: 12, bottom: 18 };
 
-export function SectionView() {
+export const SectionView = memo(function SectionView() {
   const { doc, arrangement, units, selection } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement, units: s.units, selection: s.selection })));
   const box = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState({ w: 800, h: 220 });
@@ -104,7 +104,7 @@ export function SectionView() {
       </div>
     </div>
   );
-}
+});
 
 /** A plain standing figure scaled to `stature` px: head, body, arms, legs (our own drawing). */
 function Figure({ x, feet, stature, over }: { x: number; feet: number; stature: number; over: boolean }) {
