@@ -30,7 +30,7 @@ export interface CallOptions {
   path?: string;
   params?: Record<string, string>;
   json?: unknown;
-  body?: string | Uint8Array;
+  body?: string | Uint8Array<ArrayBuffer>;
   headers?: Record<string, string>;
   as?: SessionUser | null;
 }
@@ -38,7 +38,7 @@ export interface CallOptions {
 export async function call(handler: Handler, options: CallOptions = {}): Promise<{ status: number; body: any; headers: Headers }> {
   const headers: Record<string, string> = { host: 'localhost:3000', ...options.headers };
   if (options.as) headers.cookie = await sessionCookie(options.as);
-  let body: string | Uint8Array | undefined = options.body;
+  let body: string | Uint8Array<ArrayBuffer> | undefined = options.body;
   if (options.json !== undefined) {
     body = JSON.stringify(options.json);
     headers['content-type'] ??= 'application/json';
