@@ -53,6 +53,23 @@ test('a designer opens the plan sheet, downloads the PDF and adds a reference ph
   await expect(page.getByRole('list', { name: 'Reference files' }).getByRole('link', { name: 'side door open.png' })).toBeVisible();
 });
 
+test('the HTML sheet prints true to scale: Chromium’s print of it has A4 pages and a 3100 mm line of 439.37 pt at 1:20', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openSheet(page);
+  await page.emulateMedia({ media: 'print' });
+  const printed = await readPdf(new Uint8Array(await page.pdf({ preferCSSPageSize: true, printBackground: true })));
+  const sheets = printed.pages.length;
+  expect(sheets).toBeGreaterThanOrEqual(5);
+  expect(printed.pages[0].width).toBeCloseTo(841.89, 0);
+  expect(printed.pages[0].height).toBeCloseTo(595.28, 0);
+  // The print has no app header or controls: the first page starts with the drawing.
+  expect(printed.pages[0].text).not.toContain('Back to the editor');
+  expect(printed.pages[0].text).toContain('3100 mm');
+  const label = printed.pages[0].texts.find((t) => t.str.includes('3100 mm'))!;
+  const under = printed.pages[0].segments.filter((sg) => Math.abs(sg.y1 - sg.y2) < 0.05 && sg.y1 < label.y && label.y - sg.y1 < 8 && Math.min(sg.x1, sg.x2) < label.x && Math.max(sg.x1, sg.x2) > label.x);
+  expect(under.map((sg) => Math.abs(sg.x2 - sg.x1)).some((len) => Math.abs(len - 439.37) < 0.5)).toBe(true);
+});
+
 test('a scale the bay does not fit at says so and offers one that fits', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
   await openSheet(page);

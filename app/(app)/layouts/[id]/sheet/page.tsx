@@ -40,7 +40,8 @@ export default async function SheetPage({ params, searchParams }: Props) {
         @media print {
           header, .no-print { display: none !important; }
           html, body, .sheet-view { background: white !important; }
-          .sheet-stack { padding: 0 !important; gap: 0 !important; }
+          .min-h-screen, .sheet-view { min-height: 0 !important; }
+          .sheet-body, .sheet-stack { display: block !important; padding: 0 !important; margin: 0 !important; gap: 0 !important; }
           .sheet-page { box-shadow: none !important; break-after: page; width: ${paper.width}mm !important; height: ${paper.height}mm !important; max-width: none !important; }
           .sheet-page:last-child { break-after: auto; }
         }
@@ -51,7 +52,7 @@ export default async function SheetPage({ params, searchParams }: Props) {
           That paper, scale or revision is not one we can print; showing the working copy on A4 at 1:20. Choose from the lists above.
         </p>
       )}
-      <div className="flex flex-col gap-4 p-4 xl:flex-row xl:items-start">
+      <div className="sheet-body flex flex-col gap-4 p-4 xl:flex-row xl:items-start">
         <main className="sheet-stack flex min-w-0 flex-1 flex-col items-center gap-6" aria-label="Plan sheet pages">
           {result.ok ? (
             result.sheet.pages.map((page, i) => (
