@@ -3,12 +3,12 @@
  * document (import, "keep mine as a copy"), a bay template, a starter layout or a custom bay.
  */
 import { z } from 'zod';
-import { baySchema, type LayoutDoc } from '@/lib/layout/schema';
+import { baySchema, plainText, type LayoutDoc } from '@/lib/layout/schema';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { bayTemplate, emptyLayout, starterLayout } from '@/lib/layout/templates';
 import { invalid } from './respond';
 
-const name = z.string().trim().min(1, 'give the layout a name').max(120);
+const name = plainText(120).pipe(z.string().trim().min(1, 'give the layout a name'));
 const clientId = z.uuid('choose a client from the list').nullable().optional();
 
 export const createLayoutBody = z

@@ -34,11 +34,27 @@ export async function readJson(req: Request, maxBytes = MAX_JSON_BYTES): Promise
   if (declared > maxBytes) throw new HttpError(413, `The body is larger than ${Math.round(maxBytes / 1024)} KB.`);
   const text = await readLimited(req, maxBytes);
   if (!text.trim()) throw new HttpError(400, 'The body is empty; send a JSON document.');
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new HttpError(400, 'The body is not valid JSON.');
   }
+  if (containsNul(value)) throw new HttpError(400, 'Text in the body may not contain NUL characters.');
+  return value;
+}
+
+/** PostgreSQL text and jsonb cannot hold U+0000; refuse it at the door rather than fail in the database. */
+function containsNul(value: unknown): boolean {
+  const stack: unknown[] = [value];
+  while (stack.length) {
+    const v = stack.pop();
+    if (typeof v === 'string') {
+      if (v.includes('\u0000')) return true;
+    } else if (Array.isArray(v)) for (const x of v) stack.push(x);
+    else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) stack.push(k, x);
+  }
+  return false;
 }
 
 async function readLimited(req: Request, maxBytes: number): Promise<string> {

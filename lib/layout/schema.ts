@@ -14,8 +14,10 @@ const mm = (max = 100_000) => z.number().int('must be a whole number of millimet
 /** A signed integer length (positions may sit left of or in front of the origin while being fixed). */
 const mmSigned = (limit = 100_000) => z.number().int('must be a whole number of millimetres').min(-limit).max(limit);
 const id = z.string().min(1).max(64).regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, - and _ only');
-const text = (max: number) =>
+/** Text a person typed: bounded, and free of control characters (PostgreSQL cannot even store NUL). */
+export const plainText = (max: number) =>
   z.string().max(max).refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'control characters are not allowed');
+const text = plainText;
 
 export const ARRANGEMENTS = ['travel', 'lounge', 'sleep'] as const;
 export type Arrangement = (typeof ARRANGEMENTS)[number];

@@ -4,6 +4,7 @@ import { eq } from 'drizzle-orm';
 import * as list from '@/app/api/layouts/route';
 import * as one from '@/app/api/layouts/[id]/route';
 import { layouts } from '@/db/schema';
+import { starterLayout } from '@/lib/layout/templates';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
@@ -212,3 +213,20 @@ describe('DELETE /api/layouts/:id', () => {
     expect(await stored(id)).toBeUndefined();
   });
 });
+
+describe('text the database cannot hold', () => {
+  it('refuses NUL and control characters in names with 400, storing nothing', async () => {
+    const before = (await db.select().from(layouts)).length;
+    for (const name of ['\u0000', 'bay\u0000', 'bell\u0007']) {
+      const res = await call(list.POST, { method: 'POST', as: w.designer, json: { name, bayTemplateId: 'l2h2' } });
+      expect(res.status).toBe(400);
+    }
+    const nested = await call(list.POST, { method: 'POST', as: w.designer, json: { name: 'ok', doc: { ...starterLayoutDoc(), modules: [{ ...starterLayoutDoc().modules[0], label: 'a\u0000b' }] } } });
+    expect(nested.status).toBe(400);
+    expect((await db.select().from(layouts)).length).toBe(before);
+  });
+});
+
+function starterLayoutDoc() {
+  return structuredClone(starterLayout('starter-l-lounge')!);
+}
