@@ -35,6 +35,21 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
   const outline = useRef<Konva.Rect>(null);
   const scale = viewport.scale;
 
+  // The modules being moved are hidden on the modules layer by hand (no React pass over every
+  // module) while this layer draws them; they are shown again when the gesture ends.
+  useEffect(() => {
+    if ((kind !== 'move' && kind !== 'resize') || ids.length === 0) return;
+    const modulesLayer = layer.current?.getStage()?.findOne<Konva.Layer>('.modules');
+    if (!modulesLayer) return;
+    const nodes = ids.map((id) => modulesLayer.findOne(`#module-${id}`)).filter((n): n is Konva.Node => !!n);
+    nodes.forEach((n) => n.visible(false));
+    modulesLayer.batchDraw();
+    return () => {
+      nodes.forEach((n) => n.visible(true));
+      modulesLayer.batchDraw();
+    };
+  }, [kind, ids]);
+
   useEffect(() => {
     const apply = (g: Gesture | null) => {
       const l = layer.current;

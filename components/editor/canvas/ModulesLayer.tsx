@@ -1,7 +1,7 @@
 'use client';
 /**
  * The modules of the arrangement on show, in draw order, with the ghosted arrangement under
- * them. Modules being dragged are left out (the drag layer draws them). Never listens for
+ * them. Modules being dragged are hidden by the drag layer, by hand, for the gesture. Never listens for
  * events; redrawn only when the document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
