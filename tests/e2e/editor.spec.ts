@@ -134,4 +134,87 @@ test.describe('layout editor', () => {
     await page.keyboard.press('ArrowRight');
     await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'read-only');
   });
+
+  test('zoom with the wheel, pan with space-drag and the middle button, and the context menu', async ({ page }) => {
+    await signIn(page, 'ivo@saltmarsh.test');
+    await openLayout(page, 'Nair — L2H2 weekender');
+    const { plan, box, scale } = await planGeometry(page);
+    const origin = async () => (await plan.getAttribute('data-origin'))!;
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.wheel(0, -300);
+    await expect.poll(async () => Number(await plan.getAttribute('data-scale'))).toBeGreaterThan(scale * 1.2);
+    await plan.focus();
+    await page.keyboard.press('0');
+    await expect.poll(async () => Number(await plan.getAttribute('data-scale'))).toBeCloseTo(scale, 6);
+
+    const o0 = await origin();
+    await page.keyboard.down(' ');
+    await page.mouse.move(box.x + 100, box.y + 100);
+    await page.mouse.down();
+    await page.mouse.move(box.x + 180, box.y + 140, { steps: 5 });
+    await page.mouse.up();
+    await page.keyboard.up(' ');
+    await expect.poll(origin).not.toBe(o0);
+    const o1 = await origin();
+    await page.mouse.move(box.x + 200, box.y + 200);
+    await page.mouse.down({ button: 'middle' });
+    await page.mouse.move(box.x + 150, box.y + 200, { steps: 5 });
+    await page.mouse.up({ button: 'middle' });
+    await expect.poll(origin).not.toBe(o1);
+    await page.keyboard.press('0');
+
+    // Right-click a module: the menu offers the same commands; rotating swaps its footprint.
+    await page.keyboard.press(']');
+    const len = await numberIn(page, 'length');
+    const wid = await numberIn(page, 'width');
+    const x = await numberIn(page, 'x');
+    const y = await numberIn(page, 'y');
+    const g = await planGeometry(page);
+    const c = g.at(x + len / 2, y + wid / 2);
+    await page.mouse.click(c.x, c.y, { button: 'right' });
+    const menu = page.getByRole('menu', { name: 'Module actions' });
+    await expect(menu).toBeVisible();
+    // The right-click selects whatever module is on top there (a locker may sit over the first one).
+    const hitLen = await numberIn(page, 'length');
+    const hitWid = await numberIn(page, 'width');
+    await menu.getByRole('menuitem', { name: /Rotate 90°/ }).click();
+    await expect(menu).toBeHidden();
+    await expect.poll(() => numberIn(page, 'length')).toBe(hitWid);
+    expect(await numberIn(page, 'width')).toBe(hitLen);
+    await page.getByTestId('plan').focus();
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => numberIn(page, 'length')).toBe(hitLen);
+    expect(len * wid).toBeGreaterThan(0);
+  });
+
+  test('a save that meets a newer version shows the conflict dialog; reloading theirs takes their change', async ({ browser }) => {
+    const a = await (await browser.newContext()).newPage();
+    const b = await (await browser.newContext()).newPage();
+    for (const p of [a, b]) {
+      await signIn(p, 'ivo@saltmarsh.test');
+      await openLayout(p, 'Adeyemi — L3H2 touring');
+      await p.getByTestId('plan').focus();
+      await p.keyboard.press(']');
+    }
+    const x0 = await numberIn(a, 'x');
+    // A moves the first module 10 mm and saves first.
+    await a.getByTestId('plan').focus();
+    await a.keyboard.press('Shift+ArrowRight');
+    await expect(a.getByTestId('save-status')).toHaveAttribute('data-status', 'saved', { timeout: 15_000 });
+    await expect.poll(() => numberIn(a, 'x')).toBe(x0 + 10);
+    // B, still on the old version, moves it the other way: its save meets A's version.
+    await b.getByTestId('plan').focus();
+    await b.keyboard.press('ArrowLeft');
+    const dialog = b.getByTestId('conflict-dialog');
+    await expect(dialog).toBeVisible({ timeout: 15_000 });
+    await expect(b.getByTestId('save-status')).toHaveAttribute('data-status', 'conflict');
+    await dialog.getByRole('button', { name: /Reload theirs/ }).click();
+    await expect(dialog).toBeHidden();
+    await expect(b.getByTestId('save-status')).toHaveAttribute('data-status', 'saved');
+    await b.getByTestId('plan').focus();
+    await b.keyboard.press(']');
+    await expect.poll(() => numberIn(b, 'x')).toBe(x0 + 10);
+    await a.context().close();
+    await b.context().close();
+  });
 });
