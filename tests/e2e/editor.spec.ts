@@ -43,16 +43,16 @@ test.describe('layout editor', () => {
     expect(Math.abs(placedX + 550 - 2150)).toBeLessThanOrEqual(20); // centred on the drop, 10 mm grid
     expect(Math.abs(placedY + 275 - 885)).toBeLessThanOrEqual(20);
 
-    // Move it 300 px rearwards with the mouse: the Details panel shows the new position.
+    // Move it 100 px rearwards with the mouse: the Details panel shows the new position.
     await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'none');
     const grab = (await planGeometry(page)).at(placedX + 550, placedY + 275);
     await page.mouse.move(grab.x, grab.y);
     await page.mouse.down();
-    await page.mouse.move(grab.x + 300, grab.y, { steps: 15 });
+    await page.mouse.move(grab.x + 100, grab.y, { steps: 15 });
     await page.mouse.up();
     await expect.poll(() => numberIn(page, 'x')).not.toBe(placedX);
     const movedX = await numberIn(page, 'x');
-    expect(Math.abs(movedX - placedX - 300 / scale)).toBeLessThanOrEqual(40);
+    expect(Math.abs(movedX - placedX - 100 / scale)).toBeLessThanOrEqual(40);
     expect(await numberIn(page, 'y')).toBe(placedY);
     await keepScreenshot(page, 'editor-lounge');
 
