@@ -30,5 +30,5 @@ export default auth((req) => {
 });
 
 export const config = {
-  matcher: [{ source: '/((?!api|_next/static|_next/image|favicon.ico|templates).*)', missing: [{ type: 'header', key: 'next-router-prefetch' }] }],
+  matcher: [{ source: '/((?!api|_next/|favicon.ico|templates).*)', missing: [{ type: 'header', key: 'next-router-prefetch' }] }],
 };

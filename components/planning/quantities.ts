@@ -9,7 +9,7 @@
  * the schema keeps exact, and never accept a number without telling which unit it was read in.
  */
 import { z } from 'zod';
-import { parseLength, toUnit, type LengthUnit } from '@/lib/layout';
+import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 /** 1 lb = 0.45359237 kg exactly (international yard and pound agreement, 1959). */
 export const KG_PER_LB = 0.45359237;

@@ -4,7 +4,8 @@
  * with `parseLayoutDoc` and lists every problem with its field path, so a person can fix the
  * file. Pure (text in, result out); must never touch the DOM or the network.
  */
-import { parseLayoutDoc, type FieldIssue, type LayoutDoc } from '@/lib/layout';
+import { parseLayoutDoc, type FieldIssue } from '@/lib/layout/parse';
+import type { LayoutDoc } from '@/lib/layout/schema';
 
 /** Larger than any sane layout (5000 modules ≈ 1.5 MB): refuse before parsing. */
 export const MAX_LAYOUT_FILE_BYTES = 2 * 1024 * 1024;

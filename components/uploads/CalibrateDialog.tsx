@@ -6,7 +6,7 @@
  * lib/tracing; this only collects the clicks and the numbers.
  */
 import { useState, type MouseEvent } from 'react';
-import { formatLength, parseLength, type LengthUnit } from '@/lib/layout';
+import { formatLength, parseLength, type LengthUnit } from '@/lib/layout/units';
 import { calibrateFromImage, CalibrationError, imageToBay, type Point, type TracingPlacement } from '@/lib/tracing/calibration';
 import type { UploadDto } from '@/lib/uploads/dto';
 
