@@ -136,9 +136,17 @@ export class DatabaseLockedError extends Error {
 function isAlive(pid: number): boolean {
   try {
     process.kill(pid, 0);
-    return true;
   } catch (err) {
     return (err as NodeJS.ErrnoException).code === 'EPERM';
+  }
+  // A process killed with SIGKILL stays a zombie until its parent reaps it, and signal 0 still
+  // reaches a zombie; in a container whose first process never reaps, that can be for ever.
+  try {
+    const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const state = stat.slice(stat.lastIndexOf(')') + 2).charAt(0);
+    return state !== 'Z' && state !== 'X';
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code !== 'ENOENT';
   }
 }
 

@@ -47,11 +47,14 @@ export async function startTestServer(options: TestServerOptions): Promise<TestS
   const child = spawn('npx', ['next', 'start', '-p', String(options.port), '-H', '127.0.0.1'], {
     cwd: root,
     env: { ...process.env, BAYWRIGHT_DB: options.db, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', ...options.env },
-    stdio: options.quiet ? 'ignore' : ['ignore', 'inherit', 'inherit'],
+    stdio: options.quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
     detached: true,
   });
+  // Keep the end of what a quiet server says on stderr, to explain an early exit.
+  let stderrTail = '';
+  child.stderr?.on('data', (d) => (stderrTail = (stderrTail + String(d)).slice(-2000)));
   const url = `http://127.0.0.1:${options.port}`;
-  await waitForOk(url, child);
+  await waitForOk(url, child, () => stderrTail);
   return {
     url,
     port: options.port,
@@ -60,10 +63,10 @@ export async function startTestServer(options: TestServerOptions): Promise<TestS
   };
 }
 
-async function waitForOk(url: string, child: ChildProcess, timeoutMs = 60_000): Promise<void> {
+async function waitForOk(url: string, child: ChildProcess, said: () => string = () => '', timeoutMs = 60_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`the server exited early (code ${child.exitCode})`);
+    if (child.exitCode !== null) throw new Error(`the server exited early (code ${child.exitCode})${said() ? `: ${said().trim()}` : ''}`);
     try {
       const res = await fetch(url, { redirect: 'manual' });
       if (res.status < 500) return;
