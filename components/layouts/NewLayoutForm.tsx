@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { useMutation, useQuery } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { BAY_TEMPLATES } from '@/lib/layout/templates';
@@ -44,6 +44,7 @@ type Values = z.infer<typeof schema>;
 
 export function NewLayoutForm() {
   const router = useRouter();
+  const queryClient = useQueryClient();
   const members = useQuery({ queryKey: ['members'], queryFn: () => apiFetch<{ members: MemberDto[] }>('/api/studio/members') });
   const clients = (members.data?.members ?? []).filter((m) => m.role === 'client');
   const { register, handleSubmit, watch, setError, formState } = useForm<Values>({
@@ -62,6 +63,8 @@ export function NewLayoutForm() {
       return apiFetch<LayoutDto>('/api/layouts', { method: 'POST', json: body });
     },
     onSuccess: (layout) => {
+      // The layouts table must show the new layout when the designer goes back to it.
+      queryClient.invalidateQueries({ queryKey: ['layouts'] });
       toast.success(`Created “${layout.name}”`);
       router.push(`/layouts/${layout.id}`);
     },
