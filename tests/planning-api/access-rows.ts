@@ -7,21 +7,10 @@
  * the app does not use, so every caller gets 200 and nothing changes — the signature is the only
  * credential there. Same shape as tests/hardening/access-rows.ts `Row`; spread `PLANNING_ROWS`.
  */
-import type { CallOptions } from '../helpers/http';
-import type { World } from '../helpers/world';
-import type { Db } from '@/db/client';
+import type { Fixture, Row } from '../hardening/access-rows';
 import type { Actor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
 import { demoPriceList } from '../../scripts/lib/demo-prices';
-
-type Who = 'anonymous' | 'viewer' | 'foreignClient' | 'client' | 'designer' | 'owner' | 'foreignOwner';
-interface Fixture { world: World; db: Db }
-interface Row {
-  route: string;
-  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-  request: (fx: Fixture, who: Who) => CallOptions | Promise<CallOptions>;
-  expect: Record<Who, number | number[]>;
-}
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
 const READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };

@@ -4,20 +4,9 @@
  * one caller's success never turns another's into a conflict) and the status each caller must get.
  * Same shape as tests/hardening/access-rows.ts `Row`; spread `SHARING_ROWS` into its list.
  */
-import type { CallOptions } from '../helpers/http';
-import type { World } from '../helpers/world';
-import type { Db } from '@/db/client';
+import type { Fixture, Row } from '../hardening/access-rows';
 import type { Actor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
-
-type Who = 'anonymous' | 'viewer' | 'foreignClient' | 'client' | 'designer' | 'owner' | 'foreignOwner';
-interface Fixture { world: World; db: Db }
-interface Row {
-  route: string;
-  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-  request: (fx: Fixture, who: Who) => CallOptions | Promise<CallOptions>;
-  expect: Record<Who, number | number[]>;
-}
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
 const READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
