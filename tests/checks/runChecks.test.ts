@@ -85,9 +85,9 @@ describe('the report contract', () => {
       for (const f of ourFindings(doc)) {
         expect(Number.isFinite(f.measured), `${f.id} measured`).toBe(true);
         expect(Number.isFinite(f.required), `${f.id} required`).toBe(true);
-        expect(f.unit, f.id).toBeTruthy();
+        expect(f.unit, f.id).toMatch(/\S/);
         expect(f.message.length, f.id).toBeGreaterThan(20);
-        expect(f.source, f.id).toBeTruthy();
+        expect(f.source, f.id).toMatch(/\w{3}/);
         if (/^(walkway|sleep|egress|travel|headroom\.overhead)/.test(f.id)) expect(f.arrangement, f.id).toBeDefined();
         expect(f.message).not.toMatch(/undefined|NaN/);
       }

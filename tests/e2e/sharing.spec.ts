@@ -105,7 +105,7 @@ test('invite → view → comment → approve, with a live viewer link', async (
   expect(mail.subject).toBe("Saltmarsh Van Works invites you to follow your van's design");
   expect(mail.to && 'text' in mail.to ? mail.to.text : '').toContain(CLIENT_EMAIL);
   const link = (mail.text ?? '').match(/https?:\/\/\S+\/invite\/[A-Za-z0-9_-]{43}/)?.[0];
-  expect(link, 'the invitation mail carries a link').toBeTruthy();
+  expect(link, 'the invitation mail carries a link').toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
   await owner.goto(`/outbox/${mailId}`);
   await expect(owner.getByTestId('mail-text')).toContainText('Set your password');
   await keepScreenshot(owner, 'sharing-outbox-invitation');

@@ -13,10 +13,10 @@ function expectContract(findings: Finding[]) {
     expect(f.id).toMatch(/^(mass|power|water|gas|heat)\.[a-z-]+$/);
     expect(['pass', 'warn', 'fail']).toContain(f.status);
     expect(f.message.length).toBeGreaterThan(20);
-    expect(f.source, f.id).toBeTruthy();
+    expect(f.source, f.id).toMatch(/\w{3}/);
     expect(typeof f.measured, f.id).toBe('number');
     expect(Number.isFinite(f.measured!), f.id).toBe(true);
-    expect(f.unit, f.id).toBeTruthy();
+    expect(f.unit, f.id).toMatch(/\S/);
     if (f.required !== undefined) expect(Number.isFinite(f.required), f.id).toBe(true);
     if (!['heat.u-value', 'heat.loss'].includes(f.id)) expect(f.required, f.id).toBeDefined();
   }
