@@ -49,6 +49,11 @@ async function versionOf(fx: Fixture, id: string): Promise<number> {
 let memberSeq = 0;
 
 const CORE_ROWS: Row[] = [
+  // Readiness for a load balancer: open to anyone, says nothing about any studio.
+  {
+    route: '/api/health', method: 'GET', request: () => ({}),
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+  },
   { route: '/api/layouts', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/layouts', method: 'POST',
