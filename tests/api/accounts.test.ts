@@ -7,7 +7,8 @@ import { authenticate, endSessions, SIGN_IN_FAILURE_LIMIT } from '@/db/accounts'
 import { memberships, users } from '@/db/schema';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
-import { call } from '../helpers/http';
+import { call, sessionCookie } from '../helpers/http';
+import { decodeCached, type SessionClaims } from '@/lib/auth/token-cache';
 
 let db: Db;
 beforeAll(async () => {
@@ -79,5 +80,41 @@ describe('sign-out', () => {
     expect((await call(list.GET, { as })).status).toBe(200);
     await endSessions(result.user.id);
     expect((await call(list.GET, { as })).status).toBe(401);
+  });
+});
+
+describe('the decoded-session cache', () => {
+  it('does not outlive sign-out or a removed membership: the same cookie text is refused at once', async () => {
+    const result = await authenticate('sam@selfbuild.test', 'a-long-enough-password', '10.5.5.6');
+    if (!result.ok) throw new Error('sign-in failed');
+    const user = { id: result.user.id, studioId: result.user.studioId, sessionVersion: result.user.sessionVersion };
+    const cookie = await sessionCookie(user);
+    expect((await call(list.GET, { headers: { cookie } })).status).toBe(200);
+    expect((await call(list.GET, { headers: { cookie } })).status).toBe(200); // served from the cache
+    await db.delete(memberships).where(eq(memberships.userId, user.id));
+    expect((await call(list.GET, { headers: { cookie } })).status).toBe(401);
+  });
+
+  it('refuses a token whose text was changed, even when the original is cached', async () => {
+    const [u] = await db.select().from(users).limit(1);
+    const [m] = await db.select().from(memberships).where(eq(memberships.userId, u.id));
+    const cookie = await sessionCookie({ id: u.id, studioId: m.studioId, sessionVersion: u.sessionVersion });
+    expect((await call(list.GET, { headers: { cookie } })).status).toBe(200);
+    const last = cookie.at(-2) === 'A' ? 'B' : 'A';
+    const tampered = `${cookie.slice(0, -2)}${last}${cookie.at(-1)}`;
+    expect((await call(list.GET, { headers: { cookie: tampered } })).status).toBe(401);
+  });
+
+  it('decodes a token once, then answers from memory until the token expires', async () => {
+    let decodes = 0;
+    const decode = async (): Promise<SessionClaims> => {
+      decodes++;
+      return { uid: 'u1', exp: 2_000 };
+    };
+    expect(await decodeCached('token-a', decode, 1_000_000)).toEqual({ uid: 'u1', exp: 2_000 });
+    expect(await decodeCached('token-a', decode, 1_500_000)).toEqual({ uid: 'u1', exp: 2_000 });
+    expect(decodes).toBe(1);
+    expect(await decodeCached('token-a', decode, 2_000_001)).toBeNull(); // past exp (seconds)
+    expect(await decodeCached('token-b', async () => null)).toBeNull();
   });
 });
