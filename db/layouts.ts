@@ -7,7 +7,8 @@
 import 'server-only';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
-import { getDb } from './client';
+import { getDb, type Db } from './client';
+import { prepared } from './prepared';
 import { layouts, memberships, users } from './schema';
 import { BadRequestError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
 import { canEditLayouts, type Actor } from './actor';
@@ -102,17 +103,22 @@ export async function listLayouts(actor: Actor): Promise<LayoutSummaryDto[]> {
   return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
 }
 
-/** The stored row if the actor may read it; NotFoundError otherwise. */
-async function readable(actor: Actor, id: string): Promise<Row> {
-  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
-  const db = await getDb();
-  const [row] = await db
+function layoutByIdQuery(db: Db) {
+  return db
     .select(baseSelect())
     .from(layouts)
     .leftJoin(client, eq(client.id, layouts.clientId))
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
-    .where(eq(layouts.id, id))
-    .limit(1);
+    .where(eq(layouts.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare('layout_by_id');
+}
+
+/** The stored row if the actor may read it; NotFoundError otherwise. */
+async function readable(actor: Actor, id: string): Promise<Row> {
+  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
+  const db = await getDb();
+  const [row] = await prepared(db, 'layout_by_id', layoutByIdQuery).execute({ id });
   if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such layout.');
   if (!canEditLayouts(actor) && row.clientId !== actor.userId) throw new NotFoundError('No such layout.');
   return row;
@@ -152,17 +158,37 @@ export interface SaveInput {
   clientId?: string | null;
 }
 
+declare const checked: unique symbol;
+/** A layout the actor may write, as `editableLayout` found it; only that function makes one. */
+export type EditableLayout = { readonly id: string; readonly studioId: string; readonly name: string; readonly [checked]: true };
+
+/**
+ * The rights half of a save, on its own so a route can refuse a stranger (404) or a client (403)
+ * before it says anything about the version or the body.
+ */
+export async function editableLayout(actor: Actor, id: string): Promise<EditableLayout> {
+  const row = await readable(actor, id);
+  if (!canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
+  return { id: row.id, studioId: actor.studioId, name: row.name } as EditableLayout;
+}
+
+export interface SavedLayoutDto {
+  id: string;
+  name: string;
+  version: number;
+  updatedAt: string;
+}
+
 /**
  * Saves a new document over version `baseVersion`. The compare-and-set happens in one UPDATE,
  * so of two saves based on the same version exactly one wins; the other gets the current copy.
  */
-export async function saveLayout(actor: Actor, id: string, baseVersion: number, input: SaveInput): Promise<LayoutDto> {
-  const row = await readable(actor, id);
-  if (!canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
+export async function saveLayout(actor: Actor, layout: EditableLayout, baseVersion: number, input: SaveInput): Promise<SavedLayoutDto> {
+  if (layout.studioId !== actor.studioId || !canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
   if (input.clientId !== undefined) await assertClientOfStudio(actor.studioId, input.clientId);
-  const name = input.name ?? input.doc.name ?? row.name;
+  const name = input.name ?? input.doc.name ?? layout.name;
   const db = await getDb();
-  const updated = await db
+  const [saved] = await db
     .update(layouts)
     .set({
       doc: { ...input.doc, name },
@@ -172,13 +198,13 @@ export async function saveLayout(actor: Actor, id: string, baseVersion: number, 
       updatedBy: actor.userId,
       updatedAt: new Date(),
     })
-    .where(and(eq(layouts.id, id), eq(layouts.version, baseVersion)))
-    .returning({ id: layouts.id });
-  if (updated.length === 0) {
-    const current = await getLayout(actor, id);
+    .where(and(eq(layouts.id, layout.id), eq(layouts.studioId, actor.studioId), eq(layouts.version, baseVersion)))
+    .returning({ id: layouts.id, name: layouts.name, version: layouts.version, updatedAt: layouts.updatedAt });
+  if (!saved) {
+    const current = await getLayout(actor, layout.id);
     throw new VersionConflictError({ version: current.version, doc: current.doc, updatedAt: current.updatedAt, updatedBy: current.updatedBy });
   }
-  return getLayout(actor, id);
+  return { id: saved.id, name: saved.name, version: saved.version, updatedAt: saved.updatedAt.toISOString() };
 }
 
 export async function deleteLayout(actor: Actor, id: string): Promise<void> {

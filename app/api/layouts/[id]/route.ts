@@ -1,7 +1,7 @@
 import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { baseVersionFrom, saveLayoutBody } from '@/lib/api/layout-bodies';
 import { parseLayoutDoc } from '@/lib/layout/parse';
-import { deleteLayout, getLayout, saveLayout } from '@/db/layouts';
+import { deleteLayout, editableLayout, getLayout, saveLayout } from '@/db/layouts';
 
 export const dynamic = 'force-dynamic';
 
@@ -19,14 +19,13 @@ export const PUT = handle<Ctx>(async (req, { params }) => {
   const { id } = await params;
   const base = baseVersionFrom(req);
   // Rights first, so a stranger learns nothing from the version rules.
-  const current = await getLayout(actor, id);
-  if (!current.canEdit) throw new HttpError(403, 'This layout is read-only for you.');
+  const layout = await editableLayout(actor, id);
   if (base === null) throw new HttpError(428, 'Say which version you edited: send If-Match with the layout version.');
   if (Number.isNaN(base)) throw new HttpError(400, 'If-Match must be the layout version, a whole number.');
   const body = parseWith(saveLayoutBody, await readJson(req));
   const parsed = parseLayoutDoc(body.doc);
   if (!parsed.ok) throw invalid(parsed.issues.map((i) => ({ path: i.path ? `doc.${i.path}` : 'doc', message: i.message })));
-  const saved = await saveLayout(actor, id, base, { doc: parsed.value, name: body.name, clientId: body.clientId });
+  const saved = await saveLayout(actor, layout, base, { doc: parsed.value, name: body.name, clientId: body.clientId });
   return json({ id: saved.id, version: saved.version, updatedAt: saved.updatedAt, name: saved.name }, { headers: { ETag: `"${saved.version}"` } });
 });
 
