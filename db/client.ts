@@ -60,7 +60,7 @@ export async function closeDb(): Promise<void> {
 
 async function open(): Promise<DbHandle> {
   const url = process.env.DATABASE_URL;
-  const handle = url ? await openPostgres(url) : await openPglite(dataDir());
+  const handle = url ? await openPostgres(url) : await openPglite(dataDir(), { thread: process.env.BAYWRIGHT_DB_THREAD !== 'main' });
   registerShutdown();
   return handle;
 }
@@ -75,14 +75,33 @@ async function openPostgres(url: string): Promise<DbHandle> {
   return { db, kind: 'postgres', close: () => pool.end() };
 }
 
-export async function openPglite(dir: string, options: { migrate?: boolean } = {}): Promise<DbHandle> {
-  const { PGlite } = await import('@electric-sql/pglite');
+/**
+ * Opens (and migrates) the embedded database. With `thread`, PGlite runs in a worker thread so
+ * queries and Next.js use both cores (db/pglite-thread-client.ts); scripts and tests keep it on
+ * their own thread.
+ */
+export async function openPglite(dir: string, options: { migrate?: boolean; thread?: boolean } = {}): Promise<DbHandle> {
   const { drizzle } = await import('drizzle-orm/pglite');
-  const { migrate } = await import('drizzle-orm/pglite/migrator');
   // PGlite creates only the last folder of its path.
   fs.mkdirSync(path.dirname(dir), { recursive: true });
   const releaseLock = acquireLock(dir);
   try {
+    if (options.thread) {
+      const { PgliteThreadClient } = await import('./pglite-thread-client');
+      const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
+      // drizzle uses only `query` and `transaction` of the client it is given.
+      const db = drizzle({ client: client as never, schema });
+      return {
+        db: db as unknown as Db,
+        kind: 'pglite',
+        close: async () => {
+          await client.close();
+          releaseLock();
+        },
+      };
+    }
+    const { PGlite } = await import('@electric-sql/pglite');
+    const { migrate } = await import('drizzle-orm/pglite/migrator');
     const client = await PGlite.create({ dataDir: dir });
     const db = drizzle(client, { schema });
     if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });

@@ -1,0 +1,72 @@
+// The server's embedded database on its own thread: the same drizzle behaviour as in-thread —
+// rows, transactions that commit or roll back, SQLSTATE codes for unique violations — and the
+// data is still there after closing and opening the folder again.
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { eq, sql } from 'drizzle-orm';
+import { afterAll, describe, expect, it } from 'vitest';
+import { openPglite, type Db } from '@/db/client';
+import { studios, users } from '@/db/schema';
+import { isUniqueViolation } from '@/db/sharing/pg-errors';
+
+const root = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-thread-'));
+const dir = path.join(root, 'db');
+afterAll(() => fs.rmSync(root, { recursive: true, force: true }));
+
+async function addUser(db: Db, email: string) {
+  const [row] = await db.insert(users).values({ email, name: 'Thread Test', passwordHash: 'x' }).returning({ id: users.id, createdAt: users.createdAt });
+  return row;
+}
+
+describe('PGlite in a worker thread', () => {
+  it('opens and migrates a new folder, and answers typed rows', async () => {
+    const handle = await openPglite(dir, { thread: true });
+    try {
+      const row = await addUser(handle.db, 'one@thread.test');
+      expect(row.createdAt).toBeInstanceOf(Date);
+      const [found] = await handle.db.select().from(users).where(eq(users.id, row.id));
+      expect(found.email).toBe('one@thread.test');
+      const raw = await handle.db.execute(sql`select count(*)::int as n from users`);
+      expect(raw.rows).toEqual([{ n: 1 }]);
+    } finally {
+      await handle.close();
+    }
+  }, 60_000);
+
+  it('commits a transaction that returns and rolls back one that throws', async () => {
+    const handle = await openPglite(dir, { thread: true });
+    try {
+      await handle.db.transaction(async (tx) => {
+        await tx.insert(studios).values({ name: 'Kept Studio' });
+      });
+      await expect(
+        handle.db.transaction(async (tx) => {
+          await tx.insert(studios).values({ name: 'Dropped Studio' });
+          throw new Error('changed my mind');
+        }),
+      ).rejects.toThrow('changed my mind');
+      const names = (await handle.db.select({ name: studios.name }).from(studios)).map((s) => s.name);
+      expect(names).toContain('Kept Studio');
+      expect(names).not.toContain('Dropped Studio');
+    } finally {
+      await handle.close();
+    }
+  }, 60_000);
+
+  it('keeps the SQLSTATE of a unique violation, and the rows of earlier runs', async () => {
+    const handle = await openPglite(dir, { thread: true });
+    try {
+      let error: unknown;
+      try {
+        await addUser(handle.db, 'one@thread.test');
+      } catch (err) {
+        error = err;
+      }
+      expect(isUniqueViolation(error)).toBe(true);
+      expect(String((error as Error).stack ?? '')).not.toContain('pglite-thread.mjs');
+    } finally {
+      await handle.close();
+    }
+  }, 60_000);
+});
