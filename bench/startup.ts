@@ -9,9 +9,24 @@ import { buildIfNeeded } from '../scripts/lib/build';
 import { stopProcessGroup } from '../scripts/lib/test-server';
 import { round } from './stats';
 
+/** Until nothing answers on the port: the server of the previous round may still be closing. */
+async function portFree(port: number): Promise<void> {
+  for (let i = 0; i < 200; i++) {
+    try {
+      await fetch(`http://127.0.0.1:${port}/api/health`);
+    } catch {
+      return;
+    }
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  throw new Error(`port ${port} is still answering`);
+}
+
 async function timeToFirst200(db: string, port: number): Promise<number> {
+  await portFree(port);
   const started = performance.now();
-  const child = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
+  // The next binary itself, as a process manager would start it: npx would add its own start-up.
+  const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
     env: { ...process.env, BAYWRIGHT_DB: db, NODE_ENV: 'production' },
     stdio: 'ignore',
     detached: true,

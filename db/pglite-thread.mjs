@@ -5,6 +5,7 @@ import { parentPort, workerData } from 'node:worker_threads';
 import { PGlite, types } from '@electric-sql/pglite';
 import { drizzle } from 'drizzle-orm/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
+import { templateFor } from './pglite-template.mjs';
 
 // Dates, times and intervals stay text, as drizzle asks of PGlite when it runs in-thread.
 const keepText = (value) => value;
@@ -89,7 +90,8 @@ async function run(msg) {
 }
 
 try {
-  db = await PGlite.create({ dataDir: workerData.dir });
+  // A new folder starts from the install-time template when there is one (pglite-template.mjs).
+  db = await PGlite.create({ dataDir: workerData.dir, loadDataDir: templateFor(workerData.dir) });
   if (workerData.migrationsFolder) await migrate(drizzle(db), { migrationsFolder: workerData.migrationsFolder });
   parentPort.on('message', (msg) => {
     run(msg).then(

@@ -9,6 +9,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { openPglite, type Db } from '@/db/client';
 import { studios, users } from '@/db/schema';
 import { isUniqueViolation } from '@/db/sharing/pg-errors';
+import { templateFor, templatePath } from '@/db/pglite-template.mjs';
 
 const root = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-thread-'));
 const dir = path.join(root, 'db');
@@ -28,7 +29,7 @@ describe('PGlite in a worker thread', () => {
       const [found] = await handle.db.select().from(users).where(eq(users.id, row.id));
       expect(found.email).toBe('one@thread.test');
       const raw = await handle.db.execute(sql`select count(*)::int as n from users`);
-      expect(raw.rows).toEqual([{ n: 1 }]);
+      expect((raw as unknown as { rows: unknown[] }).rows).toEqual([{ n: 1 }]);
     } finally {
       await handle.close();
     }
@@ -69,4 +70,12 @@ describe('PGlite in a worker thread', () => {
       await handle.close();
     }
   }, 60_000);
+});
+
+describe('the install-time template for new folders', () => {
+  it('is offered for a folder without a cluster and never over an existing one', () => {
+    expect(fs.existsSync(templatePath())).toBe(true); // made by npm install (postinstall)
+    expect(templateFor(path.join(root, 'not-there-yet'))).toBeInstanceOf(Blob);
+    expect(templateFor(dir)).toBeUndefined(); // the folder the tests above created
+  });
 });

@@ -1,0 +1,2 @@
+export function templatePath(): string;
+export function templateFor(dataDir: string): Blob | undefined;
