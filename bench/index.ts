@@ -112,8 +112,8 @@ ${table}
 - **Baywright ÷ bare.** The bare server answers a read with one query and nothing else. Next.js alone, with one
   query and no session, reaches about 0.7 of it on this machine (the floor row); a Baywright read adds the session
   (cookie, cached token claims, one prepared query for the caller and their membership), the rights check and a
-  three-table read, and lands near 0.3. Moving PGlite to its own thread doubled the read rate (the server now uses
-  both cores); the remaining gap is the framework's routing and web-stream plumbing plus one more query than the
+  three-table read, and lands near 0.3. Moving PGlite to its own thread raised the read rate from 160–310 to
+  370–430 req/s across runs (the server now uses both cores; its main thread is the busy one); the remaining gap is the framework's routing and web-stream plumbing plus one more query than the
   bare server makes. The 0.5 goal is not met.
 - **Noise.** On this 2-core machine, repeated runs of the API figures vary by ±20 % with no change to the code
   (autocannon shares the cores with the server). Compare figures from one run, not across runs.
