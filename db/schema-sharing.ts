@@ -98,6 +98,8 @@ export const comments = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     resolvedAt: timestamp('resolved_at', { withTimezone: true }),
     resolvedBy: uuid('resolved_by').references((): AnyPgColumn => users.id, { onDelete: 'set null' }),
+    /** Set when the author changes the text, so the other side sees it was edited. */
+    editedAt: timestamp('edited_at', { withTimezone: true }),
   },
   (t) => [index('comments_layout').on(t.layoutId, t.createdAt), index('comments_parent').on(t.parentId)],
 );

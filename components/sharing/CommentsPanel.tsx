@@ -1,17 +1,17 @@
 'use client';
 /**
  * The comments column beside the plan: every thread of the layout, numbered as its pin, with
- * replies, resolve / reopen, and the form for a new pin (placed by clicking the plan, or typed
+ * replies, resolve / reopen, changing or removing one's own comments, and the form for a new pin (placed by clicking the plan, or typed
  * as x and y in millimetres for keyboard use). Talks to /api/layouts/[id]/comments through
  * TanStack Query. Must never draw on the canvas (CommentPinsLayer does) nor hold the document.
  */
 import { useState } from 'react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
-import { CheckCircle2, MapPin, MessageSquare, RotateCcw, X } from 'lucide-react';
+import { CheckCircle2, MapPin, MessageSquare, Pencil, RotateCcw, Trash2, X } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { Arrangement } from '@/lib/layout/schema';
-import type { ThreadDto } from '@/db/sharing/comments';
+import type { CommentDto, ThreadDto } from '@/db/sharing/comments';
 
 const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'travel', lounge: 'lounge', sleep: 'sleep' };
@@ -159,7 +159,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
         <span className="min-w-0 flex-1">
           <span className="block whitespace-pre-wrap break-words">{thread.body}</span>
           <span className="mt-1 block text-xs text-ink-soft">
-            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {WHEN.format(new Date(thread.createdAt))} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
+            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {WHEN.format(new Date(thread.createdAt))}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
             <span className="font-mono">x {thread.x} mm, y {thread.y} mm</span>
           </span>
           {thread.resolved && <span className="mt-1 inline-flex items-center gap-1 text-xs text-moss"><CheckCircle2 size={12} aria-hidden="true" /> Resolved</span>}
@@ -167,10 +167,12 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
       </button>
       {active && (
         <div className="mt-2 space-y-2 pl-7">
+          <OwnCommentControls layoutId={layoutId} comment={thread} first onChanged={onChanged} onRemoved={() => { onActivate(null); onChanged(); }} />
           {thread.replies.map((r) => (
-            <div key={r.id} className="border-l-2 border-paper-edge pl-2">
+            <div key={r.id} className="border-l-2 border-paper-edge pl-2" data-testid="comment-reply">
               <p className="whitespace-pre-wrap break-words">{r.body}</p>
-              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {WHEN.format(new Date(r.createdAt))}</p>
+              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {WHEN.format(new Date(r.createdAt))}{r.editedAt ? ' · edited' : ''}</p>
+              <OwnCommentControls layoutId={layoutId} comment={r} onChanged={onChanged} onRemoved={onChanged} />
             </div>
           ))}
           <form className="space-y-1" onSubmit={(e) => { e.preventDefault(); send.mutate(); }}>
@@ -188,5 +190,61 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
         </div>
       )}
     </li>
+  );
+}
+
+/** Edit and Remove for a comment the caller may change; nothing at all for others' comments. */
+function OwnCommentControls({ layoutId, comment, first = false, onChanged, onRemoved }: { layoutId: string; comment: CommentDto; first?: boolean; onChanged: () => void; onRemoved: () => void }) {
+  const [editing, setEditing] = useState(false);
+  const [confirming, setConfirming] = useState(false);
+  const [text, setText] = useState(comment.body);
+  const url = `/api/layouts/${layoutId}/comments/${comment.id}`;
+  const save = useMutation({
+    mutationFn: () => apiFetch(url, { method: 'PATCH', json: { body: text } }),
+    onSuccess: () => { setEditing(false); onChanged(); toast.success('Comment changed'); },
+    onError: (err) => toast.error(err.message),
+  });
+  const remove = useMutation({
+    mutationFn: () => apiFetch(url, { method: 'DELETE' }),
+    onSuccess: () => { setConfirming(false); onRemoved(); toast.success(first ? 'Thread removed' : 'Reply removed'); },
+    onError: (err) => toast.error(err.message),
+  });
+  if (!comment.canEdit && !comment.canDelete) return null;
+  const what = first ? 'comment' : 'reply';
+  if (editing) {
+    return (
+      <form className="space-y-1" onSubmit={(e) => { e.preventDefault(); save.mutate(); }}>
+        <label className="sr-only" htmlFor={`edit-${comment.id}`}>Change your {what}</label>
+        <textarea id={`edit-${comment.id}`} className="field min-h-14" value={text} onChange={(e) => setText(e.target.value)} maxLength={2000} autoFocus
+          onKeyDown={(e) => { if (e.key === 'Escape') { setEditing(false); setText(comment.body); } }} />
+        <div className="flex gap-2">
+          <button type="submit" className="btn-quiet" disabled={save.isPending || !text.trim()}>{save.isPending ? 'Saving…' : 'Save'}</button>
+          <button type="button" className="btn-quiet" onClick={() => { setEditing(false); setText(comment.body); }}>Cancel</button>
+        </div>
+      </form>
+    );
+  }
+  if (confirming) {
+    return (
+      <div className="flex flex-wrap items-center gap-2 text-xs" role="group" aria-label={`Remove this ${what}?`}>
+        <span>{first ? 'Remove this thread and its replies?' : 'Remove this reply?'}</span>
+        <button type="button" className="btn-quiet text-brick" onClick={() => remove.mutate()} disabled={remove.isPending} autoFocus>Remove</button>
+        <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>Keep</button>
+      </div>
+    );
+  }
+  return (
+    <div className="flex gap-2 text-xs">
+      {comment.canEdit && (
+        <button type="button" className="inline-flex items-center gap-1 text-ink-soft hover:text-ink" onClick={() => setEditing(true)} aria-label={`Edit your ${what}`}>
+          <Pencil size={12} aria-hidden="true" /> Edit
+        </button>
+      )}
+      {comment.canDelete && (
+        <button type="button" className="inline-flex items-center gap-1 text-ink-soft hover:text-brick" onClick={() => setConfirming(true)} aria-label={`Remove this ${what}`}>
+          <Trash2 size={12} aria-hidden="true" /> Remove
+        </button>
+      )}
+    </div>
   );
 }

@@ -1,6 +1,7 @@
 /**
  * Comments on a layout: a thread starts with a pin at a point of the plan (whole millimetres, in
- * one arrangement), others reply, and either side resolves it (or reopens it). The workshop's
+ * one arrangement), others reply, and either side resolves it (or reopens it). Authors may change
+ * or remove their own comments (an edit is marked as such); the studio's owner may remove any. The workshop's
  * owners and designers and the layout's client take part; nobody else even learns the layout
  * exists. Authors' names are kept with the comment; their addresses are never returned.
  * Must never let a viewer link (no account) read or write comments.
@@ -9,7 +10,7 @@ import 'server-only';
 import { and, asc, count, eq, inArray, isNull } from 'drizzle-orm';
 import { getDb } from '../client';
 import { comments } from '../schema';
-import { BadRequestError, NotFoundError } from '../errors';
+import { BadRequestError, ForbiddenError, NotFoundError } from '../errors';
 import type { Actor, StudioRole } from '../actor';
 import { ARRANGEMENTS, type Arrangement } from '../../lib/layout/schema';
 import { layoutFor, UUID, type LayoutAccess } from './access';
@@ -23,6 +24,11 @@ export interface CommentDto {
   body: string;
   author: { name: string; role: StudioRole; isYou: boolean };
   createdAt: string;
+  /** When the author last changed the text; null if never. */
+  editedAt: string | null;
+  /** Whether the caller may change the text (the author) and remove it (the author, the owner). */
+  canEdit: boolean;
+  canDelete: boolean;
 }
 
 export interface ThreadDto extends CommentDto {
@@ -45,6 +51,9 @@ function commentDto(r: Row, actor: Actor): CommentDto {
     body: r.body,
     author: { name: r.authorName, role: asRole(r.authorRole), isYou: r.authorId === actor.userId },
     createdAt: r.createdAt.toISOString(),
+    editedAt: r.editedAt ? r.editedAt.toISOString() : null,
+    canEdit: r.authorId === actor.userId,
+    canDelete: r.authorId === actor.userId || actor.role === 'owner',
   };
 }
 
@@ -120,17 +129,52 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
 
 export async function setResolved(actor: Actor, layoutId: string, commentId: string, resolved: boolean): Promise<ThreadDto> {
   await layoutFor(actor, layoutId);
-  if (!UUID.test(commentId)) throw new NotFoundError('No such comment.');
-  const db = await getDb();
-  const [row] = await db.select().from(comments).where(and(eq(comments.id, commentId), eq(comments.layoutId, layoutId))).limit(1);
-  if (!row) throw new NotFoundError('No such comment.');
+  const row = await commentOf(layoutId, commentId);
   if (row.parentId) throw new BadRequestError('Resolve the thread from its first comment.');
+  const db = await getDb();
   await db
     .update(comments)
     .set(resolved ? { resolvedAt: new Date(), resolvedBy: actor.userId } : { resolvedAt: null, resolvedBy: null })
     .where(eq(comments.id, commentId));
+  return threadOf(actor, layoutId, commentId);
+}
+
+async function commentOf(layoutId: string, commentId: string): Promise<Row> {
+  if (!UUID.test(commentId)) throw new NotFoundError('No such comment.');
+  const db = await getDb();
+  const [row] = await db.select().from(comments).where(and(eq(comments.id, commentId), eq(comments.layoutId, layoutId))).limit(1);
+  if (!row) throw new NotFoundError('No such comment.');
+  return row;
+}
+
+async function threadOf(actor: Actor, layoutId: string, rootId: string): Promise<ThreadDto> {
+  const db = await getDb();
   const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
-  return threads(rows.filter((r) => r.id === commentId || r.parentId === commentId), actor)[0];
+  return threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor)[0];
+}
+
+/** The author changes their own words; the comment keeps its place, pin and replies. */
+export async function editComment(actor: Actor, layoutId: string, commentId: string, body: string): Promise<ThreadDto> {
+  await layoutFor(actor, layoutId);
+  const row = await commentOf(layoutId, commentId);
+  if (row.authorId !== actor.userId) throw new ForbiddenError('Only its author can change a comment.');
+  const text = checkBody(body);
+  const db = await getDb();
+  if (text !== row.body) await db.update(comments).set({ body: text, editedAt: new Date() }).where(eq(comments.id, row.id));
+  return threadOf(actor, layoutId, row.parentId ?? row.id);
+}
+
+/**
+ * Removes a comment: its author may, and so may the studio's owner (to tidy a thread). Removing
+ * a thread's first comment removes the thread with its replies and its pin.
+ */
+export async function deleteComment(actor: Actor, layoutId: string, commentId: string): Promise<{ removedThread: boolean }> {
+  await layoutFor(actor, layoutId);
+  const row = await commentOf(layoutId, commentId);
+  if (row.authorId !== actor.userId && actor.role !== 'owner') throw new ForbiddenError('Only its author or the studio owner can remove a comment.');
+  const db = await getDb();
+  await db.delete(comments).where(eq(comments.id, row.id)); // replies go with their thread (on delete cascade)
+  return { removedThread: row.parentId === null };
 }
 
 /** Open (unresolved) threads per layout, for the layouts table. */

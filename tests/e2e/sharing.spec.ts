@@ -1,8 +1,8 @@
 // Working with a client, end to end in Chromium: the designer issues revision A and shares a live
 // viewer link (which follows a save within 2 s), invites a new client; the invitation mail
 // arrives at the development mail server and is parsed with mailparser; the client follows the
-// link, sets a password, sees the layout, pins a comment and approves revision A; the designer
-// sees the approval. The viewer link is revoked and says so. Screenshots kept as artifacts.
+// link, sets a password, sees the layout, pins a comment (edits it, removes a stray reply) and
+// approves revision A; the designer sees the approval. The viewer link is revoked and says so. Screenshots kept as artifacts.
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { simpleParser } from 'mailparser';
 import { keepScreenshot, signIn } from './helpers';
@@ -139,6 +139,20 @@ test('invite → view → comment → approve, with a live viewer link', async (
   expect(Math.abs(threads.threads[0].x - 1500)).toBeLessThanOrEqual(Math.ceil(2 / scale));
   expect(Math.abs(threads.threads[0].y - 600)).toBeLessThanOrEqual(Math.ceil(2 / scale));
   await keepScreenshot(client, 'sharing-client-comment-pinned');
+  // The client sharpens the question (their own comment: Edit), then adds and removes a reply.
+  await thread.getByRole('button', { name: 'Edit your comment' }).click();
+  await thread.getByRole('textbox', { name: 'Change your comment' }).fill('Could the bed be 50 mm longer? I am 1.88 m tall and sleep stretched out.');
+  await thread.getByRole('button', { name: 'Save', exact: true }).click();
+  await expect(thread).toContainText('sleep stretched out');
+  await expect(thread).toContainText('edited');
+  await keepScreenshot(client, 'sharing-client-comment-edited');
+  await thread.getByRole('textbox', { name: 'Reply' }).fill('Sent too early, ignore this.');
+  await thread.getByRole('button', { name: 'Reply', exact: true }).click();
+  const reply = thread.getByTestId('comment-reply').filter({ hasText: 'Sent too early' });
+  await reply.getByRole('button', { name: 'Remove this reply' }).click();
+  await reply.getByRole('button', { name: 'Remove', exact: true }).click();
+  await expect(thread.getByTestId('comment-reply')).toHaveCount(0);
+  expect((await (await client.request.get(`/api/layouts/${layout.id}/comments`)).json()).threads[0]).toMatchObject({ replies: [], editedAt: expect.any(String) });
 
   // The client approves revision A: the dialog says it is final.
   await client.getByRole('link', { name: 'Revisions' }).click();

@@ -95,6 +95,16 @@ export const SHARING_ROWS: Row[] = [
     },
     expect: READ,
   },
+  {
+    // The designer's own comment: the designer (author) and the owner may remove it, the client may not.
+    route: '/api/layouts/[id]/comments/[commentId]', method: 'DELETE',
+    request: async (fx) => {
+      const { addComment } = await import('@/db/sharing/comments');
+      const { thread } = await addComment(designerOf(fx), fx.world.clientLayoutId, { kind: 'pin', arrangement: 'sleep', x: 500, y: 500, body: 'matrix' });
+      return { params: { id: fx.world.clientLayoutId, commentId: thread.id } };
+    },
+    expect: { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 },
+  },
   { route: '/api/invitations', method: 'GET', request: () => ({}), expect: STAFF },
   {
     route: '/api/invitations', method: 'POST',

@@ -1,5 +1,6 @@
 // Comments pinned to the plan: the workshop and the layout's client pin, reply, resolve and
-// reopen; strangers get 404; bad input 400 with nothing stored; the other side hears by mail.
+// reopen, and change or remove their own; strangers get 404; bad input 400 with nothing stored;
+// the other side hears by mail.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { count } from 'drizzle-orm';
 import * as threads from '@/app/api/layouts/[id]/comments/route';
@@ -118,5 +119,62 @@ describe('resolving threads', () => {
     const count = (id: string) => res.body.layouts.find((l: { id: string }) => l.id === id).sharing.openComments;
     expect(count(w.clientLayoutId)).toBe(2);
     expect(count(w.otherLayoutId)).toBe(0);
+  });
+});
+
+describe('changing and removing comments', () => {
+  const params = (commentId: string) => ({ id: w.clientLayoutId, commentId });
+  const newThread = async (who: 'client' | 'designer', body: string) => {
+    const res = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: as(w, who), json: { ...pin, body } });
+    expect(res.status).toBe(201);
+    return res.body.thread as { id: string; body: string };
+  };
+
+  it('lets the author change their words, marks the comment edited, and refuses everyone else', async () => {
+    const thread = await newThread('client', 'Is the tank 70 l?');
+    const edited = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'client'), json: { body: 'Is the fresh tank 70 l or 100 l?' } });
+    expect(edited.status).toBe(200);
+    expect(edited.body.thread.body).toBe('Is the fresh tank 70 l or 100 l?');
+    expect(edited.body.thread.editedAt).toEqual(expect.any(String));
+    expect(edited.body.thread.canEdit).toBe(true);
+    // Not the author: the workshop sees it and may resolve it, but not put words in the client's mouth.
+    const byDesigner = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body: 'rewritten' } });
+    expect(byDesigner.status).toBe(403);
+    for (const who of STRANGERS) {
+      expect((await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, who), json: { body: 'x' } })).status, who).toBe(404);
+    }
+    const seenBy = async (who: 'designer' | 'owner') =>
+      (await call(threads.GET, { params: { id: w.clientLayoutId }, as: as(w, who) })).body.threads.find((t: { id: string }) => t.id === thread.id);
+    expect(await seenBy('designer')).toMatchObject({ body: 'Is the fresh tank 70 l or 100 l?', canEdit: false, canDelete: false });
+    expect(await seenBy('owner')).toMatchObject({ canEdit: false, canDelete: true }); // the owner may tidy a thread away
+  });
+
+  it('refuses an empty or oversized edit with 400 and keeps the old text', async () => {
+    const thread = await newThread('designer', 'Gas locker drains through the floor.');
+    for (const body of ['   ', 'x'.repeat(2001)]) {
+      const res = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body } });
+      expect(res.status).toBe(400);
+    }
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body: 'x', resolved: true } })).status).toBe(400);
+    const list = await call(threads.GET, { params: { id: w.clientLayoutId }, as: as(w, 'designer') });
+    expect(list.body.threads.find((t: { id: string }) => t.id === thread.id)).toMatchObject({ body: 'Gas locker drains through the floor.', editedAt: null });
+  });
+
+  it('lets the author or the owner remove a comment; a first comment takes its thread and replies with it', async () => {
+    const before = await commentCount();
+    const thread = await newThread('designer', 'Move the heater outlet 100 mm aft.');
+    const reply = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: as(w, 'client'), json: { parentId: thread.id, body: 'Fine by me.' } });
+    const replyId = reply.body.thread.replies[0].id as string;
+    // The client may remove their own reply but not the designer's thread.
+    expect((await call(oneThread.DELETE, { method: 'DELETE', params: params(thread.id), as: as(w, 'client') })).status).toBe(403);
+    for (const who of STRANGERS) {
+      expect((await call(oneThread.DELETE, { method: 'DELETE', params: params(thread.id), as: as(w, who) })).status, who).toBe(404);
+    }
+    expect((await call(oneThread.DELETE, { method: 'DELETE', params: params(replyId), as: as(w, 'client') })).body).toEqual({ removedThread: false });
+    expect(await commentCount()).toBe(before + 1);
+    // The owner tidies up the designer's thread.
+    expect((await call(oneThread.DELETE, { method: 'DELETE', params: params(thread.id), as: as(w, 'owner') })).body).toEqual({ removedThread: true });
+    expect(await commentCount()).toBe(before);
+    expect((await call(oneThread.DELETE, { method: 'DELETE', params: params(thread.id), as: as(w, 'owner') })).status).toBe(404);
   });
 });

@@ -1,19 +1,36 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
-import { setResolved } from '@/db/sharing/comments';
+import { COMMENT_MAX, deleteComment, editComment, setResolved } from '@/db/sharing/comments';
 import { layoutFor } from '@/db/sharing/access';
 
 export const dynamic = 'force-dynamic';
 
 type Ctx = { params: Promise<{ id: string; commentId: string }> };
 
-const patchBody = z.strictObject({ resolved: z.boolean({ error: 'resolved must be true or false' }) });
+const patchBody = z.union(
+  [
+    z.strictObject({ resolved: z.boolean({ error: 'resolved must be true or false' }) }),
+    z.strictObject({ body: z.string({ error: 'body must be the new text' }).max(COMMENT_MAX, `Keep a comment under ${COMMENT_MAX} characters.`) }),
+  ],
+  { error: 'Send { resolved: true | false } or { body: "new text" }.' },
+);
 
-/** Resolves (or reopens) a thread; the workshop and the layout's client may both do it. */
+/**
+ * Resolves (or reopens) a thread — the workshop and the layout's client may both — or, with
+ * `body`, changes the text of the caller's own comment.
+ */
 export const PATCH = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id, commentId } = await params;
   await layoutFor(actor, id);
-  const body = parseWith(patchBody, await readJson(req, 4 * 1024));
+  const body = parseWith(patchBody, await readJson(req, 16 * 1024));
+  if ('body' in body) return json({ thread: await editComment(actor, id, commentId, body.body) });
   return json({ thread: await setResolved(actor, id, commentId, body.resolved) });
+});
+
+/** Removes the caller's own comment (the owner may remove any); a thread's first takes the thread. */
+export const DELETE = handle<Ctx>(async (req, { params }) => {
+  const actor = await requireActor(req);
+  const { id, commentId } = await params;
+  return json(await deleteComment(actor, id, commentId));
 });
