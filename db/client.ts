@@ -81,35 +81,16 @@ async function openPostgres(url: string): Promise<DbHandle> {
  * their own thread.
  */
 export async function openPglite(dir: string, options: { migrate?: boolean; thread?: boolean } = {}): Promise<DbHandle> {
-  const { drizzle } = await import('drizzle-orm/pglite');
   // PGlite creates only the last folder of its path.
   fs.mkdirSync(path.dirname(dir), { recursive: true });
   const releaseLock = acquireLock(dir);
   try {
-    if (options.thread) {
-      const { PgliteThreadClient } = await import('./pglite-thread-client');
-      const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
-      // drizzle uses only `query` and `transaction` of the client it is given.
-      const db = drizzle({ client: client as never, schema });
-      return {
-        db: db as unknown as Db,
-        kind: 'pglite',
-        close: async () => {
-          await client.close();
-          releaseLock();
-        },
-      };
-    }
-    const { PGlite } = await import('@electric-sql/pglite');
-    const { migrate } = await import('drizzle-orm/pglite/migrator');
-    const client = await PGlite.create({ dataDir: dir });
-    const db = drizzle(client, { schema });
-    if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
+    const opened = options.thread ? await openOnThread(dir, options) : await openInThread(dir, options);
     return {
-      db: db as unknown as Db,
+      db: opened.db,
       kind: 'pglite',
       close: async () => {
-        await client.close();
+        await opened.close();
         releaseLock();
       },
     };
@@ -117,6 +98,24 @@ export async function openPglite(dir: string, options: { migrate?: boolean; thre
     releaseLock();
     throw err;
   }
+}
+
+async function openOnThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
+  const { drizzle } = await import('drizzle-orm/pglite');
+  const { PgliteThreadClient } = await import('./pglite-thread-client');
+  const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
+  // drizzle uses only `query` and `transaction` of the client it is given.
+  return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close() };
+}
+
+async function openInThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
+  const { drizzle } = await import('drizzle-orm/pglite');
+  const { PGlite } = await import('@electric-sql/pglite');
+  const { migrate } = await import('drizzle-orm/pglite/migrator');
+  const client = await PGlite.create({ dataDir: dir });
+  const db = drizzle(client, { schema });
+  if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
+  return { db: db as unknown as Db, close: () => client.close() };
 }
 
 /**

@@ -16,9 +16,8 @@ interface QueryResult {
   affectedRows?: number;
 }
 
-interface ErrorFields {
-  name: string;
-  message: string;
+/** What the thread passes on of a database error: SQLSTATE, constraint, detail; never a stack. */
+interface ErrorDetail {
   code?: string;
   constraint?: string;
   detail?: string;
@@ -26,21 +25,26 @@ interface ErrorFields {
   column?: string;
   severity?: string;
 }
+const DETAIL_KEYS = ['code', 'constraint', 'detail', 'table', 'column', 'severity'] as const;
+
+interface ErrorFields extends ErrorDetail {
+  name: string;
+  message: string;
+}
 
 type Reply = { id: number; ok: true; result: unknown } | { id: number; ok: false; error: ErrorFields };
 
+// The class carries ErrorDetail's fields (declaration merging), as in-thread errors do.
+// eslint-disable-next-line @typescript-eslint/no-empty-object-type, @typescript-eslint/no-unsafe-declaration-merging
+export interface PgliteThreadError extends ErrorDetail {}
+
 /** A database error as the caller would have had it in-thread: SQLSTATE and constraint kept. */
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging
 export class PgliteThreadError extends Error {
-  code?: string;
-  constraint?: string;
-  detail?: string;
-  table?: string;
-  column?: string;
-  severity?: string;
   constructor(fields: ErrorFields) {
     super(fields.message);
     this.name = fields.name === 'error' || !fields.name ? 'DatabaseError' : fields.name;
-    Object.assign(this, { code: fields.code, constraint: fields.constraint, detail: fields.detail, table: fields.table, column: fields.column, severity: fields.severity });
+    for (const key of DETAIL_KEYS) if (fields[key] !== undefined) this[key] = fields[key];
   }
 }
 

@@ -20,55 +20,56 @@ async function addUser(db: Db, email: string) {
   return row;
 }
 
+/** Opens the folder on a thread, runs `fn`, and always closes it again. */
+async function onThread(fn: (db: Db) => Promise<void>): Promise<void> {
+  const handle = await openPglite(dir, { thread: true });
+  try {
+    await fn(handle.db);
+  } finally {
+    await handle.close();
+  }
+}
+
 describe('PGlite in a worker thread', () => {
   it('opens and migrates a new folder, and answers typed rows', async () => {
-    const handle = await openPglite(dir, { thread: true });
-    try {
-      const row = await addUser(handle.db, 'one@thread.test');
+    await onThread(async (db) => {
+      const row = await addUser(db, 'one@thread.test');
       expect(row.createdAt).toBeInstanceOf(Date);
-      const [found] = await handle.db.select().from(users).where(eq(users.id, row.id));
+      const [found] = await db.select().from(users).where(eq(users.id, row.id));
       expect(found.email).toBe('one@thread.test');
-      const raw = await handle.db.execute(sql`select count(*)::int as n from users`);
+      const raw = await db.execute(sql`select count(*)::int as n from users`);
       expect((raw as unknown as { rows: unknown[] }).rows).toEqual([{ n: 1 }]);
-    } finally {
-      await handle.close();
-    }
+    });
   }, 60_000);
 
   it('commits a transaction that returns and rolls back one that throws', async () => {
-    const handle = await openPglite(dir, { thread: true });
-    try {
-      await handle.db.transaction(async (tx) => {
+    await onThread(async (db) => {
+      await db.transaction(async (tx) => {
         await tx.insert(studios).values({ name: 'Kept Studio' });
       });
       await expect(
-        handle.db.transaction(async (tx) => {
+        db.transaction(async (tx) => {
           await tx.insert(studios).values({ name: 'Dropped Studio' });
           throw new Error('changed my mind');
         }),
       ).rejects.toThrow('changed my mind');
-      const names = (await handle.db.select({ name: studios.name }).from(studios)).map((s) => s.name);
+      const names = (await db.select({ name: studios.name }).from(studios)).map((s) => s.name);
       expect(names).toContain('Kept Studio');
       expect(names).not.toContain('Dropped Studio');
-    } finally {
-      await handle.close();
-    }
+    });
   }, 60_000);
 
   it('keeps the SQLSTATE of a unique violation, and the rows of earlier runs', async () => {
-    const handle = await openPglite(dir, { thread: true });
-    try {
+    await onThread(async (db) => {
       let error: unknown;
       try {
-        await addUser(handle.db, 'one@thread.test');
+        await addUser(db, 'one@thread.test');
       } catch (err) {
         error = err;
       }
       expect(isUniqueViolation(error)).toBe(true);
       expect(String((error as Error).stack ?? '')).not.toContain('pglite-thread.mjs');
-    } finally {
-      await handle.close();
-    }
+    });
   }, 60_000);
 });
 
