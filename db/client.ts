@@ -112,8 +112,10 @@ async function openInThread(dir: string, options: { migrate?: boolean }): Promis
   const { drizzle } = await import('drizzle-orm/pglite');
   const { PGlite } = await import('@electric-sql/pglite');
   const { migrate } = await import('drizzle-orm/pglite/migrator');
+  const { withStatementCache } = await import('./pglite-statements.mjs');
   const client = await PGlite.create({ dataDir: dir });
-  const db = drizzle(client, { schema });
+  // Reads as prepared statements, as on the server's database thread.
+  const db = drizzle({ client: withStatementCache(client) as never, schema });
   if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
   return { db: db as unknown as Db, close: () => client.close() };
 }

@@ -6,6 +6,7 @@ import { PGlite, types } from '@electric-sql/pglite';
 import { drizzle } from 'drizzle-orm/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
 import { templateFor } from './pglite-template.mjs';
+import { StatementCache } from './pglite-statements.mjs';
 
 // Dates, times and intervals stay text, as drizzle asks of PGlite when it runs in-thread.
 const keepText = (value) => value;
@@ -37,13 +38,14 @@ function errorFields(err) {
 }
 
 let db;
+let statements;
 const transactions = new Map();
 let nextTx = 1;
 
 async function run(msg) {
   switch (msg.op) {
     case 'query': {
-      const target = msg.tx ? transactions.get(msg.tx)?.tx : db;
+      const target = msg.tx ? transactions.get(msg.tx)?.tx : statements;
       if (!target) throw new Error(`transaction ${msg.tx} is not open`);
       const result = await target.query(msg.sql, msg.params ?? [], { rowMode: msg.rowMode ?? 'object', parsers: PARSERS });
       return { rows: result.rows, fields: result.fields, affectedRows: result.affectedRows };
@@ -93,6 +95,7 @@ try {
   // A new folder starts from the install-time template when there is one (pglite-template.mjs).
   db = await PGlite.create({ dataDir: workerData.dir, loadDataDir: templateFor(workerData.dir) });
   if (workerData.migrationsFolder) await migrate(drizzle(db), { migrationsFolder: workerData.migrationsFolder });
+  statements = new StatementCache(db); // after migrating: no statement outlives a schema change
   parentPort.on('message', (msg) => {
     run(msg).then(
       (result) => parentPort.postMessage({ id: msg.id, ok: true, result }),

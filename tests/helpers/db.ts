@@ -10,6 +10,7 @@ import crypto from 'node:crypto';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import * as schema from '../../db/schema';
+import { withStatementCache } from '../../db/pglite-statements.mjs';
 import { installDbHandle, closeDb, type Db } from '../../db/client';
 
 export async function useFreshDb(): Promise<Db> {
@@ -17,7 +18,8 @@ export async function useFreshDb(): Promise<Db> {
   const file = process.env.BAYWRIGHT_TEST_TEMPLATE;
   if (!file) throw new Error('the vitest global setup did not build the database template');
   const client = await PGlite.create({ loadDataDir: new Blob([fs.readFileSync(file)]) });
-  const db = drizzlePglite(client, { schema }) as unknown as Db;
+  // Reads through the statement cache, as the app's own handles do (db/pglite-statements.mjs).
+  const db = drizzlePglite({ client: withStatementCache(client) as never, schema }) as unknown as Db;
   installDbHandle({ db, kind: 'pglite', close: () => client.close() });
   return db;
 }
