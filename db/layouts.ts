@@ -15,6 +15,7 @@ import { canEditLayouts, type Actor } from './actor';
 import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
 import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
+import { Lru } from '../lib/cache/lru';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -39,12 +40,11 @@ export interface LayoutDto extends LayoutSummaryDto {
 const updater = alias(users, 'updater');
 const client = alias(users, 'client');
 
-function baseSelect() {
+function metaSelect() {
   return {
     id: layouts.id,
     studioId: layouts.studioId,
     name: layouts.name,
-    doc: layouts.doc,
     version: layouts.version,
     createdAt: layouts.createdAt,
     updatedAt: layouts.updatedAt,
@@ -54,10 +54,13 @@ function baseSelect() {
   };
 }
 
-type Row = {
+function baseSelect() {
+  return { ...metaSelect(), doc: layouts.doc };
+}
+
+type MetaRow = {
   id: string;
   name: string;
-  doc: LayoutDoc;
   version: number;
   createdAt: Date;
   updatedAt: Date;
@@ -66,22 +69,43 @@ type Row = {
   updatedByName: string | null;
 };
 
+type Row = MetaRow & { doc: LayoutDoc };
+
+/** What a summary tells of the document itself. */
+type DocFacts = Pick<LayoutSummaryDto, 'sizeClass' | 'bay' | 'moduleCount'>;
+
+function docFacts(doc: LayoutDoc): DocFacts {
+  return {
+    sizeClass: sizeClassOf(doc.bay),
+    bay: { length: doc.bay.length, width: doc.bay.width, height: doc.bay.height },
+    moduleCount: doc.modules.length,
+  };
+}
+
 function toSummary(row: Row): LayoutSummaryDto {
+  return summaryOf(row, docFacts(row.doc));
+}
+
+function summaryOf(row: MetaRow, facts: DocFacts): LayoutSummaryDto {
   return {
     id: row.id,
     name: row.name,
     client: row.clientId && row.clientName ? { id: row.clientId, name: row.clientName } : null,
-    sizeClass: sizeClassOf(row.doc.bay),
-    bay: { length: row.doc.bay.length, width: row.doc.bay.width, height: row.doc.bay.height },
-    moduleCount: row.doc.modules.length,
+    sizeClass: facts.sizeClass,
+    bay: facts.bay,
+    moduleCount: facts.moduleCount,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
     updatedBy: row.updatedByName,
   };
 }
 
+function withoutDoc(row: MetaRow, facts: DocFacts, actor: Actor): Omit<LayoutDto, 'doc'> {
+  return { ...summaryOf(row, facts), createdAt: row.createdAt.toISOString(), canEdit: canEditLayouts(actor) };
+}
+
 function toDto(row: Row, actor: Actor): LayoutDto {
-  return { ...toSummary(row), doc: row.doc, createdAt: row.createdAt.toISOString(), canEdit: canEditLayouts(actor) };
+  return { ...withoutDoc(row, docFacts(row.doc), actor), doc: row.doc };
 }
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -114,6 +138,17 @@ function layoutByIdQuery(db: Db) {
     .prepare('layout_by_id');
 }
 
+function layoutMetaByIdQuery(db: Db) {
+  return db
+    .select(metaSelect())
+    .from(layouts)
+    .leftJoin(client, eq(client.id, layouts.clientId))
+    .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .where(eq(layouts.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare('layout_meta_by_id');
+}
+
 /** Staff see their studio's layouts, a client only those shared with them; others learn nothing. */
 function assertVisible<R extends { studioId: string; clientId: string | null }>(actor: Actor, row: R | undefined): asserts row is R {
   if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such layout.');
@@ -131,6 +166,58 @@ async function readable(actor: Actor, id: string): Promise<Row> {
 
 export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {
   return toDto(await readable(actor, id), actor);
+}
+
+/** A stored document as JSON text, with the figures a summary draws from it. */
+interface CachedDoc extends DocFacts {
+  json: string;
+}
+
+/**
+ * Documents as JSON text, kept by layout id, version and save time. Only `saveLayout` writes a
+ * document, and it always moves both on, so an entry never goes stale — on any number of
+ * processes, each with its own cache. Bounded by characters held (default 32 M, about 64 MB).
+ */
+const docCache = new Lru<string, CachedDoc>(Number(process.env.BAYWRIGHT_DOC_CACHE_CHARS ?? 32_000_000), (d) => d.json.length);
+
+function docKey(row: MetaRow): string {
+  return `${row.id}:${row.version}:${row.updatedAt.getTime()}`;
+}
+
+function cacheDoc(row: Row): CachedDoc {
+  const cached = { ...docFacts(row.doc), json: JSON.stringify(row.doc) };
+  docCache.set(docKey(row), cached);
+  return cached;
+}
+
+/**
+ * The same answer as `getLayout`, as JSON text, for the read route. Every call asks the
+ * database who may see the layout and which version is current (a small row, no document);
+ * the document's text comes from the cache when that version was read before, so a layout
+ * read again and again (the editor reopening, a client's live link) is not parsed and
+ * serialised again each time.
+ */
+export async function getLayoutJson(actor: Actor, id: string): Promise<{ version: number; json: string }> {
+  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
+  const db = await getDb();
+  const [meta] = await prepared(db, 'layout_meta_by_id', layoutMetaByIdQuery).execute({ id });
+  assertVisible(actor, meta);
+  let row: MetaRow = meta;
+  let doc = docCache.get(docKey(meta));
+  if (!doc) {
+    // Not read at this version before. A save may land in between; then the newer copy (its
+    // rights checked again) is the answer.
+    const full = await readable(actor, id);
+    doc = cacheDoc(full);
+    row = full;
+  }
+  const head = JSON.stringify(withoutDoc(row, doc, actor));
+  return { version: row.version, json: `${head.slice(0, -1)},"doc":${doc.json}}` };
+}
+
+/** For tests. */
+export function clearDocCache(): void {
+  docCache.clear();
 }
 
 async function assertClientOfStudio(studioId: string, clientId: string | null | undefined): Promise<void> {

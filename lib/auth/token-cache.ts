@@ -6,6 +6,7 @@
  * does not depend on this cache, because the caller is looked up in the database each time.
  */
 import 'server-only';
+import { Lru } from '../cache/lru';
 
 export interface SessionClaims {
   uid?: string;
@@ -15,8 +16,7 @@ export interface SessionClaims {
   [claim: string]: unknown;
 }
 
-const MAX_ENTRIES = 1000;
-const cache = new Map<string, SessionClaims>();
+const cache = new Lru<string, SessionClaims>(1000);
 
 function stillValid(claims: SessionClaims, now: number): boolean {
   return typeof claims.exp !== 'number' || claims.exp * 1000 > now;
@@ -29,15 +29,13 @@ export async function decodeCached(
 ): Promise<SessionClaims | null> {
   const hit = cache.get(raw);
   if (hit) {
+    if (stillValid(hit, now)) return hit;
     cache.delete(raw);
-    if (!stillValid(hit, now)) return null;
-    cache.set(raw, hit); // most recently used goes last
-    return hit;
+    return null;
   }
   const claims = await decode(raw);
   if (!claims || !stillValid(claims, now)) return null;
   cache.set(raw, claims);
-  if (cache.size > MAX_ENTRIES) cache.delete(cache.keys().next().value!);
   return claims;
 }
 

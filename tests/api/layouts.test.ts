@@ -3,7 +3,9 @@ import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import * as list from '@/app/api/layouts/route';
 import * as one from '@/app/api/layouts/[id]/route';
-import { layouts } from '@/db/schema';
+import { layouts, users } from '@/db/schema';
+import { clearDocCache, getLayout } from '@/db/layouts';
+import { loadActor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
@@ -137,6 +139,44 @@ describe('GET /api/layouts/:id', () => {
     expect((await call(one.GET, { as: w.foreignOwner, params: { id: w.clientLayoutId } })).status).toBe(404);
     expect((await call(one.GET, { as: w.owner, params: { id: w.foreignLayoutId } })).status).toBe(404);
     expect((await call(one.GET, { as: w.owner, params: { id: 'not-a-uuid' } })).status).toBe(404);
+    expect((await call(one.GET, { as: null, params: { id: w.clientLayoutId } })).status).toBe(401);
+  });
+});
+
+describe('GET /api/layouts/:id from the document cache', () => {
+  it('answers the same DTO as the data layer, read cold and read again', async () => {
+    clearDocCache();
+    for (const who of [w.owner, w.client]) {
+      const actor = (await loadActor(who.id, who.studioId, 0))!;
+      const expected = JSON.parse(JSON.stringify(await getLayout(actor, w.clientLayoutId)));
+      const cold = await call(one.GET, { as: who, params: { id: w.clientLayoutId } });
+      const warm = await call(one.GET, { as: who, params: { id: w.clientLayoutId } });
+      expect(cold.body).toEqual(expected);
+      expect(warm.body).toEqual(expected);
+      expect(warm.headers.get('content-type')).toMatch(/^application\/json/);
+    }
+  });
+
+  it('shows a save at once, and names that change without a save', async () => {
+    const before = (await call(one.GET, { as: w.owner, params: { id: w.clientLayoutId } })).body;
+    const doc = { ...before.doc, occupants: { ...before.doc.occupants, standingHeight: before.doc.occupants.standingHeight + 3 } };
+    const saved = await call(one.PUT, { method: 'PUT', as: w.designer, params: { id: w.clientLayoutId }, headers: { 'if-match': `"${before.version}"` }, json: { doc } });
+    expect(saved.status).toBe(200);
+    const after = (await call(one.GET, { as: w.owner, params: { id: w.clientLayoutId } })).body;
+    expect(after.version).toBe(before.version + 1);
+    expect(after.doc.occupants.standingHeight).toBe(before.doc.occupants.standingHeight + 3);
+
+    // The client's name is not part of the cached document: a rename shows on the next read.
+    await db.update(users).set({ name: 'Priya N. Renamed' }).where(eq(users.id, w.client.id));
+    const renamed = (await call(one.GET, { as: w.owner, params: { id: w.clientLayoutId } })).body;
+    expect(renamed.client.name).toBe('Priya N. Renamed');
+    await db.update(users).set({ name: before.client.name }).where(eq(users.id, w.client.id));
+  });
+
+  it('still asks who may read on every request: a cached layout is 404 to strangers', async () => {
+    await call(one.GET, { as: w.owner, params: { id: w.clientLayoutId } }); // now cached
+    expect((await call(one.GET, { as: w.otherClient, params: { id: w.clientLayoutId } })).status).toBe(404);
+    expect((await call(one.GET, { as: w.foreignOwner, params: { id: w.clientLayoutId } })).status).toBe(404);
     expect((await call(one.GET, { as: null, params: { id: w.clientLayoutId } })).status).toBe(401);
   });
 });
