@@ -65,6 +65,9 @@ function load(opts: autocannon.Options): Promise<LoadResult> {
 }
 
 const WARMUP_S = Number(process.env.BENCH_WARMUP_SECONDS ?? 10);
+/** `BENCH_CASES=read,bare` runs only those cases (read, save, checks, floor, bare); the rest report zeros. */
+const CASES = new Set((process.env.BENCH_CASES ?? 'read,save,checks,floor,bare').split(',').map((c) => c.trim()));
+const SKIPPED: LoadResult = { requests: 0, rps: 0, p50: 0, p95: 0, p99: 0, errors: 0, non2xx: 0, statuses: {} };
 
 /**
  * A warm-up run with the same requests, then the measured run. The warm-up is long because V8
@@ -90,7 +93,7 @@ export async function benchApi(): Promise<{ read: LoadResult; save: LoadResult; 
       ids.push({ id: created.id, version: created.version });
     }
     const headers = { cookie: session.cookie };
-    const read = await measure({ url: `${server.url}/api/layouts/${ids[0].id}`, headers });
+    const read = !CASES.has('read') ? SKIPPED : await measure({ url: `${server.url}/api/layouts/${ids[0].id}`, headers });
 
     // autocannon clears a request's context each time it loops over `requests`, so a layout
     // cannot stay with one connection; instead each request borrows a layout nobody else is
@@ -98,43 +101,52 @@ export async function benchApi(): Promise<{ read: LoadResult; save: LoadResult; 
     // and a layout per connection, one is always free.
     let free = [...ids];
     const body = JSON.stringify({ doc });
-    const save = await measure(
-      {
-        url: server.url,
-        requests: [
+    const save = !CASES.has('save')
+      ? SKIPPED
+      : await measure(
           {
-            method: 'PUT',
-            setupRequest: (req, context: Record<string, unknown>) => {
-              const layout = free.shift()!;
-              context.layout = layout;
-              return { ...req, path: `/api/layouts/${layout.id}`, headers: { ...headers, ...json, 'if-match': String(layout.version) }, body };
-            },
-            onResponse: (status, resBody, context: Record<string, unknown>) => {
-              const layout = context.layout as { id: string; version: number };
-              if (status === 200) layout.version = JSON.parse(resBody).version;
-              free.push(layout);
-            },
+            url: server.url,
+            requests: [
+              {
+                method: 'PUT',
+                setupRequest: (req, context: Record<string, unknown>) => {
+                  const layout = free.shift()!;
+                  context.layout = layout;
+                  return { ...req, path: `/api/layouts/${layout.id}`, headers: { ...headers, ...json, 'if-match': String(layout.version) }, body };
+                },
+                onResponse: (status, resBody, context: Record<string, unknown>) => {
+                  const layout = context.layout as { id: string; version: number };
+                  if (status === 200) layout.version = JSON.parse(resBody).version;
+                  free.push(layout);
+                },
+              },
+            ],
+          } as autocannon.Options,
+          // A save cut off when the warm-up stopped never gave its layout back: start again from
+          // the versions the server holds.
+          async () => {
+            free = await Promise.all(ids.map(async ({ id }) => ({ id, version: (await (await session.fetch(`/api/layouts/${id}`)).json()).version as number })));
           },
-        ],
-      } as autocannon.Options,
-      // A save cut off when the warm-up stopped never gave its layout back: start again from
-      // the versions the server holds.
-      async () => {
-        free = await Promise.all(ids.map(async ({ id }) => ({ id, version: (await (await session.fetch(`/api/layouts/${id}`)).json()).version as number })));
-      },
-    );
+        );
 
-    const checks = await measure({ url: `${server.url}/api/checks`, method: 'POST', headers: { ...headers, ...json }, body: JSON.stringify(doc) });
+    const checks = !CASES.has('checks') ? SKIPPED : await measure({ url: `${server.url}/api/checks`, method: 'POST', headers: { ...headers, ...json }, body: JSON.stringify(doc) });
     // What Next.js itself costs: a route with one query and no session, for reading the ratio.
-    const floor = await measure({ url: `${server.url}/api/health` });
+    const floor = !CASES.has('floor') ? SKIPPED : await measure({ url: `${server.url}/api/health` });
 
-    const bare = spawn('npx', ['tsx', 'bench/bare-server.ts'], { env: { ...process.env, PORT: '3399', BENCH_DOC: JSON.stringify(doc) }, detached: true });
-    await new Promise<void>((resolve) => bare.stdout.on('data', (d) => String(d).includes('listening') && resolve()));
-    const bareRead = await measure({ url: 'http://127.0.0.1:3399/' });
-    await stopProcessGroup(bare);
-    return { read, save, checks, floor, bareRead, readVsBare: round(read.rps / bareRead.rps, 2) };
+    const bareRead = CASES.has('bare') ? await measureBare(doc) : SKIPPED;
+    return { read, save, checks, floor, bareRead, readVsBare: bareRead.rps ? round(read.rps / bareRead.rps, 2) : 0 };
   } finally {
     await server.stop();
+  }
+}
+
+async function measureBare(doc: LayoutDoc): Promise<LoadResult> {
+  const bare = spawn('npx', ['tsx', 'bench/bare-server.ts'], { env: { ...process.env, PORT: '3399', BENCH_DOC: JSON.stringify(doc) }, detached: true });
+  await new Promise<void>((resolve) => bare.stdout.on('data', (d) => String(d).includes('listening') && resolve()));
+  try {
+    return await measure({ url: 'http://127.0.0.1:3399/' });
+  } finally {
+    await stopProcessGroup(bare);
   }
 }
 

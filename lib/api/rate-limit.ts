@@ -23,6 +23,11 @@ export class RateLimiter {
     return ok;
   }
 
+  /** Forgets every bucket (tests that make many requests on purpose). */
+  clear(): void {
+    this.buckets.clear();
+  }
+
   /** Seconds until the key has a token again. */
   retryAfter(key: string): number {
     const b = this.buckets.get(key);
