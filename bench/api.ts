@@ -2,6 +2,7 @@
  * API latency under load on 127.0.0.1 (autocannon, 10 connections, after a warm-up): reading a
  * layout, saving a ~12 KB layout (no two connections save the same layout at once), and
  * posting a layout to /api/checks — beside a bare node:http + PGlite server doing the same read.
+ * The read and the bare read take turns (BENCH_ROUNDS, default 3) so both see the same machine.
  * p50/p95/p99 are computed from every response time.
  */
 import { spawn } from 'node:child_process';
@@ -40,28 +41,49 @@ export function twelveKbLayout(): LayoutDoc {
   return { ...doc, modules };
 }
 
-function load(opts: autocannon.Options): Promise<LoadResult> {
+/** One autocannon run's raw figures: every response time, so runs can be pooled. */
+interface Run {
+  times: number[];
+  seconds: number;
+  errors: number;
+  non2xx: number;
+  statuses: Record<string, number>;
+}
+
+function run(opts: autocannon.Options): Promise<Run> {
   return new Promise((resolve, reject) => {
     const times: number[] = [];
     const statuses: Record<string, number> = {};
     const instance = autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }, (err, result) => {
       if (err) return reject(err);
-      resolve({
-        requests: result.requests.total,
-        rps: round(result.requests.average, 0),
-        p50: round(percentile(times, 50)),
-        p95: round(percentile(times, 95)),
-        p99: round(percentile(times, 99)),
-        errors: result.errors + result.timeouts,
-        non2xx: result.non2xx,
-        statuses,
-      });
+      resolve({ times, seconds: result.duration, errors: result.errors + result.timeouts, non2xx: result.non2xx, statuses });
     });
     instance.on('response', (_client, status, _bytes, responseTime) => {
       times.push(responseTime);
       if (status < 200 || status > 299) statuses[status] = (statuses[status] ?? 0) + 1;
     });
   });
+}
+
+function summarise(runs: Run[]): LoadResult {
+  const times = runs.flatMap((r) => r.times);
+  const seconds = runs.reduce((n, r) => n + r.seconds, 0);
+  const statuses: Record<string, number> = {};
+  for (const r of runs) for (const [k, n] of Object.entries(r.statuses)) statuses[k] = (statuses[k] ?? 0) + n;
+  return {
+    requests: times.length,
+    rps: round(times.length / seconds, 0),
+    p50: round(percentile(times, 50)),
+    p95: round(percentile(times, 95)),
+    p99: round(percentile(times, 99)),
+    errors: runs.reduce((n, r) => n + r.errors, 0),
+    non2xx: runs.reduce((n, r) => n + r.non2xx, 0),
+    statuses,
+  };
+}
+
+async function load(opts: autocannon.Options): Promise<LoadResult> {
+  return summarise([await run(opts)]);
 }
 
 const WARMUP_S = Number(process.env.BENCH_WARMUP_SECONDS ?? 10);
@@ -75,9 +97,27 @@ const SKIPPED: LoadResult = { requests: 0, rps: 0, p50: 0, p95: 0, p99: 0, error
  * 2-core machine the first seconds run at half the steady rate.
  */
 async function measure(opts: autocannon.Options, beforeMeasuring?: () => Promise<void>): Promise<LoadResult> {
-  await load({ ...opts, duration: WARMUP_S } as autocannon.Options);
+  await run({ ...opts, duration: WARMUP_S } as autocannon.Options);
   await beforeMeasuring?.();
   return load(opts);
+}
+
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
+
+/**
+ * For a ratio: both warmed up, then `ROUNDS` turns of a then b, each pooled. A neighbour that
+ * takes a core for a few seconds then costs both sides alike instead of whichever ran then.
+ */
+async function measurePair(a: autocannon.Options, b: autocannon.Options): Promise<[LoadResult, LoadResult]> {
+  await run({ ...a, duration: WARMUP_S } as autocannon.Options);
+  await run({ ...b, duration: WARMUP_S } as autocannon.Options);
+  const runsA: Run[] = [];
+  const runsB: Run[] = [];
+  for (let i = 0; i < ROUNDS; i++) {
+    runsA.push(await run(a));
+    runsB.push(await run(b));
+  }
+  return [summarise(runsA), summarise(runsB)];
 }
 
 export async function benchApi(): Promise<{ read: LoadResult; save: LoadResult; checks: LoadResult; floor: LoadResult; bareRead: LoadResult; readVsBare: number }> {
@@ -93,7 +133,12 @@ export async function benchApi(): Promise<{ read: LoadResult; save: LoadResult; 
       ids.push({ id: created.id, version: created.version });
     }
     const headers = { cookie: session.cookie };
-    const read = !CASES.has('read') ? SKIPPED : await measure({ url: `${server.url}/api/layouts/${ids[0].id}`, headers });
+    const readOpts = { url: `${server.url}/api/layouts/${ids[0].id}`, headers };
+    let read = SKIPPED;
+    let bareRead = SKIPPED;
+    if (CASES.has('read') && CASES.has('bare')) [read, bareRead] = await withBare(doc, (bare) => measurePair(readOpts, bare));
+    else if (CASES.has('read')) read = await measure(readOpts);
+    else if (CASES.has('bare')) bareRead = await withBare(doc, (bare) => measure(bare));
 
     // autocannon clears a request's context each time it loops over `requests`, so a layout
     // cannot stay with one connection; instead each request borrows a layout nobody else is
@@ -133,18 +178,18 @@ export async function benchApi(): Promise<{ read: LoadResult; save: LoadResult; 
     // What Next.js itself costs: a route with one query and no session, for reading the ratio.
     const floor = !CASES.has('floor') ? SKIPPED : await measure({ url: `${server.url}/api/health` });
 
-    const bareRead = CASES.has('bare') ? await measureBare(doc) : SKIPPED;
     return { read, save, checks, floor, bareRead, readVsBare: bareRead.rps ? round(read.rps / bareRead.rps, 2) : 0 };
   } finally {
     await server.stop();
   }
 }
 
-async function measureBare(doc: LayoutDoc): Promise<LoadResult> {
+/** Runs `fn` while the bare node:http + PGlite server is up. */
+async function withBare<T>(doc: LayoutDoc, fn: (bare: autocannon.Options) => Promise<T>): Promise<T> {
   const bare = spawn('npx', ['tsx', 'bench/bare-server.ts'], { env: { ...process.env, PORT: '3399', BENCH_DOC: JSON.stringify(doc) }, detached: true });
   await new Promise<void>((resolve) => bare.stdout.on('data', (d) => String(d).includes('listening') && resolve()));
   try {
-    return await measure({ url: 'http://127.0.0.1:3399/' });
+    return await fn({ url: 'http://127.0.0.1:3399/' });
   } finally {
     await stopProcessGroup(bare);
   }

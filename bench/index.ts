@@ -95,7 +95,9 @@ ${table}
   clears per-request context on every loop, so a layout cannot stay with one connection). *Checks*: \`POST /api/checks\`
   with the same document (the per-user rate limit raised for the run). *Next.js floor*: \`GET /api/health\`, one
   \`select 1\` and no session, to show what the framework alone costs. *Bare*: a \`node:http\` server on PGlite doing the
-  same read with no framework, auth or validation, in the same run.
+  same read with no framework, auth or validation, in the same run. The read and the bare read are warmed up
+  alike and then take turns, three rounds of 8 s each (\`BENCH_ROUNDS\`), pooled, so a passing neighbour on the
+  machine costs both sides of the ratio alike.
 - **Editor** (\`bench/editor.ts\`, \`npm run bench:editor\`): headless Chromium drags one module across a 200- and a
   2000-module layout for 120 steps; frame intervals from \`requestAnimationFrame\`, Konva draw time per frame, frames
   over 50 ms; then drop → updated findings on a 30-module layout. Headless Chromium paces frames itself, so frame
