@@ -112,11 +112,13 @@ ${table}
 ## Reading the figures
 
 - **Baywright ÷ bare.** The bare server answers a read with one query and nothing else. Next.js alone, with one
-  query and no session, reaches about 0.7 of it on this machine (the floor row); a Baywright read adds the session
-  (cookie, cached token claims, one prepared query for the caller and their membership), the rights check and a
-  three-table read, and lands near 0.3. Moving PGlite to its own thread raised the read rate from 160–310 to
-  370–430 req/s across runs (the server now uses both cores; its main thread is the busy one); the remaining gap is the framework's routing and web-stream plumbing plus one more query than the
-  bare server makes. The 0.5 goal is not met.
+  query and no session, reaches about 0.7–0.8 of it on this machine (the floor row); a Baywright read adds the
+  session (cookie, cached token claims, one prepared query for the caller and their membership), the rights check
+  and the layout's metadata, and lands at 0.5–0.58 across runs. What brought it there from 0.26: reads on the
+  embedded database run as prepared statements (planning the joined reads was most of the database thread's
+  time), and the document's JSON text is cached by layout id, version and save time, so a repeated read is not
+  parsed, copied between threads and serialised again. The database thread is now mostly idle; the server's main
+  thread (Next.js routing and web streams) is the limit.
 - **Noise.** On this 2-core machine, repeated runs of the API figures vary by ±20 % with no change to the code
   (autocannon shares the cores with the server). Compare figures from one run, not across runs.
 
