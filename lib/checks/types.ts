@@ -18,6 +18,20 @@ export interface Finding {
   message: string;
   /** Standard and clause, handbook table, or "common practice, no source". */
   source?: string;
+  /**
+   * Present only when the rule could not be checked because inputs are missing: the on-screen
+   * fields to fill in (their labels as the user sees them) and the build-plan tab that holds each.
+   * The Checks list folds every such finding into one "not yet checked" line.
+   */
+  needs?: FindingNeed[];
+}
+
+/** One missing input, named as the user sees it on screen. */
+export interface FindingNeed {
+  /** The field's label, e.g. "Mass in running order". Never a JSON path. */
+  label: string;
+  /** Where it is entered: a build-plan tab, or the editor itself. */
+  where: 'weight' | 'power' | 'water' | 'gas' | 'heat' | 'editor';
 }
 
 export interface CheckReport {
