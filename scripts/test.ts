@@ -29,6 +29,17 @@ const STEPS: Step[] = [
   { name: 'browser', cmd: [...tsx, 'scripts/e2e.ts', '--only=browser'], after: ['build', 'vitest'] },
 ];
 
+// `npm test -- --steps=typecheck,lint` runs only those steps (what they wait for counts as passed).
+const chosen = process.argv.find((a) => a.startsWith('--steps='))?.slice('--steps='.length).split(',');
+if (chosen) {
+  const unknown = chosen.filter((c) => !STEPS.some((s) => s.name === c));
+  if (unknown.length) {
+    console.error(`No such step: ${unknown.join(', ')}. Steps: ${STEPS.map((s) => s.name).join(', ')}`);
+    process.exit(2);
+  }
+  STEPS.splice(0, STEPS.length, ...STEPS.filter((s) => chosen.includes(s.name)).map((s) => ({ ...s, after: s.after.filter((a) => chosen.includes(a)) })));
+}
+
 type State = { status: 'waiting' | 'running' | 'passed' | 'failed' | 'stopped'; started?: number; ended?: number; child?: ChildProcess };
 const state = new Map<string, State>(STEPS.map((s) => [s.name, { status: 'waiting' }]));
 const width = Math.max(...STEPS.map((s) => s.name.length));
