@@ -26,6 +26,8 @@ export interface ThrottleRule {
   capMs: number;
   /** A key with no counted attempt for this long starts again from nothing. */
   quietMs: number;
+  /** Budgets (mail): also start afresh this long after the window's first attempt. */
+  windowMs?: number;
 }
 
 export type Reservation = { ok: true } | { ok: false; retryAfterS: number };
@@ -43,7 +45,9 @@ export async function reserve(key: string, rule: ThrottleRule, now = new Date())
   const quietSince = new Date(now.getTime() - rule.quietMs);
   const t = throttleCounters;
   // The count after this attempt, and the wait it earns (none inside the free allowance).
-  const fresh = sql`${t.updatedAt} <= ${quietSince}`;
+  const fresh = rule.windowMs
+    ? sql`(${t.updatedAt} <= ${quietSince} OR ${t.windowStart} <= ${new Date(now.getTime() - rule.windowMs)})`
+    : sql`${t.updatedAt} <= ${quietSince}`;
   const nextCount = sql`(CASE WHEN ${fresh} THEN 1 ELSE ${t.count} + 1 END)`;
   const waitMs = sql`LEAST(${rule.baseMs}::float8 * power(2, ${nextCount} - ${rule.free}), ${rule.capMs}::float8)`;
   const rows = await db
@@ -70,8 +74,10 @@ export async function reserve(key: string, rule: ThrottleRule, now = new Date())
     if (Math.random() < 0.01) void prune(now).catch(() => undefined);
     return { ok: true };
   }
-  const [row] = await db.select({ notBefore: t.notBefore }).from(t).where(eq(t.key, key)).limit(1);
-  const waitS = row?.notBefore ? Math.ceil((row.notBefore.getTime() - now.getTime()) / 1000) : 1;
+  const [row] = await db.select({ notBefore: t.notBefore, windowStart: t.windowStart }).from(t).where(eq(t.key, key)).limit(1);
+  let until = row?.notBefore?.getTime() ?? now.getTime() + 1000;
+  if (rule.windowMs && row) until = Math.min(until, row.windowStart.getTime() + rule.windowMs);
+  const waitS = Math.ceil((until - now.getTime()) / 1000);
   return { ok: false, retryAfterS: Math.max(1, waitS) };
 }
 

@@ -90,7 +90,7 @@ const CORE_ROWS: Row[] = [
   { route: '/api/studio/members', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio/members', method: 'POST',
-    request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client', password: 'member-long-password' } }),
+    request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client' } }),
     expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
   },
   {
@@ -102,10 +102,11 @@ const CORE_ROWS: Row[] = [
     route: '/api/studio/members/[userId]', method: 'DELETE',
     request: async (fx, who) => {
       // Each cell removes its own newly added member, so one caller's success cannot hide another's refusal.
-      const { addMember } = await import('@/db/studios');
-      const { owner } = fx.world;
-      const m = await addMember({ userId: owner.id, studioId: owner.studioId, role: 'owner', email: '', name: '' }, { name: `Leaver ${who}`, email: `leaver-${who}-${memberSeq++}@client.test`, role: 'client', password: 'leaver-long-password' });
-      return { params: { userId: m.userId } };
+      // (A fixture: the app itself only adds people by invitation.)
+      const { memberships, users } = await import('@/db/schema');
+      const [u] = await fx.db.insert(users).values({ name: `Leaver ${who}`, email: `leaver-${who}-${memberSeq++}@client.test` }).returning({ id: users.id });
+      await fx.db.insert(memberships).values({ userId: u.id, studioId: fx.world.owner.studioId, role: 'client' });
+      return { params: { userId: u.id } };
     },
     expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
   },
