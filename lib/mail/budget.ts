@@ -39,8 +39,11 @@ export class MailBudgetSpent extends Error {
   }
 }
 
-/** Counts one mail against the sender's and the studio's budgets (and the invitee's), or throws. */
-export async function takeMailBudget(sender: MailSender, invitee?: string): Promise<void> {
+/**
+ * Counts one mail against the sender's and the studio's budgets (and the invitee's), or throws.
+ * Answers a function that gives the mail back (when the action it was for was refused).
+ */
+export async function takeMailBudget(sender: MailSender, invitee?: string): Promise<() => Promise<void>> {
   const keys: [string, ThrottleRule, MailBudgetSpent['scope']][] = [
     [throttleKey('mail-person', sender.userId), MAIL_BUDGETS.person, 'person'],
     [throttleKey('mail-studio', sender.studioId), MAIL_BUDGETS.studio, 'studio'],
@@ -55,12 +58,15 @@ export async function takeMailBudget(sender: MailSender, invitee?: string): Prom
     }
     taken.push(key);
   }
+  return async () => {
+    await Promise.all(taken.map(refund));
+  };
 }
 
 /** For routes whose whole point is a mail (invitations, resends): 429 before anything changes. */
-export async function requireMailBudget(sender: MailSender, invitee?: string): Promise<void> {
+export async function requireMailBudget(sender: MailSender, invitee?: string): Promise<() => Promise<void>> {
   try {
-    await takeMailBudget(sender, invitee);
+    return await takeMailBudget(sender, invitee);
   } catch (err) {
     if (err instanceof MailBudgetSpent) throw new HttpError(429, err.message, { retryAfter: err.retryAfterS });
     throw err;

@@ -12,8 +12,14 @@ import { requireMailBudget } from './budget';
 import { sendInvitation, type MailOutcome } from './notify';
 
 export async function inviteAndMail(req: Request, actor: Actor, input: NewInvitation): Promise<{ invitation: InvitationDto; mail: MailOutcome }> {
-  await requireMailBudget(actor, normaliseEmail(input.email));
-  const issued = await createInvitation(actor, input);
+  const giveBack = await requireMailBudget(actor, normaliseEmail(input.email));
+  let issued;
+  try {
+    issued = await createInvitation(actor, input);
+  } catch (err) {
+    await giveBack(); // refused (already a member, someone else's layout…): no mail went out
+    throw err;
+  }
   const mail = await sendInvitation(req, actor, issued);
   return { invitation: issued.invitation, mail };
 }

@@ -110,6 +110,32 @@ const CORE_ROWS: Row[] = [
     },
     expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
   },
+  // Changing one's own password: any signed-in person; a wrong current password is a 400 (the
+  // session's own password is left alone here so later rows keep their sessions).
+  {
+    route: '/api/account/password', method: 'POST',
+    request: () => ({ json: { currentPassword: 'not-the-current-one', newPassword: 'matrix-new-long-password' } }),
+    expect: { ...NOBODY, foreignClient: 400, client: 400, designer: 400, owner: 400, foreignOwner: 400 },
+  },
+  // Asking for a reset link: open to anyone, the same answer for every address.
+  {
+    route: '/api/password-reset', method: 'POST',
+    request: (_fx, who) => ({ json: { email: `reset-${who}@selfbuild.test` }, headers: { 'x-forwarded-for': `10.99.${memberSeq++ % 250}.1` } }),
+    expect: { anonymous: 202, viewer: 202, foreignClient: 202, client: 202, designer: 202, owner: 202, foreignOwner: 202 },
+  },
+  // Using a reset link: the token is the proof, whoever holds it (each cell a throwaway account).
+  {
+    route: '/api/password-reset/confirm', method: 'POST',
+    request: async (fx, who) => {
+      const { users } = await import('@/db/schema');
+      const { issuePasswordReset } = await import('@/db/password-resets');
+      const email = `resetter-${who}-${memberSeq++}@selfbuild.test`;
+      await fx.db.insert(users).values({ name: 'Resetter', email });
+      const issued = await issuePasswordReset(email);
+      return { json: { token: issued!.token, password: 'matrix-reset-long-password' } };
+    },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+  },
 ];
 
 export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS];

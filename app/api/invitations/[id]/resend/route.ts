@@ -11,8 +11,11 @@ type Ctx = { params: Promise<{ id: string }> };
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  await requireMailBudget(actor, (await getInvitation(actor, id)).email);
-  const issued = await renewInvitation(actor, id);
+  const giveBack = await requireMailBudget(actor, (await getInvitation(actor, id)).email);
+  const issued = await renewInvitation(actor, id).catch(async (err: unknown) => {
+    await giveBack(); // accepted or withdrawn meanwhile: no mail went out
+    throw err;
+  });
   const mail = await sendInvitation(req, actor, issued);
   return json({ invitation: issued.invitation, mail });
 });
