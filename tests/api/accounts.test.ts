@@ -83,8 +83,8 @@ describe('the decoded-session cache', () => {
   });
 
   it('refuses a token whose text was changed, even when the original is cached', async () => {
-    const [u] = await db.select().from(users).limit(1);
-    const [m] = await db.select().from(memberships).where(eq(memberships.userId, u.id));
+    const made = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Tamper Test', email: 'tamper@selfbuild.test', password: 'tamper-long-password' }, headers: { 'x-forwarded-for': '10.9.9.8' } });
+    const [{ u, m }] = await db.select({ u: users, m: memberships }).from(users).innerJoin(memberships, eq(memberships.userId, users.id)).where(eq(users.id, made.body.id));
     const cookie = await sessionCookie({ id: u.id, studioId: m.studioId, sessionVersion: u.sessionVersion });
     expect((await call(list.GET, { headers: { cookie } })).status).toBe(200);
     const last = cookie.at(-2) === 'A' ? 'B' : 'A';
