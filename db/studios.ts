@@ -6,7 +6,7 @@
  * (db/sharing/invitations.ts): nothing here creates an account or attaches one.
  */
 import 'server-only';
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { getDb } from './client';
 import { layouts, memberships, studios, users } from './schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from './errors';

@@ -8,7 +8,6 @@
  * The list ships inside the npm package: no network at run time. Must never log a password.
  */
 import 'server-only';
-import { z } from 'zod';
 import { dictionary } from '@zxcvbn-ts/language-common';
 import { passwordLengthSchema } from './password-rules';
 
