@@ -73,11 +73,23 @@ export const doorSchema = z.strictObject({
 });
 export type Door = z.infer<typeof doorSchema>;
 
+/**
+ * The one set of limits for the bay's size, used by the schema (so the API), the new-layout form
+ * and the editor's Bay panel alike. The upper bound keeps arithmetic sane and leaves room for the
+ * synthetic stress layouts of the benchmark; a bay longer than the vehicle's overall length is
+ * reported as out of range by the weight check.
+ */
+export const BAY_LIMITS = {
+  length: { min: 500, max: 100_000 },
+  width: { min: 500, max: 100_000 },
+  height: { min: 500, max: 100_000 },
+} as const;
+
 export const baySchema = z
   .strictObject({
-    length: mm().min(500, 'a bay is at least 500 mm long'),
-    width: mm().min(500, 'a bay is at least 500 mm wide'),
-    height: mm().min(500, 'a bay is at least 500 mm high'),
+    length: mm(BAY_LIMITS.length.max).min(BAY_LIMITS.length.min, `a bay is at least ${BAY_LIMITS.length.min} mm long`),
+    width: mm(BAY_LIMITS.width.max).min(BAY_LIMITS.width.min, `a bay is at least ${BAY_LIMITS.width.min} mm wide`),
+    height: mm(BAY_LIMITS.height.max).min(BAY_LIMITS.height.min, `a bay is at least ${BAY_LIMITS.height.min} mm high`),
     wheelArches: z.array(wheelArchSchema).max(8).default([]),
     doors: z.array(doorSchema).max(12).default([]),
     bulkhead: z.boolean().default(true),

@@ -42,6 +42,11 @@ export const FRONT_SHARE_SOURCE = 'Reg. (EU) No 1230/2012 Annex I Part A point 2
 const WEIGHT_SOURCE = 'Maximum masses from the vehicle plate or certificate of conformity (Reg. (EU) No 1230/2012)';
 const LEVER_SOURCE = `${WEIGHT_SOURCE}; lever rule — moments about the front axle (statics)`;
 
+/** kg with a decimal only where there is one: 80 kg, 89.9 kg. */
+function kgNum(n: number): string {
+  return num(n, Math.abs(n - Math.round(n)) < 0.05 ? 0 : 1);
+}
+
 function cap(s: string): string {
   return s.charAt(0).toUpperCase() + s.slice(1);
 }
@@ -91,6 +96,9 @@ export function massChecks(doc: LayoutDoc): Finding[] {
   if (ordered.length) out.push(missingInputs('mass.input', 'Weight and axle loads', ordered, 8, 'Vehicle data from the plate, the certificate of conformity or a weighbridge ticket'));
   for (const conflict of r.conflicts) {
     out.push({ id: 'mass.input', status: 'warn', measured: 0, required: 1, unit: 'inputs in range', message: `The weight inputs contradict each other: ${conflict}. Correct them on the weight tab; until then the figures below are not to be trusted.`, source: 'Vehicle data from the plate, the certificate of conformity or a weighbridge ticket' });
+  }
+  if (v.overallLengthMm !== undefined && doc.bay.length > v.overallLengthMm) {
+    out.push({ id: 'mass.input', status: 'warn', measured: doc.bay.length, required: v.overallLengthMm, unit: 'mm', message: `The bay is drawn ${num(doc.bay.length)} mm long, longer than the whole vehicle (${num(v.overallLengthMm)} mm overall): one of the two is out of range, so the axle loads below cannot be trusted. Correct the bay length in the editor or the overall length on the weight tab.`, source: 'Layout geometry against the vehicle data (no outside source)' });
   }
   const assumed = r.assumptions.length ? ` Assumed: ${r.assumptions.join('; ')}.` : '';
 
@@ -165,7 +173,7 @@ export function massChecks(doc: LayoutDoc): Finding[] {
       measured: round(available, 1),
       required: round(need, 1),
       unit: 'kg',
-      message: `User payload left: ${num(available)} kg (maximum authorised mass less the van as built, ${num(r.builtKg)} kg). Needed for ${r.seats} ${r.seats === 1 ? 'person' : 'persons'} and ${num(r.lengthM, 2)} m overall: ${passengers(r.seats - 1)} at ${OCCUPANT_KG} kg (the driver is in the mass in running order) plus personal effects of 10 kg × ${r.seats} + 10 kg × ${num(r.lengthM, 2)} = ${num(effects, 1)} kg, so ${num(need, 1)} kg${available < need ? `: ${num(need - available, 1)} kg short` : ''}.`,
+      message: `User payload left: ${num(available)} kg (maximum authorised mass less the van as built, ${num(r.builtKg)} kg). Needed for ${r.seats} ${r.seats === 1 ? 'person' : 'persons'} and ${num(r.lengthM, 2)} m overall: ${passengers(r.seats - 1)} at ${OCCUPANT_KG} kg (the driver is in the mass in running order) plus personal effects of 10 kg × ${r.seats} + 10 kg × ${num(r.lengthM, 2)} = ${kgNum(effects)} kg, so ${kgNum(need)} kg${available < need ? `: ${kgNum(need - available)} kg short` : ''}.`,
       source: PAYLOAD_SOURCE,
     });
   }
