@@ -177,6 +177,7 @@ describe('a layout with very many findings', () => {
 describe('mass and balance on the sheet', () => {
   it('prints the weight tab’s mass-and-balance table: heading, the vehicle row and the laden total', () => {
     const r = composeSheet(request());
+    if (!r.ok) throw new Error(r.message);
     const all = r.sheet.pages.flatMap(textsOf).join('\n');
     expect(all).toMatch(/Mass and balance/);
     expect(all).toMatch(/Vehicle in running order \(driver included\)/);
