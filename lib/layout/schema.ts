@@ -136,22 +136,32 @@ export const modulePropsSchema = z
   .record(z.string().max(40).regex(/^[A-Za-z][A-Za-z0-9]*$/, 'prop names are letters and digits'), z.union([z.number().finite(), z.boolean(), text(200)]))
   .refine((r) => Object.keys(r).length <= 32, 'at most 32 props');
 
+/** The one set of limits for a module's place and size, used by the schema and the Details panel. */
+export const MODULE_LIMITS = {
+  position: { min: -100_000, max: 100_000 },
+  length: { min: 1, max: 100_000 },
+  width: { min: 1, max: 100_000 },
+  elevation: { min: 0, max: 5000 },
+  height: { min: 1, max: 5000 },
+  massKg: { min: 0, max: 5000 },
+} as const;
+
 export const moduleSchema = z.strictObject({
   id,
   kind: moduleKindSchema,
   label: text(80).optional(),
-  x: mmSigned(),
-  y: mmSigned(),
-  length: mm().min(1, 'a module has a length'),
-  width: mm().min(1, 'a module has a width'),
+  x: mmSigned(MODULE_LIMITS.position.max),
+  y: mmSigned(MODULE_LIMITS.position.max),
+  length: mm(MODULE_LIMITS.length.max).min(MODULE_LIMITS.length.min, 'a module has a length'),
+  width: mm(MODULE_LIMITS.width.max).min(MODULE_LIMITS.width.min, 'a module has a width'),
   /** Underside above the FINISHED floor. */
-  elevation: mm(5000),
-  height: mm(5000).min(1, 'a module has a height'),
+  elevation: mm(MODULE_LIMITS.elevation.max),
+  height: mm(MODULE_LIMITS.height.max).min(MODULE_LIMITS.height.min, 'a module has a height'),
   facing: z.enum(FACINGS),
   arrangements: z.array(arrangementSchema).min(1, 'a module exists in at least one arrangement').max(3)
     .refine((a) => new Set(a).size === a.length, 'each arrangement once'),
   surface: z.enum(SURFACES).optional(),
-  massKg: z.number().finite().min(0).max(5000).optional(),
+  massKg: z.number().finite().min(MODULE_LIMITS.massKg.min).max(MODULE_LIMITS.massKg.max).optional(),
   props: modulePropsSchema.optional(),
 });
 export type Module = z.infer<typeof moduleSchema>;
