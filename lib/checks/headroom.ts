@@ -27,6 +27,18 @@ export function headroomStanding(ctx: CheckContext): Finding {
   const standing = ctx.doc.occupants.standingHeight;
   const wanted = standing + headMargin;
   const clear = clearHeadroom(ctx);
+  if (clear <= 0) {
+    // No clear height at all is not a headroom figure but an input out of range: say so.
+    return {
+      id: 'headroom.standing',
+      status: 'fail',
+      measured: Math.max(0, clear),
+      required: wanted,
+      unit: 'mm',
+      message: `The floor and roof build-up (${mm(ctx.t.floorT)} + ${mm(ctx.t.roofT)}) is as thick as the ${mm(ctx.doc.bay.height)} bay is high or thicker, which cannot be: an input is out of range. Check the bay height and the build-up layers. ${SOURCES.headroom.brief}.`,
+      source: SOURCES.headroom.cite,
+    };
+  }
   const status = clear < standing ? 'fail' : clear < wanted ? 'warn' : 'pass';
   const verdict =
     status === 'pass'

@@ -49,6 +49,15 @@ describe('headroom.standing', () => {
   });
 });
 
+describe('headroom.standing out of range', () => {
+  it('a build-up thicker than the bay is high is reported as an input out of range, never as a negative height', () => {
+    const doc = l2h2Doc({ buildUp: { floor: [{ material: 'Ply', thickness: 1000 }], roof: [{ material: 'PIR board', thickness: 1000 }], walls: [] } });
+    const f = only(doc, 'headroom.standing');
+    expect(f).toMatchObject({ status: 'fail', measured: 0 });
+    expect(f.message).toMatch(/an input is out of range/);
+  });
+});
+
 describe('headroom.overhead', () => {
   // Box bay, no build-up: counter along the left (y 0..600) facing right, so the walkway centres run at y ≥ 825.
   const counter = mod({ id: 'counter', kind: 'kitchen-counter', x: 0, y: 0, length: 2000, width: 600 });
