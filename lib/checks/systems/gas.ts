@@ -30,7 +30,7 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
         { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: { label: 'Carbon-monoxide alarm fitted', where: 'gas' } },
         { done: doc.systems?.alarms?.lpg, text: 'LPG alarm near the floor', field: { label: 'LPG alarm fitted near the floor', where: 'gas' } },
       ],
-      `Gas is aboard (${[...inv.appliances.map((a) => a.name), ...inv.lockers.map((l) => l.label?.trim() || 'gas locker')].join(', ')}): the installation must be installed and tested by a qualified gas engineer under local codes (EN 1949 in Europe), with a carbon-monoxide alarm and an LPG alarm. Never sleep with a flueless appliance burning.`,
+      `Gas is aboard (${[...inv.appliances.map((a) => doc.modules.find((m) => m.id === a.moduleId)!), ...inv.lockers].map(moduleRef).join(', ')}): the installation must be installed and tested by a qualified gas engineer under local codes (EN 1949 in Europe), with a carbon-monoxide alarm and an LPG alarm. Never sleep with a flueless appliance burning.`,
       'EN 1949 (LPG installations in leisure accommodation vehicles); local gas-safety law',
       [...inv.appliances.map((a) => a.moduleId), ...inv.lockers.map((l) => l.id)],
     ));
