@@ -48,10 +48,17 @@ class LongFirst extends BaseSequencer {
 export default defineConfig({
   resolve: {
     tsconfigPaths: true,
-    alias: { 'server-only': path.resolve(import.meta.dirname, 'tests/setup/server-only.ts') },
+    alias: {
+      'server-only': path.resolve(import.meta.dirname, 'tests/setup/server-only.ts'),
+      // next-auth imports `next/server` without an extension, which Node's ESM resolver refuses
+      // outside Next; the Auth.js route is tested in-process (tests/api/sessions.test.ts).
+      'next/server': 'next/server.js',
+    },
   },
   test: {
     environment: 'node',
+    // Transformed by vite so the `next/server` alias above reaches it.
+    server: { deps: { inline: ['next-auth'] } },
     // Two workers on two cores; PGlite instances are heavy.
     maxWorkers: 2,
     testTimeout: 20_000,

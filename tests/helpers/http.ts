@@ -10,6 +10,8 @@ export interface SessionUser {
   studioId: string;
   role?: 'owner' | 'designer' | 'client';
   sessionVersion?: number;
+  /** When the session signed in (seconds); now by default. */
+  signedInAt?: number;
 }
 
 // Minting a cookie costs a key derivation and an encryption; a test file asks for the same few
@@ -32,7 +34,7 @@ export function sessionCookie(user: SessionUser): Promise<string> {
 async function mintSessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
-    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sub: user.id },
+    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sat: user.signedInAt ?? Math.floor(Date.now() / 1000), sub: user.id },
     secret: authSecret(),
     salt: name,
     maxAge: SESSION_MAX_AGE_S,
