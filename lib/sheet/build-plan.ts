@@ -6,15 +6,16 @@
  */
 import type { LayoutDoc } from '../layout';
 import { buildPlanSummary } from '../planning/summary';
+import { NOT_YET_CHECKED, STATUS_WORDS } from '../checks/words';
 import type { ColumnFlow } from './flow';
 import { TYPE } from './drafting';
 import type { Ink, SheetItem } from './primitives';
 import { lineHeight, wrap } from './typography';
 
 const STATE: Record<'ok' | 'attention' | 'unknown', { word: string; ink: Ink }> = {
-  ok: { word: 'OK', ink: 'moss' },
-  attention: { word: 'CHECK', ink: 'brick' },
-  unknown: { word: 'NOT KNOWN', ink: 'soft' },
+  ok: { word: `+ ${STATUS_WORDS.pass.word}`, ink: 'moss' },
+  attention: { word: `! ${STATUS_WORDS.warn.word}`, ink: 'brick' },
+  unknown: { word: `? ${NOT_YET_CHECKED}`, ink: 'soft' },
 };
 
 export function flowBuildPlan(flow: ColumnFlow, doc: LayoutDoc): void {
@@ -31,6 +32,6 @@ export function flowBuildPlan(flow: ColumnFlow, doc: LayoutDoc): void {
       return items;
     });
   }
-  const note = wrap('Planning figures from the layout and the entered vehicle data (lever rule, EN 1646-2 payload, energy balance with PVWatts default losses, NZS 5465 water days — as cited in the build plan). Weigh the finished van.', TYPE.small, flow.columnWidth);
+  const note = wrap('Planning figures from the layout and the entered vehicle data (lever rule, EN 1646-2 payload, daily energy balance, NZS 5465 water days — sources beside each figure in the build plan). Weigh the finished van.', TYPE.small, flow.columnWidth);
   flow.place(lineHeight(TYPE.small) * note.length + 1, (x, y) => note.map((t, i) => ({ type: 'text', x, y: y + lineHeight(TYPE.small) * (i + 1), text: t, size: TYPE.small, ink: 'soft' })));
 }
