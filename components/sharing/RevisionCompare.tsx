@@ -11,14 +11,15 @@ import { useQuery } from '@tanstack/react-query';
 import { ArrowDownRight, ArrowUpRight, Minus, MoveRight, Plus, Scaling } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import { ARRANGEMENTS, type Arrangement, type Module } from '@/lib/layout/schema';
-import { KINDS } from '@/lib/layout/kinds';
 import type { ComparisonDto } from '@/db/sharing/compare';
 import { RevisionPlanSvg } from './RevisionPlanSvg';
 import { StatusInline } from '@/components/checks/FindingParts';
 import { ruleName } from '@/lib/checks/words';
+import { moduleLabel } from '@/lib/layout/kinds';
+import { fieldName } from '@/lib/layout/field-names';
 
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
-const name = (m: Module) => m.label ?? KINDS[m.kind].title;
+const name = (m: Module) => moduleLabel(m);
 const signed = (n: number) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${Math.abs(n)} mm`;
 
 function Status({ s, side }: { s: 'pass' | 'warn' | 'fail' | null; side: 'before' | 'after' }) {
@@ -92,7 +93,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                             {c.moved && c.resized && ' · '}
                             {c.resized && `${c.before.length} × ${c.before.width} × ${c.before.height} → ${c.after.length} × ${c.after.width} × ${c.after.height} mm`}
                           </span>
-                          {c.other.length > 0 && <span className="block text-xs text-ink-soft">also changed: {c.other.join(', ')}</span>}
+                          {c.other.length > 0 && <span className="block text-xs text-ink-soft">also changed: {c.other.map((f) => fieldName(f).toLowerCase()).join(', ')}</span>}
                         </span>
                       </li>
                     ))}
@@ -102,7 +103,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                   <>
                     <h3 className="mb-1 mt-3 font-medium">Bay</h3>
                     <ul className="space-y-0.5 text-xs">
-                      {q.data.diff.bay.map((b) => <li key={b.field}>{b.field}: <span className="font-mono">{b.before} → {b.after}</span></li>)}
+                      {q.data.diff.bay.map((b) => <li key={b.field}>{fieldName(`bay.${b.field}`)}: <span className="font-mono">{b.before} → {b.after}</span></li>)}
                     </ul>
                   </>
                 )}

@@ -35,7 +35,7 @@ const NAMES: Record<string, string> = {
   cylindersSecured: 'Cylinders secured', ventAtFloor: 'Vent at the floor', co: 'Carbon-monoxide alarm', lpg: 'LPG alarm',
   rcd: 'RCD protection', installedByElectrician: 'Installed by a qualified electrician',
   uValue: 'U-value', areaM2: 'Area', deltaK: 'Temperature difference', airChangesPerHour: 'Air changes an hour',
-  note: 'Note', name: 'Layout name',
+  note: 'Note', name: 'Layout name', buildUp: 'Build-up', occupants: 'Occupants',
 };
 
 /** The on-screen name of a field given its path (`occupants.standingHeight`, `modules.3.x`, `bay.length`). */

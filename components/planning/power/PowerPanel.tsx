@@ -17,6 +17,7 @@ import { shown } from '../quantities';
 import { useSectionForm } from '../useSectionForm';
 import { powerDefaults, powerSchema, powerSystems } from './powerForm';
 import { PowerResults } from './PowerResults';
+import { moduleLabel } from '@/lib/layout/kinds';
 
 export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: PanelProps) {
   const uid = useId();
@@ -67,7 +68,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             <legend className="px-1 text-sm font-semibold">12 V loads</legend>
             <CheckField
               reg={r('includeModuleLoads')}
-              label={`Count the drawn appliances' own draw${moduleLoads.length ? ` (${moduleLoads.map((m) => m.label ?? m.kind).join(', ')})` : ''}`}
+              label={`Count the drawn appliances' own draw${moduleLoads.length ? ` (${moduleLoads.map((m) => moduleLabel(m)).join(', ')})` : ''}`}
               hint="modules with watts and a duty cycle in their details, such as a compressor fridge"
             />
             <div className="mt-3 space-y-2">
