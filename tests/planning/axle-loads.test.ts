@@ -4,21 +4,21 @@ import { computeAxleLoads, leverSplit, leverPosition } from '@/lib/planning';
 import { baseDoc, VAN, withModules, withSystems } from './fixtures';
 
 describe('leverSplit (moments about the front axle)', () => {
-  it('hand-worked lever case: 100 kg at 2.8 m behind the front axle, wheelbase 3.665 m → rear 76.40 kg, front 23.60 kg', () => {
-    const s = leverSplit(100, 2800, 3665);
-    expect(s.rearKg).toBeCloseTo(76.4, 2);
-    expect(s.frontKg).toBeCloseTo(23.6, 2);
+  it('hand-worked lever case: 100 kg at 2.8 m behind the front axle, wheelbase 3.7 m → rear 2800/3700 × 100 = 75.68 kg, front 24.32 kg', () => {
+    const s = leverSplit(100, 2800, 3700);
+    expect(s.rearKg).toBeCloseTo(75.68, 2);
+    expect(s.frontKg).toBeCloseTo(24.32, 2);
   });
 
-  it('hand-worked case behind the rear axle: 30 kg at 4.5 m lightens the front by 6.83 kg', () => {
-    const s = leverSplit(30, 4500, 3665);
-    expect(s.frontKg).toBeCloseTo(-6.83, 2);
-    expect(s.rearKg).toBeCloseTo(36.83, 2);
+  it('hand-worked case behind the rear axle: 30 kg at 4.5 m lightens the front by 30 × 4500/3700 − 30 = 6.49 kg', () => {
+    const s = leverSplit(30, 4500, 3700);
+    expect(s.frontKg).toBeCloseTo(-6.49, 2);
+    expect(s.rearKg).toBeCloseTo(36.49, 2);
   });
 
   it('a load ahead of the front axle lightens the rear', () => {
-    expect(leverSplit(50, -500, 3665).rearKg).toBeLessThan(0);
-    expect(leverSplit(50, -500, 3665).frontKg).toBeGreaterThan(50);
+    expect(leverSplit(50, -500, 3700).rearKg).toBeLessThan(0);
+    expect(leverSplit(50, -500, 3700).frontKg).toBeGreaterThan(50);
   });
 
   it('rejects a zero wheelbase and non-finite input with a clear error', () => {
@@ -48,15 +48,15 @@ describe('computeAxleLoads', () => {
     expect(r.axles!.frontKg).toBeCloseTo(1250, 6);
     expect(r.axles!.rearKg).toBeCloseTo(950, 6);
     // Centre of mass: 950/2200 of the wheelbase behind the front axle.
-    expect(r.centreOfMass!.x).toBeCloseTo(-800 + (950 / 2200) * 3665, 6);
+    expect(r.centreOfMass!.x).toBeCloseTo(-800 + (950 / 2200) * 3700, 6);
   });
 
   it('adds a module by the lever rule, its own massKg overriding the kind default', () => {
     // A 100 kg module centred 2.8 m behind the front axle: centre x = 2000, front axle at −800.
     const doc = withSystems(withModules(baseDoc(), [{ id: 'box', kind: 'drawer-unit', x: 1750, length: 500, massKg: 100 }]), { vehicle: VAN, load: { personalEffectsKg: 0, travellers: 1 } });
     const r = computeAxleLoads(doc);
-    expect(r.axles!.rearKg - 950).toBeCloseTo(76.4, 1);
-    expect(r.axles!.frontKg - 1250).toBeCloseTo(23.6, 1);
+    expect(r.axles!.rearKg - 950).toBeCloseTo(75.68, 1);
+    expect(r.axles!.frontKg - 1250).toBeCloseTo(24.32, 1);
     const item = r.items.find((i) => i.id === 'module:box')!;
     expect(item.massKg).toBe(100);
   });
@@ -79,7 +79,7 @@ describe('computeAxleLoads', () => {
     expect(r.seats).toBe(3); // two cab seats + one belted travel seat
     expect(r.items.filter((i) => i.group === 'occupant')).toHaveLength(2);
     const effects = r.items.find((i) => i.group === 'effects')!;
-    expect(effects.massKg).toBeCloseTo(10 * 3 + 10 * 5.99 + 30, 6);
+    expect(effects.massKg).toBeCloseTo(10 * 3 + 10 * 6.0 + 30, 6);
     expect(r.totalKg).toBeCloseTo(2200 + 30 + 150 + effects.massKg, 6);
     expect(r.builtKg).toBeCloseTo(2230, 6);
   });
@@ -87,8 +87,8 @@ describe('computeAxleLoads', () => {
   it('a bike rack behind the rear axle lightens the front axle', () => {
     const without = computeAxleLoads(withSystems(baseDoc(), { vehicle: VAN, load: { personalEffectsKg: 0, travellers: 1 } }));
     const withRack = computeAxleLoads(withSystems(baseDoc(), { vehicle: VAN, load: { personalEffectsKg: 0, travellers: 1, items: [{ id: 'bikes', label: 'Two bikes on rack', massKg: 30, x: 3700 }] } }));
-    // 30 kg at 4.5 m behind the front axle (x = 3700, axle at −800): front −6.83 kg.
-    expect(withRack.axles!.frontKg - without.axles!.frontKg).toBeCloseTo(-6.83, 2);
+    // 30 kg at 4.5 m behind the front axle (x = 3700, axle at −800), wheelbase 3.7 m: front −6.49 kg.
+    expect(withRack.axles!.frontKg - without.axles!.frontKg).toBeCloseTo(-6.49, 2);
   });
 
   it('names what is missing instead of failing when vehicle data is absent', () => {

@@ -1,7 +1,7 @@
 'use client';
 /**
  * Power: the 12 V system's inputs — battery by chemistry (with its usable depth of discharge),
- * loads with presets, solar (PVWatts default losses), alternator and hook-up charging, 230 V,
+ * loads with presets, solar (default system losses), alternator and hook-up charging, 230 V,
  * circuits — beside the results (PowerResults) and the `power.*` findings. Edits only
  * `systems.power`, through the page's onSystems.
  */
@@ -103,7 +103,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             </div>
           </fieldset>
 
-          <FieldGroup title="Charging" note={`Solar losses default to the PVWatts default, ${PVWATTS_DEFAULT_LOSSES_PCT.toFixed(2)} % (NREL PVWatts, as documented for pvlib; secondary). Peak sun hours for your region, e.g. from PVGIS.`}>
+          <FieldGroup title="Charging" note={`Solar losses default to ${PVWATTS_DEFAULT_LOSSES_PCT.toFixed(2)} %, the ten default system losses of a national laboratory's published technical report (NREL/TP-6A20-62641, 2014) taken together. Peak sun hours: the daily irradiation on the panel for your region and season, from a published solar irradiation map or dataset.`}>
             <QuantityField label="Solar panels" unit="W" reg={r('solarWatts')} error={e.solarWatts} />
             <QuantityField label="Sun, summer" unit="h/day" reg={r('pshSummer')} error={e.pshSummer} />
             <QuantityField label="Sun, spring/autumn" unit="h/day" reg={r('pshShoulder')} error={e.pshShoulder} />
