@@ -53,7 +53,7 @@ export const RULE_NAMES: Record<string, string> = {
   'clearance.exhaust': 'Clear of the heater exhaust',
   'clearance.gas-vent': 'Clear of the gas vent',
   'mass.input': 'Vehicle masses',
-  'mass.total': 'Gross vehicle weight',
+  'mass.total': 'Maximum authorised mass',
   'mass.front-axle': 'Front axle load',
   'mass.rear-axle': 'Rear axle load',
   'mass.payload': 'User payload',
