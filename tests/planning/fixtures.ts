@@ -20,7 +20,7 @@ export function withSystems(doc: LayoutDoc, systems: NonNullable<LayoutDocInput[
   return layoutDocSchema.parse({ ...doc, systems });
 }
 
-/** Invented vehicle data, rounded class-typical values: 2200 kg running order (1250 kg front), 3500 kg max, 3700 mm wheelbase. */
+/** Invented vehicle data in round class-typical figures: 2200 kg running order (1250 kg front), 3500 kg max, 3700 mm wheelbase, 6.0 m overall. */
 export const VAN = {
   massInRunningOrderKg: 2200,
   frontAxleRunningOrderKg: 1250,
