@@ -15,6 +15,7 @@ import { PlanStage } from './canvas/PlanStage';
 import { PartsShelf } from './panels/PartsShelf';
 import { DetailsPanel } from './panels/DetailsPanel';
 import { ChecksPanel } from './panels/ChecksPanel';
+import { foldWaiting, statusCounts } from '@/lib/checks/words';
 import { Toolbar } from './panels/Toolbar';
 import { Tabs } from './panels/Tabs';
 import { ContextMenu } from './panels/ContextMenu';
@@ -57,7 +58,8 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
 
   const findings = useMemo(() => checks.report?.findings ?? [], [checks.report]);
   const failing = useMemo(() => failingModuleIds(findings, arrangement), [findings, arrangement]);
-  const counts = countByStatus(findings);
+  const folded = useMemo(() => foldWaiting(findings), [findings]);
+  const counts = countByStatus(folded.judged);
   const openMenu = useCallback((x: number, y: number) => setMenu({ x, y }), []);
   const closeMenu = useCallback(() => setMenu(null), []);
   const focusPlan = useCallback(() => planBox.current?.querySelector<HTMLElement>('[data-testid="plan"]')?.focus(), []);
@@ -90,11 +92,11 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
             active={bottom}
             onChange={setBottom}
             tabs={[
-              { id: 'checks', title: checks.report ? `Checks: ${counts.fail} fail, ${counts.warn} warn, ${counts.pass} pass` : 'Checks', label: checksTab },
+              { id: 'checks', title: checks.report ? `Checks: ${statusCounts(counts, folded.waiting)}` : 'Checks', label: checksTab },
               { id: 'section', title: 'Side section', label: 'Side section' },
             ]}
           >
-            {bottom === 'checks' ? <ChecksPanel checks={checks} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
+            {bottom === 'checks' ? <ChecksPanel checks={checks} layoutId={canEdit ? layoutId : undefined} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
           </Tabs>
         </main>
         <aside className="flex w-80 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Details and bay">

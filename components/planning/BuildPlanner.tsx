@@ -25,6 +25,9 @@ import { PlanTabs } from './PlanTabs';
 import { saveLayoutDoc, stableJson, withSystems, type SaveOutcome } from './saveLayout';
 import type { PanelProps } from './panelProps';
 import { BUILD_TABS, type BuildTab } from './buildTabs';
+import { ShowTabContext } from './FindingList';
+import { foldWaiting, statusCounts } from '@/lib/checks/words';
+import { fieldName } from '@/lib/layout/field-names';
 
 
 const TOPIC: Record<BuildTab, { title: string; prefix?: string }> = {
@@ -53,7 +56,7 @@ type Conflict = Extract<SaveOutcome, { kind: 'conflict' }>['theirs'];
 const noSubscription = () => () => undefined;
 
 function counts(findings: Finding[], prefix: string) {
-  const mine = findings.filter((f) => f.id.startsWith(prefix));
+  const mine = foldWaiting(findings.filter((f) => f.id.startsWith(prefix))).judged;
   return { fail: mine.filter((f) => f.status === 'fail').length, warn: mine.filter((f) => f.status === 'warn').length };
 }
 
@@ -137,7 +140,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
     const c = TOPIC[t].prefix ? counts(findings, TOPIC[t].prefix!) : null;
     return {
       id: t,
-      title: `${TOPIC[t].title}${c ? `: ${c.fail} failing, ${c.warn} to look at` : ''}${invalid.has(t) ? ', has a field to correct' : ''}`,
+      title: `${TOPIC[t].title}${c ? `: ${statusCounts({ ...c, pass: 0 })}` : ''}${invalid.has(t) ? ', has a field to correct' : ''}`,
       label: (
         <span className="flex items-center gap-1.5">
           {TOPIC[t].title}
@@ -175,9 +178,10 @@ export function BuildPlanner(props: BuildPlannerProps) {
       {refused && (
         <div role="alert" className="rounded-sm border border-brick bg-brick-light p-3 text-sm">
           <p className="font-semibold">{refused.message}</p>
-          <ul className="mt-1 list-disc pl-5 font-mono text-xs">{refused.issues.map((i, n) => <li key={n}>{i.path}: {i.message}</li>)}</ul>
+          <ul className="mt-1 list-disc pl-5 text-xs">{refused.issues.map((i, n) => <li key={n}>{fieldName(i.path)}: {i.message}</li>)}</ul>
         </div>
       )}
+      <ShowTabContext.Provider value={setTab}>
       <PlanTabs tabs={tabs} active={tab} onChange={(t) => setTab(t as BuildTab)}>
         <div className="p-4" key={formKey}>
           {/* Forms stay mounted (hidden) so a half-typed field survives a tab change. */}
@@ -191,6 +195,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
             : <p className="text-sm">Your workshop&apos;s quote for this layout is on <a className="text-copper underline" href={`/layouts/${layoutId}/quote`}>the quote page</a>.</p>)}
         </div>
       </PlanTabs>
+      </ShowTabContext.Provider>
     </div>
   );
 }

@@ -87,8 +87,8 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
       <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to import"
         onChange={(e) => e.target.files?.[0] && importFile(e.target.files[0])} />
       <Dialog open={problems !== null} title="This file is not a layout Baywright can read" onClose={() => setProblems(null)} testId="import-problems">
-        <p className="mb-2 text-sm">{problems?.file} has these problems (field path: what is wrong):</p>
-        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 font-mono text-xs">
+        <p className="mb-2 text-sm">{problems?.file} has these problems (field: what is wrong):</p>
+        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 text-xs">
           {problems?.lines.map((l, i) => <li key={i}>{l}</li>)}
         </ul>
         <button type="button" className="btn-primary" onClick={() => setProblems(null)}>Close</button>

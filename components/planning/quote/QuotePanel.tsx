@@ -23,6 +23,7 @@ import { parseWithUnit } from '../quantities';
 import { usePriceList } from '../usePriceList';
 import type { CutOptions } from '../cut/CutListPanel';
 import { QuoteStatus } from './QuoteView';
+import { formatDateTime } from '@/lib/format';
 
 const schema = z.object({
   depositPct: z.string().transform((s, ctx) => {
@@ -96,8 +97,8 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
               : (
                 <div className="space-y-2 text-sm">
                   <QuoteStatus quote={q} />
-                  <p>Total <span className="font-mono">{formatMoney(q.grossMinor, q.currency)}</span>, deposit {q.depositPct} % <span className="font-mono">{formatMoney(q.depositMinor, q.currency)}</span>; sent by {q.sentByName} on {new Date(q.sentAt).toLocaleString('en-GB')}.</p>
-                  {q.paidAt && <p>Paid on {new Date(q.paidAt).toLocaleString('en-GB')}{q.receiptTo ? `; receipt sent to ${q.receiptTo}` : ''}.</p>}
+                  <p>Total <span className="font-mono">{formatMoney(q.grossMinor, q.currency)}</span>, deposit {q.depositPct} % <span className="font-mono">{formatMoney(q.depositMinor, q.currency)}</span>; sent by {q.sentByName} on {formatDateTime(q.sentAt)}.</p>
+                  {q.paidAt && <p>Paid on {formatDateTime(q.paidAt)}{q.receiptTo ? `; receipt sent to ${q.receiptTo}` : ''}.</p>}
                 </div>
               )}
         <Link className="inline-flex items-center gap-1 text-sm text-copper underline" href={`/layouts/${layoutId}/quote`}>

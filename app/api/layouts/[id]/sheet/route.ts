@@ -1,6 +1,7 @@
 import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { composeSheet, renderPdf } from '@/lib/sheet';
+import { sheetFonts } from '@/lib/api/sheet-fonts';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
 import { getLayout } from '@/db/layouts';
 import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
@@ -35,7 +36,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
   const ctx = await sheetRequestFor(actor, id, q.revision);
   const result = composeSheet({ ...ctx.request, paper: q.paper, scale: q.scale });
   if (!result.ok) throw new HttpError(422, result.message, { suggestion: result.suggestion, needed: result.needed, available: result.available });
-  const bytes = await renderPdf(result.sheet, { author: ctx.request.details.studio });
+  const bytes = await renderPdf(result.sheet, { author: ctx.request.details.studio, fonts: await sheetFonts() });
   return new Response(Buffer.from(bytes), {
     status: 200,
     headers: {

@@ -15,6 +15,7 @@ import { runChecks } from '@/lib/checks';
 import type { CheckReport } from '@/lib/checks/types';
 import type { LayoutDoc } from '@/lib/layout';
 import { REVISION_LETTER, type SheetRequest } from '@/lib/sheet';
+import { formatDate } from '@/lib/format';
 
 /** `?paper=a4|a3&scale=10|20|25`; both optional (A4 at 1:20). */
 export const sheetQuerySchema = z.strictObject({
@@ -43,7 +44,7 @@ export interface SheetContext {
 }
 
 export function today(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
+  return formatDate(now);
 }
 
 /** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
