@@ -2,7 +2,7 @@
 // The studio's members and roles; the owner adds designers and clients and changes roles.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
@@ -11,10 +11,10 @@ import type { MemberDto } from '@/db/studios';
 const ROLE_WORD = { owner: 'Owner', designer: 'Designer', client: 'Client' } as const;
 
 const addSchema = z.object({
-  name: z.string().trim().min(1, 'give their name').max(80),
+  name: z.string().check(z.trim(), z.minLength(1, 'give their name'), z.maxLength(80)),
   email: z.email('enter a valid e-mail address'),
   role: z.enum(['designer', 'client']),
-  password: z.string().refine((p) => p === '' || p.length >= 12, 'at least 12 characters, or leave empty for an existing account'),
+  password: z.string().check(z.refine((p) => p === '' || p.length >= 12, 'at least 12 characters, or leave empty for an existing account')),
 });
 type AddValues = z.infer<typeof addSchema>;
 

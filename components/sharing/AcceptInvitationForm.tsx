@@ -9,17 +9,17 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 
 const schema = z
   .object({
-    name: z.string().trim().min(1, 'tell us your name').max(80),
-    password: z.string().min(12, 'use at least 12 characters').refine((p) => new TextEncoder().encode(p).length <= 72, 'use at most 72 bytes'),
+    name: z.string().check(z.trim(), z.minLength(1, 'tell us your name'), z.maxLength(80)),
+    password: z.string().check(z.minLength(12, 'use at least 12 characters'), z.refine((p) => new TextEncoder().encode(p).length <= 72, 'use at most 72 bytes')),
     repeat: z.string(),
   })
-  .refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] });
+  .check(z.refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] }));
 type Values = z.infer<typeof schema>;
 
 export function AcceptInvitationForm({ token, email, name }: { token: string; email: string; name: string }) {

@@ -8,6 +8,9 @@
  */
 import { z } from 'zod';
 import { systemsSchema } from './systems';
+import { ARRANGEMENTS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, SURFACES } from './vocabulary';
+
+export { ARRANGEMENTS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, SURFACES };
 
 /** An integer length in millimetres. Bounded so no arithmetic can overflow into nonsense. */
 const mm = (max = 100_000) => z.number().int('must be a whole number of millimetres').min(0).max(max);
@@ -19,38 +22,13 @@ export const plainText = (max: number) =>
   z.string().max(max).refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'control characters are not allowed');
 const text = plainText;
 
-export const ARRANGEMENTS = ['travel', 'lounge', 'sleep'] as const;
 export type Arrangement = (typeof ARRANGEMENTS)[number];
 export const arrangementSchema = z.enum(ARRANGEMENTS);
 
-export const FACINGS = ['front', 'rear', 'left', 'right'] as const;
 export type Facing = (typeof FACINGS)[number];
 
-export const SURFACES = ['sleep', 'seat', 'counter'] as const;
 export type Surface = (typeof SURFACES)[number];
 
-export const MODULE_KINDS = [
-  'bed-platform',
-  'bed-infill',
-  'bench-seat',
-  'seat',
-  'table',
-  'kitchen-counter',
-  'sink-unit',
-  'hob',
-  'fridge',
-  'wardrobe',
-  'drawer-unit',
-  'overhead-locker',
-  'fresh-water-tank',
-  'grey-water-tank',
-  'gas-locker',
-  'electrics-bay',
-  'heater',
-  'toilet-cabinet',
-  'shower-tray',
-  'step',
-] as const;
 export type ModuleKind = (typeof MODULE_KINDS)[number];
 export const moduleKindSchema = z.enum(MODULE_KINDS);
 
@@ -144,7 +122,6 @@ export const moduleSchema = z.strictObject({
 });
 export type Module = z.infer<typeof moduleSchema>;
 
-export const MATTRESS_REGIONS = ['uk', 'eu', 'us'] as const;
 export type MattressRegion = (typeof MATTRESS_REGIONS)[number];
 
 export const settingsSchema = z.strictObject({
