@@ -18,7 +18,6 @@ import { ChecksPanel } from './panels/ChecksPanel';
 import { foldWaiting, statusCounts } from '@/lib/checks/words';
 import { Toolbar } from './panels/Toolbar';
 import { Tabs } from './panels/Tabs';
-import { ContextMenu } from './panels/ContextMenu';
 import { ShortcutSheet } from './panels/ShortcutSheet';
 import { ConflictDialog } from './panels/ConflictDialog';
 import { SelectionAnnouncer } from './panels/SelectionAnnouncer';
@@ -30,6 +29,8 @@ import { countByStatus, failingModuleIds } from './panels/findingGroups';
 // Behind tabs: loaded when first opened, so the editor's first load stays small.
 const BayPanel = lazy(() => import('./panels/BayPanel').then((m) => ({ default: m.BayPanel })));
 const SectionView = lazy(() => import('./section/SectionView').then((m) => ({ default: m.SectionView })));
+// Opened by a right-click or the menu key: loaded then.
+const ContextMenu = lazy(() => import('./panels/ContextMenu').then((m) => ({ default: m.ContextMenu })));
 const loading = <p className="p-4 text-sm text-ink-soft">Loading…</p>;
 
 export default function Editor(props: EditorProps) {
@@ -85,7 +86,7 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
         <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">
           <div ref={planBox} className="relative min-h-0 flex-1">
             <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" overlay={extensions?.planOverlay} underlay={extensions?.planUnderlay} />
-            {menu && <ContextMenu at={menu} onClose={closeMenu} />}
+            {menu && <Suspense fallback={null}><ContextMenu at={menu} onClose={closeMenu} /></Suspense>}
           </div>
           <Tabs
             className="h-64 shrink-0 border-t border-paper-edge"

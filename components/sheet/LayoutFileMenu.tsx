@@ -14,7 +14,10 @@ import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { useEditorApi } from '@/components/editor/store/EditorStoreContext';
 import { downloadBlob, planToPng } from './exportPlan';
-import { issueLines, layoutFileName, layoutFileText, readLayoutFile } from './layoutFile';
+
+// The file helpers validate imports with the full layout schema: fetched when a File action runs,
+// so the schema library stays out of the editor's first load.
+const layoutFile = () => import('./layoutFile');
 
 export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdit: boolean }) {
   const api = useEditorApi();
@@ -30,19 +33,22 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
     const plan = root.current?.closest('[data-testid="editor"]')?.querySelector<HTMLElement>('[data-testid="plan"]');
     try {
       if (!plan) throw new Error('The plan is not on screen.');
+      const { layoutFileName } = await layoutFile();
       downloadBlob(await planToPng(plan), layoutFileName(api.getState().doc.name, `${api.getState().arrangement}.png`));
     } catch (err) {
       toast.error(err instanceof Error ? err.message : 'The PNG could not be made.');
     }
   }
 
-  function exportJson() {
+  async function exportJson() {
     setOpen(false);
     const { doc } = api.getState();
+    const { layoutFileName, layoutFileText } = await layoutFile();
     downloadBlob(new Blob([layoutFileText(doc)], { type: 'application/json' }), layoutFileName(doc.name));
   }
 
   async function importFile(file: File) {
+    const { issueLines, readLayoutFile } = await layoutFile();
     setBusy(true);
     try {
       const result = readLayoutFile(await file.text(), file.size);

@@ -7,7 +7,8 @@
  * exactly at its limit passes. Pure: must never import UI, framework or database code.
  */
 import { intervalOverlap, overlappingPairs, rectsOverlap } from '../geometry';
-import { ARRANGEMENTS, type Arrangement, type LayoutDoc, type Module } from '../layout/schema';
+import { ARRANGEMENTS } from '../layout/vocabulary';
+import type { Arrangement, LayoutDoc, Module } from '../layout/schema';
 import { archBoxes, moduleRect, topAboveBare, undersideAboveBare, type BuildUpThickness } from './bayModel';
 import { listNames, mm, moduleName, plural } from './naming';
 import { SOURCES } from './sources';

@@ -6,7 +6,9 @@
  * left, x rearwards to the right, the left wall at the top (as in the editor).
  * Pure: a document in, sheet items out; must never render or measure the page.
  */
-import { kindSpec, formatLength, type Arrangement, type LayoutDoc, type LengthUnit, type Module } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import { formatLength } from '../layout/units';
+import type { Arrangement, LayoutDoc, LengthUnit, Module } from '../layout';
 import { dimension, hatch, LINE, stipple, TYPE } from './drafting';
 import { onPaper } from './paper';
 import type { SheetItem } from './primitives';

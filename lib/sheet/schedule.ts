@@ -3,7 +3,9 @@
  * (length × width × height), position, elevation above the finished floor, mass and the
  * arrangements it exists in — flowed across pages with the header repeated. Pure.
  */
-import { formatLength, kindSpec, type LayoutDoc, type LengthUnit, type Module } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import { formatLength } from '../layout/units';
+import type { LayoutDoc, LengthUnit, Module } from '../layout';
 import type { ColumnFlow } from './flow';
 import { LINE, TYPE } from './drafting';
 import type { SheetItem } from './primitives';

@@ -8,7 +8,7 @@
 import { useId, useMemo, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Plus, Trash2 } from 'lucide-react';
-import { BATTERY_CHEMISTRIES } from '@/lib/layout';
+import { BATTERY_CHEMISTRIES } from '@/lib/layout/vocabulary';
 import { CHEMISTRIES, LOAD_PRESETS, PVWATTS_DEFAULT_LOSSES_PCT } from '@/lib/planning';
 import { CheckField, FieldGroup, QuantityField } from '../fields';
 import { newRowId } from '../ids';

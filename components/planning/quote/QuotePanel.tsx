@@ -10,7 +10,7 @@ import Link from 'next/link';
 import { useMemo } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Send, ExternalLink } from 'lucide-react';
 import { toast } from 'sonner';
@@ -26,15 +26,15 @@ import { QuoteStatus } from './QuoteView';
 import { formatDateTime } from '@/lib/format';
 
 const schema = z.object({
-  depositPct: z.string().transform((s, ctx) => {
+  depositPct: z.pipe(z.string(), z.transform((s: string, ctx) => {
     const v = parseWithUnit(s, ['%']);
     if (v === null || v <= 0 || v > 100 || Math.abs(Math.round(v * 100) - v * 100) > 1e-6) {
-      ctx.addIssue({ code: 'custom', message: 'a percentage above 0 and at most 100, e.g. 25 %' });
+      ctx.issues.push({ code: 'custom', input: s, message: 'a percentage above 0 and at most 100, e.g. 25 %' });
       return z.NEVER;
     }
     return v;
-  }),
-  note: z.string().trim().max(1000, 'at most 1000 characters'),
+  })),
+  note: z.string().check(z.trim(), z.maxLength(1000, 'at most 1000 characters')),
 });
 
 export function useCurrentQuote(layoutId: string) {

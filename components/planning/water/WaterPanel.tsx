@@ -5,7 +5,7 @@
  * `water.*` findings. Edits only `systems.water`; tank sizes live on the tank modules.
  */
 import { useMemo } from 'react';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterPlan } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
 import { FindingList, findingsOf } from '../FindingList';
