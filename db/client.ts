@@ -77,7 +77,7 @@ async function openPostgres(url: string): Promise<DbHandle> {
 
 /**
  * Opens (and migrates) the embedded database. With `thread`, PGlite runs in a worker thread so
- * queries and Next.js use both cores (db/pglite-thread-client.ts); scripts and tests keep it on
+ * queries and Next.js use both cores (db/pglite/thread-client.ts); scripts and tests keep it on
  * their own thread.
  */
 export async function openPglite(dir: string, options: { migrate?: boolean; thread?: boolean } = {}): Promise<DbHandle> {
@@ -102,7 +102,7 @@ export async function openPglite(dir: string, options: { migrate?: boolean; thre
 
 async function openOnThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
   const { drizzle } = await import('drizzle-orm/pglite');
-  const { PgliteThreadClient } = await import('./pglite-thread-client');
+  const { PgliteThreadClient } = await import('./pglite/thread-client');
   const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
   // drizzle uses only `query` and `transaction` of the client it is given.
   return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close() };
@@ -112,8 +112,10 @@ async function openInThread(dir: string, options: { migrate?: boolean }): Promis
   const { drizzle } = await import('drizzle-orm/pglite');
   const { PGlite } = await import('@electric-sql/pglite');
   const { migrate } = await import('drizzle-orm/pglite/migrator');
-  const { withStatementCache } = await import('./pglite-statements.mjs');
-  const client = await PGlite.create({ dataDir: dir });
+  const { withStatementCache } = await import('./pglite/statements.mjs');
+  const { templateFor } = await import('./pglite/template.mjs');
+  // A new folder starts from the install-time template when there is one, as on the thread.
+  const client = await PGlite.create({ dataDir: dir, loadDataDir: templateFor(dir) });
   // Reads as prepared statements, as on the server's database thread.
   const db = drizzle({ client: withStatementCache(client) as never, schema });
   if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });

@@ -16,6 +16,7 @@ import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
 import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
 import { Lru } from '../lib/cache/lru';
+import { jsonText, withJsonField, type JsonText } from '../lib/cache/json-text';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -170,7 +171,7 @@ export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {
 
 /** A stored document as JSON text, with the figures a summary draws from it. */
 interface CachedDoc extends DocFacts {
-  json: string;
+  json: JsonText;
 }
 
 /**
@@ -185,7 +186,7 @@ function docKey(row: MetaRow): string {
 }
 
 function cacheDoc(row: Row): CachedDoc {
-  const cached = { ...docFacts(row.doc), json: JSON.stringify(row.doc) };
+  const cached = { ...docFacts(row.doc), json: jsonText(row.doc) };
   docCache.set(docKey(row), cached);
   return cached;
 }
@@ -211,8 +212,7 @@ export async function getLayoutJson(actor: Actor, id: string): Promise<{ version
     doc = cacheDoc(full);
     row = full;
   }
-  const head = JSON.stringify(withoutDoc(row, doc, actor));
-  return { version: row.version, json: `${head.slice(0, -1)},"doc":${doc.json}}` };
+  return { version: row.version, json: withJsonField(withoutDoc(row, doc, actor), 'doc', doc.json) };
 }
 
 /** For tests. */

@@ -4,7 +4,7 @@ import { eq } from 'drizzle-orm';
 import * as list from '@/app/api/layouts/route';
 import * as one from '@/app/api/layouts/[id]/route';
 import { layouts, users } from '@/db/schema';
-import { clearDocCache, getLayout } from '@/db/layouts';
+import { clearDocCache, getLayout, getLayoutJson } from '@/db/layouts';
 import { loadActor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
 import type { Db } from '@/db/client';
@@ -154,6 +154,18 @@ describe('GET /api/layouts/:id from the document cache', () => {
       expect(cold.body).toEqual(expected);
       expect(warm.body).toEqual(expected);
       expect(warm.headers.get('content-type')).toMatch(/^application\/json/);
+    }
+  });
+
+  it('writes the very characters JSON.stringify writes for the DTO, cold and from the cache', async () => {
+    clearDocCache();
+    for (const who of [w.owner, w.client]) {
+      const actor = (await loadActor(who.id, who.studioId, 0))!;
+      const expected = JSON.stringify(await getLayout(actor, w.clientLayoutId));
+      for (const round of ['cold', 'cached']) {
+        const answer = await getLayoutJson(actor, w.clientLayoutId);
+        expect(answer.json, round).toBe(expected);
+      }
     }
   });
 

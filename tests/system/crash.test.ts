@@ -10,7 +10,7 @@ import { startTestServer, stopProcessGroup, type TestServer } from '../../script
 import { DEMO_PASSWORD } from '../../lib/demo-accounts';
 import { signInOverHttp } from './http-session';
 
-const PORT = 3291;
+const PORT = Number(process.env.SYSTEM_TEST_PORT ?? 3291);
 const DB = 'system-crash';
 let server: TestServer | undefined;
 

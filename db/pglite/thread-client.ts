@@ -2,7 +2,7 @@
  * The embedded database on its own thread. PGlite is PostgreSQL compiled to WebAssembly and runs
  * on the thread that opened it; in the server that thread also runs Next.js, so every request
  * waited for both in turn and the second core sat idle. Here PGlite runs in a worker thread
- * (db/pglite-thread.mjs) and this client gives drizzle the part of PGlite's interface it uses —
+ * (db/pglite/thread.mjs) and this client gives drizzle the part of PGlite's interface it uses —
  * `query` and `transaction` — over messages. One process still owns the folder (the pid lock is
  * taken here, on the main thread).
  */
@@ -48,7 +48,7 @@ export class PgliteThreadError extends Error {
   }
 }
 
-const THREAD_FILE = path.join(/* turbopackIgnore: true */ process.cwd(), 'db', 'pglite-thread.mjs');
+const THREAD_FILE = path.join(/* turbopackIgnore: true */ process.cwd(), 'db', 'pglite', 'thread.mjs');
 
 interface Queryable {
   query(sql: string, params?: unknown[], options?: { rowMode?: 'array' | 'object' }): Promise<QueryResult>;
