@@ -229,8 +229,16 @@ export function fitOverlap(doc: LayoutDoc): Finding[] {
       const r = rects[i];
       const d = j >= 0 ? Math.min(intervalOverlap(r.x0, r.x1, rects[j].x0, rects[j].x1), intervalOverlap(r.y0, r.y1, rects[j].y0, rects[j].y1)) : -Infinity;
       const self = twins[i].length > 1 ? Math.min(r.x1 - r.x0, r.y1 - r.y0) : -Infinity;
-      if (self > best) (best = self), (a = twins[i][0]), (b = twins[i][1]);
-      if (d > best) (best = d), (a = reps[i]), (b = reps[j]);
+      if (self > best) {
+        best = self;
+        a = twins[i][0];
+        b = twins[i][1];
+      }
+      if (d > best) {
+        best = d;
+        a = reps[i];
+        b = reps[j];
+      }
     }
     return clusterFinding(members, a, b);
   });

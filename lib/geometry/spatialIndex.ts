@@ -113,8 +113,14 @@ export function overlapGroups(
         sets.union(i, j);
         linked[i] = linked[j] = 1;
         const d = depth(i, j);
-        if (d > deepest[i]) (deepest[i] = d), (deepestPartner[i] = j);
-        if (d > deepest[j]) (deepest[j] = d), (deepestPartner[j] = i);
+        if (d > deepest[i]) {
+          deepest[i] = d;
+          deepestPartner[i] = j;
+        }
+        if (d > deepest[j]) {
+          deepest[j] = d;
+          deepestPartner[j] = i;
+        }
       }
       return false;
     });
