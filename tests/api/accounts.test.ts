@@ -9,6 +9,7 @@ import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, sessionCookie } from '../helpers/http';
 import { decodeCached, type SessionClaims } from '@/lib/auth/token-cache';
+import { PEER_HEADER } from '@/lib/auth/address';
 
 let db: Db;
 beforeAll(async () => {
@@ -58,7 +59,7 @@ describe('sign-in', () => {
   });
 
   it(`refuses the ${SIGN_IN_FAILURE_LIMIT + 1}th attempt after ${SIGN_IN_FAILURE_LIMIT} failures, even with the right password`, async () => {
-    await call(signUpRoute.POST, { method: 'POST', json: { name: 'Rate Test', email: 'rate@selfbuild.test', password: 'the-right-password' }, headers: { 'x-forwarded-for': '10.9.9.9' } });
+    await call(signUpRoute.POST, { method: 'POST', json: { name: 'Rate Test', email: 'rate@selfbuild.test', password: 'the-right-password' }, headers: { [PEER_HEADER]: '10.9.9.9' } });
     for (let i = 0; i < SIGN_IN_FAILURE_LIMIT; i++) {
       expect((await authenticate('rate@selfbuild.test', `wrong-${i}-password`, `10.1.0.${i}`)).ok).toBe(false);
     }
