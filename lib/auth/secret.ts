@@ -44,7 +44,7 @@ export function secureCookiesWanted(): boolean {
  * proxy (undefined lets Auth.js follow the request's scheme, which the connection policy in
  * lib/auth/address.ts took from the proxy's X-Forwarded-Proto); never otherwise.
  */
-export function useSecureCookiesSetting(): boolean | undefined {
+export function secureCookiesSetting(): boolean | undefined {
   if (publicUrlIsHttps()) return true;
   return proxyTrust().kind === 'none' ? false : undefined;
 }

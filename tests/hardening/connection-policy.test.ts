@@ -6,7 +6,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { Socket } from 'node:net';
 import { applyConnectionPolicy, clientAddress, HSTS, parseTrustProxy, PEER_HEADER, requestIsSecure } from '@/lib/auth/address';
-import { sessionCookieName, useSecureCookiesSetting } from '@/lib/auth/secret';
+import { sessionCookieName, secureCookiesSetting } from '@/lib/auth/secret';
 
 const saved = { TRUST_PROXY: process.env.TRUST_PROXY, AUTH_URL: process.env.AUTH_URL, BAYWRIGHT_PUBLIC_URL: process.env.BAYWRIGHT_PUBLIC_URL };
 afterEach(() => {
@@ -44,7 +44,7 @@ describe('without TRUST_PROXY', () => {
     expect(headers.get('x-forwarded-proto')).toBe('http');
     expect(requestIsSecure(request)).toBe(false);
     expect(response.has('strict-transport-security')).toBe(false);
-    expect(useSecureCookiesSetting()).toBe(false);
+    expect(secureCookiesSetting()).toBe(false);
     expect(sessionCookieName()).toBe('authjs.session-token');
   });
   it('a TLS connection is https', () => {
@@ -58,10 +58,10 @@ describe('without TRUST_PROXY', () => {
     const { request, response } = arrive('192.0.2.10', {});
     expect(response.get('strict-transport-security')).toBe(HSTS);
     expect(requestIsSecure(request)).toBe(true);
-    expect(useSecureCookiesSetting()).toBe(true);
+    expect(secureCookiesSetting()).toBe(true);
     expect(sessionCookieName()).toBe('__Secure-authjs.session-token');
     env({ AUTH_URL: 'https://plans.example.test' });
-    expect(useSecureCookiesSetting()).toBe(true);
+    expect(secureCookiesSetting()).toBe(true);
   });
   it('a request that never passed the policy has no address of its own: one shared bucket', () => {
     env({});
@@ -94,7 +94,7 @@ describe('with TRUST_PROXY', () => {
     const http = arrive('10.0.0.2', { 'x-forwarded-proto': 'http' });
     expect(requestIsSecure(http.request)).toBe(false);
     expect(http.response.has('strict-transport-security')).toBe(false);
-    expect(useSecureCookiesSetting()).toBeUndefined(); // Auth.js follows the request's scheme
+    expect(secureCookiesSetting()).toBeUndefined(); // Auth.js follows the request's scheme
   });
   it('refuses values it cannot read, with a message naming the variable', () => {
     expect(() => parseTrustProxy('proxy.internal')).toThrow(/TRUST_PROXY/);
