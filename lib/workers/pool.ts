@@ -6,7 +6,8 @@
  * up. A job that runs past its time limit has its worker replaced and fails with the same error.
  *
  * Sizes come from the environment (README): BAYWRIGHT_WORKERS (threads, default 2),
- * BAYWRIGHT_WORK_QUEUE (waiting jobs, default 16), BAYWRIGHT_JOB_TIMEOUT_MS (default 15000).
+ * BAYWRIGHT_WORK_QUEUE (waiting jobs, default 16), BAYWRIGHT_JOB_TIMEOUT_MS (default 15000),
+ * BAYWRIGHT_WORKER_HEAP_MB (each worker's heap cap, default 512).
  * Workers start with the first job and stop with `closeWorkPool()` (SIGTERM/SIGINT do it too).
  * Server only.
  */
@@ -70,6 +71,11 @@ function envInt(name: string, fallback: number, min: number, max: number): numbe
   return n;
 }
 
+/** Heap cap of each worker (BAYWRIGHT_WORKER_HEAP_MB, default 512): a runaway job fails alone. */
+function workerHeapMb(): number {
+  return envInt('BAYWRIGHT_WORKER_HEAP_MB', 512, 64, 16_384);
+}
+
 export function workPoolOptionsFromEnv(): WorkPoolOptions {
   return {
     size: envInt('BAYWRIGHT_WORKERS', 2, 1, 64),
@@ -79,16 +85,16 @@ export function workPoolOptionsFromEnv(): WorkPoolOptions {
 }
 
 /**
- * Starts one worker on lib/workers/job-worker.ts. The `new Worker(new URL(…, import.meta.url))`
- * form is the one Next's bundler follows and compiles into a chunk of its own; run from source
- * (vitest, tsx scripts), the file is TypeScript and the worker loads it through tsx.
+ * Starts one worker on lib/workers/job-worker.ts. Inside Next (NEXT_RUNTIME is set) the
+ * `new Worker(new URL(…, import.meta.url))` form is the one its bundler follows: it compiles the
+ * worker into a chunk of its own. Run from source (vitest, tsx scripts) the file is TypeScript, and
+ * the worker loads it through tsx.
  */
 function startWorker(): Worker {
-  if (import.meta.url.endsWith('.ts')) {
-    const file = path.join(path.dirname(fileURLToPath(import.meta.url)), 'job-worker.ts');
-    return new Worker(`require('tsx/cjs/api').register(); require(${JSON.stringify(file)});`, { eval: true });
-  }
-  return new Worker(new URL('./job-worker.ts', import.meta.url));
+  const resourceLimits = { maxOldGenerationSizeMb: workerHeapMb() };
+  if (process.env.NEXT_RUNTIME) return new Worker(new URL('./job-worker.ts', import.meta.url), { resourceLimits });
+  const file = path.join(path.dirname(fileURLToPath(import.meta.url)), 'job-worker.ts');
+  return new Worker(`require('tsx/cjs/api').register(); require(${JSON.stringify(file)});`, { eval: true, resourceLimits });
 }
 
 export class WorkPool {
