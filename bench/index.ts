@@ -8,6 +8,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import { benchChecks } from './checks';
 import { benchApi } from './api';
+import { benchHostile } from './hostile';
 import { benchEditor } from './editor';
 import { benchBundles } from './bundles';
 import { benchVitals, vitalsLines } from './vitals';
@@ -26,6 +27,7 @@ async function main() {
   buildIfNeeded();
   const checks = benchChecks();
   const api = await benchApi();
+  const hostile = await benchHostile();
   const editor = await benchEditor();
   const bundles = await benchBundles({ floor: true });
   const vitals = await benchVitals();
@@ -50,6 +52,18 @@ async function main() {
       goal: goal ? `p95 ≤ ${goal} ms, 0 errors` : '—',
       met: goal ? r.p95 <= goal && r.errors + r.non2xx === 0 : null,
     })),
+    {
+      what: 'GET /api/health p95 while one client hammers POST /api/checks (5,000 modules on one spot) at its rate limit',
+      figure: `${hostile.healthUnderAttack.p95} ms (p50 ${hostile.healthUnderAttack.p50}, p99 ${hostile.healthUnderAttack.p99}; attacker: ${Object.entries(hostile.healthUnderAttack.attackerStatuses).map(([k, n]) => `${n}× ${k}`).join(', ')})`,
+      goal: '≤ 50 ms',
+      met: hostile.healthUnderAttack.p95 <= 50,
+    },
+    ...hostile.routes.map((r) => ({
+      what: `worst case, ${r.route}: ${r.layout}`,
+      figure: `${r.worstMs} ms, ${r.status}, ${Math.round(r.bytes / 1024)} KB`,
+      goal: '≤ 2000 ms, < 2 MB',
+      met: r.worstMs <= 2000 && r.bytes < 2 * 1024 * 1024,
+    })),
     { what: 'Baywright ÷ bare read throughput (median of rounds)', figure: `${api.readVsBare} (${api.readVsBareRounds.join(', ')})`, goal: '≥ 0.5', met: api.readVsBare >= 0.5 },
     { what: 'editor drag, 200 modules: frame p95 / draw p95 / frames > 50 ms', figure: `${editor.drag200.frameP95} / ${editor.drag200.drawP95} ms / ${editor.drag200.over50}`, goal: '≤ 17 / ≤ 8 ms / 0', met: editor.drag200.frameP95 <= 17 && editor.drag200.drawP95 <= 8 && editor.drag200.over50 === 0 },
     ...[editor.tabletDrag, editor.tabletTouch, editor.tabletPinch].map((d) => ({
@@ -70,7 +84,7 @@ async function main() {
   const results = {
     at: new Date().toISOString(),
     machine: { cpus: os.cpus().length, model: os.cpus()[0]?.model, node: process.version, memoryGiB: round(os.totalmem() / 2 ** 30, 1) },
-    checks, api, editor, bundles, vitals, startup, lines,
+    checks, api, hostile, editor, bundles, vitals, startup, lines,
   };
   fs.mkdirSync('bench', { recursive: true });
   fs.writeFileSync('bench/results.json', JSON.stringify(results, null, 2) + '\n');
@@ -107,6 +121,12 @@ ${table}
   alike and then take turns, three rounds of 8 s each (\`BENCH_ROUNDS\`); latencies are pooled, and the ratio is the
   median of the three rounds' ratios (each round's read and bare read ran back to back, so a passing neighbour on the
   machine costs both sides of that round alike; the rounds' ratios are printed beside it).
+- **Hostile layouts** (\`bench/hostile.ts\`, \`npm run bench:hostile\`): the adversarial layouts of the hostile-input
+  tests (all modules on one spot, 5,000 modules, 5,000 overlapping in sleep, maximum build-up, maximum doors and
+  arches), each stored with a revision and a viewer link on a fresh \`next start\`; the slowest of three requests per
+  route (checks posted, stored, through the viewer link, revision compare, plan sheet PDF and print view). Then
+  \`GET /api/health\` with autocannon (2 connections, 10 s) while one signed-in client posts the 5,000-modules-on-one-spot
+  layout to \`/api/checks\` back to back, never faster than its limit of 10 a second.
 - **Editor** (\`bench/editor.ts\`, \`npm run bench:editor\`): headless Chromium drags one module across a 200- and a
   2000-module layout for 120 steps; frame intervals from \`requestAnimationFrame\`, Konva draw time per frame, frames
   over 50 ms; then drop → updated findings on a 30-module layout. Headless Chromium paces frames itself, so frame
