@@ -13,7 +13,7 @@ import { and, count, desc, eq, inArray } from 'drizzle-orm';
 import { getDb } from './client';
 import { layouts, uploads, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
-import { canEditLayouts, type Actor } from './actor';
+import { canEditLayouts, mayReadLayout, type Actor } from './actor';
 import { getLayout } from './layouts';
 import { cleanFileName, withExtension } from '../lib/uploads/file-name';
 import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
@@ -82,8 +82,7 @@ async function readable(actor: Actor, uploadId: string): Promise<Row> {
     .leftJoin(users, eq(users.id, uploads.uploadedBy))
     .where(eq(uploads.id, uploadId))
     .limit(1);
-  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such file.');
-  if (!canEditLayouts(actor) && row.layoutClientId !== actor.userId) throw new NotFoundError('No such file.');
+  if (!row || !mayReadLayout(actor, { studioId: row.studioId, clientId: row.layoutClientId })) throw new NotFoundError('No such file.');
   return row;
 }
 

@@ -10,7 +10,7 @@ import { SHARING_ROWS } from '../sharing/access-rows';
 import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
 
-export const WHO = ['anonymous', 'viewer', 'foreignClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
+export const WHO = ['anonymous', 'viewer', 'foreignClient', 'otherClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
 export interface Fixture {
   world: World;
@@ -25,11 +25,11 @@ export interface Row {
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
 /** Readable by the studio's staff and the layout's own client; unknown to everyone else. */
-const LAYOUT_READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
+const LAYOUT_READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
 /** Writable by the studio's staff; the client may read but not write; unknown to others. */
-const LAYOUT_WRITE = { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
+const LAYOUT_WRITE = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
 /** Any signed-in member. */
-const MEMBER = { ...NOBODY, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
+const MEMBER = { ...NOBODY, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
 
 async function freshLayout(fx: Fixture, name: string): Promise<string> {
   const { createLayout } = await import('@/db/layouts');
@@ -52,13 +52,13 @@ const CORE_ROWS: Row[] = [
   // Readiness for a load balancer: open to anyone, says nothing about any studio.
   {
     route: '/api/health', method: 'GET', request: () => ({}),
-    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
   },
   { route: '/api/layouts', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/layouts', method: 'POST',
     request: () => ({ json: { name: 'Matrix van', bayTemplateId: 'l2h2' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 201, owner: 201, foreignOwner: 201 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 201, owner: 201, foreignOwner: 201 },
   },
   { route: '/api/layouts/[id]', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: LAYOUT_READ },
   {
@@ -74,29 +74,39 @@ const CORE_ROWS: Row[] = [
     request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix delete') } }),
     expect: { ...LAYOUT_WRITE, designer: 204, owner: 204 },
   },
+  {
+    route: '/api/layouts/[id]/archive', method: 'POST',
+    request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix archive') } }),
+    expect: LAYOUT_WRITE,
+  },
+  {
+    route: '/api/layouts/[id]/archive', method: 'DELETE',
+    request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix restore') } }),
+    expect: LAYOUT_WRITE,
+  },
   { route: '/api/layouts/[id]/checks', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: LAYOUT_READ },
   { route: '/api/checks', method: 'POST', request: () => ({ json: starterLayout('starter-l-lounge') }), expect: MEMBER },
   {
     route: '/api/sign-up', method: 'POST',
     request: () => ({ json: { name: 'Matrix Person', email: `matrix${memberSeq++}@selfbuild.test`, password: 'matrix-long-password' } }),
-    expect: { anonymous: 201, viewer: 201, foreignClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
+    expect: { anonymous: 201, viewer: 201, foreignClient: 201, otherClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
   },
   { route: '/api/studio', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio', method: 'PATCH',
     request: () => ({ json: { units: 'mm' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
   },
   { route: '/api/studio/members', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio/members', method: 'POST',
     request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client', password: 'member-long-password' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
   },
   {
     route: '/api/studio/members/[userId]', method: 'PATCH',
     request: (fx) => ({ params: { userId: fx.world.otherClient.id }, json: { role: 'client' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
   },
   {
     route: '/api/studio/members/[userId]', method: 'DELETE',
@@ -107,7 +117,7 @@ const CORE_ROWS: Row[] = [
       const m = await addMember({ userId: owner.id, studioId: owner.studioId, role: 'owner', email: '', name: '' }, { name: `Leaver ${who}`, email: `leaver-${who}-${memberSeq++}@client.test`, role: 'client', password: 'leaver-long-password' });
       return { params: { userId: m.userId } };
     },
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
   },
 ];
 
