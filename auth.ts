@@ -9,6 +9,7 @@ import { z } from 'zod';
 import { authConfig } from './auth.config';
 import { authenticate, endSessions } from './db/accounts';
 import { clientAddress } from './lib/auth/address';
+import { describeError, log } from './lib/log';
 
 class RateLimited extends CredentialsSignin {
   code = 'rate_limited';
@@ -24,6 +25,12 @@ const credentialsSchema = z.object({
 
 export const { handlers, auth, signIn, signOut } = NextAuth({
   ...authConfig,
+  // Auth.js's own messages go through the redacting logger (its errors may carry tokens or form fields).
+  logger: {
+    error: (error) => log.error('sign-in service error', describeError(error)),
+    warn: (code) => log.warn('sign-in service warning', { code }),
+    debug: () => undefined,
+  },
   events: {
     // Sign-out ends every session of the user, not only this cookie.
     async signOut(message) {

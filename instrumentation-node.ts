@@ -6,13 +6,14 @@
  */
 import { DatabaseLockedError, getHandle } from './db/client';
 import { startLocalServices } from './lib/fakes/local-services';
+import { log } from './lib/log';
 
 export async function startServer(): Promise<void> {
   try {
     await getHandle();
   } catch (err) {
     if (err instanceof DatabaseLockedError) {
-      console.error(`[baywright] ${err.message}`);
+      log.error('database locked', { message: err.message });
       process.exit(1);
     }
     throw err;
@@ -21,6 +22,6 @@ export async function startServer(): Promise<void> {
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
   void import('./db/uploads')
     .then((m) => m.sweepOrphanUploads())
-    .then((r) => r.removed && console.log(`[baywright] removed ${r.removed} stored upload file(s) no layout uses any more`))
-    .catch((err) => console.error('[baywright] the upload sweep failed', err));
+    .then((r) => r.removed && log.info('removed stored upload files no layout uses any more', { removed: r.removed }))
+    .catch((err) => log.error('the upload sweep failed', { error: err }));
 }

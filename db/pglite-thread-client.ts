@@ -7,6 +7,7 @@
  * taken here, on the main thread).
  */
 import 'server-only';
+import { log } from '../lib/log';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 
@@ -73,7 +74,7 @@ export class PgliteThreadClient implements Queryable {
       this.pending.clear();
       if (!this.closed) {
         // Serving on without the database would only answer 500s: stop, so a supervisor restarts.
-        console.error(`[baywright] ${failure.message}; stopping the server`);
+        log.error('database thread failed; stopping the server', { error: failure });
         process.exit(1);
       }
     });

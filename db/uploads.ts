@@ -8,6 +8,7 @@
  * read the layout, and are never part of the LayoutDoc a viewer link shows.
  */
 import 'server-only';
+import { log } from '../lib/log';
 import fs from 'node:fs';
 import { and, count, desc, eq, inArray } from 'drizzle-orm';
 import { getDb } from './client';
@@ -156,7 +157,7 @@ export async function deleteUpload(actor: Actor, uploadId: string): Promise<void
   requireEditor(actor, 'delete files');
   const db = await getDb();
   await db.delete(uploads).where(eq(uploads.id, row.id));
-  await removeStored(row.storedName).catch((err) => console.error('[baywright] could not remove a stored upload', err));
+  await removeStored(row.storedName).catch((err) => log.error('could not remove a stored upload', { error: err }));
 }
 
 /** Rights for placing an image, checked before the request body is read (404 / 403). */

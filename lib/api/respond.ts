@@ -9,6 +9,7 @@ import type { z } from 'zod';
 import { issuesFromZod, type FieldIssue } from '@/lib/layout/parse';
 import { actorFromRequest } from '@/lib/auth/session';
 import type { Actor } from '@/db/actor';
+import { correlationId, describeError, log, routeOf } from '@/lib/log';
 
 export class HttpError extends Error {
   constructor(readonly status: number, message: string, readonly extra: Record<string, unknown> = {}) {
@@ -132,18 +133,24 @@ export function handle<C>(fn: Handler<C>): Handler<C> {
       checkOrigin(req);
       return await fn(req, ctx);
     } catch (err) {
-      return errorResponse(err);
+      return errorResponse(err, req);
     }
   };
 }
 
-export function errorResponse(err: unknown): Response {
+/**
+ * The answer for an error. Deliberate ones (HttpError, the data layer's 4xx errors) say what was
+ * wrong; anything else is a fault: the log gets a correlation id, the route and the error's class
+ * (lib/log cuts out parameters, tokens and hashes), and the 500 answer shows the same id.
+ */
+export function errorResponse(err: unknown, req?: Request): Response {
   if (err instanceof HttpError) return problem(err.status, err.message, err.extra);
   const status = (err as { status?: unknown })?.status;
   if (typeof status === 'number' && status >= 400 && status < 500) {
     const extra = status === 412 ? { current: (err as { current?: unknown }).current } : {};
     return problem(status, (err as Error).message, extra);
   }
-  console.error('[baywright] unexpected error', err);
-  return problem(500, 'Something went wrong on our side. Nothing was changed.');
+  const reference = correlationId();
+  log.error('unexpected error', { reference, route: routeOf(req), ...describeError(err) });
+  return problem(500, `Something went wrong on our side. Nothing was changed. If it happens again, quote reference ${reference}.`, { reference });
 }

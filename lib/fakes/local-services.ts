@@ -3,6 +3,8 @@
  * on globalThis so dev reloads do not start them twice). Each fake is registered here with the
  * condition under which it runs; production deployments point at the real services instead.
  */
+import { log } from '../log';
+
 type Starter = { name: string; wanted: () => boolean; start: () => Promise<void> };
 
 const g = globalThis as typeof globalThis & { __baywrightServices?: Promise<void> };
@@ -41,7 +43,7 @@ export function startLocalServices(): Promise<void> {
       try {
         await s.start();
       } catch (err) {
-        console.error(`[baywright] could not start the local ${s.name}:`, err instanceof Error ? err.message : err);
+        log.error(`could not start the local ${s.name}`, { error: err });
       }
     }
   })();

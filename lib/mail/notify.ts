@@ -6,6 +6,7 @@
  * Must never include another studio's people, and never send a token to anyone but its invitee.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import type { IssuedInvitation } from '@/db/sharing/invitations';
 import { invitationPath, markInvitationSent } from '@/db/sharing/invitations';
@@ -28,7 +29,7 @@ async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) 
       await sendMail({ ...build(r), to: r, studioId });
     } catch (err) {
       ok = false;
-      console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+      log.error('mail not sent', { error: err });
     }
   }
   return ok ? 'sent' : 'not-sent';
@@ -39,7 +40,7 @@ export async function sendInvitation(req: Request, actor: Actor, issued: IssuedI
   try {
     url = publicUrl(req, invitationPath(issued.token));
   } catch (err) {
-    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    log.error('mail not sent', { error: err });
     return 'not-sent';
   }
   const inv = issued.invitation;
@@ -57,7 +58,7 @@ function linkOrNull(req: Request, path: string): string | null {
   try {
     return publicUrl(req, path);
   } catch (err) {
-    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    log.error('mail not sent', { error: err });
     return null;
   }
 }

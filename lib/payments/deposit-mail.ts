@@ -5,6 +5,7 @@
  * says `not-sent` and the server log says why. Must never mail anyone but the quote's client.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import type { QuoteDto } from '@/db/quotes';
 import { markReceiptSent, receiptFacts } from '@/db/quotes';
@@ -16,7 +17,7 @@ import { sendMail } from '@/lib/mail/transport';
 export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
 
 function logNotSent(err: unknown): MailOutcome {
-  console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+  log.error('mail not sent', { error: err });
   return 'not-sent';
 }
 

@@ -12,6 +12,9 @@ export interface SessionUser {
   sessionVersion?: number;
 }
 
+/** Every session token this process minted: the log tests check that none of them is ever logged. */
+export const mintedSessionTokens = new Set<string>();
+
 export async function sessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
@@ -20,6 +23,7 @@ export async function sessionCookie(user: SessionUser): Promise<string> {
     salt: name,
     maxAge: SESSION_MAX_AGE_S,
   });
+  mintedSessionTokens.add(token);
   return `${name}=${token}`;
 }
 

@@ -9,6 +9,7 @@
  * deployment that talks to a real relay (SMTP_URL set, or BAYWRIGHT_REAL_SERVICES=1).
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { storeReceivedMail, type ReceivedMail } from '@/db/sharing/outbox';
@@ -73,12 +74,12 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
           callback();
         })
         .catch((err) => {
-          console.error('[baywright] development mail server could not keep a message:', err instanceof Error ? err.message : err);
+          log.error('development mail server could not keep a message', { error: err });
           callback(Object.assign(new Error('Could not store the message; try again'), { responseCode: 451 }));
         });
     },
   });
-  server.on('error', (err) => console.error('[baywright] development mail server:', err.message));
+  server.on('error', (err) => log.error('development mail server failed', { error: err }));
   const port = await new Promise<number>((resolve, reject) => {
     const onError = (err: Error) => reject(err);
     server.server.once('error', onError);
@@ -113,7 +114,7 @@ export function startFakeSmtpOnce(): Promise<FakeSmtp> {
   if (!g.__baywrightFakeSmtpServer) {
     const port = process.env.BAYWRIGHT_FAKE_SMTP_PORT ? Number(process.env.BAYWRIGHT_FAKE_SMTP_PORT) : 0;
     g.__baywrightFakeSmtpServer = startFakeSmtp({ port }).then((s) => {
-      console.log(`[baywright] development mail server on smtp://${s.host}:${s.port} (mail is kept in the outbox, never delivered)`);
+      log.info('development mail server listening (mail is kept in the outbox, never delivered)', { address: `smtp://${s.host}:${s.port}` });
       return s;
     }).catch((err) => {
       g.__baywrightFakeSmtpServer = undefined;

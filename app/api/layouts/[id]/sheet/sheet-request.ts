@@ -7,6 +7,7 @@
  */
 import 'server-only';
 import { z } from 'zod';
+import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
 import { getStudio, withStudioDefaults } from '@/db/studios';
@@ -63,7 +64,7 @@ export async function sheetRequestFor(actor: Actor, layoutId: string, revision?:
   try {
     report = runChecks(withStudioDefaults(doc, studio.checkDefaults));
   } catch (err) {
-    console.error('[baywright] checks failed while making a plan sheet', err);
+    log.error('checks failed while making a plan sheet', { error: err });
     checksUnavailable = 'the check engine stopped on this layout';
   }
   return {
