@@ -7,8 +7,19 @@
 import { DatabaseLockedError, getHandle } from './db/client';
 import { startLocalServices } from './lib/fakes/local-services';
 import { log } from './lib/log';
+import { authSecret, MissingAuthSecret } from './lib/auth/secret';
 
 export async function startServer(): Promise<void> {
+  // Fail closed: production without AUTH_SECRET does not start (lib/auth/secret).
+  try {
+    authSecret();
+  } catch (err) {
+    if (err instanceof MissingAuthSecret) {
+      log.error('cannot start', { message: err.message });
+      process.exit(1);
+    }
+    throw err;
+  }
   try {
     await getHandle();
   } catch (err) {

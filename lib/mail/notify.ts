@@ -16,13 +16,20 @@ import { layoutClient, revisionIssuerId, workshopFor, type Recipient } from '@/d
 import { studioName } from '@/db/sharing/access';
 import { commentMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
 import { publicUrl } from './public-url';
-import { sendMail } from './transport';
+import { MAIL_NOT_CONFIGURED, mailConfigured, sendMail } from './transport';
+import { HttpError } from '@/lib/api/respond';
 import type { ComposedMail } from './compose';
 
-export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
+export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
+
+/** For features that are nothing but a mail (invitations): refuse up front, 503, when there is no mail. */
+export function requireMail(): void {
+  if (!mailConfigured()) throw new HttpError(503, MAIL_NOT_CONFIGURED);
+}
 
 async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail): Promise<MailOutcome> {
   if (!to.length) return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   let ok = true;
   for (const r of to) {
     try {
@@ -67,7 +74,7 @@ export async function notifyRevisionIssued(req: Request, actor: Actor, layout: {
   const client = await layoutClient(layout.id);
   if (!client) return 'no-recipient';
   const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   const studio = await studioName(actor.studioId);
   return deliver(actor.studioId, [client], (r) =>
     revisionIssuedMail({ clientName: r.name, studioName: studio, layoutName: layout.name, letter: rev.letter, note: rev.note, url }),
@@ -78,7 +85,7 @@ export async function notifyDecision(req: Request, actor: Actor, layout: { id: s
   const last = rev.decisions[rev.decisions.length - 1];
   if (!last) return 'no-recipient';
   const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   const to = await workshopFor(layout.id, [await revisionIssuerId(rev.id)]);
   return deliver(actor.studioId, to, (r) =>
     decisionMail({ recipientName: r.name, clientName: actor.name, layoutName: layout.name, letter: rev.letter, decision: last.decision, message: last.message, url }),
@@ -94,7 +101,7 @@ export async function notifyComment(
   threadAuthorId: string | null,
 ): Promise<MailOutcome> {
   const url = linkOrNull(req, `/layouts/${layout.id}?comment=${thread.id}`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   let to: Recipient[];
   if (actor.role === 'client') {
     to = await workshopFor(layout.id, [layout.createdBy, threadAuthorId !== actor.userId ? threadAuthorId : null]);

@@ -12,9 +12,9 @@ import { markReceiptSent, receiptFacts } from '@/db/quotes';
 import { layoutClient } from '@/db/sharing/recipients';
 import { depositReceiptMail, quoteSentMail } from '@/lib/mail/receipt';
 import { returnOrigin } from './return-origin';
-import { sendMail } from '@/lib/mail/transport';
+import { mailConfigured, sendMail } from '@/lib/mail/transport';
 
-export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
+export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
 
 function logNotSent(err: unknown): MailOutcome {
   log.error('mail not sent', { error: err });
@@ -28,6 +28,7 @@ export function quotePath(layoutId: string): string {
 export async function mailQuoteToClient(req: Request, actor: Actor, quote: QuoteDto): Promise<MailOutcome> {
   const client = await layoutClient(quote.layoutId);
   if (!client) return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   try {
     const url = `${returnOrigin(req)}${quotePath(quote.layoutId)}`;
     await sendMail({
@@ -48,6 +49,7 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
 export async function mailReceipt(req: Request, quoteId: string, paymentRef: string | null): Promise<MailOutcome> {
   const facts = await receiptFacts(quoteId);
   if (!facts?.client || facts.quote.status !== 'paid') return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   const q = facts.quote;
   try {
     const url = `${returnOrigin(req)}${quotePath(q.layoutId)}`;

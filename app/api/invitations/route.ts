@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { createInvitation, listInvitations } from '@/db/sharing/invitations';
 import { requireEditor } from '@/db/sharing/access';
-import { sendInvitation } from '@/lib/mail/notify';
+import { requireMail, sendInvitation } from '@/lib/mail/notify';
 
 export const dynamic = 'force-dynamic';
 
@@ -23,6 +23,8 @@ export const POST = handle(async (req) => {
   const actor = await requireActor(req);
   requireEditor(actor, 'invite clients');
   const body = parseWith(inviteBody, await readJson(req, 16 * 1024));
+  // An invitation is a mail: without mail, nothing is stored and the answer says why.
+  requireMail();
   const issued = await createInvitation(actor, body);
   const mail = await sendInvitation(req, actor, issued);
   return json({ invitation: issued.invitation, mail }, { status: 201 });

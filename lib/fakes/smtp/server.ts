@@ -6,10 +6,11 @@
  * the port for the app's mail transport (./address).
  *
  * Must never listen on anything but loopback, never relay mail anywhere, and never run in a
- * deployment that talks to a real relay (SMTP_URL set, or BAYWRIGHT_REAL_SERVICES=1).
+ * deployment that talks to a real relay (SMTP_URL set), or in production unless asked (lib/local-mode).
  */
 import 'server-only';
 import { log } from '@/lib/log';
+import { localStandInsAllowed } from '@/lib/local-mode';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { storeReceivedMail, type ReceivedMail } from '@/db/sharing/outbox';
@@ -106,7 +107,7 @@ const g = globalThis as GlobalWithServer;
 
 /** Whether this process should run the development mail server at all. */
 export function fakeSmtpWanted(env: Record<string, string | undefined> = process.env): boolean {
-  return !env.SMTP_URL && env.BAYWRIGHT_REAL_SERVICES !== '1';
+  return !env.SMTP_URL && localStandInsAllowed(env);
 }
 
 /** Starts the server once per process (dev reloads call this again and get the same one). */

@@ -6,7 +6,7 @@
  * `/api/payments/webhook` on 127.0.0.1 and PORT (FAKE_STRIPE_WEBHOOK_URL overrides), signed with
  * lib/payments' webhook secret.
  *
- * Must never run in a real deployment (BAYWRIGHT_REAL_SERVICES=1), listen beyond loopback, or
+ * Must never run in production unless asked (lib/local-mode), listen beyond loopback, or
  * sign with anything but the local secret.
  */
 import 'server-only';
