@@ -16,6 +16,7 @@ import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
 import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
 import { Lru } from '../lib/cache/lru';
+import { readStoredDoc } from './stored-doc';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -131,6 +132,7 @@ export async function listLayouts(actor: Actor, options: { archived?: boolean } 
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
     .where(visible)
     .orderBy(desc(layouts.updatedAt));
+  // Summaries read the bay and module count, which every schema version has: no migration needed for a list.
   const summaries = rows.map(toSummary);
   const sharing = await sharingSummaries(summaries.map((l) => l.id));
   return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
@@ -169,7 +171,7 @@ async function readable(actor: Actor, id: string): Promise<Row> {
   const db = await getDb();
   const [row] = await prepared(db, 'layout_by_id', layoutByIdQuery).execute({ id });
   assertVisible(actor, row);
-  return row;
+  return { ...row, doc: readStoredDoc(row.doc) };
 }
 
 export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {

@@ -10,6 +10,7 @@ import { layouts, studios } from '../schema';
 import { ForbiddenError, NotFoundError } from '../errors';
 import { canEditLayouts, mayReadLayout, type Actor } from '../actor';
 import type { LayoutDoc } from '../../lib/layout/schema';
+import { readStoredDoc } from '../stored-doc';
 
 export const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -42,7 +43,7 @@ export async function layoutFor(actor: Actor, layoutId: string): Promise<LayoutA
   if (!row || !mayReadLayout(actor, row)) throw new NotFoundError('No such layout.');
   const canEdit = canEditLayouts(actor);
   const isClient = !canEdit;
-  return { ...row, canEdit, isClient };
+  return { ...row, doc: readStoredDoc(row.doc), canEdit, isClient };
 }
 
 /** As layoutFor, but only owners and designers pass; the layout's client gets 403. */
