@@ -4,7 +4,7 @@
  * failing on its first request; then starts the local fakes of hosted services (mail, payments)
  * where this environment wants them.
  */
-import { DatabaseLockedError, getHandle } from './db/client';
+import { DatabaseLockedError, dataDir, getHandle } from './db/client';
 import { startLocalServices } from './lib/fakes/local-services';
 import { log } from './lib/log';
 import { authSecret, MissingAuthSecret } from './lib/auth/secret';
@@ -29,10 +29,19 @@ export async function startServer(): Promise<void> {
     }
     throw err;
   }
+  await startBackupSocket();
   await startLocalServices();
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
   void import('./db/uploads')
     .then((m) => m.sweepOrphanUploads())
     .then((r) => r.removed && log.info('removed stored upload files no layout uses any more', { removed: r.removed }))
     .catch((err) => log.error('the upload sweep failed', { error: err }));
+}
+
+/** The embedded database answers `npm run db:backup` on a socket beside its folder (lib/backup/archive.ts). */
+async function startBackupSocket(): Promise<void> {
+  const handle = await getHandle();
+  if (handle.kind !== 'pglite' || !handle.dump) return;
+  const { serveBackups } = await import('./lib/backup/archive');
+  await serveBackups(dataDir(), handle.dump).catch((err) => log.error('backups cannot be taken while the app runs', { error: err }));
 }

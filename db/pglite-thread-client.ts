@@ -130,6 +130,11 @@ export class PgliteThreadClient implements Queryable {
     return result;
   }
 
+  /** The data folder as a gzipped tarball (PGlite's dumpDataDir), for backups. */
+  dump(): Promise<Uint8Array> {
+    return this.call<Uint8Array>('dump');
+  }
+
   async close(): Promise<void> {
     if (this.closed) return;
     try {
