@@ -10,6 +10,8 @@ export interface SessionUser {
   studioId: string;
   role?: 'owner' | 'designer' | 'client';
   sessionVersion?: number;
+  /** When the session signed in (seconds); now by default. */
+  signedInAt?: number;
 }
 
 /** Every session token this process minted: the log tests check that none of them is ever logged. */
@@ -18,7 +20,7 @@ export const mintedSessionTokens = new Set<string>();
 export async function sessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
-    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sub: user.id },
+    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sat: user.signedInAt ?? Math.floor(Date.now() / 1000), sub: user.id },
     secret: authSecret(),
     salt: name,
     maxAge: SESSION_MAX_AGE_S,

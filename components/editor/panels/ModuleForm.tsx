@@ -171,6 +171,7 @@ export default function ModuleForm({ module }: { module: Module }) {
 const PROP_WORDS: Record<string, string> = {
   litres: 'Capacity (litres)', watts: 'Power (W)', dutyCycle: 'Duty cycle (0–1)', burners: 'Burners', cylinders: 'Cylinders',
   cylinderKg: 'Cylinder size (kg)', belted: 'Belted seat', fillLevel: 'Fill level drawn (0–1)',
+  approved: 'Seat and belt of an approved type', anchorageTested: 'Anchorages fitted to the maker’s kit or tested',
 };
 function propLabel(k: string) {
   return PROP_WORDS[k] ?? k.replace(/([A-Z])/g, ' $1').toLowerCase();

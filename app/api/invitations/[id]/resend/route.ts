@@ -1,7 +1,7 @@
 import { handle, json, requireActor } from '@/lib/api/respond';
-import { renewInvitation } from '@/db/sharing/invitations';
+import { getInvitation, renewInvitation } from '@/db/sharing/invitations';
+import { requireMailBudget } from '@/lib/mail/budget';
 import { requireMail, sendInvitation } from '@/lib/mail/notify';
-import { requireEditor } from '@/db/sharing/access';
 
 export const dynamic = 'force-dynamic';
 
@@ -10,9 +10,15 @@ type Ctx = { params: Promise<{ id: string }> };
 /** Sends the invitation again with a fresh link and a fresh week; the older link stops working. */
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
-  requireEditor(actor, 'send invitations');
+  const { id } = await params;
+  const invitation = await getInvitation(actor, id);
+  // Without mail there is nothing to resend: 503, and the link stays as it was.
   requireMail();
-  const issued = await renewInvitation(actor, (await params).id);
+  const giveBack = await requireMailBudget(actor, invitation.email);
+  const issued = await renewInvitation(actor, id).catch(async (err: unknown) => {
+    await giveBack(); // accepted or withdrawn meanwhile: no mail went out
+    throw err;
+  });
   const mail = await sendInvitation(req, actor, issued);
   return json({ invitation: issued.invitation, mail });
 });
