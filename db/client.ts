@@ -20,6 +20,8 @@ interface DbHandle {
   db: Db;
   kind: 'pglite' | 'postgres';
   close: () => Promise<void>;
+  /** Embedded database only: a consistent gzipped tarball of its folder (for `npm run db:backup`). */
+  dump?: () => Promise<Uint8Array>;
 }
 
 const MIGRATIONS = path.join(/* turbopackIgnore: true */ process.cwd(), 'drizzle');
@@ -89,6 +91,7 @@ export async function openPglite(dir: string, options: { migrate?: boolean; thre
     return {
       db: opened.db,
       kind: 'pglite',
+      dump: opened.dump,
       close: async () => {
         await opened.close();
         releaseLock();
@@ -105,7 +108,7 @@ async function openOnThread(dir: string, options: { migrate?: boolean }): Promis
   const { PgliteThreadClient } = await import('./pglite/thread-client');
   const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
   // drizzle uses only `query` and `transaction` of the client it is given.
-  return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close() };
+  return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close(), dump: () => client.dump() };
 }
 
 async function openInThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
@@ -119,7 +122,11 @@ async function openInThread(dir: string, options: { migrate?: boolean }): Promis
   // Reads as prepared statements, as on the server's database thread.
   const db = drizzle({ client: withStatementCache(client) as never, schema });
   if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
-  return { db: db as unknown as Db, close: () => client.close() };
+  return {
+    db: db as unknown as Db,
+    close: () => client.close(),
+    dump: async () => new Uint8Array(await (await client.dumpDataDir('gzip')).arrayBuffer()),
+  };
 }
 
 /**
@@ -146,6 +153,16 @@ export function acquireLock(dir: string): () => void {
       /* already gone */
     }
   };
+}
+
+/** The live process (this one included) holding the folder's pid lock, or null. */
+export function lockHolder(dir: string): number | null {
+  try {
+    const holder = Number(fs.readFileSync(`${dir}.pid`, 'utf8').trim());
+    return holder && (holder === process.pid || isAlive(holder)) ? holder : null;
+  } catch {
+    return null;
+  }
 }
 
 export class DatabaseLockedError extends Error {

@@ -43,7 +43,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
     mutationFn: () => apiFetch<{ revision: RevisionDto; mail: string }>(`/api/layouts/${layoutId}/revisions`, { method: 'POST', json: { note } }),
     onSuccess: ({ revision, mail }) => {
       setNote('');
-      toast.success(`Revision ${revision.letter} issued${mail === 'sent' ? ' and the client told by mail' : mail === 'no-recipient' ? ' (no client on this layout yet)' : ' — the mail could not be sent'}`);
+      toast.success(`Revision ${revision.letter} issued${mail === 'sent' ? ' and the client told by mail' : mail === 'no-recipient' ? ' (no client on this layout yet)' : mail === 'not-configured' ? ' — mail is not set up on this server, so tell the client yourself' : ' — the mail could not be sent'}`);
       changed();
     },
     onError: (err) => toast.error(err.message),

@@ -7,6 +7,7 @@
  * taken here, on the main thread).
  */
 import 'server-only';
+import { log } from '../../lib/log';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 
@@ -73,7 +74,7 @@ export class PgliteThreadClient implements Queryable {
       this.pending.clear();
       if (!this.closed) {
         // Serving on without the database would only answer 500s: stop, so a supervisor restarts.
-        console.error(`[baywright] ${failure.message}; stopping the server`);
+        log.error('database thread failed; stopping the server', { error: failure });
         process.exit(1);
       }
     });
@@ -127,6 +128,11 @@ export class PgliteThreadClient implements Queryable {
     }
     await this.call('end', { tx, commit: true });
     return result;
+  }
+
+  /** The data folder as a gzipped tarball (PGlite's dumpDataDir), for backups. */
+  dump(): Promise<Uint8Array> {
+    return this.call<Uint8Array>('dump');
   }
 
   async close(): Promise<void> {

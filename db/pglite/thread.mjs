@@ -83,6 +83,11 @@ async function run(msg) {
       }
       return null;
     }
+    case 'dump': {
+      // A consistent copy of the whole cluster, taken between queries (PGlite runs one at a time).
+      const blob = await db.dumpDataDir('gzip');
+      return new Uint8Array(await blob.arrayBuffer());
+    }
     case 'close':
       await db.close();
       return null;

@@ -22,6 +22,7 @@ import { BlockList, isIP } from 'node:net';
 import diagnostics from 'node:diagnostics_channel';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { Socket } from 'node:net';
+import { log } from '@/lib/log';
 
 /** Set only by the connection policy; a caller-sent copy is always replaced. */
 export const PEER_HEADER = 'x-baywright-peer';
@@ -143,7 +144,7 @@ export function clientAddress(request: Request | undefined): string {
   if (!peer) {
     if (!warned && process.env.NODE_ENV === 'production') {
       warned = true;
-      console.error('[baywright] no connection address on a request: the connection policy is not installed; all callers share one rate-limit bucket');
+      log.warn('no connection address on a request: the connection policy is not installed; all callers share one rate-limit bucket');
     }
     return 'unknown';
   }

@@ -1,21 +1,34 @@
 /**
- * The key that signs session tokens. AUTH_SECRET in production; for a local run without one, a
- * random key is made once and kept in ./data/.auth-secret so sessions survive restarts.
+ * The key that signs session tokens. AUTH_SECRET in production, where a missing one stops the
+ * server (never a generated key: it would sign sessions nobody configured). Where local stand-ins
+ * are allowed (outside production, the demo, the tests: lib/local-mode) a random key is made once
+ * and kept in ./data/.auth-secret so sessions survive restarts.
  */
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
 import { dataRoot } from '../data-root';
 import { proxyTrust, publicUrlIsHttps } from './address';
+import { localStandInsAllowed } from '../local-mode';
+
+export class MissingAuthSecret extends Error {
+  constructor() {
+    super('AUTH_SECRET is not set. In production it must be: generate one with `openssl rand -base64 32` and give every instance the same value. (Only the demo and the tests may generate one: BAYWRIGHT_DEMO=1.)');
+    this.name = 'MissingAuthSecret';
+  }
+}
 
 let cached: string | undefined;
 
 export function authSecret(): string {
   if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
   if (cached) return cached;
-  if (process.env.NODE_ENV === 'production' && process.env.BAYWRIGHT_REQUIRE_SECRET === '1') {
-    throw new Error('AUTH_SECRET must be set in production');
+  if (process.env.NEXT_PHASE === 'phase-production-build') {
+    // `next build` evaluates this module without serving anyone: a throwaway key, kept nowhere.
+    cached = crypto.randomBytes(32).toString('base64url');
+    return cached;
   }
+  if (!localStandInsAllowed()) throw new MissingAuthSecret();
   const root = dataRoot();
   const file = path.join(root, '.auth-secret');
   try {

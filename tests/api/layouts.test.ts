@@ -279,6 +279,34 @@ describe('text the database cannot hold', () => {
   });
 });
 
+describe('text that is not text: a lone UTF-16 surrogate', () => {
+  it.each([
+    ['a layout name', { name: 'Van \ud800', bayTemplateId: 'l2h2' }, 'name'],
+    ['a low surrogate alone', { name: '\udc00 van', bayTemplateId: 'l2h2' }, 'name'],
+    ['a module label deep in the document', { name: 'ok', doc: { ...starterLayoutDoc(), modules: [{ ...starterLayoutDoc().modules[0], label: 'bed \ud83d' }] } }, 'doc.modules.0.label'],
+    ['a key of an object', { name: 'ok', doc: { ...starterLayoutDoc(), ['\ud800']: 1 } }, 'doc.\ud800'],
+  ])('in %s answers 400 naming the field, never 500, and stores nothing', async (_what, body, path) => {
+    const before = (await db.select().from(layouts)).length;
+    // JSON.stringify writes a lone surrogate as a \u escape, which is how a client would send it.
+    const res = await call(list.POST, { method: 'POST', as: w.designer, body: JSON.stringify(body), headers: { 'content-type': 'application/json' } });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toEqual([{ path, message: expect.stringMatching(/broken character/) }]);
+    expect((await db.select().from(layouts)).length).toBe(before);
+  });
+
+  it('is refused on a save too, and the stored layout keeps its name', async () => {
+    const id = w.clientLayoutId;
+    const before = await stored(id);
+    const res = await call(one.PUT, {
+      method: 'PUT', as: w.designer, params: { id }, headers: { 'if-match': String(before.version), 'content-type': 'application/json' },
+      body: JSON.stringify({ name: 'Renamed \udfff', doc: starterLayoutDoc() }),
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].path).toBe('name');
+    expect((await stored(id)).name).toBe(before.name);
+  });
+});
+
 function starterLayoutDoc() {
   return structuredClone(starterLayout('starter-l-lounge')!);
 }

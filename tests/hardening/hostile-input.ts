@@ -17,14 +17,18 @@ import { call, type CallOptions } from '../helpers/http';
 import { buildWorld } from '../helpers/world';
 import { PEER_HEADER } from '@/lib/auth/address';
 import { ROWS, type Fixture } from './access-rows';
+import { captureLog, KNOWN_TEST_PASSWORDS, leakedSecrets, storedHashes, type LogCapture } from '../helpers/log-capture';
+import { DUMMY_HASH } from '@/lib/auth/password';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 1000);
 let db: Db;
 let fx: Fixture;
 const unhandled: unknown[] = [];
 const onUnhandled = (reason: unknown) => unhandled.push(reason);
+let captured: LogCapture;
 
 beforeAll(async () => {
+  captured = captureLog();
   // Uploaded files of these tests go to a folder of their own.
   process.env.BAYWRIGHT_DATA_ROOT = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-matrix-'));
   db = await useFreshDb();
@@ -33,6 +37,7 @@ beforeAll(async () => {
 });
 afterAll(() => {
   process.off('unhandledRejection', onUnhandled);
+  captured.stop();
 });
 
 let seq = 0;
@@ -156,6 +161,11 @@ export function fuzzWriteRoutes(half: 0 | 1): void {
       );
       expect(unhandled).toEqual([]);
     }, 300_000);
+  });
+
+  it('logged no password, password hash or session token while under attack', async () => {
+    const secrets = [...KNOWN_TEST_PASSWORDS, DUMMY_HASH, ...(await storedHashes(db))];
+    expect(leakedSecrets(captured.lines, secrets)).toEqual([]);
   });
   }
 

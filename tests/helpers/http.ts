@@ -31,6 +31,9 @@ export function sessionCookie(user: SessionUser): Promise<string> {
   return cookie;
 }
 
+/** Every session token this process minted: the log tests check that none of them is ever logged. */
+export const mintedSessionTokens = new Set<string>();
+
 async function mintSessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
@@ -39,6 +42,7 @@ async function mintSessionCookie(user: SessionUser): Promise<string> {
     salt: name,
     maxAge: SESSION_MAX_AGE_S,
   });
+  mintedSessionTokens.add(token);
   return `${name}=${token}`;
 }
 

@@ -70,7 +70,7 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
         json: { layoutVersion: savedVersion, depositPct: v.depositPct, ...(v.note ? { note: v.note } : {}), cut },
       }),
     onSuccess: (res) => {
-      toast.success(res.mail === 'sent' ? `Quote sent to ${clientName ?? 'the client'}` : 'Quote saved; the mail to the client could not be sent');
+      toast.success(res.mail === 'sent' ? `Quote sent to ${clientName ?? 'the client'}` : res.mail === 'not-configured' ? 'Quote saved; mail is not set up on this server, so tell the client yourself' : 'Quote saved; the mail to the client could not be sent');
       qc.setQueryData(['quote', layoutId], { quote: res.quote });
     },
     onError: (err) => {
