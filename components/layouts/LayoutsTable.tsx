@@ -10,9 +10,9 @@ import { ArrowDown, ArrowUp, MessageSquare, Plus, Search } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { LayoutSummaryDto } from '@/db/layouts';
 import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
+import { formatDateTime } from '@/lib/format';
 
 const col = createColumnHelper<LayoutSummaryDto>();
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
   const query = useQuery({ queryKey: ['layouts'], queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>('/api/layouts') });
@@ -53,7 +53,7 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
       col.accessor('updatedAt', {
         header: 'Last change',
         cell: (c) => (
-          <span className="text-ink-soft">{when.format(new Date(c.getValue()))}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
+          <span className="text-ink-soft">{formatDateTime(c.getValue())}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
         ),
       }),
     ],

@@ -12,8 +12,8 @@ import { CheckCircle2, MapPin, MessageSquare, Pencil, RotateCcw, Trash2, X } fro
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { CommentDto, ThreadDto } from '@/db/sharing/comments';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'travel', lounge: 'lounge', sleep: 'sleep' };
 const ROLE_WORD = { owner: 'workshop', designer: 'workshop', client: 'client' } as const;
 
@@ -159,7 +159,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
         <span className="min-w-0 flex-1">
           <span className="block whitespace-pre-wrap break-words">{thread.body}</span>
           <span className="mt-1 block text-xs text-ink-soft">
-            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {WHEN.format(new Date(thread.createdAt))}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
+            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {formatDateTime(thread.createdAt)}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
             <span className="font-mono">x {thread.x} mm, y {thread.y} mm</span>
           </span>
           {thread.resolved && <span className="mt-1 inline-flex items-center gap-1 text-xs text-moss"><CheckCircle2 size={12} aria-hidden="true" /> Resolved</span>}
@@ -171,7 +171,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
           {thread.replies.map((r) => (
             <div key={r.id} className="border-l-2 border-paper-edge pl-2" data-testid="comment-reply">
               <p className="whitespace-pre-wrap break-words">{r.body}</p>
-              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {WHEN.format(new Date(r.createdAt))}{r.editedAt ? ' · edited' : ''}</p>
+              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {formatDateTime(r.createdAt)}{r.editedAt ? ' · edited' : ''}</p>
               <OwnCommentControls layoutId={layoutId} comment={r} onChanged={onChanged} onRemoved={onChanged} />
             </div>
           ))}

@@ -8,27 +8,24 @@
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useQuery } from '@tanstack/react-query';
-import { ArrowDownRight, ArrowUpRight, CircleCheck, CircleX, CircleAlert, Minus, MoveRight, Plus, Scaling } from 'lucide-react';
+import { ArrowDownRight, ArrowUpRight, Minus, MoveRight, Plus, Scaling } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
-import { ARRANGEMENTS, type Arrangement, type Module } from '@/lib/layout/schema';
-import { KINDS } from '@/lib/layout/kinds';
+import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
+import type { Arrangement, Module } from '@/lib/layout/schema';
 import type { ComparisonDto } from '@/db/sharing/compare';
 import { RevisionPlanSvg } from './RevisionPlanSvg';
+import { StatusInline } from '@/components/checks/FindingParts';
+import { ruleName } from '@/lib/checks/words';
+import { moduleLabel } from '@/lib/layout/kinds';
+import { fieldName } from '@/lib/layout/field-names';
 
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
-const STATUS = {
-  pass: { word: 'pass', Icon: CircleCheck, className: 'text-moss' },
-  warn: { word: 'warn', Icon: CircleAlert, className: 'text-ochre' },
-  fail: { word: 'fail', Icon: CircleX, className: 'text-brick' },
-} as const;
-
-const name = (m: Module) => m.label ?? KINDS[m.kind].title;
+const name = (m: Module) => moduleLabel(m);
 const signed = (n: number) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${Math.abs(n)} mm`;
 
 function Status({ s, side }: { s: 'pass' | 'warn' | 'fail' | null; side: 'before' | 'after' }) {
   if (!s) return <span className="text-ink-soft">{side === 'before' ? 'not raised' : 'no longer raised'}</span>;
-  const { word, Icon, className } = STATUS[s];
-  return <span className={`inline-flex items-center gap-1 ${className}`}><Icon size={12} aria-hidden="true" />{word}</span>;
+  return <StatusInline status={s} />;
 }
 
 export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: string; letters: string[]; from: string; to: string }) {
@@ -97,7 +94,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                             {c.moved && c.resized && ' · '}
                             {c.resized && `${c.before.length} × ${c.before.width} × ${c.before.height} → ${c.after.length} × ${c.after.width} × ${c.after.height} mm`}
                           </span>
-                          {c.other.length > 0 && <span className="block text-xs text-ink-soft">also changed: {c.other.join(', ')}</span>}
+                          {c.other.length > 0 && <span className="block text-xs text-ink-soft">also changed: {c.other.map((f) => fieldName(f).toLowerCase()).join(', ')}</span>}
                         </span>
                       </li>
                     ))}
@@ -107,7 +104,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                   <>
                     <h3 className="mb-1 mt-3 font-medium">Bay</h3>
                     <ul className="space-y-0.5 text-xs">
-                      {q.data.diff.bay.map((b) => <li key={b.field}>{b.field}: <span className="font-mono">{b.before} → {b.after}</span></li>)}
+                      {q.data.diff.bay.map((b) => <li key={b.field}>{fieldName(`bay.${b.field}`)}: <span className="font-mono">{b.before} → {b.after}</span></li>)}
                     </ul>
                   </>
                 )}
@@ -120,7 +117,7 @@ export function RevisionCompare({ layoutId, letters, from, to }: { layoutId: str
                       <li key={f.key} className="flex gap-2">
                         {f.direction === 'worse' ? <ArrowDownRight size={14} className="mt-0.5 text-brick" aria-label="worse" /> : <ArrowUpRight size={14} className="mt-0.5 text-moss" aria-label="better" />}
                         <span>
-                          <span className="font-mono text-xs">{f.id}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
+                          <span className="text-xs font-semibold">{ruleName(f.id)}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
                           <Status s={f.before} side="before" /> → <Status s={f.after} side="after" />
                           <span className="block text-xs text-ink-soft">{f.message}</span>
                         </span>

@@ -16,8 +16,8 @@ import { apiFetch } from '@/lib/api/client-fetch';
 import type { RevisionDto } from '@/db/sharing/revisions';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { LayoutStateBadge } from './LayoutStateBadge';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 interface Props {
   layoutId: string;
@@ -116,7 +116,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
             Revision {r.letter} <LayoutStateBadge state={r.state} />
             {!r.isLatest && <span className="text-xs font-normal text-ink-soft">superseded</span>}
           </h3>
-          <p className="text-xs text-ink-soft">Issued {WHEN.format(new Date(r.issuedAt))}{r.issuedBy ? ` by ${r.issuedBy}` : ''} · layout version <span className="font-mono">{r.layoutVersion}</span></p>
+          <p className="text-xs text-ink-soft">Issued {formatDateTime(r.issuedAt)}{r.issuedBy ? ` by ${r.issuedBy}` : ''} · layout version <span className="font-mono">{r.layoutVersion}</span></p>
           {r.note && <p className="mt-2 whitespace-pre-wrap text-sm">{r.note}</p>}
         </div>
         <div className="flex flex-wrap gap-2">
@@ -135,7 +135,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
             <li key={i} className="flex gap-2">
               {d.decision === 'approved' ? <CheckCircle2 size={16} className="mt-0.5 shrink-0 text-moss" aria-hidden="true" /> : <MessageSquareWarning size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />}
               <span>
-                <strong>{d.decision === 'approved' ? 'Approved' : 'Changes asked'}</strong> by {d.by}, {WHEN.format(new Date(d.at))}
+                <strong>{d.decision === 'approved' ? 'Approved' : 'Changes asked'}</strong> by {d.by}, {formatDateTime(d.at)}
                 {d.message && <span className="block whitespace-pre-wrap text-ink-soft">“{d.message}”</span>}
               </span>
             </li>

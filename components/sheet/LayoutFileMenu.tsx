@@ -14,7 +14,10 @@ import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { useEditorApi } from '@/components/editor/store/EditorStoreContext';
 import { downloadBlob, planToPng } from './exportPlan';
-import { issueLines, layoutFileName, layoutFileText, readLayoutFile } from './layoutFile';
+
+// The file helpers validate imports with the full layout schema: fetched when a File action runs,
+// so the schema library stays out of the editor's first load.
+const layoutFile = () => import('./layoutFile');
 
 export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdit: boolean }) {
   const api = useEditorApi();
@@ -30,19 +33,22 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
     const plan = root.current?.closest('[data-testid="editor"]')?.querySelector<HTMLElement>('[data-testid="plan"]');
     try {
       if (!plan) throw new Error('The plan is not on screen.');
+      const { layoutFileName } = await layoutFile();
       downloadBlob(await planToPng(plan), layoutFileName(api.getState().doc.name, `${api.getState().arrangement}.png`));
     } catch (err) {
       toast.error(err instanceof Error ? err.message : 'The PNG could not be made.');
     }
   }
 
-  function exportJson() {
+  async function exportJson() {
     setOpen(false);
     const { doc } = api.getState();
+    const { layoutFileName, layoutFileText } = await layoutFile();
     downloadBlob(new Blob([layoutFileText(doc)], { type: 'application/json' }), layoutFileName(doc.name));
   }
 
   async function importFile(file: File) {
+    const { issueLines, readLayoutFile } = await layoutFile();
     setBusy(true);
     try {
       const result = readLayoutFile(await file.text(), file.size);
@@ -87,8 +93,8 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
       <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to import"
         onChange={(e) => e.target.files?.[0] && importFile(e.target.files[0])} />
       <Dialog open={problems !== null} title="This file is not a layout Baywright can read" onClose={() => setProblems(null)} testId="import-problems">
-        <p className="mb-2 text-sm">{problems?.file} has these problems (field path: what is wrong):</p>
-        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 font-mono text-xs">
+        <p className="mb-2 text-sm">{problems?.file} has these problems (field: what is wrong):</p>
+        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 text-xs">
           {problems?.lines.map((l, i) => <li key={i}>{l}</li>)}
         </ul>
         <button type="button" className="btn-primary" onClick={() => setProblems(null)}>Close</button>

@@ -19,7 +19,7 @@ export function downloadBlob(blob: Blob, fileName: string): void {
 
 /** The current canvas view as PNG: the stage under `planElement`, on the paper colour. */
 export async function planToPng(planElement: HTMLElement, pixelRatio = 2): Promise<Blob> {
-  const Konva = (await import('konva')).default;
+  const Konva = (await import('konva/lib/Core')).default;
   const stage = Konva.stages.find((s) => planElement.contains(s.container()));
   if (!stage) throw new Error('The plan is not drawn yet; wait a moment and try again.');
   const drawn = stage.toCanvas({ pixelRatio });

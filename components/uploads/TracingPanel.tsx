@@ -6,13 +6,16 @@
  * Owners and designers place; the layout's client sees what is placed.
  */
 import { useRef, useState } from 'react';
+import dynamic from 'next/dynamic';
 import { toast } from 'sonner';
 import { ChevronDown, ImagePlus, Layers } from 'lucide-react';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { LengthUnit } from '@/lib/layout';
 import type { TracingPlacement } from '@/lib/tracing/calibration';
 import type { UploadDto } from '@/lib/uploads/dto';
-import { CalibrateDialog } from './CalibrateDialog';
+
+// The calibration dialog (and the tracing maths it runs) loads when a photo is first calibrated.
+const CalibrateDialog = dynamic(() => import('./CalibrateDialog').then((m) => m.CalibrateDialog), { ssr: false });
 import { sendFile } from './sendFile';
 import { precheck } from './UploadsPanel';
 import { useUploadActions, useUploads } from './useUploads';

@@ -9,6 +9,7 @@ import type { z } from 'zod';
 import { issuesFromZod, type FieldIssue } from '@/lib/layout/parse';
 import { actorFromRequest } from '@/lib/auth/session';
 import type { Actor } from '@/db/actor';
+import { WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
 
 export class HttpError extends Error {
   constructor(readonly status: number, message: string, readonly extra: Record<string, unknown> = {}) {
@@ -122,7 +123,15 @@ export function handle<C>(fn: Handler<C>): Handler<C> {
 export function errorResponse(err: unknown): Response {
   if (err instanceof HttpError) {
     const res = problem(err.status, err.message, err.extra);
-    if (typeof err.extra.retryAfter === 'number') res.headers.set('Retry-After', String(err.extra.retryAfter));
+    const retry = err.extra.retryAfter;
+    if (typeof retry === 'number' && retry > 0) res.headers.set('Retry-After', String(Math.ceil(retry)));
+    return res;
+  }
+  // The work pool is full (or stopping): come back shortly; other requests keep flowing.
+  if (err instanceof WorkPoolBusyError || err instanceof WorkPoolClosedError) {
+    const retry = err instanceof WorkPoolBusyError ? err.retryAfterSeconds : 5;
+    const res = problem(503, err.message, { retryAfter: retry });
+    res.headers.set('Retry-After', String(retry));
     return res;
   }
   const status = (err as { status?: unknown })?.status;

@@ -6,6 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
 import { dataRoot } from '../data-root';
+import { proxyTrust, publicUrlIsHttps } from './address';
 
 let cached: string | undefined;
 
@@ -33,9 +34,19 @@ export function authSecret(): string {
   return cached;
 }
 
-/** Cookies are Secure when the app is served over HTTPS. */
+/** Cookies are always Secure when the public URL (AUTH_URL or BAYWRIGHT_PUBLIC_URL) is https. */
 export function secureCookiesWanted(): boolean {
-  return (process.env.AUTH_URL ?? '').startsWith('https://');
+  return publicUrlIsHttps();
+}
+
+/**
+ * Auth.js's `useSecureCookies`: always with an https public URL; per request behind a trusted
+ * proxy (undefined lets Auth.js follow the request's scheme, which the connection policy in
+ * lib/auth/address.ts took from the proxy's X-Forwarded-Proto); never otherwise.
+ */
+export function secureCookiesSetting(): boolean | undefined {
+  if (publicUrlIsHttps()) return true;
+  return proxyTrust().kind === 'none' ? false : undefined;
 }
 
 /** Idle timeout: a session not used for 12 hours ends (each use re-issues the cookie). */
@@ -52,6 +63,6 @@ export function withinAbsoluteLifetime(signedInAt: unknown, nowMs = Date.now()):
   return typeof signedInAt === 'number' && signedInAt * 1000 <= nowMs + 60_000 && nowMs < (signedInAt + SESSION_ABSOLUTE_S) * 1000;
 }
 
-export function sessionCookieName(): string {
-  return secureCookiesWanted() ? '__Secure-authjs.session-token' : 'authjs.session-token';
+export function sessionCookieName(secure = secureCookiesWanted()): string {
+  return secure ? '__Secure-authjs.session-token' : 'authjs.session-token';
 }

@@ -11,3 +11,4 @@ export * from './largestRectangle';
 export * from './spatialIndex';
 export * from './freeFloor';
 export * from './widestPath';
+export * from './workBudget';

@@ -112,7 +112,7 @@ test('in the editor: the File menu exports PNG and JSON, refuses a bad import wi
   const bad = { ...doc, bay: { ...doc.bay, length: 3000.5 } };
   await page.getByLabel('Choose a layout file to import').setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) });
   const problems = page.getByTestId('import-problems');
-  await expect(problems).toContainText('bay.length: must be a whole number of millimetres');
+  await expect(problems).toContainText('Bay length: must be a whole number of millimetres');
   await problems.getByRole('button', { name: 'Close' }).click();
 
   await page.getByRole('button', { name: /^Tracing/ }).click();

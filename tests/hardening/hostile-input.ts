@@ -15,6 +15,7 @@ import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, type CallOptions } from '../helpers/http';
 import { buildWorld } from '../helpers/world';
+import { PEER_HEADER } from '@/lib/auth/address';
 import { ROWS, type Fixture } from './access-rows';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 1000);
@@ -140,7 +141,7 @@ export function fuzzWriteRoutes(half: 0 | 1): void {
             method: row.method,
             params: template.params,
             // A new address each time, so per-address limits (sign-up) do not hide the validation behind a 429.
-          headers: { ...template.headers, 'content-type': attack.contentType, 'x-forwarded-for': `10.77.${(seq >> 8) & 255}.${seq++ & 255}` },
+          headers: { ...template.headers, 'content-type': attack.contentType, [PEER_HEADER]: `10.77.${(seq >> 8) & 255}.${seq++ & 255}` },
             body: attack.body,
             as: fx.world.designer,
           });

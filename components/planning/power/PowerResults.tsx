@@ -11,10 +11,11 @@ import type { Finding } from '@/lib/checks/types';
 import { cableSize, checkFittedCable, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, EN1648_MIN_AUX_AH, powerBudget, type InsulationRating } from '@/lib/planning';
 import { FindingList, findingsOf } from '../FindingList';
 import { Caution } from '../fields';
+import { formatNumber } from '@/lib/format';
 
 const SEASON = { summer: 'Summer', shoulder: 'Spring/autumn', winter: 'Winter' } as const;
-const n0 = (n: number) => Math.round(n).toLocaleString('en-GB');
-const n1 = (n: number) => (Math.round(n * 10) / 10).toLocaleString('en-GB');
+const n0 = (n: number) => formatNumber(n);
+const n1 = (n: number) => formatNumber(n, 1);
 
 function circuitRows(doc: LayoutDoc) {
   const power = doc.systems?.power;

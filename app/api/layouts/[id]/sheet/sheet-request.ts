@@ -1,7 +1,7 @@
 /**
  * Gathers what a plan sheet of a stored layout needs — the document, the studio, the client, the
- * studio's units and check defaults, the check report — for the PDF route and the HTML print
- * view alike, after the rights checks of `getLayout` (404 for anyone who may not see it). The
+ * studio's units and check defaults — for the PDF route and the HTML print view alike (the checks
+ * and the drawing itself run in the work pool, lib/workers: job `sheet` / `sheetPdf`), after the rights checks of `getLayout` (404 for anyone who may not see it). The
  * revisions feature can pass a frozen revision (letter and document) to print that instead of
  * the working copy (`?revision=B`). Server only; never trusts a query string beyond its schema.
  */
@@ -9,12 +9,12 @@ import 'server-only';
 import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
-import { getStudio, withStudioDefaults } from '@/db/studios';
+import { getStudio } from '@/db/studios';
 import { getRevision, revisionIdByLetter } from '@/db/sharing/revisions';
-import { runChecks } from '@/lib/checks';
-import type { CheckReport } from '@/lib/checks/types';
 import type { LayoutDoc } from '@/lib/layout';
-import { REVISION_LETTER, type SheetRequest } from '@/lib/sheet';
+import { REVISION_LETTER } from '@/lib/sheet';
+import { formatDate } from '@/lib/format';
+import type { SheetInput } from '@/lib/workers/jobs';
 
 /** `?paper=a4|a3&scale=10|20|25`; both optional (A4 at 1:20). */
 export const sheetQuerySchema = z.strictObject({
@@ -37,13 +37,13 @@ export interface FrozenRevision {
 
 export interface SheetContext {
   /** Everything but the paper and scale, which the caller chooses. */
-  request: Omit<SheetRequest, 'paper' | 'scale'>;
+  request: Omit<SheetInput, 'paper' | 'scale'>;
   layoutId: string;
   layoutName: string;
 }
 
 export function today(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
+  return formatDate(now);
 }
 
 /** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
@@ -58,21 +58,12 @@ export async function sheetRequestFor(actor: Actor, layoutId: string, revision?:
   if (revision && !REVISION_LETTER.test(revision.letter)) throw new Error(`not a revision letter: ${revision.letter}`);
   const studio = await getStudio(actor);
   const doc = revision?.doc ?? layout.doc;
-  let report: CheckReport | null = null;
-  let checksUnavailable: string | undefined;
-  try {
-    report = runChecks(withStudioDefaults(doc, studio.checkDefaults));
-  } catch (err) {
-    console.error('[baywright] checks failed while making a plan sheet', err);
-    checksUnavailable = 'the check engine stopped on this layout';
-  }
   return {
     layoutId: layout.id,
     layoutName: layout.name,
     request: {
       doc,
-      report,
-      checksUnavailable,
+      studioDefaults: studio.checkDefaults,
       units: studio.units,
       details: { studio: studio.name, client: layout.client?.name ?? null, layout: layout.name, revision: revision?.letter ?? null, date: today() },
     },
