@@ -36,10 +36,11 @@ test('forgot password → mail → new password → change it in Settings', asyn
   const asker = await (await browser.newContext()).newPage();
   await asker.goto('/sign-in');
   await asker.getByRole('link', { name: 'Forgot your password?' }).click();
+  await asker.waitForLoadState('networkidle'); // the form must be live before typing into it
   await asker.getByLabel('E-mail').fill(`nobody.${stamp}@selfbuild.test`);
   await asker.getByRole('button', { name: 'Send me a link' }).click();
   const unknownWords = await asker.getByTestId('reset-requested').textContent();
-  await asker.goto('/reset-password');
+  await asker.goto('/reset-password', { waitUntil: 'networkidle' });
   await asker.getByLabel('E-mail').fill(EMAIL);
   await asker.getByRole('button', { name: 'Send me a link' }).click();
   await expect(asker.getByTestId('reset-requested')).toHaveText(unknownWords!);
@@ -50,7 +51,7 @@ test('forgot password → mail → new password → change it in Settings', asyn
   expect(link, 'the reset mail carries a link').toBeTruthy();
 
   // The link: a common password is refused with a clear message, then a good one signs the person in.
-  await asker.goto(new URL(link!).pathname);
+  await asker.goto(new URL(link!).pathname, { waitUntil: 'networkidle' });
   await asker.getByLabel('New password').fill('qwerty123456');
   await asker.getByLabel('Repeat it').fill('qwerty123456');
   await asker.getByRole('button', { name: 'Set the new password' }).click();
@@ -67,7 +68,7 @@ test('forgot password → mail → new password → change it in Settings', asyn
   await expect(reader.getByTestId('reset-gone')).toBeVisible();
 
   // Settings → Your password.
-  await asker.goto('/settings');
+  await asker.goto('/settings', { waitUntil: 'networkidle' });
   await asker.getByLabel('Current password').fill(SECOND);
   await asker.getByLabel('New password').fill(THIRD);
   await asker.getByLabel('Repeat it').fill(THIRD);

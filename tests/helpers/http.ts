@@ -20,7 +20,7 @@ export interface SessionUser {
 const minted = new Map<string, Promise<string>>();
 
 export function sessionCookie(user: SessionUser): Promise<string> {
-  const key = JSON.stringify([sessionCookieName(), authSecret(), user.id, user.studioId, user.role, user.sessionVersion ?? 0, Math.floor(Date.now() / 60_000)]);
+  const key = JSON.stringify([sessionCookieName(), authSecret(), user.id, user.studioId, user.role, user.sessionVersion ?? 0, user.signedInAt ?? null, Math.floor(Date.now() / 60_000)]);
   let cookie = minted.get(key);
   if (!cookie) {
     if (minted.size > 1000) minted.clear();
