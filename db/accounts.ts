@@ -62,21 +62,21 @@ function signInKeys(email: string, address: string): { key: string; rule: Thrott
  */
 async function reserveComparison(email: string, address: string): Promise<{ ok: true; settle: (good: boolean) => Promise<void> } | { ok: false; retryAfterS: number }> {
   const keys = signInKeys(email, address);
-  const taken: string[] = [];
-  for (const { key, rule } of keys) {
-    const r = await reserve(key, rule);
+  const taken: typeof keys = [];
+  for (const k of keys) {
+    const r = await reserve(k.key, k.rule);
     if (!r.ok) {
-      await Promise.all(taken.map(refund));
+      await Promise.all(taken.map((t) => refund(t.key, t.rule)));
       return { ok: false, retryAfterS: r.retryAfterS };
     }
-    taken.push(key);
+    taken.push(k);
   }
   return {
     ok: true,
     async settle(good) {
       if (!good) return; // a failure stays counted under every key
-      const [addressKey, accountAddressKey, accountKey] = keys.map((k) => k.key);
-      await Promise.all([refund(addressKey), clearKey(accountAddressKey), refund(accountKey)]);
+      const [address, accountAddress, account] = keys;
+      await Promise.all([refund(address.key, address.rule), clearKey(accountAddress.key), refund(account.key, account.rule)]);
     },
   };
 }

@@ -83,12 +83,17 @@ export async function reserve(key: string, rule: ThrottleRule, now = new Date())
 
 /**
  * Gives one attempt back (it turned out to be a success, or a later check refused it). A wait
- * already earned stays: a success on one account must not lift the delay on guesses at others.
+ * that the remaining counted attempts earned stays: a success on one account must not lift the
+ * delay on guesses at others. A wait that only the given-back attempt started goes with it.
  */
-export async function refund(key: string): Promise<void> {
+export async function refund(key: string, rule: ThrottleRule): Promise<void> {
   const db = await getDb();
   const t = throttleCounters;
-  await db.update(t).set({ count: sql`GREATEST(${t.count} - 1, 0)` }).where(eq(t.key, key));
+  const after = sql`GREATEST(${t.count} - 1, 0)`;
+  await db
+    .update(t)
+    .set({ count: after, notBefore: sql`CASE WHEN ${after} < ${rule.free} THEN NULL ELSE ${t.notBefore} END` })
+    .where(eq(t.key, key));
 }
 
 /** Forgets a key (a successful sign-in clears its own account-and-address counter). */

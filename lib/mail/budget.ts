@@ -49,17 +49,18 @@ export async function takeMailBudget(sender: MailSender, invitee?: string): Prom
     [throttleKey('mail-studio', sender.studioId), MAIL_BUDGETS.studio, 'studio'],
   ];
   if (invitee) keys.push([throttleKey('mail-invitee', sender.studioId, invitee.toLowerCase()), MAIL_BUDGETS.invitee, 'invitee']);
-  const taken: string[] = [];
+  const taken: [string, ThrottleRule][] = [];
+  const giveBack = () => Promise.all(taken.map(([key, rule]) => refund(key, rule)));
   for (const [key, rule, scope] of keys) {
     const r = await reserve(key, rule);
     if (!r.ok) {
-      await Promise.all(taken.map(refund));
+      await giveBack();
       throw new MailBudgetSpent(r.retryAfterS, scope);
     }
-    taken.push(key);
+    taken.push([key, rule]);
   }
   return async () => {
-    await Promise.all(taken.map(refund));
+    await giveBack();
   };
 }
 
