@@ -32,7 +32,18 @@ export function pngBytes(w = 8, h = 6, rgb: [number, number, number] = [164, 82,
   ]);
 }
 
-export const jpegBytes = () => Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10]), Buffer.from('JFIF\0'), Buffer.alloc(200, 7), Buffer.from([0xff, 0xd9])]);
+/**
+ * The head of a 640 × 480 baseline JPEG: start of image, a JFIF APP0 segment, a start-of-frame
+ * segment that carries the size (what the upload's size check reads), some scan bytes, end of image.
+ */
+export const jpegBytes = () =>
+  Buffer.concat([
+    Buffer.from([0xff, 0xd8]),
+    Buffer.from([0xff, 0xe0, 0x00, 0x10]), Buffer.from('JFIF\0'), Buffer.from([1, 1, 0, 0, 1, 0, 1, 0, 0]),
+    Buffer.from([0xff, 0xc0, 0x00, 0x11, 8, 0x01, 0xe0, 0x02, 0x80, 3, 1, 0x22, 0, 2, 0x11, 1, 3, 0x11, 1]),
+    Buffer.alloc(200, 7),
+    Buffer.from([0xff, 0xd9]),
+  ]);
 export const webpBytes = () => Buffer.concat([Buffer.from('RIFF'), Buffer.from([0x24, 0, 0, 0]), Buffer.from('WEBPVP8 '), Buffer.alloc(40, 1)]);
 export const pdfBytes = () => Buffer.from('%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n');
 
