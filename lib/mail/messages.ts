@@ -1,6 +1,6 @@
 /**
  * The words of every mail Baywright sends about working with a client: the invitation, a new
- * revision, the client's decision, a new comment. Pure functions of their inputs (names, links,
+ * revision, the client’s decision, a new mark-up. Pure functions of their inputs (names, links,
  * letters); the caller supplies absolute links. Must never look anything up or send anything.
  */
 import { compose, oneLine, type ComposedMail } from './compose';
@@ -14,7 +14,7 @@ export function invitationMail(p: { clientName: string; studioName: string; invi
   return compose(`${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,
     paragraphs: [
-      `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, comment on the drawing and approve revisions.`,
+      `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, leave mark-ups on the drawing and approve revisions.`,
       ...(p.layoutName ? [`The layout waiting for you: ${p.layoutName}.`] : []),
       `Set a password to join. The link works once and until ${until}.`,
     ],
@@ -54,12 +54,12 @@ export function decisionMail(p: { recipientName: string; clientName: string; lay
   );
 }
 
-export function commentMail(p: { recipientName: string; authorName: string; layoutName: string; body: string; reply: boolean; url: string }): ComposedMail {
+export function markupMail(p: { recipientName: string; authorName: string; layoutName: string; body: string; reply: boolean; url: string }): ComposedMail {
   return compose(
-    p.reply ? `${oneLine(p.authorName, 80)} replied on ${oneLine(p.layoutName, 80)}` : `${oneLine(p.authorName, 80)} commented on ${oneLine(p.layoutName, 80)}`,
+    p.reply ? `${oneLine(p.authorName, 80)} replied to a mark-up on ${oneLine(p.layoutName, 80)}` : `${oneLine(p.authorName, 80)} left a mark-up on ${oneLine(p.layoutName, 80)}`,
     {
       greeting: `Hello ${oneLine(p.recipientName, 80)},`,
-      paragraphs: [p.reply ? `${p.authorName} replied to a comment on ${p.layoutName}:` : `${p.authorName} pinned a comment on ${p.layoutName}:`],
+      paragraphs: [p.reply ? `${p.authorName} replied to a mark-up on ${p.layoutName}:` : `${p.authorName} left a mark-up on ${p.layoutName}:`],
       quote: p.body,
       action: { label: 'Open the layout', url: p.url },
     },

@@ -30,7 +30,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   return (
     <AuthCard title={`Join ${inv.studioName}`} footer={<>Already have a password? <Link className="text-copper underline" href="/sign-in">Sign in</Link></>}>
       <p className="mb-4 text-sm text-ink-soft">
-        {inv.inviterName ? `${inv.inviterName} invited you` : 'You were invited'} to follow your van’s design, comment on the plan and approve revisions.
+        {inv.inviterName ? `${inv.inviterName} invited you` : 'You were invited'} to follow your van’s design, leave mark-ups on the plan and approve revisions.
       </p>
       <AcceptInvitationForm token={token} email={inv.email} name={inv.name} />
     </AuthCard>
