@@ -5,9 +5,10 @@
  */
 import { compose, oneLine, type ComposedMail } from './compose';
 
-/** Said wherever a plan is sent or approved: the plan does not replace licensed sign-off. */
-export const SIGN_OFF_CAUTION =
-  'Gas, 230 V, heating, seat belts and anchorages, and the van’s weight limits are installed, tested and signed off by qualified fitters to local rules; an approved plan does not replace that.';
+import { SIGN_OFF_CAUTION } from '../layout/cautions';
+
+/** Said wherever a plan is issued or approved (its words live in lib/layout/cautions). */
+export { SIGN_OFF_CAUTION };
 
 export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null }): ComposedMail {
   const until = p.expiresAt.toISOString().slice(0, 10);
@@ -24,10 +25,10 @@ export function invitationMail(p: { clientName: string; studioName: string; invi
 }
 
 export function revisionIssuedMail(p: { clientName: string; studioName: string; layoutName: string; letter: string; note: string; url: string }): ComposedMail {
-  return compose(`Revision ${p.letter} of ${oneLine(p.layoutName, 80)} is ready for you`, {
+  return compose(`Revision ${p.letter} of ${oneLine(p.layoutName, 80)} is issued for your approval`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,
     paragraphs: [
-      `${p.studioName} has issued revision ${p.letter} of ${p.layoutName}. Look it over, then approve it or ask for changes.`,
+      `${p.studioName} has issued revision ${p.letter} of ${p.layoutName} for your approval. Look it over, then approve it or return it for changes.`,
     ],
     quote: p.note || undefined,
     action: { label: `Open revision ${p.letter}`, url: p.url },
@@ -39,13 +40,13 @@ export function decisionMail(p: { recipientName: string; clientName: string; lay
   const approved = p.decision === 'approved';
   return compose(
     approved ? `${oneLine(p.clientName, 80)} approved revision ${p.letter} of ${oneLine(p.layoutName, 80)}`
-      : `${oneLine(p.clientName, 80)} asked for changes to revision ${p.letter} of ${oneLine(p.layoutName, 80)}`,
+      : `${oneLine(p.clientName, 80)} returned revision ${p.letter} of ${oneLine(p.layoutName, 80)} for changes`,
     {
       greeting: `Hello ${oneLine(p.recipientName, 80)},`,
       paragraphs: [
         approved
           ? `${p.clientName} approved revision ${p.letter} of ${p.layoutName}. The approval is recorded and cannot be changed.`
-          : `${p.clientName} asked for changes to revision ${p.letter} of ${p.layoutName}.`,
+          : `${p.clientName} returned revision ${p.letter} of ${p.layoutName} for changes, with these words:`,
       ],
       quote: p.message || undefined,
       action: { label: 'See the revisions', url: p.url },

@@ -13,6 +13,7 @@ import type { Finding, FindingStatus } from '@/lib/checks/types';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
 import type { LiveChecks } from '../api/useLiveChecks';
 import { groupFindings } from './findingGroups';
+import { CHECKS_CAUTION } from '@/lib/layout/cautions';
 
 export const STATUS_LOOK: Record<FindingStatus, { word: string; Icon: typeof CircleCheck; cls: string }> = {
   // Words in ink on the light status tint (contrast); the icon carries the status colour.
@@ -99,7 +100,7 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
           </section>
         ))}
         <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-soft">
-          Checks are planning aids, not certification. Gas, 230 V, heating, seat belts and weight limits must follow your local codes and be fitted and signed off by a qualified, licensed person.
+          {CHECKS_CAUTION}
         </p>
       </div>
     </div>
