@@ -1,6 +1,8 @@
 import Link from 'next/link';
 import { Wordmark } from '@/components/ui/Wordmark';
 import { DEMO_ACCOUNTS } from '@/lib/demo-accounts';
+import { ONE_LINE_CAUTION } from '@/lib/layout/cautions';
+import { CautionNote } from '@/components/ui/CautionNote';
 
 export const dynamic = 'force-dynamic';
 
@@ -37,6 +39,7 @@ export default function Home() {
             </li>
           ))}
         </ul>
+        <div className="mt-6 max-w-3xl"><CautionNote testId="start-caution">{ONE_LINE_CAUTION}</CautionNote></div>
         {demo && (
           <div className="panel mt-10 max-w-3xl p-5">
             <h2 className="font-medium">Try the demo workshop</h2>

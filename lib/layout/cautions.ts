@@ -35,25 +35,30 @@ export const QUOTE_CAUTION =
   'This quote covers the work and parts listed. Gas, 230 V, heater and seat-belt work is done and certified by qualified, licensed fitters to local codes; their tests and certificates are part of the build, and the finished van is weighed before handover.';
 
 /** One short caution per topic, for the Details panel, the Parts shelf and revision compare. */
-export const TOPIC_CAUTION: Record<HazardTopic, { title: string; text: string }> = {
+export const TOPIC_CAUTION: Record<HazardTopic, { title: string; brief: string; text: string }> = {
   gas: {
     title: 'Gas',
+    brief: 'Fitted, tested and certified by a qualified gas engineer.',
     text: 'LPG is fitted, tightness-tested and certified by a qualified gas engineer to local codes (EN 1949 in Europe, from memory). Cylinders go in a sealed locker vented through the floor; fit a gas alarm and a carbon-monoxide alarm.',
   },
   power: {
     title: '230 V',
+    brief: 'Installed and tested by a qualified electrician.',
     text: '230 V can kill. Hook-up, inverter and mains circuits are installed and tested by a qualified electrician to local wiring rules (IEC 60364-7-721, from memory); fuse every 12 V circuit at its source.',
   },
   heating: {
     title: 'Heating',
+    brief: 'Fitted to its maker’s manual and local codes, with a CO alarm.',
     text: 'A fuel-burning heater makes carbon monoxide. Fit it to the maker’s manual and local codes (UN ECE R122, from memory), with the exhaust led outside away from doors and vents, and a carbon-monoxide alarm.',
   },
   seats: {
     title: 'Seats and belts',
+    brief: 'Type-approved, with belts and anchorages fitted and tested.',
     text: 'A seat used while driving must be type-approved, with belts and anchorages fitted and tested to the vehicle rules (UN ECE R14, R16, R17, from memory) and signed off where the van is registered. Nobody travels on a bed or an unbelted bench.',
   },
   weight: {
     title: 'Weight limits',
+    brief: 'Weigh the finished van, full, on a weighbridge.',
     text: 'The masses here are planning figures. Weigh the finished van, full, on a weighbridge: it must stay within its plated gross vehicle weight and both axle loads.',
   },
 };
@@ -110,7 +115,7 @@ const KIND_TOPIC: Partial<Record<Module['kind'], HazardTopic>> = {
  * The caution for a module kind, or null. A travel seat's caution holds whether or not it is
  * marked belted: an unbelted seat in the travel arrangement is the more dangerous case.
  */
-export function kindCaution(kind: Module['kind']): { topic: HazardTopic; title: string; text: string } | null {
+export function kindCaution(kind: Module['kind']): { topic: HazardTopic; title: string; brief: string; text: string } | null {
   const topic = KIND_TOPIC[kind];
   return topic ? { topic, ...TOPIC_CAUTION[topic] } : null;
 }
