@@ -12,7 +12,7 @@ import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { CheckCircle2, Lock, Stamp, Undo2 } from 'lucide-react';
-import { decisionWords, ISSUE_STATE_WORD } from '@/lib/layout/drawing-issue';
+import { decisionWords, ISSUE_STATE_WORD, nextRevisionLetter } from '@/lib/layout/drawing-issue';
 import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { RevisionDto } from '@/db/sharing/revisions';
@@ -81,15 +81,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
 }
 
 function nextLetter(revs: RevisionDto[]): string {
-  const last = revs[0]?.letter;
-  if (!last) return 'A';
-  // Spreadsheet-style increment (Z → AA), same as the server's letters.
-  const chars = last.split('');
-  let i = chars.length - 1;
-  while (i >= 0 && chars[i] === 'Z') { chars[i] = 'A'; i--; }
-  if (i < 0) return `A${chars.join('')}`;
-  chars[i] = String.fromCharCode(chars[i].charCodeAt(0) + 1);
-  return chars.join('');
+  return nextRevisionLetter(revs[0]?.letter);
 }
 
 function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: { layoutId: string; revision: RevisionDto; isClient: boolean; previous: string | null; onChanged: () => void }) {

@@ -34,3 +34,14 @@ export const decisionWords = (letter: string) => ({
   return: 'Return for changes',
   returnConfirm: `Return revision ${letter} for changes`,
 });
+
+/** The letter after `last` (A → B, Z → AA, AZ → BA), or A when nothing has been issued. */
+export function nextRevisionLetter(last: string | null | undefined): string {
+  if (!last) return 'A';
+  const chars = last.split('');
+  let i = chars.length - 1;
+  while (i >= 0 && chars[i] === 'Z') { chars[i] = 'A'; i--; }
+  if (i < 0) return `A${chars.join('')}`;
+  chars[i] = String.fromCharCode(chars[i].charCodeAt(0) + 1);
+  return chars.join('');
+}

@@ -6,3 +6,4 @@ export * from './templates';
 export * from './systems';
 export * from './drawing-issue';
 export * from './cautions';
+export * from './field-words';
