@@ -31,22 +31,22 @@ function size(m: Module, units: LengthUnit): string {
   return `${formatLength(m.length, units)} × ${formatLength(m.width, units)} × ${formatLength(m.height, units)}`;
 }
 
-/** What happened to one module, as a verb ("Moved", "Turned and moved"…) and short lines. */
+/** What happened to one module, as a verb ("Moved", "Moved and resized"…) and short lines. */
 export function moduleChangeWords(c: ModuleChange, units: LengthUnit = 'mm'): { verb: string; lines: string[] } {
   const lines: string[] = [];
   const verbs: string[] = [];
-  if (c.resized) {
-    verbs.push(c.resized.rotated ? 'Turned' : 'Resized');
-    lines.push(`${size(c.before, units)} → ${size(c.after, units)}`);
-  }
   if (c.moved) {
-    verbs.push('Moved');
+    verbs.push('moved');
     const parts = [
       along(c.moved.dx, 'rearwards', 'forwards', units),
       along(c.moved.dy, 'towards the right wall', 'towards the left wall', units),
       along(c.moved.dz, 'up', 'down', units),
     ].filter(Boolean);
     lines.push(parts.join(', '));
+  }
+  if (c.resized) {
+    verbs.push(c.resized.rotated ? 'turned' : 'resized');
+    lines.push(`${size(c.before, units)} → ${size(c.after, units)}`);
   }
   const b = c.before;
   const a = c.after;
@@ -66,8 +66,9 @@ export function moduleChangeWords(c: ModuleChange, units: LengthUnit = 'mm'): { 
       }
     }
   }
-  if (!verbs.length) verbs.push('Changed');
-  return { verb: verbs.join(' and '), lines: lines.filter(Boolean) };
+  if (!verbs.length) verbs.push('changed');
+  const verb = verbs.join(' and ');
+  return { verb: verb.charAt(0).toUpperCase() + verb.slice(1), lines: lines.filter(Boolean) };
 }
 
 /** One line per change to the bay itself: "Seats in the cab: 2 → 3", "Bay height: 1800 mm → 1900 mm". */
