@@ -8,6 +8,7 @@ import Credentials from 'next-auth/providers/credentials';
 import { z } from 'zod';
 import { authConfig } from './auth.config';
 import { authenticate, endSessions } from './db/accounts';
+import { loadActor } from './db/actor';
 import { clientAddress } from './lib/auth/address';
 
 class RateLimited extends CredentialsSignin {
@@ -22,8 +23,28 @@ const credentialsSchema = z.object({
   password: z.string().min(1).max(200),
 });
 
+const studioSwitch = z.object({ studioId: z.uuid() });
+
 export const { handlers, auth, signIn, signOut } = NextAuth({
   ...authConfig,
+  callbacks: {
+    ...authConfig.callbacks,
+    /**
+     * Beyond the DB-free checks: a token whose user signed out since, or lost the membership it
+     * names, gets nothing (not even a fresh cookie). `update({ studioId })` moves the session to
+     * another studio the person belongs to (after accepting an invitation).
+     */
+    async jwt(params) {
+      const token = await authConfig.callbacks.jwt(params);
+      if (!token || params.user) return token;
+      if (typeof token.uid !== 'string') return null;
+      const wanted = params.trigger === 'update' ? studioSwitch.safeParse(params.session) : null;
+      let actor = wanted?.success ? await loadActor(token.uid, wanted.data.studioId, token.sv) : null;
+      actor ??= await loadActor(token.uid, token.studioId, token.sv);
+      if (!actor) return null;
+      return { ...token, studioId: actor.studioId, role: actor.role };
+    },
+  },
   events: {
     // Sign-out ends every session of the user, not only this cookie.
     async signOut(message) {

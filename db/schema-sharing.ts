@@ -104,7 +104,13 @@ export const comments = pgTable(
   (t) => [index('comments_layout').on(t.layoutId, t.createdAt), index('comments_parent').on(t.parentId)],
 );
 
-/** An invitation for a client to set a password and join a studio; optionally shares one layout. */
+/** The role an invitation gives: owners invite designers and clients, designers invite clients. */
+export const invitedRoleEnum = pgEnum('invited_role', ['designer', 'client']);
+
+/**
+ * An invitation to join a studio: the invitee sets their own password (new account) or accepts
+ * while signed in as the invited address (existing account). Optionally shares one layout.
+ */
 export const invitations = pgTable(
   'invitations',
   {
@@ -112,6 +118,7 @@ export const invitations = pgTable(
     studioId: uuid('studio_id').notNull().references((): AnyPgColumn => studios.id, { onDelete: 'cascade' }),
     email: text('email').notNull(),
     name: text('name').notNull(),
+    role: invitedRoleEnum('role').notNull().default('client'),
     layoutId: uuid('layout_id').references((): AnyPgColumn => layouts.id, { onDelete: 'set null' }),
     tokenHash: text('token_hash').notNull(),
     invitedBy: uuid('invited_by').references((): AnyPgColumn => users.id, { onDelete: 'set null' }),

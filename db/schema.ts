@@ -63,16 +63,40 @@ export const layouts = pgTable(
   (t) => [index('layouts_studio').on(t.studioId), index('layouts_client').on(t.clientId)],
 );
 
-/** Failed sign-ins, counted per account and per address to slow down guessing. */
-export const signInFailures = pgTable(
-  'sign_in_failures',
+/**
+ * Counters for throttles that must hold across app instances (sign-in attempts, mail sent): one
+ * row per key, changed only by one atomic upsert (db/throttle.ts), so racing requests cannot
+ * all read the same count.
+ */
+export const throttleCounters = pgTable(
+  'throttle_counters',
+  {
+    key: text('key').primaryKey(),
+    /** Attempts (or mails) counted since `windowStart`. */
+    count: integer('count').notNull().default(0),
+    windowStart: timestamp('window_start', { withTimezone: true }).notNull().defaultNow(),
+    /** No further attempt before this moment (growing delays); null while within the free allowance. */
+    notBefore: timestamp('not_before', { withTimezone: true }),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('throttle_counters_updated').on(t.updatedAt)],
+);
+
+/**
+ * Password reset links: single use, 30 minutes. Only the SHA-256 of the token is stored; using
+ * one ends every session of the account.
+ */
+export const passwordResets = pgTable(
+  'password_resets',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    email: text('email').notNull(),
-    address: text('address').notNull(),
-    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    tokenHash: text('token_hash').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
   },
-  (t) => [index('sign_in_failures_email').on(t.email, t.at), index('sign_in_failures_address').on(t.address, t.at)],
+  (t) => [uniqueIndex('password_resets_token_hash').on(t.tokenHash), index('password_resets_user').on(t.userId)],
 );
 
 export * from './schema-sharing';

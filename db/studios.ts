@@ -1,15 +1,16 @@
 /**
  * The studio: its members and roles, preferred units and check defaults. Only an owner changes
- * them; every member may read the member list of their own studio (clients see names only).
+ * them. Owners and designers read the whole member list; a client sees only the people of their
+ * own layouts (themselves, the owners, and the designers who made or changed those layouts),
+ * names only — never the studio's other clients. People join only by invitation
+ * (db/sharing/invitations.ts): nothing here creates an account or attaches one.
  */
 import 'server-only';
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { getDb } from './client';
-import { memberships, studios, users } from './schema';
-import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
+import { layouts, memberships, studios, users } from './schema';
+import { BadRequestError, ForbiddenError, NotFoundError } from './errors';
 import type { Actor, StudioRole } from './actor';
-import { normaliseEmail } from './accounts';
-import { hashPassword } from '../lib/auth/password';
 import { settingsSchema, type LayoutDoc, type LayoutSettings } from '../lib/layout/schema';
 import type { LengthUnit } from '../lib/layout/units';
 
@@ -38,14 +39,29 @@ export async function getStudio(actor: Actor): Promise<StudioDto> {
   return { id: s.id, name: s.name, units: s.units, checkDefaults: defaults.success ? defaults.data : {}, role: actor.role };
 }
 
-export async function listMembers(actor: Actor): Promise<MemberDto[]> {
+/** The designers who made or last changed a layout shared with this client. */
+async function clientsDesigners(actor: Actor): Promise<Set<string>> {
   const db = await getDb();
   const rows = await db
+    .select({ createdBy: layouts.createdBy, updatedBy: layouts.updatedBy })
+    .from(layouts)
+    .where(and(eq(layouts.studioId, actor.studioId), eq(layouts.clientId, actor.userId)));
+  return new Set(rows.flatMap((r) => [r.createdBy, r.updatedBy]).filter((id): id is string => Boolean(id)));
+}
+
+export async function listMembers(actor: Actor): Promise<MemberDto[]> {
+  const db = await getDb();
+  const all = await db
     .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, joinedAt: memberships.createdAt })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.studioId, actor.studioId))
     .orderBy(memberships.createdAt);
+  let rows = all;
+  if (actor.role === 'client') {
+    const designers = await clientsDesigners(actor);
+    rows = all.filter((r) => r.userId === actor.userId || r.role === 'owner' || (r.role === 'designer' && designers.has(r.userId)));
+  }
   const seesAddresses = actor.role !== 'client';
   return rows.map((r) => ({
     userId: r.userId,
@@ -56,40 +72,8 @@ export async function listMembers(actor: Actor): Promise<MemberDto[]> {
   }));
 }
 
-function requireOwner(actor: Actor) {
+export function requireOwner(actor: Actor): void {
   if (actor.role !== 'owner') throw new ForbiddenError('Only the studio owner can change members and settings.');
-}
-
-/**
- * Adds a designer or client. An existing account joins as it is; a new address gets an account
- * with the starting password the owner hands over.
- */
-export async function addMember(
-  actor: Actor,
-  input: { email: string; name: string; role: 'designer' | 'client'; password?: string },
-): Promise<MemberDto> {
-  requireOwner(actor);
-  const db = await getDb();
-  const email = normaliseEmail(input.email);
-  const [existing] = await db.select().from(users).where(eq(sql`lower(${users.email})`, email)).limit(1);
-  let userId = existing?.id;
-  if (!existing) {
-    if (!input.password) throw new BadRequestError('This address has no account yet: set a starting password for it.');
-    const [created] = await db
-      .insert(users)
-      .values({ email, name: input.name.trim(), passwordHash: await hashPassword(input.password) })
-      .returning({ id: users.id });
-    userId = created.id;
-  }
-  const [already] = await db
-    .select()
-    .from(memberships)
-    .where(and(eq(memberships.studioId, actor.studioId), eq(memberships.userId, userId!)))
-    .limit(1);
-  if (already) throw new ConflictError('That person is already a member of this studio.');
-  await db.insert(memberships).values({ userId: userId!, studioId: actor.studioId, role: input.role });
-  const members = await listMembers(actor);
-  return members.find((m) => m.userId === userId)!;
 }
 
 export async function changeRole(actor: Actor, userId: string, role: StudioRole): Promise<void> {

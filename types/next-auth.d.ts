@@ -24,5 +24,7 @@ declare module '@auth/core/jwt' {
     role?: StudioRole;
     studioId?: string;
     sv?: number;
+    /** When the person signed in (seconds since 1970): the session ends 7 days after it. */
+    sat?: number;
   }
 }

@@ -6,6 +6,7 @@ import { z } from 'zod';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import Link from 'next/link';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 
 const schema = z.object({
@@ -15,7 +16,7 @@ const schema = z.object({
 type Values = z.infer<typeof schema>;
 
 const MESSAGES: Record<string, string> = {
-  rate_limited: 'Too many failed attempts. Wait 15 minutes before trying again.',
+  rate_limited: 'Too many attempts from here for this account. Wait a few minutes before trying again, or set a new password by e-mail.',
   invalid_credentials: 'That e-mail and password do not match an account.',
 };
 
@@ -46,7 +47,10 @@ export function SignInForm({ email, callbackUrl }: { email?: string; callbackUrl
         {formState.errors.email && <p className="field-error">{formState.errors.email.message}</p>}
       </div>
       <div>
-        <label className="label" htmlFor="password">Password</label>
+        <div className="flex items-baseline justify-between">
+          <label className="label" htmlFor="password">Password</label>
+          <Link className="text-xs text-copper underline" href="/reset-password">Forgot your password?</Link>
+        </div>
         <input id="password" type="password" autoComplete="current-password" className="field" {...register('password')} />
         {formState.errors.password && <p className="field-error">{formState.errors.password.message}</p>}
       </div>

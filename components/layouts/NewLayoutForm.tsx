@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
+import { BAY_LIMITS } from '@/lib/layout/schema';
 import { BAY_TEMPLATES } from '@/lib/layout/templates';
 import { LENGTH_UNITS, parseLength, type LengthUnit } from '@/lib/layout/units';
 import type { MemberDto } from '@/db/studios';
@@ -37,7 +38,7 @@ const schema = z
     for (const key of ['length', 'width', 'height'] as const) {
       const mm = parseLength(v[key], v.unit as LengthUnit);
       if (mm === null) ctx.addIssue({ code: 'custom', path: [key], message: `enter the bay ${key}` });
-      else if (mm < 500 || mm > 20000) ctx.addIssue({ code: 'custom', path: [key], message: 'between 500 mm and 20 m' });
+      else if (mm < BAY_LIMITS[key].min || mm > BAY_LIMITS[key].max) ctx.addIssue({ code: 'custom', path: [key], message: `between ${BAY_LIMITS[key].min} mm and ${BAY_LIMITS[key].max / 1000} m` });
     }
   });
 type Values = z.infer<typeof schema>;

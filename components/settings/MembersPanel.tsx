@@ -1,5 +1,7 @@
 'use client';
-// The studio's members and roles; the owner adds designers and clients and changes roles.
+// The studio's members and roles. The owner invites designers and clients by mail (they set
+// their own password, or join with the account they have) and changes roles. Never asks for or
+// shows anyone's password.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -7,6 +9,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import type { MemberDto } from '@/db/studios';
+import type { InvitationDto } from '@/db/sharing/invitations';
 
 const ROLE_WORD = { owner: 'Owner', designer: 'Designer', client: 'Client' } as const;
 
@@ -14,21 +17,21 @@ const addSchema = z.object({
   name: z.string().trim().min(1, 'give their name').max(80),
   email: z.email('enter a valid e-mail address'),
   role: z.enum(['designer', 'client']),
-  password: z.string().refine((p) => p === '' || p.length >= 12, 'at least 12 characters, or leave empty for an existing account'),
 });
 type AddValues = z.infer<typeof addSchema>;
 
 export function MembersPanel({ isOwner, selfId }: { isOwner: boolean; selfId: string }) {
   const qc = useQueryClient();
   const members = useQuery({ queryKey: ['members'], queryFn: () => apiFetch<{ members: MemberDto[] }>('/api/studio/members') });
-  const form = useForm<AddValues>({ resolver: zodResolver(addSchema), defaultValues: { name: '', email: '', role: 'client', password: '' } });
+  const form = useForm<AddValues>({ resolver: zodResolver(addSchema), defaultValues: { name: '', email: '', role: 'client' } });
 
   const add = useMutation({
-    mutationFn: (v: AddValues) => apiFetch<MemberDto>('/api/studio/members', { method: 'POST', json: { ...v, password: v.password || undefined } }),
-    onSuccess: (m) => {
-      toast.success(`${m.name} joined as ${ROLE_WORD[m.role].toLowerCase()}`);
+    mutationFn: (v: AddValues) => apiFetch<{ invitation: InvitationDto; mail: string }>('/api/studio/members', { method: 'POST', json: v }),
+    onSuccess: ({ invitation, mail }) => {
+      if (mail === 'sent') toast.success(`Invitation sent to ${invitation.email}. They appear here once they accept.`);
+      else toast.warning(`Invitation saved, but the mail to ${invitation.email} could not be sent; send it again from Clients.`);
       form.reset();
-      qc.invalidateQueries({ queryKey: ['members'] });
+      qc.invalidateQueries({ queryKey: ['invitations'] });
     },
     onError: (err) => {
       if (err instanceof ApiError && err.issues.length) err.issues.forEach((i) => form.setError(i.path as keyof AddValues, { message: i.message }));
@@ -69,8 +72,9 @@ export function MembersPanel({ isOwner, selfId }: { isOwner: boolean; selfId: st
         )}
       {isOwner && (
         <form className="mt-5 grid gap-3 border-t border-paper-edge pt-4 sm:grid-cols-2" onSubmit={form.handleSubmit((v) => add.mutate(v))} noValidate>
-          <h3 className="font-medium sm:col-span-2">Add a member</h3>
-          {([['name', 'Name', 'text'], ['email', 'E-mail', 'email'], ['password', 'Starting password (new accounts)', 'password']] as const).map(([k, label, type]) => (
+          <h3 className="font-medium sm:col-span-2">Invite someone</h3>
+          <p className="text-sm text-ink-soft sm:col-span-2">They get a mail with a link. New to Baywright, they choose their own password; with an account already, they join with it.</p>
+          {([['name', 'Name', 'text'], ['email', 'E-mail', 'email']] as const).map(([k, label, type]) => (
             <div key={k}>
               <label className="label" htmlFor={`m-${k}`}>{label}</label>
               <input id={`m-${k}`} type={type} className="field" autoComplete="off" {...form.register(k)} />
@@ -84,7 +88,7 @@ export function MembersPanel({ isOwner, selfId }: { isOwner: boolean; selfId: st
               <option value="designer">Designer — creates and edits layouts</option>
             </select>
           </div>
-          <div className="sm:col-span-2"><button className="btn-primary" type="submit" disabled={add.isPending}>{add.isPending ? 'Adding…' : 'Add member'}</button></div>
+          <div className="sm:col-span-2"><button className="btn-primary" type="submit" disabled={add.isPending}>{add.isPending ? 'Sending…' : 'Send invitation'}</button></div>
         </form>
       )}
     </section>

@@ -1,7 +1,7 @@
 'use client';
 /**
- * The invited client sets a password (twice), which creates their account in the inviting
- * studio; then they are signed in and taken to the layout shared with them. Errors from the
+ * A newly invited address chooses its own password (twice), which creates the account in the
+ * inviting studio; then they are signed in and taken to the layout shared with them. Errors from the
  * server (expired, withdrawn, already used) are shown as they come. Must never send the password
  * anywhere but the accept route and the sign-in endpoint.
  */
@@ -12,11 +12,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { signIn } from 'next-auth/react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
+import { passwordLengthSchema, PASSWORD_MIN } from '@/lib/auth/password-rules';
 
 const schema = z
   .object({
     name: z.string().trim().min(1, 'tell us your name').max(80),
-    password: z.string().min(12, 'use at least 12 characters').refine((p) => new TextEncoder().encode(p).length <= 72, 'use at most 72 bytes'),
+    password: passwordLengthSchema,
     repeat: z.string(),
   })
   .refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] });
@@ -61,7 +62,8 @@ export function AcceptInvitationForm({ token, email, name }: { token: string; em
       </div>
       <div>
         <label className="label" htmlFor="invite-password">Choose a password</label>
-        <input id="invite-password" type="password" className="field" autoComplete="new-password" {...form.register('password')} />
+        <input id="invite-password" type="password" className="field" autoComplete="new-password" aria-describedby="invite-password-hint" {...form.register('password')} />
+        <p id="invite-password-hint" className="mt-1 text-xs text-ink-soft">At least {PASSWORD_MIN} characters, and not a common password. A few unrelated words work well.</p>
         {form.formState.errors.password && <p className="field-error">{form.formState.errors.password.message}</p>}
       </div>
       <div>

@@ -39,7 +39,7 @@ export function InvitationsTable() {
             <tbody>
               {q.data.invitations.map((i) => (
                 <tr key={i.id} className="border-t border-paper-edge align-top" data-status={i.status}>
-                  <td className="py-1.5">{i.name}<span className="block text-xs text-ink-soft">{i.email}</span></td>
+                  <td className="py-1.5">{i.name}{i.role === 'designer' ? <span className="ml-1 text-xs text-ink-soft">(designer)</span> : null}<span className="block text-xs text-ink-soft">{i.email}</span></td>
                   <td className="text-xs">{i.layout?.name ?? <span className="text-ink-faint">—</span>}</td>
                   <td className="text-xs">{i.lastSentAt ? WHEN.format(new Date(i.lastSentAt)) : <span className="text-brick">not sent</span>}{i.invitedBy ? <span className="block text-ink-soft">by {i.invitedBy}</span> : null}</td>
                   <td className="text-xs">{STATUS_WORD[i.status]}{i.status === 'pending' ? <span className="block text-ink-soft">until {WHEN.format(new Date(i.expiresAt))}</span> : null}</td>

@@ -1,18 +1,23 @@
 /**
- * Client invitations: an owner or designer invites a client by e-mail; the mail carries a link
- * with a one-time token (256 bits, stored hashed) that lets the client set a password and join
- * the studio as `client`, optionally with one layout shared with them. Invitations expire, can be
- * revoked, and can be sent again (which replaces the token, so an older mail stops working).
+ * Invitations are the only way into a studio: an owner invites designers and clients, a
+ * designer invites clients. The mail carries a link with a one-time token (256 bits, stored
+ * hashed). A new address sets its own password with it; an address that already has an account
+ * accepts while signed in as that address. Nobody else ever sets a person's password, and the
+ * studio learns nothing about the address (whether it has an account, its name) until the
+ * person accepts: creating an invitation answers the same either way.
+ * Invitations expire, can be revoked, and can be sent again (a new token; the older mail stops
+ * working).
  *
- * Accepting needs no session: the token is the proof. Must never reveal a token after creation,
- * never let an invitation be used twice, and never attach a layout of another studio.
+ * Must never reveal a token after creation, never let an invitation be used twice, never attach
+ * an existing account without that account's own session, and never attach a layout of another
+ * studio.
  */
 import 'server-only';
 import { and, desc, eq, isNull, sql } from 'drizzle-orm';
 import { getDb } from '../client';
 import { invitations, layouts, memberships, studios, users } from '../schema';
-import { BadRequestError, ConflictError, NotFoundError } from '../errors';
-import type { Actor } from '../actor';
+import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '../errors';
+import type { Actor, StudioRole } from '../actor';
 import { normaliseEmail } from '../accounts';
 import { hashPassword } from '../../lib/auth/password';
 import { requireEditor, UUID } from './access';
@@ -24,10 +29,14 @@ export const INVITATION_DAYS = 7;
 
 export type InvitationStatus = 'pending' | 'accepted' | 'expired' | 'revoked';
 
+export type InvitedRole = Exclude<StudioRole, 'owner'>;
+
 export interface InvitationDto {
   id: string;
   email: string;
+  /** The name the inviter typed; the person's own name shows under Members once they join. */
   name: string;
+  role: InvitedRole;
   layout: { id: string; name: string } | null;
   invitedBy: string | null;
   createdAt: string;
@@ -67,6 +76,7 @@ function toDto(r: Awaited<ReturnType<typeof rows>>[number]): InvitationDto {
     id: i.id,
     email: i.email,
     name: i.name,
+    role: i.role,
     layout: i.layoutId && r.layoutName ? { id: i.layoutId, name: r.layoutName } : null,
     invitedBy: r.invitedByName,
     createdAt: i.createdAt.toISOString(),
@@ -85,6 +95,7 @@ export async function listInvitations(actor: Actor): Promise<InvitationDto[]> {
 export interface NewInvitation {
   email: string;
   name: string;
+  role?: InvitedRole;
   layoutId?: string | null;
 }
 
@@ -96,15 +107,20 @@ export interface IssuedInvitation {
   inviterName: string;
 }
 
+/**
+ * Refuses only what the studio already knows: an address that is one of its own members, or a
+ * layout that is not its own or already has a client. Whether the address has an account
+ * anywhere else is never looked at here.
+ */
 async function assertInvitable(actor: Actor, email: string, layoutId: string | null | undefined): Promise<void> {
   const db = await getDb();
-  const [existing] = await db.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, email)).limit(1);
-  if (existing) {
-    const [member] = await db.select({ role: memberships.role }).from(memberships)
-      .where(and(eq(memberships.userId, existing.id), eq(memberships.studioId, actor.studioId))).limit(1);
-    if (member) throw new ConflictError(`That address already belongs to a ${member.role} of this studio.`);
-    throw new ConflictError('That address already has a Baywright account; the studio owner can add it under Settings → Members.');
-  }
+  const [member] = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.studioId, actor.studioId), eq(sql`lower(${users.email})`, email)))
+    .limit(1);
+  if (member) throw new ConflictError(`That address already belongs to a ${member.role} of this studio.`);
   if (layoutId) {
     if (!UUID.test(layoutId)) throw new BadRequestError('Choose one of this studio’s layouts.');
     const [layout] = await db.select({ studioId: layouts.studioId, clientId: layouts.clientId }).from(layouts).where(eq(layouts.id, layoutId)).limit(1);
@@ -125,9 +141,12 @@ async function studioAndInviter(actor: Actor) {
  */
 export async function createInvitation(actor: Actor, input: NewInvitation, now = new Date()): Promise<IssuedInvitation> {
   requireEditor(actor, 'invite clients');
+  const role = input.role ?? 'client';
+  if (role !== 'client' && actor.role !== 'owner') throw new ForbiddenError('Only the studio owner can invite designers.');
+  if (role !== 'client' && input.layoutId) throw new BadRequestError('Layouts are shared with clients; invite a designer without one.');
   const email = normaliseEmail(input.email);
   const name = input.name.trim();
-  if (!name) throw new BadRequestError('Give the client’s name.');
+  if (!name) throw new BadRequestError('Give the person’s name.');
   await assertInvitable(actor, email, input.layoutId);
   const db = await getDb();
   const token = newToken();
@@ -139,7 +158,7 @@ export async function createInvitation(actor: Actor, input: NewInvitation, now =
     const [row] = await tx
       .insert(invitations)
       .values({
-        studioId: actor.studioId, email, name, layoutId: input.layoutId ?? null, tokenHash: hashToken(token),
+        studioId: actor.studioId, email, name, role, layoutId: input.layoutId ?? null, tokenHash: hashToken(token),
         invitedBy: actor.userId, createdAt: now, expiresAt: new Date(now.getTime() + INVITATION_DAYS * 86_400_000),
       })
       .returning({ id: invitations.id });
@@ -156,6 +175,12 @@ async function ownRow(actor: Actor, id: string): Promise<Row> {
   const [row] = await db.select().from(invitations).where(and(eq(invitations.id, id), eq(invitations.studioId, actor.studioId))).limit(1);
   if (!row) throw new NotFoundError('No such invitation.');
   return row;
+}
+
+/** One invitation of the actor's studio (owners and designers), or 404. */
+export async function getInvitation(actor: Actor, id: string): Promise<InvitationDto> {
+  await ownRow(actor, id);
+  return toDto((await rows(actor.studioId, id))[0]);
 }
 
 export async function revokeInvitation(actor: Actor, id: string): Promise<InvitationDto> {
@@ -185,9 +210,13 @@ export async function markInvitationSent(id: string, at = new Date()): Promise<v
   await db.update(invitations).set({ lastSentAt: at }).where(eq(invitations.id, id));
 }
 
-/** What the invitation page shows before the client has an account. No addresses but their own. */
+/**
+ * What the invitation page shows to whoever holds the link (the invitee): the studio, the
+ * address invited, and whether that address already has an account (then they accept signed in
+ * as it; otherwise they set a password). No addresses but their own.
+ */
 export type InvitationView =
-  | { status: 'pending'; email: string; name: string; studioName: string; inviterName: string | null; expiresAt: string }
+  | { status: 'pending'; email: string; name: string; role: InvitedRole; studioName: string; inviterName: string | null; expiresAt: string; hasAccount: boolean }
   | { status: 'accepted' | 'expired' | 'revoked' | 'unknown' };
 
 export async function viewInvitation(token: string, now = new Date()): Promise<InvitationView> {
@@ -203,7 +232,11 @@ export async function viewInvitation(token: string, now = new Date()): Promise<I
   if (!r) return { status: 'unknown' };
   const status = invitationStatus(r.inv, now);
   if (status !== 'pending') return { status };
-  return { status, email: r.inv.email, name: r.inv.name, studioName: r.studioName, inviterName: r.inviterName, expiresAt: r.inv.expiresAt.toISOString() };
+  const [account] = await db.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, r.inv.email)).limit(1);
+  return {
+    status, email: r.inv.email, name: r.inv.name, role: r.inv.role, studioName: r.studioName, inviterName: r.inviterName,
+    expiresAt: r.inv.expiresAt.toISOString(), hasAccount: Boolean(account),
+  };
 }
 
 export class InvitationUnusableError extends Error {
@@ -218,45 +251,82 @@ export class InvitationUnusableError extends Error {
   }
 }
 
+/** Someone other than the invited address tried to use the invitation of an existing account. */
+export class InvitationNeedsSignInError extends Error {
+  readonly status = 409;
+  constructor(email: string) {
+    super(`${email} already has a Baywright account. Sign in as ${email}, then open the link again to join.`);
+  }
+}
+
+export interface AcceptedInvitation {
+  email: string;
+  layoutId: string | null;
+  studioId: string;
+  /** `new-account`: a password was set; `existing-account`: the signed-in person joined. */
+  joined: 'new-account' | 'existing-account';
+}
+
 /**
- * The client sets a password: a new account, a `client` membership of the inviting studio, and
- * the invited layout shared with them (if it still has no client). All in one transaction, and
- * the invitation is claimed first, so two racing accepts cannot both create an account.
+ * Accepts an invitation, in one transaction that claims the invitation first (two racing
+ * accepts cannot both succeed):
+ *   - the address has no account: `password` (already checked against the password rule)
+ *     creates one, with the name given;
+ *   - the address has an account: `signedInUserId` must be that account — the person accepts
+ *     with their own session; no password is asked or changed.
+ * Either way the account becomes a member with the invitation's role, and a client gets the
+ * invited layout if it still has no client.
  */
-export async function acceptInvitation(token: string, input: { name?: string; password: string }, now = new Date()): Promise<{ email: string; layoutId: string | null; studioId: string }> {
+export async function acceptInvitation(
+  token: string,
+  input: { name?: string; password?: string; signedInUserId?: string | null },
+  now = new Date(),
+): Promise<AcceptedInvitation> {
   if (!isTokenShaped(token)) throw new InvitationUnusableError('unknown');
   const db = await getDb();
-  const passwordHash = await hashPassword(input.password);
+  const [pre] = await db.select({ email: invitations.email }).from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1);
+  const [existingPre] = pre ? await db.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, pre.email)).limit(1) : [];
+  // Hash outside the transaction (slow on purpose), only when a new account will need it.
+  const passwordHash = !existingPre && input.password ? await hashPassword(input.password) : null;
   try {
     return await db.transaction(async (tx) => {
       const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1);
       if (!inv) throw new InvitationUnusableError('unknown');
       const status = invitationStatus(inv, now);
       if (status !== 'pending') throw new InvitationUnusableError(status);
+      const [existing] = await tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, inv.email)).limit(1);
+      if (existing && existing.id !== input.signedInUserId) throw new InvitationNeedsSignInError(inv.email);
+      if (!existing && !passwordHash) throw new BadRequestError('Choose a password to create your account.');
       const claimed = await tx
         .update(invitations)
         .set({ acceptedAt: now })
         .where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
         .returning({ id: invitations.id });
       if (!claimed.length) throw new InvitationUnusableError('accepted');
-      const name = input.name?.trim() || inv.name;
-      const [user] = await tx.insert(users).values({ email: inv.email, name, passwordHash }).returning({ id: users.id });
-      await tx.insert(memberships).values({ userId: user.id, studioId: inv.studioId, role: 'client' });
+      let userId: string;
+      if (existing) {
+        userId = existing.id;
+      } else {
+        const name = input.name?.trim() || inv.name;
+        const [user] = await tx.insert(users).values({ email: inv.email, name, passwordHash }).returning({ id: users.id });
+        userId = user.id;
+      }
+      await tx.insert(memberships).values({ userId, studioId: inv.studioId, role: inv.role }).onConflictDoNothing();
       let layoutId: string | null = null;
-      if (inv.layoutId) {
+      if (inv.layoutId && inv.role === 'client') {
         const shared = await tx
           .update(layouts)
-          .set({ clientId: user.id })
+          .set({ clientId: userId })
           .where(and(eq(layouts.id, inv.layoutId), eq(layouts.studioId, inv.studioId), isNull(layouts.clientId)))
           .returning({ id: layouts.id });
         layoutId = shared[0]?.id ?? null;
       }
-      await tx.update(invitations).set({ acceptedUserId: user.id }).where(eq(invitations.id, inv.id));
-      return { email: inv.email, layoutId, studioId: inv.studioId };
+      await tx.update(invitations).set({ acceptedUserId: userId }).where(eq(invitations.id, inv.id));
+      return { email: inv.email, layoutId, studioId: inv.studioId, joined: existing ? 'existing-account' : 'new-account' };
     });
   } catch (err) {
     if (isUniqueViolation(err, 'users_email_unique')) {
-      throw new ConflictError('An account with this address was created meanwhile; sign in instead.');
+      throw new ConflictError('An account with this address was created meanwhile; sign in, then open the link again.');
     }
     throw err;
   }

@@ -120,7 +120,11 @@ export function handle<C>(fn: Handler<C>): Handler<C> {
 }
 
 export function errorResponse(err: unknown): Response {
-  if (err instanceof HttpError) return problem(err.status, err.message, err.extra);
+  if (err instanceof HttpError) {
+    const res = problem(err.status, err.message, err.extra);
+    if (typeof err.extra.retryAfter === 'number') res.headers.set('Retry-After', String(err.extra.retryAfter));
+    return res;
+  }
   const status = (err as { status?: unknown })?.status;
   if (typeof status === 'number' && status >= 400 && status < 500) {
     const extra = status === 412 ? { current: (err as { current?: unknown }).current } : {};

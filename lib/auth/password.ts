@@ -4,8 +4,7 @@
  */
 import bcrypt from 'bcryptjs';
 
-export const PASSWORD_MIN = 12;
-export const PASSWORD_MAX_BYTES = 72;
+export { PASSWORD_MIN, PASSWORD_MAX_BYTES } from './password-rules';
 const COST = 11;
 
 export function hashPassword(password: string): Promise<string> {

@@ -8,7 +8,7 @@ import 'server-only';
 import { headers } from 'next/headers';
 import { decode, getToken } from 'next-auth/jwt';
 import { loadActor, type Actor } from '@/db/actor';
-import { authSecret, sessionCookieName, secureCookiesWanted } from './secret';
+import { authSecret, sessionCookieName, secureCookiesWanted, withinAbsoluteLifetime } from './secret';
 import { decodeCached, type SessionClaims } from './token-cache';
 
 export async function actorFromRequest(req: Request): Promise<Actor | null> {
@@ -16,6 +16,8 @@ export async function actorFromRequest(req: Request): Promise<Actor | null> {
   if (!raw) return null;
   const token = await decodeCached(raw, decodeSessionToken);
   if (typeof token?.uid !== 'string') return null;
+  if (!withinAbsoluteLifetime(token.sat)) return null; // 7 days after signing in, however busy
+
   return loadActor(token.uid, typeof token.studioId === 'string' ? token.studioId : undefined, typeof token.sv === 'number' ? token.sv : undefined);
 }
 

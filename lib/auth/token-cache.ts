@@ -12,6 +12,7 @@ export interface SessionClaims {
   uid?: string;
   studioId?: string;
   sv?: number;
+  sat?: number;
   exp?: number;
   [claim: string]: unknown;
 }

@@ -101,7 +101,8 @@ export function workingZone(m: Module, reach: number): Rect {
   }
 }
 
+/** A door in words, by its wall, width and place — never its id. */
 export function describeDoor(door: Door): string {
-  const wall = door.wall === 'rear' ? 'rear' : `${door.wall}-hand`;
-  return `${wall} door “${door.id}” (${door.width} mm)`;
+  if (door.wall === 'rear') return `rear door (${door.width} mm wide)`;
+  return `${door.wall}-hand door (${door.width} mm wide, ${door.offset} mm from the front)`;
 }

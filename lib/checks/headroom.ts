@@ -1,8 +1,9 @@
 /**
  * Headroom rules:
  *   headroom.standing  clear height = bay.height − floor build-up − roof build-up against the
- *                      tallest standing person: fail below their stature, warn below stature +
- *                      headMargin (20 mm), else pass; says the tallest stature that fits
+ *                      tallest standing person's stature + headMargin (20 mm), the figure in
+ *                      `required`: fail below the stature itself, warn below stature + margin,
+ *                      else pass; says the tallest stature that fits
  *   headroom.overhead  in travel and lounge, warns for each module whose underside is between
  *                      1000 mm and the standing height and that hangs over the walkway (the
  *                      person's disk passes under part of it): a head strike
@@ -11,6 +12,7 @@
  */
 import type { Arrangement } from '../layout/schema';
 import { moduleRect } from './bayModel';
+import { RULE_CONSTANTS } from './settings';
 import type { CheckContext } from './context';
 import { mm, moduleName } from './naming';
 import { SOURCES } from './sources';
@@ -23,18 +25,34 @@ export function clearHeadroom(ctx: CheckContext): number {
 export function headroomStanding(ctx: CheckContext): Finding {
   const { headMargin } = ctx.settings;
   const standing = ctx.doc.occupants.standingHeight;
+  const wanted = standing + headMargin;
   const clear = clearHeadroom(ctx);
-  const status = clear < standing ? 'fail' : clear < standing + headMargin ? 'warn' : 'pass';
-  const fits = clear - headMargin;
+  if (clear <= 0) {
+    // No clear height at all is not a headroom figure but an input out of range: say so.
+    return {
+      id: 'headroom.standing',
+      status: 'fail',
+      measured: Math.max(0, clear),
+      required: wanted,
+      unit: 'mm',
+      message: `The floor and roof build-up (${mm(ctx.t.floorT)} + ${mm(ctx.t.roofT)}) is as thick as the ${mm(ctx.doc.bay.height)} bay is high or thicker, which cannot be: an input is out of range. Check the bay height and the build-up layers. ${SOURCES.headroom.brief}.`,
+      source: SOURCES.headroom.cite,
+    };
+  }
+  const status = clear < standing ? 'fail' : clear < wanted ? 'warn' : 'pass';
   const verdict =
-    status === 'pass' ? 'stands upright with room to spare' : status === 'warn' ? `stands, but with less than the ${mm(headMargin)} margin` : `cannot stand upright (${mm(standing - clear)} short)`;
+    status === 'pass'
+      ? `stands upright with ${mm(clear - wanted)} to spare beyond the margin`
+      : status === 'warn'
+        ? `stands, but ${mm(wanted - clear)} short of the margin`
+        : `cannot stand upright: ${mm(standing - clear)} short of their stature, ${mm(wanted - clear)} short with the margin`;
   return {
     id: 'headroom.standing',
     status,
     measured: clear,
-    required: standing,
+    required: wanted,
     unit: 'mm',
-    message: `Clear standing height ${mm(clear)} after ${mm(ctx.t.floorT)} floor and ${mm(ctx.t.roofT)} roof build-up; needs ${mm(standing)} for the tallest person (+${mm(headMargin)} margin), who ${verdict}. It fits people up to ${mm(Math.max(0, fits))} tall with the margin, ${mm(clear)} without. ${SOURCES.headroom.brief}.`,
+    message: `Clear standing height ${mm(clear)} after ${mm(ctx.t.floorT)} floor and ${mm(ctx.t.roofT)} roof build-up; needs ${mm(wanted)} (the tallest person’s ${mm(standing)} stature + ${mm(headMargin)} margin), so the tallest person ${verdict}. It fits people up to ${mm(Math.max(0, clear - headMargin))} tall with the margin, ${mm(clear)} without. ${SOURCES.headroom.brief}.`,
     source: SOURCES.headroom.cite,
   };
 }
@@ -55,7 +73,7 @@ export function headroomOverhead(ctx: CheckContext, arrangement: Arrangement): F
         measured: 0,
         required: 0,
         unit: 'modules',
-        message: `In ${arrangement}, nothing hangs at head height (underside between 1000 mm and ${mm(standing)}) over the walkway. ${SOURCES.headStrike.brief}.`,
+        message: `In ${arrangement}, nothing hangs at head height (underside between ${mm(RULE_CONSTANTS.floorBlockBelow)} and ${mm(standing)}) over the walkway. ${SOURCES.headStrike.brief}.`,
         source: SOURCES.headStrike.cite,
       },
     ];

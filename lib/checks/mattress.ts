@@ -1,11 +1,12 @@
 /**
  * Standard mattress sizes per region, and which of them fits a bed's clear rectangle. UK and EU
- * sizes are published in centimetres; US sizes in inches, converted here with the convert-units
- * library (not by hand) and kept to 0.1 mm. Sources beside each table (SOURCES.mattress*).
- * Pure: must never import UI, framework or database code.
+ * sizes are sold in centimetres; US sizes in inches, at 25.4 mm to the inch exactly (the one
+ * conversion constant, `MM_PER_INCH` in lib/layout/units) and kept to 0.1 mm. Sources beside each
+ * table (SOURCES.mattress*): trade sizes, common practice. Pure: must never import UI, framework
+ * or database code.
  */
-import convert from 'convert-units';
 import type { MattressRegion } from '../layout/schema';
+import { MM_PER_INCH } from '../layout/units';
 import { SOURCES, type Source } from './sources';
 
 export interface Mattress {
@@ -18,12 +19,12 @@ export interface Mattress {
 }
 
 const cm = (n: number) => n * 10;
-/** Inches to millimetres through convert-units, rounded to 0.1 mm (the library's own factor chain adds float noise). */
+/** Inches to millimetres (25.4 mm to the inch), rounded to 0.1 mm. */
 export function inchesToMm(inches: number): number {
-  return Math.round(convert(inches).from('in').to('mm') * 10) / 10;
+  return Math.round(inches * MM_PER_INCH * 10) / 10;
 }
 
-// UK — SOURCES.mattressUk (published UK bed size charts)
+// UK — SOURCES.mattressUk (trade sizes, common practice)
 const UK: Mattress[] = [
   { region: 'uk', name: 'UK single', width: cm(90), length: cm(190) },
   { region: 'uk', name: 'UK small double', width: cm(120), length: cm(190) },
@@ -31,14 +32,14 @@ const UK: Mattress[] = [
   { region: 'uk', name: 'UK king', width: cm(150), length: cm(200) },
   { region: 'uk', name: 'UK super king', width: cm(180), length: cm(200) },
 ];
-// EU — SOURCES.mattressEu (published continental size charts)
+// EU — SOURCES.mattressEu (trade sizes, common practice)
 const EU: Mattress[] = [
   { region: 'eu', name: 'EU single', width: cm(90), length: cm(200) },
   { region: 'eu', name: 'EU double', width: cm(140), length: cm(200) },
   { region: 'eu', name: 'EU king', width: cm(160), length: cm(200) },
   { region: 'eu', name: 'EU super king', width: cm(180), length: cm(200) },
 ];
-// US — SOURCES.mattressUs (Better Sleep Council chart), inches converted with convert-units
+// US — SOURCES.mattressUs (trade sizes, common practice), in inches
 const US: Mattress[] = (
   [
     ['US twin', 38, 75],

@@ -1,14 +1,14 @@
 /**
- * How findings name things in words: modules by their label or kind title with their id,
+ * How findings name things in words: modules by their label or kind name (never an id; a finding
+ * carries `moduleIds` for the drawing to highlight),
  * lists joined in plain English, lengths with units. Pure text; must never import UI,
  * framework or database code.
  */
 import { kindSpec } from '../layout/kinds';
 import type { Module } from '../layout/schema';
 
-export function moduleName(m: Pick<Module, 'id' | 'kind' | 'label'>): string {
-  const title = m.label?.trim() || kindSpec(m.kind)?.title || m.kind;
-  return `${title} “${m.id}”`;
+export function moduleName(m: Pick<Module, 'kind' | 'label'>): string {
+  return m.label?.trim() || kindSpec(m.kind)?.title || 'Module';
 }
 
 export function listNames(names: string[], max = 6): string {

@@ -19,7 +19,7 @@ export interface CheckSettings {
 }
 
 export const DEFAULT_SETTINGS: Readonly<CheckSettings> = Object.freeze({
-  walkwayMin: 450, // EN 1645-1 aisle/escape width — secondary citation (SOURCES.walkwayMin)
+  walkwayMin: 450, // EN 1646-1 walkway/escape width — from memory, clause not checked (SOURCES.walkwayMin)
   bedAllowance: 100, // common practice, no source (SOURCES.bedLength)
   bedWidthPerSleeper: 600, // common practice, no source (SOURCES.bedWidth)
   levelTolerance: 20, // common practice, no source (SOURCES.bedLevel)

@@ -49,7 +49,8 @@ function mattressWords(ctx: CheckContext, bed: Bed): string {
   const charts = mattressSource(region).brief;
   if (bed.mattress) return `It takes a ${formatMattress(bed.mattress)} slept ${bed.lengthways ? 'lengthways (along the van)' : 'across the van'} (${charts}).`;
   const smallest = MATTRESSES[region].reduce((a, b) => (a.width * a.length <= b.width * b.length ? a : b));
-  return `No standard ${region.toUpperCase()} mattress fits; the smallest, ${formatMattress(smallest)}, needs more (${charts}).`;
+  const where = region === 'uk' ? 'UK' : region === 'eu' ? 'continental European' : 'US';
+  return `None of the usual ${where} mattress sizes fits; the smallest, ${formatMattress(smallest)}, needs more room (${charts}). A mattress cut to size will.`;
 }
 
 export function sleepChecks(ctx: CheckContext): Finding[] {

@@ -1,10 +1,12 @@
 /**
  * travel.seats — in the travel arrangement, everyone who sleeps in the van needs a belted seat:
- * the cab seats (bay.cabSeats, default 2) plus modules of kind `seat` with `props.belted: true`.
+ * the cab seats (bay.cabSeats, default 2) plus travel seats that are belted (`props.belted`, the
+ * kind's default being belted — the same reading as the weight plan's).
  * Warns when the sleepers outnumber them, and always carries the caution that seats used while
  * driving must be approved and anchored as local vehicle rules require (SOURCES.seats).
  * Pure: must never import UI, framework or database code.
  */
+import { beltedTravelSeats } from '../planning/module-facts';
 import { inArrangement } from './bayModel';
 import type { CheckContext } from './context';
 import { listNames, moduleName, plural } from './naming';
@@ -17,8 +19,9 @@ const CAUTION =
 export function travelSeats(ctx: CheckContext): Finding {
   const cab = ctx.doc.bay.cabSeats ?? 2;
   const seats = ctx.doc.modules.filter((m) => m.kind === 'seat' && inArrangement(m, 'travel'));
-  const belted = seats.filter((m) => m.props?.belted === true);
-  const unbelted = seats.filter((m) => m.props?.belted !== true);
+  // One reading of "belted" for the checks and the weight plan: the kind's default (belted) unless the module says otherwise.
+  const belted = beltedTravelSeats(ctx.doc);
+  const unbelted = seats.filter((m) => !belted.includes(m));
   const total = cab + belted.length;
   const people = ctx.doc.occupants.sleepers.length;
   const counted = `${plural(cab, 'cab seat')}${belted.length ? ` + ${plural(belted.length, 'belted seat')} (${listNames(belted.map(moduleName), 4)})` : ''}`;

@@ -1,6 +1,6 @@
 /**
  * Walkway rules, in the travel and lounge arrangements:
- *   walkway.reach  a person (disk of diameter walkwayMin, EN 1645-1 450 mm — secondary citation)
+ *   walkway.reach  a person (disk of diameter walkwayMin, EN 1646-1 450 mm — from memory)
  *                  coming in at a door can stand squarely in front of every module worked from
  *                  its front, within arm's reach (700 mm, common practice)
  *   walkway.width  the narrowest corridor on the way: the widest disk, in whole mm, that still
@@ -21,9 +21,9 @@ import type { Finding } from './types';
 export const WALKWAY_ARRANGEMENTS: Arrangement[] = ['travel', 'lounge'];
 
 const reachSource = `${SOURCES.walkwayMin.cite}; ${SOURCES.armReach.cite}`;
-const reachBrief = 'Walkway width from EN 1645-1 (secondary citation); arm’s reach is common practice, no source';
+const reachBrief = 'Walkway width from EN 1646-1 (from memory); arm’s reach is common practice, no source';
 const widthSource = `${SOURCES.walkwayComfort.cite}; ${SOURCES.walkwayMin.cite}`;
-const widthBrief = 'Comfortable width is common practice, no source; minimum from EN 1645-1 (secondary citation)';
+const widthBrief = 'Comfortable width is common practice, no source; minimum from EN 1646-1 (from memory)';
 
 export function walkwayReach(ctx: CheckContext, arrangement: Arrangement): Finding {
   const { walkwayMin } = ctx.settings;
@@ -135,6 +135,6 @@ export function walkwayWidth(ctx: CheckContext, arrangement: Arrangement): Findi
     ...base,
     status: ok ? 'pass' : 'warn',
     measured: diameter,
-    message: `The narrowest part of the ${arrangement} walkway is ${mm(diameter)} (the widest person who still gets ${what}); ${ok ? 'at least' : 'below'} the comfortable ${mm(comfortable)} (minimum ${mm(walkwayMin)} + 100 mm).${squeeze} ${widthBrief}.`,
+    message: `The narrowest part of the ${arrangement} walkway is ${mm(diameter)} (the widest person who still gets ${what}); ${ok ? 'at least' : 'below'} the comfortable ${mm(comfortable)} (minimum ${mm(walkwayMin)} + ${mm(RULE_CONSTANTS.walkwayComfortExtra)}).${squeeze} ${widthBrief}.`,
   };
 }

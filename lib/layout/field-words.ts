@@ -21,6 +21,7 @@ export const FACING_WORDS: Record<Module['facing'], string> = { front: 'front (t
 export const PROP_WORDS: Record<string, string> = {
   litres: 'Capacity (litres)', capacityL: 'Capacity (litres)', watts: 'Power (W)', dutyCycle: 'Duty cycle (0–1)', burners: 'Burners', cylinders: 'Cylinders',
   cylinderKg: 'Cylinder size (kg)', belted: 'Belted seat', fillLevel: 'Fill level drawn (0–1)',
+  approved: 'Seat and belt of an approved type', anchorageTested: 'Anchorages fitted to the maker’s kit or tested',
 };
 
 /** The name of a kind's own value; an unlisted key is spelt out in words ("fuelType" → "fuel type"). */

@@ -73,11 +73,23 @@ export const doorSchema = z.strictObject({
 });
 export type Door = z.infer<typeof doorSchema>;
 
+/**
+ * The one set of limits for the bay's size, used by the schema (so the API), the new-layout form
+ * and the editor's Bay panel alike. The upper bound keeps arithmetic sane and leaves room for the
+ * synthetic stress layouts of the benchmark; a bay longer than the vehicle's overall length is
+ * reported as out of range by the weight check.
+ */
+export const BAY_LIMITS = {
+  length: { min: 500, max: 100_000 },
+  width: { min: 500, max: 100_000 },
+  height: { min: 500, max: 100_000 },
+} as const;
+
 export const baySchema = z
   .strictObject({
-    length: mm().min(500, 'a bay is at least 500 mm long'),
-    width: mm().min(500, 'a bay is at least 500 mm wide'),
-    height: mm().min(500, 'a bay is at least 500 mm high'),
+    length: mm(BAY_LIMITS.length.max).min(BAY_LIMITS.length.min, `a bay is at least ${BAY_LIMITS.length.min} mm long`),
+    width: mm(BAY_LIMITS.width.max).min(BAY_LIMITS.width.min, `a bay is at least ${BAY_LIMITS.width.min} mm wide`),
+    height: mm(BAY_LIMITS.height.max).min(BAY_LIMITS.height.min, `a bay is at least ${BAY_LIMITS.height.min} mm high`),
     wheelArches: z.array(wheelArchSchema).max(8).default([]),
     doors: z.array(doorSchema).max(12).default([]),
     bulkhead: z.boolean().default(true),
@@ -124,22 +136,32 @@ export const modulePropsSchema = z
   .record(z.string().max(40).regex(/^[A-Za-z][A-Za-z0-9]*$/, 'prop names are letters and digits'), z.union([z.number().finite(), z.boolean(), text(200)]))
   .refine((r) => Object.keys(r).length <= 32, 'at most 32 props');
 
+/** The one set of limits for a module's place and size, used by the schema and the Details panel. */
+export const MODULE_LIMITS = {
+  position: { min: -100_000, max: 100_000 },
+  length: { min: 1, max: 100_000 },
+  width: { min: 1, max: 100_000 },
+  elevation: { min: 0, max: 5000 },
+  height: { min: 1, max: 5000 },
+  massKg: { min: 0, max: 5000 },
+} as const;
+
 export const moduleSchema = z.strictObject({
   id,
   kind: moduleKindSchema,
   label: text(80).optional(),
-  x: mmSigned(),
-  y: mmSigned(),
-  length: mm().min(1, 'a module has a length'),
-  width: mm().min(1, 'a module has a width'),
+  x: mmSigned(MODULE_LIMITS.position.max),
+  y: mmSigned(MODULE_LIMITS.position.max),
+  length: mm(MODULE_LIMITS.length.max).min(MODULE_LIMITS.length.min, 'a module has a length'),
+  width: mm(MODULE_LIMITS.width.max).min(MODULE_LIMITS.width.min, 'a module has a width'),
   /** Underside above the FINISHED floor. */
-  elevation: mm(5000),
-  height: mm(5000).min(1, 'a module has a height'),
+  elevation: mm(MODULE_LIMITS.elevation.max),
+  height: mm(MODULE_LIMITS.height.max).min(MODULE_LIMITS.height.min, 'a module has a height'),
   facing: z.enum(FACINGS),
   arrangements: z.array(arrangementSchema).min(1, 'a module exists in at least one arrangement').max(3)
     .refine((a) => new Set(a).size === a.length, 'each arrangement once'),
   surface: z.enum(SURFACES).optional(),
-  massKg: z.number().finite().min(0).max(5000).optional(),
+  massKg: z.number().finite().min(MODULE_LIMITS.massKg.min).max(MODULE_LIMITS.massKg.max).optional(),
   props: modulePropsSchema.optional(),
 });
 export type Module = z.infer<typeof moduleSchema>;

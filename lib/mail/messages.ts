@@ -10,17 +10,32 @@ import { SIGN_OFF_CAUTION } from '../layout/cautions';
 /** Said wherever a plan is issued or approved (its words live in lib/layout/cautions). */
 export { SIGN_OFF_CAUTION };
 
-export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null }): ComposedMail {
+export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null; role?: 'designer' | 'client' }): ComposedMail {
   const until = p.expiresAt.toISOString().slice(0, 10);
-  return compose(`${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
+  const designer = p.role === 'designer';
+  return compose(designer ? `${oneLine(p.studioName, 80)} invites you to draw layouts with them` : `${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,
     paragraphs: [
-      `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, leave mark-ups on the drawing and approve revisions.`,
+      designer
+        ? `${p.inviterName} at ${p.studioName} has invited you to join their drawing office on Baywright as a designer: you will draw and check the studio's van layouts.`
+        : `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, leave mark-ups on the drawing and approve revisions.`,
       ...(p.layoutName ? [`The layout waiting for you: ${p.layoutName}.`] : []),
-      `Set a password to join. The link works once and until ${until}.`,
+      `Open the link to join. New to Baywright? You choose your own password there. Already have an account? Sign in with it and you join with the account you have. The link works once and until ${until}.`,
     ],
-    action: { label: 'Set your password', url: p.url },
-    footer: 'If you were not expecting this, ignore the mail: nothing happens unless the link is used.',
+    action: { label: 'Join the studio', url: p.url },
+    footer: 'If you were not expecting this, ignore the mail: nothing happens unless the link is used. Nobody at the workshop sees or sets your password.',
+  });
+}
+
+export function passwordResetMail(p: { name: string; url: string; minutes: number }): ComposedMail {
+  return compose('Set a new Baywright password', {
+    greeting: `Hello ${oneLine(p.name, 80)},`,
+    paragraphs: [
+      'Someone, hopefully you, asked to set a new password for your Baywright account.',
+      `Use the link within ${p.minutes} minutes; it works once. Setting a new password signs you out everywhere else.`,
+    ],
+    action: { label: 'Set a new password', url: p.url },
+    footer: 'If you did not ask for this, ignore the mail: your password stays as it is.',
   });
 }
 

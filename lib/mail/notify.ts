@@ -20,12 +20,16 @@ import type { ComposedMail } from './compose';
 
 export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
 
-async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail): Promise<MailOutcome> {
+/**
+ * Sends one mail per recipient. `sender` is counted against the mail budget (lib/mail/budget.ts);
+ * invitations took theirs before anything changed, so they pass none here.
+ */
+async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail, sender?: Actor): Promise<MailOutcome> {
   if (!to.length) return 'no-recipient';
   let ok = true;
   for (const r of to) {
     try {
-      await sendMail({ ...build(r), to: r, studioId });
+      await sendMail({ ...build(r), to: r, studioId, ...(sender ? { sender: { userId: sender.userId, studioId: sender.studioId } } : {}) });
     } catch (err) {
       ok = false;
       console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
@@ -46,7 +50,7 @@ export async function sendInvitation(req: Request, actor: Actor, issued: IssuedI
   const outcome = await deliver(actor.studioId, [{ email: inv.email, name: inv.name }], () =>
     invitationMail({
       clientName: inv.name, studioName: issued.studioName, inviterName: issued.inviterName, url,
-      expiresAt: new Date(inv.expiresAt), layoutName: inv.layout?.name ?? null,
+      expiresAt: new Date(inv.expiresAt), layoutName: inv.layout?.name ?? null, role: inv.role,
     }),
   );
   if (outcome === 'sent') await markInvitationSent(inv.id);
@@ -70,7 +74,7 @@ export async function notifyRevisionIssued(req: Request, actor: Actor, layout: {
   const studio = await studioName(actor.studioId);
   return deliver(actor.studioId, [client], (r) =>
     revisionIssuedMail({ clientName: r.name, studioName: studio, layoutName: layout.name, letter: rev.letter, note: rev.note, url }),
-  );
+  actor);
 }
 
 export async function notifyDecision(req: Request, actor: Actor, layout: { id: string; name: string }, rev: RevisionDto): Promise<MailOutcome> {
@@ -81,7 +85,7 @@ export async function notifyDecision(req: Request, actor: Actor, layout: { id: s
   const to = await workshopFor(layout.id, [await revisionIssuerId(rev.id)]);
   return deliver(actor.studioId, to, (r) =>
     decisionMail({ recipientName: r.name, clientName: actor.name, layoutName: layout.name, letter: rev.letter, decision: last.decision, message: last.message, url }),
-  );
+  actor);
 }
 
 export async function notifyMarkup(
@@ -103,5 +107,5 @@ export async function notifyMarkup(
   }
   to = to.filter((r) => r.email.toLowerCase() !== actor.email.toLowerCase());
   const body = reply ? thread.replies[thread.replies.length - 1]?.body ?? '' : thread.body;
-  return deliver(actor.studioId, to, (r) => markupMail({ recipientName: r.name, authorName: actor.name, layoutName: layout.name, body, reply, url }));
+  return deliver(actor.studioId, to, (r) => markupMail({ recipientName: r.name, authorName: actor.name, layoutName: layout.name, body, reply, url }), actor);
 }

@@ -9,6 +9,7 @@ import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { fakeSmtpAddress } from '../fakes/smtp/address';
 import type { ComposedMail } from './compose';
+import { takeMailBudget, type MailSender } from './budget';
 
 export class MailNotConfigured extends Error {
   constructor() {
@@ -50,10 +51,13 @@ export function mailFrom(): string {
 export interface OutgoingMail extends ComposedMail {
   to: { email: string; name: string };
   studioId: string;
+  /** Whose action sends it: counted against their and their studio's mail budget (budget.ts). */
+  sender?: MailSender;
 }
 
-/** Sends one message; resolves with its Message-ID. */
+/** Sends one message; resolves with its Message-ID. Throws MailBudgetSpent when over budget. */
 export async function sendMail(mail: OutgoingMail): Promise<string> {
+  if (mail.sender) await takeMailBudget(mail.sender);
   const info = await transporter().sendMail({
     from: mailFrom(),
     to: { name: mail.to.name, address: mail.to.email },

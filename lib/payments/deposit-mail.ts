@@ -36,6 +36,7 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
       }),
       to: client,
       studioId: actor.studioId,
+      sender: { userId: actor.userId, studioId: actor.studioId },
     });
     return 'sent';
   } catch (err) {

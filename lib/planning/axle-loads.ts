@@ -3,9 +3,10 @@
  *
  * `computeAxleLoads(doc)` gathers every mass with a position — the base vehicle in running order
  * (placed from its front-axle share), each module (its `massKg`, else its kind's default), water
- * at the chosen fill (1 kg per litre; fresh water at 20 °C is 0.998 kg/L, handbook value, so the
- * round figure errs heavy), gas cylinders (content plus tare), passengers at 75 kg on their seats
- * (the driver is already in the mass in running order), personal effects and free payload items —
+ * at the chosen fill (1 kg per litre; fresh water at 20 °C is 0.998 kg/L, handbook value from
+ * memory, so the round figure errs heavy), gas cylinders (content plus tare), passengers at 75 kg
+ * (the driver is already in the mass in running order) — every declared person, on a drawn seat
+ * where there is one, else at the cab row, said so in `assumptions` — personal effects and free payload items —
  * and splits each between the axles by the lever rule. It reports the total, the axle loads,
  * the centre of mass for the plan, and what is missing or assumed.
  *
@@ -14,7 +15,8 @@
  */
 import type { LayoutDoc } from '../layout';
 import { leverSplit } from './lever';
-import { beltedTravelSeats, moduleCentre, moduleMassKg, moduleName, numericProp, tankLitres } from './module-facts';
+import { INPUTS, type InputNeed } from './inputs';
+import { beltedTravelSeats, moduleCentre, moduleMassKg, moduleName, moduleRef, numericProp, tankLitres } from './module-facts';
 import { OCCUPANT_KG, personalEffectsAllowance } from './payload';
 
 /** kg per litre used for tank contents (round figure, errs heavy; see header). */
@@ -50,8 +52,10 @@ export interface MassReport {
   travellers: number;
   /** Overall length used for the allowances, m (null when not entered). */
   lengthM: number | null;
-  /** Fields to enter before a rule can be evaluated, as `systems.…` paths. */
-  missing: string[];
+  /** Inputs to enter before a rule can be evaluated, by their on-screen label. */
+  missing: InputNeed[];
+  /** Inputs that contradict each other, in words (e.g. more on the front axle than in all). */
+  conflicts: string[];
   /** Stand-in values used, in words. */
   assumptions: string[];
 }
@@ -63,28 +67,30 @@ function seatCount(doc: LayoutDoc): number {
 export function computeAxleLoads(doc: LayoutDoc): MassReport {
   const vehicle = doc.systems?.vehicle ?? {};
   const load = doc.systems?.load ?? {};
-  const missing: string[] = [];
+  const missing: InputNeed[] = [];
+  const conflicts: string[] = [];
   const assumptions: string[] = [];
   const items: MassItem[] = [];
   const midY = doc.bay.width / 2;
 
   const canPlace = vehicle.wheelbaseMm !== undefined && vehicle.frontAxleX !== undefined;
-  if (vehicle.wheelbaseMm === undefined) missing.push('systems.vehicle.wheelbaseMm');
-  if (vehicle.frontAxleX === undefined) missing.push('systems.vehicle.frontAxleX');
+  if (vehicle.massInRunningOrderKg === undefined) missing.push(INPUTS.massInRunningOrder);
+  if (vehicle.frontAxleRunningOrderKg === undefined) missing.push(INPUTS.frontAxleRunningOrder);
+  if (vehicle.wheelbaseMm === undefined) missing.push(INPUTS.wheelbase);
+  if (vehicle.frontAxleX === undefined) missing.push(INPUTS.frontAxlePosition);
 
   // The base vehicle, placed where its own front/rear split puts it.
-  if (vehicle.massInRunningOrderKg === undefined) missing.push('systems.vehicle.massInRunningOrderKg');
   let vehiclePlaced = false;
   if (vehicle.massInRunningOrderKg !== undefined) {
     const miro = vehicle.massInRunningOrderKg;
     let x = 0;
     if (canPlace && vehicle.frontAxleRunningOrderKg !== undefined && miro > 0) {
-      if (vehicle.frontAxleRunningOrderKg > miro) missing.push('systems.vehicle.frontAxleRunningOrderKg (more than the whole mass in running order)');
+      if (vehicle.frontAxleRunningOrderKg > miro) conflicts.push(`the mass in running order on the front axle (${Math.round(vehicle.frontAxleRunningOrderKg)} kg) is more than the whole mass in running order (${Math.round(miro)} kg)`);
       else {
         x = vehicle.frontAxleX! + ((miro - vehicle.frontAxleRunningOrderKg) / miro) * vehicle.wheelbaseMm!;
         vehiclePlaced = true;
       }
-    } else if (vehicle.frontAxleRunningOrderKg === undefined) missing.push('systems.vehicle.frontAxleRunningOrderKg');
+    }
     items.push({ id: 'vehicle', label: 'Base vehicle in running order (driver included)', group: 'vehicle', massKg: miro, x, y: midY });
   }
 
@@ -94,35 +100,42 @@ export function computeAxleLoads(doc: LayoutDoc): MassReport {
     if (m.kind === 'fresh-water-tank' || m.kind === 'grey-water-tank') {
       const fill = (m.kind === 'fresh-water-tank' ? load.freshFillPct ?? 100 : load.greyFillPct ?? 0) / 100;
       const kg = tankLitres(m) * fill * WATER_KG_PER_L;
-      if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleName(m)} at ${Math.round(fill * 100)} %`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
+      if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleRef(m)} at ${Math.round(fill * 100)} %`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
     }
     if (m.kind === 'gas-locker') {
       const cylinders = Math.max(0, Math.round(numericProp(m, 'cylinders') ?? 0));
       const contentKg = Math.max(0, numericProp(m, 'cylinderKg') ?? 0);
       const tareKg = doc.systems?.gas?.cylinderTareKg ?? contentKg;
-      if (doc.systems?.gas?.cylinderTareKg === undefined && cylinders > 0) assumptions.push(`cylinder tare taken as its gas content (${contentKg} kg); enter systems.gas.cylinderTareKg from the stamp`);
+      if (doc.systems?.gas?.cylinderTareKg === undefined && cylinders > 0) assumptions.push(`each cylinder's tare taken as its gas content (${contentKg} kg); enter the stamped cylinder tare on the gas tab`);
       const kg = cylinders * (contentKg + tareKg);
-      if (kg > 0) items.push({ id: `gas:${m.id}`, label: `${cylinders} × ${contentKg} kg gas cylinder, full`, group: 'gas', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
+      if (kg > 0) items.push({ id: `gas:${m.id}`, label: `${cylinders} × ${contentKg} kg gas cylinder${cylinders === 1 ? '' : 's'}, full`, group: 'gas', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
     }
   }
 
-  // Passengers: cab seats first, then belted travel seats. The driver is in running order.
+  // People: every declared traveller counts. The driver is in the mass in running order; the
+  // passengers take the cab passenger seats, then the belted travel seats, and anyone left over is
+  // placed at the cab row (said so) rather than left out.
   const seats = seatCount(doc);
   const travellers = load.travellers ?? seats;
-  if (travellers > seats) missing.push(`systems.load.travellers (${travellers} travellers but ${seats} seats)`);
+  if (travellers > seats) conflicts.push(`${travellers} travellers but ${seats} seats: every traveller needs a belted seat`);
   const cabX = vehicle.cabSeatX ?? vehicle.frontAxleX ?? 0;
-  if (vehicle.cabSeatX === undefined && doc.bay.cabSeats > 1 && travellers > 1) {
-    assumptions.push('cab passengers placed over the front axle; enter systems.vehicle.cabSeatX');
-  }
-  const seatSpots: { label: string; x: number; y: number; moduleId?: string }[] = [];
-  for (let i = 1; i < doc.bay.cabSeats; i++) seatSpots.push({ label: `Cab passenger ${i}`, x: cabX, y: midY });
+  const cabWhere = vehicle.cabSeatX !== undefined ? 'at the cab seat position' : vehicle.frontAxleX !== undefined ? 'over the front axle (cab seat position not entered)' : 'at the front of the bay (cab seat position not entered)';
+  const spots: { label: string; x: number; y: number; moduleId?: string }[] = [];
+  for (let i = 1; i < doc.bay.cabSeats; i++) spots.push({ label: `Cab passenger ${i}`, x: cabX, y: midY });
   for (const s of beltedTravelSeats(doc)) {
     const c = moduleCentre(s);
-    seatSpots.push({ label: `Passenger on ${moduleName(s)}`, x: c.x, y: c.y, moduleId: s.id });
+    spots.push({ label: `Passenger on ${moduleRef(s)}`, x: c.x, y: c.y, moduleId: s.id });
   }
-  seatSpots.slice(0, Math.max(0, Math.min(travellers, seats) - 1)).forEach((spot, i) => {
+  const passengers = Math.max(0, travellers - 1);
+  const cabSeated = Math.min(passengers, Math.max(0, doc.bay.cabSeats - 1));
+  let unseated = 0;
+  for (let i = 0; i < passengers; i++) {
+    const spot = spots[i] ?? { label: `Passenger ${i + 1} (no seat drawn)`, x: cabX, y: midY };
+    if (!spots[i]) unseated++;
     items.push({ id: `occupant:${i + 1}`, label: spot.label, group: 'occupant', massKg: OCCUPANT_KG, x: spot.x, y: spot.y, moduleId: spot.moduleId });
-  });
+  }
+  if (cabSeated > 0 && vehicle.cabSeatX === undefined) assumptions.push(`cab passengers placed ${cabWhere}`);
+  if (unseated > 0) assumptions.push(`${unseated} ${unseated === 1 ? 'passenger has' : 'passengers have'} no seat drawn and ${unseated === 1 ? 'is' : 'are'} placed at the cab row, ${cabWhere}`);
 
   const lengthM = vehicle.overallLengthMm !== undefined ? vehicle.overallLengthMm / 1000 : null;
   let effectsKg = load.personalEffectsKg;
@@ -131,11 +144,14 @@ export function computeAxleLoads(doc: LayoutDoc): MassReport {
       effectsKg = personalEffectsAllowance(seats, lengthM);
       assumptions.push(`personal effects taken as the EN 1646-2 allowance, ${round1(effectsKg)} kg`);
     } else {
-      missing.push('systems.vehicle.overallLengthMm (or systems.load.personalEffectsKg)');
+      missing.push(INPUTS.overallLength);
       effectsKg = 0;
     }
   }
-  if (effectsKg > 0) items.push({ id: 'effects', label: 'Personal effects', group: 'effects', massKg: effectsKg, x: load.personalEffectsX ?? doc.bay.length / 2, y: midY });
+  if (effectsKg > 0) {
+    if (load.personalEffectsX === undefined) assumptions.push('personal effects stowed at the middle of the bay');
+    items.push({ id: 'effects', label: 'Personal effects', group: 'effects', massKg: effectsKg, x: load.personalEffectsX ?? doc.bay.length / 2, y: midY });
+  }
   for (const p of load.items ?? []) {
     items.push({ id: `payload:${p.id}`, label: p.label, group: 'payload', massKg: p.massKg, x: p.x, y: p.y ?? midY });
   }
@@ -151,7 +167,7 @@ export function computeAxleLoads(doc: LayoutDoc): MassReport {
       centreOfMass = { x: sum(items.map((i) => i.massKg * i.x)) / totalKg, y: sum(items.map((i) => i.massKg * i.y)) / totalKg };
     }
   }
-  return { items, totalKg, builtKg, axles, centreOfMass, seats, travellers, lengthM, missing, assumptions };
+  return { items, totalKg, builtKg, axles, centreOfMass, seats, travellers, lengthM, missing, conflicts, assumptions };
 }
 
 function sum(values: number[]): number {

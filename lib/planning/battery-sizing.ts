@@ -6,7 +6,7 @@
  * lead-acid and AGM are kept above half charge for a reasonable cycle life (50 %); LiFePO4 is
  * commonly planned at 80 %. Charge efficiency: lead-acid/AGM ≈ 85 %, LiFePO4 ≈ 95 % (common
  * practice, no source). Capacities are C20 figures (the 20-hour rate) as EN 1648-2 counts them
- * (as cited in the brief).
+ * (secondary).
  *
  * Pure numbers. Must never import UI, framework or database code.
  */
@@ -48,5 +48,5 @@ export function autonomyDays(usable: number, dailyWh: number): number {
   return dailyWh === 0 ? Infinity : usable / dailyWh;
 }
 
-/** EN 1648-2 cl. 4.3.2: auxiliary battery of at least 60 Ah (C20) (as cited in the brief; secondary). */
+/** EN 1648-2 cl. 4.3.2: auxiliary battery of at least 60 Ah (C20) (secondary: quoted in trade literature; standard text not consulted). */
 export const EN1648_MIN_AUX_AH = 60;

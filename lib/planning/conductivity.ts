@@ -21,15 +21,18 @@ export interface MaterialConductivity {
 const ISO = 'EN ISO 10456 Table 3 (from memory)';
 const DECLARED = 'typical declared λ (from memory)';
 
-/** Order matters: specific names before general ones ("plywood" before "wood", "xps" before "foam"). */
+/**
+ * Order matters: specific names before general ones — "mineral wool", "glass wool", "rock wool"
+ * before the bare word "wool" (which means sheep wool), "plywood" before "wood".
+ */
 export const CONDUCTIVITIES: MaterialConductivity[] = [
   { id: 'pir', title: 'PIR/PUR board', match: ['pir', 'pur', 'polyiso', 'polyurethane'], lambda: 0.022, source: DECLARED },
   { id: 'xps', title: 'XPS foam board', match: ['xps', 'extruded polystyrene'], lambda: 0.034, source: DECLARED },
   { id: 'eps', title: 'EPS foam board', match: ['eps', 'expanded polystyrene', 'polystyrene'], lambda: 0.036, source: DECLARED },
   { id: 'elastomer', title: 'Closed-cell elastomeric/PE foam', match: ['closed-cell', 'closed cell', 'elastomeric', 'pe foam', 'polyethylene foam'], lambda: 0.036, source: DECLARED },
-  { id: 'sheep-wool', title: 'Sheep wool', match: ['sheep', 'wool batt', 'wool'], lambda: 0.038, source: DECLARED },
-  { id: 'mineral-wool', title: 'Mineral wool', match: ['mineral wool', 'glass wool', 'rock wool', 'rockwool', 'glasswool'], lambda: 0.037, source: DECLARED },
-  { id: 'polyester', title: 'Polyester fibre', match: ['polyester', 'thermo fibre'], lambda: 0.040, source: DECLARED },
+  { id: 'mineral-wool', title: 'Mineral wool', match: ['mineral wool', 'glass wool', 'glass fibre wool', 'rock wool', 'stone wool', 'glasswool', 'stonewool'], lambda: 0.037, source: DECLARED },
+  { id: 'sheep-wool', title: 'Sheep wool', match: ['sheep wool', 'sheep', 'wool batt', 'wool'], lambda: 0.038, source: DECLARED },
+  { id: 'polyester', title: 'Polyester fibre', match: ['polyester', 'polyester fibre'], lambda: 0.040, source: DECLARED },
   { id: 'cork', title: 'Cork board', match: ['cork'], lambda: 0.040, source: DECLARED },
   { id: 'plywood', title: 'Plywood (500 kg/m³)', match: ['plywood', 'ply'], lambda: 0.13, source: ISO },
   { id: 'mdf', title: 'Fibreboard / MDF', match: ['mdf', 'fibreboard', 'hardboard'], lambda: 0.14, source: ISO },

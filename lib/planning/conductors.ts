@@ -3,20 +3,32 @@
  * and the ampacity of boat/vehicle cable by insulation rating.
  *
  * - Copper resistivity at 20 °C: 1/58 Ω·mm²/m = 0.017241 (International Annealed Copper Standard,
- *   IEC 60028; the handbook figure usually rounded to 0.0172). The unrounded value is used so
- *   results match tables computed from it.
+ *   IEC 60028; from memory; the handbook figure usually rounded to 0.0172), with its temperature
+ *   coefficient 0.00393 per K at 20 °C (IEC 60028, from memory): ρ(T) = ρ₂₀ × (1 + α (T − 20)).
+ *   The unrounded value is used so results match tables computed from it.
  * - AWG diameters from the defining formula of ASTM B258: d = 0.127 mm × 92^((36 − n)/39),
  *   with 1/0 = n 0, 2/0 = −1, 3/0 = −2, 4/0 = −3.
  * - Metric sizes: the IEC 60228 nominal cross-section series.
  * - Ampacity: 33 CFR 183.425 Table 5 (allowable amperage of conductors by insulation temperature
- *   rating), engine-space factors and bundling factors of the same section — FROM MEMORY, not
- *   checked against the eCFR; verify before relying on a marginal result.
+ *   rating, 18 AWG to 4/0): the regulation text, read in a published reproduction of the CFR
+ *   (standard text consulted). The engine-space factors (note 1 of Table 5) and the bundling
+ *   factors are from memory.
  *
  * Plain numbers. Must never import UI, framework or database code.
  */
 
-/** Ω·mm²/m at 20 °C (IEC 60028, 1/58). */
+/** Ω·mm²/m at 20 °C (IEC 60028, 1/58; from memory). */
 export const COPPER_RESISTIVITY = 1 / 58;
+/** Temperature coefficient of annealed copper's resistance at 20 °C, per K (IEC 60028; from memory). */
+export const COPPER_ALPHA_20 = 0.00393;
+/** The conductor temperature the sizing assumes, °C. */
+export const SIZING_CONDUCTOR_C = 20;
+
+/** Copper resistivity at a conductor temperature, Ω·mm²/m. */
+export function copperResistivity(conductorC: number = SIZING_CONDUCTOR_C): number {
+  if (!Number.isFinite(conductorC) || conductorC < -50 || conductorC > 250) throw new RangeError('conductor temperature must be between −50 and 250 °C');
+  return COPPER_RESISTIVITY * (1 + COPPER_ALPHA_20 * (conductorC - 20));
+}
 
 export const INSULATION_RATINGS = [60, 75, 80, 90, 105, 125, 200] as const;
 export type InsulationRating = (typeof INSULATION_RATINGS)[number];
@@ -26,7 +38,7 @@ export interface AwgSize {
   /** The ASTM B258 gauge number (1/0 = 0, 2/0 = −1, …). */
   n: number;
   areaMm2: number;
-  /** Allowable amps by insulation rating (33 CFR 183.425 Table 5, from memory). */
+  /** Allowable amps by insulation rating (33 CFR 183.425 Table 5). */
   amps: Record<InsulationRating, number>;
 }
 
@@ -40,7 +52,7 @@ export function awgAreaMm2(n: number): number {
   return (Math.PI / 4) * d * d;
 }
 
-// gauge, n, then amps at 60, 75, 80, 90, 105, 125, 200 °C — 33 CFR 183.425 Table 5, from memory.
+// gauge, n, then amps at 60, 75, 80, 90, 105, 125, 200 °C — 33 CFR 183.425 Table 5 (regulation text).
 const TABLE: [string, number, number[]][] = [
   ['18', 18, [10, 10, 15, 20, 20, 25, 25]],
   ['16', 16, [15, 15, 20, 25, 25, 30, 35]],
@@ -50,6 +62,7 @@ const TABLE: [string, number, number[]][] = [
   ['8', 8, [55, 65, 70, 70, 80, 90, 100]],
   ['6', 6, [80, 95, 100, 100, 120, 125, 135]],
   ['4', 4, [105, 125, 130, 135, 160, 170, 180]],
+  ['3', 3, [120, 145, 150, 155, 180, 195, 210]],
   ['2', 2, [140, 170, 175, 180, 210, 225, 240]],
   ['1', 1, [165, 195, 210, 210, 245, 265, 280]],
   ['1/0', 0, [195, 230, 245, 245, 285, 305, 325]],

@@ -3,9 +3,10 @@
  * fixed ventilation the living space needs.
  *
  * - Gas locker vent: a low drop-out vent to outside of at least 2 % of the locker floor area and
- *   at least 100 cm² (DVGW G 607 / EN 1949, as cited in the brief; secondary, clause not checked).
- * - Fixed safety ventilation, EN 721, as cited in a TÜV guidance note for motor-caravan approval
- *   (secondary; clause not checked): with appliances that are not room-sealed (a gas hob), floor
+ *   at least 100 cm² (DVGW G 607 / EN 1949; secondary: as quoted in German motor-caravan gas
+ *   guidance, clause not checked).
+ * - Fixed safety ventilation, EN 721, as quoted in a German vehicle-inspection guidance note for
+ *   motor-caravan approval (secondary; clause not checked): with appliances that are not room-sealed (a gas hob), floor
  *   area up to 5 m²: 75 cm² high (roof extract) and 10 cm² low; 5–10 m²: 100 cm² high and 15 cm²
  *   low. Without combustion appliances, or with room-sealed ones only, up to 10 m²: 15 cm² as a
  *   roof extract or 30 cm² as another high vent, and 5 cm² low. Low vents at most 100 mm above the
@@ -18,6 +19,12 @@ import { moduleName, numericProp, stringProp } from './module-facts';
 
 export const LOCKER_VENT_MIN_CM2 = 100;
 export const LOCKER_VENT_FLOOR_FRACTION = 0.02;
+export const LOCKER_SOURCE = 'DVGW G 607 / EN 1949, cylinder compartments: drop-out vent of at least 2 % of the locker floor and at least 100 cm² (secondary, clause not checked)';
+export const EN721_SOURCE = 'EN 721 (safety ventilation of leisure accommodation vehicles), as quoted in a German vehicle-inspection guidance note (secondary, clause not checked)';
+/** Low vents count only within this height of the floor, mm (EN 721 as quoted, secondary). */
+export const LOW_VENT_MAX_HEIGHT_MM = 100;
+/** The floor area the quoted EN 721 figures cover, m². */
+export const EN721_MAX_FLOOR_M2 = 10;
 
 export interface GasAppliance {
   moduleId: string;
@@ -70,7 +77,7 @@ export interface VentilationNeed {
 /** EN 721 fixed ventilation (as cited, see header); null above 10 m², where the source gives no figure. */
 export function en721Ventilation(floorAreaM2: number, flueless: boolean, highVentInRoof: boolean): VentilationNeed | null {
   if (!Number.isFinite(floorAreaM2) || floorAreaM2 <= 0) throw new RangeError('floor area must be positive');
-  if (floorAreaM2 > 10) return null;
+  if (floorAreaM2 > EN721_MAX_FLOOR_M2) return null;
   if (flueless) {
     return floorAreaM2 <= 5
       ? { highCm2: 75, lowCm2: 10, band: 'floor up to 5 m², with a flueless appliance' }

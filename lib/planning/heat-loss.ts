@@ -19,13 +19,19 @@ import { numericProp } from './module-facts';
 
 export type Face = 'floor' | 'walls' | 'roof';
 
-/** EN ISO 6946 Table 7 (from memory), m²K/W. */
+/** EN ISO 6946 Table 7 (from memory), m²K/W: Rsi by direction of heat flow, Rse 0.04 in all. */
 export const RSI: Record<Face, number> = { roof: 0.1, walls: 0.13, floor: 0.17 };
 export const RSE = 0.04;
 /** EN 12831 (from memory): W per m³ per K per air change an hour. */
 export const AIR_HEAT_CAPACITY = 0.34;
 export const DEFAULT_DELTA_K = 20; // common practice, no source
 export const DEFAULT_AIR_CHANGES = 1; // common practice, no source
+export const U_VALUE_SOURCE = 'EN ISO 6946 (U = 1 ÷ (Rsi + Σ d/λ + Rse); surface resistances Table 7, from memory); λ from EN ISO 10456 Table 3 or typical declared values (from memory)';
+
+/** The build-up's own resistance, without the two surface resistances, m²K/W. */
+export function layerResistance(u: Pick<UValueResult, 'face' | 'rTotal'>): number {
+  return u.rTotal - RSI[u.face] - RSE;
+}
 
 export interface LayerResistance {
   material: string;

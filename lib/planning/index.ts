@@ -21,3 +21,5 @@ export * from './sheet-nesting';
 export * from './cut-list';
 export * from './parts-list';
 export * from './parts-csv';
+export * from './inputs';
+export * from './mass-balance';

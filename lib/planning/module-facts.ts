@@ -44,9 +44,15 @@ export function beltedTravelSeats(doc: LayoutDoc): Module[] {
   return doc.modules.filter((m) => m.kind === 'seat' && m.arrangements.includes('travel') && booleanProp(m, 'belted') !== false);
 }
 
-/** Name for messages: the label, else the kind's title, with the id. */
-export function moduleName(m: Module): string {
-  return `${m.label ?? kindSpec(m.kind).title} (${m.id})`;
+/** Name for messages and tables: the module's label, else its kind's name — never its id. */
+export function moduleName(m: Pick<Module, 'kind' | 'label'>): string {
+  return m.label?.trim() || kindSpec(m.kind).title;
+}
+
+/** A module mid-sentence: “its label” in quotes, else "the" and its kind's name in lower case. */
+export function moduleRef(m: Pick<Module, 'kind' | 'label'>): string {
+  const label = m.label?.trim();
+  return label ? `“${label}”` : `the ${kindSpec(m.kind).title.toLowerCase()}`;
 }
 
 /** Litres a tank module holds (`props.litres`, else the kind's default). */

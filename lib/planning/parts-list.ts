@@ -13,7 +13,7 @@
  */
 import { kindSpec, type LayoutDoc, type ModuleKind } from '../layout';
 import { CHEMISTRIES } from './battery-sizing';
-import { cableSize, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT } from './cable-size';
+import { cableSize, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, nominalSystemVolts } from './cable-size';
 import { planCutList, type CutListOptions } from './cut-list';
 import type { InsulationRating } from './conductors';
 
@@ -52,7 +52,10 @@ export interface PartsLine {
 export interface PartsList {
   currency: string;
   lines: PartsLine[];
+  /** What is not in the price list yet, by its description (never its price-list key). */
   unpriced: string[];
+  /** The same lines' price-list keys, for the price-list editor. */
+  unpricedKeys: string[];
   materialsMinor: number;
   labourHours: number;
   labourMinor: number;
@@ -99,7 +102,7 @@ export function computePartsList(doc: LayoutDoc, priceList: PriceList, cutOption
   for (const g of cut.byMaterial) push(`sheet:${g.material.id}`, 'sheet', `${g.material.title}, 2440 × 1220 mm sheet`, g.nest.sheetsNeeded, 'sheet');
 
   const power = doc.systems?.power;
-  const volts = power?.battery?.volts ?? 12;
+  const volts = nominalSystemVolts(power?.battery?.volts ?? 12);
   const cableMetres = new Map<number, number>();
   for (const c of power?.circuits ?? []) {
     const choice = cableSize({
@@ -131,7 +134,8 @@ export function computePartsList(doc: LayoutDoc, priceList: PriceList, cutOption
   return {
     currency: priceList.currency,
     lines,
-    unpriced: lines.filter((l) => l.unitPriceMinor === null).map((l) => l.key),
+    unpriced: lines.filter((l) => l.unitPriceMinor === null).map((l) => l.description),
+    unpricedKeys: lines.filter((l) => l.unitPriceMinor === null).map((l) => l.key),
     materialsMinor,
     labourHours,
     labourMinor,

@@ -13,6 +13,7 @@
  */
 import type { LayoutDoc } from '../layout';
 import { autonomyDays, batteryAhFor, CHEMISTRIES, usableWh } from './battery-sizing';
+import { INPUTS, type InputNeed } from './inputs';
 import { moduleName, numericProp } from './module-facts';
 import { PVWATTS_DEFAULT_LOSSES_PCT, solarDailyWh } from './solar-yield';
 
@@ -65,7 +66,8 @@ export interface PowerBudget {
   autonomyDaysTarget: number;
   /** Ah (C20) the battery needs for the target days at its chemistry and volts. */
   requiredAh: number | null;
-  missing: string[];
+  /** Inputs to enter, by their on-screen label. */
+  missing: InputNeed[];
 }
 
 function hoursOf(hoursPerDay: number | undefined, dutyCycle: number | undefined): number {
@@ -74,7 +76,7 @@ function hoursOf(hoursPerDay: number | undefined, dutyCycle: number | undefined)
 
 export function powerBudget(doc: LayoutDoc): PowerBudget {
   const power = doc.systems?.power ?? {};
-  const missing: string[] = [];
+  const missing: InputNeed[] = [];
   const inverterEff = (power.inverterEfficiencyPct ?? DEFAULT_INVERTER_EFFICIENCY_PCT) / 100;
   const loads: BudgetLoad[] = [];
 
@@ -109,14 +111,14 @@ export function powerBudget(doc: LayoutDoc): PowerBudget {
       chargeEfficiencyPct: eff,
       usableWh: usableWh(power.battery.capacityAh, power.battery.volts, dod),
     };
-  } else missing.push('systems.power.battery');
+  } else missing.push(INPUTS.battery);
 
   const volts = battery?.volts ?? 12;
   const chargeEff = (battery?.chargeEfficiencyPct ?? 100) / 100;
   const solarLossesPct = power.solar?.lossesPct ?? PVWATTS_DEFAULT_LOSSES_PCT;
   const alternatorWh = power.alternator ? power.alternator.amps * power.alternator.drivingHoursPerDay * volts : 0;
   const hookupWh = power.hookup ? power.hookup.chargerAmps * power.hookup.hoursPerDay * volts : 0;
-  if (!power.solar && !power.alternator && !power.hookup) missing.push('systems.power.solar, systems.power.alternator or systems.power.hookup');
+  if (!power.solar && !power.alternator && !power.hookup) missing.push(INPUTS.charging);
 
   const seasons = SEASONS.map((season): SeasonBalance => {
     const solarWh = power.solar ? solarDailyWh(power.solar.watts, power.solar.peakSunHours[season], solarLossesPct) : 0;

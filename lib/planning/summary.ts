@@ -9,9 +9,9 @@
  */
 import type { LayoutDoc } from '../layout';
 import { computeAxleLoads } from './axle-loads';
-import { en1646UserPayload } from './payload';
+import { userPayloadRequired } from './payload';
 import { powerBudget, type Season } from './power-budget';
-import { waterPlan } from './water-plan';
+import { COMFORT_DAYS_BETWEEN_FILLS, waterPlan } from './water-plan';
 
 export interface BuildPlanSummary {
   mass: {
@@ -34,7 +34,7 @@ export interface BuildPlanSummary {
     batteryAh: number | null;
   };
   water: { freshL: number; greyL: number; days: number | null };
-  /** What a reader should know is missing, as `systems.…` paths. */
+  /** What a reader should know is missing, by the inputs' on-screen labels. */
   missing: string[];
   /** The same, worded for a printed sheet: one line per topic, every number with its unit. */
   lines: { topic: 'Mass' | 'Axles' | 'Payload' | 'Power' | 'Water'; text: string; status: 'ok' | 'attention' | 'unknown' }[];
@@ -57,7 +57,7 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
   const p = powerBudget(doc);
   const w = waterPlan(doc);
   const payloadLeftKg = v.maxAuthorisedMassKg !== undefined && v.massInRunningOrderKg !== undefined ? v.maxAuthorisedMassKg - m.builtKg : null;
-  const en1646PayloadKg = m.lengthM !== null ? en1646UserPayload(m.seats, m.lengthM) : null;
+  const en1646PayloadKg = m.lengthM !== null ? userPayloadRequired(m.seats, m.lengthM) : null;
   const charged = p.battery !== null && p.missing.length === 0;
   const summary: BuildPlanSummary = {
     mass: {
@@ -78,7 +78,7 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
       batteryAh: p.battery?.capacityAh ?? null,
     },
     water: { freshL: w.freshL, greyL: w.greyL, days: w.days },
-    missing: [...new Set([...m.missing, ...p.missing])],
+    missing: [...new Set([...m.missing, ...p.missing].map((n) => n.label))],
     lines: [],
   };
 
@@ -94,7 +94,7 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
     lines.push({ topic: 'Axles', status: over ? 'attention' : 'ok', text: `Front ${kg(m.axles.frontKg)} of ${kg(v.maxFrontAxleKg)}, rear ${kg(m.axles.rearKg)} of ${kg(v.maxRearAxleKg)} (lever rule).` });
   } else lines.push({ topic: 'Axles', status: 'unknown', text: 'Axle loads need the wheelbase, front-axle position, its share in running order and both axle limits.' });
   if (payloadLeftKg !== null && en1646PayloadKg !== null) {
-    lines.push({ topic: 'Payload', status: payloadLeftKg < en1646PayloadKg ? 'attention' : 'ok', text: `User payload left ${kg(payloadLeftKg)}; EN 1646-2 wants ${kg(en1646PayloadKg)} for ${m.seats} seats.` });
+    lines.push({ topic: 'Payload', status: payloadLeftKg < en1646PayloadKg ? 'attention' : 'ok', text: `User payload left ${kg(payloadLeftKg)}; EN 1646-2 wants ${kg(en1646PayloadKg)} for ${m.seats} persons (EN 1646-2 and Reg. (EU) No 1230/2012).` });
   } else lines.push({ topic: 'Payload', status: 'unknown', text: 'Payload needs the mass in running order, the maximum authorised mass and the overall length.' });
   if (summary.power.seasons && p.battery) {
     const worst = summary.power.seasons.reduce((a, s) => (s.netWh < a.netWh ? s : a));
@@ -105,7 +105,7 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
     });
   } else lines.push({ topic: 'Power', status: 'unknown', text: `Uses ${Math.round(p.dailyUseWh).toLocaleString('en-GB')} Wh a day; enter the battery and charging for the balance.` });
   if (w.freshTankIds.length || w.greyTankIds.length) {
-    lines.push({ topic: 'Water', status: w.days !== null && w.days < 3 ? 'attention' : 'ok', text: `Fresh ${w.freshL} L, grey ${w.greyL} L; ${w.days !== null ? `${w.days.toFixed(1)} days` : 'no use entered'} at ${w.litresPerPersonPerDay} L per person a day for ${w.persons}.` });
+    lines.push({ topic: 'Water', status: w.days !== null && w.days < COMFORT_DAYS_BETWEEN_FILLS ? 'attention' : 'ok', text: `Fresh ${w.freshL} L, grey ${w.greyL} L; ${w.days !== null ? `${w.days.toFixed(1)} days` : 'no use entered'} at ${w.litresPerPersonPerDay} L per person a day for ${w.persons}.` });
   } else lines.push({ topic: 'Water', status: 'unknown', text: 'No water tanks drawn.' });
   return summary;
 }

@@ -2,10 +2,15 @@
  * Fresh and grey water: tank capacities from the tank modules, their mass, and how many days the
  * fresh water lasts at the chosen use per person per day.
  *
- * NZS 5465 (self-contained motor caravans and caravans), as cited in the brief (secondary): a
- * minimum of 4 L per person per day for 3 days of fresh water (12 L per person), and a grey tank
- * no smaller than the fresh tank. Default use: 10 L per person per day when nothing is entered
- * (common practice, no source: drinking, cooking, washing up and a wash, no shower).
+ * Two bases, never mixed:
+ * - The self-containment rule, NZS 5465 (self-contained motor caravans and caravans; secondary,
+ *   as quoted in New Zealand self-containment guidance, standard text not consulted): fresh water
+ *   of at least 4 L per person per day for 3 days (12 L per person), and a grey tank no smaller
+ *   than the fresh tank. Always worked at 4 L, whatever use is entered.
+ * - The comfort estimate: how many days the fresh water lasts at the use entered on the water tab,
+ *   or 10 L per person per day when nothing is entered (common practice, no source: drinking,
+ *   cooking, washing up and a wash, no shower), against 3 days between fills (common practice,
+ *   no source).
  *
  * `waterPlan(doc)` → `WaterPlan` DTO. Pure; never throws on a valid LayoutDoc. Must never import
  * UI, framework or database code.
@@ -14,10 +19,14 @@ import type { LayoutDoc } from '../layout';
 import { WATER_KG_PER_L } from './axle-loads';
 import { modulesOfKind, tankLitres } from './module-facts';
 
-/** NZS 5465 (as cited): 4 L per person per day, for 3 days. */
+/** NZS 5465 (secondary): 4 L per person per day, for 3 days. */
 export const NZS5465_L_PER_PERSON_DAY = 4;
 export const NZS5465_DAYS = 3;
-export const DEFAULT_L_PER_PERSON_DAY = 10; // common practice, no source
+export const NZS5465_SOURCE = 'NZS 5465 (self-contained vehicles): 4 L per person per day for 3 days, grey tank at least the fresh tank (secondary: as quoted in New Zealand self-containment guidance; standard text not consulted)';
+/** Use per person per day when none is entered, L — common practice, no source. */
+export const DEFAULT_L_PER_PERSON_DAY = 10;
+/** Days between fills the comfort estimate aims for — common practice, no source. */
+export const COMFORT_DAYS_BETWEEN_FILLS = 3;
 
 export interface WaterPlan {
   freshL: number;
@@ -25,7 +34,10 @@ export interface WaterPlan {
   freshTankIds: string[];
   greyTankIds: string[];
   persons: number;
+  /** Use per person per day for the comfort estimate: entered, or the default. */
   litresPerPersonPerDay: number;
+  /** True when the use was entered on the water tab (false: the 10 L default). */
+  useEntered: boolean;
   /** Days the fresh water lasts (null when nobody uses it). */
   days: number | null;
   /** Mass of the fresh water when full, kg. */
@@ -49,6 +61,7 @@ export function waterPlan(doc: LayoutDoc): WaterPlan {
     greyTankIds: grey.map((m) => m.id),
     persons,
     litresPerPersonPerDay: lppd,
+    useEntered: doc.systems?.water?.litresPerPersonPerDay !== undefined,
     days: daily > 0 ? freshL / daily : null,
     freshFullKg: freshL * WATER_KG_PER_L,
     nzsMinimumL: persons * NZS5465_L_PER_PERSON_DAY * NZS5465_DAYS,

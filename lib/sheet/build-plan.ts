@@ -31,6 +31,6 @@ export function flowBuildPlan(flow: ColumnFlow, doc: LayoutDoc): void {
       return items;
     });
   }
-  const note = wrap('Planning figures from the layout and the entered vehicle data (lever rule, EN 1646-2 payload, energy balance with PVWatts default losses, NZS 5465 water days — as cited in the build plan). Weigh the finished van.', TYPE.small, flow.columnWidth);
+  const note = wrap('Planning figures from the layout and the entered vehicle data (lever rule; EN 1646-2 user payload; energy balance with the default solar losses of NREL report NREL/TP-6A20-62641; NZS 5465 self-containment water, with days between fills as a comfort estimate). Sources and their strength in the build plan. Weigh the finished van.', TYPE.small, flow.columnWidth);
   flow.place(lineHeight(TYPE.small) * note.length + 1, (x, y) => note.map((t, i) => ({ type: 'text', x, y: y + lineHeight(TYPE.small) * (i + 1), text: t, size: TYPE.small, ink: 'soft' })));
 }

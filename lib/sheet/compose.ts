@@ -10,6 +10,7 @@ import type { CheckReport } from '../checks/types';
 import { flowCautions } from './cautions';
 import { flowBuildPlan } from './build-plan';
 import { flowChecks } from './checks-summary';
+import { flowMassBalance } from './mass-balance';
 import { ColumnFlow } from './flow';
 import { LINE } from './drafting';
 import { PAPER_MM, SCALES, sheetFrame, type DrawingScale, type Paper, PAPERS } from './paper';
@@ -143,7 +144,10 @@ export function composeSheet(req: SheetRequest): SheetResult {
   const figurePages = pages.length;
 
   // Text: the schedule full width, then checks and cautions in columns.
-  flowSchedule(new ColumnFlow(area, 1, newPage), doc, req.units);
+  const fullWidth = new ColumnFlow(area, 1, newPage);
+  flowSchedule(fullWidth, doc, req.units);
+  fullWidth.gap(6);
+  flowMassBalance(fullWidth, doc);
   const columns = paper === 'a3' ? 3 : 2;
   const text = new ColumnFlow(area, columns, newPage);
   if (req.revisions?.length) {

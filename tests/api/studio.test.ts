@@ -4,6 +4,7 @@ import * as studio from '@/app/api/studio/route';
 import * as members from '@/app/api/studio/members/route';
 import * as member from '@/app/api/studio/members/[userId]/route';
 import type { Db } from '@/db/client';
+import { memberships, users } from '@/db/schema';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
@@ -26,20 +27,15 @@ describe('members', () => {
     expect((await call(members.GET, { as: null })).status).toBe(401);
   });
 
-  it('lets only the owner add a member', async () => {
-    const body = { name: 'Ada Client', email: 'ada@client.test', role: 'client', password: 'ada-starting-pass' };
+  it('lets only the owner invite a member; nobody joins until they accept', async () => {
+    const body = { name: 'Ada Client', email: 'ada@client.test', role: 'client' };
     expect((await call(members.POST, { method: 'POST', as: w.designer, json: body })).status).toBe(403);
     expect((await call(members.POST, { method: 'POST', as: w.client, json: body })).status).toBe(403);
     const ok = await call(members.POST, { method: 'POST', as: w.owner, json: body });
     expect(ok.status).toBe(201);
-    expect(ok.body).toMatchObject({ name: 'Ada Client', role: 'client', email: 'ada@client.test' });
-    expect((await call(members.POST, { method: 'POST', as: w.owner, json: body })).status).toBe(409);
-  });
-
-  it('asks for a starting password when the address has no account', async () => {
-    const res = await call(members.POST, { method: 'POST', as: w.owner, json: { name: 'No Pass', email: 'nopass@client.test', role: 'designer' } });
-    expect(res.status).toBe(400);
-    expect(res.body.error).toMatch(/starting password/);
+    expect(ok.body.invitation).toMatchObject({ name: 'Ada Client', role: 'client', email: 'ada@client.test', status: 'pending' });
+    const list = await call(members.GET, { as: w.owner });
+    expect(list.body.members.map((m: { email: string }) => m.email)).not.toContain('ada@client.test');
   });
 
   it('lets the owner change a role, not their own, and not in another studio', async () => {
@@ -53,10 +49,12 @@ describe('members', () => {
   });
 
   it('removes a member only for the owner', async () => {
-    const added = await call(members.POST, { method: 'POST', as: w.owner, json: { name: 'Temp', email: 'temp@client.test', role: 'client', password: 'temp-starting-pass' } });
-    expect((await call(member.DELETE, { method: 'DELETE', as: w.designer, params: { userId: added.body.userId } })).status).toBe(403);
-    expect((await call(member.DELETE, { method: 'DELETE', as: w.owner, params: { userId: added.body.userId } })).status).toBe(204);
-    expect((await call(member.DELETE, { method: 'DELETE', as: w.owner, params: { userId: added.body.userId } })).status).toBe(404);
+    // A fixture member (the app adds people only by invitation, tested in people-own-accounts).
+    const [temp] = await db.insert(users).values({ name: 'Temp', email: 'temp@client.test' }).returning({ id: users.id });
+    await db.insert(memberships).values({ userId: temp.id, studioId: w.owner.studioId, role: 'client' });
+    expect((await call(member.DELETE, { method: 'DELETE', as: w.designer, params: { userId: temp.id } })).status).toBe(403);
+    expect((await call(member.DELETE, { method: 'DELETE', as: w.owner, params: { userId: temp.id } })).status).toBe(204);
+    expect((await call(member.DELETE, { method: 'DELETE', as: w.owner, params: { userId: temp.id } })).status).toBe(404);
   });
 });
 

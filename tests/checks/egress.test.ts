@@ -12,7 +12,7 @@ describe('egress.sleep', () => {
   it('passes through a corridor exactly 400 mm wide beside the bed to the side door', () => {
     const f = only(boxDoc({ modules: [bedPlatform(1400), screen(1400)], bay: sideDoorOnly }), 'egress.sleep', 'sleep');
     expect(f).toMatchObject({ status: 'pass', measured: 1, required: 1, unit: 'doors', moduleIds: ['bed'] });
-    expect(f.message).toMatch(/corridor at least 400 mm wide leads to the right-hand door “side”/);
+    expect(f.message).toMatch(/corridor at least 400 mm wide leads to the right-hand door \(600 mm wide, 2200 mm from the front\)/);
   });
   it('fails when that corridor is 399 mm', () => {
     const f = only(boxDoc({ modules: [bedPlatform(1401), screen(1401)], bay: sideDoorOnly }), 'egress.sleep', 'sleep');
@@ -31,7 +31,7 @@ describe('egress.sleep', () => {
   it('the rear door borders a rear bed in our L2H2 bay', () => {
     const bed = mod({ id: 'bed', kind: 'bed-platform', x: 1600, y: 36, length: 1500, width: 1698, elevation: 900, height: 100, surface: 'sleep', facing: 'front' });
     const f = only(l2h2Doc({ modules: [bed], bay: { doors: [{ id: 'rear', wall: 'rear', offset: 105, width: 1560 }] } }), 'egress.sleep', 'sleep');
-    expect(f.message).toMatch(/rear door “rear” \(1560 mm\) borders it/);
+    expect(f.message).toMatch(/rear door \(1560 mm wide\) borders it/);
   });
   it('one finding per bed; no doors gives a clear warning', () => {
     const two = boxDoc({ modules: [mod({ id: 'a', kind: 'bed-platform', x: 0, y: 0, length: 1900, width: 700, surface: 'sleep', facing: 'front', elevation: 600, height: 200 }), mod({ id: 'b', kind: 'bed-platform', x: 0, y: 1100, length: 1900, width: 700, surface: 'sleep', facing: 'front', elevation: 600, height: 200 })] });

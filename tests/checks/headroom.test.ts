@@ -1,15 +1,15 @@
-// Headroom rules. Statures come from published anthropometric tables: British adults aged 19–65
-// (Pheasant & Haslegrave, Bodyspace, Table 10.1, as reproduced by the City University of Hong Kong
-// online anthropometry notes — secondary): men 5th/50th/95th percentile 1625/1740/1855 mm; US
-// adults 19–65 men 95th percentile 1870 mm (same table set). Shoe allowance 25 mm (Bodyspace,
-// from memory). The bay heights are our own templates.
+// Headroom rules. Statures from published anthropometric tables: British adults aged 19–65
+// (Pheasant & Haslegrave, Bodyspace, 3rd ed., Table 10.1 — from memory): men 5th/50th/95th
+// percentile 1625/1740/1855 mm; US adults 19–65 men 95th percentile 1870 mm (same table set, from
+// memory). Shoe allowance 25 mm (Bodyspace, from memory). The 20 mm margin is common practice, no
+// source. The bay heights are our own templates.
 import { describe, expect, it } from 'vitest';
 import { bayTemplate } from '@/lib/layout';
 import { boxDoc, l2h2Doc, mod, only } from './helpers';
 
 const SHOES = 25; // Bodyspace shoe correction for men, from memory
-const UK_MEN = { p5: 1625, p50: 1740, p95: 1855 }; // Bodyspace Table 10.1 (secondary)
-const US_MEN_P95 = 1870; // same tables, US adults 19–65 (secondary)
+const UK_MEN = { p5: 1625, p50: 1740, p95: 1855 }; // Bodyspace Table 10.1 (from memory)
+const US_MEN_P95 = 1870; // same tables, US adults 19–65 (from memory)
 
 describe('headroom.standing', () => {
   it('L2H2 after the default build-up (24 mm floor, 26 mm roof) leaves 1900 mm clear', () => {
@@ -19,15 +19,18 @@ describe('headroom.standing', () => {
   });
   it('a 95th-percentile British man in shoes (1855 + 25 = 1880 mm) fits exactly with the 20 mm margin: pass', () => {
     const f = only(l2h2Doc({ occupants: { standingHeight: UK_MEN.p95 + SHOES } }), 'headroom.standing');
-    expect(f).toMatchObject({ status: 'pass', measured: 1900, required: 1880, unit: 'mm' });
+    // required is the figure the shortfall is measured against: 1880 mm stature + 20 mm margin = 1900 mm.
+    expect(f).toMatchObject({ status: 'pass', measured: 1900, required: 1900, unit: 'mm' });
     expect(f.message).toMatch(/fits people up to 1880 mm tall with the margin/);
   });
   it('1 mm taller is inside the margin: warn; exactly the clear height still stands: warn; 1 mm more: fail', () => {
-    expect(only(l2h2Doc({ occupants: { standingHeight: 1881 } }), 'headroom.standing').status).toBe('warn');
+    const warn = only(l2h2Doc({ occupants: { standingHeight: 1881 } }), 'headroom.standing');
+    expect(warn).toMatchObject({ status: 'warn', measured: 1900, required: 1901 });
+    expect(warn.message).toMatch(/needs 1901 mm \(the tallest person’s 1881 mm stature \+ 20 mm margin\).*1 mm short of the margin/);
     expect(only(l2h2Doc({ occupants: { standingHeight: 1900 } }), 'headroom.standing').status).toBe('warn');
     const f = only(l2h2Doc({ occupants: { standingHeight: 1901 } }), 'headroom.standing');
-    expect(f.status).toBe('fail');
-    expect(f.message).toMatch(/cannot stand upright \(1 mm short\)/);
+    expect(f).toMatchObject({ status: 'fail', required: 1921 });
+    expect(f.message).toMatch(/cannot stand upright: 1 mm short of their stature, 21 mm short with the margin/);
   });
   it('a 95th-percentile US man in shoes (1870 + 25 = 1895 mm) stands in L2H2 only inside the margin: warn', () => {
     expect(only(l2h2Doc({ occupants: { standingHeight: US_MEN_P95 + SHOES } }), 'headroom.standing').status).toBe('warn');
@@ -43,6 +46,15 @@ describe('headroom.standing', () => {
   it('thicker build-up costs headroom: 50 mm of roof insulation more turns the 1870 mm pass into a fail', () => {
     const doc = l2h2Doc({ occupants: { standingHeight: 1870 }, buildUp: { floor: [{ material: 'Ply', thickness: 24 }], roof: [{ material: 'PIR board', thickness: 76 }], walls: [] } });
     expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'fail', measured: 1850 });
+  });
+});
+
+describe('headroom.standing out of range', () => {
+  it('a build-up thicker than the bay is high is reported as an input out of range, never as a negative height', () => {
+    const doc = l2h2Doc({ buildUp: { floor: [{ material: 'Ply', thickness: 1000 }], roof: [{ material: 'PIR board', thickness: 1000 }], walls: [] } });
+    const f = only(doc, 'headroom.standing');
+    expect(f).toMatchObject({ status: 'fail', measured: 0 });
+    expect(f.message).toMatch(/an input is out of range/);
   });
 });
 

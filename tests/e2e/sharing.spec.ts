@@ -110,7 +110,7 @@ test('invite → view → mark-up → settle → approve → issue → return fo
   const link = (mail.text ?? '').match(/https?:\/\/\S+\/invite\/[A-Za-z0-9_-]{43}/)?.[0];
   expect(link, 'the invitation mail carries a link').toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
   await owner.goto(`/outbox/${mailId}`);
-  await expect(owner.getByTestId('mail-text')).toContainText('Set your password');
+  await expect(owner.getByTestId('mail-text')).toContainText('Join the studio');
   await keepScreenshot(owner, 'sharing-outbox-invitation');
 
   // The client follows the link, sets a password and lands on the layout, read-only.

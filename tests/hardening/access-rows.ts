@@ -90,7 +90,7 @@ const CORE_ROWS: Row[] = [
   { route: '/api/studio/members', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio/members', method: 'POST',
-    request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client', password: 'member-long-password' } }),
+    request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client' } }),
     expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
   },
   {
@@ -102,12 +102,39 @@ const CORE_ROWS: Row[] = [
     route: '/api/studio/members/[userId]', method: 'DELETE',
     request: async (fx, who) => {
       // Each cell removes its own newly added member, so one caller's success cannot hide another's refusal.
-      const { addMember } = await import('@/db/studios');
-      const { owner } = fx.world;
-      const m = await addMember({ userId: owner.id, studioId: owner.studioId, role: 'owner', email: '', name: '' }, { name: `Leaver ${who}`, email: `leaver-${who}-${memberSeq++}@client.test`, role: 'client', password: 'leaver-long-password' });
-      return { params: { userId: m.userId } };
+      // (A fixture: the app itself only adds people by invitation.)
+      const { memberships, users } = await import('@/db/schema');
+      const [u] = await fx.db.insert(users).values({ name: `Leaver ${who}`, email: `leaver-${who}-${memberSeq++}@client.test` }).returning({ id: users.id });
+      await fx.db.insert(memberships).values({ userId: u.id, studioId: fx.world.owner.studioId, role: 'client' });
+      return { params: { userId: u.id } };
     },
     expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
+  },
+  // Changing one's own password: any signed-in person; a wrong current password is a 400 (the
+  // session's own password is left alone here so later rows keep their sessions).
+  {
+    route: '/api/account/password', method: 'POST',
+    request: () => ({ json: { currentPassword: 'not-the-current-one', newPassword: 'matrix-new-long-password' } }),
+    expect: { ...NOBODY, foreignClient: 400, client: 400, designer: 400, owner: 400, foreignOwner: 400 },
+  },
+  // Asking for a reset link: open to anyone, the same answer for every address.
+  {
+    route: '/api/password-reset', method: 'POST',
+    request: (_fx, who) => ({ json: { email: `reset-${who}@selfbuild.test` }, headers: { 'x-forwarded-for': `10.99.${memberSeq++ % 250}.1` } }),
+    expect: { anonymous: 202, viewer: 202, foreignClient: 202, client: 202, designer: 202, owner: 202, foreignOwner: 202 },
+  },
+  // Using a reset link: the token is the proof, whoever holds it (each cell a throwaway account).
+  {
+    route: '/api/password-reset/confirm', method: 'POST',
+    request: async (fx, who) => {
+      const { users } = await import('@/db/schema');
+      const { issuePasswordReset } = await import('@/db/password-resets');
+      const email = `resetter-${who}-${memberSeq++}@selfbuild.test`;
+      await fx.db.insert(users).values({ name: 'Resetter', email });
+      const issued = await issuePasswordReset(email);
+      return { json: { token: issued!.token, password: 'matrix-reset-long-password' } };
+    },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
   },
 ];
 

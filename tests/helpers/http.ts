@@ -10,12 +10,14 @@ export interface SessionUser {
   studioId: string;
   role?: 'owner' | 'designer' | 'client';
   sessionVersion?: number;
+  /** When the session signed in (seconds); now by default. */
+  signedInAt?: number;
 }
 
 export async function sessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
-    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sub: user.id },
+    token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sat: user.signedInAt ?? Math.floor(Date.now() / 1000), sub: user.id },
     secret: authSecret(),
     salt: name,
     maxAge: SESSION_MAX_AGE_S,

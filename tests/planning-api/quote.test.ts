@@ -110,7 +110,8 @@ describe('POST /api/layouts/:id/quote', () => {
     expect((await call(prices.PUT, { method: 'PUT', as: w.owner, json: list })).status).toBe(200);
     const res = await send('designer', w.clientLayoutId);
     expect(res.status).toBe(400);
-    expect(res.body.error).toMatch(/module:fridge/);
+    expect(res.body.error).toMatch(/12 V fridge/);
+    expect(res.body.error).not.toMatch(/module:/);
     expect(await quoteRows(w.clientLayoutId)).toHaveLength(0);
     expect((await call(prices.PUT, { method: 'PUT', as: w.owner, json: demoPriceList() })).status).toBe(200);
   });

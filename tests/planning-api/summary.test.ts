@@ -33,7 +33,7 @@ describe('buildPlanSummary', () => {
     const s = buildPlanSummary(doc);
     expect(s.mass.frontKg).toBeNull();
     expect(s.power.seasons).toBeNull();
-    expect(s.missing).toEqual(expect.arrayContaining(['systems.vehicle.wheelbaseMm', 'systems.power.battery']));
+    expect(s.missing).toEqual(expect.arrayContaining(['Wheelbase', 'Battery capacity and nominal volts']));
     expect(s.lines.every((l) => l.status === 'unknown')).toBe(true);
   });
 });

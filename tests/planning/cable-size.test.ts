@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { ampacity, awgAreaMm2, bundlingFactor, cableSize, checkFittedCable, dropPct, minAreaForDrop, COPPER_RESISTIVITY } from '@/lib/planning';
+// Worked by hand: V = I × ρ × 2L ÷ A with ρ = 1/58 Ω·mm²/m at 20 °C and α = 0.00393 per K (IEC 60028,
+// from memory); allowances 3 % / 10 % (ABYC E-11, secondary); ampacity 33 CFR 183.425 Table 5
+// (regulation text, read in a published reproduction of the CFR).
+import { ampacity, AWG_SIZES, awgAreaMm2, bundlingFactor, cableSize, checkFittedCable, copperResistivity, dropPct, minAreaForDrop, nominalSystemVolts, COPPER_RESISTIVITY } from '@/lib/planning';
 
 describe('cable sizing', () => {
   const base = { amps: 20, lengthM: 6, volts: 12, maxDropPct: 3 };
@@ -37,6 +40,27 @@ describe('cable sizing', () => {
     expect(ampacity(16, 105, { bundled: 4 })).toBeCloseTo(120 * 0.6, 6);
     expect(ampacity(16, 105, { engineSpace: true })).toBeCloseTo(120 * 0.86, 6);
     expect(ampacity(0.5)).toBeNull();
+  });
+  it('33 CFR 183.425 Table 5 has 3 AWG (26.67 mm², ASTM B258): 120/145/150/155/180/195/210 A', () => {
+    const three = AWG_SIZES.find((a) => a.gauge === '3')!;
+    expect(three.areaMm2).toBeCloseTo(26.67, 2);
+    expect(Object.values(three.amps)).toEqual([120, 145, 150, 155, 180, 195, 210]);
+    // 170 A over 0.5 m at 12 V, 10 %: 4 AWG carries 160 A (too little), 3 AWG 180 A — not 2 AWG.
+    expect(cableSize({ amps: 170, lengthM: 0.5, volts: 12, maxDropPct: 10 }).awg!.label).toBe('3 AWG');
+  });
+  it('drop is a share of the nominal system voltage: a 12.8 V LiFePO4 bank is a 12 V system, 25.6 V a 24 V one', () => {
+    expect(nominalSystemVolts(12.8)).toBe(12);
+    expect(nominalSystemVolts(25.6)).toBe(24);
+    expect(nominalSystemVolts(12)).toBe(12);
+    // 20 A, 6 m, 3 % at 12 V needs 11.49 mm²; at 12.8 V it would have been 10.78 mm² (6.7 % more drop allowed).
+    expect(minAreaForDrop({ amps: 20, lengthM: 6, volts: nominalSystemVolts(12.8), maxDropPct: 3 })).toBeCloseTo(11.49, 2);
+  });
+  it('the warm case: 16 mm² on the 20 A, 6 m run drops 2.16 % at 20 °C and 2.88 % at 105 °C', () => {
+    // 0.25862 V ÷ 12 V = 2.155 %; × (1 + 0.00393 × 85) = × 1.33405 → 2.875 %.
+    expect(copperResistivity(105)).toBeCloseTo(0.0230, 4);
+    const fitted = checkFittedCable(base, 16);
+    expect(fitted.dropPct).toBeCloseTo(2.155, 3);
+    expect(fitted.warmDropPct).toBeCloseTo(2.875, 3);
   });
   it('checks a fitted size', () => {
     expect(checkFittedCable(base, 10).ok).toBe(false);

@@ -20,15 +20,15 @@ export function withSystems(doc: LayoutDoc, systems: NonNullable<LayoutDocInput[
   return layoutDocSchema.parse({ ...doc, systems });
 }
 
-/** Invented vehicle data: 2200 kg running order (1250 kg front), 3500 kg max, 3665 mm wheelbase. */
+/** Invented vehicle data in round class-typical figures: 2200 kg running order (1250 kg front), 3500 kg max, 3700 mm wheelbase, 6.0 m overall. */
 export const VAN = {
   massInRunningOrderKg: 2200,
   frontAxleRunningOrderKg: 1250,
   maxAuthorisedMassKg: 3500,
   maxFrontAxleKg: 1850,
   maxRearAxleKg: 2000,
-  wheelbaseMm: 3665,
+  wheelbaseMm: 3700,
   frontAxleX: -800,
-  overallLengthMm: 5990,
+  overallLengthMm: 6000,
   cabSeatX: -300,
 };

@@ -27,7 +27,8 @@ describe('parts list', () => {
     expect(line('sheet:ply-15').qty).toBe(1);
     expect(line('cable:16')).toMatchObject({ qty: 12, netMinor: 7800 }); // 6 m out and back at 16 mm²
     expect(line('battery:lifepo4').netMinor).toBe(40000);
-    expect(list.unpriced).toEqual(['sheet:ply-6']);
+    expect(list.unpriced).toEqual(['Plywood 6 mm (backs), 2440 × 1220 mm sheet']);
+    expect(list.unpricedKeys).toEqual(['sheet:ply-6']);
     expect(list.labourMinor).toBe(6 * 4500);
     const materials = 25000 + 6500 + 7800 + 7800 + 40000;
     expect(list.materialsMinor).toBe(materials);

@@ -30,8 +30,11 @@ describe('systemChecks: empty systems', () => {
     expect(ids(f).some((i) => i.startsWith('water.'))).toBe(false);
     expect(ids(f)).not.toContain('gas.caution');
     expect(ids(f).some((i) => i.startsWith('power.'))).toBe(false);
-    expect(only(f, 'mass.input')[0].message).toMatch(/systems\.vehicle\.wheelbaseMm/);
-    expect(only(f, 'mass.input')[0].status).toBe('warn');
+    const input = only(f, 'mass.input')[0];
+    expect(input.status).toBe('warn');
+    expect(input.needs!.map((n) => n.label)).toEqual(['Mass in running order', 'Mass in running order on the front axle', 'Maximum authorised mass', 'Front axle limit', 'Rear axle limit', 'Wheelbase', 'Front axle position', 'Overall length']);
+    expect(input.needs!.every((n) => n.where === 'weight')).toBe(true);
+    expect(input.message).toMatch(/needs mass in running order, mass in running order on the front axle, .* and overall length\./);
   });
 });
 
@@ -45,8 +48,8 @@ describe('mass rules', () => {
     expect(only(f, 'mass.total')[0].status).toBe('pass');
     expect(only(f, 'mass.front-axle')[0].status).toBe('pass');
     expect(only(f, 'mass.rear-axle')[0].status).toBe('pass');
-    expect(only(f, 'mass.payload')).toHaveLength(2);
-    expect(only(f, 'mass.payload').every((x) => x.status === 'pass')).toBe(true);
+    expect(only(f, 'mass.payload')).toHaveLength(1);
+    expect(only(f, 'mass.payload')[0].status).toBe('pass');
     expect(ids(f)).not.toContain('mass.input');
   });
 
@@ -55,19 +58,20 @@ describe('mass rules', () => {
     expect(only(f, 'mass.total')[0].status).toBe('fail');
     expect(only(f, 'mass.total')[0].message).toMatch(/over/);
     expect(only(f, 'mass.rear-axle')[0].status).toBe('fail');
-    expect(ids(f)).toContain('mass.licence'); // laden mass above 3500 kg
+    // Category B depends on the maximum authorised mass only (Directive 2006/126/EC, from memory):
+    // a 3500 kg van laden to 4400 kg is overloaded, not a licence matter.
+    expect(only(f, 'mass.total')[0].measured).toBeGreaterThan(3500);
+    expect(ids(f)).not.toContain('mass.licence');
   });
 
-  it('fails the EN 1646-2 payload when the build leaves too little for users', () => {
-    // 3500 − (3300 + 60) = 140 kg left; EN 1646-2 needs 75 + 10×2 + 10×5.99 + 30 ≈ 184.9 kg.
+  it('fails the payload when the build leaves too little for users (EN 1646-2, secondary)', () => {
+    // 3500 − (3300 + 60) = 140 kg left; 2 persons, 6.0 m: 1 passenger × 75 + 10 × 2 + 10 × 6 = 155 kg.
     const f = systemChecks(loaded({ massInRunningOrderKg: 3300, frontAxleRunningOrderKg: 1800 }));
-    const [en, reg] = only(f, 'mass.payload');
-    expect(en.status).toBe('fail');
-    expect(en.measured).toBeCloseTo(140, 6);
-    expect(en.required).toBeCloseTo(184.9, 1);
-    expect(en.source).toMatch(/EN 1646-2/);
-    expect(reg.source).toMatch(/1230\/2012/);
-    expect(reg.required).toBeCloseTo(75 + 10 * (2 + 5.99), 6);
+    const [payload] = only(f, 'mass.payload');
+    expect(payload).toMatchObject({ status: 'fail', measured: 140, required: 155 });
+    expect(payload.message).toMatch(/15 kg short/);
+    expect(payload.source).toMatch(/EN 1646-2/);
+    expect(payload.source).toMatch(/1230\/2012/);
   });
 
   it('warns on the category B limit when the maximum authorised mass is over 3500 kg', () => {
@@ -77,11 +81,29 @@ describe('mass rules', () => {
     expect(lic.source).toMatch(/2006\/126\/EC/);
   });
 
-  it('warns when a rear load lifts the steering axle below 20 % of the laden mass', () => {
-    const f = systemChecks(loaded({ massInRunningOrderKg: 1000, frontAxleRunningOrderKg: 300, maxAuthorisedMassKg: 3500, maxRearAxleKg: 5000 }, [{ id: 'b', label: 'Motorbike on rack', massKg: 400, x: 4500 }]));
-    const low = only(f, 'mass.front-axle').find((x) => x.status === 'warn');
-    expect(low).toBeDefined();
-    expect(low!.unit).toMatch(/%/);
+  // Reg. (EU) No 1230/2012 Annex I Part A 2.4 (secondary): the steering axle carries at least 20 %
+  // of the technically permissible maximum laden mass. Worked: 650 kg of a 3500 kg maximum is
+  // 18.6 % (it would be 21.7 % of a 3000 kg laden mass); 720 kg is 20.6 %.
+  const bare = (frontKg: number) => withSystems(baseDoc(), { vehicle: { ...VAN, massInRunningOrderKg: 3000, frontAxleRunningOrderKg: frontKg, maxRearAxleKg: 3000 }, load: { travellers: 1, personalEffectsKg: 0 } });
+  const share = (f: Finding[]) => only(f, 'mass.front-axle').find((x) => x.unit === '% of the maximum authorised mass')!;
+  it('front-axle share is measured against the maximum authorised mass: 650 kg of 3500 kg is 18.6 %, a warning', () => {
+    const f = systemChecks(bare(650));
+    expect(only(f, 'mass.total')[0].measured).toBe(3000);
+    expect(share(f)).toMatchObject({ status: 'warn', measured: 18.6, required: 20 });
+  });
+  it('front-axle share: 720 kg of 3500 kg is 20.6 %, enough', () => {
+    expect(share(systemChecks(bare(720)))).toMatchObject({ status: 'pass', measured: 20.6, required: 20 });
+  });
+  it('a negative axle load is reported as out-of-range input, never as a share', () => {
+    const f = systemChecks(loaded({ massInRunningOrderKg: 1000, frontAxleRunningOrderKg: 300, maxRearAxleKg: 9000 }, [{ id: 'b', label: 'Motorbike on rack', massKg: 400, x: 20000 }]));
+    const front = only(f, 'mass.front-axle');
+    expect(front).toHaveLength(1);
+    expect(front[0].status).toBe('fail');
+    expect(front[0].message).toMatch(/not physically possible.*out of range.*motorbike on rack/);
+  });
+  it('a bay longer than the vehicle is out of range', () => {
+    const doc = layoutDocSchema.parse({ ...loaded(), bay: { ...baseDoc().bay, length: 99_999 } });
+    expect(only(systemChecks(doc), 'mass.input').some((x) => /longer than the whole vehicle/.test(x.message))).toBe(true);
   });
 
   it('travel seats get the anchorage caution until approved and tested', () => {
@@ -133,15 +155,20 @@ describe('power rules', () => {
 
   it('230 V gets the electrician and RCD caution', () => {
     const f = systemChecks(doc({ battery: { chemistry: 'agm', capacityAh: 100, volts: 12 }, hookup: { chargerAmps: 15, hoursPerDay: 4 } }));
-    expect(only(f, 'power.mains')[0]).toMatchObject({ status: 'warn', measured: 0, required: 2 });
-    expect(only(f, 'power.mains')[0].message).toMatch(/qualified electrician/);
+    // A hook-up charger without "230 V is fitted": one source of truth, so a contradiction to resolve.
+    expect(only(f, 'power.mains')[0]).toMatchObject({ status: 'warn', measured: 0, required: 1 });
+    expect(only(f, 'power.mains')[0].message).toMatch(/hook-up charger \(15 A\), but “230 V is fitted” is not ticked/);
+    const fitted = only(systemChecks(doc({ battery: { chemistry: 'agm', capacityAh: 100, volts: 12 }, mains: { present: true } })), 'power.mains')[0];
+    expect(fitted).toMatchObject({ status: 'warn', measured: 0, required: 2 });
+    expect(fitted.message).toMatch(/qualified electrician/);
+    expect(fitted.message).toMatch(/tick “30 mA RCD on every 230 V circuit” on the power tab/);
     const ok = systemChecks(doc({ battery: { chemistry: 'agm', capacityAh: 100, volts: 12 }, mains: { present: true, rcd: true, installedByElectrician: true } }));
     expect(only(ok, 'power.mains')[0].status).toBe('pass');
   });
 
   it('asks for a battery and charging when only a fridge is drawn', () => {
     const f = systemChecks(withModules(baseDoc(), [{ id: 'fr', kind: 'fridge' }]));
-    expect(only(f, 'power.input')[0].message).toMatch(/systems\.power\.battery/);
+    expect(only(f, 'power.input')[0].needs).toEqual([{ label: 'Battery capacity and nominal volts', where: 'power' }, { label: 'Solar panels, alternator charger or hook-up charger', where: 'power' }]);
   });
 });
 
@@ -152,6 +179,18 @@ describe('water rules', () => {
     expect(only(f, 'water.grey')[0]).toMatchObject({ status: 'warn', measured: 50, required: 70 });
     expect(only(f, 'water.fresh')[0]).toMatchObject({ status: 'pass', measured: 70, required: 24 });
     expect(only(f, 'water.days')[0].status).toBe('pass'); // 70 L ÷ (2 × 10 L) = 3.5 days
+  });
+  it('the NZS 5465 rule and the comfort estimate keep their own bases', () => {
+    // NZS 5465 (secondary): 2 people × 4 L × 3 days = 24 L, met by 24 L. At the default 10 L a
+    // person (common practice, no source) the same 24 L lasts 24 ÷ 20 = 1.2 days: a comfort
+    // warning that does not cite NZS 5465.
+    const f = systemChecks(withModules(baseDoc(), [{ id: 'f', kind: 'fresh-water-tank', props: { litres: 24 } }, { id: 'g', kind: 'grey-water-tank', props: { litres: 30 } }]));
+    expect(only(f, 'water.fresh')[0]).toMatchObject({ status: 'pass', measured: 24, required: 24 });
+    expect(only(f, 'water.fresh')[0].source).toMatch(/NZS 5465/);
+    const days = only(f, 'water.days')[0];
+    expect(days).toMatchObject({ status: 'warn', measured: 1.2, required: 3 });
+    expect(days.source).not.toMatch(/NZS/);
+    expect(days.message).toMatch(/not the self-containment rule/);
   });
   it('passes grey ≥ fresh; warns with no grey tank at all; fresh below 12 L per person warns', () => {
     expect(only(systemChecks(withModules(baseDoc(), [{ id: 'f', kind: 'fresh-water-tank', props: { litres: 40 } }, { id: 'g', kind: 'grey-water-tank', props: { litres: 40 } }])), 'water.grey')[0].status).toBe('pass');
@@ -220,7 +259,8 @@ describe('heat rules', () => {
     const doc = layoutDocSchema.parse({ ...baseDoc(), buildUp: { floor: [], roof: [{ material: 'Unobtainium sheet', thickness: 20 }], walls: [] } });
     const roof = only(systemChecks(doc), 'heat.u-value').find((x) => x.message.startsWith('Roof'))!;
     expect(roof.status).toBe('warn');
-    expect(roof.message).toMatch(/systems\.insulation\.conductivities/);
+    expect(roof.message).toMatch(/enter its declared λ on the heat tab/);
+    expect(roof.needs).toEqual([{ label: 'Declared λ of the material', where: 'heat' }]);
   });
 });
 

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { conductivityOf, en721Ventilation, gasInventory, heatLoss, lockerVentRequiredCm2, RSE, RSI, uValue, waterPlan } from '@/lib/planning';
+// Sources: NZS 5465 (secondary) for water; DVGW G 607 / EN 1949 and EN 721 (secondary) for gas;
+// EN ISO 6946 (surface resistances Table 7, from memory) and typical declared λ (from memory) for heat.
+import { CONDUCTIVITIES, conductivityOf, en721Ventilation, gasInventory, heatLoss, lockerVentRequiredCm2, RSE, RSI, uValue, waterPlan } from '@/lib/planning';
 import { baseDoc, withModules, withSystems } from './fixtures';
 
 describe('waterPlan', () => {
@@ -52,7 +54,7 @@ describe('U-values and heat loss', () => {
     // Closed-cell foam 24 mm at λ 0.036 → 0.6667; plywood 12 mm at λ 0.13 → 0.0923;
     // Rsi 0.13 + Rse 0.04 → R 0.9290 m²K/W → U 1.076 W/m²K.
     const u = uValue([{ material: 'Closed-cell foam', thickness: 24 }, { material: 'Plywood lining', thickness: 12 }], 'walls');
-    expect(u.rTotal).toBeCloseTo(0.13 + 0.04 + 0.024 / 0.036 + 0.012 / 0.13, 9);
+    expect(u.rTotal).toBeCloseTo(0.9290, 4);
     expect(u.u).toBeCloseTo(1.076, 3);
     expect(u.unknown).toEqual([]);
   });
@@ -60,6 +62,21 @@ describe('U-values and heat loss', () => {
     expect(RSI).toEqual({ roof: 0.1, walls: 0.13, floor: 0.17 });
     expect(RSE).toBe(0.04);
     expect(uValue([], 'floor').u).toBeCloseTo(1 / 0.21, 9);
+  });
+  it.each([
+    ['Mineral wool', 'mineral-wool', 0.037], ['Glass wool batt', 'mineral-wool', 0.037], ['Rock wool slab', 'mineral-wool', 0.037], ['Stone wool', 'mineral-wool', 0.037],
+    ['Sheep wool', 'sheep-wool', 0.038], ['Wool insulation', 'sheep-wool', 0.038],
+    ['PIR board', 'pir', 0.022], ['XPS foam board', 'xps', 0.034], ['EPS', 'eps', 0.036], ['Closed-cell foam', 'elastomer', 0.036],
+    ['Polyester fibre', 'polyester', 0.04], ['Cork board', 'cork', 0.04], ['Plywood lining', 'plywood', 0.13], ['MDF panel', 'mdf', 0.14],
+    ['Pine cladding', 'softwood', 0.13], ['Vinyl flooring', 'pvc', 0.17], ['Carpet lining', 'carpet', 0.06], ['Rubber mat', 'rubber', 0.17],
+    ['Steel skin', 'steel', 50], ['Aluminium sheet', 'aluminium', 160], ['GRP sheet', 'grp', 0.3],
+  ])('“%s” resolves to %s at λ %s (specific names before the bare word “wool”)', (name, id, lambda) => {
+    const hit = conductivityOf(name)!;
+    expect(hit.lambda).toBe(lambda);
+    expect(hit.title).toBe(CONDUCTIVITIES.find((c) => c.id === id)!.title);
+  });
+  it('every match word of the table resolves to its own material (no entry shadows another)', () => {
+    for (const c of CONDUCTIVITIES) for (const word of c.match) expect(conductivityOf(word)!.title, word).toBe(c.title);
   });
   it('matches materials by name, declared overrides win, unknown materials are named', () => {
     expect(conductivityOf('XPS foam board')!.lambda).toBe(0.034);
@@ -80,9 +97,16 @@ describe('U-values and heat loss', () => {
     expect(walls.areaM2).toBeCloseTo(2 * L * H + 2 * W * H - 0.5, 9);
     expect(h.windowsWPerK).toBeCloseTo(1.4, 9);
     expect(h.ventilationWPerK).toBeCloseTo(0.34 * 1.5 * L * W * H, 9);
-    const facesSum = h.faces.reduce((a, f) => a + f.u * f.areaM2, 0);
-    expect(h.totalWPerK).toBeCloseTo(facesSum + 1.4 + 0.34 * 1.5 * L * W * H, 9);
-    expect(h.requiredW).toBeCloseTo(h.totalWPerK * 25, 9);
+    // Worked by hand (EN ISO 6946; λ XPS 0.034, plywood 0.13, vinyl 0.17, closed-cell foam 0.036):
+    // floor R = 0.17 + 0.04 + 0.010/0.034 + 0.012/0.13 + 0.002/0.17 = 0.6082 → U 1.6442 × 5.487 m² = 9.022 W/K;
+    // roof R = 0.10 + 0.04 + 0.020/0.036 + 0.006/0.13 = 0.7417 → U 1.3482 × 5.487 m² = 7.398 W/K;
+    // walls R = 0.9290 → U 1.0765 × 18.493 m² = 19.907 W/K; window 0.5 × 2.8 = 1.4 W/K;
+    // air 0.34 × 1.5 × 10.700 m³ = 5.457 W/K. Total 43.18 W/K; × 25 K = 1079.6 W.
+    expect(h.faces.find((f) => f.face === 'floor')!.wPerK).toBeCloseTo(9.022, 3);
+    expect(h.faces.find((f) => f.face === 'roof')!.wPerK).toBeCloseTo(7.398, 3);
+    expect(walls.wPerK).toBeCloseTo(19.907, 3);
+    expect(h.totalWPerK).toBeCloseTo(43.183, 3);
+    expect(h.requiredW).toBeCloseTo(1079.58, 2);
     expect(h.heaterW).toBe(2000);
   });
 });

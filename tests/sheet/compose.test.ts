@@ -201,3 +201,18 @@ describe('a layout with very many findings', () => {
     expect(text).toContain(`…and ${400 - MAX_FINDINGS_LISTED} more findings not listed here (${400 - MAX_FINDINGS_LISTED} passing).`);
   });
 });
+
+describe('mass and balance on the sheet', () => {
+  it('prints the weight tab’s mass-and-balance table: heading, the vehicle row and the laden total', () => {
+    const r = composeSheet(request());
+    if (!r.ok) throw new Error(r.message);
+    const all = r.sheet.pages.flatMap(textsOf).join('\n');
+    expect(all).toMatch(/Mass and balance/);
+    expect(all).toMatch(/Vehicle in running order \(driver included\)/);
+    // The starter's demo van: 2,100 kg in running order, 1,230 kg of it on the front axle.
+    expect(all).toMatch(/2,100/);
+    expect(all).toMatch(/1,230/);
+    expect(all).toMatch(/Payload left/);
+    expect(all).toMatch(/Laden centre of mass \d[\d,]* mm behind the front of the load floor/);
+  });
+});

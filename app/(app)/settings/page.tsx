@@ -5,6 +5,7 @@ import { getStudio } from '@/db/studios';
 import { MembersPanel } from '@/components/settings/MembersPanel';
 import { StudioPanel } from '@/components/settings/StudioPanel';
 import { PriceListPanel } from '@/components/planning/PriceListPanel';
+import { ChangePasswordPanel } from '@/components/settings/ChangePasswordPanel';
 
 export const metadata: Metadata = { title: 'Settings' };
 
@@ -18,6 +19,7 @@ export default async function SettingsPage() {
       <StudioPanel studio={studio} />
       <MembersPanel isOwner={actor.role === 'owner'} selfId={actor.userId} />
       {actor.role !== 'client' && <PriceListPanel canEdit={actor.role === 'owner'} />}
+      <ChangePasswordPanel email={actor.email} />
     </main>
   );
 }

@@ -1,8 +1,8 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
-import { createInvitation, listInvitations } from '@/db/sharing/invitations';
+import { listInvitations } from '@/db/sharing/invitations';
 import { requireEditor } from '@/db/sharing/access';
-import { sendInvitation } from '@/lib/mail/notify';
+import { inviteAndMail } from '@/lib/mail/invite';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,12 +18,13 @@ export const GET = handle(async (req) => {
   return json({ invitations: await listInvitations(actor) });
 });
 
-/** Invites a client by mail: the link lets them set a password and join as a client. */
+/**
+ * Invites a client by mail: the link lets them set a password, or join with the account they
+ * already have. Answers the same either way.
+ */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
   requireEditor(actor, 'invite clients');
   const body = parseWith(inviteBody, await readJson(req, 16 * 1024));
-  const issued = await createInvitation(actor, body);
-  const mail = await sendInvitation(req, actor, issued);
-  return json({ invitation: issued.invitation, mail }, { status: 201 });
+  return json(await inviteAndMail(req, actor, { ...body, role: 'client' }), { status: 201 });
 });

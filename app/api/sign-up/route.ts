@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, HttpError, json, parseWith, readJson } from '@/lib/api/respond';
 import { signUp } from '@/db/accounts';
-import { PASSWORD_MAX_BYTES, PASSWORD_MIN } from '@/lib/auth/password';
+import { newPasswordSchema } from '@/lib/auth/password-policy';
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { clientAddress } from '@/lib/auth/address';
 
@@ -10,10 +10,7 @@ export const dynamic = 'force-dynamic';
 export const signUpBody = z.strictObject({
   name: z.string().trim().min(1, 'tell us your name').max(80),
   email: z.email('enter a valid e-mail address').max(254),
-  password: z
-    .string()
-    .min(PASSWORD_MIN, `use at least ${PASSWORD_MIN} characters`)
-    .refine((p) => new TextEncoder().encode(p).length <= PASSWORD_MAX_BYTES, `use at most ${PASSWORD_MAX_BYTES} bytes`),
+  password: newPasswordSchema,
   studioName: z.string().trim().max(80).optional(),
 });
 

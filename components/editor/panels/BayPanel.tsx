@@ -9,7 +9,7 @@ import { memo } from 'react';
 import { Plus, X } from 'lucide-react';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
-import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout/schema';
+import { BAY_LIMITS, type Bay, type BuildUp, type Door, type WheelArch } from '@/lib/layout/schema';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { LengthField } from './LengthField';
 import { LAYER_PRESETS } from './buildUpPresets';
@@ -40,9 +40,9 @@ export const BayPanel = memo(function BayPanel() {
         <div className={section}>
           <h3 className={h3}>Bay (bare metal)</h3>
           <div className="grid grid-cols-3 gap-2">
-            <LengthField label="Length" unit={units} valueMm={bay.length} min={500} onCommit={(v) => setBay({ length: v })} testId="bay-length" />
-            <LengthField label="Width" unit={units} valueMm={bay.width} min={500} onCommit={(v) => setBay({ width: v })} />
-            <LengthField label="Height" unit={units} valueMm={bay.height} min={500} onCommit={(v) => setBay({ height: v })} />
+            <LengthField label="Length" unit={units} valueMm={bay.length} min={BAY_LIMITS.length.min} max={BAY_LIMITS.length.max} onCommit={(v) => setBay({ length: v })} testId="bay-length" />
+            <LengthField label="Width" unit={units} valueMm={bay.width} min={BAY_LIMITS.width.min} max={BAY_LIMITS.width.max} onCommit={(v) => setBay({ width: v })} />
+            <LengthField label="Height" unit={units} valueMm={bay.height} min={BAY_LIMITS.height.min} max={BAY_LIMITS.height.max} onCommit={(v) => setBay({ height: v })} />
           </div>
           <div className="flex items-center gap-4 pt-1">
             <label className="flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={bay.bulkhead} onChange={(e) => setBay({ bulkhead: e.target.checked })} /> Bulkhead</label>

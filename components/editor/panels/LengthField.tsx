@@ -7,13 +7,15 @@
 import { useId, useState } from 'react';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
-export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0, testId, compact = false }: {
+export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0, max, testId, compact = false }: {
   label: string;
   valueMm: number;
   unit: LengthUnit;
   onCommit: (mm: number) => { ok: boolean; error?: string };
   disabled?: boolean;
   min?: number;
+  /** Upper limit in mm (from the schema's limits); none when absent. */
+  max?: number;
   testId?: string;
   compact?: boolean;
 }) {
@@ -26,6 +28,7 @@ export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0,
     const v = parseLength(draft, unit);
     if (v === null) return setError('Type a length, e.g. 1200, 120 cm or 47 in');
     if (v < min) return setError(`At least ${min} mm`);
+    if (max !== undefined && v > max) return setError(`At most ${max} mm`);
     if (v === valueMm) {
       setDraft(null);
       setError(null);

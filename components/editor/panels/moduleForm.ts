@@ -4,7 +4,7 @@
  * millimetres. Pure: no React, so it is tested on its own.
  */
 import { z } from 'zod';
-import { ARRANGEMENTS, FACINGS, MODULE_KINDS, SURFACES, type Module } from '@/lib/layout/schema';
+import { ARRANGEMENTS, FACINGS, MODULE_KINDS, MODULE_LIMITS, SURFACES, type Module } from '@/lib/layout/schema';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 export interface ModuleFormValues {
@@ -42,12 +42,12 @@ export function moduleFormSchema(unit: LengthUnit) {
   return z.object({
     label: z.string().max(80, 'at most 80 characters').refine((s) => !/[\u0000-\u001F\u007F]/.test(s), 'no control characters'),
     kind: z.enum(MODULE_KINDS),
-    x: lengthField(unit, -100_000, 100_000, 'Position along'),
-    y: lengthField(unit, -100_000, 100_000, 'Position across'),
-    length: lengthField(unit, 1, 100_000, 'Length'),
-    width: lengthField(unit, 1, 100_000, 'Width'),
-    elevation: lengthField(unit, 0, 5000, 'Elevation'),
-    height: lengthField(unit, 1, 5000, 'Height'),
+    x: lengthField(unit, MODULE_LIMITS.position.min, MODULE_LIMITS.position.max, 'Position along'),
+    y: lengthField(unit, MODULE_LIMITS.position.min, MODULE_LIMITS.position.max, 'Position across'),
+    length: lengthField(unit, MODULE_LIMITS.length.min, MODULE_LIMITS.length.max, 'Length'),
+    width: lengthField(unit, MODULE_LIMITS.width.min, MODULE_LIMITS.width.max, 'Width'),
+    elevation: lengthField(unit, MODULE_LIMITS.elevation.min, MODULE_LIMITS.elevation.max, 'Elevation'),
+    height: lengthField(unit, MODULE_LIMITS.height.min, MODULE_LIMITS.height.max, 'Height'),
     facing: z.enum(FACINGS),
     arrangements: z.array(z.enum(ARRANGEMENTS)).min(1, 'a module exists in at least one arrangement'),
     surface: z.union([z.literal(''), z.enum(SURFACES)]),
@@ -55,8 +55,8 @@ export function moduleFormSchema(unit: LengthUnit) {
       const t = s.trim().replace(/\s*kg$/i, '');
       if (t === '') return undefined;
       const v = Number(t.replace(',', '.'));
-      if (!Number.isFinite(v) || v < 0 || v > 5000) {
-        ctx.addIssue({ code: 'custom', message: 'Mass: a number of kg from 0 to 5000' });
+      if (!Number.isFinite(v) || v < MODULE_LIMITS.massKg.min || v > MODULE_LIMITS.massKg.max) {
+        ctx.addIssue({ code: 'custom', message: `Mass: a number of kg from ${MODULE_LIMITS.massKg.min} to ${MODULE_LIMITS.massKg.max}` });
         return z.NEVER;
       }
       return Math.round(v * 10) / 10;

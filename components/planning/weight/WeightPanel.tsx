@@ -2,14 +2,15 @@
 /**
  * Weight: the base vehicle's plate and weighbridge figures and the load carried, with the
  * results beside them — laden mass against the maximum authorised mass, each axle by the lever
- * rule against its limit, the payload left against EN 1646-2 and Reg. (EU) 1230/2012, the
- * licence caution above 3500 kg, a plan with the centre of mass — and the `mass.*` findings.
+ * rule against its limit, the payload left against EN 1646-2 / Reg. (EU) No 1230/2012, the
+ * licence caution for a maximum authorised mass above 3500 kg, the mass-and-balance table, a plan
+ * with the centre of mass — and the `mass.*` findings.
  * Edits only `systems.vehicle` and `systems.load`, through the page's onSystems.
  */
 import { useId, useMemo } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Plus, Trash2 } from 'lucide-react';
-import { computeAxleLoads, en1646UserPayload, personalEffectsAllowance, reg1230UserPayload } from '@/lib/planning';
+import { massBalance, personalEffectsAllowance, userPayloadRequired } from '@/lib/planning';
 import { CATEGORY_B_LIMIT_KG } from '@/lib/checks/systems/mass';
 import { FindingList, findingsOf } from '../FindingList';
 import { Caution, FieldGroup, QuantityField } from '../fields';
@@ -18,6 +19,7 @@ import { newRowId } from '../ids';
 import type { PanelProps } from '../panelProps';
 import { useSectionForm } from '../useSectionForm';
 import { CentreOfMassPlan } from './CentreOfMassPlan';
+import { MassBalanceTable } from './MassBalanceTable';
 import { weightDefaults, weightSchema, weightSystems } from './weightForm';
 
 export function WeightPanel({ doc, units, readOnly, onSystems, onValidity, findings }: PanelProps) {
@@ -31,13 +33,14 @@ export function WeightPanel({ doc, units, readOnly, onSystems, onValidity, findi
   });
   const items = useFieldArray({ control: form.control, name: 'items' });
   const e = form.formState.errors;
-  const report = useMemo(() => computeAxleLoads(doc), [doc]);
+  const balance = useMemo(() => massBalance(doc), [doc]);
+  const report = balance.report;
   const v = doc.systems?.vehicle ?? {};
   const payloadLeft = v.maxAuthorisedMassKg !== undefined && v.massInRunningOrderKg !== undefined ? v.maxAuthorisedMassKg - report.builtKg : null;
-  const en1646 = report.lengthM !== null ? en1646UserPayload(report.seats, report.lengthM) : null;
-  const reg1230 = report.lengthM !== null ? reg1230UserPayload(report.seats, report.lengthM) : null;
+  const payloadNeeded = report.lengthM !== null ? userPayloadRequired(report.seats, report.lengthM) : null;
   const effectsHint = report.lengthM !== null ? `empty: EN 1646-2 allowance, ${Math.round(personalEffectsAllowance(report.seats, report.lengthM))} kg` : 'empty: EN 1646-2 allowance (needs the overall length)';
-  const overLicence = (v.maxAuthorisedMassKg ?? 0) > CATEGORY_B_LIMIT_KG || report.totalKg > CATEGORY_B_LIMIT_KG;
+  // Category B depends on the maximum authorised mass only; a van laden above it is overloaded.
+  const overLicence = (v.maxAuthorisedMassKg ?? 0) > CATEGORY_B_LIMIT_KG;
   const r = form.register;
   const len = units;
 
@@ -47,7 +50,7 @@ export function WeightPanel({ doc, units, readOnly, onSystems, onValidity, findi
         <fieldset disabled={readOnly} className="space-y-4">
           <FieldGroup title="Base vehicle" note="From the vehicle plate or certificate of conformity, or a weighbridge ticket. Positions are along the bay from the front of the load floor; ahead of it is negative.">
             <QuantityField label="Mass in running order" unit="kg" reg={r('massInRunningOrderKg')} error={e.massInRunningOrderKg} hint="driver (75 kg) and fuel included" testId="w-miro" />
-            <QuantityField label="…of it on the front axle" unit="kg" reg={r('frontAxleRunningOrderKg')} error={e.frontAxleRunningOrderKg} hint="weighbridge, driver aboard" />
+            <QuantityField label="Mass in running order on the front axle" unit="kg" reg={r('frontAxleRunningOrderKg')} error={e.frontAxleRunningOrderKg} hint="weighbridge, driver aboard" />
             <QuantityField label="Maximum authorised mass" unit="kg" reg={r('maxAuthorisedMassKg')} error={e.maxAuthorisedMassKg} testId="w-mam" />
             <QuantityField label="Front axle limit" unit="kg" reg={r('maxFrontAxleKg')} error={e.maxFrontAxleKg} />
             <QuantityField label="Rear axle limit" unit="kg" reg={r('maxRearAxleKg')} error={e.maxRearAxleKg} />
@@ -94,33 +97,16 @@ export function WeightPanel({ doc, units, readOnly, onSystems, onValidity, findi
           <LimitBar label="Laden mass" value={v.massInRunningOrderKg !== undefined ? report.totalKg : null} limit={v.maxAuthorisedMassKg ?? null} unit="kg" testId="bar-total" />
           <LimitBar label="Front axle" value={report.axles?.frontKg ?? null} limit={v.maxFrontAxleKg ?? null} unit="kg" testId="bar-front" />
           <LimitBar label="Rear axle" value={report.axles?.rearKg ?? null} limit={v.maxRearAxleKg ?? null} unit="kg" testId="bar-rear" />
-          <LimitBar label="Payload left (EN 1646-2)" value={payloadLeft} limit={en1646} unit="kg" atLeast />
-          <LimitBar label="Payload left (Reg. (EU) 1230/2012)" value={payloadLeft} limit={reg1230} unit="kg" atLeast />
+          <LimitBar label="User payload left" value={payloadLeft} limit={payloadNeeded} unit="kg" atLeast />
           <p className="text-xs text-ink-soft">
-            Axle loads by the lever rule (moments about the front axle). Payload allowances: EN 1646-2 — 75 kg per passenger plus personal effects 10 × seats + 10 × length (m) + 30 kg; Reg. (EU) 1230/2012 — passengers plus 10 × (persons + length) kg (both as cited, secondary).
+            Axle loads by the lever rule (moments about the front axle). User payload needed: 75 kg for each passenger beside the driver, plus personal effects of 10 kg × persons + 10 kg × overall length in metres (EN 1646-2, secondary; Reg. (EU) No 1230/2012 gives the same figure, from memory).
           </p>
         </div>
+        <MassBalanceTable balance={balance} />
         <CentreOfMassPlan doc={doc} report={report} />
-        <details className="panel p-3 text-sm">
-          <summary className="cursor-pointer font-medium">What is counted ({report.items.length} masses)</summary>
-          <table className="mt-2 w-full text-left text-xs">
-            <thead><tr className="text-ink-soft"><th className="py-1">Mass</th><th className="text-right">kg</th><th className="text-right">at x (mm)</th><th className="text-right">front / rear kg</th></tr></thead>
-            <tbody>
-              {report.items.map((i) => (
-                <tr key={i.id} className="border-t border-paper-edge">
-                  <td className="py-1 pr-2">{i.label}</td>
-                  <td className="text-right font-mono">{Math.round(i.massKg * 10) / 10}</td>
-                  <td className="text-right font-mono">{Math.round(i.x)}</td>
-                  <td className="text-right font-mono">{i.frontKg === undefined ? '—' : `${Math.round(i.frontKg)} / ${Math.round(i.rearKg!)}`}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          {report.assumptions.length > 0 && <p className="mt-2 text-xs text-ink-soft">Assumed: {report.assumptions.join('; ')}.</p>}
-        </details>
         {(overLicence || doc.modules.some((m) => m.kind === 'seat')) && (
           <Caution>
-            {overLicence && <p>Above 3,500 kg a category B driving licence is not enough (Directive 2006/126/EC; from memory): check your licence, or keep the van downplated and under 3,500 kg.</p>}
+            {overLicence && <p>With a maximum authorised mass above 3,500 kg a category B driving licence is not enough (Directive 2006/126/EC; from memory): check your licence, or have the van downplated to 3,500 kg.</p>}
             {doc.modules.some((m) => m.kind === 'seat') && <p>Travel seats, belts and their anchorages must be of an approved type and anchored as tested (UN ECE R14, R16, R17; from memory). Have the installation inspected under local rules.</p>}
           </Caution>
         )}

@@ -7,12 +7,15 @@
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
-import { en721Ventilation, gasInventory, lockerVentRequiredCm2, moduleName } from '../../planning';
+import { EN721_MAX_FLOOR_M2, EN721_SOURCE, en721Ventilation, gasInventory, INPUTS, LOCKER_SOURCE, LOCKER_VENT_FLOOR_FRACTION, LOCKER_VENT_MIN_CM2, lockerVentRequiredCm2, LOW_VENT_MAX_HEIGHT_MM, moduleRef } from '../../planning';
 import type { Finding } from '../types';
 import { caution, missingInputs, num, round } from './wording';
 
-const LOCKER_SOURCE = 'DVGW G 607 / EN 1949 (cylinder compartments; as cited in the brief, secondary)';
-const EN721 = 'EN 721 (safety ventilation) as cited in a TÜV motor-caravan guidance note (secondary, clause not checked)';
+const EN721 = EN721_SOURCE;
+
+function cap(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}
 
 export function gasChecks(doc: LayoutDoc): Finding[] {
   const gas = doc.systems?.gas ?? {};
@@ -23,11 +26,11 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
     out.push(caution(
       'gas.caution',
       [
-        { done: gas.installerCertified, text: 'installed and tightness-tested by a qualified gas engineer, with a certificate', field: 'systems.gas.installerCertified' },
-        { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: 'systems.alarms.co' },
-        { done: doc.systems?.alarms?.lpg, text: 'LPG alarm near the floor', field: 'systems.alarms.lpg' },
+        { done: gas.installerCertified, text: 'installed and tightness-tested by a qualified gas engineer, with a certificate', field: { label: 'Installed and tightness-tested by a qualified gas engineer, with a certificate', where: 'gas' } },
+        { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: { label: 'Carbon-monoxide alarm fitted', where: 'gas' } },
+        { done: doc.systems?.alarms?.lpg, text: 'LPG alarm near the floor', field: { label: 'LPG alarm fitted near the floor', where: 'gas' } },
       ],
-      `Gas is aboard (${[...inv.appliances.map((a) => a.name), ...inv.lockers.map((l) => moduleName(l))].join(', ')}): the installation must be installed and tested by a qualified gas engineer under local codes (EN 1949 in Europe), with a carbon-monoxide alarm and an LPG alarm. Never sleep with a flueless appliance burning.`,
+      `Gas is aboard (${[...inv.appliances.map((a) => doc.modules.find((m) => m.id === a.moduleId)!), ...inv.lockers].map(moduleRef).join(', ')}): the installation must be installed and tested by a qualified gas engineer under local codes (EN 1949 in Europe), with a carbon-monoxide alarm and an LPG alarm. Never sleep with a flueless appliance burning.`,
       'EN 1949 (LPG installations in leisure accommodation vehicles); local gas-safety law',
       [...inv.appliances.map((a) => a.moduleId), ...inv.lockers.map((l) => l.id)],
     ));
@@ -39,7 +42,7 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
         required: 1,
         unit: 'gas lockers',
         moduleIds: inv.appliances.map((a) => a.moduleId),
-        message: `Gas appliances are drawn (${inv.appliances.map((a) => a.name).join(', ')}) but no gas locker: cylinders belong in a locker sealed from the living space with a drop-out vent. Add a gas-locker module (or an underslung tank outside the body).`,
+        message: `Gas appliances are drawn (${inv.appliances.map((a) => a.name).join(', ')}) but no gas locker: cylinders belong in a locker sealed from the living space with a drop-out vent. Add a gas locker from the Parts shelf (or fit an underslung tank outside the body).`,
         source: LOCKER_SOURCE,
       });
     }
@@ -48,25 +51,26 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
   for (const l of inv.lockers) {
     const lk = gas.locker ?? {};
     const ids = [l.id];
-    if (lk.sealed === undefined) out.push({ ...missingInputs('gas.locker-sealed', `Gas locker ${moduleName(l)} sealing`, ['systems.gas.locker.sealed'], 1, LOCKER_SOURCE), moduleIds: ids });
+    const name = moduleRef(l);
+    if (lk.sealed === undefined) out.push({ ...missingInputs('gas.locker-sealed', `The sealing of ${name}`, [INPUTS.lockerSealed], 1, LOCKER_SOURCE), moduleIds: ids });
     else out.push({
       id: 'gas.locker-sealed',
       status: lk.sealed ? 'pass' : 'fail',
       measured: lk.sealed ? 1 : 0,
       required: 1,
-      unit: 'sealed (1 = yes)',
+      unit: 'sealed lockers',
       moduleIds: ids,
       message: lk.sealed
-        ? `${moduleName(l)} is sealed from the living space, opening to the outside.`
-        : `${moduleName(l)} is not sealed from the living space: leaking gas, heavier than air, would pool inside. Seal every seam and pipe entry so it opens only to the outside.`,
+        ? `${cap(name)} is sealed from the living space and opens only to the outside.`
+        : `${cap(name)} is not sealed from the living space: leaking gas, heavier than air, would pool inside. Seal every seam and pipe entry so it opens only to the outside.`,
       source: LOCKER_SOURCE,
     });
 
     const floorCm2 = (l.length * l.width) / 100;
     const needCm2 = lockerVentRequiredCm2(floorCm2);
     if (lk.ventAreaCm2 === undefined || lk.ventAtFloor === undefined) {
-      const paths = [lk.ventAreaCm2 === undefined ? 'systems.gas.locker.ventAreaCm2' : '', lk.ventAtFloor === undefined ? 'systems.gas.locker.ventAtFloor' : ''].filter(Boolean);
-      out.push({ ...missingInputs('gas.locker-vent', `Gas locker ${moduleName(l)} drop-out vent (needs ${num(needCm2)} cm² at the floor)`, paths, 2, LOCKER_SOURCE), moduleIds: ids });
+      const needs = [...(lk.ventAreaCm2 === undefined ? [INPUTS.lockerVentArea] : []), ...(lk.ventAtFloor === undefined ? [INPUTS.lockerVentAtFloor] : [])];
+      out.push({ ...missingInputs('gas.locker-vent', `The drop-out vent of ${name} (${num(needCm2)} cm² wanted at the floor)`, needs, 2, LOCKER_SOURCE), moduleIds: ids });
     } else {
       const ok = lk.ventAreaCm2 >= needCm2 && lk.ventAtFloor;
       out.push({
@@ -76,23 +80,23 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
         required: round(needCm2, 1),
         unit: 'cm²',
         moduleIds: ids,
-        message: `${moduleName(l)}: drop-out vent ${num(lk.ventAreaCm2)} cm²${lk.ventAtFloor ? ' at the floor' : ' NOT at the floor'}; needed at least 2 % of the ${num(floorCm2)} cm² locker floor and at least 100 cm², so ${num(needCm2)} cm², at the lowest point, to outside.`,
+        message: `${cap(name)}: drop-out vent ${num(lk.ventAreaCm2)} cm²${lk.ventAtFloor ? ', at the floor' : ', but not at the floor'}; needed at least ${num(LOCKER_VENT_FLOOR_FRACTION * 100)} % of the ${num(floorCm2)} cm² locker floor and at least ${num(LOCKER_VENT_MIN_CM2)} cm², so ${num(needCm2)} cm², at the lowest point, to outside.`,
         source: LOCKER_SOURCE,
       });
     }
 
     if (inv.cylinders > 0) {
-      if (lk.cylindersSecured === undefined) out.push({ ...missingInputs('gas.cylinders-secured', `Cylinder restraint in ${moduleName(l)}`, ['systems.gas.locker.cylindersSecured'], 1, LOCKER_SOURCE), moduleIds: ids });
+      if (lk.cylindersSecured === undefined) out.push({ ...missingInputs('gas.cylinders-secured', `The cylinder restraint in ${name}`, [INPUTS.cylindersSecured], 1, LOCKER_SOURCE), moduleIds: ids });
       else out.push({
         id: 'gas.cylinders-secured',
         status: lk.cylindersSecured ? 'pass' : 'fail',
         measured: lk.cylindersSecured ? 1 : 0,
         required: 1,
-        unit: 'secured (1 = yes)',
+        unit: 'lockers with cylinders secured',
         moduleIds: ids,
         message: lk.cylindersSecured
-          ? `Cylinders in ${moduleName(l)} are secured upright, valve uppermost.`
-          : `Cylinders in ${moduleName(l)} are not secured: strap them upright, valve uppermost, at high and low level, so they cannot move under braking.`,
+          ? `The cylinders in ${name} are strapped upright, valve uppermost.`
+          : `The cylinders in ${name} are not secured: strap them upright, valve uppermost, at high and low level, so they cannot move under braking.`,
         source: LOCKER_SOURCE,
       });
     }
@@ -104,10 +108,10 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
   const flueless = inv.appliances.some((a) => a.flueless);
   const need = en721Ventilation(floorM2, flueless, vent.highVentInRoof ?? false);
   if (!need) {
-    out.push({ id: 'gas.ventilation', status: 'warn', measured: round(floorM2, 2), required: 10, unit: 'm² floor', message: `The living floor is ${num(floorM2, 1)} m², beyond the 10 m² the cited EN 721 figures cover: size the fixed vents from EN 721 itself.`, source: EN721 });
+    out.push({ id: 'gas.ventilation', status: 'warn', measured: round(floorM2, 2), required: EN721_MAX_FLOOR_M2, unit: 'm² floor', message: `The living floor is ${num(floorM2, 1)} m², beyond the ${num(EN721_MAX_FLOOR_M2)} m² the quoted EN 721 figures cover: size the fixed vents from EN 721 itself.`, source: EN721 });
   } else if (vent.highVentCm2 === undefined || vent.lowVentCm2 === undefined) {
-    const paths = [vent.highVentCm2 === undefined ? 'systems.gas.ventilation.highVentCm2' : '', vent.lowVentCm2 === undefined ? 'systems.gas.ventilation.lowVentCm2' : ''].filter(Boolean);
-    out.push(missingInputs('gas.ventilation', `Fixed ventilation (${need.band}: ${need.highCm2} cm² high, ${need.lowCm2} cm² low)`, paths, 2, EN721));
+    const needs = [...(vent.highVentCm2 === undefined ? [INPUTS.highVent] : []), ...(vent.lowVentCm2 === undefined ? [INPUTS.lowVent] : [])];
+    out.push(missingInputs('gas.ventilation', `Fixed ventilation (${need.band}: ${need.highCm2} cm² high, ${need.lowCm2} cm² low)`, needs, 2, EN721));
   } else {
     const place = vent.highVentInRoof ? 'roof extract' : 'high vent';
     out.push({
@@ -125,7 +129,7 @@ export function gasChecks(doc: LayoutDoc): Finding[] {
       measured: vent.lowVentCm2,
       required: need.lowCm2,
       unit: 'cm²',
-      message: `Fixed low-level ventilation ${num(vent.lowVentCm2)} cm² free area, within 100 mm of the floor; EN 721 asks ${need.lowCm2} cm² (${need.band}).`,
+      message: `Fixed low-level ventilation ${num(vent.lowVentCm2)} cm² free area, within ${num(LOW_VENT_MAX_HEIGHT_MM)} mm of the floor; EN 721 asks ${need.lowCm2} cm² (${need.band}).`,
       source: EN721,
     });
   }

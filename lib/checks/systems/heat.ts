@@ -7,11 +7,11 @@
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
-import { heatLoss } from '../../planning';
+import { AIR_HEAT_CAPACITY, heatLoss, INPUTS, layerResistance, U_VALUE_SOURCE } from '../../planning';
 import type { Finding } from '../types';
 import { caution, num, round } from './wording';
 
-const U_SOURCE = 'EN ISO 6946 (method; Rsi/Rse Table 7, from memory); λ from EN ISO 10456 Table 3 or typical declared values (from memory)';
+const U_SOURCE = U_VALUE_SOURCE;
 const FACE_NAMES = { floor: 'Floor', walls: 'Walls', roof: 'Roof' } as const;
 
 /** A face whose insulation gives less than this R is treated as uninsulated (common practice, no source). */
@@ -22,15 +22,16 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
   const out: Finding[] = [];
   for (const u of h.uValues) {
     const layers = u.layers.map((l) => `${l.material} ${l.thicknessMm} mm (λ ${l.lambda ?? '?'})`).join(' + ') || 'no layers';
-    const layerR = u.rTotal - 0.04 - (u.face === 'roof' ? 0.1 : u.face === 'walls' ? 0.13 : 0.17);
+    const layerR = layerResistance(u);
     const status = u.unknown.length || layerR < MIN_USEFUL_R ? 'warn' : 'pass';
     out.push({
       id: 'heat.u-value',
       status,
       measured: round(u.u, 3),
       unit: 'W/m²K',
-      message: `${FACE_NAMES[u.face]} build-up: U = ${num(u.u, 2)} W/m²K (R ${num(u.rTotal, 2)} m²K/W with surface resistances) from ${layers}.${u.unknown.length ? ` No λ known for ${u.unknown.join(', ')}: enter its declared value in systems.insulation.conductivities (left out, so U errs high).` : ''}${layerR < MIN_USEFUL_R ? ' Little or no insulation on this face.' : ''} Steel ribs bridging the insulation are not counted.`,
+      message: `${FACE_NAMES[u.face]} build-up: U = ${num(u.u, 2)} W/m²K (R ${num(u.rTotal, 2)} m²K/W with surface resistances) from ${layers}.${u.unknown.length ? ` No λ known for ${u.unknown.join(', ')}: enter its declared λ on the heat tab (left out meanwhile, so U errs high).` : ''}${layerR < MIN_USEFUL_R ? ` Little or no insulation on this face (the layers give R ${num(layerR, 2)} m²K/W, under ${num(MIN_USEFUL_R, 2)}).` : ''} Steel ribs bridging the insulation are not counted.`,
       source: U_SOURCE,
+      ...(u.unknown.length ? { needs: [INPUTS.conductivity] } : {}),
     });
   }
   out.push({
@@ -38,8 +39,8 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
     status: 'pass',
     measured: round(h.totalWPerK, 1),
     unit: 'W/K',
-    message: `Heat loss ${num(h.totalWPerK, 1)} W/K (${h.faces.map((f) => `${f.face} ${num(f.wPerK, 1)}`).join(', ')}, windows ${num(h.windowsWPerK, 1)}, air change ${num(h.ventilationWPerK, 1)} W/K): ${num(h.requiredW)} W at a ${num(h.deltaK)} K difference inside to outside (systems.insulation.deltaK).`,
-    source: `${U_SOURCE}; air 0.34 W/(m³K) per air change an hour (EN 12831, from memory)`,
+    message: `Heat loss ${num(h.totalWPerK, 1)} W/K (${h.faces.map((f) => `${f.face} ${num(f.wPerK, 1)}`).join(', ')}, windows ${num(h.windowsWPerK, 1)}, air change ${num(h.ventilationWPerK, 1)} W/K): ${num(h.requiredW)} W at a ${num(h.deltaK)} K difference inside to outside (Inside minus outside, on the heat tab).`,
+    source: `${U_SOURCE}; air ${AIR_HEAT_CAPACITY} W/(m³K) per air change an hour (EN 12831, from memory); design difference 20 K and 1 air change an hour when none is entered (common practice, no source)`,
   });
   if (h.heaterIds.length) {
     out.push({
@@ -56,9 +57,9 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
     if (heating.fuel !== 'electric') out.push(caution(
       'heat.heater-caution',
       [
-        { done: heating.exhaustClearOfOpenings, text: 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies', field: 'systems.heating.exhaustClearOfOpenings' },
-        { done: heating.intakeClearOfExhaust, text: 'combustion intake apart from the exhaust and out of spray', field: 'systems.heating.intakeClearOfExhaust' },
-        { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: 'systems.alarms.co' },
+        { done: heating.exhaustClearOfOpenings, text: 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies', field: { label: 'Exhaust away from doors, opening windows and the fuel filler, as the maker specifies', where: 'heat' } },
+        { done: heating.intakeClearOfExhaust, text: 'combustion intake apart from the exhaust and out of spray', field: { label: 'Combustion intake apart from the exhaust and out of spray', where: 'heat' } },
+        { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: { label: 'Carbon-monoxide alarm fitted', where: 'gas' } },
       ],
       'A fuel-burning heater makes carbon monoxide: follow the maker\'s installation manual and local codes for the exhaust and combustion intake (away from doors, opening windows and the fuel filler), use the maker\'s seals and exhaust parts, and fit a CO alarm.',
       'Heater maker\'s installation manual; UN ECE Regulation No. 122 (heating systems; from memory)',

@@ -1,22 +1,25 @@
 /**
- * Water rules (`water.*`): fresh capacity and days of use, and a grey tank no smaller than the
- * fresh tank — the NZS 5465 self-containment rules (4 L per person per day for 3 days; as cited in
- * the brief, secondary). A self-containment certificate is a New Zealand matter; elsewhere these
- * are good practice, hence `warn` rather than `fail`. No tank modules → no water findings.
+ * Water rules (`water.*`), on two bases that are never mixed:
+ * - `water.fresh` and `water.grey`: the NZS 5465 self-containment rules, always worked at their
+ *   own 4 L per person per day for 3 days, and a grey tank no smaller than the fresh tank
+ *   (secondary). A self-containment certificate is a New Zealand matter; elsewhere these are good
+ *   practice, hence `warn` rather than `fail`.
+ * - `water.days`: a comfort estimate at the use entered on the water tab (or 10 L per person per
+ *   day), against 3 days between fills — common practice, no source, and it says so.
+ * No tank modules → no water findings.
  *
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
-import { NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterPlan } from '../../planning';
+import { COMFORT_DAYS_BETWEEN_FILLS, DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, NZS5465_SOURCE, waterPlan } from '../../planning';
 import type { Finding } from '../types';
 import { num, round } from './wording';
-
-const NZS = 'NZS 5465 (self-contained vehicles; as cited in the brief, secondary)';
 
 export function waterChecks(doc: LayoutDoc): Finding[] {
   const w = waterPlan(doc);
   if (w.freshTankIds.length === 0 && w.greyTankIds.length === 0) return [];
   const out: Finding[] = [];
+  const people = `${w.persons} ${w.persons === 1 ? 'person' : 'people'}`;
   out.push({
     id: 'water.fresh',
     status: w.freshL >= w.nzsMinimumL ? 'pass' : 'warn',
@@ -24,19 +27,20 @@ export function waterChecks(doc: LayoutDoc): Finding[] {
     required: w.nzsMinimumL,
     unit: 'L',
     moduleIds: w.freshTankIds,
-    message: `Fresh water ${num(w.freshL)} L (${num(w.freshFullKg)} kg when full) for ${w.persons} ${w.persons === 1 ? 'person' : 'people'}; the self-containment minimum is ${NZS5465_L_PER_PERSON_DAY} L per person per day for ${NZS5465_DAYS} days = ${num(w.nzsMinimumL)} L.`,
-    source: NZS,
+    message: `Fresh water ${num(w.freshL)} L (${num(w.freshFullKg)} kg when full) for ${people}. The self-containment rule counts ${NZS5465_L_PER_PERSON_DAY} L per person per day for ${NZS5465_DAYS} days, whatever the use entered: ${num(w.nzsMinimumL)} L${w.freshL >= w.nzsMinimumL ? ', met.' : `, ${num(w.nzsMinimumL - w.freshL)} L short.`}`,
+    source: NZS5465_SOURCE,
   });
   if (w.days !== null) {
+    const basis = w.useEntered ? `the ${num(w.litresPerPersonPerDay, 1)} L per person per day entered on the water tab` : `${num(DEFAULT_L_PER_PERSON_DAY)} L per person per day (no use entered; common practice, no source)`;
     out.push({
       id: 'water.days',
-      status: w.days >= NZS5465_DAYS ? 'pass' : 'warn',
+      status: w.days >= COMFORT_DAYS_BETWEEN_FILLS ? 'pass' : 'warn',
       measured: round(w.days, 2),
-      required: NZS5465_DAYS,
+      required: COMFORT_DAYS_BETWEEN_FILLS,
       unit: 'days',
       moduleIds: w.freshTankIds,
-      message: `At ${num(w.litresPerPersonPerDay, 1)} L per person per day (systems.water.litresPerPersonPerDay) the fresh water lasts ${num(w.days, 1)} days for ${w.persons}; ${NZS5465_DAYS} days wanted between fills.`,
-      source: `${NZS}; use per person: entered, or 10 L common practice, no source`,
+      message: `Comfort estimate, not the self-containment rule: at ${basis}, ${num(w.freshL)} L lasts ${people} ${num(w.days, 1)} days; ${COMFORT_DAYS_BETWEEN_FILLS} days between fills is the aim.`,
+      source: `Days between fills: common practice, no source; use per person: ${w.useEntered ? 'as entered' : 'common practice, no source'}`,
     });
   }
   out.push({
@@ -49,7 +53,7 @@ export function waterChecks(doc: LayoutDoc): Finding[] {
     message: w.greyL === 0
       ? `No grey water tank: ${num(w.freshL)} L of fresh water has nowhere to go but the ground. A self-contained van holds its grey water in a tank at least as large as the fresh tank.`
       : `Grey tank ${num(w.greyL)} L against ${num(w.freshL)} L fresh: ${w.greyL >= w.freshL ? 'large enough to hold all the fresh water used.' : 'smaller than the fresh tank, so it fills before the fresh water runs out.'}`,
-    source: NZS,
+    source: NZS5465_SOURCE,
   });
   return out;
 }

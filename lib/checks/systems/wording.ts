@@ -3,6 +3,7 @@
  * the precaution/input counters that caution and missing-data findings report as measured and
  * required. Pure text; must never import UI, framework or database code.
  */
+import { needsInWords, type InputNeed } from '../../planning/inputs';
 import type { Finding } from '../types';
 
 const formats = new Map<number, Intl.NumberFormat>();
@@ -20,19 +21,30 @@ export function round(n: number, digits = 2): number {
 }
 
 /**
- * A finding that asks for data a rule needs. Measured/required count the inputs given and needed,
- * so the contract's numbers stay meaningful.
+ * A finding that cannot be checked yet because inputs are missing: `warn`, naming each missing
+ * input by its on-screen label in `needs` (with the build-plan tab that holds it) and in the
+ * message. Measured/required count the inputs given and needed, so the contract's numbers stay
+ * meaningful.
  */
-export function missingInputs(id: string, what: string, paths: string[], needed: number, source: string): Finding {
+export function missingInputs(id: string, what: string, needs: InputNeed[], needed: number, source: string): Finding {
   return {
     id,
     status: 'warn',
-    measured: Math.max(0, needed - paths.length),
+    measured: Math.max(0, needed - needs.length),
     required: needed,
     unit: 'inputs',
-    message: `${what} cannot be checked yet: enter ${paths.join(', ')}.`,
+    message: `${what} cannot be checked yet: it needs ${needsInWords(needs)}.`,
     source,
+    needs: needs.map((n) => ({ label: n.label, where: n.where })),
   };
+}
+
+/** One precaution of a caution: what must be done, and the on-screen box that confirms it. */
+export interface Precaution {
+  done: boolean | undefined;
+  text: string;
+  /** The confirming field's on-screen label and tab. */
+  field: InputNeed;
 }
 
 /**
@@ -40,12 +52,12 @@ export function missingInputs(id: string, what: string, paths: string[], needed:
  * keeping its text either way (the caution never disappears while the hazard is there).
  * Measured/required count the precautions confirmed and needed.
  */
-export function caution(id: string, precautions: { done: boolean | undefined; text: string; field: string }[], message: string, source: string, moduleIds?: string[]): Finding {
+export function caution(id: string, precautions: Precaution[], message: string, source: string, moduleIds?: string[]): Finding {
   const done = precautions.filter((p) => p.done === true).length;
   const open = precautions.filter((p) => p.done !== true);
   const tail = open.length
-    ? ` Not yet confirmed: ${open.map((p) => `${p.text} (${p.field})`).join('; ')}.`
-    : ' All precautions confirmed in the document.';
+    ? ` Not yet confirmed: ${open.map((p) => `${p.text} (tick “${p.field.label}” on the ${p.field.where === 'editor' ? 'module' : `${p.field.where} tab`})`).join('; ')}.`
+    : ' Every precaution is confirmed.';
   return {
     id,
     status: open.length ? 'warn' : 'pass',

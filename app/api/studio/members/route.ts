@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
-import { addMember, listMembers } from '@/db/studios';
-import { PASSWORD_MIN } from '@/lib/auth/password';
+import { listMembers, requireOwner } from '@/db/studios';
+import { inviteAndMail } from '@/lib/mail/invite';
 
 export const dynamic = 'force-dynamic';
 
@@ -9,7 +9,6 @@ const memberBody = z.strictObject({
   email: z.email('enter a valid e-mail address').max(254),
   name: z.string().trim().min(1, 'give their name').max(80),
   role: z.enum(['designer', 'client']),
-  password: z.string().min(PASSWORD_MIN, `use at least ${PASSWORD_MIN} characters`).max(72).optional(),
 });
 
 export const GET = handle(async (req) => {
@@ -17,9 +16,13 @@ export const GET = handle(async (req) => {
   return json({ members: await listMembers(actor) });
 });
 
-/** Owners add a designer or a client to their studio. */
+/**
+ * The owner adds a designer or a client: always by invitation. The person sets their own
+ * password, or joins with the account they have; the studio sees their name once they accept.
+ */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
+  requireOwner(actor);
   const body = parseWith(memberBody, await readJson(req, 16 * 1024));
-  return json(await addMember(actor, body), { status: 201 });
+  return json(await inviteAndMail(req, actor, body), { status: 201 });
 });

@@ -1,5 +1,6 @@
 import { handle, json, requireActor } from '@/lib/api/respond';
-import { renewInvitation } from '@/db/sharing/invitations';
+import { getInvitation, renewInvitation } from '@/db/sharing/invitations';
+import { requireMailBudget } from '@/lib/mail/budget';
 import { sendInvitation } from '@/lib/mail/notify';
 
 export const dynamic = 'force-dynamic';
@@ -9,7 +10,12 @@ type Ctx = { params: Promise<{ id: string }> };
 /** Sends the invitation again with a fresh link and a fresh week; the older link stops working. */
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
-  const issued = await renewInvitation(actor, (await params).id);
+  const { id } = await params;
+  const giveBack = await requireMailBudget(actor, (await getInvitation(actor, id)).email);
+  const issued = await renewInvitation(actor, id).catch(async (err: unknown) => {
+    await giveBack(); // accepted or withdrawn meanwhile: no mail went out
+    throw err;
+  });
   const mail = await sendInvitation(req, actor, issued);
   return json({ invitation: issued.invitation, mail });
 });
