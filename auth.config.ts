@@ -6,12 +6,12 @@
  * The proxy only redirects signed-out visitors for comfort; every route handler checks again.
  */
 import type { NextAuthConfig } from 'next-auth';
-import { authSecret, SESSION_MAX_AGE_S, secureCookiesWanted, withinAbsoluteLifetime } from './lib/auth/secret';
+import { authSecret, SESSION_MAX_AGE_S, secureCookiesSetting, withinAbsoluteLifetime } from './lib/auth/secret';
 
 export const authConfig = {
   trustHost: true,
   secret: authSecret(),
-  useSecureCookies: secureCookiesWanted(),
+  useSecureCookies: secureCookiesSetting(),
   session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_S },
   pages: { signIn: '/sign-in' },
   providers: [],

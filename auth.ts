@@ -10,6 +10,7 @@ import { authConfig } from './auth.config';
 import { authenticate, endSessions } from './db/accounts';
 import { loadActor } from './db/actor';
 import { clientAddress } from './lib/auth/address';
+import { describeError, log } from './lib/log';
 
 class RateLimited extends CredentialsSignin {
   code = 'rate_limited';
@@ -27,6 +28,12 @@ const studioSwitch = z.object({ studioId: z.uuid() });
 
 export const { handlers, auth, signIn, signOut } = NextAuth({
   ...authConfig,
+  // Auth.js's own messages go through the redacting logger (its errors may carry tokens or form fields).
+  logger: {
+    error: (error) => log.error('sign-in service error', describeError(error)),
+    warn: (code) => log.warn('sign-in service warning', { code }),
+    debug: () => undefined,
+  },
   callbacks: {
     ...authConfig.callbacks,
     /**

@@ -12,6 +12,8 @@ const nextConfig: NextConfig = {
   turbopack: { root },
   outputFileTracingRoot: root,
   // Runtime data and other build folders are never part of the server bundle.
+  // The plan sheet reads its faces at run time (lib/api/sheet-fonts.ts).
+  outputFileTracingIncludes: { '/api/layouts/[id]/sheet': ['./fonts/*.woff'] },
   outputFileTracingExcludes: { '*': ['data/**', '.next-*/**', 'artifacts/**', 'test-results/**'] },
   poweredByHeader: false,
   // `npm test` type-checks the whole project (tests included) as its own first step; the build need not repeat it.

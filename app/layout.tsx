@@ -1,7 +1,6 @@
 import type { Metadata } from 'next';
 import type { ReactNode } from 'react';
 import { textFace, monoFace } from './fonts';
-import { Providers } from './providers';
 import './globals.css';
 
 // Every page carries a per-request CSP nonce, so none may be rendered ahead of time.
@@ -16,7 +15,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
   return (
     <html lang="en-GB" className={`${textFace.variable} ${monoFace.variable}`}>
       <body className="min-h-screen bg-paper text-ink">
-        <Providers>{children}</Providers>
+        {children}
       </body>
     </html>
   );

@@ -27,7 +27,7 @@ async function timeToFirst200(db: string, port: number): Promise<number> {
   const started = performance.now();
   // The next binary itself, as a process manager would start it: npx would add its own start-up.
   const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
-    env: { ...process.env, BAYWRIGHT_DB: db, NODE_ENV: 'production' },
+    env: { ...process.env, BAYWRIGHT_DB: db, NODE_ENV: 'production', BAYWRIGHT_LOCAL_FAKES: '1' },
     stdio: 'ignore',
     detached: true,
   });

@@ -3,6 +3,7 @@
  * changing a password, sign-out. Returns DTOs only; never a password hash.
  */
 import 'server-only';
+import { isUniqueViolation } from './sharing/pg-errors';
 import { eq, sql } from 'drizzle-orm';
 import { getDb } from './client';
 import { memberships, studios, users } from './schema';
@@ -88,6 +89,7 @@ export async function signUp(input: { email: string; name: string; password: str
   const db = await getDb();
   const email = normaliseEmail(input.email);
   const passwordHash = await hashPassword(input.password);
+  // Two sign-ups of one address at once both pass the check; the unique index stops the second.
   return db.transaction(async (tx) => {
     const existing = await tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, email)).limit(1);
     if (existing.length) throw new ConflictError('An account with this e-mail address already exists.');
@@ -95,6 +97,9 @@ export async function signUp(input: { email: string; name: string; password: str
     const [studio] = await tx.insert(studios).values({ name: input.studioName?.trim() || `${input.name.trim()}’s studio` }).returning();
     await tx.insert(memberships).values({ userId: user.id, studioId: studio.id, role: 'owner' });
     return { id: user.id, email: user.email, name: user.name, studioId: studio.id, role: 'owner' as const, sessionVersion: user.sessionVersion };
+  }).catch((err: unknown) => {
+    if (isUniqueViolation(err, 'users_email_unique')) throw new ConflictError('An account with this e-mail address already exists.');
+    throw err;
   });
 }
 

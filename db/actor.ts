@@ -58,3 +58,13 @@ export async function loadActor(userId: string, studioId: string | undefined, se
 export function canEditLayouts(actor: Actor): boolean {
   return actor.role === 'owner' || actor.role === 'designer';
 }
+
+/**
+ * The one rule for who may read a layout: the owners and designers of its studio, and the one
+ * client of that studio it is shared with. Every data function that reads a layout (or what hangs
+ * off it) asks this; a client of the same studio is a stranger to every other client's layouts.
+ */
+export function mayReadLayout(actor: Actor, layout: { studioId: string; clientId: string | null }): boolean {
+  if (layout.studioId !== actor.studioId) return false;
+  return canEditLayouts(actor) || (actor.role === 'client' && layout.clientId === actor.userId);
+}

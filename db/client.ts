@@ -20,6 +20,8 @@ interface DbHandle {
   db: Db;
   kind: 'pglite' | 'postgres';
   close: () => Promise<void>;
+  /** Embedded database only: a consistent gzipped tarball of its folder (for `npm run db:backup`). */
+  dump?: () => Promise<Uint8Array>;
 }
 
 const MIGRATIONS = path.join(/* turbopackIgnore: true */ process.cwd(), 'drizzle');
@@ -77,7 +79,7 @@ async function openPostgres(url: string): Promise<DbHandle> {
 
 /**
  * Opens (and migrates) the embedded database. With `thread`, PGlite runs in a worker thread so
- * queries and Next.js use both cores (db/pglite-thread-client.ts); scripts and tests keep it on
+ * queries and Next.js use both cores (db/pglite/thread-client.ts); scripts and tests keep it on
  * their own thread.
  */
 export async function openPglite(dir: string, options: { migrate?: boolean; thread?: boolean } = {}): Promise<DbHandle> {
@@ -89,6 +91,7 @@ export async function openPglite(dir: string, options: { migrate?: boolean; thre
     return {
       db: opened.db,
       kind: 'pglite',
+      dump: opened.dump,
       close: async () => {
         await opened.close();
         releaseLock();
@@ -102,22 +105,28 @@ export async function openPglite(dir: string, options: { migrate?: boolean; thre
 
 async function openOnThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
   const { drizzle } = await import('drizzle-orm/pglite');
-  const { PgliteThreadClient } = await import('./pglite-thread-client');
+  const { PgliteThreadClient } = await import('./pglite/thread-client');
   const client = await PgliteThreadClient.open(dir, options.migrate === false ? null : MIGRATIONS);
   // drizzle uses only `query` and `transaction` of the client it is given.
-  return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close() };
+  return { db: drizzle({ client: client as never, schema }) as unknown as Db, close: () => client.close(), dump: () => client.dump() };
 }
 
 async function openInThread(dir: string, options: { migrate?: boolean }): Promise<Omit<DbHandle, 'kind'>> {
   const { drizzle } = await import('drizzle-orm/pglite');
   const { PGlite } = await import('@electric-sql/pglite');
   const { migrate } = await import('drizzle-orm/pglite/migrator');
-  const { withStatementCache } = await import('./pglite-statements.mjs');
-  const client = await PGlite.create({ dataDir: dir });
+  const { withStatementCache } = await import('./pglite/statements.mjs');
+  const { templateFor } = await import('./pglite/template.mjs');
+  // A new folder starts from the install-time template when there is one, as on the thread.
+  const client = await PGlite.create({ dataDir: dir, loadDataDir: templateFor(dir) });
   // Reads as prepared statements, as on the server's database thread.
   const db = drizzle({ client: withStatementCache(client) as never, schema });
   if (options.migrate !== false) await migrate(db, { migrationsFolder: MIGRATIONS });
-  return { db: db as unknown as Db, close: () => client.close() };
+  return {
+    db: db as unknown as Db,
+    close: () => client.close(),
+    dump: async () => new Uint8Array(await (await client.dumpDataDir('gzip')).arrayBuffer()),
+  };
 }
 
 /**
@@ -144,6 +153,16 @@ export function acquireLock(dir: string): () => void {
       /* already gone */
     }
   };
+}
+
+/** The live process (this one included) holding the folder's pid lock, or null. */
+export function lockHolder(dir: string): number | null {
+  try {
+    const holder = Number(fs.readFileSync(`${dir}.pid`, 'utf8').trim());
+    return holder && (holder === process.pid || isAlive(holder)) ? holder : null;
+  } catch {
+    return null;
+  }
 }
 
 export class DatabaseLockedError extends Error {

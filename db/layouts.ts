@@ -5,17 +5,19 @@
  * Returns DTOs, never rows.
  */
 import 'server-only';
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, isNotNull, isNull, or, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { getDb, type Db } from './client';
 import { prepared } from './prepared';
-import { layouts, memberships, users } from './schema';
-import { BadRequestError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
-import { canEditLayouts, type Actor } from './actor';
+import { layouts, memberships, payments, quotes, users } from './schema';
+import { BadRequestError, ConflictError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
+import { canEditLayouts, mayReadLayout, type Actor } from './actor';
 import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
 import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
 import { Lru } from '../lib/cache/lru';
+import { jsonText, withJsonField, type JsonText } from '../lib/cache/json-text';
+import { readStoredDoc } from './stored-doc';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -27,6 +29,8 @@ export interface LayoutSummaryDto {
   version: number;
   updatedAt: string;
   updatedBy: string | null;
+  /** When the layout was archived (ISO time); null while it is in use. */
+  archivedAt: string | null;
   /** In lists only: state with the client and open comment threads (db/sharing). */
   sharing?: LayoutSharingSummary;
 }
@@ -51,6 +55,7 @@ function metaSelect() {
     clientId: layouts.clientId,
     clientName: client.name,
     updatedByName: updater.name,
+    archivedAt: layouts.archivedAt,
   };
 }
 
@@ -67,6 +72,7 @@ type MetaRow = {
   clientId: string | null;
   clientName: string | null;
   updatedByName: string | null;
+  archivedAt: Date | null;
 };
 
 type Row = MetaRow & { doc: LayoutDoc };
@@ -97,6 +103,7 @@ function summaryOf(row: MetaRow, facts: DocFacts): LayoutSummaryDto {
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
     updatedBy: row.updatedByName,
+    archivedAt: row.archivedAt ? row.archivedAt.toISOString() : null,
   };
 }
 
@@ -110,11 +117,15 @@ function toDto(row: Row, actor: Actor): LayoutDto {
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export async function listLayouts(actor: Actor): Promise<LayoutSummaryDto[]> {
+/** The layouts in use (default), or with `archived` the archived ones only. */
+export async function listLayouts(actor: Actor, options: { archived?: boolean } = {}): Promise<LayoutSummaryDto[]> {
   const db = await getDb();
-  const visible = canEditLayouts(actor)
-    ? eq(layouts.studioId, actor.studioId)
-    : and(eq(layouts.studioId, actor.studioId), eq(layouts.clientId, actor.userId));
+  const visible = and(
+    canEditLayouts(actor)
+      ? eq(layouts.studioId, actor.studioId)
+      : and(eq(layouts.studioId, actor.studioId), eq(layouts.clientId, actor.userId)),
+    options.archived ? isNotNull(layouts.archivedAt) : isNull(layouts.archivedAt),
+  );
   const rows = await db
     .select(baseSelect())
     .from(layouts)
@@ -122,6 +133,7 @@ export async function listLayouts(actor: Actor): Promise<LayoutSummaryDto[]> {
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
     .where(visible)
     .orderBy(desc(layouts.updatedAt));
+  // Summaries read the bay and module count, which every schema version has: no migration needed for a list.
   const summaries = rows.map(toSummary);
   const sharing = await sharingSummaries(summaries.map((l) => l.id));
   return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
@@ -151,8 +163,7 @@ function layoutMetaByIdQuery(db: Db) {
 
 /** Staff see their studio's layouts, a client only those shared with them; others learn nothing. */
 function assertVisible<R extends { studioId: string; clientId: string | null }>(actor: Actor, row: R | undefined): asserts row is R {
-  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such layout.');
-  if (!canEditLayouts(actor) && row.clientId !== actor.userId) throw new NotFoundError('No such layout.');
+  if (!row || !mayReadLayout(actor, row)) throw new NotFoundError('No such layout.');
 }
 
 /** The stored row if the actor may read it; NotFoundError otherwise. */
@@ -161,7 +172,7 @@ async function readable(actor: Actor, id: string): Promise<Row> {
   const db = await getDb();
   const [row] = await prepared(db, 'layout_by_id', layoutByIdQuery).execute({ id });
   assertVisible(actor, row);
-  return row;
+  return { ...row, doc: readStoredDoc(row.doc) };
 }
 
 export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {
@@ -170,7 +181,7 @@ export async function getLayout(actor: Actor, id: string): Promise<LayoutDto> {
 
 /** A stored document as JSON text, with the figures a summary draws from it. */
 interface CachedDoc extends DocFacts {
-  json: string;
+  json: JsonText;
 }
 
 /**
@@ -185,7 +196,7 @@ function docKey(row: MetaRow): string {
 }
 
 function cacheDoc(row: Row): CachedDoc {
-  const cached = { ...docFacts(row.doc), json: JSON.stringify(row.doc) };
+  const cached = { ...docFacts(row.doc), json: jsonText(row.doc) };
   docCache.set(docKey(row), cached);
   return cached;
 }
@@ -211,8 +222,7 @@ export async function getLayoutJson(actor: Actor, id: string): Promise<{ version
     doc = cacheDoc(full);
     row = full;
   }
-  const head = JSON.stringify(withoutDoc(row, doc, actor));
-  return { version: row.version, json: `${head.slice(0, -1)},"doc":${doc.json}}` };
+  return { version: row.version, json: withJsonField(withoutDoc(row, doc, actor), 'doc', doc.json) };
 }
 
 /** For tests. */
@@ -310,9 +320,56 @@ export async function saveLayout(actor: Actor, layout: EditableLayout, baseVersi
   return { id: saved.id, name: saved.name, version: saved.version, updatedAt: saved.updatedAt.toISOString() };
 }
 
+/** Said when a layout that holds money records is to be deleted. */
+export const KEEPS_PAYMENTS_MESSAGE =
+  'This layout has a quote with a deposit payment, so it cannot be deleted: payment records are kept. Archive it instead; it leaves the list but stays readable.';
+
+/**
+ * Whether any quote of the layout has a payment (open, paid) or was paid. Such a layout is never
+ * deleted; `payments.quote_id` refuses it in the database too, so a payment opened between this
+ * check and the delete still stops it.
+ */
+async function holdsPayments(db: Db, layoutId: string): Promise<boolean> {
+  const [hit] = await db
+    .select({ id: quotes.id })
+    .from(quotes)
+    .leftJoin(payments, eq(payments.quoteId, quotes.id))
+    .where(and(eq(quotes.layoutId, layoutId), or(isNotNull(payments.id), eq(quotes.status, 'paid'))))
+    .limit(1);
+  return Boolean(hit);
+}
+
+function isForeignKeyViolation(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown } | undefined, depth = 0; e && depth < 4; e = e.cause as typeof e, depth++) {
+    if (e.code === '23503') return true;
+  }
+  return false;
+}
+
 export async function deleteLayout(actor: Actor, id: string): Promise<void> {
   await readable(actor, id);
   if (!canEditLayouts(actor)) throw new ForbiddenError('Clients cannot delete layouts.');
   const db = await getDb();
-  await db.delete(layouts).where(eq(layouts.id, id));
+  if (await holdsPayments(db, id)) throw new ConflictError(KEEPS_PAYMENTS_MESSAGE);
+  try {
+    await db.delete(layouts).where(and(eq(layouts.id, id), eq(layouts.studioId, actor.studioId)));
+  } catch (err) {
+    if (isForeignKeyViolation(err)) throw new ConflictError(KEEPS_PAYMENTS_MESSAGE);
+    throw err;
+  }
+}
+
+/**
+ * Archives (or, with `archived: false`, restores) a layout. Nothing else changes: not the
+ * document, its version, revisions, quotes, payments or approvals, so links and caches stay valid.
+ */
+export async function setLayoutArchived(actor: Actor, id: string, archived: boolean): Promise<LayoutSummaryDto> {
+  await readable(actor, id);
+  if (!canEditLayouts(actor)) throw new ForbiddenError(archived ? 'Clients cannot archive layouts.' : 'Clients cannot restore layouts.');
+  const db = await getDb();
+  await db
+    .update(layouts)
+    .set({ archivedAt: archived ? sql`coalesce(${layouts.archivedAt}, now())` : null })
+    .where(and(eq(layouts.id, id), eq(layouts.studioId, actor.studioId)));
+  return toSummary(await readable(actor, id));
 }

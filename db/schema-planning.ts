@@ -74,7 +74,9 @@ export const payments = pgTable(
   'payments',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    quoteId: uuid('quote_id').notNull().references((): AnyPgColumn => quotes.id, { onDelete: 'cascade' }),
+    // Money is never deleted with its layout: a quote with a payment row cannot go (checked at the
+    // end of the statement, so removing a whole studio, which takes the payment too, still works).
+    quoteId: uuid('quote_id').notNull().references((): AnyPgColumn => quotes.id, { onDelete: 'no action' }),
     studioId: uuid('studio_id').notNull().references((): AnyPgColumn => studios.id, { onDelete: 'cascade' }),
     /** The payment API's Checkout Session id (cs_…). */
     checkoutSessionId: text('checkout_session_id').notNull(),

@@ -59,6 +59,11 @@ export const layouts = pgTable(
     updatedBy: uuid('updated_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    /**
+     * Set when the layout was archived: it leaves the studio's default list but keeps everything
+     * (revisions, quotes, payments, approvals). A layout with a payment can only be archived, never deleted.
+     */
+    archivedAt: timestamp('archived_at', { withTimezone: true }),
   },
   (t) => [index('layouts_studio').on(t.studioId), index('layouts_client').on(t.clientId)],
 );

@@ -8,16 +8,18 @@
  * read the layout, and are never part of the LayoutDoc a viewer link shows.
  */
 import 'server-only';
+import { log } from '../lib/log';
 import fs from 'node:fs';
-import { and, count, desc, eq, inArray } from 'drizzle-orm';
+import { and, count, desc, eq, inArray, sum } from 'drizzle-orm';
 import { getDb } from './client';
 import { layouts, uploads, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
-import { canEditLayouts, type Actor } from './actor';
+import { canEditLayouts, mayReadLayout, type Actor } from './actor';
 import { getLayout } from './layouts';
 import { cleanFileName, withExtension } from '../lib/uploads/file-name';
 import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
-import { listStored, readStored, removeStored, storedExists, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
+import { listStored, readStored, removeStored, storedExists, storedPath, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
+import { checkImageDimensions, quotaMessage, StorageQuotaError, studioQuotaBytes } from '../lib/uploads/limits';
 import type { TracingPlacement } from '../lib/tracing/calibration';
 import type { UploadDto } from '../lib/uploads/dto';
 
@@ -82,8 +84,7 @@ async function readable(actor: Actor, uploadId: string): Promise<Row> {
     .leftJoin(users, eq(users.id, uploads.uploadedBy))
     .where(eq(uploads.id, uploadId))
     .limit(1);
-  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such file.');
-  if (!canEditLayouts(actor) && row.layoutClientId !== actor.userId) throw new NotFoundError('No such file.');
+  if (!row || !mayReadLayout(actor, { studioId: row.studioId, clientId: row.layoutClientId })) throw new NotFoundError('No such file.');
   return row;
 }
 
@@ -122,9 +123,17 @@ export async function addUpload(actor: Actor, layoutId: string, file: IncomingFi
   const [{ n }] = await db.select({ n: count() }).from(uploads).where(eq(uploads.layoutId, layoutId));
   if (n >= MAX_UPLOADS_PER_LAYOUT) throw new ConflictError(`This layout already has ${MAX_UPLOADS_PER_LAYOUT} reference files; delete one first.`);
 
+  // The studio's storage allowance: refused before reading the body when the declared size already passes it.
+  const quota = studioQuotaBytes();
+  const [{ used }] = await db.select({ used: sum(uploads.sizeBytes) }).from(uploads).where(eq(uploads.studioId, actor.studioId));
+  const usedBytes = Number(used ?? 0);
+  if (usedBytes + (file.declaredLength ?? 0) > quota) throw new StorageQuotaError(quotaMessage(quota));
+
   const cleaned = cleanFileName(file.fileName);
   const stored = await storeUpload(file.body, { contentType: file.contentType, fileName: cleaned, declaredLength: file.declaredLength }, limit);
   try {
+    if (usedBytes + stored.sizeBytes > quota) throw new StorageQuotaError(quotaMessage(quota));
+    if (isImage(stored.contentType)) checkImageDimensions(storedPath(stored.storedName));
     const [row] = await db
       .insert(uploads)
       .values({
@@ -157,7 +166,7 @@ export async function deleteUpload(actor: Actor, uploadId: string): Promise<void
   requireEditor(actor, 'delete files');
   const db = await getDb();
   await db.delete(uploads).where(eq(uploads.id, row.id));
-  await removeStored(row.storedName).catch((err) => console.error('[baywright] could not remove a stored upload', err));
+  await removeStored(row.storedName).catch((err) => log.error('could not remove a stored upload', { error: err }));
 }
 
 /** Rights for placing an image, checked before the request body is read (404 / 403). */

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import type { ReactNode } from 'react';
+import { AppProviders } from '@/components/ui/AppProviders';
 
 /**
  * Everything under /v is a viewer link: never indexed, never followed, and no referrer leaves
@@ -11,5 +12,6 @@ export const metadata: Metadata = {
 };
 
 export default function ViewerLayout({ children }: { children: ReactNode }) {
-  return children;
+  // The viewer reads the layout and its checks through the query cache; the drawing may toast.
+  return <AppProviders>{children}</AppProviders>;
 }

@@ -2,12 +2,12 @@
 // The "choose a password" pair of fields with the length rule the server also applies (the
 // server adds the common-password list and says so under the field).
 import type { FieldErrors, UseFormRegister } from 'react-hook-form';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { passwordLengthSchema, PASSWORD_MIN } from '@/lib/auth/password-rules';
 
 export const newPasswordPair = z
   .object({ password: passwordLengthSchema, repeat: z.string() })
-  .refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] });
+  .check(z.refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] }));
 
 type Pair = { password: string; repeat: string };
 

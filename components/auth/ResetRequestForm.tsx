@@ -6,10 +6,10 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 
-const schema = z.object({ email: z.email('enter your e-mail address').max(254) });
+const schema = z.object({ email: z.email('enter your e-mail address').check(z.maxLength(254)) });
 type Values = z.infer<typeof schema>;
 
 export function ResetRequestForm({ email }: { email?: string }) {

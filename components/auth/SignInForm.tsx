@@ -2,7 +2,7 @@
 // E-mail + password sign-in through Auth.js's credentials endpoint, with the reasons it can fail.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
@@ -11,7 +11,7 @@ import { safeCallbackPath } from '@/lib/auth/callback-url';
 
 const schema = z.object({
   email: z.email('enter your e-mail address'),
-  password: z.string().min(1, 'enter your password'),
+  password: z.string().check(z.minLength(1, 'enter your password')),
 });
 type Values = z.infer<typeof schema>;
 

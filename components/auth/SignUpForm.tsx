@@ -2,16 +2,16 @@
 // Sign-up: a user and a studio of their own; signs in straight after.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 
 const schema = z.object({
-  name: z.string().trim().min(1, 'tell us your name').max(80),
+  name: z.string().check(z.trim(), z.minLength(1, 'tell us your name'), z.maxLength(80)),
   email: z.email('enter a valid e-mail address'),
-  password: z.string().min(12, 'use at least 12 characters').max(72, 'use at most 72 characters'),
-  studioName: z.string().trim().max(80).optional(),
+  password: z.string().check(z.minLength(12, 'use at least 12 characters'), z.maxLength(72, 'use at most 72 characters')),
+  studioName: z.optional(z.string().check(z.trim(), z.maxLength(80))),
 });
 type Values = z.infer<typeof schema>;
 

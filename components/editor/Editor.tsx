@@ -15,9 +15,9 @@ import { PlanStage } from './canvas/PlanStage';
 import { PartsShelf } from './panels/PartsShelf';
 import { DetailsPanel } from './panels/DetailsPanel';
 import { ChecksPanel } from './panels/ChecksPanel';
+import { foldWaiting, statusCounts } from '@/lib/checks/words';
 import { Toolbar } from './panels/Toolbar';
 import { Tabs } from './panels/Tabs';
-import { ContextMenu } from './panels/ContextMenu';
 import { ShortcutSheet } from './panels/ShortcutSheet';
 import { ConflictDialog } from './panels/ConflictDialog';
 import { SelectionAnnouncer } from './panels/SelectionAnnouncer';
@@ -29,6 +29,8 @@ import { countByStatus, failingModuleIds } from './panels/findingGroups';
 // Behind tabs: loaded when first opened, so the editor's first load stays small.
 const BayPanel = lazy(() => import('./panels/BayPanel').then((m) => ({ default: m.BayPanel })));
 const SectionView = lazy(() => import('./section/SectionView').then((m) => ({ default: m.SectionView })));
+// Opened by a right-click or the menu key: loaded then.
+const ContextMenu = lazy(() => import('./panels/ContextMenu').then((m) => ({ default: m.ContextMenu })));
 const loading = <p className="p-4 text-sm text-ink-soft">Loading…</p>;
 
 export default function Editor(props: EditorProps) {
@@ -57,7 +59,8 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
 
   const findings = useMemo(() => checks.report?.findings ?? [], [checks.report]);
   const failing = useMemo(() => failingModuleIds(findings, arrangement), [findings, arrangement]);
-  const counts = countByStatus(findings);
+  const folded = useMemo(() => foldWaiting(findings), [findings]);
+  const counts = countByStatus(folded.judged);
   const openMenu = useCallback((x: number, y: number) => setMenu({ x, y }), []);
   const closeMenu = useCallback(() => setMenu(null), []);
   const focusPlan = useCallback(() => planBox.current?.querySelector<HTMLElement>('[data-testid="plan"]')?.focus(), []);
@@ -83,18 +86,18 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
         <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">
           <div ref={planBox} className="relative min-h-0 flex-1">
             <PlanStage failing={failing} onContextMenu={openMenu} describedBy="selection-announcer" overlay={extensions?.planOverlay} underlay={extensions?.planUnderlay} />
-            {menu && <ContextMenu at={menu} onClose={closeMenu} />}
+            {menu && <Suspense fallback={null}><ContextMenu at={menu} onClose={closeMenu} /></Suspense>}
           </div>
           <Tabs
             className="h-64 shrink-0 border-t border-paper-edge"
             active={bottom}
             onChange={setBottom}
             tabs={[
-              { id: 'checks', title: checks.report ? `Checks: ${counts.fail} fail, ${counts.warn} warn, ${counts.pass} pass` : 'Checks', label: checksTab },
+              { id: 'checks', title: checks.report ? `Checks: ${statusCounts(counts, folded.waiting)}` : 'Checks', label: checksTab },
               { id: 'section', title: 'Side section', label: 'Side section' },
             ]}
           >
-            {bottom === 'checks' ? <ChecksPanel checks={checks} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
+            {bottom === 'checks' ? <ChecksPanel checks={checks} layoutId={canEdit ? layoutId : undefined} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
           </Tabs>
         </main>
         <aside className="flex w-80 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Details and bay">

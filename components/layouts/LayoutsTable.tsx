@@ -1,5 +1,5 @@
 'use client';
-// The studio's layouts: sortable, filterable, fetched in the browser.
+// The studio's layouts: sortable, filterable, fetched in the browser; a switch shows the archived ones.
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
@@ -10,12 +10,17 @@ import { ArrowDown, ArrowUp, Hexagon, Plus, Search } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { LayoutSummaryDto } from '@/db/layouts';
 import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
+import { formatDateTime } from '@/lib/format';
+import { LayoutRowActions } from './LayoutRowActions';
 
 const col = createColumnHelper<LayoutSummaryDto>();
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
-  const query = useQuery({ queryKey: ['layouts'], queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>('/api/layouts') });
+  const [showArchived, setShowArchived] = useState(false);
+  const query = useQuery({
+    queryKey: ['layouts', { archived: showArchived }],
+    queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>(showArchived ? '/api/layouts?archived=1' : '/api/layouts'),
+  });
   const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
   const [filter, setFilter] = useState('');
 
@@ -53,11 +58,17 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
       col.accessor('updatedAt', {
         header: 'Last change',
         cell: (c) => (
-          <span className="text-ink-soft">{when.format(new Date(c.getValue()))}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
+          <span className="text-ink-soft">{formatDateTime(c.getValue())}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
         ),
       }),
+      col.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        enableSorting: false,
+        cell: (c) => <LayoutRowActions layout={c.row.original} canEdit={canCreate} />,
+      }),
     ],
-    [],
+    [canCreate],
   );
 
   const table = useReactTable({
@@ -79,6 +90,10 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
           <Search size={14} className="absolute left-2 top-2.5 text-ink-faint" aria-hidden="true" />
           <input className="field pl-7" placeholder="Filter by name, client or bay…" value={filter} onChange={(e) => setFilter(e.target.value)} />
         </label>
+        <label className="inline-flex items-center gap-2 text-sm text-ink-soft">
+          <input type="checkbox" role="switch" aria-checked={showArchived} checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
+          Show archived
+        </label>
         {canCreate && (
           <Link href="/layouts/new" className="btn-primary ml-auto"><Plus size={14} aria-hidden="true" /> New layout</Link>
         )}
@@ -89,6 +104,11 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
         <div className="panel border-brick p-6 text-sm" role="alert">
           Could not load the layouts: {query.error.message}{' '}
           <button className="text-copper underline" onClick={() => query.refetch()}>Try again</button>
+        </div>
+      ) : query.data.layouts.length === 0 && showArchived ? (
+        <div className="panel p-10 text-center">
+          <p className="font-medium">No archived layouts</p>
+          <p className="mt-1 text-sm text-ink-soft">Archived layouts leave the list but keep their revisions, quotes and payments; they show here.</p>
         </div>
       ) : query.data.layouts.length === 0 ? (
         <div className="panel p-10 text-center">

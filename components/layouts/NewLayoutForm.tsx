@@ -3,15 +3,21 @@
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
-import { BAY_LIMITS } from '@/lib/layout/schema';
-import { BAY_TEMPLATES } from '@/lib/layout/templates';
+import { BAY_LIMITS } from '@/lib/layout/vocabulary';
 import { LENGTH_UNITS, parseLength, type LengthUnit } from '@/lib/layout/units';
 import type { MemberDto } from '@/db/studios';
 import type { LayoutDto } from '@/db/layouts';
+
+/** A bay template as the picker shows it; the page passes them from `lib/layout/templates` (server side, so the schema that validates them stays off the client). */
+export interface BayTemplateChoice {
+  id: string;
+  name: string;
+  bay: { length: number; width: number; height: number };
+}
 
 const STARTERS = [
   { id: 'starter-l-lounge', name: 'L-shaped lounge that makes up into a king bed (L2H2)' },
@@ -19,11 +25,11 @@ const STARTERS = [
 ];
 
 const length = (what: string) =>
-  z.string().trim().refine((s) => s === '' || parseLength(s) !== null, `type the ${what} as a number, e.g. 3100, 310 cm or 122 in`);
+  z.string().check(z.trim(), z.refine((s) => s === '' || parseLength(s) !== null, `type the ${what} as a number, e.g. 3100, 310 cm or 122 in`));
 
 const schema = z
   .object({
-    name: z.string().trim().min(1, 'give the layout a name').max(120),
+    name: z.string().check(z.trim(), z.minLength(1, 'give the layout a name'), z.maxLength(120)),
     clientId: z.string(),
     start: z.enum(['template', 'starter', 'custom']),
     bayTemplateId: z.string(),
@@ -33,17 +39,17 @@ const schema = z
     width: length('width'),
     height: length('height'),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     if (v.start !== 'custom') return;
     for (const key of ['length', 'width', 'height'] as const) {
       const mm = parseLength(v[key], v.unit as LengthUnit);
       if (mm === null) ctx.addIssue({ code: 'custom', path: [key], message: `enter the bay ${key}` });
       else if (mm < BAY_LIMITS[key].min || mm > BAY_LIMITS[key].max) ctx.addIssue({ code: 'custom', path: [key], message: `between ${BAY_LIMITS[key].min} mm and ${BAY_LIMITS[key].max / 1000} m` });
     }
-  });
+  }));
 type Values = z.infer<typeof schema>;
 
-export function NewLayoutForm() {
+export function NewLayoutForm({ templates }: { templates: BayTemplateChoice[] }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const members = useQuery({ queryKey: ['members'], queryFn: () => apiFetch<{ members: MemberDto[] }>('/api/studio/members') });
@@ -110,7 +116,7 @@ export function NewLayoutForm() {
         <div>
           <label className="label" htmlFor="bayTemplateId">Bay size class</label>
           <select id="bayTemplateId" className="field" {...register('bayTemplateId')}>
-            {BAY_TEMPLATES.map((t) => (
+            {templates.map((t) => (
               <option key={t.id} value={t.id}>{t.name} — {t.bay.length} × {t.bay.width} × {t.bay.height} mm</option>
             ))}
           </select>

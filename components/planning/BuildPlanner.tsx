@@ -5,26 +5,35 @@
  * parts list, the cut list and the quote. It keeps the draft document and the saved one, runs
  * the system checks on the draft as it changes, and saves the draft's systems with the layout
  * version (If-Match); when someone saved first it says so and offers to put these entries on
- * their version or to load theirs. Never touches modules or the bay: those are the editor's.
+ * their version or to open the saved version. Never touches modules or the bay: those are the editor's.
  */
 import { useCallback, useEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from 'react';
+import dynamic from 'next/dynamic';
 import { CircleAlert, CircleX, Save } from 'lucide-react';
 import { toast } from 'sonner';
 import type { LayoutDoc, LengthUnit } from '@/lib/layout';
 import { systemChecks } from '@/lib/checks/systems';
 import type { Finding } from '@/lib/checks/types';
-import { WeightPanel } from './weight/WeightPanel';
-import { PowerPanel } from './power/PowerPanel';
-import { WaterPanel } from './water/WaterPanel';
-import { GasPanel } from './gas/GasPanel';
-import { HeatPanel } from './heat/HeatPanel';
-import { PartsListPanel } from './parts/PartsListPanel';
-import { CutListPanel, type CutOptions } from './cut/CutListPanel';
-import { QuotePanel } from './quote/QuotePanel';
+import type { CutOptions } from './cut/CutListPanel';
 import { PlanTabs } from './PlanTabs';
 import { saveLayoutDoc, stableJson, withSystems, type SaveOutcome } from './saveLayout';
 import type { PanelProps } from './panelProps';
 import { BUILD_TABS, type BuildTab } from './buildTabs';
+import { ShowTabContext } from './FindingList';
+import { foldWaiting, statusCounts } from '@/lib/checks/words';
+import { fieldName } from '@/lib/layout/field-names';
+
+// Each tab's panel is its own chunk, fetched when the tab is first opened (the page's own tab
+// comes with the page). A visited form stays mounted, hidden, so half-typed fields survive.
+const loadingTab = () => <p className="text-sm text-ink-soft" role="status">Loading…</p>;
+const WeightPanel = dynamic(() => import('./weight/WeightPanel').then((m) => m.WeightPanel), { loading: loadingTab });
+const PowerPanel = dynamic(() => import('./power/PowerPanel').then((m) => m.PowerPanel), { loading: loadingTab });
+const WaterPanel = dynamic(() => import('./water/WaterPanel').then((m) => m.WaterPanel), { loading: loadingTab });
+const GasPanel = dynamic(() => import('./gas/GasPanel').then((m) => m.GasPanel), { loading: loadingTab });
+const HeatPanel = dynamic(() => import('./heat/HeatPanel').then((m) => m.HeatPanel), { loading: loadingTab });
+const PartsListPanel = dynamic(() => import('./parts/PartsListPanel').then((m) => m.PartsListPanel), { loading: loadingTab });
+const CutListPanel = dynamic(() => import('./cut/CutListPanel').then((m) => m.CutListPanel), { loading: loadingTab });
+const QuotePanel = dynamic(() => import('./quote/QuotePanel').then((m) => m.QuotePanel), { loading: loadingTab });
 
 
 const TOPIC: Record<BuildTab, { title: string; prefix?: string }> = {
@@ -53,7 +62,7 @@ type Conflict = Extract<SaveOutcome, { kind: 'conflict' }>['theirs'];
 const noSubscription = () => () => undefined;
 
 function counts(findings: Finding[], prefix: string) {
-  const mine = findings.filter((f) => f.id.startsWith(prefix));
+  const mine = foldWaiting(findings.filter((f) => f.id.startsWith(prefix))).judged;
   return { fail: mine.filter((f) => f.status === 'fail').length, warn: mine.filter((f) => f.status === 'warn').length };
 }
 
@@ -63,6 +72,11 @@ export function BuildPlanner(props: BuildPlannerProps) {
   const [draft, setDraft] = useState(props.initialDoc);
   const [formKey, setFormKey] = useState(0);
   const [tab, setTab] = useState<BuildTab>(props.initialTab ?? 'weight');
+  const [visited, setVisited] = useState<ReadonlySet<BuildTab>>(() => new Set([props.initialTab ?? 'weight']));
+  const openTab = (t: BuildTab) => {
+    setTab(t);
+    setVisited((v) => (v.has(t) ? v : new Set(v).add(t)));
+  };
   const [invalid, setInvalid] = useState<Set<string>>(new Set());
   const [saving, setSaving] = useState(false);
   const [conflict, setConflict] = useState<Conflict | null>(null);
@@ -137,7 +151,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
     const c = TOPIC[t].prefix ? counts(findings, TOPIC[t].prefix!) : null;
     return {
       id: t,
-      title: `${TOPIC[t].title}${c ? `: ${c.fail} failing, ${c.warn} to look at` : ''}${invalid.has(t) ? ', has a field to correct' : ''}`,
+      title: `${TOPIC[t].title}${c ? `: ${statusCounts({ ...c, pass: 0 })}` : ''}${invalid.has(t) ? ', has a field to correct' : ''}`,
       label: (
         <span className="flex items-center gap-1.5">
           {TOPIC[t].title}
@@ -168,20 +182,21 @@ export function BuildPlanner(props: BuildPlannerProps) {
           <p className="mt-1">Your build-plan entries are still here. Their drawing may have changed modules, so check the results after either choice.</p>
           <div className="mt-2 flex flex-wrap gap-2">
             <button type="button" className="btn-primary" onClick={keepMineOnTheirs}>Put my build plan on their version and save</button>
-            <button type="button" className="btn-quiet" onClick={loadTheirs}>Discard my entries and load theirs</button>
+            <button type="button" className="btn-quiet" onClick={loadTheirs}>Discard my entries and open the saved version</button>
           </div>
         </div>
       )}
       {refused && (
         <div role="alert" className="rounded-sm border border-brick bg-brick-light p-3 text-sm">
           <p className="font-semibold">{refused.message}</p>
-          <ul className="mt-1 list-disc pl-5 font-mono text-xs">{refused.issues.map((i, n) => <li key={n}>{i.path}: {i.message}</li>)}</ul>
+          <ul className="mt-1 list-disc pl-5 text-xs">{refused.issues.map((i, n) => <li key={n}>{fieldName(i.path)}: {i.message}</li>)}</ul>
         </div>
       )}
-      <PlanTabs tabs={tabs} active={tab} onChange={(t) => setTab(t as BuildTab)}>
+      <ShowTabContext.Provider value={openTab}>
+      <PlanTabs tabs={tabs} active={tab} onChange={(t) => openTab(t as BuildTab)}>
         <div className="p-4" key={formKey}>
           {/* Forms stay mounted (hidden) so a half-typed field survives a tab change. */}
-          {(['weight', 'power', 'water', 'gas', 'heat'] as const).map((t) => (
+          {(['weight', 'power', 'water', 'gas', 'heat'] as const).filter((t) => visited.has(t)).map((t) => (
             <div key={t} hidden={tab !== t}>{panels[t]}</div>
           ))}
           {tab === 'parts' && canEdit && <PartsListPanel layoutId={layoutId} doc={draft} cut={cut} dirty={dirty} />}
@@ -191,6 +206,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
             : <p className="text-sm">Your workshop&apos;s quote for this layout is on <a className="text-copper underline" href={`/layouts/${layoutId}/quote`}>the quote page</a>.</p>)}
         </div>
       </PlanTabs>
+      </ShowTabContext.Provider>
     </div>
   );
 }

@@ -5,6 +5,7 @@
  * (payload wanted) pass `atLeast`. Draws what it is given; judges nothing beyond the comparison.
  */
 import { CircleCheck, CircleX, CircleHelp } from 'lucide-react';
+import { formatNumber } from '@/lib/format';
 
 export function LimitBar({ label, value, limit, unit, atLeast = false, testId }: {
   label: string;
@@ -17,7 +18,7 @@ export function LimitBar({ label, value, limit, unit, atLeast = false, testId }:
   const known = value !== null && limit !== null && limit > 0;
   const ok = known && (atLeast ? value >= limit : value <= limit);
   const share = known ? Math.max(0, Math.min(1.25, value / limit)) : 0;
-  const fmt = (n: number) => Math.round(n).toLocaleString('en-GB');
+  const fmt = (n: number) => formatNumber(n);
   return (
     <div data-testid={testId} data-ok={known ? String(ok) : 'unknown'}>
       <div className="flex items-baseline justify-between gap-2 text-sm">

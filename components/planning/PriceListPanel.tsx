@@ -8,7 +8,7 @@
 import { useMemo } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch } from '@/lib/api/client-fetch';
@@ -21,39 +21,39 @@ import { usePriceList } from './usePriceList';
 
 const CATEGORY_TITLE: Record<PriceKeyInfo['category'], string> = { module: 'Modules', sheet: 'Sheet goods', cable: 'Cable', electrics: 'Electrics', safety: 'Safety' };
 
-const money = (required: boolean) => z.string().transform((s, ctx) => {
+const money = (required: boolean) => z.pipe(z.string(), z.transform((s: string, ctx) => {
   if (s.trim() === '') {
-    if (required) ctx.addIssue({ code: 'custom', message: 'required' });
+    if (required) ctx.issues.push({ code: 'custom', input: s, message: 'required' });
     return undefined;
   }
   const v = parseMoneyMinor(s);
   if (v === null) {
-    ctx.addIssue({ code: 'custom', message: 'an amount, e.g. 12.50' });
+    ctx.issues.push({ code: 'custom', input: s, message: 'an amount, e.g. 12.50' });
     return z.NEVER;
   }
   return v;
-});
-const hours = z.string().transform((s, ctx) => {
+}));
+const hours = z.pipe(z.string(), z.transform((s: string, ctx) => {
   if (s.trim() === '') return undefined;
   const v = parseWithUnit(s, ['h']);
   if (v === null || v < 0 || v > 1000) {
-    ctx.addIssue({ code: 'custom', message: 'hours, 0 to 1000' });
+    ctx.issues.push({ code: 'custom', input: s, message: 'hours, 0 to 1000' });
     return z.NEVER;
   }
   return v;
-});
+}));
 
 const schema = z.object({
-  currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'a three-letter code, e.g. GBP'),
+  currency: z.string().check(z.trim(), z.toUpperCase(), z.regex(/^[A-Z]{3}$/, 'a three-letter code, e.g. GBP')),
   labourRate: money(true),
-  vatPct: z.string().transform((s, ctx) => {
+  vatPct: z.pipe(z.string(), z.transform((s: string, ctx) => {
     const v = parseWithUnit(s, ['%']);
     if (v === null || v < 0 || v > 100) {
-      ctx.addIssue({ code: 'custom', message: '0 to 100 %' });
+      ctx.issues.push({ code: 'custom', input: s, message: '0 to 100 %' });
       return z.NEVER;
     }
     return v;
-  }),
+  })),
   rows: z.array(z.object({ key: z.string(), price: money(false), hours })),
 });
 type Input = z.input<typeof schema>;

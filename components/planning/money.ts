@@ -3,14 +3,7 @@
  * currency sign, typed as `12.50`, `£12.50` or `12,50`. Pure TypeScript. Must never turn text
  * that is not an amount into zero.
  */
-export function formatMoney(minor: number | null | undefined, currency: string): string {
-  if (minor === null || minor === undefined) return '—';
-  try {
-    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
-  } catch {
-    return `${(minor / 100).toFixed(2)} ${currency}`;
-  }
-}
+export { formatMoney } from '@/lib/format';
 
 /** Minor units from `12.50`, `£12.50`, `€ 12,50`, `1,250.00`; null when it is not an amount. */
 export function parseMoneyMinor(text: string): number | null {

@@ -8,7 +8,7 @@
  * Pure TypeScript (no React): the forms and the tests use it alike. Must never round a value
  * the schema keeps exact, and never accept a number without telling which unit it was read in.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 /** 1 lb = 0.45359237 kg exactly (international yard and pound agreement, 1959). */
@@ -71,22 +71,22 @@ interface Range {
 
 function quantity(read: (s: string) => number | null, example: string, unitWord: string, range: Range) {
   return (required: boolean) =>
-    z.string().transform((raw, ctx): number | undefined => {
+    z.pipe(z.string(), z.transform((raw: string, ctx): number | undefined => {
       const s = raw.trim();
       if (s === '') {
-        if (required) ctx.addIssue({ code: 'custom', message: 'required' });
+        if (required) ctx.issues.push({ code: 'custom', input: raw, message: 'required' });
         return undefined;
       }
       const v = read(s);
       if (v === null) {
-        ctx.addIssue({ code: 'custom', message: `type ${example}` });
+        ctx.issues.push({ code: 'custom', input: raw, message: `type ${example}` });
         return z.NEVER;
       }
       const n = range.int ? Math.round(v) : v;
-      if (range.min !== undefined && n < range.min) ctx.addIssue({ code: 'custom', message: `at least ${range.min} ${unitWord}` });
-      if (range.max !== undefined && n > range.max) ctx.addIssue({ code: 'custom', message: `at most ${range.max} ${unitWord}` });
+      if (range.min !== undefined && n < range.min) ctx.issues.push({ code: 'custom', input: raw, message: `at least ${range.min} ${unitWord}` });
+      if (range.max !== undefined && n > range.max) ctx.issues.push({ code: 'custom', input: raw, message: `at most ${range.max} ${unitWord}` });
       return n;
-    });
+    }));
 }
 
 /** Optional and required field builders; each returns a zod schema from form text to a number. */
@@ -105,7 +105,7 @@ export function compact<T extends Record<string, unknown>>(o: T): Partial<T> | u
 }
 
 /** Tri-state answers (not answered / yes / no) for facts whose absence means "ask". */
-export const triState = z.enum(['', 'yes', 'no']).transform((v) => (v === '' ? undefined : v === 'yes'));
+export const triState = z.pipe(z.enum(['', 'yes', 'no']), z.transform((v: '' | 'yes' | 'no') => (v === '' ? undefined : v === 'yes')));
 export function triStateOf(v: boolean | undefined): '' | 'yes' | 'no' {
   return v === undefined ? '' : v ? 'yes' : 'no';
 }

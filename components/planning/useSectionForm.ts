@@ -9,10 +9,10 @@
 import { useEffect, useRef, useState } from 'react';
 import { useForm, type DefaultValues, type FieldValues } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 
 export function useSectionForm<I extends FieldValues, O>({ schema, defaults, onParsed, onValidity }: {
-  schema: z.ZodType<O, I>;
+  schema: z.ZodMiniType<O, I>;
   defaults: () => I;
   onParsed: (value: O) => void;
   onValidity: (ok: boolean) => void;

@@ -6,7 +6,7 @@
  */
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { toast } from 'sonner';
@@ -15,8 +15,8 @@ import { NewPasswordFields } from '@/components/auth/NewPasswordFields';
 import { passwordLengthSchema } from '@/lib/auth/password-rules';
 
 const schema = z
-  .object({ currentPassword: z.string().min(1, 'enter your current password'), password: passwordLengthSchema, repeat: z.string() })
-  .refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] });
+  .object({ currentPassword: z.string().check(z.minLength(1, 'enter your current password')), password: passwordLengthSchema, repeat: z.string() })
+  .check(z.refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] }));
 type Values = z.infer<typeof schema>;
 
 export function ChangePasswordPanel({ email }: { email: string }) {

@@ -4,7 +4,7 @@
 // shows anyone's password.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
@@ -14,7 +14,7 @@ import type { InvitationDto } from '@/db/sharing/invitations';
 const ROLE_WORD = { owner: 'Owner', designer: 'Designer', client: 'Client' } as const;
 
 const addSchema = z.object({
-  name: z.string().trim().min(1, 'give their name').max(80),
+  name: z.string().check(z.trim(), z.minLength(1, 'give their name'), z.maxLength(80)),
   email: z.email('enter a valid e-mail address'),
   role: z.enum(['designer', 'client']),
 });

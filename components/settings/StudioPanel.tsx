@@ -2,15 +2,15 @@
 // Studio-wide preferences: display units and the defaults the checks start from.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { StudioDto } from '@/db/studios';
 
-const optionalMm = z.string().trim().refine((s) => s === '' || (/^\d+$/.test(s) && Number(s) <= 2000), 'whole millimetres, up to 2000');
+const optionalMm = z.string().check(z.trim(), z.refine((s) => s === '' || (/^\d+$/.test(s) && Number(s) <= 2000), 'whole millimetres, up to 2000'));
 const schema = z.object({
-  name: z.string().trim().min(1, 'name the studio').max(80),
+  name: z.string().check(z.trim(), z.minLength(1, 'name the studio'), z.maxLength(80)),
   units: z.enum(['mm', 'cm', 'in']),
   walkwayMin: optionalMm,
   bedAllowance: optionalMm,

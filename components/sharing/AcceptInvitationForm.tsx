@@ -9,18 +9,18 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { passwordLengthSchema, PASSWORD_MIN } from '@/lib/auth/password-rules';
 
 const schema = z
   .object({
-    name: z.string().trim().min(1, 'tell us your name').max(80),
+    name: z.string().check(z.trim(), z.minLength(1, 'tell us your name'), z.maxLength(80)),
     password: passwordLengthSchema,
     repeat: z.string(),
   })
-  .refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] });
+  .check(z.refine((v) => v.password === v.repeat, { message: 'the two passwords differ', path: ['repeat'] }));
 type Values = z.infer<typeof schema>;
 
 export function AcceptInvitationForm({ token, email, name }: { token: string; email: string; name: string }) {

@@ -10,16 +10,16 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { ArrowDown, ArrowUp } from 'lucide-react';
 import type { ClientDto } from '@/db/sharing/clients';
 import { LayoutStateBadge } from './LayoutStateBadge';
+import { formatDate } from '@/lib/format';
 
 const col = createColumnHelper<ClientDto>();
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' });
 
 export function ClientsTable({ clients }: { clients: ClientDto[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'name', desc: false }]);
   const columns = useMemo(() => [
     col.accessor('name', { header: 'Client', cell: (c) => <span className="font-medium">{c.getValue()}</span> }),
     col.accessor('email', { header: 'E-mail', cell: (c) => <span className="text-ink-soft">{c.getValue()}</span> }),
-    col.accessor('joinedAt', { header: 'Joined', cell: (c) => <span className="text-ink-soft">{WHEN.format(new Date(c.getValue()))}</span> }),
+    col.accessor('joinedAt', { header: 'Joined', cell: (c) => <span className="text-ink-soft">{formatDate(c.getValue())}</span> }),
     col.accessor((r) => r.layouts.length, {
       id: 'layouts',
       header: 'Layouts',

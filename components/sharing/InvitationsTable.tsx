@@ -9,8 +9,8 @@ import { toast } from 'sonner';
 import { Ban, RefreshCw } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { InvitationDto } from '@/db/sharing/invitations';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const STATUS_WORD: Record<InvitationDto['status'], string> = { pending: 'Waiting', accepted: 'Joined', expired: 'Expired', revoked: 'Withdrawn' };
 
 export function InvitationsTable() {
@@ -41,8 +41,8 @@ export function InvitationsTable() {
                 <tr key={i.id} className="border-t border-paper-edge align-top" data-status={i.status}>
                   <td className="py-1.5">{i.name}{i.role === 'designer' ? <span className="ml-1 text-xs text-ink-soft">(designer)</span> : null}<span className="block text-xs text-ink-soft">{i.email}</span></td>
                   <td className="text-xs">{i.layout?.name ?? <span className="text-ink-faint">—</span>}</td>
-                  <td className="text-xs">{i.lastSentAt ? WHEN.format(new Date(i.lastSentAt)) : <span className="text-brick">not sent</span>}{i.invitedBy ? <span className="block text-ink-soft">by {i.invitedBy}</span> : null}</td>
-                  <td className="text-xs">{STATUS_WORD[i.status]}{i.status === 'pending' ? <span className="block text-ink-soft">until {WHEN.format(new Date(i.expiresAt))}</span> : null}</td>
+                  <td className="text-xs">{i.lastSentAt ? formatDateTime(i.lastSentAt) : <span className="text-brick">not sent</span>}{i.invitedBy ? <span className="block text-ink-soft">by {i.invitedBy}</span> : null}</td>
+                  <td className="text-xs">{STATUS_WORD[i.status]}{i.status === 'pending' ? <span className="block text-ink-soft">until {formatDateTime(i.expiresAt)}</span> : null}</td>
                   <td className="whitespace-nowrap text-right">
                     {(i.status === 'pending' || i.status === 'expired') && (
                       <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => resend.mutate(i.id)} disabled={resend.isPending}><RefreshCw size={12} aria-hidden="true" /> Send again</button>

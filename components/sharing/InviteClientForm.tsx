@@ -7,7 +7,7 @@
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { Send } from 'lucide-react';
@@ -15,8 +15,8 @@ import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import type { InvitationDto } from '@/db/sharing/invitations';
 
 const schema = z.object({
-  name: z.string().trim().min(1, 'give the client’s name').max(80),
-  email: z.email('enter a valid e-mail address').max(254),
+  name: z.string().check(z.trim(), z.minLength(1, 'give the client’s name'), z.maxLength(80)),
+  email: z.email('enter a valid e-mail address').check(z.maxLength(254)),
   layoutId: z.string(),
 });
 type Values = z.infer<typeof schema>;

@@ -7,6 +7,7 @@
  * Must never change the layout document: that is the editor's job.
  */
 import Link from 'next/link';
+import dynamic from 'next/dynamic';
 import { useCallback, useEffect, useMemo, useRef, useState, type ComponentType, type MouseEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Hexagon, History, Share2 } from 'lucide-react';
@@ -18,7 +19,9 @@ import type { Arrangement } from '@/lib/layout/schema';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { MarkupsPanel, type PendingMarkup } from './MarkupsPanel';
-import { SharePanel } from './SharePanel';
+
+// The Share dialog's contents load when it is first opened.
+const SharePanel = dynamic(() => import('./SharePanel').then((m) => m.SharePanel), { ssr: false, loading: () => <p className="text-sm text-ink-soft">Loading…</p> });
 import { BuildPlanLink } from '@/components/planning/BuildPlanLink';
 import { markupAt, planPointAt, type MarkupView } from './markupGeometry';
 import type { MarkupLayerProps } from './MarkupLayer';

@@ -9,7 +9,7 @@
  * Never listens for events itself, never fetches, never touches the editor's store.
  */
 import { useEffect } from 'react';
-import { Circle, Group, Layer, Line, Text } from 'react-konva';
+import { Circle, Group, Layer, Line, Text } from '../editor/canvas/konva';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { Viewport } from '@/components/editor/geometry/viewport';
 import { worldLayerProps } from '@/components/editor/canvas/worldTransform';

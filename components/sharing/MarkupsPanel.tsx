@@ -13,8 +13,8 @@ import { CheckCircle2, Hexagon, Pencil, RotateCcw, Trash2, X } from 'lucide-reac
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { CommentDto, ThreadDto } from '@/db/sharing/comments';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'travel', lounge: 'lounge', sleep: 'sleep' };
 const ROLE_WORD = { owner: 'workshop', designer: 'workshop', client: 'client' } as const;
 
@@ -160,7 +160,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
         <span className="min-w-0 flex-1">
           <span className="block whitespace-pre-wrap break-words">{thread.body}</span>
           <span className="mt-1 block text-xs text-ink-soft">
-            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {WHEN.format(new Date(thread.createdAt))}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
+            {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {formatDateTime(thread.createdAt)}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
             <span className="font-mono">x {thread.x} mm, y {thread.y} mm</span>
           </span>
           {thread.settled ? (
@@ -176,7 +176,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
           {thread.replies.map((r) => (
             <div key={r.id} className="border-l-2 border-paper-edge pl-2" data-testid="markup-reply">
               <p className="whitespace-pre-wrap break-words">{r.body}</p>
-              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {WHEN.format(new Date(r.createdAt))}{r.editedAt ? ' · edited' : ''}</p>
+              <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {formatDateTime(r.createdAt)}{r.editedAt ? ' · edited' : ''}</p>
               <OwnNoteControls layoutId={layoutId} note={r} onChanged={onChanged} onRemoved={onChanged} />
             </div>
           ))}

@@ -10,11 +10,13 @@
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useQuery } from '@tanstack/react-query';
-import { ArrowDownRight, ArrowUpRight, CircleCheck, CircleX, CircleAlert } from 'lucide-react';
+import { ArrowDownRight, ArrowUpRight } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
-import { ARRANGEMENTS, type Arrangement } from '@/lib/layout/schema';
+import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
+import type { Arrangement } from '@/lib/layout/schema';
 import { AS_LAST_SAVED, nextRevisionLetter } from '@/lib/layout/drawing-issue';
-import { bayChangeWords, moduleChangeWords, moduleName } from '@/lib/layout/revision-words';
+import { bayChangeWords, moduleChangeWords } from '@/lib/layout/revision-words';
+import { moduleLabel } from '@/lib/layout/kinds';
 import { findingTopic, TOPIC_CAUTION, type HazardTopic } from '@/lib/layout/cautions';
 import type { LengthUnit } from '@/lib/layout/units';
 import { formatLength } from '@/lib/layout/units';
@@ -22,20 +24,16 @@ import type { ComparisonDto } from '@/db/sharing/compare';
 import type { RevisionDto } from '@/db/sharing/revisions';
 import { CautionNote } from '@/components/ui/CautionNote';
 import { RevisionPlanSvg } from './RevisionPlanSvg';
+import { StatusInline } from '@/components/checks/FindingParts';
+import { ruleName } from '@/lib/checks/words';
 import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { RevisionTable } from './RevisionTable';
 
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
-const STATUS = {
-  pass: { word: 'pass', Icon: CircleCheck, className: 'text-moss' },
-  warn: { word: 'warn', Icon: CircleAlert, className: 'text-ochre' },
-  fail: { word: 'fail', Icon: CircleX, className: 'text-brick' },
-} as const;
 
 function Status({ s, side }: { s: 'pass' | 'warn' | 'fail' | null; side: 'before' | 'after' }) {
   if (!s) return <span className="text-ink-soft">{side === 'before' ? 'not raised' : 'no longer raised'}</span>;
-  const { word, Icon, className } = STATUS[s];
-  return <span className={`inline-flex items-center gap-1 ${className}`}><Icon size={12} aria-hidden="true" />{word}</span>;
+  return <StatusInline status={s} />;
 }
 
 interface Props {
@@ -115,16 +113,16 @@ function Comparison({ data, arrangement, markLetter, units, revisions, to }: { d
           ) : (
             <ul className="space-y-1.5">
               {diff.added.map((m) => (
-                <li key={`a-${m.id}`} className="flex gap-2">{mark}<span><strong>Added</strong> {moduleName(m)} <span className="font-mono text-xs text-ink-soft">{formatLength(m.length, units)} × {formatLength(m.width, units)} × {formatLength(m.height, units)}</span></span></li>
+                <li key={`a-${m.id}`} className="flex gap-2">{mark}<span><strong>Added</strong> {moduleLabel(m)} <span className="font-mono text-xs text-ink-soft">{formatLength(m.length, units)} × {formatLength(m.width, units)} × {formatLength(m.height, units)}</span></span></li>
               ))}
-              {diff.removed.map((m) => <li key={`r-${m.id}`} className="flex gap-2">{mark}<span><strong>Removed</strong> {moduleName(m)}</span></li>)}
+              {diff.removed.map((m) => <li key={`r-${m.id}`} className="flex gap-2">{mark}<span><strong>Removed</strong> {moduleLabel(m)}</span></li>)}
               {diff.changed.map((c) => {
                 const w = moduleChangeWords(c, units);
                 return (
                   <li key={`c-${c.id}`} className="flex gap-2">
                     {mark}
                     <span>
-                      <strong>{w.verb}</strong> {moduleName(c.after)}
+                      <strong>{w.verb}</strong> {moduleLabel(c.after)}
                       {w.lines.map((l) => <span key={l} className="block text-xs text-ink-soft">{l}</span>)}
                     </span>
                   </li>
@@ -149,7 +147,7 @@ function Comparison({ data, arrangement, markLetter, units, revisions, to }: { d
                 <li key={f.key} className="flex gap-2">
                   {f.direction === 'worse' ? <ArrowDownRight size={14} className="mt-0.5 text-brick" aria-label="worse" /> : <ArrowUpRight size={14} className="mt-0.5 text-moss" aria-label="better" />}
                   <span>
-                    <span className="font-mono text-xs">{f.id}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
+                    <span className="text-xs font-semibold">{ruleName(f.id)}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
                     <Status s={f.before} side="before" /> → <Status s={f.after} side="after" />
                     <span className="block text-xs text-ink-soft">{f.message}</span>
                   </span>

@@ -4,9 +4,8 @@
  * revision on show is marked with its delta triangle. Presentation only.
  */
 import type { RevisionDto } from '@/db/sharing/revisions';
+import { formatDate } from '@/lib/format';
 import { RevisionMarkIcon } from './RevisionMarkIcon';
-
-const DAY = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' });
 
 export function RevisionTable({ revisions, upTo, current }: { revisions: RevisionDto[]; upTo: string | null; current: string | null }) {
   const oldestFirst = [...revisions].sort((a, b) => a.issuedAt.localeCompare(b.issuedAt));
@@ -26,7 +25,7 @@ export function RevisionTable({ revisions, upTo, current }: { revisions: Revisio
                 <td className="py-1.5 font-mono">
                   {r.letter === current ? <span className="inline-flex items-center gap-1 text-copper"><RevisionMarkIcon letter={r.letter} size={18} /><span className="sr-only">{r.letter} (on show)</span></span> : r.letter}
                 </td>
-                <td className="py-1.5">{DAY.format(new Date(r.issuedAt))}</td>
+                <td className="py-1.5">{formatDate(r.issuedAt)}</td>
                 <td className="whitespace-pre-wrap py-1.5">{r.note || <span className="text-ink-soft">Issued for approval</span>}</td>
                 <td className="py-1.5">{r.issuedBy ?? '—'}</td>
               </tr>

@@ -19,8 +19,8 @@ import type { RevisionDto } from '@/db/sharing/revisions';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { LayoutStateBadge } from './LayoutStateBadge';
 import { SIGN_OFF_CAUTION } from '@/lib/layout/cautions';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 interface Props {
   layoutId: string;
@@ -46,7 +46,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
     mutationFn: () => apiFetch<{ revision: RevisionDto; mail: string }>(`/api/layouts/${layoutId}/revisions`, { method: 'POST', json: { note } }),
     onSuccess: ({ revision, mail }) => {
       setNote('');
-      toast.success(`Revision ${revision.letter} issued${mail === 'sent' ? ' and the client told by mail' : mail === 'no-recipient' ? ' (no client on this layout yet)' : ' — the mail could not be sent'}`);
+      toast.success(`Revision ${revision.letter} issued${mail === 'sent' ? ' and the client told by mail' : mail === 'no-recipient' ? ' (no client on this layout yet)' : mail === 'not-configured' ? ' — mail is not set up on this server, so tell the client yourself' : ' — the mail could not be sent'}`);
       changed();
     },
     onError: (err) => toast.error(err.message),
@@ -111,7 +111,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
             Revision {r.letter} <LayoutStateBadge state={r.state} />
             {!r.isLatest && <span className="text-xs font-normal text-ink-soft">superseded</span>}
           </h3>
-          <p className="text-xs text-ink-soft">Issued {WHEN.format(new Date(r.issuedAt))}{r.issuedBy ? ` by ${r.issuedBy}` : ''} · layout version <span className="font-mono">{r.layoutVersion}</span></p>
+          <p className="text-xs text-ink-soft">Issued {formatDateTime(r.issuedAt)}{r.issuedBy ? ` by ${r.issuedBy}` : ''} · layout version <span className="font-mono">{r.layoutVersion}</span></p>
           {r.note && <p className="mt-2 whitespace-pre-wrap text-sm">{r.note}</p>}
         </div>
         <div className="flex flex-wrap gap-2">
@@ -130,7 +130,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
             <li key={i} className="flex gap-2">
               {d.decision === 'approved' ? <CheckCircle2 size={16} className="mt-0.5 shrink-0 text-moss" aria-hidden="true" /> : <Undo2 size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />}
               <span>
-                <strong>{ISSUE_STATE_WORD[d.decision]}</strong> by {d.by}, {WHEN.format(new Date(d.at))}
+                <strong>{ISSUE_STATE_WORD[d.decision]}</strong> by {d.by}, {formatDateTime(d.at)}
                 {d.message && <span className="block whitespace-pre-wrap text-ink-soft">“{d.message}”</span>}
               </span>
             </li>

@@ -13,8 +13,8 @@ import { apiFetch } from '@/lib/api/client-fetch';
 import type { ViewerLinkDto } from '@/db/sharing/viewer-links';
 import type { RevisionDto } from '@/db/sharing/revisions';
 import { PRELIMINARY_WORD } from '@/lib/layout/drawing-issue';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const EXPIRY_CHOICES = [
   { days: null, word: 'Until withdrawn' },
   { days: 1, word: '1 day' },
@@ -114,15 +114,15 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
                 {links.data.links.map((l) => (
                   <tr key={l.id} className="border-t border-paper-edge align-top">
                     <td className="py-1.5">{l.kind === 'live' ? `${PRELIMINARY_WORD} (live)` : `Revision ${l.revision?.letter ?? '?'}`}{l.label ? <span className="block text-ink-soft">{l.label}</span> : null}</td>
-                    <td>{WHEN.format(new Date(l.createdAt))}{l.createdBy ? <span className="block text-ink-soft">{l.createdBy}</span> : null}</td>
-                    <td>{l.lastOpenedAt ? <>{WHEN.format(new Date(l.lastOpenedAt))}<span className="block font-mono text-ink-soft">{l.openCount}×</span></> : <span className="text-ink-soft">never</span>}</td>
+                    <td>{formatDateTime(l.createdAt)}{l.createdBy ? <span className="block text-ink-soft">{l.createdBy}</span> : null}</td>
+                    <td>{l.lastOpenedAt ? <>{formatDateTime(l.lastOpenedAt)}<span className="block font-mono text-ink-soft">{l.openCount}×</span></> : <span className="text-ink-soft">never</span>}</td>
                     <td>
                       {STATUS_WORD[l.status]}
-                      {l.status === 'active' && l.expiresAt ? <span className="block text-ink-soft">until {WHEN.format(new Date(l.expiresAt))}</span> : null}
+                      {l.status === 'active' && l.expiresAt ? <span className="block text-ink-soft">until {formatDateTime(l.expiresAt)}</span> : null}
                     </td>
                     <td className="text-right">
                       {l.status === 'active' && (
-                        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => withdraw.mutate(l.id)} disabled={withdraw.isPending} aria-label={`Withdraw the link created ${WHEN.format(new Date(l.createdAt))}`}>
+                        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => withdraw.mutate(l.id)} disabled={withdraw.isPending} aria-label={`Withdraw the link created ${formatDateTime(l.createdAt)}`}>
                           <Ban size={12} aria-hidden="true" /> Withdraw
                         </button>
                       )}

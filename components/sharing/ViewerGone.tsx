@@ -4,14 +4,14 @@
  */
 import { Link2Off } from 'lucide-react';
 import { Wordmark } from '@/components/ui/Wordmark';
+import { formatDateTime } from '@/lib/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' });
 
 export function ViewerGone({ status, at }: { status: 'revoked' | 'expired' | 'unknown'; at: string | null }) {
   const title = status === 'revoked' ? 'This link was withdrawn' : status === 'expired' ? 'This link has expired' : 'There is no plan at this address';
   const words =
-    status === 'revoked' ? `The workshop withdrew this viewer link${at ? ` on ${WHEN.format(new Date(at))} (UTC)` : ''}. Ask them for a new one if you still need to see the plan.`
-      : status === 'expired' ? `This viewer link worked until ${at ? `${WHEN.format(new Date(at))} (UTC)` : 'its expiry date'}. Ask the workshop for a new one.`
+    status === 'revoked' ? `The workshop withdrew this viewer link${at ? ` on ${formatDateTime(at)}` : ''}. Ask them for a new one if you still need to see the plan.`
+      : status === 'expired' ? `This viewer link worked until ${at ? `${formatDateTime(at)}` : 'its expiry date'}. Ask the workshop for a new one.`
         : 'Check that the whole address was copied from the message you were sent.';
   return (
     <main className="sheet flex min-h-screen items-center justify-center px-6" data-testid="viewer-gone" data-status={status}>

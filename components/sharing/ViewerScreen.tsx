@@ -21,6 +21,7 @@ import type { CheckReport } from '@/lib/checks/types';
 import type { ViewerContent } from '@/db/sharing/viewer-links';
 import { Wordmark } from '@/components/ui/Wordmark';
 import { ViewerGone } from './ViewerGone';
+import { formatDateTime } from '@/lib/format';
 
 export type ViewerContentDto = Omit<ViewerContent, 'checkDefaults'>;
 
@@ -28,7 +29,6 @@ export type ViewerContentDto = Omit<ViewerContent, 'checkDefaults'>;
 export const LIVE_POLL_MS = 1000;
 const FROZEN_POLL_MS = 15_000;
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 type Gone = { status: 'revoked' | 'expired' | 'unknown'; at: string | null };
 
@@ -79,7 +79,7 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
     </span>
   ) : (
     <span className="inline-flex items-center gap-2 text-xs" data-testid="viewer-kind">
-      <span className="inline-flex items-center gap-1"><RevisionMarkIcon letter={content.revision?.letter ?? '?'} /> Revision {content.revision?.letter}, issued {content.revision ? WHEN.format(new Date(content.revision.issuedAt)) : ''}</span>
+      <span className="inline-flex items-center gap-1"><RevisionMarkIcon letter={content.revision?.letter ?? '?'} /> Revision {content.revision?.letter}, issued {content.revision ? formatDateTime(content.revision.issuedAt) : ''}</span>
       {content.revision && <LayoutStateBadge state={content.revision.state} />}
     </span>
   );
@@ -91,7 +91,7 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
         <span className="text-sm text-ink-soft">{content.studioName}</span>
         <span className="truncate text-sm font-medium">{content.layoutName}</span>
         {badge}
-        <span className="ml-auto inline-flex items-center gap-1 text-xs text-ink-soft"><Eye size={12} aria-hidden="true" /> View only{content.expiresAt ? ` · link works until ${WHEN.format(new Date(content.expiresAt))}` : ''}</span>
+        <span className="ml-auto inline-flex items-center gap-1 text-xs text-ink-soft"><Eye size={12} aria-hidden="true" /> View only{content.expiresAt ? ` · link works until ${formatDateTime(content.expiresAt)}` : ''}</span>
       </header>
       {content.revision?.note && <p className="shrink-0 border-b border-paper-edge bg-paper-deep px-4 py-1.5 text-sm">{content.revision.note}</p>}
       <div className="shrink-0 border-b border-paper-edge px-4 py-1.5"><CautionNote compact testId="viewer-caution">{ONE_LINE_CAUTION}</CautionNote></div>

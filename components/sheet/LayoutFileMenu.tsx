@@ -15,8 +15,12 @@ import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { useEditorApi } from '@/components/editor/store/EditorStoreContext';
 import { PRELIMINARY_WORD } from '@/lib/layout/drawing-issue';
+import { formatDate } from '@/lib/format';
 import { downloadBlob, planToPng } from './exportPlan';
-import { issueLines, layoutFileName, layoutFileText, readLayoutFile } from './layoutFile';
+
+// The file helpers validate imports with the full layout schema: fetched when a File action runs,
+// so the schema library stays out of the editor's first load.
+const layoutFile = () => import('./layoutFile');
 
 export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdit: boolean }) {
   const api = useEditorApi();
@@ -37,22 +41,25 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
         layout: s.doc.name,
         arrangement: `${s.arrangement[0].toUpperCase()}${s.arrangement.slice(1)} arrangement`,
         revision: `${PRELIMINARY_WORD} (version ${s.version})`,
-        date: new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' }).format(new Date()),
+        date: formatDate(new Date()),
         pxPerMm: s.viewport.scale,
       };
+      const { layoutFileName } = await layoutFile();
       downloadBlob(await planToPng(plan, title), layoutFileName(s.doc.name, `${s.arrangement}.png`));
     } catch (err) {
       toast.error(err instanceof Error ? err.message : 'The picture could not be made.');
     }
   }
 
-  function saveLayoutFile() {
+  async function saveLayoutFile() {
     setOpen(false);
     const { doc } = api.getState();
+    const { layoutFileName, layoutFileText } = await layoutFile();
     downloadBlob(new Blob([layoutFileText(doc)], { type: 'application/json' }), layoutFileName(doc.name));
   }
 
   async function importFile(file: File) {
+    const { issueLines, readLayoutFile } = await layoutFile();
     setBusy(true);
     try {
       const result = readLayoutFile(await file.text(), file.size);
@@ -97,8 +104,8 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
       <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to open as a new layout"
         onChange={(e) => e.target.files?.[0] && importFile(e.target.files[0])} />
       <Dialog open={problems !== null} title="This file is not a layout Baywright can read" onClose={() => setProblems(null)} testId="import-problems">
-        <p className="mb-2 text-sm">{problems?.file} has these problems (field path: what is wrong):</p>
-        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 font-mono text-xs">
+        <p className="mb-2 text-sm">{problems?.file} has these problems (field: what is wrong):</p>
+        <ul className="mb-4 max-h-64 list-disc overflow-auto pl-5 text-xs">
           {problems?.lines.map((l, i) => <li key={i}>{l}</li>)}
         </ul>
         <button type="button" className="btn-primary" onClick={() => setProblems(null)}>Close</button>

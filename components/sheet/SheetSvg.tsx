@@ -1,15 +1,16 @@
 /**
  * One page of the plan sheet as SVG in real millimetres (width="297mm", viewBox in mm), from the
  * same drawing model as the PDF, so the HTML print view prints true to scale at 100 %. Text uses
- * the metric-compatible faces of the PDF's standard fonts (Arial/Helvetica, Courier New).
+ * the product's faces, the same ones embedded in the PDF, without kerning or ligatures so each
+ * line measures as the sheet's layout measured it.
  * Renders on the server; holds no state and must never measure or re-lay anything out.
  */
 import { INK_HEX, PT_PER_MM, type SheetItem, type SheetPage } from '@/lib/sheet';
 
 const FAMILY = {
-  sans: 'Helvetica, Arial, "Liberation Sans", sans-serif',
-  'sans-bold': 'Helvetica, Arial, "Liberation Sans", sans-serif',
-  mono: '"Courier New", Courier, "Liberation Mono", monospace',
+  sans: 'var(--font-text), sans-serif',
+  'sans-bold': 'var(--font-text), sans-serif',
+  mono: 'var(--font-mono), monospace',
 } as const;
 
 const ANCHOR = { left: 'start', center: 'middle', right: 'end' } as const;
@@ -29,7 +30,7 @@ function Item({ item }: { item: SheetItem }) {
       return <polygon points={item.points.map((p) => p.join(',')).join(' ')} fill={item.fill ? hex(item.fill) : 'none'} stroke={item.stroke ? hex(item.stroke) : 'none'} strokeWidth={item.stroke ? (item.width ?? 0.2) : 0} />;
     case 'text':
       return (
-        <text x={item.x} y={item.y} fontSize={item.size / PT_PER_MM} fontFamily={FAMILY[item.font ?? 'sans']} fontWeight={item.font === 'sans-bold' ? 700 : 400}
+        <text x={item.x} y={item.y} fontSize={item.size / PT_PER_MM} style={{ fontFamily: FAMILY[item.font ?? 'sans'], fontKerning: 'none', fontVariantLigatures: 'none' }} fontWeight={item.font === 'sans-bold' ? 600 : 400}
           fill={hex(item.ink)} textAnchor={ANCHOR[item.align ?? 'left']} transform={item.rotate === 90 ? `rotate(-90 ${item.x} ${item.y})` : undefined}>
           {item.text}
         </text>

@@ -88,7 +88,7 @@ function drawTitleStrip(ctx: CanvasRenderingContext2D, width: number, top: numbe
 
 /** The current canvas view as a PNG picture: the stage under `planElement`, on paper, with its title strip. */
 export async function planToPng(planElement: HTMLElement, title: PictureTitle, pixelRatio = 2): Promise<Blob> {
-  const Konva = (await import('konva')).default;
+  const Konva = (await import('konva/lib/Core')).default;
   const stage = Konva.stages.find((s) => planElement.contains(s.container()));
   if (!stage) throw new Error('The plan is not drawn yet; wait a moment and try again.');
   const drawn = stage.toCanvas({ pixelRatio });

@@ -6,6 +6,7 @@
  */
 import { parseLayoutDoc, type FieldIssue } from '@/lib/layout/parse';
 import type { LayoutDoc } from '@/lib/layout/schema';
+import { fieldName } from '@/lib/layout/field-names';
 
 /** Larger than any sane layout (5000 modules ≈ 1.5 MB): refuse before parsing. */
 export const MAX_LAYOUT_FILE_BYTES = 2 * 1024 * 1024;
@@ -36,8 +37,16 @@ export function readLayoutFile(text: string, bytes = text.length): ReadLayoutRes
 }
 
 /** Issues as lines a person reads: "modules.3.width: must be a whole number of millimetres". */
+/** "Module 4, " for a path inside the fourth module; empty elsewhere. */
+function where(path: string): string {
+  const m = /^(modules|doors|wheelArches)\.(\d+)\./.exec(path);
+  if (!m) return '';
+  const what = m[1] === 'modules' ? 'Module' : m[1] === 'doors' ? 'Door' : 'Wheel arch';
+  return `${what} ${Number(m[2]) + 1}, `;
+}
+
 export function issueLines(issues: FieldIssue[], max = 12): string[] {
-  const lines = issues.slice(0, max).map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
+  const lines = issues.slice(0, max).map((i) => (i.path ? `${where(i.path)}${fieldName(i.path)}: ${i.message}` : i.message));
   if (issues.length > max) lines.push(`…and ${issues.length - max} more`);
   return lines;
 }

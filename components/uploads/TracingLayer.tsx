@@ -6,7 +6,7 @@
  * Loaded only in the browser, with Konva.
  */
 import { useEffect, useState } from 'react';
-import { Image as KonvaImage, Layer } from 'react-konva';
+import { Image as KonvaImage, Layer } from '../editor/canvas/konva';
 import type { Viewport } from '@/components/editor/geometry/viewport';
 import { worldLayerProps } from '@/components/editor/canvas/worldTransform';
 import type { UploadDto } from '@/lib/uploads/dto';

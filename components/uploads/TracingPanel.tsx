@@ -6,13 +6,16 @@
  * Owners and designers place; the layout's client sees what is placed.
  */
 import { useRef, useState } from 'react';
+import dynamic from 'next/dynamic';
 import { toast } from 'sonner';
 import { Camera, ChevronDown, ImagePlus } from 'lucide-react';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { LengthUnit } from '@/lib/layout';
 import type { TracingPlacement } from '@/lib/tracing/calibration';
 import type { UploadDto } from '@/lib/uploads/dto';
-import { CalibrateDialog } from './CalibrateDialog';
+
+// The calibration dialog (and the tracing maths it runs) loads when a photo is first calibrated.
+const CalibrateDialog = dynamic(() => import('./CalibrateDialog').then((m) => m.CalibrateDialog), { ssr: false });
 import { sendFile } from './sendFile';
 import { precheck } from './UploadsPanel';
 import { useUploadActions, useUploads } from './useUploads';
@@ -114,7 +117,7 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
           )}
         </div>
       )}
-      <Dialog open={calibrating !== null} title={`Scale ${calibrating?.fileName ?? ''} from two points`} onClose={() => setCalibrating(null)} testId="calibrate-dialog">
+      <Dialog open={calibrating !== null} title={`Scale ${calibrating?.fileName ?? ''} from two points`} onClose={() => setCalibrating(null)} testId="scale-photo-dialog">
         {calibrating && (
           <CalibrateDialog upload={calibrating} units={units} saving={place.isPending}
             onCancel={() => setCalibrating(null)}

@@ -8,8 +8,9 @@ import { eq } from 'drizzle-orm';
 import { getDb } from '../client';
 import { layouts, studios } from '../schema';
 import { ForbiddenError, NotFoundError } from '../errors';
-import { canEditLayouts, type Actor } from '../actor';
+import { canEditLayouts, mayReadLayout, type Actor } from '../actor';
 import type { LayoutDoc } from '../../lib/layout/schema';
+import { readStoredDoc } from '../stored-doc';
 
 export const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -39,11 +40,10 @@ export async function layoutFor(actor: Actor, layoutId: string): Promise<LayoutA
     .from(layouts)
     .where(eq(layouts.id, layoutId))
     .limit(1);
-  if (!row || row.studioId !== actor.studioId) throw new NotFoundError('No such layout.');
+  if (!row || !mayReadLayout(actor, row)) throw new NotFoundError('No such layout.');
   const canEdit = canEditLayouts(actor);
-  const isClient = actor.role === 'client' && row.clientId === actor.userId;
-  if (!canEdit && !isClient) throw new NotFoundError('No such layout.');
-  return { ...row, canEdit, isClient };
+  const isClient = !canEdit;
+  return { ...row, doc: readStoredDoc(row.doc), canEdit, isClient };
 }
 
 /** As layoutFor, but only owners and designers pass; the layout's client gets 403. */

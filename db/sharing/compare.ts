@@ -1,7 +1,7 @@
 /**
  * Comparing two states of a layout — two revisions, or a revision and the layout as last saved:
  * both documents, what changed between them (lib/layout/revision-diff) and which check findings
- * changed status (both documents checked with the studio's defaults). Anyone who may see the
+ * changed status (both documents checked with the studio's defaults, in the work pool). Anyone who may see the
  * layout may compare its revisions. Must never reach a revision of another layout.
  */
 import 'server-only';
@@ -11,10 +11,9 @@ import { studios } from '../schema';
 import { NotFoundError } from '../errors';
 import type { Actor } from '../actor';
 import { settingsSchema, type LayoutDoc } from '../../lib/layout/schema';
-import { diffFindings, diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
-import { runChecks } from '../../lib/checks';
+import { diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
+import { runJob } from '../../lib/workers/pool';
 import { AS_LAST_SAVED } from '../../lib/layout/drawing-issue';
-import { withStudioDefaults } from '../studios';
 import { layoutFor, UUID } from './access';
 import { getRevision, revisionIdByLetter } from './revisions';
 
@@ -50,12 +49,12 @@ export async function compareRevisions(actor: Actor, layoutId: string, fromRef: 
   const db = await getDb();
   const [s] = await db.select({ checkDefaults: studios.checkDefaults }).from(studios).where(eq(studios.id, actor.studioId)).limit(1);
   const defaults = settingsSchema.safeParse(s?.checkDefaults).data ?? {};
-  const before = runChecks(withStudioDefaults(from.doc, defaults));
-  const after = runChecks(withStudioDefaults(to.doc, defaults));
+  // Both check runs happen in the work pool (lib/workers), off the request thread.
+  const checked = await runJob('compareChecks', { from: from.doc, to: to.doc, studioDefaults: defaults });
   return {
-    from: { ...from, ok: before.ok },
-    to: { ...to, ok: after.ok },
+    from: { ...from, ok: checked.beforeOk },
+    to: { ...to, ok: checked.afterOk },
     diff: diffRevisions(from.doc, to.doc),
-    findings: diffFindings(before.findings, after.findings),
+    findings: checked.findings,
   };
 }

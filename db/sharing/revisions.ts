@@ -6,6 +6,7 @@
  * Must never let anyone but the layout's own client decide, nor return rows.
  */
 import 'server-only';
+import { readStoredDoc } from '../stored-doc';
 import { and, asc, desc, eq, inArray, max } from 'drizzle-orm';
 import { getDb } from '../client';
 import { revisionDecisions, revisions, users } from '../schema';
@@ -125,7 +126,7 @@ export async function getRevision(actor: Actor, layoutId: string, revisionId: st
   const { revs, decisions, latestSeq } = await rowsFor(layoutId, revisionId);
   const row = revs[0];
   if (!row) throw new NotFoundError('No such revision.');
-  return { ...toDto(row, decisions, latestSeq), doc: row.doc };
+  return { ...toDto(row, decisions, latestSeq), doc: readStoredDoc(row.doc) };
 }
 
 /** Looks a revision up by its letter (for addresses such as ?from=A&to=B). */

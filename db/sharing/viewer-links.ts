@@ -9,6 +9,7 @@
  * Must never accept a token for anything but reading.
  */
 import 'server-only';
+import { readStoredDoc } from '../stored-doc';
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import { getDb } from '../client';
 import { layouts, revisionDecisions, revisions, studios, users, viewerLinks } from '../schema';
@@ -178,7 +179,7 @@ export async function resolveViewerLink(token: string, options: { touch?: boolea
     layoutName: row.layoutName,
     studioName: row.studioName,
     units: row.units,
-    doc: row.layoutDoc,
+    doc: readStoredDoc(row.layoutDoc),
     version: row.layoutVersion,
     updatedAt: row.layoutUpdatedAt.toISOString(),
     revision: null,
@@ -193,7 +194,7 @@ export async function resolveViewerLink(token: string, options: { touch?: boolea
     content = {
       ...content,
       kind: 'revision',
-      doc: rev.doc,
+      doc: readStoredDoc(rev.doc),
       version: rev.layoutVersion,
       updatedAt: rev.issuedAt.toISOString(),
       revision: { letter: rev.letter, note: rev.note, issuedAt: rev.issuedAt.toISOString(), state: revisionState(decisions) },

@@ -9,6 +9,8 @@ import type { z } from 'zod';
 import { issuesFromZod, type FieldIssue } from '@/lib/layout/parse';
 import { actorFromRequest } from '@/lib/auth/session';
 import type { Actor } from '@/db/actor';
+import { WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
+import { correlationId, describeError, log, routeOf } from '@/lib/log';
 
 export class HttpError extends Error {
   constructor(readonly status: number, message: string, readonly extra: Record<string, unknown> = {}) {
@@ -40,21 +42,39 @@ export async function readJson(req: Request, maxBytes = MAX_JSON_BYTES): Promise
   } catch {
     throw new HttpError(400, 'The body is not valid JSON.');
   }
-  if (containsNul(value)) throw new HttpError(400, 'Text in the body may not contain NUL characters.');
+  const bad = unstorableText(value);
+  if (bad) {
+    throw new HttpError(400, 'Some fields are not valid.', {
+      issues: [{ path: bad.path, message: bad.nul ? 'text may not contain NUL characters' : 'text has a broken character (a lone UTF-16 surrogate)' }],
+    });
+  }
   return value;
 }
 
-/** PostgreSQL text and jsonb cannot hold U+0000; refuse it at the door rather than fail in the database. */
-function containsNul(value: unknown): boolean {
-  const stack: unknown[] = [value];
+/**
+ * PostgreSQL text and jsonb cannot hold U+0000, and a lone UTF-16 surrogate is not text at all
+ * (it cannot be encoded as UTF-8): refuse either at the door, naming the field, rather than fail
+ * in the database. Keys count as well as values. Iterative, so depth costs no stack.
+ */
+function unstorableText(value: unknown): { path: string; nul: boolean } | null {
+  const stack: [unknown, string][] = [[value, '']];
+  const join = (path: string, key: string | number) => (path ? `${path}.${key}` : String(key));
+  const check = (text: string, path: string) => (text.includes('\u0000') ? { path, nul: true } : !text.isWellFormed() ? { path, nul: false } : null);
   while (stack.length) {
-    const v = stack.pop();
+    const [v, path] = stack.pop()!;
     if (typeof v === 'string') {
-      if (v.includes('\u0000')) return true;
-    } else if (Array.isArray(v)) for (const x of v) stack.push(x);
-    else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) stack.push(k, x);
+      const bad = check(v, path);
+      if (bad) return bad;
+    } else if (Array.isArray(v)) v.forEach((x, i) => stack.push([x, join(path, i)]));
+    else if (v && typeof v === 'object') {
+      for (const [k, x] of Object.entries(v)) {
+        const bad = check(k, join(path, k));
+        if (bad) return bad;
+        stack.push([x, join(path, k)]);
+      }
+    }
   }
-  return false;
+  return null;
 }
 
 async function readLimited(req: Request, maxBytes: number): Promise<string> {
@@ -114,15 +134,28 @@ export function handle<C>(fn: Handler<C>): Handler<C> {
       checkOrigin(req);
       return await fn(req, ctx);
     } catch (err) {
-      return errorResponse(err);
+      return errorResponse(err, req);
     }
   };
 }
 
-export function errorResponse(err: unknown): Response {
+/**
+ * The answer for an error. Deliberate ones (HttpError, the data layer's 4xx errors) say what was
+ * wrong; anything else is a fault: the log gets a correlation id, the route and the error's class
+ * (lib/log cuts out parameters, tokens and hashes), and the 500 answer shows the same id.
+ */
+export function errorResponse(err: unknown, req?: Request): Response {
   if (err instanceof HttpError) {
     const res = problem(err.status, err.message, err.extra);
-    if (typeof err.extra.retryAfter === 'number') res.headers.set('Retry-After', String(err.extra.retryAfter));
+    const retry = err.extra.retryAfter;
+    if (typeof retry === 'number' && retry > 0) res.headers.set('Retry-After', String(Math.ceil(retry)));
+    return res;
+  }
+  // The work pool is full (or stopping): come back shortly; other requests keep flowing.
+  if (err instanceof WorkPoolBusyError || err instanceof WorkPoolClosedError) {
+    const retry = err instanceof WorkPoolBusyError ? err.retryAfterSeconds : 5;
+    const res = problem(503, err.message, { retryAfter: retry });
+    res.headers.set('Retry-After', String(retry));
     return res;
   }
   const status = (err as { status?: unknown })?.status;
@@ -130,6 +163,7 @@ export function errorResponse(err: unknown): Response {
     const extra = status === 412 ? { current: (err as { current?: unknown }).current } : {};
     return problem(status, (err as Error).message, extra);
   }
-  console.error('[baywright] unexpected error', err);
-  return problem(500, 'Something went wrong on our side. Nothing was changed.');
+  const reference = correlationId();
+  log.error('unexpected error', { reference, route: routeOf(req), ...describeError(err) });
+  return problem(500, `Something went wrong on our side. Nothing was changed. If it happens again, quote reference ${reference}.`, { reference });
 }

@@ -9,6 +9,7 @@
  */
 import 'server-only';
 import { dictionary } from '@zxcvbn-ts/language-common';
+import { refine } from 'zod/mini';
 import { passwordLengthSchema } from './password-rules';
 
 export const PASSWORD_TOO_COMMON = 'this password is on a list of common passwords; choose one that is not';
@@ -24,4 +25,4 @@ export function isCommonPassword(password: string): boolean {
   return commonPasswords().has(password.toLowerCase());
 }
 
-export const newPasswordSchema = passwordLengthSchema.refine((p) => !isCommonPassword(p), PASSWORD_TOO_COMMON);
+export const newPasswordSchema = passwordLengthSchema.check(refine((p: string) => !isCommonPassword(p), PASSWORD_TOO_COMMON));

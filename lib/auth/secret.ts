@@ -1,20 +1,34 @@
 /**
- * The key that signs session tokens. AUTH_SECRET in production; for a local run without one, a
- * random key is made once and kept in ./data/.auth-secret so sessions survive restarts.
+ * The key that signs session tokens. AUTH_SECRET in production, where a missing one stops the
+ * server (never a generated key: it would sign sessions nobody configured). Where local stand-ins
+ * are allowed (outside production, the demo, the tests: lib/local-mode) a random key is made once
+ * and kept in ./data/.auth-secret so sessions survive restarts.
  */
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
 import { dataRoot } from '../data-root';
+import { proxyTrust, publicUrlIsHttps } from './address';
+import { localStandInsAllowed } from '../local-mode';
+
+export class MissingAuthSecret extends Error {
+  constructor() {
+    super('AUTH_SECRET is not set. In production it must be: generate one with `openssl rand -base64 32` and give every instance the same value. (Only the demo and the tests may generate one: BAYWRIGHT_DEMO=1.)');
+    this.name = 'MissingAuthSecret';
+  }
+}
 
 let cached: string | undefined;
 
 export function authSecret(): string {
   if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
   if (cached) return cached;
-  if (process.env.NODE_ENV === 'production' && process.env.BAYWRIGHT_REQUIRE_SECRET === '1') {
-    throw new Error('AUTH_SECRET must be set in production');
+  if (process.env.NEXT_PHASE === 'phase-production-build') {
+    // `next build` evaluates this module without serving anyone: a throwaway key, kept nowhere.
+    cached = crypto.randomBytes(32).toString('base64url');
+    return cached;
   }
+  if (!localStandInsAllowed()) throw new MissingAuthSecret();
   const root = dataRoot();
   const file = path.join(root, '.auth-secret');
   try {
@@ -33,9 +47,19 @@ export function authSecret(): string {
   return cached;
 }
 
-/** Cookies are Secure when the app is served over HTTPS. */
+/** Cookies are always Secure when the public URL (AUTH_URL or BAYWRIGHT_PUBLIC_URL) is https. */
 export function secureCookiesWanted(): boolean {
-  return (process.env.AUTH_URL ?? '').startsWith('https://');
+  return publicUrlIsHttps();
+}
+
+/**
+ * Auth.js's `useSecureCookies`: always with an https public URL; per request behind a trusted
+ * proxy (undefined lets Auth.js follow the request's scheme, which the connection policy in
+ * lib/auth/address.ts took from the proxy's X-Forwarded-Proto); never otherwise.
+ */
+export function secureCookiesSetting(): boolean | undefined {
+  if (publicUrlIsHttps()) return true;
+  return proxyTrust().kind === 'none' ? false : undefined;
 }
 
 /** Idle timeout: a session not used for 12 hours ends (each use re-issues the cookie). */
@@ -52,6 +76,6 @@ export function withinAbsoluteLifetime(signedInAt: unknown, nowMs = Date.now()):
   return typeof signedInAt === 'number' && signedInAt * 1000 <= nowMs + 60_000 && nowMs < (signedInAt + SESSION_ABSOLUTE_S) * 1000;
 }
 
-export function sessionCookieName(): string {
-  return secureCookiesWanted() ? '__Secure-authjs.session-token' : 'authjs.session-token';
+export function sessionCookieName(secure = secureCookiesWanted()): string {
+  return secure ? '__Secure-authjs.session-token' : 'authjs.session-token';
 }

@@ -8,22 +8,26 @@ import 'server-only';
 import { headers } from 'next/headers';
 import { decode, getToken } from 'next-auth/jwt';
 import { loadActor, type Actor } from '@/db/actor';
-import { authSecret, sessionCookieName, secureCookiesWanted, withinAbsoluteLifetime } from './secret';
+import { authSecret, sessionCookieName, withinAbsoluteLifetime } from './secret';
+import { requestIsSecure } from './address';
 import { decodeCached, type SessionClaims } from './token-cache';
 
 export async function actorFromRequest(req: Request): Promise<Actor | null> {
-  const raw = await getToken({ req, secureCookie: secureCookiesWanted(), cookieName: sessionCookieName(), raw: true });
+  // Over HTTPS only the __Secure- cookie counts (a plain one could have been planted over HTTP).
+  const secure = requestIsSecure(req);
+  const cookieName = sessionCookieName(secure);
+  const raw = await getToken({ req, secureCookie: secure, cookieName, raw: true });
   if (!raw) return null;
-  const token = await decodeCached(raw, decodeSessionToken);
+  const token = await decodeCached(`${cookieName}=${raw}`, (key) => decodeSessionToken(key.slice(cookieName.length + 1), cookieName));
   if (typeof token?.uid !== 'string') return null;
   if (!withinAbsoluteLifetime(token.sat)) return null; // 7 days after signing in, however busy
 
   return loadActor(token.uid, typeof token.studioId === 'string' ? token.studioId : undefined, typeof token.sv === 'number' ? token.sv : undefined);
 }
 
-async function decodeSessionToken(raw: string): Promise<SessionClaims | null> {
+async function decodeSessionToken(raw: string, cookieName: string): Promise<SessionClaims | null> {
   try {
-    return (await decode({ token: raw, secret: authSecret(), salt: sessionCookieName() })) as SessionClaims | null;
+    return (await decode({ token: raw, secret: authSecret(), salt: cookieName })) as SessionClaims | null;
   } catch {
     return null; // tampered, expired or made with another secret
   }
@@ -31,6 +35,7 @@ async function decodeSessionToken(raw: string): Promise<SessionClaims | null> {
 
 /** For server components: the same check, reading the incoming request's cookies. */
 export async function currentActor(): Promise<Actor | null> {
-  const cookie = (await headers()).get('cookie') ?? '';
-  return actorFromRequest(new Request('http://internal/', { headers: { cookie } }));
+  const incoming = await headers();
+  const forwarded = incoming.get('x-forwarded-proto');
+  return actorFromRequest(new Request('http://internal/', { headers: { cookie: incoming.get('cookie') ?? '', ...(forwarded ? { 'x-forwarded-proto': forwarded } : {}) } }));
 }

@@ -5,7 +5,7 @@
  * largest axis-aligned rectangle inside its pieces (lib/geometry/largestRectangle) and the tallest
  * standard mattress that fits it. Pure: must never import UI, framework or database code.
  */
-import { clusterByGap, intervalGap, intervalOverlap, largestRectangle, type Rect } from '../geometry';
+import { clusterByGap, intervalGap, intervalOverlap, largestRectangle, WorkLimitError, type Rect, type WorkBudget } from '../geometry';
 import type { LayoutDoc, Module } from '../layout/schema';
 import { inArrangement, moduleRect, topAboveBare, type BuildUpThickness } from './bayModel';
 import { largestFittingMattress, type Mattress } from './mattress';
@@ -48,10 +48,10 @@ function seamBridges(rects: Rect[], tolerance: number): Rect[] {
 /** More pieces than this in one bed is not a bed but a data problem; reported, never computed. */
 const MAX_PIECES = 400;
 
-export function findBeds(doc: LayoutDoc, t: BuildUpThickness, settings: CheckSettings): Bed[] {
+export function findBeds(doc: LayoutDoc, t: BuildUpThickness, settings: CheckSettings, budget?: WorkBudget): Bed[] {
   const pieces = doc.modules.filter((m) => m.surface === 'sleep' && inArrangement(m, 'sleep'));
   const rects = pieces.map(moduleRect);
-  const groups = clusterByGap(rects, settings.levelTolerance);
+  const groups = clusterByGap(rects, settings.levelTolerance, budget);
   const beds = groups.map((g): Omit<Bed, 'number'> => {
     const mods = g.map((i) => pieces[i]);
     const tops = mods.map((m) => topAboveBare(m, t.floorT));
@@ -62,9 +62,11 @@ export function findBeds(doc: LayoutDoc, t: BuildUpThickness, settings: CheckSet
     }
     const own = g.map((i) => rects[i]);
     let rect: Rect | null;
+    budget?.spend(own.length * own.length);
     try {
-      rect = largestRectangle([...own, ...seamBridges(own, settings.levelTolerance)]);
+      rect = largestRectangle([...own, ...seamBridges(own, settings.levelTolerance)], { budget });
     } catch (e) {
+      if (e instanceof WorkLimitError) throw e;
       return { ...base, rect: null, long: 0, short: 0, lengthways: true, problem: e instanceof Error ? e.message : String(e) };
     }
     const dx = rect ? rect.x1 - rect.x0 : 0;

@@ -4,20 +4,31 @@
  * families read. Computed once per run, never stored between runs.
  * Pure: must never import UI, framework or database code.
  */
-import type { Rect } from '../geometry';
+import { WorkBudget, type Rect } from '../geometry';
 import type { Arrangement, LayoutDoc } from '../layout/schema';
 import { buildUpThickness, inArrangement, moduleRect, type BuildUpThickness } from './bayModel';
 import { findBeds, type Bed } from './beds';
 import { analyseFloor, type FloorAnalysis } from './floorAnalysis';
 import { RULE_CONSTANTS, type CheckSettings } from './settings';
 
+/**
+ * Steps of geometry work one check run may spend (lib/geometry/workBudget): n log n in the module
+ * count. Measured on the generated realistic layouts (tests/checks/fixtures/generatedLayout), a
+ * run uses about a tenth of it; a hostile pile runs out and the rule family it stopped is
+ * reported as not checked. Common practice, no source.
+ */
+export const CHECK_WORK = { perModule: 500, base: 2_000_000 } as const;
+
 export class CheckContext {
   readonly t: BuildUpThickness;
+  /** Shared by every rule family of this run. */
+  readonly budget: WorkBudget;
   private readonly floors = new Map<Arrangement, FloorAnalysis>();
   private bedsCache?: Bed[];
 
   constructor(readonly doc: LayoutDoc, readonly settings: CheckSettings) {
     this.t = buildUpThickness(doc);
+    this.budget = WorkBudget.forItems(doc.modules.length, CHECK_WORK.perModule, CHECK_WORK.base);
   }
 
   /** Modules that hang at head height in an arrangement (underside between 1000 mm and the standing height). */
@@ -31,7 +42,7 @@ export class CheckContext {
     let a = this.floors.get(arrangement);
     if (!a) {
       const queried: Rect[] = this.headHeightModules(arrangement).map(moduleRect);
-      a = analyseFloor(this.doc, this.t, arrangement, { radius: this.settings.walkwayMin / 2, queried });
+      a = analyseFloor(this.doc, this.t, arrangement, { radius: this.settings.walkwayMin / 2, queried, budget: this.budget });
       this.floors.set(arrangement, a);
     }
     return a;
@@ -39,7 +50,7 @@ export class CheckContext {
 
   /** Beds made up in the sleep arrangement. */
   beds(): Bed[] {
-    this.bedsCache ??= findBeds(this.doc, this.t, this.settings);
+    this.bedsCache ??= findBeds(this.doc, this.t, this.settings, this.budget);
     return this.bedsCache;
   }
 }

@@ -47,6 +47,7 @@ export function egressSleep(ctx: CheckContext): Finding[] {
     obstacles: floorObstacles(ctx.doc, 'sleep'),
     openings: doorOpenings(ctx.doc).map((d) => d.opening),
     marks: pieceRects.flatMap((p) => [p.x0, p.x1, p.x0 - r, p.x1 + r]),
+    budget: ctx.budget,
   });
   const floor = model.sweep(r);
   return beds.map((bed) => {

@@ -6,8 +6,9 @@
  * All three are plain geometry of the layout (SOURCES.geometry / wheelArch / overlap); a value
  * exactly at its limit passes. Pure: must never import UI, framework or database code.
  */
-import { intervalOverlap, overlappingPairs, rectsOverlap } from '../geometry';
-import { ARRANGEMENTS, type Arrangement, type LayoutDoc, type Module } from '../layout/schema';
+import { intervalOverlap, overlapGroups, rectsOverlap } from '../geometry';
+import { ARRANGEMENTS } from '../layout/vocabulary';
+import type { Arrangement, LayoutDoc, Module } from '../layout/schema';
 import { archBoxes, moduleRect, topAboveBare, undersideAboveBare, type BuildUpThickness } from './bayModel';
 import { listNames, mm, moduleName, plural } from './naming';
 import { SOURCES } from './sources';
@@ -116,34 +117,143 @@ function commonArrangements(a: Module, b: Module): Arrangement[] {
   return ARRANGEMENTS.filter((x) => a.arrangements.includes(x) && b.arrangements.includes(x));
 }
 
+/**
+ * Bounds on the overlap rule's work and words (common practice, no source: sized so a layout of
+ * the schema's 5,000 modules answers in well under a second with a report of a few hundred KB).
+ * Pairs compared: a real interior has a handful of neighbours per module; a pile has n².
+ */
+export const OVERLAP_LIMITS = {
+  /** Candidate pairs the rule may compare, per module (plus a fixed allowance). */
+  pairsPerModule: 48,
+  pairsAllowance: 20_000,
+  /** Module ids a cluster finding carries. */
+  idsPerCluster: 200,
+} as const;
+
+function heightsOverlap(a: Module, b: Module): boolean {
+  return a.elevation < b.elevation + b.height && b.elevation < a.elevation + a.height;
+}
+
+/** Modules drawn identically (same box, same arrangements) overlap each other wholly; they are compared once. */
+function twinKey(m: Module): string {
+  return `${m.x},${m.y},${m.length},${m.width},${m.elevation},${m.height},${ARRANGEMENTS.filter((a) => m.arrangements.includes(a)).join('+')}`;
+}
+
+function pairFinding(a: Module, b: Module): Finding {
+  const ra = moduleRect(a), rb = moduleRect(b);
+  const ox = intervalOverlap(ra.x0, ra.x1, rb.x0, rb.x1);
+  const oy = intervalOverlap(ra.y0, ra.y1, rb.y0, rb.y1);
+  const z0 = Math.max(a.elevation, b.elevation);
+  const z1 = Math.min(a.elevation + a.height, b.elevation + b.height);
+  const common = commonArrangements(a, b);
+  return {
+    id: 'fit.overlap',
+    status: 'fail',
+    ...(common.length === 1 ? { arrangement: common[0] } : {}),
+    moduleIds: [a.id, b.id],
+    measured: Math.min(ox, oy),
+    required: 0,
+    unit: 'mm',
+    message: `${moduleName(a)} and ${moduleName(b)} overlap by ${mm(ox)} × ${mm(oy)} in plan and share heights ${mm(z0)}–${mm(z1)} above the floor, in ${listNames(common)}; move one at least ${mm(Math.min(ox, oy))} or stack them. ${SOURCES.overlap.brief}.`,
+    source: SOURCES.overlap.cite,
+  };
+}
+
+/** One finding for a cluster of three or more modules chained together by overlaps. */
+function clusterFinding(members: Module[], deepA: Module, deepB: Module): Finding {
+  const ra = moduleRect(deepA), rb = moduleRect(deepB);
+  const ox = intervalOverlap(ra.x0, ra.x1, rb.x0, rb.x1);
+  const oy = intervalOverlap(ra.y0, ra.y1, rb.y0, rb.y1);
+  const arrangements = ARRANGEMENTS.filter((x) => members.filter((m) => m.arrangements.includes(x)).length >= 2);
+  const shown = members.slice(0, OVERLAP_LIMITS.idsPerCluster);
+  return {
+    id: 'fit.overlap',
+    status: 'fail',
+    ...(arrangements.length === 1 ? { arrangement: arrangements[0] } : {}),
+    moduleIds: shown.map((m) => m.id),
+    measured: Math.min(ox, oy),
+    required: 0,
+    unit: 'mm',
+    message: `${plural(members.length, 'module')} form one cluster, each overlapping at least one other (${members.length > 4 ? `${members.slice(0, 4).map(moduleName).join(', ')} and ${members.length - 4} more` : listNames(members.map(moduleName))}), in ${listNames(arrangements)}; the deepest overlap, ${moduleName(deepA)} into ${moduleName(deepB)}, is ${mm(ox)} × ${mm(oy)} in plan. Pull them apart or stack them.${members.length > shown.length ? ` The first ${shown.length} are marked on the plan.` : ''} ${SOURCES.overlap.brief}.`,
+    source: SOURCES.overlap.cite,
+  };
+}
+
+/**
+ * fit.overlap: one finding per pair when just two modules clash, one per cluster when more are
+ * chained together — so the report grows with the module count, never with the number of pairs.
+ * Work is bounded too: identically drawn modules are compared once, and at most
+ * OVERLAP_LIMITS pairs are compared; when that runs out one more finding says so.
+ */
 export function fitOverlap(doc: LayoutDoc): Finding[] {
-  const mods = doc.modules;
-  const rects = mods.map(moduleRect);
-  const pairs = overlappingPairs(rects, (i, j) => {
-    const a = mods[i], b = mods[j];
-    const heightsOverlap = a.elevation < b.elevation + b.height && b.elevation < a.elevation + a.height;
-    return heightsOverlap && commonArrangements(a, b).length > 0;
+  const all = doc.modules;
+  // One representative per identically drawn group; the twins join its cluster unexamined.
+  const repIndex = new Map<string, number>();
+  const reps: Module[] = [];
+  const twins: Module[][] = [];
+  for (const m of all) {
+    const key = twinKey(m);
+    const r = repIndex.get(key);
+    if (r === undefined) {
+      repIndex.set(key, reps.length);
+      reps.push(m);
+      twins.push([m]);
+    } else twins[r].push(m);
+  }
+  const rects = reps.map(moduleRect);
+  const budget = OVERLAP_LIMITS.pairsAllowance + OVERLAP_LIMITS.pairsPerModule * all.length;
+  const found = overlapGroups(
+    rects,
+    (i, j) => heightsOverlap(reps[i], reps[j]) && commonArrangements(reps[i], reps[j]).length > 0,
+    (i, j) => Math.min(intervalOverlap(rects[i].x0, rects[i].x1, rects[j].x0, rects[j].x1), intervalOverlap(rects[i].y0, rects[i].y1, rects[j].y0, rects[j].y1)),
+    budget,
+  );
+  const clustered = new Uint8Array(reps.length);
+  const clusters: number[][] = [];
+  for (const g of found.groups) {
+    for (const i of g) clustered[i] = 1;
+    clusters.push(g);
+  }
+  // A group of twins that overlaps nothing else is a cluster of its own.
+  twins.forEach((t, i) => {
+    if (t.length > 1 && !clustered[i]) clusters.push([i]);
   });
-  const findings: Finding[] = pairs.map(([i, j]) => {
-    const a = mods[i], b = mods[j];
-    const ra = rects[i], rb = rects[j];
-    const ox = intervalOverlap(ra.x0, ra.x1, rb.x0, rb.x1);
-    const oy = intervalOverlap(ra.y0, ra.y1, rb.y0, rb.y1);
-    const z0 = Math.max(a.elevation, b.elevation);
-    const z1 = Math.min(a.elevation + a.height, b.elevation + b.height);
-    const common = commonArrangements(a, b);
-    return {
+  clusters.sort((a, b) => a[0] - b[0]);
+
+  const findings: Finding[] = clusters.map((g) => {
+    const members = g.flatMap((i) => twins[i]);
+    if (members.length === 2) return pairFinding(members[0], members[1]);
+    // The deepest overlap in the cluster: between two representatives, or a module and its twin.
+    let a = members[0], b = members[1], best = -Infinity;
+    for (const i of g) {
+      const j = found.deepestPartner[i];
+      const r = rects[i];
+      const d = j >= 0 ? Math.min(intervalOverlap(r.x0, r.x1, rects[j].x0, rects[j].x1), intervalOverlap(r.y0, r.y1, rects[j].y0, rects[j].y1)) : -Infinity;
+      const self = twins[i].length > 1 ? Math.min(r.x1 - r.x0, r.y1 - r.y0) : -Infinity;
+      if (self > best) {
+        best = self;
+        a = twins[i][0];
+        b = twins[i][1];
+      }
+      if (d > best) {
+        best = d;
+        a = reps[i];
+        b = reps[j];
+      }
+    }
+    return clusterFinding(members, a, b);
+  });
+  if (!found.complete) {
+    findings.push({
       id: 'fit.overlap',
       status: 'fail',
-      ...(common.length === 1 ? { arrangement: common[0] } : {}),
-      moduleIds: [a.id, b.id],
-      measured: Math.min(ox, oy),
-      required: 0,
-      unit: 'mm',
-      message: `${moduleName(a)} and ${moduleName(b)} overlap by ${mm(ox)} × ${mm(oy)} in plan and share heights ${mm(z0)}–${mm(z1)} above the floor, in ${listNames(common)}; move one at least ${mm(Math.min(ox, oy))} or stack them. ${SOURCES.overlap.brief}.`,
+      measured: found.examined,
+      required: budget,
+      unit: 'pairs',
+      message: `So many modules are piled on top of one another that the overlap check stopped after comparing ${found.examined.toLocaleString('en-GB')} pairs (the limit for ${plural(all.length, 'module')}); the piles found so far are listed, others may remain. Pull the piled-up modules apart and check again. ${SOURCES.overlap.brief}.`,
       source: SOURCES.overlap.cite,
-    };
-  });
+    });
+  }
   if (findings.length === 0) {
     findings.push({
       id: 'fit.overlap',
@@ -151,7 +261,7 @@ export function fitOverlap(doc: LayoutDoc): Finding[] {
       measured: 0,
       required: 0,
       unit: 'pairs',
-      message: `No two modules share space in any arrangement (${plural(mods.length, 'module')} checked). ${SOURCES.overlap.brief}.`,
+      message: `No two modules share space in any arrangement (${plural(all.length, 'module')} checked). ${SOURCES.overlap.brief}.`,
       source: SOURCES.overlap.cite,
     });
   }

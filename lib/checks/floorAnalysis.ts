@@ -10,7 +10,7 @@
  * which has no lining) — and wholly within the door's span, so a door narrower than the walkway
  * admits nobody.
  */
-import { FreeFloorModel, type FreeFloor, type Rect } from '../geometry';
+import { FreeFloorModel, type FreeFloor, type Rect, type WorkBudget } from '../geometry';
 import type { Arrangement, LayoutDoc, Module } from '../layout/schema';
 import { archBoxes, blocksFloor, doorOpenings, inArrangement, linedInterior, moduleRect, usedFromFront, workingZone, type BuildUpThickness } from './bayModel';
 import { RULE_CONSTANTS } from './settings';
@@ -38,6 +38,7 @@ export interface FloorAnalysisOptions {
   /** Extra rectangles whose neighbourhood will be queried (edges ± `nearBy` become exact columns). */
   queried?: Rect[];
   nearBy?: number;
+  budget?: WorkBudget;
 }
 
 export function floorObstacles(doc: LayoutDoc, arrangement: Arrangement): Rect[] {
@@ -55,7 +56,7 @@ export function analyseFloor(doc: LayoutDoc, t: BuildUpThickness, arrangement: A
   const near = options.nearBy ?? options.radius;
   for (const q of options.queried ?? []) marks.push(q.x0, q.x1, q.x0 - near, q.x1 + near);
   const openings = doorOpenings(doc).map((d) => d.opening);
-  const model = new FreeFloorModel({ interior: linedInterior(doc, t.wallT), obstacles: floorObstacles(doc, arrangement), openings, marks });
+  const model = new FreeFloorModel({ interior: linedInterior(doc, t.wallT), obstacles: floorObstacles(doc, arrangement), openings, marks, budget: options.budget });
   const floor = model.sweep(options.radius);
   return {
     arrangement,

@@ -31,6 +31,54 @@ export interface RunChecksOptions {
   studioDefaults?: LayoutSettings;
 }
 
+/**
+ * Bounds on the report (common practice, no source): a rule that would say something about every
+ * one of thousands of modules lists the first FINDINGS_PER_RULE, worst first, and one more finding
+ * sums up the rest; no finding names more than IDS_PER_FINDING modules. So the report grows with
+ * the number of rules, not with the module count squared.
+ */
+export const REPORT_LIMITS = { findingsPerRule: 40, idsPerFinding: 200 } as const;
+
+const RANK = { fail: 2, warn: 1, pass: 0 } as const;
+
+/** Caps each rule's findings and each finding's module list (REPORT_LIMITS). */
+export function boundReport(findings: Finding[]): Finding[] {
+  const byRule = new Map<string, Finding[]>();
+  for (const f of findings) {
+    const list = byRule.get(f.id);
+    if (list) list.push(f);
+    else byRule.set(f.id, [f]);
+  }
+  const out: Finding[] = [];
+  const capIds = (f: Finding): Finding => (f.moduleIds && f.moduleIds.length > REPORT_LIMITS.idsPerFinding ? { ...f, moduleIds: f.moduleIds.slice(0, REPORT_LIMITS.idsPerFinding) } : f);
+  for (const [id, list] of byRule) {
+    if (list.length <= REPORT_LIMITS.findingsPerRule) {
+      out.push(...list.map(capIds));
+      continue;
+    }
+    // Worst first, keeping the rule's own order among equals (a stable sort).
+    const ranked = list.map((f, i) => ({ f, i })).sort((a, b) => RANK[b.f.status] - RANK[a.f.status] || a.i - b.i);
+    const kept = ranked.slice(0, REPORT_LIMITS.findingsPerRule - 1).sort((a, b) => a.i - b.i).map((x) => capIds(x.f));
+    const rest = ranked.slice(REPORT_LIMITS.findingsPerRule - 1).map((x) => x.f);
+    const status = rest.reduce<Finding['status']>((s, f) => (RANK[f.status] > RANK[s] ? f.status : s), 'pass');
+    const ids: string[] = [];
+    for (const f of rest) for (const m of f.moduleIds ?? []) if (ids.length < REPORT_LIMITS.idsPerFinding) ids.push(m);
+    const counts = (['fail', 'warn', 'pass'] as const).map((s) => [s, rest.filter((f) => f.status === s).length] as const).filter(([, n]) => n > 0);
+    const words = { fail: 'not met', warn: 'to look at', pass: 'met' } as const;
+    out.push(...kept, {
+      id,
+      status,
+      ...(ids.length ? { moduleIds: ids } : {}),
+      measured: rest.length,
+      required: 0,
+      unit: 'findings',
+      message: `${rest.length} more results of this rule are not listed (${counts.map(([s, n]) => `${n} ${words[s]}`).join(', ')}); fix the ones above and check again to see them.${ids.length ? ' The modules they concern are marked on the plan.' : ''}`,
+      source: list[0].source,
+    });
+  }
+  return out;
+}
+
 function guarded(family: string, run: () => Finding[]): Finding[] {
   try {
     return run();
@@ -43,7 +91,7 @@ function guarded(family: string, run: () => Finding[]): Finding[] {
 export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): CheckReport {
   const settings = resolveSettings(doc, options.studioDefaults);
   const ctx = new CheckContext(doc, settings);
-  const findings: Finding[] = [
+  const findings: Finding[] = boundReport([
     ...guarded('fit', () => [...fitInside(doc, ctx.t), ...fitWheelArch(doc, ctx.t), ...fitOverlap(doc)]),
     ...guarded('walkway', () => WALKWAY_ARRANGEMENTS.flatMap((a) => [walkwayReach(ctx, a), walkwayWidth(ctx, a)])),
     ...guarded('headroom', () => [headroomStanding(ctx), ...WALKWAY_ARRANGEMENTS.flatMap((a) => headroomOverhead(ctx, a))]),
@@ -51,7 +99,7 @@ export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): Check
     ...guarded('egress', () => egressSleep(ctx)),
     ...guarded('travel', () => [travelSeats(ctx)]),
     ...guarded('systems', () => systemChecks(doc)),
-  ];
+  ]);
   return { ok: !findings.some((f) => f.status === 'fail'), findings };
 }
 

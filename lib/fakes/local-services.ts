@@ -1,15 +1,19 @@
 /**
  * Starts the local fakes of hosted services that this process needs, once per process (guarded
  * on globalThis so dev reloads do not start them twice). Each fake is registered here with the
- * condition under which it runs; production deployments point at the real services instead.
+ * condition under which it runs; production deployments point at the real services instead and
+ * never start a fake unless asked (BAYWRIGHT_DEMO=1 or BAYWRIGHT_LOCAL_FAKES=1).
  */
+import { log } from '../log';
+import { localStandInsAllowed } from '../local-mode';
+
 type Starter = { name: string; wanted: () => boolean; start: () => Promise<void> };
 
 const g = globalThis as typeof globalThis & { __baywrightServices?: Promise<void> };
 
-/** Fakes are wanted everywhere except a real production deployment (which sets BAYWRIGHT_REAL_SERVICES=1). */
+/** Fakes run outside production, and in production only when the demo or a test asks (lib/local-mode). */
 export function fakesWanted(): boolean {
-  return process.env.BAYWRIGHT_REAL_SERVICES !== '1';
+  return localStandInsAllowed();
 }
 
 /** The fakes this app starts itself; each entry imports its fake lazily. */
@@ -41,7 +45,7 @@ export function startLocalServices(): Promise<void> {
       try {
         await s.start();
       } catch (err) {
-        console.error(`[baywright] could not start the local ${s.name}:`, err instanceof Error ? err.message : err);
+        log.error(`could not start the local ${s.name}`, { error: err });
       }
     }
   })();

@@ -23,6 +23,7 @@
  */
 import { DisjointSet } from './disjointSet';
 import type { Rect } from './rect';
+import type { WorkBudget } from './workBudget';
 
 /** A gap in one edge of the interior through which the disk enters. `from`/`to` run along that edge. */
 export interface Opening {
@@ -42,6 +43,8 @@ export interface FreeFloorInput {
   marks?: readonly number[];
   /** Largest spacing between columns, mm (default 20). */
   fillStep?: number;
+  /** Charged for every obstacle and interval a sweep or query visits; it throws when spent. */
+  budget?: WorkBudget;
 }
 
 /** Obstacles sorted once so sweeps at many radii reuse the work. */
@@ -50,6 +53,7 @@ export class FreeFloorModel {
   readonly openings: readonly Opening[];
   readonly fillStep: number;
   readonly marks: Float64Array;
+  readonly budget?: WorkBudget;
   /** Obstacles in order of x0, as columns of numbers. */
   readonly ox0: Float64Array;
   readonly ox1: Float64Array;
@@ -64,6 +68,7 @@ export class FreeFloorModel {
     this.interior = interior;
     this.openings = input.openings.filter((o) => Number.isFinite(o.from) && Number.isFinite(o.to) && o.to >= o.from);
     this.fillStep = fill;
+    this.budget = input.budget;
     this.marks = Float64Array.from((input.marks ?? []).filter(Number.isFinite));
     const obstacles = input.obstacles.filter((o) => [o.x0, o.x1, o.y0, o.y1].every(Number.isFinite) && o.x1 >= o.x0 && o.y1 >= o.y0);
     obstacles.sort((a, b) => a.x0 - b.x0);
@@ -139,6 +144,8 @@ export class FreeFloor {
   readonly entered: Uint32Array;
   /** Which openings admit the disk at all (index as in the model). */
   readonly openingUsable: boolean[];
+  /** The model's work budget, charged by the queries too. */
+  private readonly budget?: WorkBudget;
 
   constructor(model: FreeFloorModel, r: number) {
     this.radius = r;
@@ -164,8 +171,12 @@ export class FreeFloor {
     const bHi = new Float64Array(n);
     const r2 = r * r;
     const yMin = this.yMin, yMax = this.yMax;
+    const budget = model.budget;
+    this.budget = budget;
+    budget?.spend(cols);
     for (let c = 0; c < cols; c++) {
       const x = this.columns[c];
+      budget?.spend(activeCount);
       // Keep the active list ordered by y0, so the blocked intervals below come out nearly sorted.
       while (next < n && ox0[next] - r < x) {
         const y0 = oy0[next];
@@ -195,13 +206,16 @@ export class FreeFloor {
         // insertion by lower end keeps the list sorted
         const l = oy0[a] - h, u = oy1[a] + h;
         let p = blocked++;
+        let shifts = 0;
         while (p > 0 && bLo[p - 1] > l) {
+          shifts++;
           bLo[p] = bLo[p - 1];
           bHi[p] = bHi[p - 1];
           p--;
         }
         bLo[p] = l;
         bHi[p] = u;
+        if (shifts > 8) budget?.spend(shifts);
       }
       activeCount = keep;
 
@@ -351,6 +365,7 @@ export class FreeFloor {
   openingsReachingZone(zone: Rect, anyFloor = false): number {
     let mask = 0;
     for (let c = this.columnAtOrAfter(zone.x0); c < this.columns.length && this.columns[c] <= zone.x1; c++) {
+      this.budget?.spend(1 + this.colStart[c + 1] - this.colStart[c]);
       for (let i = this.colStart[c]; i < this.colStart[c + 1]; i++) {
         if (this.lo[i] <= zone.y1 && this.hi[i] >= zone.y0) mask |= this.entered[i] | (anyFloor ? 1 << 31 : 0);
       }
@@ -367,6 +382,7 @@ export class FreeFloor {
   widestSpanInZone(zone: Rect): number {
     let best = -Infinity;
     for (let c = this.columnAtOrAfter(zone.x0); c < this.columns.length && this.columns[c] <= zone.x1; c++) {
+      this.budget?.spend(1 + this.colStart[c + 1] - this.colStart[c]);
       for (let i = this.colStart[c]; i < this.colStart[c + 1]; i++) {
         if (this.entered[i] && this.lo[i] <= zone.y1 && this.hi[i] >= zone.y0) {
           const span = this.hi[i] - this.lo[i] + 2 * this.radius;
@@ -393,6 +409,7 @@ export class FreeFloor {
     const d2 = distance * distance;
     for (let c = this.columnAtOrAfter(rect.x0 - distance); c < this.columns.length && this.columns[c] <= rect.x1 + distance; c++) {
       const x = this.columns[c];
+      this.budget?.spend(1 + this.colStart[c + 1] - this.colStart[c]);
       const dx = x < rect.x0 ? rect.x0 - x : x > rect.x1 ? x - rect.x1 : 0;
       if (strict ? dx >= distance : dx > distance) continue;
       const h = dx === 0 ? distance : Math.sqrt(d2 - dx * dx);

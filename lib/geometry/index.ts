@@ -12,3 +12,4 @@ export * from './spatialIndex';
 export * from './freeFloor';
 export * from './widestPath';
 export * from './revisionCloud';
+export * from './workBudget';

@@ -12,10 +12,13 @@
  * Must never import anything of ours: plain numbers in, plain numbers out.
  */
 import type { Rect } from './rect';
+import type { WorkBudget } from './workBudget';
 
 export interface LargestRectangleOptions {
   /** Refuse inputs whose compressed grid would exceed this many cells (default 4 million). */
   maxCells?: number;
+  /** Charged with the grid's cell count before any work is done. */
+  budget?: WorkBudget;
 }
 
 /**
@@ -38,6 +41,7 @@ export function largestRectangle(rects: readonly Rect[], options: LargestRectang
   if (cols * rows > maxCells) {
     throw new RangeError(`largestRectangle: ${boxes.length} rectangles make a ${cols} × ${rows} grid, more than the ${maxCells}-cell budget`);
   }
+  options.budget?.spend(cols * rows + boxes.length);
   const xIndex = new Map(xs.map((x, i) => [x, i]));
   const yIndex = new Map(ys.map((y, i) => [y, i]));
 

@@ -8,6 +8,7 @@
 import Flatbush from 'flatbush';
 import { DisjointSet } from './disjointSet';
 import { rectGap, rectsOverlap, type Rect } from './rect';
+import type { WorkBudget } from './workBudget';
 
 function buildIndex(rects: readonly Rect[]): Flatbush | null {
   if (rects.length === 0) return null;
@@ -39,18 +40,23 @@ export function overlappingPairs(rects: readonly Rect[], accept: (i: number, j: 
  * plan). `gap = 0` joins only rectangles that touch or overlap. Each group lists indices in
  * ascending order; groups are ordered by their first index.
  */
-export function clusterByGap(rects: readonly Rect[], gap: number): number[][] {
+export function clusterByGap(rects: readonly Rect[], gap: number, budget?: WorkBudget): number[][] {
   if (!(gap >= 0) || !Number.isFinite(gap)) throw new RangeError(`clusterByGap: gap must be a finite number ≥ 0, got ${gap}`);
   const index = buildIndex(rects);
   if (!index) return [];
   const sets = new DisjointSet(rects.length);
   rects.forEach((r, i) => {
-    for (const j of index.search(r.x0 - gap, r.y0 - gap, r.x1 + gap, r.y1 + gap)) {
-      if (j > i) {
+    let visited = 0;
+    index.search(r.x0 - gap, r.y0 - gap, r.x1 + gap, r.y1 + gap, (j) => {
+      visited++;
+      if (j > i && !sets.same(i, j)) {
         const d = rectGap(r, rects[j]);
         if (d === 0 || d < gap) sets.union(i, j);
       }
-    }
+      return false;
+    });
+    // A visit costs a few steps (a distance and a union–find look-up).
+    budget?.spend(1 + 4 * visited);
   });
   const groups = new Map<number, number[]>();
   rects.forEach((_, i) => {
@@ -60,4 +66,72 @@ export function clusterByGap(rects: readonly Rect[], gap: number): number[][] {
     else groups.set(root, [i]);
   });
   return Array.from(groups.values()).sort((a, b) => a[0] - b[0]);
+}
+
+export interface OverlapGroups {
+  /** Groups of two or more rectangles chained together by accepted overlaps, indices ascending, ordered by first index. */
+  groups: number[][];
+  /** For every rectangle, the partner of its deepest accepted overlap (−1 when none was found). */
+  deepestPartner: Int32Array;
+  /** False when the work budget ran out before every rectangle was compared with its neighbours. */
+  complete: boolean;
+  /** Candidate pairs looked at. */
+  examined: number;
+}
+
+/**
+ * Clusters of mutually overlapping rectangles (chained: a overlaps b, b overlaps c), filtered by
+ * `accept`. Work is bounded by `maxExamined` candidate pairs (plus at most one more query's worth),
+ * so a pile of thousands of rectangles on one spot — n² pairs — costs no more than the budget;
+ * `complete` then says the answer may lack groups among the rectangles not yet compared.
+ * `depth(i, j)` ranks overlaps for `deepestPartner` (e.g. the smaller of the two overlap extents).
+ */
+export function overlapGroups(
+  rects: readonly Rect[],
+  accept: (i: number, j: number) => boolean,
+  depth: (i: number, j: number) => number,
+  maxExamined: number,
+): OverlapGroups {
+  const n = rects.length;
+  const deepestPartner = new Int32Array(n).fill(-1);
+  const deepest = new Float64Array(n).fill(-Infinity);
+  const index = buildIndex(rects);
+  if (!index) return { groups: [], deepestPartner, complete: true, examined: 0 };
+  const sets = new DisjointSet(n);
+  const linked = new Uint8Array(n);
+  let examined = 0;
+  let complete = true;
+  for (let i = 0; i < n; i++) {
+    if (examined >= maxExamined) {
+      complete = false;
+      break;
+    }
+    const r = rects[i];
+    index.search(r.x0, r.y0, r.x1, r.y1, (j) => {
+      examined++;
+      if (j > i && rectsOverlap(r, rects[j]) && accept(i, j)) {
+        sets.union(i, j);
+        linked[i] = linked[j] = 1;
+        const d = depth(i, j);
+        if (d > deepest[i]) {
+          deepest[i] = d;
+          deepestPartner[i] = j;
+        }
+        if (d > deepest[j]) {
+          deepest[j] = d;
+          deepestPartner[j] = i;
+        }
+      }
+      return false;
+    });
+  }
+  const byRoot = new Map<number, number[]>();
+  for (let i = 0; i < n; i++) {
+    if (!linked[i]) continue;
+    const root = sets.find(i);
+    const g = byRoot.get(root);
+    if (g) g.push(i);
+    else byRoot.set(root, [i]);
+  }
+  return { groups: Array.from(byRoot.values()), deepestPartner, complete, examined };
 }

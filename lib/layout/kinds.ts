@@ -59,3 +59,8 @@ export const KIND_LIST: KindSpec[] = Object.values(KINDS);
 export function kindSpec(kind: ModuleKind): KindSpec {
   return KINDS[kind];
 }
+
+/** What a module is called wherever people read about it: its label, else its kind's name. Never its id. */
+export function moduleLabel(m: { label?: string; kind: ModuleKind }): string {
+  return m.label?.trim() || kindSpec(m.kind).title;
+}

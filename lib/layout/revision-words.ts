@@ -4,14 +4,15 @@
  * (lib/layout/field-words), each length in the studio's units. "Mass: 60 kg → 72 kg", never
  * "massKg". Pure: a diff in, sentences out; must never import React, Next or the database.
  */
-import { KINDS } from './kinds';
+import { KINDS, moduleLabel } from './kinds';
 import { BAY_FIELD_WORDS, FACING_WORDS, MODULE_FIELD_WORDS, propWord } from './field-words';
 import type { BayChange, ModuleChange } from './revision-diff';
 import type { Module } from './schema';
 import { formatLength, type LengthUnit } from './units';
 
+/** A module's name in a change list: the one naming rule of lib/layout/kinds (`moduleLabel`). */
 export function moduleName(m: Pick<Module, 'label' | 'kind'>): string {
-  return m.label?.trim() || KINDS[m.kind].title;
+  return moduleLabel(m);
 }
 
 const ARR_WORD = { travel: 'travel', lounge: 'lounge', sleep: 'sleep' } as const;

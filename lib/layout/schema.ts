@@ -8,6 +8,9 @@
  */
 import { z } from 'zod';
 import { systemsSchema } from './systems';
+import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, SURFACES } from './vocabulary';
+
+export { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, SURFACES };
 
 /** An integer length in millimetres. Bounded so no arithmetic can overflow into nonsense. */
 const mm = (max = 100_000) => z.number().int('must be a whole number of millimetres').min(0).max(max);
@@ -19,38 +22,13 @@ export const plainText = (max: number) =>
   z.string().max(max).refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'control characters are not allowed');
 const text = plainText;
 
-export const ARRANGEMENTS = ['travel', 'lounge', 'sleep'] as const;
 export type Arrangement = (typeof ARRANGEMENTS)[number];
 export const arrangementSchema = z.enum(ARRANGEMENTS);
 
-export const FACINGS = ['front', 'rear', 'left', 'right'] as const;
 export type Facing = (typeof FACINGS)[number];
 
-export const SURFACES = ['sleep', 'seat', 'counter'] as const;
 export type Surface = (typeof SURFACES)[number];
 
-export const MODULE_KINDS = [
-  'bed-platform',
-  'bed-infill',
-  'bench-seat',
-  'seat',
-  'table',
-  'kitchen-counter',
-  'sink-unit',
-  'hob',
-  'fridge',
-  'wardrobe',
-  'drawer-unit',
-  'overhead-locker',
-  'fresh-water-tank',
-  'grey-water-tank',
-  'gas-locker',
-  'electrics-bay',
-  'heater',
-  'toilet-cabinet',
-  'shower-tray',
-  'step',
-] as const;
 export type ModuleKind = (typeof MODULE_KINDS)[number];
 export const moduleKindSchema = z.enum(MODULE_KINDS);
 
@@ -73,17 +51,6 @@ export const doorSchema = z.strictObject({
 });
 export type Door = z.infer<typeof doorSchema>;
 
-/**
- * The one set of limits for the bay's size, used by the schema (so the API), the new-layout form
- * and the editor's Bay panel alike. The upper bound keeps arithmetic sane and leaves room for the
- * synthetic stress layouts of the benchmark; a bay longer than the vehicle's overall length is
- * reported as out of range by the weight check.
- */
-export const BAY_LIMITS = {
-  length: { min: 500, max: 100_000 },
-  width: { min: 500, max: 100_000 },
-  height: { min: 500, max: 100_000 },
-} as const;
 
 export const baySchema = z
   .strictObject({
@@ -136,15 +103,6 @@ export const modulePropsSchema = z
   .record(z.string().max(40).regex(/^[A-Za-z][A-Za-z0-9]*$/, 'prop names are letters and digits'), z.union([z.number().finite(), z.boolean(), text(200)]))
   .refine((r) => Object.keys(r).length <= 32, 'at most 32 props');
 
-/** The one set of limits for a module's place and size, used by the schema and the Details panel. */
-export const MODULE_LIMITS = {
-  position: { min: -100_000, max: 100_000 },
-  length: { min: 1, max: 100_000 },
-  width: { min: 1, max: 100_000 },
-  elevation: { min: 0, max: 5000 },
-  height: { min: 1, max: 5000 },
-  massKg: { min: 0, max: 5000 },
-} as const;
 
 export const moduleSchema = z.strictObject({
   id,
@@ -166,7 +124,6 @@ export const moduleSchema = z.strictObject({
 });
 export type Module = z.infer<typeof moduleSchema>;
 
-export const MATTRESS_REGIONS = ['uk', 'eu', 'us'] as const;
 export type MattressRegion = (typeof MATTRESS_REGIONS)[number];
 
 export const settingsSchema = z.strictObject({

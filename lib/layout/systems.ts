@@ -12,6 +12,9 @@
  * `lib/planning`, rules in `lib/checks/systems`; this file only says what the data may be.
  */
 import { z } from 'zod';
+import { BATTERY_CHEMISTRIES } from './vocabulary';
+
+export { BATTERY_CHEMISTRIES };
 
 const kg = (max: number) => z.number().finite().min(0, 'cannot be negative').max(max, `at most ${max} kg`);
 /** A position along x in bay coordinates (mm); may lie ahead of the bay or behind it. */
@@ -67,7 +70,6 @@ export const loadSchema = z.strictObject({
 });
 export type LoadData = z.infer<typeof loadSchema>;
 
-export const BATTERY_CHEMISTRIES = ['lead-acid', 'agm', 'lifepo4'] as const;
 export type BatteryChemistry = (typeof BATTERY_CHEMISTRIES)[number];
 
 export const batterySchema = z.strictObject({

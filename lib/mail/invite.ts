@@ -9,9 +9,11 @@ import type { Actor } from '@/db/actor';
 import { createInvitation, type InvitationDto, type NewInvitation } from '@/db/sharing/invitations';
 import { normaliseEmail } from '@/db/accounts';
 import { requireMailBudget } from './budget';
-import { sendInvitation, type MailOutcome } from './notify';
+import { requireMail, sendInvitation, type MailOutcome } from './notify';
 
 export async function inviteAndMail(req: Request, actor: Actor, input: NewInvitation): Promise<{ invitation: InvitationDto; mail: MailOutcome }> {
+  // An invitation is a mail: on a server without mail, nothing is stored and the answer (503) says why.
+  requireMail();
   const giveBack = await requireMailBudget(actor, normaliseEmail(input.email));
   let issued;
   try {

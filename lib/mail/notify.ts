@@ -6,6 +6,7 @@
  * Must never include another studio's people, and never send a token to anyone but its invitee.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import type { IssuedInvitation } from '@/db/sharing/invitations';
 import { invitationPath, markInvitationSent } from '@/db/sharing/invitations';
@@ -15,10 +16,16 @@ import { layoutClient, revisionIssuerId, workshopFor, type Recipient } from '@/d
 import { studioName } from '@/db/sharing/access';
 import { markupMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
 import { publicUrl } from './public-url';
-import { sendMail } from './transport';
+import { MAIL_NOT_CONFIGURED, mailConfigured, sendMail } from './transport';
+import { HttpError } from '@/lib/api/respond';
 import type { ComposedMail } from './compose';
 
-export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
+export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
+
+/** For features that are nothing but a mail (invitations): refuse up front, 503, when there is no mail. */
+export function requireMail(): void {
+  if (!mailConfigured()) throw new HttpError(503, MAIL_NOT_CONFIGURED);
+}
 
 /**
  * Sends one mail per recipient. `sender` is counted against the mail budget (lib/mail/budget.ts);
@@ -26,13 +33,14 @@ export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
  */
 async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail, sender?: Actor): Promise<MailOutcome> {
   if (!to.length) return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   let ok = true;
   for (const r of to) {
     try {
       await sendMail({ ...build(r), to: r, studioId, ...(sender ? { sender: { userId: sender.userId, studioId: sender.studioId } } : {}) });
     } catch (err) {
       ok = false;
-      console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+      log.error('mail not sent', { error: err });
     }
   }
   return ok ? 'sent' : 'not-sent';
@@ -43,7 +51,7 @@ export async function sendInvitation(req: Request, actor: Actor, issued: IssuedI
   try {
     url = publicUrl(req, invitationPath(issued.token));
   } catch (err) {
-    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    log.error('mail not sent', { error: err });
     return 'not-sent';
   }
   const inv = issued.invitation;
@@ -61,7 +69,7 @@ function linkOrNull(req: Request, path: string): string | null {
   try {
     return publicUrl(req, path);
   } catch (err) {
-    console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+    log.error('mail not sent', { error: err });
     return null;
   }
 }
@@ -70,7 +78,7 @@ export async function notifyRevisionIssued(req: Request, actor: Actor, layout: {
   const client = await layoutClient(layout.id);
   if (!client) return 'no-recipient';
   const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   const studio = await studioName(actor.studioId);
   return deliver(actor.studioId, [client], (r) =>
     revisionIssuedMail({ clientName: r.name, studioName: studio, layoutName: layout.name, letter: rev.letter, note: rev.note, url }),
@@ -81,7 +89,7 @@ export async function notifyDecision(req: Request, actor: Actor, layout: { id: s
   const last = rev.decisions[rev.decisions.length - 1];
   if (!last) return 'no-recipient';
   const url = linkOrNull(req, `/layouts/${layout.id}/revisions`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   const to = await workshopFor(layout.id, [await revisionIssuerId(rev.id)]);
   return deliver(actor.studioId, to, (r) =>
     decisionMail({ recipientName: r.name, clientName: actor.name, layoutName: layout.name, letter: rev.letter, decision: last.decision, message: last.message, url }),
@@ -97,7 +105,7 @@ export async function notifyMarkup(
   threadAuthorId: string | null,
 ): Promise<MailOutcome> {
   const url = linkOrNull(req, `/layouts/${layout.id}?markup=${thread.id}`);
-  if (!url) return 'not-sent';
+  if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   let to: Recipient[];
   if (actor.role === 'client') {
     to = await workshopFor(layout.id, [layout.createdBy, threadAuthorId !== actor.userId ? threadAuthorId : null]);

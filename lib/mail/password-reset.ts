@@ -5,6 +5,7 @@
  * the address or the token. Must never run inside the answer's time.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import { issuePasswordReset, RESET_MINUTES } from '@/db/password-resets';
 import { normaliseEmail } from '@/db/accounts';
 import { reserve, throttleKey, type ThrottleRule } from '@/db/throttle';
@@ -29,7 +30,7 @@ async function mailReset(req: Request, email: string): Promise<void> {
 /** Starts the work and returns at once. */
 export function startPasswordResetMail(req: Request, email: string): void {
   const job = mailReset(req, email)
-    .catch((err) => console.error('[baywright] reset mail not sent:', err instanceof Error ? err.name : 'unknown error'))
+    .catch((err) => log.error('reset mail not sent', { errorClass: err instanceof Error ? err.name : 'unknown error' }))
     .finally(() => pending.delete(job));
   pending.add(job);
 }

@@ -7,17 +7,9 @@
 import { QUOTE_CAUTION } from '../layout/cautions';
 import { compose, oneLine, type ComposedMail } from './compose';
 
-export function formatMoney(minor: number, currency: string): string {
-  try {
-    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
-  } catch {
-    return `${(minor / 100).toFixed(2)} ${currency}`;
-  }
-}
+import { formatLongDate as day, formatMoney } from '../format';
 
-function day(d: Date): string {
-  return new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeZone: 'UTC' }).format(d);
-}
+export { formatMoney };
 
 export function quoteSentMail(p: {
   clientName: string; studioName: string; designerName: string; layoutName: string;

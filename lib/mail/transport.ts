@@ -8,6 +8,7 @@
 import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { fakeSmtpAddress } from '../fakes/smtp/address';
+import { localStandInsAllowed } from '../local-mode';
 import type { ComposedMail } from './compose';
 import { takeMailBudget, type MailSender } from './budget';
 
@@ -18,9 +19,22 @@ export class MailNotConfigured extends Error {
   }
 }
 
+/**
+ * Whether this server can send mail at all: a real relay (SMTP_URL), or where local stand-ins are
+ * allowed the development mail server. Production without SMTP_URL has no mail, and says so
+ * (lib/local-mode); it never falls back to the development server.
+ */
+export function mailConfigured(env: Record<string, string | undefined> = process.env): boolean {
+  return Boolean(env.SMTP_URL) || localStandInsAllowed(env);
+}
+
+/** Said wherever a mail feature is asked for on a server without mail. */
+export const MAIL_NOT_CONFIGURED = 'Mail is not set up on this server, so nothing can be mailed. The administrator sets SMTP_URL to a mail relay.';
+
 function transportFor(): { key: string; create: () => Transporter } {
   const url = process.env.SMTP_URL;
   if (url) return { key: `url:${url}`, create: () => nodemailer.createTransport(url) };
+  if (!localStandInsAllowed()) throw new MailNotConfigured();
   const fake = fakeSmtpAddress();
   const port = fake?.port ?? (process.env.BAYWRIGHT_SMTP_PORT ? Number(process.env.BAYWRIGHT_SMTP_PORT) : NaN);
   const host = fake?.host ?? '127.0.0.1';

@@ -1,6 +1,6 @@
 /**
- * Where the deposit flow's payment API is and which keys it uses. Outside a real deployment
- * (BAYWRIGHT_REAL_SERVICES unset) that is always the local fake payment API (lib/fakes/stripe)
+ * Where the deposit flow's payment API is and which keys it uses. Where local stand-ins are
+ * allowed (outside production, or the demo and tests: lib/local-mode) that is always the local fake payment API (lib/fakes/stripe)
  * on 127.0.0.1, with a test key and a webhook secret made for this data folder; a real
  * deployment sets STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET and the official service is used.
  *
@@ -14,6 +14,7 @@ import 'server-only';
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
+import { localStandInsAllowed } from '../local-mode';
 
 export const DEFAULT_FAKE_STRIPE_PORT = 12111;
 export const LOCAL_TEST_KEY = 'sk_test_baywright_local';
@@ -26,9 +27,14 @@ export class PaymentsNotConfigured extends Error {
   }
 }
 
-/** The fake is used everywhere except a real deployment (BAYWRIGHT_REAL_SERVICES=1). */
+/** The fake is used wherever local stand-ins are allowed; production never falls back to it. */
 export function usesFakePayments(env: Record<string, string | undefined> = process.env): boolean {
-  return env.BAYWRIGHT_REAL_SERVICES !== '1';
+  return localStandInsAllowed(env);
+}
+
+/** Whether deposits can be taken at all: the fake where allowed, else both real settings. */
+export function paymentsConfigured(env: Record<string, string | undefined> = process.env): boolean {
+  return usesFakePayments(env) || Boolean(env.STRIPE_SECRET_KEY && env.STRIPE_WEBHOOK_SECRET);
 }
 
 type GlobalWithFake = typeof globalThis & { __baywrightFakeStripeAddress?: { host: string; port: number } };

@@ -5,18 +5,19 @@
  * says `not-sent` and the server log says why. Must never mail anyone but the quote's client.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import type { QuoteDto } from '@/db/quotes';
 import { markReceiptSent, receiptFacts } from '@/db/quotes';
 import { layoutClient } from '@/db/sharing/recipients';
 import { depositReceiptMail, quoteSentMail } from '@/lib/mail/receipt';
 import { returnOrigin } from './return-origin';
-import { sendMail } from '@/lib/mail/transport';
+import { mailConfigured, sendMail } from '@/lib/mail/transport';
 
-export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient';
+export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
 
 function logNotSent(err: unknown): MailOutcome {
-  console.error('[baywright] mail not sent:', err instanceof Error ? err.message : err);
+  log.error('mail not sent', { error: err });
   return 'not-sent';
 }
 
@@ -27,6 +28,7 @@ export function quotePath(layoutId: string): string {
 export async function mailQuoteToClient(req: Request, actor: Actor, quote: QuoteDto): Promise<MailOutcome> {
   const client = await layoutClient(quote.layoutId);
   if (!client) return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   try {
     const url = `${returnOrigin(req)}${quotePath(quote.layoutId)}`;
     await sendMail({
@@ -48,6 +50,7 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
 export async function mailReceipt(req: Request, quoteId: string, paymentRef: string | null): Promise<MailOutcome> {
   const facts = await receiptFacts(quoteId);
   if (!facts?.client || facts.quote.status !== 'paid') return 'no-recipient';
+  if (!mailConfigured()) return 'not-configured';
   const q = facts.quote;
   try {
     const url = `${returnOrigin(req)}${quotePath(q.layoutId)}`;

@@ -10,6 +10,7 @@
  * signatures and secrets.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import type Stripe from 'stripe';
 import type { Actor } from '@/db/actor';
 import { checkoutSessionOfLayout, quoteForCheckout, recordCheckoutOpened, recordDepositPaid, type PaidOutcome, type ProviderPayment } from '@/db/quotes';
@@ -92,7 +93,7 @@ export async function takeWebhook(req: Request): Promise<WebhookResult> {
   const session = event.data.object as Stripe.Checkout.Session;
   const payment = fromSession(session, { id: event.id, type: event.type });
   const outcome = await recordDepositPaid(payment);
-  if (outcome.kind === 'ignored') console.warn(`[baywright] payment event ${event.id} ${outcome.reason}`);
+  if (outcome.kind === 'ignored') log.warn('payment event ignored', { eventId: event.id, reason: outcome.reason });
   const receipt = outcome.kind === 'paid' ? await mailReceipt(req, outcome.quoteId, payment.providerPaymentId) : null;
   return { outcome, receipt };
 }
@@ -109,7 +110,7 @@ export async function checkReturnedSession(req: Request, actor: Actor, layoutId:
   try {
     session = await stripeClient().checkout.sessions.retrieve(ours);
   } catch (err) {
-    console.error('[baywright] could not check the returned checkout:', err instanceof Error ? err.message : err);
+    log.error('could not check the returned checkout', { error: err });
     return null;
   }
   const payment = fromSession(session);

@@ -5,6 +5,7 @@
  * parameters) into an answer; the server log gets the message.
  */
 import 'server-only';
+import { log } from '@/lib/log';
 import Stripe from 'stripe';
 import { HttpError } from '@/lib/api/respond';
 import { PaymentsNotConfigured } from './config';
@@ -12,7 +13,7 @@ import { PaymentsNotConfigured } from './config';
 export function asPaymentHttpError(err: unknown): unknown {
   if (err instanceof PaymentsNotConfigured) return new HttpError(503, err.message);
   if (err instanceof Stripe.errors.StripeError) {
-    console.error(`[baywright] payment API: ${err.type}: ${err.message}`);
+    log.error('payment API error', { type: err.type, message: err.message });
     return new HttpError(502, 'The payment service did not answer as expected; nothing was charged. Try again in a moment.');
   }
   return err;

@@ -13,7 +13,8 @@
  * `cutListFromDoc(doc, options)` → parts; `planCutList(doc, options)` → parts nested per material.
  * Pure; never throws on a valid LayoutDoc. Must never import UI, framework or database code.
  */
-import { kindSpec, type LayoutDoc, type Module, type ModuleKind } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import type { LayoutDoc, Module, ModuleKind } from '../layout';
 import { moduleName, numericProp } from './module-facts';
 import { nestCutList, STANDARD_SHEET, type NestOptions, type NestResult, type SheetSize } from './sheet-nesting';
 

@@ -5,7 +5,8 @@
  *
  * Pure: reads a LayoutDoc, returns plain data. Must never import UI, framework or database code.
  */
-import { kindSpec, type LayoutDoc, type Module } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import type { LayoutDoc, Module } from '../layout';
 
 export function moduleMassKg(m: Module): number {
   return m.massKg ?? kindSpec(m.kind).massKg;

@@ -11,7 +11,8 @@
  * `computePartsList(doc, priceList, cutOptions?)` → `PartsList`; `quoteDeposit(gross, pct)`.
  * Pure; never throws on a valid LayoutDoc. Must never import UI, framework or database code.
  */
-import { kindSpec, type LayoutDoc, type ModuleKind } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import type { LayoutDoc, ModuleKind } from '../layout';
 import { CHEMISTRIES } from './battery-sizing';
 import { cableSize, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, nominalSystemVolts } from './cable-size';
 import { planCutList, type CutListOptions } from './cut-list';

@@ -8,7 +8,7 @@
  * Plain data. Must never import UI, framework or database code.
  */
 import { KIND_LIST } from '../layout/kinds';
-import { BATTERY_CHEMISTRIES } from '../layout/systems';
+import { BATTERY_CHEMISTRIES } from '../layout/vocabulary';
 import { CHEMISTRIES } from './battery-sizing';
 import { METRIC_SIZES_MM2 } from './conductors';
 import { SHEET_MATERIALS } from './cut-list';

@@ -6,15 +6,16 @@
  */
 import type { LayoutDoc } from '../layout';
 import { buildPlanSummary } from '../planning/summary';
+import { NOT_YET_CHECKED, STATUS_WORDS } from '../checks/words';
 import type { ColumnFlow } from './flow';
 import { TYPE } from './drafting';
 import type { Ink, SheetItem } from './primitives';
 import { lineHeight, wrap } from './typography';
 
 const STATE: Record<'ok' | 'attention' | 'unknown', { word: string; ink: Ink }> = {
-  ok: { word: 'OK', ink: 'moss' },
-  attention: { word: 'CHECK', ink: 'brick' },
-  unknown: { word: 'NOT KNOWN', ink: 'soft' },
+  ok: { word: `+ ${STATUS_WORDS.pass.word}`, ink: 'moss' },
+  attention: { word: `! ${STATUS_WORDS.warn.word}`, ink: 'brick' },
+  unknown: { word: `? ${NOT_YET_CHECKED}`, ink: 'soft' },
 };
 
 export function flowBuildPlan(flow: ColumnFlow, doc: LayoutDoc): void {

@@ -5,19 +5,18 @@
  * plainly instead of showing an empty list. Pure.
  */
 import type { CheckReport, Finding, FindingStatus } from '../checks/types';
+import { STATUS_ORDER as ORDER, STATUS_WORDS, foldWaiting, needsLine, ruleName, statusCounts } from '../checks/words';
 import type { ColumnFlow } from './flow';
 import { TYPE } from './drafting';
 import type { Ink, SheetItem } from './primitives';
 import { lineHeight, wrap } from './typography';
 
-const ORDER: FindingStatus[] = ['fail', 'warn', 'pass'];
 
 /**
  * At most this many findings are written out in full (failures first); the rest are counted, so
  * a layout with thousands of findings still makes a sheet a person can read.
  */
 export const MAX_FINDINGS_LISTED = 120;
-const WORD: Record<FindingStatus, string> = { fail: 'FAIL', warn: 'WARN', pass: 'PASS' };
 const MARK: Record<FindingStatus, string> = { fail: 'x', warn: '!', pass: '+' };
 const INK: Record<FindingStatus, Ink> = { fail: 'brick', warn: 'ochre', pass: 'moss' };
 
@@ -40,17 +39,18 @@ export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavail
     flow.place(lines.length * lh + 2, (x, y) => lines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, ink: 'brick' })));
     return;
   }
-  const counts = countByStatus(report.findings);
-  const summary = `${counts.fail} failing, ${counts.warn} to watch, ${counts.pass} passing${report.ok ? ' — nothing fails.' : ' — resolve every failure before building.'}`;
+  const { judged, needs, waiting } = foldWaiting(report.findings);
+  const counts = countByStatus(judged);
+  const summary = `${statusCounts(counts, waiting)}${report.ok ? ' — every requirement checked is met or needs attention only.' : ' — put right every requirement that is not met before building.'}`;
   flow.place(lh + 2, (x, y) => [{ type: 'text', x, y: y + lh, text: summary, size, font: 'sans-bold' }]);
   if (report.findings.length === 0) {
     flow.place(lh, (x, y) => [{ type: 'text', x, y: y + lh, text: 'The checks found nothing to report.', size, ink: 'soft' }]);
     return;
   }
-  const sorted = sortFindings(report.findings);
+  const sorted = sortFindings(judged);
   const listed = sorted.slice(0, MAX_FINDINGS_LISTED);
   for (const f of listed) {
-    const head = [`${MARK[f.status]} ${WORD[f.status]}`, f.arrangement, f.id].filter(Boolean).join(' · ');
+    const head = [`${MARK[f.status]} ${STATUS_WORDS[f.status].word}`, ruleName(f.id), f.arrangement].filter(Boolean).join(' · ');
     const body = wrap(f.message, size, flow.columnWidth - 3);
     const source = f.source ? wrap(`Source: ${f.source}`, TYPE.small, flow.columnWidth - 3) : [];
     const height = lh * (1 + body.length) + lineHeight(TYPE.small) * source.length + 1.6;
@@ -63,8 +63,11 @@ export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavail
   }
   if (sorted.length > listed.length) {
     const rest = countByStatus(sorted.slice(listed.length));
-    const words = (['fail', 'warn', 'pass'] as const).filter((k) => rest[k]).map((k) => `${rest[k]} ${k === 'fail' ? 'failing' : k === 'warn' ? 'to watch' : 'passing'}`);
-    const lines = wrap(`…and ${sorted.length - listed.length} more findings not listed here (${words.join(', ')}). Open the Checks in the editor for all of them.`, size, flow.columnWidth);
+    const lines = wrap(`…and ${sorted.length - listed.length} more findings not listed here (${statusCounts(rest)}). Open the Checks in the editor for all of them.`, size, flow.columnWidth);
     flow.place(lines.length * lh + 2, (x, y) => lines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, font: 'sans-bold' })));
+  }
+  if (needs.length > 0) {
+    const lines = wrap(`${needsLine(needs)}. Enter them in the build plan.`, size, flow.columnWidth);
+    flow.place(lines.length * lh + 2, (x, y) => lines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, font: i === 0 ? 'sans-bold' : 'sans', ink: 'soft' })));
   }
 }

@@ -5,7 +5,8 @@
  * the paper at that scale it says so, with the sizes, and suggests a scale (or paper) that fits.
  * Pure: a document and its details in, a SheetDocument out; must never render or read the clock.
  */
-import { ARRANGEMENTS, type LayoutDoc, type LengthUnit } from '../layout';
+import { ARRANGEMENTS } from '../layout/vocabulary';
+import type { LayoutDoc, LengthUnit } from '../layout';
 import type { CheckReport } from '../checks/types';
 import { flowCautions } from './cautions';
 import { flowBuildPlan } from './build-plan';

@@ -6,5 +6,6 @@ export * from './paper';
 export * from './primitives';
 export { composeSheet, fitOf, suggestFit, type SheetRequest, type SheetResult, type Suggestion } from './compose';
 export { renderPdf, type PdfOptions } from './render-pdf';
+export { SHEET_FONT_FILES, type SheetFonts } from './fonts';
 export { REVISION_LETTER, revisionWords, type TitleDetails } from './title-block';
 export { SAFETY_CAUTIONS } from './cautions';

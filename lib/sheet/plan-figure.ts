@@ -6,11 +6,14 @@
  * left, x rearwards to the right, the left wall at the top (as in the editor).
  * Pure: a document in, sheet items out; must never render or measure the page.
  */
-import { kindSpec, formatLength, type Arrangement, type LayoutDoc, type LengthUnit, type Module } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import { formatLength } from '../layout/units';
+import type { Arrangement, LayoutDoc, LengthUnit, Module } from '../layout';
 import { dimension, hatch, LINE, stipple, TYPE } from './drafting';
 import { onPaper } from './paper';
 import type { SheetItem } from './primitives';
 import { fit } from './typography';
+import { symbolItems } from './module-symbol';
 
 /** Paper space around the bay for dimension strings (left, top) and the caption (bottom). */
 export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
@@ -153,23 +156,14 @@ function drawModule(m: Module, x: number, y: number, w: number, h: number, numbe
     case 'upholstery':
       items.push(...stipple(x, y, w, h, 2.4));
       break;
-    case 'water':
-      // The fill line at the tank's level (two thirds full as drawn).
-      items.push({ type: 'line', x1: x + 0.4, y1: y + h / 3, x2: x + w - 0.4, y2: y + h / 3, width: LINE.thin, ink: 'soft' });
-      items.push(...hatch(x, y + h / 3, w, (h * 2) / 3, 1.6, 0, 'faint'));
-      break;
-    case 'sanitary':
-      items.push({ type: 'rect', x: x + Math.min(1, w / 6), y: y + Math.min(1, h / 6), w: w - 2 * Math.min(1, w / 6), h: h - 2 * Math.min(1, h / 6), stroke: 'soft', width: LINE.hair });
-      break;
-    case 'appliance':
-      items.push({ type: 'line', x1: x, y1: y, x2: x + w, y2: y + h, width: LINE.hair, ink: 'faint' }, { type: 'line', x1: x + w, y1: y, x2: x, y2: y + h, width: LINE.hair, ink: 'faint' });
-      break;
     default:
       break;
   }
   if (family === 'electrics') items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: [0.4, 0.6] });
   else items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
   if (family === 'gas' && w > 1.6 && h > 1.6) items.push({ type: 'rect', x: x + 0.6, y: y + 0.6, w: w - 1.2, h: h - 1.2, stroke: 'ink', width: LINE.thin });
+  // The kind's symbol, from the table the editor draws too.
+  if (hatched) items.push(...symbolItems(m, x, y, w / m.length));
   items.push(...numberTag(m, x, y, w, h, number));
   return items;
 }

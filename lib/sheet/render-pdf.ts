@@ -1,16 +1,18 @@
 /**
  * Renders a SheetDocument into a PDF with pdf-lib: one page per sheet page at its exact paper size
- * (mm → pt at 72 / 25.4), the standard Helvetica and Courier fonts, and no scaling of any kind, so
- * a drawing at 1:20 is 1:20 when printed at 100 %. Pure (bytes out); must never touch the network
- * or the file system.
+ * (mm → pt at 72 / 25.4), the product's own faces embedded as subsets (the caller passes their
+ * bytes, see fonts.ts), and no scaling of any kind, so a drawing at 1:20 is 1:20 when printed at
+ * 100 %. Pure (bytes out); must never touch the network or the file system.
  */
 import {
   LineCapStyle, PDFDocument, degrees, lineTo, moveTo, popGraphicsState, pushGraphicsState, rgb, setDashPattern, setLineCap,
   setLineWidth, setStrokingColor, stroke, type PDFFont, type PDFOperator, type PDFPage, type RGB,
 } from 'pdf-lib';
+import fontkit from '@pdf-lib/fontkit';
+import { SHEET_FONT_FEATURES, type SheetFonts } from './fonts';
 import { PT_PER_MM } from './paper';
 import { INK_HEX, type FontFace, type Ink, type LineItem, type SheetDocument, type SheetItem } from './primitives';
-import { printable, standardFontName } from './typography';
+import { printable } from './typography';
 
 function colour(ink: Ink | undefined): RGB {
   const hex = INK_HEX[ink ?? 'ink'];
@@ -18,23 +20,28 @@ function colour(ink: Ink | undefined): RGB {
 }
 
 export interface PdfOptions {
+  /** The faces' bytes (fonts/*.woff, named in fonts.ts). */
+  fonts: SheetFonts;
   /** Fixed dates make byte-identical output for tests. */
   created?: Date;
   author?: string;
 }
 
-export async function renderPdf(sheet: SheetDocument, options: PdfOptions = {}): Promise<Uint8Array> {
+export async function renderPdf(sheet: SheetDocument, options: PdfOptions): Promise<Uint8Array> {
   const pdf = await PDFDocument.create();
+  pdf.registerFontkit(fontkit);
   pdf.setTitle(printable(sheet.title));
   pdf.setCreator('Baywright');
-  pdf.setProducer('Baywright plan sheet (pdf-lib)');
+  pdf.setProducer('Baywright plan sheet');
   if (options.author) pdf.setAuthor(printable(options.author));
   if (options.created) {
     pdf.setCreationDate(options.created);
     pdf.setModificationDate(options.created);
   }
   const fonts = new Map<FontFace, PDFFont>();
-  for (const face of ['sans', 'sans-bold', 'mono'] as FontFace[]) fonts.set(face, await pdf.embedFont(standardFontName(face)));
+  for (const face of ['sans', 'sans-bold', 'mono'] as FontFace[]) {
+    fonts.set(face, await pdf.embedFont(options.fonts[face], { subset: true, features: { ...SHEET_FONT_FEATURES } }));
+  }
 
   for (const p of sheet.pages) {
     const page = pdf.addPage([p.width * PT_PER_MM, p.height * PT_PER_MM]);

@@ -1,9 +1,12 @@
 /**
  * The module schedule: one row per module, numbered as on the plans — kind, label, size
  * (length × width × height), position, elevation above the finished floor, mass and the
- * arrangements it exists in — flowed across pages with the header repeated. Pure.
+ * arrangements it exists in — flowed across pages with the header repeated, at most
+ * SCHEDULE_MAX_ROWS rows. Pure.
  */
-import { formatLength, kindSpec, type LayoutDoc, type LengthUnit, type Module } from '../layout';
+import { kindSpec } from '../layout/kinds';
+import { formatLength } from '../layout/units';
+import type { LayoutDoc, LengthUnit, Module } from '../layout';
 import type { ColumnFlow } from './flow';
 import { LINE, TYPE } from './drafting';
 import type { SheetItem } from './primitives';
@@ -44,6 +47,13 @@ function trim(n: number): string {
 
 const ROW = lineHeight(TYPE.label) + 1.2;
 
+/**
+ * Rows the printed schedule lists (common practice, no source: a van has tens of modules; a few
+ * hundred rows is already a dozen pages). Beyond it one line says how many more there are, so a
+ * layout of thousands of modules cannot make a sheet of a hundred pages.
+ */
+export const SCHEDULE_MAX_ROWS = 300;
+
 export function flowSchedule(flow: ColumnFlow, doc: LayoutDoc, units: LengthUnit): void {
   const cols = scheduleColumns(units);
   const total = doc.modules.reduce((sum, m) => sum + (m.massKg ?? kindSpec(m.kind).massKg), 0);
@@ -59,8 +69,9 @@ export function flowSchedule(flow: ColumnFlow, doc: LayoutDoc, units: LengthUnit
     flow.place(ROW, (x, y) => [{ type: 'text', x, y: y + ROW - 1.6, text: 'No modules placed yet.', size: TYPE.label, ink: 'soft' }]);
     return;
   }
+  const listed = doc.modules.slice(0, SCHEDULE_MAX_ROWS);
   flow.withHeader(ROW, header, () => {
-    doc.modules.forEach((m, i) => {
+    listed.forEach((m, i) => {
       flow.place(ROW, (x, y, width) => {
         const xs = positions(cols, x, width);
         const items: SheetItem[] = cols.map((c, j) => cellText(c.cell(m, i + 1), xs[j], xs[j + 1], y + ROW - 1.6, c.font ?? 'sans', c.align));
@@ -69,6 +80,9 @@ export function flowSchedule(flow: ColumnFlow, doc: LayoutDoc, units: LengthUnit
       });
     });
   });
+  if (listed.length < doc.modules.length) {
+    flow.place(ROW, (x, y) => [{ type: 'text', x, y: y + ROW - 1.6, text: `… and ${doc.modules.length - listed.length} more modules, not listed here (the first ${listed.length} are).`, size: TYPE.label, ink: 'soft' }]);
+  }
   flow.place(ROW + 1, (x, y, width) => [
     { type: 'line', x1: x, y1: y + 0.3, x2: x + width, y2: y + 0.3, width: LINE.thin, ink: 'ink' },
     { type: 'text', x, y: y + ROW, text: `${doc.modules.length} modules · ${trim(total)} kg as listed (~ = the kind's typical mass; weigh the finished build).`, size: TYPE.small, ink: 'soft' },

@@ -5,7 +5,8 @@
  * a standing figure of the chosen stature where the floor is free. Cab on the left.
  * Pure: a document in, sheet items out; must never render.
  */
-import { formatLength, type LayoutDoc, type LengthUnit } from '../layout';
+import { formatLength } from '../layout/units';
+import type { LayoutDoc, LengthUnit } from '../layout';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
 import { HATCH_MODULE_LIMIT, scheduleNumbers, thickness } from './plan-figure';

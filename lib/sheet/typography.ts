@@ -1,35 +1,32 @@
 /**
- * Measuring and wrapping text for the sheet with the metrics of the PDF standard fonts
- * (Helvetica for text, Courier for dimensions), so a line that fits in the PDF also fits in the
- * SVG view (which asks for the metric-compatible Arial / Courier New). The standard fonts encode
- * WinAnsi only: `printable` maps the few symbols we use to plain equivalents and replaces the
- * rest, so no user text can make PDF generation throw. Pure; never draws.
+ * Measuring and wrapping text for the sheet with the metrics of its own faces (IBM Plex Sans and
+ * Mono, embedded in the PDF and loaded by the SVG view), so a line that fits in the PDF also fits
+ * in the SVG view. `printable` spells the few symbols the faces lack the plain way and replaces
+ * anything else they cannot draw, so no user text can make PDF generation throw. Pure; never draws.
  */
-import { StandardFontEmbedder, StandardFonts } from 'pdf-lib';
+import { FONT_METRICS } from './font-metrics';
 import { PT_PER_MM } from './paper';
 import type { FontFace } from './primitives';
 
-const FONT_NAME: Record<FontFace, StandardFonts> = {
-  sans: StandardFonts.Helvetica,
-  'sans-bold': StandardFonts.HelveticaBold,
-  mono: StandardFonts.Courier,
+function table(packed: string): Map<number, number> {
+  const widths = new Map<number, number>();
+  for (const pair of packed.split(',')) {
+    const [cp, w] = pair.split(':');
+    widths.set(parseInt(cp, 36), Number(w));
+  }
+  return widths;
+}
+
+const WIDTHS: Record<FontFace, Map<number, number>> = {
+  sans: table(FONT_METRICS.sans),
+  'sans-bold': table(FONT_METRICS['sans-bold']),
+  mono: table(FONT_METRICS.mono),
 };
 
-const embedders = new Map<FontFace, StandardFontEmbedder>();
-function embedder(face: FontFace): StandardFontEmbedder {
-  let e = embedders.get(face);
-  if (!e) {
-    e = StandardFontEmbedder.for(FONT_NAME[face] as never); // same names, typed by another package
-    embedders.set(face, e);
-  }
-  return e;
-}
+/** Characters every face can draw. */
+const DRAWABLE = new Set([...WIDTHS.sans.keys()].filter((cp) => WIDTHS['sans-bold'].has(cp) && WIDTHS.mono.has(cp)));
 
-export function standardFontName(face: FontFace): StandardFonts {
-  return FONT_NAME[face];
-}
-
-/** Symbols outside WinAnsi that our own wording uses, spelled the plain way. */
+/** Symbols our own wording uses that the faces lack, spelled the plain way (only used when missing). */
 const PLAIN: Record<string, string> = {
   '≤': '<=',
   '≥': '>=',
@@ -51,23 +48,26 @@ const PLAIN: Record<string, string> = {
   '\u202F': ' ',
 };
 
-/** Text the standard fonts can encode: known symbols spelled out, anything else as "?". */
+/** Text the faces can draw: characters they lack spelled the plain way, anything else as "?". */
 export function printable(text: string): string {
-  const enc = embedder('sans').encoding;
   let out = '';
   for (const ch of String(text).replace(/[\r\n\t]+/g, ' ')) {
-    const mapped = PLAIN[ch] ?? ch;
-    for (const c of mapped) {
-      const cp = c.codePointAt(0)!;
-      out += cp >= 0x20 && enc.canEncodeUnicodeCodePoint(cp) ? c : '?';
+    const cp = ch.codePointAt(0)!;
+    if (DRAWABLE.has(cp)) {
+      out += ch;
+      continue;
     }
+    for (const c of PLAIN[ch] ?? '?') out += DRAWABLE.has(c.codePointAt(0)!) ? c : '?';
   }
   return out;
 }
 
-/** Width of a text in mm at `size` pt. */
+/** Width of a text in mm at `size` pt (the text as `printable` makes it). */
 export function textWidth(text: string, size: number, face: FontFace = 'sans'): number {
-  return embedder(face).widthOfTextAtSize(printable(text), size) / PT_PER_MM;
+  const widths = WIDTHS[face];
+  let em = 0;
+  for (const ch of printable(text)) em += widths.get(ch.codePointAt(0)!) ?? 0;
+  return (em * size) / 1000 / PT_PER_MM;
 }
 
 /** Line height in mm for `size` pt type (1.25 leading). */

@@ -46,7 +46,7 @@ export async function startTestServer(options: TestServerOptions): Promise<TestS
   if (options.seed) seedDatabase(options.db, root);
   const child = spawn('npx', ['next', 'start', '-p', String(options.port), '-H', '127.0.0.1'], {
     cwd: root,
-    env: { ...process.env, BAYWRIGHT_DB: options.db, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', ...options.env },
+    env: { ...process.env, BAYWRIGHT_DB: options.db, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', BAYWRIGHT_LOCAL_FAKES: '1', ...options.env },
     stdio: options.quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
     detached: true,
   });

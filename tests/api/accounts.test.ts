@@ -9,6 +9,7 @@ import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, sessionCookie } from '../helpers/http';
 import { decodeCached, type SessionClaims } from '@/lib/auth/token-cache';
+import { PEER_HEADER } from '@/lib/auth/address';
 
 let db: Db;
 beforeAll(async () => {
@@ -83,7 +84,7 @@ describe('the decoded-session cache', () => {
   });
 
   it('refuses a token whose text was changed, even when the original is cached', async () => {
-    const made = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Tamper Test', email: 'tamper@selfbuild.test', password: 'tamper-long-password' }, headers: { 'x-forwarded-for': '10.9.9.8' } });
+    const made = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Tamper Test', email: 'tamper@selfbuild.test', password: 'tamper-long-password' }, headers: { [PEER_HEADER]: '10.9.9.8' } });
     const [{ u, m }] = await db.select({ u: users, m: memberships }).from(users).innerJoin(memberships, eq(memberships.userId, users.id)).where(eq(users.id, made.body.id));
     const cookie = await sessionCookie({ id: u.id, studioId: m.studioId, sessionVersion: u.sessionVersion });
     expect((await call(list.GET, { headers: { cookie } })).status).toBe(200);

@@ -9,7 +9,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { openPglite, type Db } from '@/db/client';
 import { studios, users } from '@/db/schema';
 import { isUniqueViolation } from '@/db/sharing/pg-errors';
-import { templateFor, templatePath } from '@/db/pglite-template.mjs';
+import { templateFor, templatePath } from '@/db/pglite/template.mjs';
 
 const root = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-thread-'));
 const dir = path.join(root, 'db');
@@ -68,7 +68,7 @@ describe('PGlite in a worker thread', () => {
         error = err;
       }
       expect(isUniqueViolation(error)).toBe(true);
-      expect(String((error as Error).stack ?? '')).not.toContain('pglite-thread.mjs');
+      expect(String((error as Error).stack ?? '')).not.toContain('thread.mjs');
     });
   }, 60_000);
 });

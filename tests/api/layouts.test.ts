@@ -4,7 +4,7 @@ import { eq } from 'drizzle-orm';
 import * as list from '@/app/api/layouts/route';
 import * as one from '@/app/api/layouts/[id]/route';
 import { layouts, users } from '@/db/schema';
-import { clearDocCache, getLayout } from '@/db/layouts';
+import { clearDocCache, getLayout, getLayoutJson } from '@/db/layouts';
 import { loadActor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
 import type { Db } from '@/db/client';
@@ -157,6 +157,18 @@ describe('GET /api/layouts/:id from the document cache', () => {
     }
   });
 
+  it('writes the very characters JSON.stringify writes for the DTO, cold and from the cache', async () => {
+    clearDocCache();
+    for (const who of [w.owner, w.client]) {
+      const actor = (await loadActor(who.id, who.studioId, 0))!;
+      const expected = JSON.stringify(await getLayout(actor, w.clientLayoutId));
+      for (const round of ['cold', 'cached']) {
+        const answer = await getLayoutJson(actor, w.clientLayoutId);
+        expect(answer.json, round).toBe(expected);
+      }
+    }
+  });
+
   it('shows a save at once, and names that change without a save', async () => {
     const before = (await call(one.GET, { as: w.owner, params: { id: w.clientLayoutId } })).body;
     const doc = { ...before.doc, occupants: { ...before.doc.occupants, standingHeight: before.doc.occupants.standingHeight + 3 } };
@@ -264,6 +276,34 @@ describe('text the database cannot hold', () => {
     const nested = await call(list.POST, { method: 'POST', as: w.designer, json: { name: 'ok', doc: { ...starterLayoutDoc(), modules: [{ ...starterLayoutDoc().modules[0], label: 'a\u0000b' }] } } });
     expect(nested.status).toBe(400);
     expect((await db.select().from(layouts)).length).toBe(before);
+  });
+});
+
+describe('text that is not text: a lone UTF-16 surrogate', () => {
+  it.each([
+    ['a layout name', { name: 'Van \ud800', bayTemplateId: 'l2h2' }, 'name'],
+    ['a low surrogate alone', { name: '\udc00 van', bayTemplateId: 'l2h2' }, 'name'],
+    ['a module label deep in the document', { name: 'ok', doc: { ...starterLayoutDoc(), modules: [{ ...starterLayoutDoc().modules[0], label: 'bed \ud83d' }] } }, 'doc.modules.0.label'],
+    ['a key of an object', { name: 'ok', doc: { ...starterLayoutDoc(), ['\ud800']: 1 } }, 'doc.\ud800'],
+  ])('in %s answers 400 naming the field, never 500, and stores nothing', async (_what, body, path) => {
+    const before = (await db.select().from(layouts)).length;
+    // JSON.stringify writes a lone surrogate as a \u escape, which is how a client would send it.
+    const res = await call(list.POST, { method: 'POST', as: w.designer, body: JSON.stringify(body), headers: { 'content-type': 'application/json' } });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toEqual([{ path, message: expect.stringMatching(/broken character/) }]);
+    expect((await db.select().from(layouts)).length).toBe(before);
+  });
+
+  it('is refused on a save too, and the stored layout keeps its name', async () => {
+    const id = w.clientLayoutId;
+    const before = await stored(id);
+    const res = await call(one.PUT, {
+      method: 'PUT', as: w.designer, params: { id }, headers: { 'if-match': String(before.version), 'content-type': 'application/json' },
+      body: JSON.stringify({ name: 'Renamed \udfff', doc: starterLayoutDoc() }),
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].path).toBe('name');
+    expect((await stored(id)).name).toBe(before.name);
   });
 });
 

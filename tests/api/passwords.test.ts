@@ -2,6 +2,7 @@
 // the common-password list of @zxcvbn-ts/language-common; OWASP ASVS 4.0.3 V2.1.1 and V2.1.7)
 // on every path that sets one: sign-up, accepting an invitation, change, reset.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { PEER_HEADER } from '@/lib/auth/address';
 import { eq } from 'drizzle-orm';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import * as changeRoute from '@/app/api/account/password/route';
@@ -30,7 +31,7 @@ const FIRST = 'ana-first-long-password';
 beforeAll(async () => {
   db = await useFreshDb();
   smtp = await startMailSink();
-  const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Ana Pereira', email: 'ana@pw.test', password: FIRST }, headers: { 'x-forwarded-for': '10.70.0.1' } });
+  const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Ana Pereira', email: 'ana@pw.test', password: FIRST }, headers: { [PEER_HEADER]: '10.70.0.1' } });
   expect(res.status).toBe(201);
   const signed = await authenticate('ana@pw.test', FIRST, '10.70.0.1');
   if (!signed.ok) throw new Error('sign-in failed');
@@ -48,7 +49,7 @@ describe('the password rule', () => {
   const COMMON = ['1qaz2wsx3edc', 'QWERTY123456'];
 
   it.each(COMMON)('refuses the common password %s at sign-up with a clear message', async (password) => {
-    const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'C', email: `c-${password}@pw.test`, password }, headers: { 'x-forwarded-for': '10.70.0.2' } });
+    const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'C', email: `c-${password}@pw.test`, password }, headers: { [PEER_HEADER]: '10.70.0.2' } });
     expect(res.status).toBe(400);
     expect(res.body.issues).toContainEqual({ path: 'password', message: PASSWORD_TOO_COMMON });
   });
@@ -84,8 +85,8 @@ describe('changing a password', () => {
   });
 
   it('throttles guesses at the current password like sign-ins', async () => {
-    for (let i = 0; i < 10; i++) await call(changeRoute.POST, { method: 'POST', as: ana, json: { currentPassword: `guess-${i}`, newPassword: 'ana-second-long-password' }, headers: { 'x-forwarded-for': '10.70.9.9' } });
-    const res = await call(changeRoute.POST, { method: 'POST', as: ana, json: { currentPassword: FIRST, newPassword: 'ana-second-long-password' }, headers: { 'x-forwarded-for': '10.70.9.9' } });
+    for (let i = 0; i < 10; i++) await call(changeRoute.POST, { method: 'POST', as: ana, json: { currentPassword: `guess-${i}`, newPassword: 'ana-second-long-password' }, headers: { [PEER_HEADER]: '10.70.9.9' } });
+    const res = await call(changeRoute.POST, { method: 'POST', as: ana, json: { currentPassword: FIRST, newPassword: 'ana-second-long-password' }, headers: { [PEER_HEADER]: '10.70.9.9' } });
     expect(res.status).toBe(429);
     expect(Number(res.headers.get('retry-after'))).toBeGreaterThanOrEqual(1);
   });
@@ -147,7 +148,7 @@ describe('resetting a password by mail', () => {
   it('mails one address at most three links an hour, and still answers the same', async () => {
     const before = (await mailFor(db, 'ana@pw.test')).length;
     const answers = [];
-    for (let i = 0; i < 5; i++) answers.push(await call(resetRequest.POST, { method: 'POST', json: { email: 'ana@pw.test' }, headers: { 'x-forwarded-for': `10.71.0.${i}` } }));
+    for (let i = 0; i < 5; i++) answers.push(await call(resetRequest.POST, { method: 'POST', json: { email: 'ana@pw.test' }, headers: { [PEER_HEADER]: `10.71.0.${i}` } }));
     await settledResetMail();
     expect(new Set(answers.map((a) => a.status))).toEqual(new Set([202]));
     expect((await mailFor(db, 'ana@pw.test')).length - before).toBe(3);
@@ -155,7 +156,7 @@ describe('resetting a password by mail', () => {
 
   it('limits requests from one client address', async () => {
     let last = 0;
-    for (let i = 0; i < 11; i++) last = (await call(resetRequest.POST, { method: 'POST', json: { email: `x${i}@pw.test` }, headers: { 'x-forwarded-for': '10.72.0.1' } })).status;
+    for (let i = 0; i < 11; i++) last = (await call(resetRequest.POST, { method: 'POST', json: { email: `x${i}@pw.test` }, headers: { [PEER_HEADER]: '10.72.0.1' } })).status;
     await settledResetMail();
     expect(last).toBe(429);
   });

@@ -3,6 +3,7 @@
 // attack (invite an unregistered address with a chosen password, remove the membership, keep
 // the account) and the "attach an existing account and learn its name" leak are both gone.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { PEER_HEADER } from '@/lib/auth/address';
 import { eq } from 'drizzle-orm';
 import * as members from '@/app/api/studio/members/route';
 import * as invites from '@/app/api/invitations/route';
@@ -114,7 +115,7 @@ describe('the pre-created account attack', () => {
   it('leaves no account behind: the real person signs up later with their own password', async () => {
     await call(members.POST, { method: 'POST', as: w.foreignOwner, json: { name: 'Target', email: 'target@client.test', role: 'client' } });
     expect(await db.select().from(users).where(eq(users.email, 'target@client.test'))).toEqual([]);
-    const own = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Real Target', email: 'target@client.test', password: 'target-own-choice-pw' }, headers: { 'x-forwarded-for': '10.60.0.1' } });
+    const own = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Real Target', email: 'target@client.test', password: 'target-own-choice-pw' }, headers: { [PEER_HEADER]: '10.60.0.1' } });
     expect(own.status).toBe(201);
     // The old invitation link now needs the real person's session.
     const token = await tokenFor('target@client.test');

@@ -3,6 +3,7 @@
 // restrictions", no more than 100 failed attempts per hour on one account). Every attempt is
 // reserved in the database before the password is compared.
 import { beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { PEER_HEADER } from '@/lib/auth/address';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authenticate, SIGN_IN_FAILURE_LIMIT, SIGN_IN_RULES } from '@/db/accounts';
 import { clearAllThrottles, reserve } from '@/db/throttle';
@@ -14,7 +15,7 @@ const PASSWORD = 'tide-table-gravel-42';
 
 beforeAll(async () => {
   await useFreshDb();
-  const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Rhys Owner', email: 'rhys@throttle.test', password: PASSWORD }, headers: { 'x-forwarded-for': '10.77.0.1' } });
+  const res = await call(signUpRoute.POST, { method: 'POST', json: { name: 'Rhys Owner', email: 'rhys@throttle.test', password: PASSWORD }, headers: { [PEER_HEADER]: '10.77.0.1' } });
   expect(res.status).toBe(201);
 });
 beforeEach(async () => {

@@ -69,9 +69,29 @@ describe('fit.overlap', () => {
     const oneShared = [box({ id: 'table', kind: 'table', arrangements: ['lounge', 'travel'] }), box({ id: 'infill', kind: 'bed-infill', arrangements: ['sleep', 'lounge'] })];
     expect(only(l2h2Doc({ modules: oneShared }), 'fit.overlap')).toMatchObject({ status: 'fail', arrangement: 'lounge' });
   });
-  it('reports every clashing pair once among many modules', () => {
+  it('reports a chain of clashing modules as one cluster naming them all, and separate clashes separately', () => {
     const row = Array.from({ length: 6 }, (_, i) => box({ id: `m${i}`, x: 300 + i * 300, y: 700 })); // 400 long every 300: neighbours overlap 100
-    const list = findings(runChecks(l2h2Doc({ modules: row })), 'fit.overlap');
-    expect(list.map((f) => f.moduleIds)).toEqual([['m0', 'm1'], ['m1', 'm2'], ['m2', 'm3'], ['m3', 'm4'], ['m4', 'm5']]);
+    const apart = [box({ id: 'p', x: 300, y: 1200, width: 200 }), box({ id: 'q', x: 500, y: 1200, width: 200 })];
+    const list = findings(runChecks(l2h2Doc({ modules: [...row, ...apart] })), 'fit.overlap');
+    expect(list.map((f) => f.moduleIds)).toEqual([['m0', 'm1', 'm2', 'm3', 'm4', 'm5'], ['p', 'q']]);
+    expect(list[0]).toMatchObject({ status: 'fail', measured: 100 });
+    expect(list[0].message).toMatch(/^6 modules form one cluster/);
+  });
+  it('reports thousands of modules on one spot as one finding with capped ids, not one per pair', () => {
+    const pile = Array.from({ length: 3000 }, (_, i) => box({ id: `s${i}`, length: 5, width: 5 }));
+    const list = findings(runChecks(l2h2Doc({ modules: pile })), 'fit.overlap');
+    expect(list).toHaveLength(1);
+    expect(list[0]).toMatchObject({ status: 'fail', measured: 5 });
+    expect(list[0].moduleIds).toHaveLength(200);
+    expect(list[0].message).toMatch(/^3000 modules form one cluster/);
+  });
+  it('stops comparing pairs at its work limit and says so, with the pile it found', () => {
+    // Every module a little different, all overlapping: n² pairs, no twins to fold.
+    const pile = Array.from({ length: 3000 }, (_, i) => box({ id: `s${i}`, x: 300 + (i % 50), y: 500 + (i % 41), length: 800 + (i % 97) }));
+    const list = findings(runChecks(l2h2Doc({ modules: pile })), 'fit.overlap');
+    expect(list).toHaveLength(2);
+    expect(list[0].message).toMatch(/^3000 modules form one cluster/);
+    expect(list[1]).toMatchObject({ status: 'fail', unit: 'pairs' });
+    expect(list[1].message).toMatch(/stopped after comparing/);
   });
 });

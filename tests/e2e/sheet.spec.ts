@@ -117,12 +117,12 @@ test('in the editor: Sheets & files gives a picture with its title strip and the
   const bad = { ...doc, bay: { ...doc.bay, length: 3000.5 } };
   await page.getByLabel('Choose a layout file to open as a new layout').setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) });
   const problems = page.getByTestId('import-problems');
-  await expect(problems).toContainText('bay.length: must be a whole number of millimetres');
+  await expect(problems).toContainText('Bay length: must be a whole number of millimetres');
   await problems.getByRole('button', { name: 'Close' }).click();
 
   await page.getByRole('button', { name: /^Survey photos/ }).click();
   await page.getByLabel('Add a survey photo').setInputFiles({ name: 'floor.png', mimeType: 'image/png', buffer: pngBytes(400, 200, [90, 120, 150]) });
-  const dialog = page.getByTestId('calibrate-dialog');
+  const dialog = page.getByTestId('scale-photo-dialog');
   const img = dialog.getByTestId('calibrate-image');
   await expect(img).toBeVisible();
   const box = (await img.boundingBox())!;

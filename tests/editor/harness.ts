@@ -8,7 +8,7 @@ export function testDoc(modules: Module[] = []): LayoutDoc {
   const doc = emptyLayout('Harness van', {
     length: 3400, width: 1770, height: 1900,
     wheelArches: [{ side: 'left', x: 1800, length: 950, width: 210, height: 320 }],
-    doors: [{ id: 'slide', wall: 'right', offset: 150, width: 1270 }],
+    doors: [{ id: 'slide', wall: 'right', offset: 150, width: 1250 }],
     bulkhead: true, cabSeats: 2,
   });
   doc.buildUp.walls = [{ material: 'Closed-cell foam', thickness: 24 }, { material: 'Plywood lining', thickness: 12 }];

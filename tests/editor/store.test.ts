@@ -163,7 +163,7 @@ describe('editor store: resize, rotate, duplicate, delete', () => {
     const before = h.get().doc;
     const r = h.get().updateModule('a', { height: 0 });
     expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.error).toMatch(/height/);
+    if (!r.ok) expect(r.error).toMatch(/^Height: /);
     expect(h.get().doc).toBe(before);
     expect(h.get().history.past).toHaveLength(0);
   });

@@ -1,7 +1,7 @@
 /**
  * The access-control matrix. It finds every route handler under app/api by itself, so a route
  * (or a method) without a row here fails the test, then calls each method as anonymous, a
- * viewer-link holder, a client of another studio, the layout's client, a designer, the owner and
+ * viewer-link holder, a client of another studio, another client of the same studio, the layout's client, a designer, the owner and
  * the owner of another studio, asserting the status and that no other studio's data is in any body.
  */
 import os from 'node:os';
@@ -13,27 +13,11 @@ import { useFreshDb } from '../helpers/db';
 import { call, type CallOptions, type SessionUser } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
 import { ROWS, WHO, type Who, type Fixture } from './access-rows';
+import { discoverRoutes } from './discover-routes';
 
 const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
 /** Auth.js's own endpoints: tested through sign-in, not by role. */
 const OUT_OF_SCOPE = new Set(['/api/auth/[...nextauth]']);
-
-function discoverRoutes(): { route: string; file: string }[] {
-  const root = path.join(process.cwd(), 'app');
-  const found: { route: string; file: string }[] = [];
-  const walk = (dir: string) => {
-    for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-      const p = path.join(dir, entry.name);
-      if (entry.isDirectory()) walk(p);
-      else if (entry.name === 'route.ts') {
-        const route = '/' + path.relative(root, path.dirname(p)).split(path.sep).filter((s) => !/^\(.*\)$/.test(s)).join('/');
-        found.push({ route, file: p });
-      }
-    }
-  };
-  walk(root);
-  return found.sort((a, b) => a.route.localeCompare(b.route));
-}
 
 function discoverServerActions(): string[] {
   const files: string[] = [];
@@ -52,6 +36,8 @@ const routes = discoverRoutes();
 let db: Db;
 let w: World;
 let fx: Fixture;
+/** The name of the layout every layout row asks about: another client of the studio must never see it. */
+let clientLayoutName: string;
 
 beforeAll(async () => {
   // Uploaded files of these tests go to a folder of their own.
@@ -59,6 +45,9 @@ beforeAll(async () => {
   db = await useFreshDb();
   w = await buildWorld(db);
   fx = { world: w, db };
+  const { eq } = await import('drizzle-orm');
+  const { layouts } = await import('@/db/schema');
+  [{ name: clientLayoutName }] = await db.select({ name: layouts.name }).from(layouts).where(eq(layouts.id, w.clientLayoutId));
 });
 
 const FOREIGN_MARKERS = ['Harbour secret plan', 'olu@harbour.test', 'kit@harbour.test', 'Harbour Campers'];
@@ -70,6 +59,8 @@ function identity(who: Who): SessionUser | null {
       return null;
     case 'foreignClient':
       return w.foreignClient;
+    case 'otherClient':
+      return w.otherClient;
     case 'client':
       return w.client;
     case 'designer':
@@ -114,5 +105,6 @@ describe.each(ROWS.map((r) => [`${r.method} ${r.route}`, r] as const))('%s', (_n
       const text = JSON.stringify(res.body ?? '');
       for (const marker of FOREIGN_MARKERS) expect(text).not.toContain(marker);
     }
+    if (who === 'otherClient') expect(JSON.stringify(res.body ?? '')).not.toContain(clientLayoutName);
   });
 });

@@ -10,7 +10,7 @@ import { SHARING_ROWS } from '../sharing/access-rows';
 import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
 
-export const WHO = ['anonymous', 'viewer', 'foreignClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
+export const WHO = ['anonymous', 'viewer', 'foreignClient', 'otherClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
 export interface Fixture {
   world: World;
@@ -25,11 +25,11 @@ export interface Row {
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
 /** Readable by the studio's staff and the layout's own client; unknown to everyone else. */
-const LAYOUT_READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
+const LAYOUT_READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
 /** Writable by the studio's staff; the client may read but not write; unknown to others. */
-const LAYOUT_WRITE = { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
+const LAYOUT_WRITE = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
 /** Any signed-in member. */
-const MEMBER = { ...NOBODY, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
+const MEMBER = { ...NOBODY, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
 
 async function freshLayout(fx: Fixture, name: string): Promise<string> {
   const { createLayout } = await import('@/db/layouts');
@@ -52,13 +52,13 @@ const CORE_ROWS: Row[] = [
   // Readiness for a load balancer: open to anyone, says nothing about any studio.
   {
     route: '/api/health', method: 'GET', request: () => ({}),
-    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
   },
   { route: '/api/layouts', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/layouts', method: 'POST',
     request: () => ({ json: { name: 'Matrix van', bayTemplateId: 'l2h2' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 201, owner: 201, foreignOwner: 201 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 201, owner: 201, foreignOwner: 201 },
   },
   { route: '/api/layouts/[id]', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: LAYOUT_READ },
   {
@@ -74,29 +74,39 @@ const CORE_ROWS: Row[] = [
     request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix delete') } }),
     expect: { ...LAYOUT_WRITE, designer: 204, owner: 204 },
   },
+  {
+    route: '/api/layouts/[id]/archive', method: 'POST',
+    request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix archive') } }),
+    expect: LAYOUT_WRITE,
+  },
+  {
+    route: '/api/layouts/[id]/archive', method: 'DELETE',
+    request: async (fx) => ({ params: { id: await freshLayout(fx, 'Matrix restore') } }),
+    expect: LAYOUT_WRITE,
+  },
   { route: '/api/layouts/[id]/checks', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: LAYOUT_READ },
   { route: '/api/checks', method: 'POST', request: () => ({ json: starterLayout('starter-l-lounge') }), expect: MEMBER },
   {
     route: '/api/sign-up', method: 'POST',
     request: () => ({ json: { name: 'Matrix Person', email: `matrix${memberSeq++}@selfbuild.test`, password: 'matrix-long-password' } }),
-    expect: { anonymous: 201, viewer: 201, foreignClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
+    expect: { anonymous: 201, viewer: 201, foreignClient: 201, otherClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
   },
   { route: '/api/studio', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio', method: 'PATCH',
     request: () => ({ json: { units: 'mm' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
   },
   { route: '/api/studio/members', method: 'GET', request: () => ({}), expect: MEMBER },
   {
     route: '/api/studio/members', method: 'POST',
     request: () => ({ json: { name: 'Matrix Member', email: `member${memberSeq++}@client.test`, role: 'client' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 201, foreignOwner: 201 },
   },
   {
     route: '/api/studio/members/[userId]', method: 'PATCH',
     request: (fx) => ({ params: { userId: fx.world.otherClient.id }, json: { role: 'client' } }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
   },
   {
     route: '/api/studio/members/[userId]', method: 'DELETE',
@@ -108,20 +118,20 @@ const CORE_ROWS: Row[] = [
       await fx.db.insert(memberships).values({ userId: u.id, studioId: fx.world.owner.studioId, role: 'client' });
       return { params: { userId: u.id } };
     },
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 204, foreignOwner: 404 },
   },
   // Changing one's own password: any signed-in person; a wrong current password is a 400 (the
   // session's own password is left alone here so later rows keep their sessions).
   {
     route: '/api/account/password', method: 'POST',
     request: () => ({ json: { currentPassword: 'not-the-current-one', newPassword: 'matrix-new-long-password' } }),
-    expect: { ...NOBODY, foreignClient: 400, client: 400, designer: 400, owner: 400, foreignOwner: 400 },
+    expect: { ...NOBODY, foreignClient: 400, otherClient: 400, client: 400, designer: 400, owner: 400, foreignOwner: 400 },
   },
   // Asking for a reset link: open to anyone, the same answer for every address.
   {
     route: '/api/password-reset', method: 'POST',
     request: (_fx, who) => ({ json: { email: `reset-${who}@selfbuild.test` }, headers: { 'x-forwarded-for': `10.99.${memberSeq++ % 250}.1` } }),
-    expect: { anonymous: 202, viewer: 202, foreignClient: 202, client: 202, designer: 202, owner: 202, foreignOwner: 202 },
+    expect: { anonymous: 202, viewer: 202, foreignClient: 202, otherClient: 202, client: 202, designer: 202, owner: 202, foreignOwner: 202 },
   },
   // Using a reset link: the token is the proof, whoever holds it (each cell a throwaway account).
   {
@@ -134,7 +144,7 @@ const CORE_ROWS: Row[] = [
       const issued = await issuePasswordReset(email);
       return { json: { token: issued!.token, password: 'matrix-reset-long-password' } };
     },
-    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
   },
 ];
 

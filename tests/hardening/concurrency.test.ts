@@ -1,9 +1,10 @@
 /**
  * No lost updates: 50 pairs of saves based on the same version, sent at once. In every pair
  * exactly one is accepted and the other gets 412; every accepted save is the stored state at
- * its version, and the final document is the last accepted one.
+ * its version, and the final document is the last accepted one. Simultaneous sign-ups of one
+ * address: one account, the rest 409. The whole file's log holds no password, hash or token.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import * as one from '@/app/api/layouts/[id]/route';
 import { layouts } from '@/db/schema';
@@ -11,10 +12,14 @@ import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
+import * as signUp from '@/app/api/sign-up/route';
+import { captureLog, KNOWN_TEST_PASSWORDS, leakedSecrets, storedHashes, type LogCapture } from '../helpers/log-capture';
 
 let db: Db;
 let w: World;
+let captured: LogCapture;
 beforeAll(async () => {
+  captured = captureLog();
   db = await useFreshDb();
   w = await buildWorld(db);
 });
@@ -45,5 +50,24 @@ describe('conflicting saves', () => {
       expect(row.doc.occupants.standingHeight).toBe(docs[winner].occupants.standingHeight);
     }
     expect(version).toBe(start.version + 50);
+  });
+});
+
+describe('simultaneous sign-ups of one address', () => {
+  const password = 'race-password-kept-out-of-logs';
+  it('make one account; every other answer is 409, none a 500', async () => {
+    const answers = await Promise.all(
+      Array.from({ length: 8 }, (_, i) =>
+        call(signUp.POST, { method: 'POST', as: null, headers: { 'x-forwarded-for': `10.9.0.${i}` }, json: { name: `Racer ${i}`, email: 'racer@selfbuild.test', password } }),
+      ),
+    );
+    expect(answers.map((a) => a.status).sort()).toEqual([201, 409, 409, 409, 409, 409, 409, 409]);
+  });
+
+  afterAll(async () => {
+    const secrets = [...KNOWN_TEST_PASSWORDS, password, ...(await storedHashes(db))];
+    const leaks = leakedSecrets(captured.lines, secrets);
+    captured.stop();
+    expect(leaks).toEqual([]);
   });
 });

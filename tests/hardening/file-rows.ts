@@ -9,8 +9,8 @@ import { starterLayout } from '@/lib/layout/templates';
 import { pngBytes } from '../uploads/fixtures';
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
-const READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
-const WRITE = { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
+const READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
+const WRITE = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
 
 let seq = 0;
 const designerOf = (fx: Fixture) => ({ userId: fx.world.designer.id, studioId: fx.world.designer.studioId, role: 'designer' as const, email: '', name: '' });

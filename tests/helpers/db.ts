@@ -10,15 +10,19 @@ import crypto from 'node:crypto';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import * as schema from '../../db/schema';
-import { withStatementCache } from '../../db/pglite-statements.mjs';
+import { withStatementCache } from '../../db/pglite/statements.mjs';
 import { installDbHandle, closeDb, type Db } from '../../db/client';
 
 export async function useFreshDb(): Promise<Db> {
   if (process.env.TEST_DATABASE_URL) return freshPostgres(process.env.TEST_DATABASE_URL);
   const file = process.env.BAYWRIGHT_TEST_TEMPLATE;
-  if (!file) throw new Error('the vitest global setup did not build the database template');
+  if (!file) {
+    throw new Error(
+      'No database template: this test file opens a database but runs in the `pure` project. Take its folder or file out of PURE_FOLDERS / PURE_FILES in vitest.config.mts.',
+    );
+  }
   const client = await PGlite.create({ loadDataDir: new Blob([fs.readFileSync(file)]) });
-  // Reads through the statement cache, as the app's own handles do (db/pglite-statements.mjs).
+  // Reads through the statement cache, as the app's own handles do (db/pglite/statements.mjs).
   const db = drizzlePglite({ client: withStatementCache(client) as never, schema }) as unknown as Db;
   installDbHandle({ db, kind: 'pglite', close: () => client.close() });
   return db;

@@ -14,7 +14,27 @@ export interface SessionUser {
   signedInAt?: number;
 }
 
-export async function sessionCookie(user: SessionUser): Promise<string> {
+// Minting a cookie costs a key derivation and an encryption; a test file asks for the same few
+// users' cookies thousands of times (the fuzz). The same claims within the same minute get the
+// same cookie, as a browser would keep sending one.
+const minted = new Map<string, Promise<string>>();
+
+export function sessionCookie(user: SessionUser): Promise<string> {
+  const key = JSON.stringify([sessionCookieName(), authSecret(), user.id, user.studioId, user.role, user.sessionVersion ?? 0, Math.floor(Date.now() / 60_000)]);
+  let cookie = minted.get(key);
+  if (!cookie) {
+    if (minted.size > 1000) minted.clear();
+    cookie = mintSessionCookie(user);
+    minted.set(key, cookie);
+    cookie.catch(() => minted.delete(key));
+  }
+  return cookie;
+}
+
+/** Every session token this process minted: the log tests check that none of them is ever logged. */
+export const mintedSessionTokens = new Set<string>();
+
+async function mintSessionCookie(user: SessionUser): Promise<string> {
   const name = sessionCookieName();
   const token = await encode({
     token: { uid: user.id, studioId: user.studioId, role: user.role, sv: user.sessionVersion ?? 0, sat: user.signedInAt ?? Math.floor(Date.now() / 1000), sub: user.id },
@@ -22,6 +42,7 @@ export async function sessionCookie(user: SessionUser): Promise<string> {
     salt: name,
     maxAge: SESSION_MAX_AGE_S,
   });
+  mintedSessionTokens.add(token);
   return `${name}=${token}`;
 }
 

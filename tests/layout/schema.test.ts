@@ -84,10 +84,19 @@ describe('shipped templates', () => {
     expect(listed).toEqual(files.sort());
   });
 
-  it('names no vehicle brand', () => {
-    const text = files.map((f) => fs.readFileSync(path.join(dir, f), 'utf8')).join('\n').toLowerCase();
-    for (const brand of ['ford', 'transit', 'sprinter', 'mercedes', 'ducato', 'fiat', 'renault', 'master', 'crafter', 'volkswagen', 'iveco', 'peugeot', 'citroen', 'boxer', 'relay']) {
-      expect(text).not.toContain(brand);
+  it('names bays by size class only: every name is a size class and plain trade words', () => {
+    const index = JSON.parse(fs.readFileSync(path.join(dir, 'index.json'), 'utf8'));
+    for (const b of index.bays) expect(b.name).toMatch(/^L[1-4]H[1-3] — (Short|Medium|Long) wheelbase( with extended overhang)?, (standard|high|extra-high) roof$/);
+    for (const s of index.starters) expect(s.name).toMatch(/\(L[1-4]H[1-3]\)$/);
+    // No proper noun: a capitalised word only opens a sentence, a name or a label ("Short wheelbase" after the dash).
+    for (const f of files) {
+      const strings: string[] = [];
+      JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8'), (_k, v) => (typeof v === 'string' && strings.push(v), v));
+      for (const text of strings) {
+        for (const part of text.split(/ — |[.;(]\s*/)) {
+          for (const word of part.trim().split(/[\s,:)]+/).slice(1)) expect(word, `${f}: “${text}”`).not.toMatch(/^[A-Z][a-z]/);
+        }
+      }
     }
   });
 });

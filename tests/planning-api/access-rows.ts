@@ -13,8 +13,8 @@ import { starterLayout } from '@/lib/layout/templates';
 import { demoPriceList } from '../../scripts/lib/demo-prices';
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
-const READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
-const WORKSHOP_READ = { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
+const READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
+const WORKSHOP_READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
 const WEBHOOK_SECRET = 'whsec_matrix_rows';
 
 const designerOf = (fx: Fixture): Actor => ({ userId: fx.world.designer.id, studioId: fx.world.designer.studioId, role: 'designer', email: 'ivo@saltmarsh.test', name: 'Ivo Brandt' });
@@ -40,11 +40,11 @@ function ensureFakePayments(): Promise<void> {
 let seq = 0;
 
 export const PLANNING_ROWS: Row[] = [
-  { route: '/api/studio/prices', method: 'GET', request: () => ({}), expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 } },
+  { route: '/api/studio/prices', method: 'GET', request: () => ({}), expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 } },
   {
     route: '/api/studio/prices', method: 'PUT',
     request: () => ({ json: demoPriceList() }),
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 200 },
   },
   { route: '/api/layouts/[id]/quote', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: READ },
   {
@@ -53,7 +53,7 @@ export const PLANNING_ROWS: Row[] = [
       const l = await layoutForClient(fx, `Matrix quote ${seq++}`);
       return { params: { id: l.id }, json: { layoutVersion: l.version, depositPct: 25 } };
     },
-    expect: { ...NOBODY, foreignClient: 404, client: 403, designer: 201, owner: 201, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 201, owner: 201, foreignOwner: 404 },
   },
   { route: '/api/layouts/[id]/quote/parts', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: WORKSHOP_READ },
   {
@@ -65,7 +65,7 @@ export const PLANNING_ROWS: Row[] = [
       await sendQuote(designerOf(fx), l.id, { layoutVersion: l.version, depositPct: 20 });
       return { params: { id: l.id } };
     },
-    expect: { ...NOBODY, foreignClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },
   },
   {
     route: '/api/payments/webhook', method: 'POST',
@@ -75,6 +75,6 @@ export const PLANNING_ROWS: Row[] = [
       const body = JSON.stringify({ id: `evt_test_matrix_${seq++}`, object: 'event', type: 'customer.created', data: { object: {} } });
       return { body, headers: { 'content-type': 'application/json', 'stripe-signature': signatureHeader(body, process.env.STRIPE_WEBHOOK_SECRET!) } };
     },
-    expect: { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
+    expect: { anonymous: 200, viewer: 200, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 },
   },
 ];

@@ -49,7 +49,7 @@ describe('the plan sheet carries the build-plan section', () => {
     const at = texts.indexOf('Build plan');
     expect(at).toBeGreaterThan(-1);
     expect(texts.indexOf('Checks')).toBeGreaterThan(at);
-    for (const topic of ['Mass · OK', 'Axles · OK', 'Payload · OK', 'Power · OK', 'Water · OK']) expect(texts).toContain(topic);
+    for (const topic of ['Mass · + Meets', 'Axles · + Meets', 'Payload · + Meets', 'Power · + Meets', 'Water · + Meets']) expect(texts).toContain(topic);
     expect(texts.join(' ')).toMatch(/Laden [\d,]+ kg of 3,500 kg maximum authorised mass/);
   });
 });

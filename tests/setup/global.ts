@@ -1,22 +1,18 @@
 /**
- * Builds one migrated PGlite database per test run and dumps it to a file; each test file
- * clones it (loadDataDir, ~0.4 s) instead of migrating its own (STACK.md).
+ * The `db` project's set-up: one migrated PGlite database, as a tarball each test file clones
+ * (loadDataDir, ~0.4 s) instead of migrating its own (STACK.md). The tarball is kept under
+ * node_modules/.cache/baywright/ and made again only when PGlite or a migration changes
+ * (db/pglite/template.mjs), so only the first run after a change pays for migrating.
+ * On a PostgreSQL server (TEST_DATABASE_URL, `npm run test:pg`) each file migrates its own
+ * database there, and no template is needed.
  */
-import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
+import { migratedTemplate } from '../../db/pglite/template.mjs';
 
 export default async function setup() {
-  const { PGlite } = await import('@electric-sql/pglite');
-  const { drizzle } = await import('drizzle-orm/pglite');
-  const { migrate } = await import('drizzle-orm/pglite/migrator');
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'baywright-template-'));
-  const client = await PGlite.create();
-  await migrate(drizzle(client), { migrationsFolder: path.join(process.cwd(), 'drizzle') });
-  const dump = await client.dumpDataDir('none');
-  const file = path.join(dir, 'template.tar');
-  fs.writeFileSync(file, Buffer.from(await dump.arrayBuffer()));
-  await client.close();
+  if (process.env.TEST_DATABASE_URL) return;
+  const started = Date.now();
+  const { file, made } = await migratedTemplate(path.join(process.cwd(), 'drizzle'));
+  if (made) console.log(`Made the migrated test database template in ${((Date.now() - started) / 1000).toFixed(1)} s (kept for later runs).`);
   process.env.BAYWRIGHT_TEST_TEMPLATE = file;
-  return () => fs.rmSync(dir, { recursive: true, force: true });
 }

@@ -9,11 +9,11 @@ import type { Actor } from '@/db/actor';
 import { starterLayout } from '@/lib/layout/templates';
 
 const NOBODY = { anonymous: 401, viewer: 401 } as const;
-const READ = { ...NOBODY, foreignClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
-const WORKSHOP = { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
-const PUBLIC = { anonymous: 200, viewer: 200, foreignClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
+const READ = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 200, designer: 200, owner: 200, foreignOwner: 404 };
+const WORKSHOP = { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 };
+const PUBLIC = { anonymous: 200, viewer: 200, foreignClient: 200, otherClient: 200, client: 200, designer: 200, owner: 200, foreignOwner: 200 };
 /** Studio-level (no layout in the address): each caller acts in their own studio. */
-const STAFF = { ...NOBODY, foreignClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 };
+const STAFF = { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 };
 
 let seq = 0;
 const designerOf = (fx: Fixture): Actor => ({ userId: fx.world.designer.id, studioId: fx.world.designer.studioId, role: 'designer', email: 'ivo@saltmarsh.test', name: 'Ivo Brandt' });
@@ -58,7 +58,7 @@ export const SHARING_ROWS: Row[] = [
   {
     route: '/api/layouts/[id]/revisions/[revisionId]/decision', method: 'POST',
     request: async (fx) => ({ params: await withRevision(fx), json: { decision: 'approve' } }),
-    expect: { ...NOBODY, foreignClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },
   },
   {
     route: '/api/layouts/[id]/revisions/compare', method: 'GET',
@@ -84,7 +84,7 @@ export const SHARING_ROWS: Row[] = [
   {
     route: '/api/layouts/[id]/comments', method: 'POST',
     request: (fx) => ({ params: { id: fx.world.clientLayoutId }, json: { arrangement: 'lounge', x: 800, y: 400, body: 'matrix' } }),
-    expect: { ...NOBODY, foreignClient: 404, client: 201, designer: 201, owner: 201, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 201, designer: 201, owner: 201, foreignOwner: 404 },
   },
   {
     route: '/api/layouts/[id]/comments/[commentId]', method: 'PATCH',
@@ -103,7 +103,7 @@ export const SHARING_ROWS: Row[] = [
       const { thread } = await addComment(designerOf(fx), fx.world.clientLayoutId, { kind: 'pin', arrangement: 'sleep', x: 500, y: 500, body: 'matrix' });
       return { params: { id: fx.world.clientLayoutId, commentId: thread.id } };
     },
-    expect: { ...NOBODY, foreignClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 200, owner: 200, foreignOwner: 404 },
   },
   { route: '/api/invitations', method: 'GET', request: () => ({}), expect: STAFF },
   {
@@ -125,7 +125,7 @@ export const SHARING_ROWS: Row[] = [
     // No session needed: the one-time token is the proof.
     route: '/api/invitations/accept', method: 'POST',
     request: async (fx) => ({ json: { token: (await invitation(fx)).token, password: 'matrix-long-password' } }),
-    expect: { anonymous: 201, viewer: 201, foreignClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
+    expect: { anonymous: 201, viewer: 201, foreignClient: 201, otherClient: 201, client: 201, designer: 201, owner: 201, foreignOwner: 201 },
   },
   // Viewer-link routes answer the token, never a session: everyone holding it reads the same.
   { route: '/api/v/[token]', method: 'GET', request: async (fx) => ({ params: { token: await viewerToken(fx) } }), expect: PUBLIC },
@@ -138,6 +138,6 @@ export const SHARING_ROWS: Row[] = [
       const id = await storeReceivedMail({ studioId: fx.world.owner.studioId, messageId: null, mailFrom: 'a@b.test', rcptTo: ['c@d.test'], subject: 'matrix', text: 'matrix', raw: 'Subject: matrix\r\n\r\nmatrix\r\n' });
       return { params: { id } };
     },
-    expect: { ...NOBODY, foreignClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 403, owner: 200, foreignOwner: 404 },
   },
 ];

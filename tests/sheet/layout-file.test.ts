@@ -30,7 +30,7 @@ describe('layout files', () => {
     const paths = back.issues.map((i) => i.path);
     expect(paths).toContain('bay.length');
     expect(paths).toContain('modules.1.width');
-    expect(issueLines(back.issues).some((l) => l.startsWith('bay.length: '))).toBe(true);
+    expect(issueLines(back.issues).some((l) => l.startsWith('Bay length: '))).toBe(true);
   });
 
   it.each([

@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { composeSheet, mmToPt, renderPdf, type SheetRequest } from '@/lib/sheet';
 import { starterLayout } from '@/lib/layout';
 import { horizontalOfLength, readPdf, type PdfPageRead } from './read-pdf';
+import { fontsReady } from './sheet-fonts';
 
 const doc = starterLayout('starter-l-lounge')!; // bay 3100 × 1770 × 1950 mm
 const details = { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: 'Nair — L2H2 weekender', revision: 'C', date: '2025-12-02' };
@@ -11,7 +12,7 @@ const details = { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: '
 async function pdfOf(over: Partial<SheetRequest>) {
   const r = composeSheet({ doc, report: { ok: true, findings: [] }, paper: 'a4', scale: 20, units: 'mm', details, ...over });
   if (!r.ok) throw new Error(r.message);
-  return readPdf(await renderPdf(r.sheet, { created: new Date('2025-12-02T09:00:00Z') }));
+  return readPdf(await renderPdf(r.sheet, { created: new Date('2025-12-02T09:00:00Z'), fonts: await fontsReady }));
 }
 
 /** The dimension line under a text label: a horizontal segment a little below the text, spanning it. */

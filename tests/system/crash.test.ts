@@ -10,7 +10,7 @@ import { startTestServer, stopProcessGroup, type TestServer } from '../../script
 import { DEMO_PASSWORD } from '../../lib/demo-accounts';
 import { signInOverHttp } from './http-session';
 
-const PORT = 3291;
+const PORT = Number(process.env.SYSTEM_TEST_PORT ?? 3291);
 const DB = 'system-crash';
 let server: TestServer | undefined;
 
@@ -84,7 +84,7 @@ describe('SIGKILL while saving', () => {
 
   it('stops a second server on the same folder with a clear message', async () => {
     const second = spawn('npx', ['next', 'start', '-p', String(PORT + 1), '-H', '127.0.0.1'], {
-      env: { ...process.env, BAYWRIGHT_DB: DB, NODE_ENV: 'production' },
+      env: { ...process.env, BAYWRIGHT_DB: DB, NODE_ENV: 'production', BAYWRIGHT_LOCAL_FAKES: '1' },
       detached: true,
     });
     let output = '';

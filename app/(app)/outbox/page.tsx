@@ -5,11 +5,11 @@ import { Inbox } from 'lucide-react';
 import { currentActor } from '@/lib/auth/session';
 import { listOutbox } from '@/db/sharing/outbox';
 import { outboxEnabled } from '@/lib/mail/outbox-mode';
+import { formatDateTime } from '@/lib/format';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Outbox' };
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
 
 /**
  * Development outbox: the mail the app sent, as the local mail server received it. Owners only;
@@ -34,7 +34,7 @@ export default async function OutboxPage() {
             <tbody>
               {mail.map((m) => (
                 <tr key={m.id} className="border-b border-paper-edge last:border-0" data-mail-id={m.id}>
-                  <td className="whitespace-nowrap px-3 py-2 text-ink-soft">{WHEN.format(new Date(m.receivedAt))}</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-ink-soft">{formatDateTime(m.receivedAt)}</td>
                   <td className="px-3 py-2">{m.to.join(', ')}</td>
                   <td className="px-3 py-2"><Link className="underline-offset-2 hover:text-copper hover:underline" href={`/outbox/${m.id}`}>{m.subject || '(no subject)'}</Link></td>
                 </tr>

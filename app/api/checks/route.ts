@@ -1,7 +1,8 @@
 import { handle, HttpError, invalid, json, readJson, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
+import { clientAddress } from '@/lib/auth/address';
 import { parseLayoutDoc } from '@/lib/layout/parse';
-import { runChecks } from '@/lib/checks';
+import { runJob } from '@/lib/workers/pool';
 import { studioCheckDefaults } from '@/db/studios';
 
 export const dynamic = 'force-dynamic';
@@ -9,14 +10,20 @@ export const dynamic = 'force-dynamic';
 /** Live checks while editing: a burst of 20, then 10 a second per user (CHECKS_RATE_PER_SECOND to change; the load benchmark raises it). */
 const perSecond = Number(process.env.CHECKS_RATE_PER_SECOND ?? 10);
 const limiter = new RateLimiter(Math.max(20, perSecond * 2), perSecond);
+/** Per client address as well (lib/auth/address), so many accounts behind one address share a bound: five users' worth. */
+const addressLimiter = new RateLimiter(Math.max(100, perSecond * 10), perSecond * 5);
 
-/** Runs the checks on a posted layout document. Nothing is stored. */
+/** Runs the checks on a posted layout document, in the work pool (503 + Retry-After when it is full). Nothing is stored. */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
   if (!limiter.take(actor.userId)) {
     throw new HttpError(429, 'Too many check requests; wait a moment.', { retryAfter: limiter.retryAfter(actor.userId) });
   }
+  const address = clientAddress(req);
+  if (!addressLimiter.take(address)) {
+    throw new HttpError(429, 'Too many check requests from this address; wait a moment.', { retryAfter: addressLimiter.retryAfter(address) });
+  }
   const parsed = parseLayoutDoc(await readJson(req));
   if (!parsed.ok) throw invalid(parsed.issues);
-  return json(runChecks(parsed.value, { studioDefaults: await studioCheckDefaults(actor) }));
+  return json(await runJob('checks', { doc: parsed.value, studioDefaults: await studioCheckDefaults(actor) }));
 });

@@ -6,7 +6,7 @@
  * re-renders no React component and redraws no other layer. Never listens for events.
  */
 import { useEffect, useRef } from 'react';
-import { Group, Layer, Rect, Shape, Text } from 'react-konva';
+import { Group, Layer, Rect, Shape, Text } from './konva';
 import type Konva from 'konva';
 import { useShallow } from 'zustand/react/shallow';
 import { formatLength, type LengthUnit } from '@/lib/layout/units';

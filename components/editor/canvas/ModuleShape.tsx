@@ -5,7 +5,7 @@
  * listen for events: hit testing is done in mm by the pointer hook.
  */
 import { memo } from 'react';
-import { Shape } from 'react-konva';
+import { Shape } from './konva';
 import type Konva from 'konva';
 import type { Module } from '@/lib/layout';
 import { drawModule } from './moduleSymbols';

@@ -5,7 +5,7 @@
  * events; redrawn only when the document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
-import { Layer } from 'react-konva';
+import { Layer } from './konva';
 import type { Arrangement, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';

@@ -6,7 +6,7 @@
  * while a move or resize is in progress (the drag layer shows the live state).
  */
 import { memo } from 'react';
-import { Layer, Shape } from 'react-konva';
+import { Layer, Shape } from './konva';
 import type Konva from 'konva';
 import type { Arrangement, LayoutDoc, LengthUnit } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';

@@ -5,7 +5,7 @@
  * usePlanPointer. Must never draw anything itself.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { Stage } from 'react-konva';
+import { Stage } from './konva';
 import { useShallow } from 'zustand/react/shallow';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { SheetLayer } from './SheetLayer';

@@ -1,7 +1,7 @@
 'use client';
 /** Rulers in screen space along the top and left of the plan. Never listens for events. */
 import { memo } from 'react';
-import { Layer, Shape } from 'react-konva';
+import { Layer, Shape } from './konva';
 import type Konva from 'konva';
 import type { LengthUnit } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';

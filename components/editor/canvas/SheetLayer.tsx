@@ -5,7 +5,7 @@
  * is not redrawn during a drag.
  */
 import { memo } from 'react';
-import { Layer, Shape } from 'react-konva';
+import { Layer, Shape } from './konva';
 import type Konva from 'konva';
 import type { LayoutDoc, LengthUnit } from '@/lib/layout';
 import { visibleWorld, type Viewport } from '../geometry/viewport';

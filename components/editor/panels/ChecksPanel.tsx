@@ -7,20 +7,16 @@
  * check service is unavailable. Never computes or invents a finding.
  */
 import { useState } from 'react';
-import { CircleCheck, CircleAlert, CircleX, Loader2, CloudOff } from 'lucide-react';
+import Link from 'next/link';
+import { CircleCheck, CircleX, Loader2, CloudOff } from 'lucide-react';
 import { formatLength, type LengthUnit } from '@/lib/layout/units';
-import type { Finding, FindingStatus } from '@/lib/checks/types';
+import type { Finding } from '@/lib/checks/types';
+import { foldWaiting, ruleName } from '@/lib/checks/words';
+import { NotYetChecked, SourceDisclosure, StatusBadge } from '@/components/checks/FindingParts';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
 import type { LiveChecks } from '../api/useLiveChecks';
 import { groupFindings } from './findingGroups';
 import { CHECKS_CAUTION } from '@/lib/layout/cautions';
-
-export const STATUS_LOOK: Record<FindingStatus, { word: string; Icon: typeof CircleCheck; cls: string }> = {
-  // Words in ink on the light status tint (contrast); the icon carries the status colour.
-  fail: { word: 'Fail', Icon: CircleX, cls: 'text-ink bg-brick-light [&>svg]:text-brick' },
-  warn: { word: 'Warn', Icon: CircleAlert, cls: 'text-ink bg-ochre-light [&>svg]:text-ochre' },
-  pass: { word: 'Pass', Icon: CircleCheck, cls: 'text-ink bg-moss-light [&>svg]:text-moss' },
-};
 
 function amount(v: number | undefined, unit: string | undefined, units: LengthUnit): string | undefined {
   if (v === undefined || !Number.isFinite(v)) return undefined;
@@ -28,12 +24,13 @@ function amount(v: number | undefined, unit: string | undefined, units: LengthUn
   return `${Math.round(v * 100) / 100}${unit ? ` ${unit}` : ''}`;
 }
 
-export function ChecksPanel({ checks }: { checks: LiveChecks }) {
+export function ChecksPanel({ checks, layoutId }: { checks: LiveChecks; layoutId?: string }) {
   const api = useEditorApi();
   const units = useEditor((s) => s.units);
   const highlight = useEditor((s) => s.highlight);
   const [showPass, setShowPass] = useState(false);
   const { report, status, stale, message } = checks;
+  const folded = report ? foldWaiting(report.findings) : null;
 
   const focus = (f: Finding) => {
     const s = api.getState();
@@ -51,7 +48,7 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
           {status === 'refused' && (<><CircleX size={13} aria-hidden /> the check service refused this layout{message ? `: ${message}` : ''}</>)}
         </span>
         {stale && report && <span className="rounded bg-ochre-light px-1.5 text-ink">showing results for an earlier version</span>}
-        <label className="ml-auto flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={showPass} onChange={(e) => setShowPass(e.target.checked)} /> show passes</label>
+        <label className="ml-auto flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={showPass} onChange={(e) => setShowPass(e.target.checked)} /> show what meets</label>
       </div>
       <div className={`min-h-0 flex-1 overflow-auto px-4 py-2 ${stale ? 'opacity-60' : ''}`}>
         {!report && status !== 'checking' && (
@@ -59,39 +56,31 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
         )}
         {!report && status === 'checking' && <p className="py-4 text-ink-soft">Checking the layout…</p>}
         {report && report.findings.length === 0 && <p className="py-4 text-ink-soft">The check service returned no findings for this layout.</p>}
-        {report && groupFindings(report.findings).map((g) => (
+        {folded && groupFindings(folded.judged).map((g) => (
           <section key={g.arrangement} className="mb-3" aria-label={g.arrangement === 'all' ? 'Whole layout' : `${g.arrangement} arrangement`}>
             <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">{g.arrangement === 'all' ? 'Whole layout' : g.arrangement}</h3>
             {g.byStatus.filter((b) => showPass || b.status !== 'pass').map((b) => (
               <ul key={b.status} className="space-y-1">
                 {b.findings.map((f, i) => {
-                  const look = STATUS_LOOK[f.status];
                   const measured = amount(f.measured, f.unit, units);
                   const required = amount(f.required, f.unit, units);
                   const active = !!f.moduleIds?.length && f.moduleIds.every((id) => highlight.includes(id));
                   return (
-                    <li key={`${f.id}-${i}`}>
-                      <button
-                        type="button"
-                        onClick={() => focus(f)}
-                        data-finding={f.id}
-                        data-status={f.status}
-                        data-arrangement={f.arrangement ?? 'all'}
-                        className={`flex w-full items-start gap-2 rounded border px-2 py-1.5 text-left ${active ? 'border-copper bg-copper-light' : 'border-transparent hover:border-paper-edge hover:bg-paper-deep'}`}
-                      >
-                        <span className={`mt-0.5 inline-flex shrink-0 items-center gap-1 rounded px-1.5 text-xs font-medium ${look.cls}`}>
-                          <look.Icon size={12} aria-hidden /> {look.word}
-                        </span>
-                        <span className="min-w-0">
+                    <li key={`${f.id}-${i}`} data-finding={f.id} data-status={f.status} data-arrangement={f.arrangement ?? 'all'}
+                      className={`flex items-start gap-2 rounded border px-2 py-1.5 ${active ? 'border-copper bg-copper-light' : 'border-transparent hover:border-paper-edge hover:bg-paper-deep'}`}>
+                      <span className="mt-0.5"><StatusBadge status={f.status} /></span>
+                      <span className="min-w-0 flex-1">
+                        <button type="button" onClick={() => focus(f)} className="block w-full text-left">
+                          <span className="block text-xs font-semibold text-ink">{ruleName(f.id)}</span>
                           <span className="block text-ink">{f.message}</span>
-                          <span className="mt-0.5 block font-mono text-[11px] text-ink-soft">
-                            {f.id}
-                            {measured && <> · measured {measured}</>}
-                            {required && <> · required {required}</>}
-                          </span>
-                          {f.source && <span className="block text-[11px] text-ink-soft">Source: {f.source}</span>}
-                        </span>
-                      </button>
+                          {(measured || required) && (
+                            <span className="mt-0.5 block font-mono text-[11px] text-ink-soft">
+                              {[measured && `measured ${measured}`, required && `required ${required}`].filter(Boolean).join(' · ')}
+                            </span>
+                          )}
+                        </button>
+                        <SourceDisclosure source={f.source} />
+                      </span>
                     </li>
                   );
                 })}
@@ -99,6 +88,12 @@ export function ChecksPanel({ checks }: { checks: LiveChecks }) {
             ))}
           </section>
         ))}
+        {folded && (
+          <NotYetChecked
+            needs={folded.needs}
+            linkFor={layoutId ? (n, text) => (n.where === 'editor' ? text : <Link className="text-copper underline" href={`/layouts/${layoutId}/build?tab=${n.where}`}>{text}</Link>) : undefined}
+          />
+        )}
         <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-soft">
           {CHECKS_CAUTION}
         </p>

@@ -9,6 +9,7 @@ import { toast } from 'sonner';
 import type { Conflict } from '../api/useAutosave';
 import { saveCopy } from '../api/layoutApi';
 import { Dialog } from './Dialog';
+import { formatDateTime } from '@/lib/format';
 
 export function ConflictDialog({ conflict, onTakeTheirs, onClose }: { conflict: Conflict | null; onTakeTheirs: () => void; onClose: () => void }) {
   const [busy, setBusy] = useState(false);
@@ -23,7 +24,7 @@ export function ConflictDialog({ conflict, onTakeTheirs, onClose }: { conflict: 
     toast.success(`Saved your drawing as “${name}”.`);
     router.push(`/layouts/${encodeURIComponent(r.id)}`);
   };
-  const when = conflict?.theirs.updatedAt ? new Date(conflict.theirs.updatedAt).toLocaleString() : undefined;
+  const when = conflict?.theirs.updatedAt ? formatDateTime(conflict.theirs.updatedAt) : undefined;
   return (
     <Dialog open={!!conflict} title="Someone saved this layout first" onClose={onClose} testId="conflict-dialog">
       <p className="text-sm">

@@ -4,8 +4,7 @@
  */
 import type { Arrangement } from '@/lib/layout';
 import type { Finding, FindingStatus } from '@/lib/checks/types';
-
-export const STATUS_ORDER: FindingStatus[] = ['fail', 'warn', 'pass'];
+import { STATUS_ORDER } from '@/lib/checks/words';
 
 export interface FindingGroup {
   arrangement: Arrangement | 'all';

@@ -1,10 +1,11 @@
 /**
  * The Details panel's form model: what the fields hold (text, so lengths can be typed in any unit:
- * "1200", "120 cm", "47.2 in") and the zod schema that turns them into a module patch in whole
+ * "1200", "120 cm", "47.2 in") and the zod schema (the small `zod/mini` build, as everywhere on the client) that turns them into a module patch in whole
  * millimetres. Pure: no React, so it is tested on its own.
  */
-import { z } from 'zod';
-import { ARRANGEMENTS, FACINGS, MODULE_KINDS, MODULE_LIMITS, SURFACES, type Module } from '@/lib/layout/schema';
+import * as z from 'zod/mini';
+import { ARRANGEMENTS, FACINGS, MODULE_KINDS, MODULE_LIMITS, SURFACES } from '@/lib/layout/vocabulary';
+import type { Module } from '@/lib/layout/schema';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
 export interface ModuleFormValues {
@@ -24,23 +25,23 @@ export interface ModuleFormValues {
 }
 
 function lengthField(unit: LengthUnit, min: number, max: number, what: string) {
-  return z.string().transform((s, ctx) => {
+  return z.pipe(z.string(), z.transform((s: string, ctx) => {
     const v = parseLength(s, unit);
     if (v === null) {
-      ctx.addIssue({ code: 'custom', message: `${what}: type a length, e.g. 1200, 120 cm or 47 in` });
+      ctx.issues.push({ code: 'custom', input: s, message: `${what}: type a length, e.g. 1200, 120 cm or 47 in` });
       return z.NEVER;
     }
     if (v < min || v > max) {
-      ctx.addIssue({ code: 'custom', message: `${what} must be between ${min} and ${max} mm` });
+      ctx.issues.push({ code: 'custom', input: s, message: `${what} must be between ${min} and ${max} mm` });
       return z.NEVER;
     }
     return v;
-  });
+  }));
 }
 
 export function moduleFormSchema(unit: LengthUnit) {
   return z.object({
-    label: z.string().max(80, 'at most 80 characters').refine((s) => !/[\u0000-\u001F\u007F]/.test(s), 'no control characters'),
+    label: z.string().check(z.maxLength(80, 'at most 80 characters'), z.refine((s) => !/[\u0000-\u001F\u007F]/.test(s), 'no control characters')),
     kind: z.enum(MODULE_KINDS),
     x: lengthField(unit, MODULE_LIMITS.position.min, MODULE_LIMITS.position.max, 'Position along'),
     y: lengthField(unit, MODULE_LIMITS.position.min, MODULE_LIMITS.position.max, 'Position across'),
@@ -49,18 +50,18 @@ export function moduleFormSchema(unit: LengthUnit) {
     elevation: lengthField(unit, MODULE_LIMITS.elevation.min, MODULE_LIMITS.elevation.max, 'Elevation'),
     height: lengthField(unit, MODULE_LIMITS.height.min, MODULE_LIMITS.height.max, 'Height'),
     facing: z.enum(FACINGS),
-    arrangements: z.array(z.enum(ARRANGEMENTS)).min(1, 'a module exists in at least one arrangement'),
+    arrangements: z.array(z.enum(ARRANGEMENTS)).check(z.minLength(1, 'a module exists in at least one arrangement')),
     surface: z.union([z.literal(''), z.enum(SURFACES)]),
-    massKg: z.string().transform((s, ctx) => {
+    massKg: z.pipe(z.string(), z.transform((s: string, ctx) => {
       const t = s.trim().replace(/\s*kg$/i, '');
       if (t === '') return undefined;
       const v = Number(t.replace(',', '.'));
       if (!Number.isFinite(v) || v < MODULE_LIMITS.massKg.min || v > MODULE_LIMITS.massKg.max) {
-        ctx.addIssue({ code: 'custom', message: `Mass: a number of kg from ${MODULE_LIMITS.massKg.min} to ${MODULE_LIMITS.massKg.max}` });
+        ctx.issues.push({ code: 'custom', input: s, message: `Mass: a number of kg from ${MODULE_LIMITS.massKg.min} to ${MODULE_LIMITS.massKg.max}` });
         return z.NEVER;
       }
       return Math.round(v * 10) / 10;
-    }),
+    })),
     props: z.record(z.string(), z.union([z.string(), z.boolean()])),
   });
 }

@@ -14,6 +14,7 @@ import { emptyHistory, pushEntry, type History } from './history';
 import * as edits from './moduleEdits';
 import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
 import { px } from '../types';
+import { readableProblem } from '@/lib/layout/field-names';
 
 export interface EditorOptions {
   doc: LayoutDoc;
@@ -124,7 +125,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         });
         return { ok: true };
       } catch (e) {
-        if (e instanceof edits.EditError) return { ok: false, error: e.message };
+        if (e instanceof edits.EditError) return { ok: false, error: readableProblem(e.message) };
         throw e;
       }
     }

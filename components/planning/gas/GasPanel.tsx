@@ -7,13 +7,15 @@
  * `systems.alarms` only.
  */
 import { useMemo } from 'react';
-import { en721Ventilation, gasInventory, lockerVentRequiredCm2, moduleName } from '@/lib/planning';
+import { en721Ventilation, gasInventory, lockerVentRequiredCm2 } from '@/lib/planning';
+import { moduleLabel } from '@/lib/layout/kinds';
 import { FindingList, findingsOf } from '../FindingList';
 import { Caution, CheckField, FieldGroup, QuantityField, YesNoField } from '../fields';
 import type { PanelProps } from '../panelProps';
 import { useSectionForm } from '../useSectionForm';
 import { gasDefaults, gasSchema, gasSystems } from './gasForm';
 import { PLANNING_CAUTION } from '@/lib/layout/cautions';
+import { formatNumber } from '@/lib/format';
 
 export function GasPanel({ doc, readOnly, onSystems, onValidity, findings }: PanelProps) {
   const form = useSectionForm({ schema: gasSchema, defaults: () => gasDefaults(doc), onParsed: (v) => onSystems(gasSystems(v)), onValidity });
@@ -56,7 +58,7 @@ export function GasPanel({ doc, readOnly, onSystems, onValidity, findings }: Pan
             const floorCm2 = (l.length * l.width) / 100;
             return (
               <p key={l.id}>
-                {moduleName(l)}: floor <span className="font-mono">{Math.round(floorCm2).toLocaleString('en-GB')} cm²</span>, drop-out vent needed <span className="font-mono">{Math.round(lockerVentRequiredCm2(floorCm2))} cm²</span> <span className="text-ink-soft">(2 % of the floor, at least 100 cm²)</span>
+                {moduleLabel(l)}: floor <span className="font-mono">{formatNumber(floorCm2)} cm²</span>, drop-out vent needed <span className="font-mono">{Math.round(lockerVentRequiredCm2(floorCm2))} cm²</span> <span className="text-ink-soft">(2 % of the floor, at least 100 cm²)</span>
               </p>
             );
           })}

@@ -4,7 +4,7 @@
  * cylinder tare and the alarms — read into `systems.gas` and `systems.alarms`. Pure TypeScript.
  * A yes/no left unanswered stays absent (the checks ask for it), never "no".
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import type { LayoutDoc, Systems } from '@/lib/layout';
 import { compact, field, shown, triState, triStateOf } from '../quantities';
 

@@ -17,10 +17,11 @@ import type { PanelProps } from '../panelProps';
 import { useSectionForm } from '../useSectionForm';
 import { heatDefaults, heatSchema, heatSystems } from './heatForm';
 import { PLANNING_CAUTION } from '@/lib/layout/cautions';
+import { formatNumber } from '@/lib/format';
 
 const FACE = { floor: 'Floor', walls: 'Walls', roof: 'Roof' } as const;
 const f2 = (n: number) => n.toFixed(2);
-const f1 = (n: number) => (Math.round(n * 10) / 10).toLocaleString('en-GB');
+const f1 = (n: number) => formatNumber(n, 1);
 
 export function HeatPanel({ doc, readOnly, onSystems, onValidity, findings }: PanelProps) {
   const uid = useId();
@@ -110,8 +111,8 @@ export function HeatPanel({ doc, readOnly, onSystems, onValidity, findings }: Pa
         ))}
         <div className="panel space-y-1 p-3 text-sm">
           <p>Heat loss: <span className="font-mono" data-testid="heat-wk">{f1(h.totalWPerK)} W/K</span> <span className="text-ink-soft">({h.faces.map((fc) => `${fc.face} ${f1(fc.wPerK)}`).join(', ')}, windows {f1(h.windowsWPerK)}, air {f1(h.ventilationWPerK)} W/K)</span></p>
-          <p>Heat needed at <span className="font-mono">{h.deltaK} K</span>: <span className="font-mono" data-testid="heat-required">{Math.round(h.requiredW).toLocaleString('en-GB')} W</span></p>
-          <p>Heaters drawn: <span className="font-mono">{h.heaterW.toLocaleString('en-GB')} W</span> {h.heaterIds.length === 0 && <span className="text-ink-soft">(no heater module)</span>}</p>
+          <p>Heat needed at <span className="font-mono">{h.deltaK} K</span>: <span className="font-mono" data-testid="heat-required">{formatNumber(h.requiredW)} W</span></p>
+          <p>Heaters drawn: <span className="font-mono">{formatNumber(h.heaterW)} W</span> {h.heaterIds.length === 0 && <span className="text-ink-soft">(no heater module)</span>}</p>
           <p className="text-xs text-ink-soft">Steel ribs and pillars bridge the insulation and are not counted: keep a margin on the heater. Air: 0.34 W/(m³K) per air change an hour (EN 12831, from memory).</p>
         </div>
         {h.heaterIds.length > 0 && fuel !== 'electric' && (

@@ -3,7 +3,7 @@
  * the design temperature difference, air changes, declared λ values per material, and windows
  * — read into `systems.heating` and `systems.insulation`. Pure TypeScript; empty stays absent.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import type { LayoutDoc, Systems } from '@/lib/layout';
 import { compact, field, shown } from '../quantities';
 
@@ -15,24 +15,24 @@ export const heatSchema = z
     deltaK: field.plain(['K', '°C'], 'a temperature difference, e.g. 20 K', { min: 1, max: 80 })(false),
     airChangesPerHour: field.plain(['/h', 'ach'], 'air changes an hour, e.g. 1', { min: 0, max: 30 })(false),
     conductivities: z.array(z.object({
-      material: z.string().trim().min(1, 'name the material as in the build-up').max(80),
+      material: z.string().check(z.trim(), z.minLength(1, 'name the material as in the build-up'), z.maxLength(80)),
       lambda: field.plain(['W/mK', 'W/m·K'], 'a conductivity, e.g. 0.035', { min: 0.005, max: 500 })(true),
-    })).max(40),
+    })).check(z.maxLength(40)),
     windows: z.array(z.object({
       id: z.string(),
       face: z.enum(['walls', 'roof']),
       areaM2: field.plain(['m²', 'm2'], 'an area, e.g. 0.4 m²', { min: 0.01, max: 10 })(true),
       uValue: field.plain(['W/m²K'], 'a U-value, e.g. 3.0', { min: 0.1, max: 10 })(true),
-    })).max(20),
+    })).check(z.maxLength(20)),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     const seen = new Set<string>();
     v.conductivities.forEach((c, i) => {
       const key = c.material.toLowerCase();
       if (seen.has(key)) ctx.addIssue({ code: 'custom', path: ['conductivities', i, 'material'], message: 'already listed' });
       seen.add(key);
     });
-  });
+  }));
 export type HeatInput = z.input<typeof heatSchema>;
 
 export function heatDefaults(doc: LayoutDoc): HeatInput {

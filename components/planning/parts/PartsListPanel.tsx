@@ -74,7 +74,7 @@ export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string
       </div>
       {list.unpriced.length > 0 && (
         <p className="rounded-sm border border-brick bg-brick-light p-2 text-sm" role="alert">
-          Not priced yet: <span className="font-mono">{list.unpriced.join(', ')}</span>. Add them in <Link className="text-copper underline" href="/settings#price-list">Settings → Price list</Link> before sending a quote.
+          Not priced yet: {[...new Set(list.lines.filter((l) => l.unitPriceMinor === null).map((l) => l.description))].join(', ')}. Add them in <Link className="text-copper underline" href="/settings#price-list">Settings → Price list</Link> before sending a quote.
         </p>
       )}
       <div className="panel overflow-x-auto">

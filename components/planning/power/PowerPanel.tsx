@@ -1,14 +1,14 @@
 'use client';
 /**
  * Power: the 12 V system's inputs — battery by chemistry (with its usable depth of discharge),
- * loads with presets, solar (PVWatts default losses), alternator and hook-up charging, 230 V,
+ * loads with presets, solar (default system losses), alternator and hook-up charging, 230 V,
  * circuits — beside the results (PowerResults) and the `power.*` findings. Edits only
  * `systems.power`, through the page's onSystems.
  */
 import { useId, useMemo, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Plus, Trash2 } from 'lucide-react';
-import { BATTERY_CHEMISTRIES } from '@/lib/layout';
+import { BATTERY_CHEMISTRIES } from '@/lib/layout/vocabulary';
 import { CHEMISTRIES, LOAD_PRESETS, PVWATTS_DEFAULT_LOSSES_PCT } from '@/lib/planning';
 import { CheckField, FieldGroup, QuantityField } from '../fields';
 import { newRowId } from '../ids';
@@ -17,6 +17,7 @@ import { shown } from '../quantities';
 import { useSectionForm } from '../useSectionForm';
 import { powerDefaults, powerSchema, powerSystems } from './powerForm';
 import { PowerResults } from './PowerResults';
+import { moduleLabel } from '@/lib/layout/kinds';
 
 export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: PanelProps) {
   const uid = useId();
@@ -67,7 +68,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             <legend className="px-1 text-sm font-semibold">12 V loads</legend>
             <CheckField
               reg={r('includeModuleLoads')}
-              label={`Count the drawn appliances' own draw${moduleLoads.length ? ` (${moduleLoads.map((m) => m.label ?? m.kind).join(', ')})` : ''}`}
+              label={`Count the drawn appliances' own draw${moduleLoads.length ? ` (${moduleLoads.map((m) => moduleLabel(m)).join(', ')})` : ''}`}
               hint="modules with watts and a duty cycle in their details, such as a compressor fridge"
             />
             <div className="mt-3 space-y-2">
@@ -102,7 +103,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             </div>
           </fieldset>
 
-          <FieldGroup title="Charging" note={`Solar losses default to the PVWatts default, ${PVWATTS_DEFAULT_LOSSES_PCT.toFixed(2)} % (NREL PVWatts, as documented for pvlib; secondary). Peak sun hours for your region, e.g. from PVGIS.`}>
+          <FieldGroup title="Charging" note={`Solar losses default to ${PVWATTS_DEFAULT_LOSSES_PCT.toFixed(2)} %, the ten default system losses of a national laboratory's published technical report (NREL/TP-6A20-62641, 2014) taken together. Peak sun hours: the daily irradiation on the panel for your region and season, from a published solar irradiation map or dataset.`}>
             <QuantityField label="Solar panels" unit="W" reg={r('solarWatts')} error={e.solarWatts} />
             <QuantityField label="Sun, summer" unit="h/day" reg={r('pshSummer')} error={e.pshSummer} />
             <QuantityField label="Sun, spring/autumn" unit="h/day" reg={r('pshShoulder')} error={e.pshShoulder} />

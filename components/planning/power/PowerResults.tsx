@@ -12,10 +12,11 @@ import { cableSize, checkFittedCable, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, 
 import { FindingList, findingsOf } from '../FindingList';
 import { Caution } from '../fields';
 import { PLANNING_CAUTION } from '@/lib/layout/cautions';
+import { formatNumber } from '@/lib/format';
 
 const SEASON = { summer: 'Summer', shoulder: 'Spring/autumn', winter: 'Winter' } as const;
-const n0 = (n: number) => Math.round(n).toLocaleString('en-GB');
-const n1 = (n: number) => (Math.round(n * 10) / 10).toLocaleString('en-GB');
+const n0 = (n: number) => formatNumber(n);
+const n1 = (n: number) => formatNumber(n, 1);
 
 function circuitRows(doc: LayoutDoc) {
   const power = doc.systems?.power;

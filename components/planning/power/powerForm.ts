@@ -5,8 +5,9 @@
  * space, a drop allowance of its own) are kept from the document by circuit id. Pure
  * TypeScript; must never invent a value for an empty field.
  */
-import { z } from 'zod';
-import { BATTERY_CHEMISTRIES, type CircuitData, type LayoutDoc, type PowerData, type PowerLoad } from '@/lib/layout';
+import * as z from 'zod/mini';
+import { BATTERY_CHEMISTRIES } from '@/lib/layout/vocabulary';
+import type { CircuitData, LayoutDoc, PowerData, PowerLoad } from '@/lib/layout';
 import { compact, field, shown } from '../quantities';
 
 const watts = field.plain(['W'], 'watts, e.g. 45 W', { min: 0, max: 10_000 });
@@ -25,14 +26,14 @@ export const powerSchema = z
     includeModuleLoads: z.boolean(),
     loads: z.array(z.object({
       id: z.string(),
-      label: z.string().trim().min(1, 'name the load').max(80),
+      label: z.string().check(z.trim(), z.minLength(1, 'name the load'), z.maxLength(80)),
       watts: watts(true),
       hoursPerDay: hours(false),
       dutyPct: pct(0, 100)(false),
       supply: z.enum(['dc', 'ac']),
-    }).superRefine((l, ctx) => {
+    }).check(z.superRefine((l, ctx) => {
       if (l.hoursPerDay === undefined && l.dutyPct === undefined) ctx.addIssue({ code: 'custom', path: ['hoursPerDay'], message: 'hours a day or a duty cycle' });
-    })).max(60),
+    }))).check(z.maxLength(60)),
     solarWatts: watts(false),
     pshSummer: psh(false),
     pshShoulder: psh(false),
@@ -49,15 +50,15 @@ export const powerSchema = z
     autonomyDaysTarget: field.plain(['days', 'd'], 'days, e.g. 2', { min: 0.5, max: 30 })(false),
     circuits: z.array(z.object({
       id: z.string(),
-      label: z.string().trim().min(1, 'name the circuit').max(80),
+      label: z.string().check(z.trim(), z.minLength(1, 'name the circuit'), z.maxLength(80)),
       amps: amps(true),
       lengthM: field.metres({ min: 0.05, max: 100 })(true),
       volts: field.plain(['V'], 'volts, e.g. 12 V', { min: 6, max: 60 })(false),
       critical: z.boolean(),
       fittedMm2: field.plain(['mm²', 'mm2'], 'a cross-section, e.g. 6 mm²', { min: 0.1, max: 500 })(false),
-    })).max(60),
+    })).check(z.maxLength(60)),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     const some = (...xs: unknown[]) => xs.some((x) => x !== undefined);
     if ((v.chemistry === '') !== (v.capacityAh === undefined)) ctx.addIssue({ code: 'custom', path: [v.chemistry === '' ? 'chemistry' : 'capacityAh'], message: 'choose the chemistry and give the capacity' });
     if (v.chemistry !== '' && v.volts === undefined) ctx.addIssue({ code: 'custom', path: ['volts'], message: 'give the nominal volts' });
@@ -65,7 +66,7 @@ export const powerSchema = z
     if (v.solarWatts !== undefined) for (const k of ['pshSummer', 'pshShoulder', 'pshWinter'] as const) if (v[k] === undefined) ctx.addIssue({ code: 'custom', path: [k], message: 'peak sun hours for each season' });
     if ((v.alternatorAmps === undefined) !== (v.drivingHours === undefined)) ctx.addIssue({ code: 'custom', path: [v.alternatorAmps === undefined ? 'alternatorAmps' : 'drivingHours'], message: 'give both amps and hours' });
     if ((v.chargerAmps === undefined) !== (v.hookupHours === undefined)) ctx.addIssue({ code: 'custom', path: [v.chargerAmps === undefined ? 'chargerAmps' : 'hookupHours'], message: 'give both amps and hours' });
-  });
+  }));
 export type PowerInput = z.input<typeof powerSchema>;
 export type PowerOutput = z.output<typeof powerSchema>;
 

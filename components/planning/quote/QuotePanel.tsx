@@ -10,7 +10,7 @@ import Link from 'next/link';
 import { useMemo } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Send, ExternalLink } from 'lucide-react';
 import { toast } from 'sonner';
@@ -23,17 +23,18 @@ import { parseWithUnit } from '../quantities';
 import { usePriceList } from '../usePriceList';
 import type { CutOptions } from '../cut/CutListPanel';
 import { QuoteStatus } from './QuoteView';
+import { formatDateTime } from '@/lib/format';
 
 const schema = z.object({
-  depositPct: z.string().transform((s, ctx) => {
+  depositPct: z.pipe(z.string(), z.transform((s: string, ctx) => {
     const v = parseWithUnit(s, ['%']);
     if (v === null || v <= 0 || v > 100 || Math.abs(Math.round(v * 100) - v * 100) > 1e-6) {
-      ctx.addIssue({ code: 'custom', message: 'a percentage above 0 and at most 100, e.g. 25 %' });
+      ctx.issues.push({ code: 'custom', input: s, message: 'a percentage above 0 and at most 100, e.g. 25 %' });
       return z.NEVER;
     }
     return v;
-  }),
-  note: z.string().trim().max(1000, 'at most 1000 characters'),
+  })),
+  note: z.string().check(z.trim(), z.maxLength(1000, 'at most 1000 characters')),
 });
 
 export function useCurrentQuote(layoutId: string) {
@@ -69,7 +70,7 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
         json: { layoutVersion: savedVersion, depositPct: v.depositPct, ...(v.note ? { note: v.note } : {}), cut },
       }),
     onSuccess: (res) => {
-      toast.success(res.mail === 'sent' ? `Quote sent to ${clientName ?? 'the client'}` : 'Quote saved; the mail to the client could not be sent');
+      toast.success(res.mail === 'sent' ? `Quote sent to ${clientName ?? 'the client'}` : res.mail === 'not-configured' ? 'Quote saved; mail is not set up on this server, so tell the client yourself' : 'Quote saved; the mail to the client could not be sent');
       qc.setQueryData(['quote', layoutId], { quote: res.quote });
     },
     onError: (err) => {
@@ -96,8 +97,8 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
               : (
                 <div className="space-y-2 text-sm">
                   <QuoteStatus quote={q} />
-                  <p>Total <span className="font-mono">{formatMoney(q.grossMinor, q.currency)}</span>, deposit {q.depositPct} % <span className="font-mono">{formatMoney(q.depositMinor, q.currency)}</span>; sent by {q.sentByName} on {new Date(q.sentAt).toLocaleString('en-GB')}.</p>
-                  {q.paidAt && <p>Paid on {new Date(q.paidAt).toLocaleString('en-GB')}{q.receiptTo ? `; receipt sent to ${q.receiptTo}` : ''}.</p>}
+                  <p>Total <span className="font-mono">{formatMoney(q.grossMinor, q.currency)}</span>, deposit {q.depositPct} % <span className="font-mono">{formatMoney(q.depositMinor, q.currency)}</span>; sent by {q.sentByName} on {formatDateTime(q.sentAt)}.</p>
+                  {q.paidAt && <p>Paid on {formatDateTime(q.paidAt)}{q.receiptTo ? `; receipt sent to ${q.receiptTo}` : ''}.</p>}
                 </div>
               )}
         <Link className="inline-flex items-center gap-1 text-sm text-copper underline" href={`/layouts/${layoutId}/quote`}>

@@ -8,8 +8,8 @@
 import { CircleCheck, Clock, CircleSlash } from 'lucide-react';
 import type { QuoteDto } from '@/db/quotes';
 import { formatMoney, quantityText } from '../money';
+import { formatDateTime } from '@/lib/format';
 
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 export function QuoteStatus({ quote }: { quote: QuoteDto }) {
   if (quote.status === 'paid') return <span className="inline-flex items-center gap-1 rounded-sm bg-moss-light px-2 py-0.5 text-sm font-semibold text-moss" data-testid="quote-status"><CircleCheck size={14} aria-hidden="true" />Deposit paid</span>;
@@ -26,7 +26,7 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
         <div>
           <h2 className="text-lg font-semibold">Quote {quote.id.slice(0, 8).toUpperCase()}</h2>
           <p className="text-sm text-ink-soft">
-            {quote.studioName} · sent by {quote.sentByName} on {when.format(new Date(quote.sentAt))} UTC · priced from layout version <span className="font-mono">{quote.layoutVersion}</span>
+            {quote.studioName} · sent by {quote.sentByName} on {formatDateTime(quote.sentAt)} · priced from layout version <span className="font-mono">{quote.layoutVersion}</span>
             {quote.clientName ? ` · for ${quote.clientName}` : ''}
           </p>
         </div>
@@ -60,7 +60,7 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
         <div>
           <dt className="label">Paid</dt>
           <dd className="text-sm" data-testid="quote-paid">
-            {quote.paidAt ? <>on {when.format(new Date(quote.paidAt))} UTC{quote.receiptTo ? <>; receipt sent to <span className="font-mono">{quote.receiptTo}</span></> : '; receipt not sent yet'}</> : 'not yet'}
+            {quote.paidAt ? <>on {formatDateTime(quote.paidAt)}{quote.receiptTo ? <>; receipt sent to <span className="font-mono">{quote.receiptTo}</span></> : '; receipt not sent yet'}</> : 'not yet'}
           </dd>
         </div>
       </dl>

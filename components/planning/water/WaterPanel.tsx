@@ -5,7 +5,7 @@
  * `water.*` findings. Edits only `systems.water`; tank sizes live on the tank modules.
  */
 import { useMemo } from 'react';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterPlan } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
 import { FindingList, findingsOf } from '../FindingList';
@@ -13,6 +13,7 @@ import { FieldGroup, QuantityField } from '../fields';
 import type { PanelProps } from '../panelProps';
 import { compact, field, shown } from '../quantities';
 import { useSectionForm } from '../useSectionForm';
+import { formatNumber } from '@/lib/format';
 
 export const waterSchema = z.object({
   persons: field.plain(['', 'people', 'persons'], 'a whole number, e.g. 2', { min: 1, max: 12, int: true })(false),
@@ -47,7 +48,7 @@ export function WaterPanel({ doc, readOnly, onSystems, onValidity, findings }: P
         <div className="panel grid gap-2 p-3 text-sm sm:grid-cols-2">
           <p>Fresh water: <span className="font-mono">{w.freshL} L</span> <span className="text-ink-soft">({w.freshFullKg} kg full)</span></p>
           <p>Grey water: <span className="font-mono">{w.greyL} L</span></p>
-          <p>Lasts: <span className="font-mono" data-testid="water-days">{w.days === null ? '—' : `${(Math.round(w.days * 10) / 10).toLocaleString('en-GB')} days`}</span> <span className="text-ink-soft">for {w.persons} at {w.litresPerPersonPerDay} L a day</span></p>
+          <p>Lasts: <span className="font-mono" data-testid="water-days">{w.days === null ? '—' : `${formatNumber(w.days, 1)} days`}</span> <span className="text-ink-soft">for {w.persons} at {w.litresPerPersonPerDay} L a day</span></p>
           <p>Self-contained minimum: <span className="font-mono">{w.nzsMinimumL} L</span> <span className="text-ink-soft">({NZS5465_L_PER_PERSON_DAY} L × {NZS5465_DAYS} days each; NZS 5465, as cited)</span></p>
         </div>
         {tanks.length === 0 && <p className="text-sm text-ink-soft">No water tanks are drawn: add fresh and grey water tanks from the Parts shelf in the editor.</p>}

@@ -8,6 +8,7 @@
  */
 import type { LayoutDoc } from '@/lib/layout';
 import type { MassReport } from '@/lib/planning';
+import { formatNumber } from '@/lib/format';
 
 const INK = '#1E2A2F';
 const SOFT = '#8A969B';
@@ -26,7 +27,7 @@ export function CentreOfMassPlan({ doc, report }: { doc: LayoutDoc; report: Mass
   const bottom = W + 360;
   const font = Math.max(60, (maxX - minX) / 55);
   const com = report.centreOfMass;
-  const kg = (n: number) => `${Math.round(n).toLocaleString('en-GB')} kg`;
+  const kg = (n: number) => `${formatNumber(n)} kg`;
   return (
     <svg
       viewBox={`${minX} ${top} ${maxX - minX} ${bottom - top}`}

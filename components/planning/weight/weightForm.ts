@@ -4,7 +4,7 @@
  * React), so the conversion both ways is tested on its own. Must never invent a value for a
  * field left empty: empty stays absent, and the checks ask for it.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import type { LayoutDoc, LengthUnit, PayloadItem, Systems } from '@/lib/layout';
 import { compact, field, shown, shownLength } from '../quantities';
 
@@ -32,16 +32,16 @@ export function weightSchema(units: LengthUnit) {
       greyFillPct: pct(false),
       items: z.array(z.object({
         id: z.string(),
-        label: z.string().trim().min(1, 'name the item').max(80),
+        label: z.string().check(z.trim(), z.minLength(1, 'name the item'), z.maxLength(80)),
         massKg: field.mass({ max: 2000 })(true),
         x: x(true),
-      })).max(50),
+      })).check(z.maxLength(50)),
     })
-    .superRefine((v, ctx) => {
+    .check(z.superRefine((v, ctx) => {
       if (v.frontAxleRunningOrderKg !== undefined && v.massInRunningOrderKg !== undefined && v.frontAxleRunningOrderKg > v.massInRunningOrderKg) {
         ctx.addIssue({ code: 'custom', path: ['frontAxleRunningOrderKg'], message: 'more than the whole mass in running order' });
       }
-    });
+    }));
 }
 export type WeightInput = z.input<ReturnType<typeof weightSchema>>;
 export type WeightOutput = z.output<ReturnType<typeof weightSchema>>;

@@ -6,9 +6,11 @@
  * the port for the app's mail transport (./address).
  *
  * Must never listen on anything but loopback, never relay mail anywhere, and never run in a
- * deployment that talks to a real relay (SMTP_URL set, or BAYWRIGHT_REAL_SERVICES=1).
+ * deployment that talks to a real relay (SMTP_URL set), or in production unless asked (lib/local-mode).
  */
 import 'server-only';
+import { log } from '@/lib/log';
+import { localStandInsAllowed } from '@/lib/local-mode';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { storeReceivedMail, type ReceivedMail } from '@/db/sharing/outbox';
@@ -73,12 +75,12 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
           callback();
         })
         .catch((err) => {
-          console.error('[baywright] development mail server could not keep a message:', err instanceof Error ? err.message : err);
+          log.error('development mail server could not keep a message', { error: err });
           callback(Object.assign(new Error('Could not store the message; try again'), { responseCode: 451 }));
         });
     },
   });
-  server.on('error', (err) => console.error('[baywright] development mail server:', err.message));
+  server.on('error', (err) => log.error('development mail server failed', { error: err }));
   const port = await new Promise<number>((resolve, reject) => {
     const onError = (err: Error) => reject(err);
     server.server.once('error', onError);
@@ -105,7 +107,7 @@ const g = globalThis as GlobalWithServer;
 
 /** Whether this process should run the development mail server at all. */
 export function fakeSmtpWanted(env: Record<string, string | undefined> = process.env): boolean {
-  return !env.SMTP_URL && env.BAYWRIGHT_REAL_SERVICES !== '1';
+  return !env.SMTP_URL && localStandInsAllowed(env);
 }
 
 /** Starts the server once per process (dev reloads call this again and get the same one). */
@@ -113,7 +115,7 @@ export function startFakeSmtpOnce(): Promise<FakeSmtp> {
   if (!g.__baywrightFakeSmtpServer) {
     const port = process.env.BAYWRIGHT_FAKE_SMTP_PORT ? Number(process.env.BAYWRIGHT_FAKE_SMTP_PORT) : 0;
     g.__baywrightFakeSmtpServer = startFakeSmtp({ port }).then((s) => {
-      console.log(`[baywright] development mail server on smtp://${s.host}:${s.port} (mail is kept in the outbox, never delivered)`);
+      log.info('development mail server listening (mail is kept in the outbox, never delivered)', { address: `smtp://${s.host}:${s.port}` });
       return s;
     }).catch((err) => {
       g.__baywrightFakeSmtpServer = undefined;

@@ -6,10 +6,11 @@
  * `/api/payments/webhook` on 127.0.0.1 and PORT (FAKE_STRIPE_WEBHOOK_URL overrides), signed with
  * lib/payments' webhook secret.
  *
- * Must never run in a real deployment (BAYWRIGHT_REAL_SERVICES=1), listen beyond loopback, or
+ * Must never run in production unless asked (lib/local-mode), listen beyond loopback, or
  * sign with anything but the local secret.
  */
 import 'server-only';
+import { log } from '../../log';
 import { DEFAULT_FAKE_STRIPE_PORT, setFakeStripeAddress, webhookSecret } from '../../payments/config';
 import { startFakeStripe, type FakeStripe } from './server';
 
@@ -35,10 +36,10 @@ async function start(): Promise<FakeStripe> {
   } catch (err) {
     if (explicit || (err as NodeJS.ErrnoException).code !== 'EADDRINUSE') throw err;
     fake = await startFakeStripe({ ...options, port: 0 });
-    console.log(`[baywright] port ${port} is taken; the local payment API uses ${fake.port} instead`);
+    log.info('port taken; the local payment API uses another', { wanted: port, port: fake.port });
   }
   setFakeStripeAddress({ host: '127.0.0.1', port: fake.port });
-  console.log(`[baywright] local test payment API on ${fake.url} (no real payments), webhooks to ${options.webhookUrl}`);
+  log.info('local test payment API listening (no real payments)', { address: fake.url, webhooks: options.webhookUrl });
   return fake;
 }
 

@@ -3,6 +3,7 @@ import { redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
 import { canEditLayouts } from '@/db/actor';
 import { NewLayoutForm } from '@/components/layouts/NewLayoutForm';
+import { BAY_TEMPLATES } from '@/lib/layout/templates';
 
 export const metadata: Metadata = { title: 'New layout' };
 
@@ -13,7 +14,7 @@ export default async function NewLayoutPage() {
   return (
     <main className="mx-auto max-w-2xl px-6 py-8">
       <h1 className="mb-6 text-2xl font-semibold">New layout</h1>
-      <NewLayoutForm />
+      <NewLayoutForm templates={BAY_TEMPLATES.map((t) => ({ id: t.id, name: t.name, bay: { length: t.bay.length, width: t.bay.width, height: t.bay.height } }))} />
     </main>
   );
 }

@@ -6,11 +6,11 @@ import { currentActor } from '@/lib/auth/session';
 import { getOutboxMail } from '@/db/sharing/outbox';
 import { outboxEnabled } from '@/lib/mail/outbox-mode';
 import { NotFoundError } from '@/db/errors';
+import { formatDateTime } from '@/lib/format';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Message' };
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
 const URL_PATTERN = /(https?:\/\/[^\s<>"]+)/g;
 
 /** One received message: its plain-text body (never its HTML), links clickable. */
@@ -32,7 +32,7 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
       <dl className="mt-2 grid grid-cols-[6rem_1fr] gap-y-1 text-sm">
         <dt className="text-ink-soft">From</dt><dd>{mail.from}</dd>
         <dt className="text-ink-soft">To</dt><dd>{mail.to.join(', ')}</dd>
-        <dt className="text-ink-soft">Received</dt><dd>{WHEN.format(new Date(mail.receivedAt))}</dd>
+        <dt className="text-ink-soft">Received</dt><dd>{formatDateTime(mail.receivedAt)}</dd>
       </dl>
       <pre className="panel mt-4 whitespace-pre-wrap break-words p-4 font-sans text-sm" data-testid="mail-text">
         {parts.map((p, i) => (i % 2 === 1 ? <a key={i} href={p} className="text-copper underline" rel="noreferrer">{p}</a> : p))}

@@ -12,7 +12,7 @@ const acceptBody = z.strictObject({
   token: z.string().min(1, 'the invitation link is missing its code').max(100),
   name: z.string().trim().min(1, 'tell us your name').max(80).optional(),
   /** Only for an address with no account yet; an existing account accepts with its session. */
-  password: newPasswordSchema.optional(),
+  password: z.optional(newPasswordSchema),
 });
 
 /** Twenty attempts an hour from one address (the token itself is 256 bits; this only slows noise). */

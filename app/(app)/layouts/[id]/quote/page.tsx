@@ -11,6 +11,7 @@ import { checkReturnedSession } from '@/lib/payments/deposit';
 import { QuoteView } from '@/components/planning/quote/QuoteView';
 import { PayDepositButton } from '@/components/planning/quote/PayDepositButton';
 import { QUOTE_CAUTION } from '@/lib/layout/cautions';
+import { paymentsConfigured } from '@/lib/payments/config';
 
 export const metadata: Metadata = { title: 'Quote' };
 
@@ -64,7 +65,12 @@ export default async function QuotePage({ params, searchParams }: { params: Prom
       ) : (
         <>
           <QuoteView quote={quote} />
-          {quote.canPay && (
+          {quote.canPay && !paymentsConfigured() && (
+            <p role="status" className="panel flex items-center gap-2 p-4 text-sm">
+              <Info size={16} aria-hidden="true" /> Deposits cannot be paid here yet: payments are not set up on this server. Your workshop can take the deposit another way.
+            </p>
+          )}
+          {quote.canPay && paymentsConfigured() && (
             <div className="panel flex flex-wrap items-center justify-between gap-3 p-4">
               <p className="text-sm">Pay the deposit on the payment service&apos;s secure page; you come back here when it is done.</p>
               <PayDepositButton layoutId={layout.id} depositMinor={quote.depositMinor} currency={quote.currency} />

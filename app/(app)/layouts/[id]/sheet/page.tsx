@@ -3,7 +3,8 @@ import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
 import { NotFoundError } from '@/db/errors';
-import { composeSheet, PAPER_MM } from '@/lib/sheet';
+import { PAPER_MM } from '@/lib/sheet';
+import { runJob, WorkPoolBusyError } from '@/lib/workers/pool';
 import { sheetQuerySchema, sheetRequestFor } from '@/app/api/layouts/[id]/sheet/sheet-request';
 import { SheetSvg } from '@/components/sheet/SheetSvg';
 import { SheetControls } from '@/components/sheet/SheetControls';
@@ -29,7 +30,22 @@ export default async function SheetPage({ params, searchParams }: Props) {
     if (err instanceof NotFoundError) notFound();
     throw err;
   });
-  const result = composeSheet({ ...ctx.request, paper: query.paper, scale: query.scale });
+  const composed = await runJob('sheet', { ...ctx.request, paper: query.paper, scale: query.scale }).catch((err: unknown) => {
+    if (err instanceof WorkPoolBusyError) return err;
+    throw err;
+  });
+  if (composed instanceof WorkPoolBusyError) {
+    return (
+      <div role="alert" className="panel m-6 max-w-2xl border-ochre bg-ochre-light p-4 text-sm text-ink" data-testid="sheet-busy">
+        <p className="mb-2 font-semibold">The server is busy drawing other plan sheets.</p>
+        <p className="mb-3">Try again in {composed.retryAfterSeconds} s; nothing was lost.</p>
+        <Link className="btn-primary" href={`/layouts/${ctx.layoutId}/sheet?paper=${query.paper}&scale=${query.scale}${query.revision ? `&revision=${query.revision}` : ''}`}>
+          Try again
+        </Link>
+      </div>
+    );
+  }
+  const result = composed;
   const paper = PAPER_MM[query.paper];
   const canEdit = actor.role !== 'client';
 

@@ -1,7 +1,7 @@
 import { handle, json, requireActor } from '@/lib/api/respond';
 import { getInvitation, renewInvitation } from '@/db/sharing/invitations';
 import { requireMailBudget } from '@/lib/mail/budget';
-import { sendInvitation } from '@/lib/mail/notify';
+import { requireMail, sendInvitation } from '@/lib/mail/notify';
 
 export const dynamic = 'force-dynamic';
 
@@ -11,7 +11,10 @@ type Ctx = { params: Promise<{ id: string }> };
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  const giveBack = await requireMailBudget(actor, (await getInvitation(actor, id)).email);
+  const invitation = await getInvitation(actor, id);
+  // Without mail there is nothing to resend: 503, and the link stays as it was.
+  requireMail();
+  const giveBack = await requireMailBudget(actor, invitation.email);
   const issued = await renewInvitation(actor, id).catch(async (err: unknown) => {
     await giveBack(); // accepted or withdrawn meanwhile: no mail went out
     throw err;

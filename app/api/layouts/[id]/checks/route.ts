@@ -1,6 +1,6 @@
 import { handle, json, requireActor } from '@/lib/api/respond';
 import { getLayout } from '@/db/layouts';
-import { runChecks } from '@/lib/checks';
+import { runJob } from '@/lib/workers/pool';
 import { studioCheckDefaults } from '@/db/studios';
 
 export const dynamic = 'force-dynamic';
@@ -11,5 +11,5 @@ type Ctx = { params: Promise<{ id: string }> };
 export const GET = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const layout = await getLayout(actor, (await params).id);
-  return json(runChecks(layout.doc, { studioDefaults: await studioCheckDefaults(actor) }), { headers: { ETag: `"${layout.version}"` } });
+  return json(await runJob('checks', { doc: layout.doc, studioDefaults: await studioCheckDefaults(actor) }), { headers: { ETag: `"${layout.version}"` } });
 });

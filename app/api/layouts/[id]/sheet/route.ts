@@ -1,6 +1,8 @@
 import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
-import { composeSheet, renderPdf } from '@/lib/sheet';
+import { sheetFonts } from '@/lib/api/sheet-fonts';
+import { clientAddress } from '@/lib/auth/address';
+import { runJob } from '@/lib/workers/pool';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
 import { getLayout } from '@/db/layouts';
 import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
@@ -10,10 +12,13 @@ export const dynamic = 'force-dynamic';
 type Ctx = { params: Promise<{ id: string }> };
 
 /**
- * A sheet costs up to a second or two of this process's time: a burst of 10, then one every
+ * A sheet costs up to a second or two of a pool worker's time (lib/workers/pool.ts; ten at once
+ * queue or get 503): a burst of 10, then one every
  * 3 s per user (common practice, no source) — plenty for printing, not enough to tie the server up.
  */
 export const sheetLimiter = new RateLimiter(10, 1 / 3);
+/** Per client address too (lib/auth/address): three users' worth. */
+export const sheetAddressLimiter = new RateLimiter(30, 1);
 
 /**
  * The plan sheet as a PDF: `?paper=a4|a3&scale=10|20|25[&revision=B]`. Anyone who may read the layout may
@@ -25,6 +30,10 @@ export const GET = handle<Ctx>(async (req, { params }) => {
   if (!sheetLimiter.take(actor.userId)) {
     throw new HttpError(429, 'Too many plan sheets at once; wait a few seconds.', { retryAfter: sheetLimiter.retryAfter(actor.userId) });
   }
+  const address = clientAddress(req);
+  if (!sheetAddressLimiter.take(address)) {
+    throw new HttpError(429, 'Too many plan sheets from this address; wait a few seconds.', { retryAfter: sheetAddressLimiter.retryAfter(address) });
+  }
   const { id } = await params;
   const parsed = sheetQuerySchema.safeParse(queryOf(req.url));
   if (!parsed.success) {
@@ -33,9 +42,9 @@ export const GET = handle<Ctx>(async (req, { params }) => {
   }
   const q = parsed.data!;
   const ctx = await sheetRequestFor(actor, id, q.revision);
-  const result = composeSheet({ ...ctx.request, paper: q.paper, scale: q.scale });
+  const result = await runJob('sheetPdf', { ...ctx.request, paper: q.paper, scale: q.scale, author: ctx.request.details.studio, fonts: await sheetFonts() });
   if (!result.ok) throw new HttpError(422, result.message, { suggestion: result.suggestion, needed: result.needed, available: result.available });
-  const bytes = await renderPdf(result.sheet, { author: ctx.request.details.studio });
+  const bytes = result.pdf;
   return new Response(Buffer.from(bytes), {
     status: 200,
     headers: {

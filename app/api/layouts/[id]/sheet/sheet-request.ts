@@ -1,7 +1,7 @@
 /**
  * Gathers what a plan sheet of a stored layout needs — the document, the studio, the client, the
- * studio's units and check defaults, the check report — for the PDF route and the HTML print
- * view alike, after the rights checks of `getLayout` (404 for anyone who may not see it). The
+ * studio's units and check defaults — for the PDF route and the HTML print view alike (the checks
+ * and the drawing itself run in the work pool, lib/workers: job `sheet` / `sheetPdf`), after the rights checks of `getLayout` (404 for anyone who may not see it). The
  * revisions feature can pass a frozen revision (letter and document) to print that instead of
  * the layout as it stands (`?revision=B`); the sheet then carries its revision table and clouds
  * round what changed since the revision before. Server only; never trusts a query string beyond its schema.
@@ -10,13 +10,13 @@ import 'server-only';
 import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
-import { getStudio, withStudioDefaults } from '@/db/studios';
+import { getStudio } from '@/db/studios';
 import { getRevision, listRevisions, revisionIdByLetter, type RevisionDto } from '@/db/sharing/revisions';
 import { diffRevisions } from '@/lib/layout/revision-diff';
-import { runChecks } from '@/lib/checks';
-import type { CheckReport } from '@/lib/checks/types';
 import type { LayoutDoc } from '@/lib/layout';
-import { REVISION_LETTER, type SheetRequest } from '@/lib/sheet';
+import { REVISION_LETTER } from '@/lib/sheet';
+import { formatDate } from '@/lib/format';
+import type { SheetInput } from '@/lib/workers/jobs';
 
 /** `?paper=a4|a3&scale=10|20|25`; both optional (A4 at 1:20). */
 export const sheetQuerySchema = z.strictObject({
@@ -40,13 +40,13 @@ export interface FrozenRevision {
 
 export interface SheetContext {
   /** Everything but the paper and scale, which the caller chooses. */
-  request: Omit<SheetRequest, 'paper' | 'scale'>;
+  request: Omit<SheetInput, 'paper' | 'scale'>;
   layoutId: string;
   layoutName: string;
 }
 
 export function today(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
+  return formatDate(now);
 }
 
 /** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
@@ -62,21 +62,12 @@ export async function sheetRequestFor(actor: Actor, layoutId: string, revision?:
   const studio = await getStudio(actor);
   const doc = revision?.doc ?? layout.doc;
   const { rows, changes } = await revisionMarks(actor, layoutId, revision ?? null);
-  let report: CheckReport | null = null;
-  let checksUnavailable: string | undefined;
-  try {
-    report = runChecks(withStudioDefaults(doc, studio.checkDefaults));
-  } catch (err) {
-    console.error('[baywright] checks failed while making a plan sheet', err);
-    checksUnavailable = 'the check engine stopped on this layout';
-  }
   return {
     layoutId: layout.id,
     layoutName: layout.name,
     request: {
       doc,
-      report,
-      checksUnavailable,
+      studioDefaults: studio.checkDefaults,
       units: studio.units,
       details: { studio: studio.name, client: layout.client?.name ?? null, layout: layout.name, revision: revision?.letter ?? null, issueState: revision?.state ?? null, date: today() },
       revisions: rows,
@@ -90,7 +81,7 @@ async function revisionMarks(actor: Actor, layoutId: string, printed: FrozenRevi
   const newestFirst = await listRevisions(actor, layoutId);
   const oldestFirst = [...newestFirst].reverse();
   const upTo = printed ? oldestFirst.findIndex((r) => r.letter === printed.letter) : oldestFirst.length - 1;
-  const rows = oldestFirst.slice(0, upTo + 1).map((r) => ({ letter: r.letter, date: r.issuedAt.slice(0, 10), description: r.note, by: r.issuedBy }));
+  const rows = oldestFirst.slice(0, upTo + 1).map((r) => ({ letter: r.letter, date: formatDate(r.issuedAt), description: r.note, by: r.issuedBy }));
   const before = printed && upTo > 0 ? oldestFirst[upTo - 1] : null;
   const changes = printed && before ? { letter: printed.letter, diff: diffRevisions((await getRevision(actor, layoutId, before.id)).doc, printed.doc) } : null;
   return { rows, changes };

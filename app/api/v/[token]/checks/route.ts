@@ -1,7 +1,6 @@
 import { handle, json } from '@/lib/api/respond';
 import { resolveViewerLink } from '@/db/sharing/viewer-links';
-import { withStudioDefaults } from '@/db/studios';
-import { runChecks } from '@/lib/checks';
+import { runJob } from '@/lib/workers/pool';
 import { refuseUnusable, takeViewerToken, withViewerHeaders } from '../../viewer-guard';
 
 export const dynamic = 'force-dynamic';
@@ -14,7 +13,7 @@ const get = handle<Ctx>(async (req, { params }) => {
   const resolved = await resolveViewerLink((await params).token);
   if (resolved.status !== 'active') refuseUnusable(resolved);
   const { doc, checkDefaults, version } = resolved.content;
-  return json(runChecks(withStudioDefaults(doc, checkDefaults)), { headers: { ETag: `"${version}"` } });
+  return json(await runJob('checks', { doc, studioDefaults: checkDefaults }), { headers: { ETag: `"${version}"` } });
 });
 
 export const GET = async (req: Request, ctx: Ctx) => withViewerHeaders(await get(req, ctx));

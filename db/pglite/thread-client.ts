@@ -2,11 +2,12 @@
  * The embedded database on its own thread. PGlite is PostgreSQL compiled to WebAssembly and runs
  * on the thread that opened it; in the server that thread also runs Next.js, so every request
  * waited for both in turn and the second core sat idle. Here PGlite runs in a worker thread
- * (db/pglite-thread.mjs) and this client gives drizzle the part of PGlite's interface it uses —
+ * (db/pglite/thread.mjs) and this client gives drizzle the part of PGlite's interface it uses —
  * `query` and `transaction` — over messages. One process still owns the folder (the pid lock is
  * taken here, on the main thread).
  */
 import 'server-only';
+import { log } from '../../lib/log';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 
@@ -48,7 +49,7 @@ export class PgliteThreadError extends Error {
   }
 }
 
-const THREAD_FILE = path.join(/* turbopackIgnore: true */ process.cwd(), 'db', 'pglite-thread.mjs');
+const THREAD_FILE = path.join(/* turbopackIgnore: true */ process.cwd(), 'db', 'pglite', 'thread.mjs');
 
 interface Queryable {
   query(sql: string, params?: unknown[], options?: { rowMode?: 'array' | 'object' }): Promise<QueryResult>;
@@ -73,7 +74,7 @@ export class PgliteThreadClient implements Queryable {
       this.pending.clear();
       if (!this.closed) {
         // Serving on without the database would only answer 500s: stop, so a supervisor restarts.
-        console.error(`[baywright] ${failure.message}; stopping the server`);
+        log.error('database thread failed; stopping the server', { error: failure });
         process.exit(1);
       }
     });
@@ -127,6 +128,11 @@ export class PgliteThreadClient implements Queryable {
     }
     await this.call('end', { tx, commit: true });
     return result;
+  }
+
+  /** The data folder as a gzipped tarball (PGlite's dumpDataDir), for backups. */
+  dump(): Promise<Uint8Array> {
+    return this.call<Uint8Array>('dump');
   }
 
   async close(): Promise<void> {

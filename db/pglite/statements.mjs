@@ -2,16 +2,65 @@
 // the SQL on every call (five protocol steps into WebAssembly); for the small joined reads on
 // the hot path, planning is most of the cost. Here a read whose text has been seen before is
 // parsed once as a named statement, and later calls only bind and execute it — in one buffer,
-// under the same locks `query` takes, with PGlite's own parameter serialisers and result parser.
-// Only reads outside a transaction take this path; writes and transactions use `query` as before.
+// with PGlite's own parameter serialisers and result parser.
+//
+// Only PGlite's public interface is used (see PGLITE_CONTRACT below; tests/adapters/pglite.test.ts
+// runs it against the pinned version): `runExclusive` holds the query lock while the protocol
+// messages run, and `isInTransaction` tells when a transaction is open between its statements —
+// then the read goes to `query`, which waits for the transaction instead of reading inside it.
+// Only reads take this path; writes and transactions use `query` as before.
 // Plain ESM, shared by the database thread and the tests.
 import { parse as pgParse, protocol } from '@electric-sql/pglite';
 
-const { serialize } = protocol;
 const NO_SYNC = { syncToFs: false };
 const READ = /^\s*select\b/i;
+const IN_TRANSACTION = Symbol('in transaction');
 // Names are unique across every cache in this module instance (tests open several per database).
 let nextName = 1;
+
+/**
+ * What this adapter needs of PGlite, by name and kind. All of it is public API of
+ * @electric-sql/pglite 0.5.17; a later version that renames or drops a piece makes
+ * `pgliteContractProblems` name it, the contract test fail, and the cache step aside.
+ */
+export const PGLITE_CONTRACT = {
+  instance: {
+    runExclusive: 'function',
+    isInTransaction: 'function',
+    execProtocolStream: 'function',
+    query: 'function',
+    serializers: 'object',
+    parsers: 'object',
+  },
+  protocol: { parse: 'function', describe: 'function', bind: 'function', execute: 'function', sync: 'function', close: 'function' },
+  parse: { parseResults: 'function', parseDescribeStatementResults: 'function' },
+};
+
+/** Every piece of PGLITE_CONTRACT that `db` (and the package's exports) lack, as readable lines. */
+export function pgliteContractProblems(db, exports = { protocol, parse: pgParse }) {
+  const problems = [];
+  const check = (owner, where, wanted) => {
+    for (const [name, kind] of Object.entries(wanted)) {
+      const actual = owner == null ? 'undefined' : typeof owner[name];
+      if (actual !== kind) problems.push(`${where}.${name} should be a ${kind}, is ${actual === 'undefined' ? 'missing' : `a ${actual}`}`);
+    }
+  };
+  check(db, 'PGlite instance', PGLITE_CONTRACT.instance);
+  check(exports.protocol?.serialize, "'@electric-sql/pglite' protocol.serialize", PGLITE_CONTRACT.protocol);
+  check(exports.parse, "'@electric-sql/pglite' parse", PGLITE_CONTRACT.parse);
+  return problems;
+}
+
+/** Throws one error naming every missing piece; the message says what to do about it. */
+export function assertPgliteContract(db, exports) {
+  const problems = pgliteContractProblems(db, exports);
+  if (problems.length) {
+    throw new Error(
+      `The installed PGlite no longer offers what db/pglite/statements.mjs relies on:\n  - ${problems.join('\n  - ')}\n` +
+        'Pin @electric-sql/pglite back to the version in package.json, or adapt db/pglite/statements.mjs to the new interface.',
+    );
+  }
+}
 
 function concat(parts) {
   const out = new Uint8Array(parts.reduce((n, p) => n + p.length, 0));
@@ -22,6 +71,8 @@ function concat(parts) {
   }
   return out;
 }
+
+let warned = false;
 
 export class StatementCache {
   #db;
@@ -40,19 +91,31 @@ export class StatementCache {
     this.#db = db;
     this.#max = max;
     this.#prepareAfter = prepareAfter;
-    // The locks are PGlite's own; without them (another PGlite version) every query goes to `query`.
-    this.#usable = typeof db._runExclusiveTransaction === 'function' && typeof db._runExclusiveQuery === 'function';
+    const problems = pgliteContractProblems(db);
+    this.#usable = problems.length === 0;
+    if (!this.#usable && !warned) {
+      // Still correct (every read goes to `query`), only slower: say so once.
+      warned = true;
+      console.warn(`[baywright] prepared reads are off: ${problems.join('; ')}`);
+    }
   }
 
   /** Like `db.query(sql, params, options)`, with the same results and errors. */
-  query(sql, params = [], options = {}) {
+  async query(sql, params = [], options = {}) {
     if (!this.#usable || !READ.test(sql) || !this.#worthPreparing(sql)) return this.#db.query(sql, params, options);
-    return this.#db._runExclusiveTransaction(() => this.#db._runExclusiveQuery(() => this.#run(sql, params, options)));
+    const result = await this.#db.runExclusive(() => (this.#db.isInTransaction() ? IN_TRANSACTION : this.#run(sql, params, options)));
+    // A transaction is open (between its statements): `query` waits for it to end.
+    return result === IN_TRANSACTION ? this.#db.query(sql, params, options) : result;
   }
 
   /** How many statements are prepared now (for tests). */
   get size() {
     return this.#statements.size;
+  }
+
+  /** Whether reads go through prepared statements (false when PGlite's interface changed). */
+  get active() {
+    return this.#usable;
   }
 
   #worthPreparing(sql) {
@@ -68,6 +131,7 @@ export class StatementCache {
   }
 
   async #run(sql, params, options) {
+    const { serialize } = protocol;
     const statement = await this.#statement(sql);
     const values = params.map((param, i) => {
       if (param === null || param === undefined) return null;
@@ -83,6 +147,7 @@ export class StatementCache {
   }
 
   async #statement(sql) {
+    const { serialize } = protocol;
     const known = this.#statements.get(sql);
     if (known) {
       this.#statements.delete(sql);

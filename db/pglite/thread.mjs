@@ -1,12 +1,12 @@
-// The embedded database on a thread of its own (see db/pglite-thread-client.ts). Plain ESM, not
+// The embedded database on a thread of its own (see db/pglite/thread-client.ts). Plain ESM, not
 // bundled: the server starts it with `new Worker(path)`. It opens the folder, migrates it, then
 // answers { id, op } messages with { id, ok, result } or { id, ok: false, error }.
 import { parentPort, workerData } from 'node:worker_threads';
 import { PGlite, types } from '@electric-sql/pglite';
 import { drizzle } from 'drizzle-orm/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
-import { templateFor } from './pglite-template.mjs';
-import { StatementCache } from './pglite-statements.mjs';
+import { templateFor } from './template.mjs';
+import { StatementCache } from './statements.mjs';
 
 // Dates, times and intervals stay text, as drizzle asks of PGlite when it runs in-thread.
 const keepText = (value) => value;
@@ -83,6 +83,11 @@ async function run(msg) {
       }
       return null;
     }
+    case 'dump': {
+      // A consistent copy of the whole cluster, taken between queries (PGlite runs one at a time).
+      const blob = await db.dumpDataDir('gzip');
+      return new Uint8Array(await blob.arrayBuffer());
+    }
     case 'close':
       await db.close();
       return null;
@@ -92,7 +97,7 @@ async function run(msg) {
 }
 
 try {
-  // A new folder starts from the install-time template when there is one (pglite-template.mjs).
+  // A new folder starts from the install-time template when there is one (template.mjs).
   db = await PGlite.create({ dataDir: workerData.dir, loadDataDir: templateFor(workerData.dir) });
   if (workerData.migrationsFolder) await migrate(drizzle(db), { migrationsFolder: workerData.migrationsFolder });
   statements = new StatementCache(db); // after migrating: no statement outlives a schema change

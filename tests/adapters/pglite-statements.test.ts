@@ -3,12 +3,13 @@
 // or across an open transaction, and writes left to `query`.
 import { PGlite, types } from '@electric-sql/pglite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { StatementCache } from '@/db/pglite-statements.mjs';
+import { StatementCache } from '@/db/pglite/statements.mjs';
+import { emptyCluster } from '@/db/pglite/template.mjs';
 
 let db: PGlite;
 
 beforeAll(async () => {
-  db = await PGlite.create();
+  db = await PGlite.create({ loadDataDir: emptyCluster() }); // an initialised cluster, no initdb
   await db.exec(`
     create table things (id uuid primary key default gen_random_uuid(), name text not null, size int, doc jsonb, made timestamptz not null default now(), ok boolean);
     insert into things (name, size, doc, ok) values ('alpha', 1, '{"a": [1, 2]}', true), ('beta', 2, null, false), ('gamma', null, '{"b": "x"}', null);

@@ -1,2 +1,0 @@
-export function templatePath(): string;
-export function templateFor(dataDir: string): Blob | undefined;

@@ -1,0 +1,76 @@
+/**
+ * How Baywright writes dates, money, plain numbers and lengths for people: one home, used by
+ * every screen, the sheet and the mail. Dates are always shown in the studio's time zone (the
+ * same on the server and in the browser, so a page never changes its dates as it hydrates) with
+ * the zone named; money in integer minor units is shown with its currency sign. Pure; must never
+ * read the browser's locale or zone.
+ */
+import { formatLength } from './layout/units';
+
+export { formatLength };
+
+/**
+ * The studio's time zone. Studios work in one place; set `NEXT_PUBLIC_BAYWRIGHT_TIME_ZONE` (an IANA
+ * name) where the workshop is not on UK time.
+ */
+export const STUDIO_TIME_ZONE = validZone(process.env.NEXT_PUBLIC_BAYWRIGHT_TIME_ZONE) ?? 'Europe/London';
+
+function validZone(zone: string | undefined): string | undefined {
+  if (!zone) return undefined;
+  try {
+    new Intl.DateTimeFormat('en-GB', { timeZone: zone });
+    return zone;
+  } catch {
+    throw new Error(`NEXT_PUBLIC_BAYWRIGHT_TIME_ZONE is not a time zone: ${zone}`);
+  }
+}
+
+const LOCALE = 'en-GB';
+const dateTime = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: STUDIO_TIME_ZONE, timeZoneName: 'short' });
+const dateOnly = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'short', year: 'numeric', timeZone: STUDIO_TIME_ZONE });
+const longDate = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'long', year: 'numeric', timeZone: STUDIO_TIME_ZONE });
+
+type When = Date | string | number;
+const asDate = (d: When) => (d instanceof Date ? d : new Date(d));
+
+/** "3 Dec 2026, 16:32 GMT". */
+export function formatDateTime(d: When): string {
+  return dateTime.format(asDate(d));
+}
+
+/** "3 Dec 2026". */
+export function formatDate(d: When): string {
+  return dateOnly.format(asDate(d));
+}
+
+/** "3 December 2026", for letters and mail. */
+export function formatLongDate(d: When): string {
+  return longDate.format(asDate(d));
+}
+
+const numberFormats = new Map<number, Intl.NumberFormat>();
+
+/** A number with thousands separators and a fixed count of decimals: `1,234`, `12.5`. */
+export function formatNumber(n: number, digits = 0): string {
+  let f = numberFormats.get(digits);
+  if (!f) numberFormats.set(digits, (f = new Intl.NumberFormat(LOCALE, { minimumFractionDigits: 0, maximumFractionDigits: digits })));
+  return f.format(n);
+}
+
+const moneyFormats = new Map<string, Intl.NumberFormat | null>();
+
+/** "£1,240.00" from minor units; an unknown currency code is written after the amount. */
+export function formatMoney(minor: number | null | undefined, currency: string): string {
+  if (minor === null || minor === undefined) return '—';
+  const code = currency.toUpperCase();
+  let f = moneyFormats.get(code);
+  if (f === undefined) {
+    try {
+      f = new Intl.NumberFormat(LOCALE, { style: 'currency', currency: code });
+    } catch {
+      f = null;
+    }
+    moneyFormats.set(code, f);
+  }
+  return f ? f.format(minor / 100) : `${(minor / 100).toFixed(2)} ${code}`;
+}

@@ -1,0 +1,61 @@
+/**
+ * The layout document's fixed word lists (arrangements, facings, surfaces, module kinds, mattress
+ * regions, battery chemistries) and size limits, apart from the zod schema that uses them, so client code can
+ * import a list without pulling the schema library into the browser. `schema.ts` and
+ * `systems.ts` re-export them; this file must never import anything.
+ */
+
+export const ARRANGEMENTS = ['travel', 'lounge', 'sleep'] as const;
+
+export const FACINGS = ['front', 'rear', 'left', 'right'] as const;
+
+export const SURFACES = ['sleep', 'seat', 'counter'] as const;
+
+export const MODULE_KINDS = [
+  'bed-platform',
+  'bed-infill',
+  'bench-seat',
+  'seat',
+  'table',
+  'kitchen-counter',
+  'sink-unit',
+  'hob',
+  'fridge',
+  'wardrobe',
+  'drawer-unit',
+  'overhead-locker',
+  'fresh-water-tank',
+  'grey-water-tank',
+  'gas-locker',
+  'electrics-bay',
+  'heater',
+  'toilet-cabinet',
+  'shower-tray',
+  'step',
+] as const;
+
+export const MATTRESS_REGIONS = ['uk', 'eu', 'us'] as const;
+
+export const BATTERY_CHEMISTRIES = ['lead-acid', 'agm', 'lifepo4'] as const;
+
+/**
+ * The one set of limits for the bay's size, used by the schema (so the API), the new-layout form
+ * and the editor's Bay panel alike. The upper bound keeps arithmetic sane and leaves room for the
+ * synthetic stress layouts of the benchmark; a bay longer than the vehicle's overall length is
+ * reported as out of range by the weight check.
+ */
+export const BAY_LIMITS = {
+  length: { min: 500, max: 100_000 },
+  width: { min: 500, max: 100_000 },
+  height: { min: 500, max: 100_000 },
+} as const;
+
+/** The one set of limits for a module's place and size, used by the schema and the Details panel. */
+export const MODULE_LIMITS = {
+  position: { min: -100_000, max: 100_000 },
+  length: { min: 1, max: 100_000 },
+  width: { min: 1, max: 100_000 },
+  elevation: { min: 0, max: 5000 },
+  height: { min: 1, max: 5000 },
+  massKg: { min: 0, max: 5000 },
+} as const;

@@ -1,0 +1,70 @@
+/**
+ * The work that runs off the request thread, by name: each job is a pure function of plain,
+ * cloneable data (it crosses a worker_threads message), run inside a pool worker
+ * (lib/workers/job-worker.ts). To move more work off the request thread — proposal generation,
+ * say — add a named job here and call `runJob(name, input)` (lib/workers/pool.ts).
+ *
+ * Must never import the database, Next, React or `server-only`: a worker has none of them.
+ */
+import { runChecks, type CheckReport } from '../checks';
+import { diffFindings, type FindingChange } from '../layout/revision-diff';
+import type { LayoutDoc, LayoutSettings } from '../layout/schema';
+import { composeSheet, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
+import type { SheetFonts } from '../sheet/fonts';
+
+export interface ChecksInput {
+  doc: LayoutDoc;
+  studioDefaults?: LayoutSettings;
+}
+
+export interface CompareChecksInput {
+  from: LayoutDoc;
+  to: LayoutDoc;
+  studioDefaults?: LayoutSettings;
+}
+
+export interface CompareChecksOutput {
+  beforeOk: boolean;
+  afterOk: boolean;
+  findings: FindingChange[];
+}
+
+/** A plan sheet's inputs, before the checks: the job runs them with the studio's defaults. */
+export type SheetInput = Omit<SheetRequest, 'report' | 'checksUnavailable'> & { studioDefaults?: LayoutSettings };
+
+export type SheetPdfOutput = Exclude<SheetResult, { ok: true }> | { ok: true; pdf: Uint8Array };
+
+function checkedSheet({ studioDefaults, ...request }: SheetInput): SheetResult {
+  let report: CheckReport | null = null;
+  let checksUnavailable: string | undefined;
+  try {
+    report = runChecks(request.doc, { studioDefaults });
+  } catch {
+    checksUnavailable = 'the check engine stopped on this layout';
+  }
+  return composeSheet({ ...request, report, checksUnavailable });
+}
+
+export const JOBS = {
+  /** The check report of one document. */
+  checks: (input: ChecksInput): CheckReport => runChecks(input.doc, { studioDefaults: input.studioDefaults }),
+  /** Both documents checked, and the findings whose status changed. */
+  compareChecks: (input: CompareChecksInput): CompareChecksOutput => {
+    const before = runChecks(input.from, { studioDefaults: input.studioDefaults });
+    const after = runChecks(input.to, { studioDefaults: input.studioDefaults });
+    return { beforeOk: before.ok, afterOk: after.ok, findings: diffFindings(before.findings, after.findings) };
+  },
+  /** The plan sheet as a drawing model (the print view draws it as SVG). */
+  sheet: (input: SheetInput): SheetResult => checkedSheet(input),
+  /** The plan sheet as PDF bytes. */
+  sheetPdf: async (input: SheetInput & { author: string; fonts: SheetFonts }): Promise<SheetPdfOutput> => {
+    const { author, fonts, ...rest } = input;
+    const result = checkedSheet(rest);
+    if (!result.ok) return result;
+    return { ok: true, pdf: await renderPdf(result.sheet, { author, fonts }) };
+  },
+} as const;
+
+export type JobName = keyof typeof JOBS;
+export type JobInput<K extends JobName> = Parameters<(typeof JOBS)[K]>[0];
+export type JobOutput<K extends JobName> = Awaited<ReturnType<(typeof JOBS)[K]>>;
