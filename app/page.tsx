@@ -1,6 +1,8 @@
 import Link from 'next/link';
 import { Wordmark } from '@/components/ui/Wordmark';
 import { DEMO_ACCOUNTS } from '@/lib/demo-accounts';
+import { ONE_LINE_CAUTION } from '@/lib/layout/cautions';
+import { CautionNote } from '@/components/ui/CautionNote';
 
 export const dynamic = 'force-dynamic';
 
@@ -22,14 +24,14 @@ export default function Home() {
         <p className="mt-5 max-w-2xl text-lg text-ink-soft">
           Draw the bay to scale, place the bed, kitchen, seats, tanks and electrics, switch between travel, lounge and
           sleep, and let the server check what fits: walkways, standing headroom after insulation, bed length once the
-          seats are made up, weight and power. Share a read-only link with your client and hand the workshop a plan
+          seats are made up, weight and power. Share a view-only link with your client and hand the workshop a plan
           sheet.
         </p>
         <ul className="mt-8 grid max-w-3xl gap-3 text-sm sm:grid-cols-3">
           {[
             ['To scale', 'Bare metal, wheel arches, doors and the build-up of floor, walls and roof.'],
             ['Checked', 'Every finding says what was measured, what was needed and where the rule comes from.'],
-            ['Shared', 'Clients follow along, comment and approve a revision.'],
+            ['Shared', 'Clients follow along, leave mark-ups on the drawing and approve a revision.'],
           ].map(([title, text]) => (
             <li key={title} className="panel p-4">
               <p className="font-medium">{title}</p>
@@ -37,6 +39,7 @@ export default function Home() {
             </li>
           ))}
         </ul>
+        <div className="mt-6 max-w-3xl"><CautionNote testId="start-caution">{ONE_LINE_CAUTION}</CautionNote></div>
         {demo && (
           <div className="panel mt-10 max-w-3xl p-5">
             <h2 className="font-medium">Try the demo workshop</h2>

@@ -6,7 +6,7 @@ import { useQuery } from '@tanstack/react-query';
 import {
   createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState,
 } from '@tanstack/react-table';
-import { ArrowDown, ArrowUp, MessageSquare, Plus, Search } from 'lucide-react';
+import { ArrowDown, ArrowUp, Hexagon, Plus, Search } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { LayoutSummaryDto } from '@/db/layouts';
 import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
@@ -39,18 +39,18 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
           </span>
         ),
       }),
-      // Working with the client (components/sharing): state from the latest revision, open comment threads.
+      // Working with the client (components/sharing): state from the latest revision, open mark-ups.
       col.accessor((r) => stateWord(r.sharing?.state ?? 'draft'), {
         id: 'state',
         header: 'State',
         cell: (c) => <LayoutStateBadge state={c.row.original.sharing?.state ?? 'draft'} letter={c.row.original.sharing?.latestRevision} />,
       }),
       col.accessor((r) => r.sharing?.openComments ?? 0, {
-        id: 'comments',
-        header: 'Comments',
+        id: 'markups',
+        header: 'Open mark-ups',
         cell: (c) => c.getValue() ? (
-          <Link href={`/layouts/${c.row.original.id}`} className="inline-flex items-center gap-1 font-mono" aria-label={`${c.getValue()} open comments`}>
-            <MessageSquare size={12} aria-hidden="true" />{c.getValue()}
+          <Link href={`/layouts/${c.row.original.id}`} className="inline-flex items-center gap-1 font-mono" aria-label={`${c.getValue()} open mark-ups`}>
+            <Hexagon size={12} aria-hidden="true" />{c.getValue()}
           </Link>
         ) : <span className="font-mono text-ink-faint">0</span>,
       }),

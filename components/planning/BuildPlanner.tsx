@@ -5,7 +5,7 @@
  * parts list, the cut list and the quote. It keeps the draft document and the saved one, runs
  * the system checks on the draft as it changes, and saves the draft's systems with the layout
  * version (If-Match); when someone saved first it says so and offers to put these entries on
- * their version or to load theirs. Never touches modules or the bay: those are the editor's.
+ * their version or to open the saved version. Never touches modules or the bay: those are the editor's.
  */
 import { useCallback, useEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from 'react';
 import dynamic from 'next/dynamic';
@@ -182,7 +182,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
           <p className="mt-1">Your build-plan entries are still here. Their drawing may have changed modules, so check the results after either choice.</p>
           <div className="mt-2 flex flex-wrap gap-2">
             <button type="button" className="btn-primary" onClick={keepMineOnTheirs}>Put my build plan on their version and save</button>
-            <button type="button" className="btn-quiet" onClick={loadTheirs}>Discard my entries and load theirs</button>
+            <button type="button" className="btn-quiet" onClick={loadTheirs}>Discard my entries and open the saved version</button>
           </div>
         </div>
       )}

@@ -1,46 +1,72 @@
 /**
  * One side of a revision comparison: a small to-scale plan (SVG in millimetres) of the bay — bare
  * metal outline, the lined interior, wheel arches, the cab arrow — with the modules of one
- * arrangement, and the changed ones marked: added (moss, solid double outline), removed (brick,
- * dashed), moved or resized (ochre, a ghost of where it was). Each mark carries a letter too, so
- * colour is never the only cue. Presentation only: no fetching, no editing.
+ * arrangement. On the later side, what changed is marked the drafting way: a revision cloud
+ * round each added, moved, resized or edited module (round where a removed one stood), a delta
+ * triangle carrying the revision letter beside each cloud, and the earlier place of a moved or
+ * resized module (and a removed one) in phantom lines. The earlier side is drawn as it was
+ * issued, unmarked. Presentation only: no fetching, no editing.
  */
 import type { Arrangement, LayoutDoc, Module } from '@/lib/layout/schema';
-import { KINDS } from '@/lib/layout/kinds';
+import { moduleName } from '@/lib/layout/revision-words';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
+import { boundingRect, deltaTriangle, rectFromExtent, revisionCloud, type Rect } from '@/lib/geometry';
 
 export type PlanSide = 'from' | 'to';
 
 const INK = '#1E2A2F';
 const FAINT = '#8A969B';
-const MARK = { added: '#55703F', removed: '#9E3B2F', changed: '#A87C1E' } as const;
+const CLOUD = '#A4522A';
 
 function wallThickness(doc: LayoutDoc): number {
   return doc.buildUp.walls.reduce((t, l) => t + l.thickness, 0);
 }
 
-export function RevisionPlanSvg({ doc, diff, side, arrangement, title }: { doc: LayoutDoc; diff: RevisionDiff; side: PlanSide; arrangement: Arrangement; title: string }) {
+const rectOf = (m: Module): Rect => rectFromExtent(m.x, m.y, m.length, m.width);
+const pointsAttr = (pts: [number, number][]) => pts.map(([x, y]) => `${x.toFixed(1)},${y.toFixed(1)}`).join(' ');
+
+export interface RevisionMark {
+  id: string;
+  name: string;
+  what: 'added' | 'removed' | 'changed';
+  area: Rect;
+  /** Where a moved, resized or removed module stood, drawn in phantom lines. */
+  was: Module | null;
+}
+
+/** The clouds one arrangement needs on the later side. */
+export function revisionMarks(diff: RevisionDiff, arrangement: Arrangement): RevisionMark[] {
+  const marks: RevisionMark[] = [];
+  for (const m of diff.added) if (m.arrangements.includes(arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'added', area: rectOf(m), was: null });
+  for (const m of diff.removed) if (m.arrangements.includes(arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'removed', area: rectOf(m), was: m });
+  for (const c of diff.changed) {
+    const here = c.after.arrangements.includes(arrangement);
+    const there = c.before.arrangements.includes(arrangement);
+    if (!here && !there) continue;
+    const placed = c.moved || c.resized;
+    const area = here && there && placed ? boundingRect([rectOf(c.before), rectOf(c.after)])! : rectOf(here ? c.after : c.before);
+    marks.push({ id: c.id, name: moduleName(c.after), what: 'changed', area, was: placed && there ? c.before : !here ? c.before : null });
+  }
+  return marks;
+}
+
+export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }: { doc: LayoutDoc; diff: RevisionDiff; side: PlanSide; arrangement: Arrangement; title: string; letter: string }) {
   const { length, width } = doc.bay;
-  const pad = Math.max(length, width) * 0.06;
+  const pad = Math.max(length, width) * 0.09;
   const font = Math.max(40, width / 28);
   const wall = wallThickness(doc);
-  const added = new Set(diff.added.map((m) => m.id));
-  const removed = new Set(diff.removed.map((m) => m.id));
-  const changed = new Map(diff.changed.filter((c) => c.moved || c.resized).map((c) => [c.id, c]));
   const modules = doc.modules.filter((m) => m.arrangements.includes(arrangement));
-
-  const markOf = (m: Module): keyof typeof MARK | null =>
-    side === 'to' && added.has(m.id) ? 'added' : side === 'from' && removed.has(m.id) ? 'removed' : changed.has(m.id) ? 'changed' : null;
-  const letterOf = { added: '+', removed: '−', changed: '~' } as const;
+  const marks = side === 'to' ? revisionMarks(diff, arrangement) : [];
+  const tri = font * 2;
 
   return (
-    <figure className="panel overflow-hidden">
+    <figure className="panel overflow-hidden" data-side={side}>
       <figcaption className="border-b border-paper-edge px-3 py-2 text-sm font-medium">{title}</figcaption>
       <svg
         viewBox={`${-pad} ${-pad} ${length + 2 * pad} ${width + 2 * pad}`}
         className="block h-auto w-full bg-paper"
         role="img"
-        aria-label={`${title}: plan of the ${arrangement} arrangement, ${modules.length} modules, bay ${length} by ${width} mm`}
+        aria-label={`${title}: plan of the ${arrangement} arrangement, ${modules.length} modules, bay ${length} by ${width} mm${marks.length ? `, ${marks.length} revision clouds` : ''}`}
       >
         {/* bare metal */}
         <rect x={0} y={0} width={length} height={width} fill="none" stroke={INK} strokeWidth={font / 4} />
@@ -50,25 +76,35 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title }: { doc: 
           <rect key={i} x={a.x} y={a.side === 'left' ? 0 : width - a.width} width={a.length} height={a.width} fill="#ECE7DA" stroke={FAINT} strokeWidth={font / 12} />
         ))}
         {/* the cab is at x = 0 */}
-        <path d={`M ${-pad * 0.2} ${width / 2 - font} L ${-pad * 0.8} ${width / 2} L ${-pad * 0.2} ${width / 2 + font} Z`} fill={INK} />
-        {modules.map((m) => {
-          const mark = markOf(m);
-          const c = changed.get(m.id);
-          const ghost = c && side === 'to' ? c.before : null;
+        <path d={`M ${-pad * 0.2} ${width / 2 - font} L ${-pad * 0.7} ${width / 2} L ${-pad * 0.2} ${width / 2 + font} Z`} fill={INK} />
+        {/* where changed modules were, in phantom lines (long dash, two short) */}
+        {marks.filter((k) => k.was).map((k) => (
+          <rect key={`was-${k.id}`} data-phantom={k.id} x={k.was!.x} y={k.was!.y} width={k.was!.length} height={k.was!.width} fill="none" stroke={INK} strokeWidth={font / 14}
+            strokeDasharray={`${font * 0.9} ${font / 5} ${font / 5} ${font / 5} ${font / 5} ${font / 5}`} opacity={0.6} />
+        ))}
+        {modules.map((m) => (
+          <g key={m.id} data-module-id={m.id}>
+            <rect x={m.x} y={m.y} width={m.length} height={m.width} fill="#F5F2EA" stroke={INK} strokeWidth={font / 12} />
+            <text x={m.x + m.length / 2} y={m.y + m.width / 2} fontSize={font} textAnchor="middle" dominantBaseline="middle" fill={INK} fontFamily="var(--font-text), sans-serif">
+              {moduleName(m)}
+            </text>
+          </g>
+        ))}
+        {marks.map((k) => {
+          const cloud = revisionCloud(k.area, { margin: font * 0.6, arc: font * 2.4, bulge: 0.28 });
+          const right = Math.max(...cloud.map((p) => p[0]));
+          const top = Math.min(...cloud.map((p) => p[1]));
+          const [cx, cy] = [right + tri * 0.15, top + tri * 0.2];
           return (
-            <g key={m.id} data-module-id={m.id} data-mark={mark ?? undefined}>
-              {ghost && <rect x={ghost.x} y={ghost.y} width={ghost.length} height={ghost.width} fill="none" stroke={MARK.changed} strokeWidth={font / 10} strokeDasharray={`${font / 3} ${font / 4}`} opacity={0.7} />}
-              <rect
-                x={m.x} y={m.y} width={m.length} height={m.width}
-                fill={mark ? `${MARK[mark]}22` : '#F5F2EA'}
-                stroke={mark ? MARK[mark] : INK}
-                strokeWidth={mark ? font / 5 : font / 12}
-                strokeDasharray={mark === 'removed' ? `${font / 2} ${font / 4}` : undefined}
-              />
-              {mark === 'added' && <rect x={m.x + font / 3} y={m.y + font / 3} width={Math.max(0, m.length - (2 * font) / 3)} height={Math.max(0, m.width - (2 * font) / 3)} fill="none" stroke={MARK.added} strokeWidth={font / 12} />}
-              <text x={m.x + m.length / 2} y={m.y + m.width / 2} fontSize={font} textAnchor="middle" dominantBaseline="middle" fill={INK} fontFamily="var(--font-text), sans-serif">
-                {mark ? `${letterOf[mark]} ` : ''}{m.label ?? KINDS[m.kind].title}
-              </text>
+            <g key={`cloud-${k.id}`} data-cloud={k.id} data-mark={k.what}>
+              <polygon points={pointsAttr(cloud)} fill="none" stroke={CLOUD} strokeWidth={font / 7} strokeLinejoin="round" />
+              <polygon points={pointsAttr(deltaTriangle(cx, cy, tri))} fill="#FFFFFF" stroke={CLOUD} strokeWidth={font / 8} strokeLinejoin="round" />
+              <text x={cx} y={cy + tri * 0.08} fontSize={tri * (letter.length > 1 ? 0.38 : 0.5)} textAnchor="middle" dominantBaseline="middle" fill={CLOUD} fontFamily="var(--font-mono), monospace">{letter}</text>
+              {k.what === 'removed' && (
+                <text x={k.area.x0 + (k.area.x1 - k.area.x0) / 2} y={k.area.y0 + (k.area.y1 - k.area.y0) / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill={FAINT} fontFamily="var(--font-text), sans-serif">
+                  {k.name} (removed)
+                </text>
+              )}
             </g>
           );
         })}

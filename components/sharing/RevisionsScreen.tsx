@@ -1,8 +1,8 @@
 'use client';
 /**
- * The revisions of one layout: the workshop issues the next lettered revision with a note; the
- * client approves the latest one (final, said plainly before they confirm) or asks for changes
- * with a message; everyone sees who decided what and when, and can compare two revisions.
+ * The revisions of one layout: the workshop issues the next lettered revision for approval with
+ * a note; the client approves the latest one (final, said plainly before they confirm) or returns
+ * it for changes with a message; everyone sees who decided what and when, and can compare two revisions.
  * Reads and writes through /api/layouts/[id]/revisions. Must never offer a decision to anyone
  * but the layout's client, nor on a superseded or approved revision.
  */
@@ -11,11 +11,14 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
-import { CheckCircle2, GitCompare, Lock, MessageSquareWarning, Stamp } from 'lucide-react';
+import { CheckCircle2, Lock, Stamp, Undo2 } from 'lucide-react';
+import { decisionWords, ISSUE_STATE_WORD, nextRevisionLetter } from '@/lib/layout/drawing-issue';
+import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { RevisionDto } from '@/db/sharing/revisions';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { LayoutStateBadge } from './LayoutStateBadge';
+import { SIGN_OFF_CAUTION } from '@/lib/layout/cautions';
 import { formatDateTime } from '@/lib/format';
 
 
@@ -54,7 +57,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
       {canEdit && (
         <form className="panel space-y-2 p-4" onSubmit={(e) => { e.preventDefault(); issue.mutate(); }} data-testid="issue-revision">
           <h2 className="font-semibold">Issue revision {nextLetter(revisions)}</h2>
-          <p className="text-sm text-ink-soft">Freezes the layout as last saved and sends it to the client for approval.</p>
+          <p className="text-sm text-ink-soft">Freezes the layout as last saved and issues it to the client for approval. Until then the layout is preliminary.</p>
           <label className="label" htmlFor="revision-note">Note for the client</label>
           <textarea id="revision-note" className="field min-h-20" maxLength={2000} value={note} onChange={(e) => setNote(e.target.value)} placeholder="What changed, what to look at…" />
           <button type="submit" className="btn-primary" disabled={issue.isPending}><Stamp size={14} aria-hidden="true" /> {issue.isPending ? 'Issuing…' : `Issue revision ${nextLetter(revisions)}`}</button>
@@ -63,8 +66,8 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
 
       {revisions.length === 0 ? (
         <div className="panel p-8 text-center text-sm">
-          <p className="font-medium">No revisions yet</p>
-          <p className="mt-1 text-ink-soft">{canEdit ? 'Issue the first one when the layout is ready for the client.' : 'The workshop has not sent a revision yet.'}</p>
+          <p className="font-medium">Preliminary: no revision issued yet</p>
+          <p className="mt-1 text-ink-soft">{canEdit ? 'Issue revision A for approval when the layout is ready for the client.' : 'The workshop has not issued a revision for your approval yet.'}</p>
         </div>
       ) : (
         <ol className="space-y-4" data-testid="revisions-list">
@@ -78,15 +81,7 @@ export function RevisionsScreen({ layoutId, canEdit, isClient, initial }: Props)
 }
 
 function nextLetter(revs: RevisionDto[]): string {
-  const last = revs[0]?.letter;
-  if (!last) return 'A';
-  // Spreadsheet-style increment (Z → AA), same as the server's letters.
-  const chars = last.split('');
-  let i = chars.length - 1;
-  while (i >= 0 && chars[i] === 'Z') { chars[i] = 'A'; i--; }
-  if (i < 0) return `A${chars.join('')}`;
-  chars[i] = String.fromCharCode(chars[i].charCodeAt(0) + 1);
-  return chars.join('');
+  return nextRevisionLetter(revs[0]?.letter);
 }
 
 function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: { layoutId: string; revision: RevisionDto; isClient: boolean; previous: string | null; onChanged: () => void }) {
@@ -97,7 +92,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
     mutationFn: (body: { decision: 'approve' | 'changes'; message?: string }) =>
       apiFetch<{ revision: RevisionDto }>(`/api/layouts/${layoutId}/revisions/${r.id}/decision`, { method: 'POST', json: body }),
     onSuccess: ({ revision }) => {
-      toast.success(revision.state === 'approved' ? `Revision ${revision.letter} approved` : 'Your request for changes was sent to the workshop');
+      toast.success(revision.state === 'approved' ? `Revision ${revision.letter} approved` : `Revision ${revision.letter} returned to the workshop for changes`);
       setAsking(false);
       setConfirming(false);
       setMessage('');
@@ -121,10 +116,10 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
         </div>
         <div className="flex flex-wrap gap-2">
           {previous && (
-            <Link className="btn-quiet px-2 py-1" href={`/layouts/${layoutId}/revisions/compare?from=${previous}&to=${r.letter}`}><GitCompare size={14} aria-hidden="true" /> Compare with {previous}</Link>
+            <Link className="btn-quiet px-2 py-1" href={`/layouts/${layoutId}/revisions/compare?from=${previous}&to=${r.letter}`}><RevisionMarkIcon letter={r.letter} /> Compare with {previous}</Link>
           )}
           {r.isLatest && (
-            <Link className="btn-quiet px-2 py-1" href={`/layouts/${layoutId}/revisions/compare?from=${r.letter}&to=current`}><GitCompare size={14} aria-hidden="true" /> Since issued</Link>
+            <Link className="btn-quiet px-2 py-1" href={`/layouts/${layoutId}/revisions/compare?from=${r.letter}&to=current`}><RevisionMarkIcon letter="?" /> Changes since issue</Link>
           )}
         </div>
       </div>
@@ -133,9 +128,9 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
         <ul className="mt-3 space-y-2 border-t border-paper-edge pt-3 text-sm" aria-label={`Decisions on revision ${r.letter}`}>
           {r.decisions.map((d, i) => (
             <li key={i} className="flex gap-2">
-              {d.decision === 'approved' ? <CheckCircle2 size={16} className="mt-0.5 shrink-0 text-moss" aria-hidden="true" /> : <MessageSquareWarning size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />}
+              {d.decision === 'approved' ? <CheckCircle2 size={16} className="mt-0.5 shrink-0 text-moss" aria-hidden="true" /> : <Undo2 size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />}
               <span>
-                <strong>{d.decision === 'approved' ? 'Approved' : 'Changes asked'}</strong> by {d.by}, {formatDateTime(d.at)}
+                <strong>{ISSUE_STATE_WORD[d.decision]}</strong> by {d.by}, {formatDateTime(d.at)}
                 {d.message && <span className="block whitespace-pre-wrap text-ink-soft">“{d.message}”</span>}
               </span>
             </li>
@@ -150,17 +145,17 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
         <div className="mt-3 border-t border-paper-edge pt-3">
           {asking ? (
             <form className="space-y-2" onSubmit={(e) => { e.preventDefault(); decide.mutate({ decision: 'changes', message }); }}>
-              <label className="label" htmlFor={`changes-${r.id}`}>What would you like changed?</label>
+              <label className="label" htmlFor={`changes-${r.id}`}>What should the workshop change?</label>
               <textarea id={`changes-${r.id}`} className="field min-h-20" value={message} maxLength={4000} onChange={(e) => setMessage(e.target.value)} required />
               <div className="flex gap-2">
-                <button type="submit" className="btn-primary" disabled={decide.isPending || !message.trim()}>Send to the workshop</button>
+                <button type="submit" className="btn-primary" disabled={decide.isPending || !message.trim()}>{decisionWords(r.letter).returnConfirm}</button>
                 <button type="button" className="btn-quiet" onClick={() => setAsking(false)}>Cancel</button>
               </div>
             </form>
           ) : (
             <div className="flex flex-wrap gap-2">
-              <button type="button" className="btn-primary" onClick={() => setConfirming(true)}><CheckCircle2 size={14} aria-hidden="true" /> Approve revision {r.letter}</button>
-              <button type="button" className="btn-quiet" onClick={() => setAsking(true)}><MessageSquareWarning size={14} aria-hidden="true" /> Ask for changes</button>
+              <button type="button" className="btn-primary" onClick={() => setConfirming(true)}><CheckCircle2 size={14} aria-hidden="true" /> {decisionWords(r.letter).approve}</button>
+              <button type="button" className="btn-quiet" onClick={() => setAsking(true)}><Undo2 size={14} aria-hidden="true" /> {decisionWords(r.letter).return}</button>
             </div>
           )}
         </div>
@@ -168,7 +163,7 @@ function RevisionCard({ layoutId, revision: r, isClient, previous, onChanged }: 
 
       <Dialog open={confirming} title={`Approve revision ${r.letter}?`} onClose={() => setConfirming(false)} testId="approve-dialog">
         <p className="text-sm">Your approval is recorded with your name and the time, and cannot be changed afterwards. The workshop builds from this revision.</p>
-        <p className="mt-2 text-xs text-ink-soft">Gas, 230 V, heating, seat belts and the van’s weight limits are finished and signed off by qualified fitters to local rules; approving the plan does not replace that.</p>
+        <p className="mt-2 text-xs text-ink-soft">{SIGN_OFF_CAUTION}</p>
         <label className="label mt-3" htmlFor={`approve-note-${r.id}`}>Message (optional)</label>
         <textarea id={`approve-note-${r.id}`} className="field min-h-14" value={message} maxLength={4000} onChange={(e) => setMessage(e.target.value)} />
         <div className="mt-4 flex justify-end gap-2">

@@ -12,17 +12,18 @@ import { Ban, Copy, Link2 } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ViewerLinkDto } from '@/db/sharing/viewer-links';
 import type { RevisionDto } from '@/db/sharing/revisions';
+import { PRELIMINARY_WORD } from '@/lib/layout/drawing-issue';
 import { formatDateTime } from '@/lib/format';
 
 const EXPIRY_CHOICES = [
-  { days: null, word: 'Until revoked' },
+  { days: null, word: 'Until withdrawn' },
   { days: 1, word: '1 day' },
   { days: 7, word: '7 days' },
   { days: 30, word: '30 days' },
   { days: 90, word: '90 days' },
 ] as const;
 
-const STATUS_WORD: Record<ViewerLinkDto['status'], string> = { active: 'Active', expired: 'Expired', revoked: 'Revoked' };
+const STATUS_WORD: Record<ViewerLinkDto['status'], string> = { active: 'Active', expired: 'Expired', revoked: 'Withdrawn' };
 
 export function SharePanel({ layoutId }: { layoutId: string }) {
   const qc = useQueryClient();
@@ -46,10 +47,10 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
     },
     onError: (err) => toast.error(err.message),
   });
-  const revoke = useMutation({
+  const withdraw = useMutation({
     mutationFn: (id: string) => apiFetch(`/api/layouts/${layoutId}/links/${id}`, { method: 'DELETE' }),
     onSuccess: () => {
-      toast.success('Link revoked: it stops working at once');
+      toast.success('Link withdrawn: it stops working at once');
       qc.invalidateQueries({ queryKey: ['links', layoutId] });
     },
     onError: (err) => toast.error(err.message),
@@ -71,8 +72,8 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
         <div>
           <label className="label" htmlFor="link-target">Shows</label>
           <select id="link-target" className="field" value={target} onChange={(e) => setTarget(e.target.value)}>
-            <option value="live">The live layout</option>
-            {(revisions.data?.revisions ?? []).map((r) => <option key={r.id} value={r.id}>Revision {r.letter} (frozen)</option>)}
+            <option value="live">The layout as saved ({PRELIMINARY_WORD.toLowerCase()}, follows every save)</option>
+            {(revisions.data?.revisions ?? []).map((r) => <option key={r.id} value={r.id}>Revision {r.letter} as issued</option>)}
           </select>
         </div>
         <div>
@@ -87,7 +88,7 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
         </div>
         <div className="sm:col-span-3">
           <button type="submit" className="btn-primary" disabled={create.isPending}><Link2 size={14} aria-hidden="true" /> {create.isPending ? 'Making the link…' : 'Make a viewer link'}</button>
-          <p className="mt-1 text-xs text-ink-soft">Anyone with the link sees this plan read-only, without signing in: no other layouts, no addresses.</p>
+          <p className="mt-1 text-xs text-ink-soft">Anyone with the link sees this plan, view only, without signing in: no other layouts, no addresses.</p>
         </div>
       </form>
 
@@ -112,7 +113,7 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
               <tbody>
                 {links.data.links.map((l) => (
                   <tr key={l.id} className="border-t border-paper-edge align-top">
-                    <td className="py-1.5">{l.kind === 'live' ? 'Live layout' : `Revision ${l.revision?.letter ?? '?'}`}{l.label ? <span className="block text-ink-soft">{l.label}</span> : null}</td>
+                    <td className="py-1.5">{l.kind === 'live' ? `${PRELIMINARY_WORD} (live)` : `Revision ${l.revision?.letter ?? '?'}`}{l.label ? <span className="block text-ink-soft">{l.label}</span> : null}</td>
                     <td>{formatDateTime(l.createdAt)}{l.createdBy ? <span className="block text-ink-soft">{l.createdBy}</span> : null}</td>
                     <td>{l.lastOpenedAt ? <>{formatDateTime(l.lastOpenedAt)}<span className="block font-mono text-ink-soft">{l.openCount}×</span></> : <span className="text-ink-soft">never</span>}</td>
                     <td>
@@ -121,8 +122,8 @@ export function SharePanel({ layoutId }: { layoutId: string }) {
                     </td>
                     <td className="text-right">
                       {l.status === 'active' && (
-                        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => revoke.mutate(l.id)} disabled={revoke.isPending} aria-label={`Revoke the link created ${formatDateTime(l.createdAt)}`}>
-                          <Ban size={12} aria-hidden="true" /> Revoke
+                        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => withdraw.mutate(l.id)} disabled={withdraw.isPending} aria-label={`Withdraw the link created ${formatDateTime(l.createdAt)}`}>
+                          <Ban size={12} aria-hidden="true" /> Withdraw
                         </button>
                       )}
                     </td>

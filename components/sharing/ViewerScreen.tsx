@@ -4,12 +4,17 @@
  * dimensions, side section, Checks) with a slim header naming the studio and what the link
  * shows. A live link asks once a second whether the workshop has saved and, if so, loads the new
  * document (so a designer and a client on a call see the same plan within about 2 s); any link
- * learns within seconds that it was revoked or has expired. Reads only /api/v/[token]/…
+ * learns within seconds that it was withdrawn or has expired. The safety caution stays in view. Reads only /api/v/[token]/…
  * Must never show edit controls, other layouts or anyone's address.
  */
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { Eye, Radio, Snowflake } from 'lucide-react';
+import { Eye, Radio } from 'lucide-react';
+import { ISSUE_STATE_WORD } from '@/lib/layout/drawing-issue';
+import { ONE_LINE_CAUTION } from '@/lib/layout/cautions';
+import { CautionNote } from '@/components/ui/CautionNote';
+import { LayoutStateBadge } from './LayoutStateBadge';
+import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { EditorLoader } from '@/components/editor/EditorLoader';
 import { ApiError, apiFetch } from '@/lib/api/client-fetch';
 import type { CheckReport } from '@/lib/checks/types';
@@ -20,7 +25,7 @@ import { formatDateTime } from '@/lib/format';
 
 export type ViewerContentDto = Omit<ViewerContent, 'checkDefaults'>;
 
-/** Live links poll this often; revision links only to learn of revocation (common practice, no source). */
+/** Live links poll this often; revision links only to learn of withdrawal (common practice, no source). */
 export const LIVE_POLL_MS = 1000;
 const FROZEN_POLL_MS = 15_000;
 
@@ -70,11 +75,12 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
 
   const badge = live ? (
     <span className="inline-flex items-center gap-1 rounded-sm border border-moss bg-moss-light px-1.5 py-0.5 text-xs text-moss" data-testid="viewer-kind">
-      <Radio size={12} aria-hidden="true" /> Live: follows the workshop’s saves
+      <Radio size={12} aria-hidden="true" /> {ISSUE_STATE_WORD.draft}: follows the workshop’s saves
     </span>
   ) : (
-    <span className="inline-flex items-center gap-1 rounded-sm border border-ink-faint px-1.5 py-0.5 text-xs" data-testid="viewer-kind">
-      <Snowflake size={12} aria-hidden="true" /> Revision {content.revision?.letter}, as issued {content.revision ? formatDateTime(content.revision.issuedAt) : ''}
+    <span className="inline-flex items-center gap-2 text-xs" data-testid="viewer-kind">
+      <span className="inline-flex items-center gap-1"><RevisionMarkIcon letter={content.revision?.letter ?? '?'} /> Revision {content.revision?.letter}, issued {content.revision ? formatDateTime(content.revision.issuedAt) : ''}</span>
+      {content.revision && <LayoutStateBadge state={content.revision.state} />}
     </span>
   );
 
@@ -88,6 +94,7 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
         <span className="ml-auto inline-flex items-center gap-1 text-xs text-ink-soft"><Eye size={12} aria-hidden="true" /> View only{content.expiresAt ? ` · link works until ${formatDateTime(content.expiresAt)}` : ''}</span>
       </header>
       {content.revision?.note && <p className="shrink-0 border-b border-paper-edge bg-paper-deep px-4 py-1.5 text-sm">{content.revision.note}</p>}
+      <div className="shrink-0 border-b border-paper-edge px-4 py-1.5"><CautionNote compact testId="viewer-caution">{ONE_LINE_CAUTION}</CautionNote></div>
       <div className="min-h-0 flex-1">
         <EditorLoader
           layoutId="viewer-link"

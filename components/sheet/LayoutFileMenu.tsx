@@ -1,7 +1,8 @@
 'use client';
 /**
- * The editor toolbar's "File" menu: open the plan sheet, export the plan as PNG or the layout as
- * JSON, import a JSON layout as a new layout (owners and designers). Import validates the file
+ * The editor toolbar's "Sheets & files" menu, named after what the user gets: the plan sheet, a
+ * picture of this view (with its title strip), the layout file, and opening a layout file as a
+ * new layout (owners and designers). Import validates the file
  * with the layout schema first and lists each problem with its field path; the server checks it
  * again. Reads the editor's store; never changes the open document.
  */
@@ -9,10 +10,12 @@ import { useRef, useState } from 'react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { toast } from 'sonner';
-import { ChevronDown, FileDown, FileImage, FileJson, FileUp, Printer } from 'lucide-react';
+import { ChevronDown, FileDown, FileImage, FileText, FolderOpen, Printer } from 'lucide-react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import { useEditorApi } from '@/components/editor/store/EditorStoreContext';
+import { PRELIMINARY_WORD } from '@/lib/layout/drawing-issue';
+import { formatDate } from '@/lib/format';
 import { downloadBlob, planToPng } from './exportPlan';
 
 // The file helpers validate imports with the full layout schema: fetched when a File action runs,
@@ -28,19 +31,27 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
   const root = useRef<HTMLDivElement>(null);
   const input = useRef<HTMLInputElement>(null);
 
-  async function exportPng() {
+  async function savePicture() {
     setOpen(false);
     const plan = root.current?.closest('[data-testid="editor"]')?.querySelector<HTMLElement>('[data-testid="plan"]');
     try {
       if (!plan) throw new Error('The plan is not on screen.');
+      const s = api.getState();
+      const title = {
+        layout: s.doc.name,
+        arrangement: `${s.arrangement[0].toUpperCase()}${s.arrangement.slice(1)} arrangement`,
+        revision: `${PRELIMINARY_WORD} (version ${s.version})`,
+        date: formatDate(new Date()),
+        pxPerMm: s.viewport.scale,
+      };
       const { layoutFileName } = await layoutFile();
-      downloadBlob(await planToPng(plan), layoutFileName(api.getState().doc.name, `${api.getState().arrangement}.png`));
+      downloadBlob(await planToPng(plan, title), layoutFileName(s.doc.name, `${s.arrangement}.png`));
     } catch (err) {
-      toast.error(err instanceof Error ? err.message : 'The PNG could not be made.');
+      toast.error(err instanceof Error ? err.message : 'The picture could not be made.');
     }
   }
 
-  async function exportJson() {
+  async function saveLayoutFile() {
     setOpen(false);
     const { doc } = api.getState();
     const { layoutFileName, layoutFileText } = await layoutFile();
@@ -55,11 +66,11 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
       if (!result.ok) return setProblems({ file: file.name, lines: issueLines(result.issues) });
       const name = `${result.name} (imported)`.slice(0, 120);
       const created = await apiFetch<{ id: string }>('/api/layouts', { method: 'POST', json: { name, doc: result.doc } });
-      toast.success(`Imported as “${name}”.`);
+      toast.success(`Opened as a new layout: “${name}”.`);
       router.push(`/layouts/${created.id}`);
     } catch (err) {
       if (err instanceof ApiError && err.issues.length) setProblems({ file: file.name, lines: issueLines(err.issues) });
-      else toast.error(err instanceof Error ? err.message : 'The import failed.');
+      else toast.error(err instanceof Error ? err.message : 'The layout file could not be opened.');
     } finally {
       setBusy(false);
       if (input.current) input.current.value = '';
@@ -70,27 +81,27 @@ export function LayoutFileMenu({ layoutId, canEdit }: { layoutId: string; canEdi
   return (
     <div ref={root} className="relative" onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}>
       <button type="button" className="btn-quiet px-2 py-1" aria-haspopup="menu" aria-expanded={open} onClick={() => setOpen((o) => !o)} disabled={busy}>
-        <FileDown size={14} aria-hidden="true" /> File <ChevronDown size={12} aria-hidden="true" />
+        <FileDown size={14} aria-hidden="true" /> Sheets &amp; files <ChevronDown size={12} aria-hidden="true" />
       </button>
       {open && (
-        <div role="menu" aria-label="File" className="absolute right-0 z-30 mt-1 w-56 rounded-sm border border-paper-edge bg-paper py-1 shadow-lg">
+        <div role="menu" aria-label="Sheets & files" className="absolute right-0 z-30 mt-1 w-72 rounded-sm border border-paper-edge bg-paper py-1 shadow-lg">
           <Link role="menuitem" href={`/layouts/${layoutId}/sheet`} className={item} onClick={() => setOpen(false)}>
-            <Printer size={14} aria-hidden="true" /> Plan sheet (print, PDF)
+            <Printer size={14} aria-hidden="true" /> Plan sheet (to print, or as PDF)
           </Link>
-          <button role="menuitem" type="button" className={item} onClick={exportPng}>
-            <FileImage size={14} aria-hidden="true" /> Export PNG of this view
+          <button role="menuitem" type="button" className={item} onClick={savePicture}>
+            <FileImage size={14} aria-hidden="true" /> Picture of this view
           </button>
-          <button role="menuitem" type="button" className={item} onClick={exportJson}>
-            <FileJson size={14} aria-hidden="true" /> Export JSON
+          <button role="menuitem" type="button" className={item} onClick={saveLayoutFile}>
+            <FileText size={14} aria-hidden="true" /> Layout file (to keep or send)
           </button>
           {canEdit && (
             <button role="menuitem" type="button" className={item} onClick={() => { setOpen(false); input.current?.click(); }}>
-              <FileUp size={14} aria-hidden="true" /> Import JSON as a new layout…
+              <FolderOpen size={14} aria-hidden="true" /> Open a layout file as a new layout…
             </button>
           )}
         </div>
       )}
-      <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to import"
+      <input ref={input} type="file" accept="application/json,.json" className="sr-only" tabIndex={-1} aria-label="Choose a layout file to open as a new layout"
         onChange={(e) => e.target.files?.[0] && importFile(e.target.files[0])} />
       <Dialog open={problems !== null} title="This file is not a layout Baywright can read" onClose={() => setProblems(null)} testId="import-problems">
         <p className="mb-2 text-sm">{problems?.file} has these problems (field: what is wrong):</p>

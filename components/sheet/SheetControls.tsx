@@ -12,7 +12,7 @@ interface Props {
   layoutId: string;
   paper: 'a4' | 'a3';
   scale: 10 | 20 | 25;
-  /** The issued revision on show, or null for the working copy. */
+  /** The issued revision on show, or null for the layout as it stands (preliminary). */
   revision: string | null;
   /** False when the bay does not fit: the PDF link would only answer 422. */
   canDownload: boolean;

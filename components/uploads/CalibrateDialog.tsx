@@ -52,7 +52,7 @@ export function CalibrateDialog({ upload, units, onSave, onCancel, saving }: Pro
       }
       onSave(calibrateFromImage(points[0], points[1], real, firstInBay, rotation, upload.tracing?.opacity ?? 0.5));
     } catch (err) {
-      setError(err instanceof CalibrationError ? err.message : 'The calibration failed.');
+      setError(err instanceof CalibrationError ? err.message : 'The photo could not be scaled from those points.');
     }
   }
 

@@ -8,7 +8,7 @@
 import { useRef, useState } from 'react';
 import dynamic from 'next/dynamic';
 import { toast } from 'sonner';
-import { ChevronDown, ImagePlus, Layers } from 'lucide-react';
+import { Camera, ChevronDown, ImagePlus } from 'lucide-react';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { LengthUnit } from '@/lib/layout';
 import type { TracingPlacement } from '@/lib/tracing/calibration';
@@ -58,15 +58,15 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
   return (
     <div className="relative" onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}>
       <button type="button" className="btn-quiet px-2 py-1" aria-haspopup="dialog" aria-expanded={open} onClick={() => setOpen((o) => !o)}>
-        <Layers size={14} aria-hidden="true" /> Tracing{placed ? <span className="font-mono text-xs">{placed}</span> : null} <ChevronDown size={12} aria-hidden="true" />
+        <Camera size={14} aria-hidden="true" /> Survey photos{placed ? <span className="font-mono text-xs">{placed}</span> : null} <ChevronDown size={12} aria-hidden="true" />
       </button>
       {open && (
-        <div role="dialog" aria-label="Tracing photos" className="absolute right-0 z-30 mt-1 w-80 rounded-sm border border-paper-edge bg-paper p-3 text-sm shadow-lg">
-          <p className="mb-2 text-xs text-ink-soft">Photos under the plan to trace from. Kept in the studio: never shown through viewer links.</p>
+        <div role="dialog" aria-label="Survey photos" className="absolute right-0 z-30 mt-1 w-80 rounded-sm border border-paper-edge bg-paper p-3 text-sm shadow-lg">
+          <p className="mb-2 text-xs text-ink-soft">Photos or drawings of the van placed under the plan, scaled from two points whose distance you know. Kept in the studio: never shown through viewer links.</p>
           {list.isPending && <p className="text-ink-soft">Loading photos…</p>}
           {list.isError && <p role="alert" className="text-brick">Could not load the photos: {list.error.message}</p>}
           {list.data && photos.length === 0 && <p className="text-ink-soft">No photos yet.</p>}
-          <ul className="space-y-2" aria-label="Photos for tracing">
+          <ul className="space-y-2" aria-label="Survey photos of this layout">
             {photos.map((u) => (
               <li key={u.id} className="rounded-sm border border-paper-edge p-2">
                 <div className="mb-1 flex items-center gap-2">
@@ -87,14 +87,14 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
                             onKeyUp={(e) => save(u, { ...u.tracing!, opacity: Number(e.currentTarget.value) / 100 })} />
                         </label>
                         <div className="mt-1 flex gap-2">
-                          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setCalibrating(u)}>Calibrate again</button>
+                          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setCalibrating(u)}>Scale again</button>
                           <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => save(u, null)}>Take off the plan</button>
                         </div>
                       </>
                     )}
                   </>
                 ) : canEdit ? (
-                  <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setCalibrating(u)}>Calibrate and place…</button>
+                  <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setCalibrating(u)}>Scale from two points and place…</button>
                 ) : (
                   <p className="text-xs text-ink-soft">Not placed.</p>
                 )}
@@ -103,7 +103,7 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
           </ul>
           {canEdit && (
             <div className="mt-3">
-              <input ref={input} type="file" accept="image/jpeg,image/png,image/webp" className="sr-only" id={`tracing-add-${layoutId}`} aria-label="Add a photo to trace"
+              <input ref={input} type="file" accept="image/jpeg,image/png,image/webp" className="sr-only" id={`tracing-add-${layoutId}`} aria-label="Add a survey photo"
                 onChange={(e) => e.target.files?.[0] && add(e.target.files[0])} disabled={sending !== null} />
               <label htmlFor={`tracing-add-${layoutId}`} className="btn-quiet cursor-pointer px-2 py-1 text-xs">
                 <ImagePlus size={14} aria-hidden="true" /> {sending === null ? 'Add a photo' : `Sending… ${Math.round(sending * 100)} %`}
@@ -117,7 +117,7 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
           )}
         </div>
       )}
-      <Dialog open={calibrating !== null} title={`Calibrate ${calibrating?.fileName ?? ''}`} onClose={() => setCalibrating(null)} testId="calibrate-dialog">
+      <Dialog open={calibrating !== null} title={`Scale ${calibrating?.fileName ?? ''} from two points`} onClose={() => setCalibrating(null)} testId="scale-photo-dialog">
         {calibrating && (
           <CalibrateDialog upload={calibrating} units={units} saving={place.isPending}
             onCancel={() => setCalibrating(null)}

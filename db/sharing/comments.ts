@@ -1,10 +1,11 @@
 /**
- * Comments on a layout: a thread starts with a pin at a point of the plan (whole millimetres, in
- * one arrangement), others reply, and either side resolves it (or reopens it). Authors may change
+ * Mark-ups on a layout (stored in the `comments` table): a thread starts with a keyed note at a
+ * point of the plan (whole millimetres, in one arrangement), others reply, and either side marks
+ * it settled (or open again); `resolved_at` / `resolved_by` record the settling. Authors may change
  * or remove their own comments (an edit is marked as such); the studio's owner may remove any. The workshop's
  * owners and designers and the layout's client take part; nobody else even learns the layout
- * exists. Authors' names are kept with the comment; their addresses are never returned.
- * Must never let a viewer link (no account) read or write comments.
+ * exists. Authors' names are kept with the note; their addresses are never returned.
+ * Must never let a viewer link (no account) read or write mark-ups.
  */
 import 'server-only';
 import { and, asc, count, eq, inArray, isNull } from 'drizzle-orm';
@@ -16,7 +17,7 @@ import { ARRANGEMENTS, type Arrangement } from '../../lib/layout/schema';
 import { layoutFor, UUID, type LayoutAccess } from './access';
 
 export const COMMENT_MAX = 2000;
-/** How far outside the bare-metal outline a pin may sit (a note about the cab or the rear door). */
+/** How far outside the bare-metal outline a mark-up's point may sit (a note about the cab or the rear door). */
 export const PIN_MARGIN_MM = 500;
 
 export interface CommentDto {
@@ -35,7 +36,8 @@ export interface ThreadDto extends CommentDto {
   arrangement: Arrangement;
   x: number;
   y: number;
-  resolved: { at: string } | null;
+  /** When the thread was marked settled; null while it is open. */
+  settled: { at: string } | null;
   replies: CommentDto[];
 }
 
@@ -64,7 +66,7 @@ function threads(rows: Row[], actor: Actor): ThreadDto[] {
     arrangement: (ARRANGEMENTS as readonly string[]).includes(root.arrangement ?? '') ? (root.arrangement as Arrangement) : 'travel',
     x: root.x ?? 0,
     y: root.y ?? 0,
-    resolved: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
+    settled: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
     replies: rows.filter((r) => r.parentId === root.id).map((r) => commentDto(r, actor)),
   }));
 }
@@ -82,15 +84,15 @@ export type NewComment =
 
 function checkBody(body: string): string {
   const text = body.trim();
-  if (!text) throw new BadRequestError('Write something in the comment.');
-  if (text.length > COMMENT_MAX) throw new BadRequestError(`Keep a comment under ${COMMENT_MAX} characters.`);
+  if (!text) throw new BadRequestError('Write something in the mark-up.');
+  if (text.length > COMMENT_MAX) throw new BadRequestError(`Keep a mark-up under ${COMMENT_MAX} characters.`);
   return text;
 }
 
 function checkPin(layout: LayoutAccess, x: number, y: number): void {
   const { length, width } = layout.doc.bay;
   if (x < -PIN_MARGIN_MM || x > length + PIN_MARGIN_MM || y < -PIN_MARGIN_MM || y > width + PIN_MARGIN_MM) {
-    throw new BadRequestError(`Pin the comment on the plan: x from 0 to ${length} mm, y from 0 to ${width} mm.`);
+    throw new BadRequestError(`Place the mark-up on the plan: x from 0 to ${length} mm, y from 0 to ${width} mm.`);
   }
 }
 
@@ -112,9 +114,9 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
     rootId = row.id;
     commentId = row.id;
   } else {
-    if (!UUID.test(input.parentId)) throw new BadRequestError('That comment is not on this layout.');
+    if (!UUID.test(input.parentId)) throw new BadRequestError('That mark-up is not on this layout.');
     const [parent] = await db.select().from(comments).where(and(eq(comments.id, input.parentId), eq(comments.layoutId, layoutId))).limit(1);
-    if (!parent) throw new BadRequestError('That comment is not on this layout.');
+    if (!parent) throw new BadRequestError('That mark-up is not on this layout.');
     // Replies hang off the thread's first comment: threads are one level deep.
     rootId = parent.parentId ?? parent.id;
     const [root] = rootId === parent.id ? [parent] : await db.select().from(comments).where(eq(comments.id, rootId)).limit(1);
@@ -127,23 +129,24 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
   return { thread, layout, commentId, threadAuthorId };
 }
 
-export async function setResolved(actor: Actor, layoutId: string, commentId: string, resolved: boolean): Promise<ThreadDto> {
+/** Marks a thread settled (or open again); the workshop and the layout's client may both. */
+export async function setSettled(actor: Actor, layoutId: string, commentId: string, settled: boolean): Promise<ThreadDto> {
   await layoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
-  if (row.parentId) throw new BadRequestError('Resolve the thread from its first comment.');
+  if (row.parentId) throw new BadRequestError('Settle the thread from its first note.');
   const db = await getDb();
   await db
     .update(comments)
-    .set(resolved ? { resolvedAt: new Date(), resolvedBy: actor.userId } : { resolvedAt: null, resolvedBy: null })
+    .set(settled ? { resolvedAt: new Date(), resolvedBy: actor.userId } : { resolvedAt: null, resolvedBy: null })
     .where(eq(comments.id, commentId));
   return threadOf(actor, layoutId, commentId);
 }
 
 async function commentOf(layoutId: string, commentId: string): Promise<Row> {
-  if (!UUID.test(commentId)) throw new NotFoundError('No such comment.');
+  if (!UUID.test(commentId)) throw new NotFoundError('No such mark-up.');
   const db = await getDb();
   const [row] = await db.select().from(comments).where(and(eq(comments.id, commentId), eq(comments.layoutId, layoutId))).limit(1);
-  if (!row) throw new NotFoundError('No such comment.');
+  if (!row) throw new NotFoundError('No such mark-up.');
   return row;
 }
 
@@ -153,11 +156,11 @@ async function threadOf(actor: Actor, layoutId: string, rootId: string): Promise
   return threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor)[0];
 }
 
-/** The author changes their own words; the comment keeps its place, pin and replies. */
+/** The author changes their own words; the note keeps its place, point and replies. */
 export async function editComment(actor: Actor, layoutId: string, commentId: string, body: string): Promise<ThreadDto> {
   await layoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
-  if (row.authorId !== actor.userId) throw new ForbiddenError('Only its author can change a comment.');
+  if (row.authorId !== actor.userId) throw new ForbiddenError('Only its author can change a mark-up.');
   const text = checkBody(body);
   const db = await getDb();
   if (text !== row.body) await db.update(comments).set({ body: text, editedAt: new Date() }).where(eq(comments.id, row.id));
@@ -165,19 +168,19 @@ export async function editComment(actor: Actor, layoutId: string, commentId: str
 }
 
 /**
- * Removes a comment: its author may, and so may the studio's owner (to tidy a thread). Removing
- * a thread's first comment removes the thread with its replies and its pin.
+ * Removes a note: its author may, and so may the studio's owner (to tidy a thread). Removing
+ * a thread's first note removes the thread with its replies and its symbol.
  */
 export async function deleteComment(actor: Actor, layoutId: string, commentId: string): Promise<{ removedThread: boolean }> {
   await layoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
-  if (row.authorId !== actor.userId && actor.role !== 'owner') throw new ForbiddenError('Only its author or the studio owner can remove a comment.');
+  if (row.authorId !== actor.userId && actor.role !== 'owner') throw new ForbiddenError('Only its author or the studio owner can remove a mark-up.');
   const db = await getDb();
   await db.delete(comments).where(eq(comments.id, row.id)); // replies go with their thread (on delete cascade)
   return { removedThread: row.parentId === null };
 }
 
-/** Open (unresolved) threads per layout, for the layouts table. */
+/** Open (not settled) mark-up threads per layout, for the layouts table. */
 export async function openThreadCounts(layoutIds: string[]): Promise<Map<string, number>> {
   const out = new Map<string, number>(layoutIds.map((id) => [id, 0]));
   if (!layoutIds.length) return out;

@@ -13,6 +13,7 @@ import type { Actor } from '../actor';
 import { settingsSchema, type LayoutDoc } from '../../lib/layout/schema';
 import { diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
 import { runJob } from '../../lib/workers/pool';
+import { AS_LAST_SAVED } from '../../lib/layout/drawing-issue';
 import { layoutFor, UUID } from './access';
 import { getRevision, revisionIdByLetter } from './revisions';
 
@@ -34,7 +35,7 @@ export interface ComparisonDto {
 async function side(actor: Actor, layoutId: string, ref: string): Promise<Omit<ComparedSide, 'ok'>> {
   if (ref === 'current') {
     const layout = await layoutFor(actor, layoutId);
-    return { label: `Current draft (version ${layout.version})`, letter: null, at: new Date().toISOString(), doc: layout.doc };
+    return { label: AS_LAST_SAVED, letter: null, at: new Date().toISOString(), doc: layout.doc };
   }
   const id = UUID.test(ref) ? ref : await revisionIdByLetter(actor, layoutId, ref.toUpperCase());
   const rev = await getRevision(actor, layoutId, id);

@@ -1,6 +1,6 @@
 /**
  * Revisions: the workshop freezes the layout's current document as revision A, B, C… with a
- * note; the layout's client approves the latest one or asks for changes. Decisions are
+ * note and issues it for approval; the layout's client approves the latest one or returns it for changes. Decisions are
  * append-only, and an approval is final — recorded with who and when, never changed afterwards
  * (the database also holds at most one approval per revision).
  * Must never let anyone but the layout's own client decide, nor return rows.
@@ -16,8 +16,8 @@ import type { LayoutDoc } from '../../lib/layout/schema';
 import { editableLayoutFor, layoutFor, UUID } from './access';
 import { isUniqueViolation } from './pg-errors';
 
-export type RevisionState = 'sent' | 'changes-asked' | 'approved';
-export type LayoutState = 'draft' | RevisionState;
+import type { LayoutState, RevisionState } from '../../lib/layout/drawing-issue';
+export type { LayoutState, RevisionState } from '../../lib/layout/drawing-issue';
 
 export interface DecisionDto {
   decision: 'approved' | 'changes-asked';
@@ -186,7 +186,7 @@ export interface DecisionInput {
  */
 export async function decideRevision(actor: Actor, layoutId: string, revisionId: string, input: DecisionInput): Promise<RevisionDto> {
   const layout = await layoutFor(actor, layoutId);
-  if (!layout.isClient) throw new ForbiddenError('Only the client this layout is shared with can approve it or ask for changes.');
+  if (!layout.isClient) throw new ForbiddenError('Only the client this layout is shared with can approve it or return it for changes.');
   if (!UUID.test(revisionId)) throw new NotFoundError('No such revision.');
   const message = (input.message ?? '').trim();
   if (input.decision === 'changes' && !message) throw new BadRequestError('Say what you would like changed.');

@@ -10,15 +10,16 @@
  */
 import 'server-only';
 import { readStoredDoc } from '../stored-doc';
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import { getDb } from '../client';
-import { layouts, revisions, studios, users, viewerLinks } from '../schema';
+import { layouts, revisionDecisions, revisions, studios, users, viewerLinks } from '../schema';
 import { BadRequestError, NotFoundError } from '../errors';
 import type { Actor } from '../actor';
 import { settingsSchema, type LayoutDoc, type LayoutSettings } from '../../lib/layout/schema';
 import type { LengthUnit } from '../../lib/layout/units';
 import { editableLayoutFor, UUID } from './access';
 import { hashToken, isTokenShaped, newToken } from './tokens';
+import { revisionState, type RevisionState } from './revisions';
 
 export type LinkStatus = 'active' | 'expired' | 'revoked';
 
@@ -139,7 +140,7 @@ export interface ViewerContent {
   /** Live: the layout version (moves on each save). Revision: fixed. */
   version: number;
   updatedAt: string;
-  revision: { letter: string; note: string; issuedAt: string } | null;
+  revision: { letter: string; note: string; issuedAt: string; state: RevisionState } | null;
   checkDefaults: LayoutSettings;
   expiresAt: string | null;
 }
@@ -188,13 +189,15 @@ export async function resolveViewerLink(token: string, options: { touch?: boolea
   if (row.link.revisionId) {
     const [rev] = await db.select().from(revisions).where(eq(revisions.id, row.link.revisionId)).limit(1);
     if (!rev) return { status: 'unknown' };
+    const decisions = await db.select({ decision: revisionDecisions.decision }).from(revisionDecisions)
+      .where(eq(revisionDecisions.revisionId, rev.id)).orderBy(asc(revisionDecisions.decidedAt));
     content = {
       ...content,
       kind: 'revision',
       doc: readStoredDoc(rev.doc),
       version: rev.layoutVersion,
       updatedAt: rev.issuedAt.toISOString(),
-      revision: { letter: rev.letter, note: rev.note, issuedAt: rev.issuedAt.toISOString() },
+      revision: { letter: rev.letter, note: rev.note, issuedAt: rev.issuedAt.toISOString(), state: revisionState(decisions) },
     };
   }
   if (options.touch) {

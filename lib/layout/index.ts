@@ -4,3 +4,6 @@ export * from './kinds';
 export * from './units';
 export * from './templates';
 export * from './systems';
+export * from './drawing-issue';
+export * from './cautions';
+export * from './field-words';

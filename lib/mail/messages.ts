@@ -1,13 +1,14 @@
 /**
  * The words of every mail Baywright sends about working with a client: the invitation, a new
- * revision, the client's decision, a new comment. Pure functions of their inputs (names, links,
+ * revision, the client’s decision, a new mark-up. Pure functions of their inputs (names, links,
  * letters); the caller supplies absolute links. Must never look anything up or send anything.
  */
 import { compose, oneLine, type ComposedMail } from './compose';
 
-/** Said wherever a plan is sent or approved: the plan does not replace licensed sign-off. */
-export const SIGN_OFF_CAUTION =
-  'Gas, 230 V, heating, seat belts and anchorages, and the van’s weight limits are installed, tested and signed off by qualified fitters to local rules; an approved plan does not replace that.';
+import { SIGN_OFF_CAUTION } from '../layout/cautions';
+
+/** Said wherever a plan is issued or approved (its words live in lib/layout/cautions). */
+export { SIGN_OFF_CAUTION };
 
 export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null; role?: 'designer' | 'client' }): ComposedMail {
   const until = p.expiresAt.toISOString().slice(0, 10);
@@ -17,7 +18,7 @@ export function invitationMail(p: { clientName: string; studioName: string; invi
     paragraphs: [
       designer
         ? `${p.inviterName} at ${p.studioName} has invited you to join their drawing office on Baywright as a designer: you will draw and check the studio's van layouts.`
-        : `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, comment on the drawing and approve revisions.`,
+        : `${p.inviterName} at ${p.studioName} has invited you to Baywright, where you can follow the plan of your van conversion, leave mark-ups on the drawing and approve revisions.`,
       ...(p.layoutName ? [`The layout waiting for you: ${p.layoutName}.`] : []),
       `Open the link to join. New to Baywright? You choose your own password there. Already have an account? Sign in with it and you join with the account you have. The link works once and until ${until}.`,
     ],
@@ -39,10 +40,10 @@ export function passwordResetMail(p: { name: string; url: string; minutes: numbe
 }
 
 export function revisionIssuedMail(p: { clientName: string; studioName: string; layoutName: string; letter: string; note: string; url: string }): ComposedMail {
-  return compose(`Revision ${p.letter} of ${oneLine(p.layoutName, 80)} is ready for you`, {
+  return compose(`Revision ${p.letter} of ${oneLine(p.layoutName, 80)} is issued for your approval`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,
     paragraphs: [
-      `${p.studioName} has issued revision ${p.letter} of ${p.layoutName}. Look it over, then approve it or ask for changes.`,
+      `${p.studioName} has issued revision ${p.letter} of ${p.layoutName} for your approval. Look it over, then approve it or return it for changes.`,
     ],
     quote: p.note || undefined,
     action: { label: `Open revision ${p.letter}`, url: p.url },
@@ -54,13 +55,13 @@ export function decisionMail(p: { recipientName: string; clientName: string; lay
   const approved = p.decision === 'approved';
   return compose(
     approved ? `${oneLine(p.clientName, 80)} approved revision ${p.letter} of ${oneLine(p.layoutName, 80)}`
-      : `${oneLine(p.clientName, 80)} asked for changes to revision ${p.letter} of ${oneLine(p.layoutName, 80)}`,
+      : `${oneLine(p.clientName, 80)} returned revision ${p.letter} of ${oneLine(p.layoutName, 80)} for changes`,
     {
       greeting: `Hello ${oneLine(p.recipientName, 80)},`,
       paragraphs: [
         approved
           ? `${p.clientName} approved revision ${p.letter} of ${p.layoutName}. The approval is recorded and cannot be changed.`
-          : `${p.clientName} asked for changes to revision ${p.letter} of ${p.layoutName}.`,
+          : `${p.clientName} returned revision ${p.letter} of ${p.layoutName} for changes, with these words:`,
       ],
       quote: p.message || undefined,
       action: { label: 'See the revisions', url: p.url },
@@ -69,12 +70,12 @@ export function decisionMail(p: { recipientName: string; clientName: string; lay
   );
 }
 
-export function commentMail(p: { recipientName: string; authorName: string; layoutName: string; body: string; reply: boolean; url: string }): ComposedMail {
+export function markupMail(p: { recipientName: string; authorName: string; layoutName: string; body: string; reply: boolean; url: string }): ComposedMail {
   return compose(
-    p.reply ? `${oneLine(p.authorName, 80)} replied on ${oneLine(p.layoutName, 80)}` : `${oneLine(p.authorName, 80)} commented on ${oneLine(p.layoutName, 80)}`,
+    p.reply ? `${oneLine(p.authorName, 80)} replied to a mark-up on ${oneLine(p.layoutName, 80)}` : `${oneLine(p.authorName, 80)} left a mark-up on ${oneLine(p.layoutName, 80)}`,
     {
       greeting: `Hello ${oneLine(p.recipientName, 80)},`,
-      paragraphs: [p.reply ? `${p.authorName} replied to a comment on ${p.layoutName}:` : `${p.authorName} pinned a comment on ${p.layoutName}:`],
+      paragraphs: [p.reply ? `${p.authorName} replied to a mark-up on ${p.layoutName}:` : `${p.authorName} left a mark-up on ${p.layoutName}:`],
       quote: p.body,
       action: { label: 'Open the layout', url: p.url },
     },

@@ -1,7 +1,7 @@
 /**
  * Sends the mail that goes with working with a client, after the change it reports has been
  * stored: the invitation, a new revision (to the client), a decision (to the workshop), a new
- * comment (to the other side). A mail that cannot be sent never undoes the change: the answer
+ * mark-up (to the other side). A mail that cannot be sent never undoes the change: the answer
  * says `mail: 'not-sent'` and the server log says why.
  * Must never include another studio's people, and never send a token to anyone but its invitee.
  */
@@ -14,7 +14,7 @@ import type { RevisionDto } from '@/db/sharing/revisions';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { layoutClient, revisionIssuerId, workshopFor, type Recipient } from '@/db/sharing/recipients';
 import { studioName } from '@/db/sharing/access';
-import { commentMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
+import { markupMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
 import { publicUrl } from './public-url';
 import { MAIL_NOT_CONFIGURED, mailConfigured, sendMail } from './transport';
 import { HttpError } from '@/lib/api/respond';
@@ -96,7 +96,7 @@ export async function notifyDecision(req: Request, actor: Actor, layout: { id: s
   actor);
 }
 
-export async function notifyComment(
+export async function notifyMarkup(
   req: Request,
   actor: Actor,
   layout: { id: string; name: string; createdBy: string | null },
@@ -104,7 +104,7 @@ export async function notifyComment(
   reply: boolean,
   threadAuthorId: string | null,
 ): Promise<MailOutcome> {
-  const url = linkOrNull(req, `/layouts/${layout.id}?comment=${thread.id}`);
+  const url = linkOrNull(req, `/layouts/${layout.id}?markup=${thread.id}`);
   if (!url) return mailConfigured() ? 'not-sent' : 'not-configured';
   let to: Recipient[];
   if (actor.role === 'client') {
@@ -115,5 +115,5 @@ export async function notifyComment(
   }
   to = to.filter((r) => r.email.toLowerCase() !== actor.email.toLowerCase());
   const body = reply ? thread.replies[thread.replies.length - 1]?.body ?? '' : thread.body;
-  return deliver(actor.studioId, to, (r) => commentMail({ recipientName: r.name, authorName: actor.name, layoutName: layout.name, body, reply, url }), actor);
+  return deliver(actor.studioId, to, (r) => markupMail({ recipientName: r.name, authorName: actor.name, layoutName: layout.name, body, reply, url }), actor);
 }

@@ -4,6 +4,7 @@
  * inputs (names, amounts in minor units, dates, an absolute link the caller built), in the style
  * of messages.ts. Must never look anything up or send anything.
  */
+import { QUOTE_CAUTION } from '../layout/cautions';
 import { compose, oneLine, type ComposedMail } from './compose';
 
 import { formatLongDate as day, formatMoney } from '../format';
@@ -22,6 +23,7 @@ export function quoteSentMail(p: {
     ],
     quote: p.note || undefined,
     action: { label: 'See the quote', url: p.url },
+    footer: QUOTE_CAUTION,
   });
 }
 
@@ -38,6 +40,6 @@ export function depositReceiptMail(p: {
       `Quote reference ${p.quoteRef}${p.paymentRef ? `, payment reference ${p.paymentRef}` : ''}. This is a receipt for a deposit, not a VAT invoice.`,
     ],
     action: { label: 'See the paid quote', url: p.url },
-    footer: 'Keep this mail as your record of the payment. Sent by Baywright on behalf of your workshop.',
+    footer: `${QUOTE_CAUTION} Keep this mail as your record of the payment. Sent by Baywright on behalf of your workshop.`,
   });
 }

@@ -15,7 +15,9 @@ import { flowMassBalance } from './mass-balance';
 import { ColumnFlow } from './flow';
 import { LINE } from './drafting';
 import { PAPER_MM, SCALES, sheetFrame, type DrawingScale, type Paper, PAPERS } from './paper';
-import { drawPlan, planSize } from './plan-figure';
+import { drawPlan, planSize, PLAN_MARGIN } from './plan-figure';
+import { cloudAreas, drawRevisionClouds, flowRevisionTable, type RevisionChanges, type RevisionRow } from './revision-block';
+import { onPaper } from './paper';
 import type { SheetDocument, SheetItem, SheetPage } from './primitives';
 import { flowSchedule } from './schedule';
 import { drawSection, sectionSize } from './section-figure';
@@ -30,6 +32,10 @@ export interface SheetRequest {
   scale: DrawingScale;
   units: LengthUnit;
   details: Omit<TitleDetails, 'units'>;
+  /** The revision table: issued revisions up to the one printed, oldest first. */
+  revisions?: RevisionRow[];
+  /** Clouds on the plans: what the printed revision changed since the one before. */
+  changes?: RevisionChanges | null;
 }
 
 export interface Suggestion {
@@ -49,9 +55,14 @@ interface Figure {
   draw: (x: number, y: number) => SheetItem[];
 }
 
-function figures(req: Pick<SheetRequest, 'doc' | 'scale' | 'units'>): Figure[] {
+function figures(req: Pick<SheetRequest, 'doc' | 'scale' | 'units' | 'changes'>): Figure[] {
   const plan = planSize(req.doc, req.scale);
-  const out: Figure[] = ARRANGEMENTS.map((a) => ({ ...plan, draw: (x: number, y: number) => drawPlan(req.doc, a, x, y, req.scale, req.units) }));
+  const clouds = (a: (typeof ARRANGEMENTS)[number], x: number, y: number): SheetItem[] => {
+    if (!req.changes) return [];
+    const toPaper = (mx: number, my: number): [number, number] => [x + PLAN_MARGIN.left + onPaper(mx, req.scale), y + PLAN_MARGIN.top + onPaper(my, req.scale)];
+    return drawRevisionClouds(cloudAreas(req.changes.diff, a), req.changes.letter, toPaper);
+  };
+  const out: Figure[] = ARRANGEMENTS.map((a) => ({ ...plan, draw: (x: number, y: number) => [...drawPlan(req.doc, a, x, y, req.scale, req.units), ...clouds(a, x, y)] }));
   out.push({ ...sectionSize(req.doc, req.scale), draw: (x, y) => drawSection(req.doc, x, y, req.scale, req.units) });
   return out;
 }
@@ -140,6 +151,10 @@ export function composeSheet(req: SheetRequest): SheetResult {
   flowMassBalance(fullWidth, doc);
   const columns = paper === 'a3' ? 3 : 2;
   const text = new ColumnFlow(area, columns, newPage);
+  if (req.revisions?.length) {
+    flowRevisionTable(text, req.revisions);
+    text.gap(6);
+  }
   flowBuildPlan(text, doc);
   text.gap(6);
   flowChecks(text, req.report, req.checksUnavailable);

@@ -1,8 +1,9 @@
 /**
  * The title block along the foot of every page, our own layout: the Baywright mark and studio;
- * layout and client; revision (optional letter, else "working copy") and date; the scale with a
+ * layout and client; revision (its letter and where it stands, else "Preliminary") and date; the scale with a
  * scale bar; units, paper and sheet number. Pure: details in, sheet items out.
  */
+import { ISSUE_STATE_WORD, issueWords, PRELIMINARY_WORD, type LayoutState } from '../layout/drawing-issue';
 import { LINE, scaleBar } from './drafting';
 import { PAPER_MM, type Paper } from './paper';
 import type { SheetItem } from './primitives';
@@ -12,8 +13,10 @@ export interface TitleDetails {
   studio: string;
   client: string | null;
   layout: string;
-  /** Revision letter (A, B, … AA) once revisions are issued; absent for the working copy. */
+  /** Revision letter (A, B, … AA) of an issued revision; absent for the layout as it stands (preliminary). */
   revision?: string | null;
+  /** Where that revision stands: issued for approval, approved, returned for changes. */
+  issueState?: LayoutState | null;
   /** The date the sheet was made, as YYYY-MM-DD. */
   date: string;
   units: string;
@@ -21,8 +24,8 @@ export interface TitleDetails {
 
 export const REVISION_LETTER = /^[A-Z]{1,3}$/;
 
-export function revisionWords(revision?: string | null): string {
-  return revision ? `Revision ${revision}` : 'Working copy (no revision)';
+export function revisionWords(revision?: string | null, state?: LayoutState | null): string {
+  return issueWords(revision, state);
 }
 
 /** A scale bar that fits the title block: 1 m, or 500 mm at 1:10. */
@@ -60,7 +63,7 @@ export function drawTitleBlock(
 
   field(1, 0, 'Layout', details.layout, true);
   field(1, 1, 'Client', details.client ?? 'No client named');
-  field(2, 0, 'Revision', details.revision ? details.revision : 'Working copy', Boolean(details.revision));
+  field(2, 0, details.revision && details.issueState ? `Revision · ${ISSUE_STATE_WORD[details.issueState]}` : 'Revision', details.revision ? details.revision : PRELIMINARY_WORD, Boolean(details.revision));
   field(2, 1, 'Date', details.date);
   field(3, 0, 'Units', details.units);
   field(3, 1, 'Sheet', `${sheet.page} of ${sheet.pages} · ${PAPER_MM[sheet.paper].label}`);

@@ -208,7 +208,7 @@ test.describe('layout editor', () => {
     const dialog = b.getByTestId('conflict-dialog');
     await expect(dialog).toBeVisible({ timeout: 15_000 });
     await expect(b.getByTestId('save-status')).toHaveAttribute('data-status', 'conflict');
-    await dialog.getByRole('button', { name: /Reload theirs/ }).click();
+    await dialog.getByRole('button', { name: /Open the saved version/ }).click();
     await expect(dialog).toBeHidden();
     await expect(b.getByTestId('save-status')).toHaveAttribute('data-status', 'saved');
     await b.getByTestId('plan').focus();

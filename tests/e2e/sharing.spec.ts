@@ -1,8 +1,10 @@
 // Working with a client, end to end in Chromium: the designer issues revision A and shares a live
 // viewer link (which follows a save within 2 s), invites a new client; the invitation mail
 // arrives at the development mail server and is parsed with mailparser; the client follows the
-// link, sets a password, sees the layout, pins a comment (edits it, removes a stray reply) and
-// approves revision A; the designer sees the approval. The viewer link is revoked and says so. Screenshots kept as artifacts.
+// link, sets a password, sees the layout, places a mark-up (edits it, removes a stray reply) and
+// approves revision A; the designer sees the approval, settles the mark-up, issues revision B and
+// compares (revision clouds); the client returns B for changes. The viewer link is withdrawn and
+// says so. Screenshots kept as artifacts.
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { simpleParser } from 'mailparser';
 import { keepScreenshot, signIn } from './helpers';
@@ -37,7 +39,7 @@ async function latestMailTo(owner: Page, to: string, subject: RegExp) {
   return { id: id!, mail: await simpleParser(await res.body()) };
 }
 
-test('invite → view → comment → approve, with a live viewer link', async ({ browser }) => {
+test('invite → view → mark-up → settle → approve → issue → return for changes → compare, with a live viewer link', async ({ browser }) => {
   test.setTimeout(180_000);
 
   // The designer starts a layout for the new client from a starter layout.
@@ -63,11 +65,12 @@ test('invite → view → comment → approve, with a live viewer link', async (
   expect(opened!.headers()['x-robots-tag']).toBe('noindex, nofollow');
   expect(opened!.headers()['referrer-policy']).toBe('no-referrer');
   await expect(visitor.locator('meta[name="robots"]')).toHaveAttribute('content', /noindex/);
-  await expect(visitor.getByTestId('viewer-kind')).toContainText('Live');
+  await expect(visitor.getByTestId('viewer-kind')).toContainText('Preliminary: follows the workshop’s saves');
+  await expect(visitor.getByTestId('viewer-caution')).toContainText('qualified, licensed people');
   await expect(visitor.getByRole('banner').getByText(LAYOUT)).toBeVisible();
   await waitForPlan(visitor);
   await expect(visitor.getByTestId('editor')).toHaveAttribute('data-read-only', 'true');
-  for (const name of ['Share', 'Add a comment', 'Revisions']) await expect(visitor.getByRole('button', { name, exact: true })).toHaveCount(0);
+  for (const name of ['Share', 'Add a mark-up', 'Revisions']) await expect(visitor.getByRole('button', { name, exact: true })).toHaveCount(0);
   await expect(visitor.getByText('Parts shelf')).toHaveCount(0);
   await expect(visitor.getByTestId('checks-counts')).toBeVisible({ timeout: 15_000 });
   await keepScreenshot(visitor, 'sharing-viewer-live');
@@ -123,35 +126,37 @@ test('invite → view → comment → approve, with a live viewer link', async (
   await expect(client.getByTestId('editor')).toHaveAttribute('data-read-only', 'true');
   await expect(client.getByRole('button', { name: 'Share', exact: true })).toHaveCount(0);
 
-  // The client pins a comment at a known point of the bay (x 1500 mm, y 600 mm).
+  // The client places a mark-up about a known point of the bay (x 1500 mm, y 600 mm).
   const plan = client.getByTestId('plan');
   const box = (await plan.boundingBox())!;
   const scale = Number(await plan.getAttribute('data-scale'));
   const [ox, oy] = (await plan.getAttribute('data-origin'))!.split(',').map(Number);
-  await client.getByRole('button', { name: 'Add a comment' }).click();
+  await client.getByRole('button', { name: 'Add a mark-up' }).click();
   await client.mouse.click(box.x + ox + 1500 * scale, box.y + oy + 600 * scale);
-  await client.getByRole('textbox', { name: 'Comment', exact: true }).fill('Could the bed be 50 mm longer? I am 1.88 m tall.');
-  await client.getByRole('button', { name: 'Pin comment' }).click();
-  const thread = client.getByTestId('comment-thread').filter({ hasText: 'Could the bed be 50 mm longer?' });
+  await client.getByRole('textbox', { name: 'Note', exact: true }).fill('Could the bed be 50 mm longer? I am 1.88 m tall.');
+  await client.getByRole('button', { name: 'Place mark-up' }).click();
+  const thread = client.getByTestId('markup-thread').filter({ hasText: 'Could the bed be 50 mm longer?' });
   await expect(thread).toBeVisible();
   const threads = await (await client.request.get(`/api/layouts/${layout.id}/comments`)).json();
   expect(threads.threads).toHaveLength(1);
   expect(Math.abs(threads.threads[0].x - 1500)).toBeLessThanOrEqual(Math.ceil(2 / scale));
   expect(Math.abs(threads.threads[0].y - 600)).toBeLessThanOrEqual(Math.ceil(2 / scale));
-  await keepScreenshot(client, 'sharing-client-comment-pinned');
-  // The client sharpens the question (their own comment: Edit), then adds and removes a reply.
-  await thread.getByRole('button', { name: 'Edit your comment' }).click();
-  await thread.getByRole('textbox', { name: 'Change your comment' }).fill('Could the bed be 50 mm longer? I am 1.88 m tall and sleep stretched out.');
+  await expect(thread).toHaveAttribute('data-settled', 'no');
+  await expect(client.getByTestId('markups-panel')).toContainText('1 open');
+  await keepScreenshot(client, 'sharing-client-markup-placed');
+  // The client sharpens the question (their own mark-up: Edit), then adds and removes a reply.
+  await thread.getByRole('button', { name: 'Edit your mark-up' }).click();
+  await thread.getByRole('textbox', { name: 'Change your mark-up' }).fill('Could the bed be 50 mm longer? I am 1.88 m tall and sleep stretched out.');
   await thread.getByRole('button', { name: 'Save', exact: true }).click();
   await expect(thread).toContainText('sleep stretched out');
   await expect(thread).toContainText('edited');
-  await keepScreenshot(client, 'sharing-client-comment-edited');
+  await keepScreenshot(client, 'sharing-client-markup-edited');
   await thread.getByRole('textbox', { name: 'Reply' }).fill('Sent too early, ignore this.');
   await thread.getByRole('button', { name: 'Reply', exact: true }).click();
-  const reply = thread.getByTestId('comment-reply').filter({ hasText: 'Sent too early' });
+  const reply = thread.getByTestId('markup-reply').filter({ hasText: 'Sent too early' });
   await reply.getByRole('button', { name: 'Remove this reply' }).click();
   await reply.getByRole('button', { name: 'Remove', exact: true }).click();
-  await expect(thread.getByTestId('comment-reply')).toHaveCount(0);
+  await expect(thread.getByTestId('markup-reply')).toHaveCount(0);
   expect((await (await client.request.get(`/api/layouts/${layout.id}/comments`)).json()).threads[0]).toMatchObject({ replies: [], editedAt: expect.any(String) });
 
   // The client approves revision A: the dialog says it is final.
@@ -167,20 +172,28 @@ test('invite → view → comment → approve, with a live viewer link', async (
   await expect(client.getByRole('button', { name: 'Approve revision A' })).toHaveCount(0);
   await keepScreenshot(client, 'sharing-client-approved');
 
-  // The designer sees the approval, the state in the layouts table and the comment count.
+  // The designer sees the approval, the state in the layouts table and the open mark-up count.
   await designer.goto(`/layouts/${layout.id}/revisions`);
   await expect(designer.getByTestId('revision').filter({ hasText: 'Revision A' })).toContainText('Approved by Sam Okafor');
   await keepScreenshot(designer, 'sharing-designer-sees-approval');
   await designer.goto('/layouts');
   const row = designer.getByRole('row', { name: new RegExp(LAYOUT) });
   await expect(row).toContainText('Approved');
-  await expect(row.getByRole('link', { name: '1 open comments' })).toBeVisible();
+  await expect(row.getByRole('link', { name: '1 open mark-ups' })).toBeVisible();
   await keepScreenshot(designer, 'sharing-layouts-table-state');
   // …and the mail about it reached the designer who issued the revision.
   const approvalMail = await latestMailTo(owner, 'ivo@saltmarsh.test', /approved revision A/);
   expect(approvalMail.mail.subject).toBe(`Sam Okafor approved revision A of ${LAYOUT}`);
 
-  // The designer answers the comment with revision B (the bed 50 mm longer) and compares A with B.
+  // The designer settles the mark-up and answers it with revision B (the bed 50 mm longer) and compares A with B.
+  await designer.goto(`/layouts/${layout.id}?markup=${threads.threads[0].id}`);
+  await waitForPlan(designer);
+  const designerThread = designer.getByTestId('markup-thread').filter({ hasText: 'Could the bed be 50 mm longer?' });
+  await designerThread.getByRole('button', { name: 'Mark settled' }).click();
+  await expect(designerThread).toHaveAttribute('data-settled', 'yes');
+  await expect(designerThread).toContainText('Settled');
+  await expect(designer.getByTestId('markups-panel')).toContainText('0 open');
+  await keepScreenshot(designer, 'sharing-designer-markup-settled');
   const before = await (await designer.request.get(`/api/layouts/${layout.id}`)).json();
   const next = structuredClone(before.doc);
   const bed = next.modules.find((m: { kind: string }) => m.kind === 'bed-platform');
@@ -193,20 +206,46 @@ test('invite → view → comment → approve, with a live viewer link', async (
   await expect(designer.getByTestId('revision').filter({ hasText: 'Revision B' })).toHaveAttribute('data-state', 'sent');
   await designer.getByRole('link', { name: 'Compare with A' }).click();
   await expect(designer).toHaveURL(/compare\?from=A&to=B/);
-  await expect(designer.getByTestId('module-changes')).toContainText('Moved, Resized');
-  await expect(designer.getByTestId('compare-plans').locator(`[data-module-id="${bed.id}"][data-mark="changed"]`)).toHaveCount(2);
-  await keepScreenshot(designer, 'sharing-compare-a-b');
+  await expect(designer.getByTestId('module-changes')).toContainText('Moved and resized');
+  await expect(designer.getByTestId('module-changes')).toContainText('50 mm forwards');
+  await expect(designer.getByTestId('module-changes')).not.toContainText(/massKg|props|cabSeats/);
+  // A revision cloud round the bed on the later plan only, with a delta triangle carrying B.
+  const plans = designer.getByTestId('compare-plans');
+  await expect(plans.locator(`[data-side="to"] [data-cloud="${bed.id}"]`)).toHaveCount(1);
+  await expect(plans.locator(`[data-side="from"] [data-cloud]`)).toHaveCount(0);
+  await expect(plans.locator(`[data-side="to"] [data-cloud="${bed.id}"] text`)).toHaveText('B');
+  await expect(plans.locator(`[data-side="to"] [data-phantom="${bed.id}"]`)).toHaveCount(1);
+  const table = designer.getByTestId('revision-table');
+  await expect(table.locator('tr[data-letter="A"]')).toContainText('Ivo Brandt');
+  await expect(table.locator('tr[data-letter="B"]')).toContainText('Bed 50 mm longer, as asked.');
+  await keepScreenshot(designer, 'sharing-compare-a-b-clouds');
 
-  // Revoking the viewer link: the open viewer says so within seconds, and so does a fresh visit.
+  // The client returns revision B for changes, in their own words; the designer reads them.
+  await client.goto(`/layouts/${layout.id}/revisions`);
+  const revB = client.getByTestId('revision').filter({ hasText: 'Revision B' });
+  await expect(revB).toContainText('Issued for approval');
+  await revB.getByRole('button', { name: 'Return for changes' }).click();
+  await revB.getByLabel('What should the workshop change?').fill('Keep the longer bed, but move the fridge nearer the door.');
+  await revB.getByRole('button', { name: 'Return revision B for changes' }).click();
+  await expect(revB).toHaveAttribute('data-state', 'changes-asked');
+  await expect(revB).toContainText('Returned for changes by Sam Okafor');
+  await expect(revB).toContainText('move the fridge nearer the door');
+  await keepScreenshot(client, 'sharing-client-returned-for-changes');
+  const returnedMail = await latestMailTo(owner, 'ivo@saltmarsh.test', /returned revision B/);
+  expect(returnedMail.mail.subject).toBe(`Sam Okafor returned revision B of ${LAYOUT} for changes`);
+  await designer.goto('/layouts');
+  await expect(designer.getByRole('row', { name: new RegExp(LAYOUT) })).toContainText('Returned for changes');
+
+  // Withdrawing the viewer link: the open viewer says so within seconds, and so does a fresh visit.
   await designer.goto(`/layouts/${layout.id}`);
   await waitForPlan(designer);
   await designer.getByRole('button', { name: 'Share', exact: true }).click();
   const links = designer.getByTestId('links-table');
-  await expect(links).toContainText('Live layout');
-  await links.getByRole('button', { name: /Revoke/ }).first().click();
-  await expect(links).toContainText('Revoked');
+  await expect(links).toContainText('Preliminary (live)');
+  await links.getByRole('button', { name: /Withdraw/ }).first().click();
+  await expect(links).toContainText('Withdrawn');
   await expect(visitor.getByTestId('viewer-gone')).toHaveAttribute('data-status', 'revoked', { timeout: 5_000 });
   await visitor.goto(viewerUrl);
   await expect(visitor.getByRole('heading', { name: 'This link was withdrawn' })).toBeVisible();
-  await keepScreenshot(visitor, 'sharing-viewer-revoked');
+  await keepScreenshot(visitor, 'sharing-viewer-withdrawn');
 });

@@ -92,32 +92,37 @@ test('the layout’s client sees the sheet and the files but cannot add or delet
   await expect(page.getByRole('button', { name: /^Delete / })).toHaveCount(0);
 });
 
-test('in the editor: the File menu exports PNG and JSON, refuses a bad import with field paths, and a photo is calibrated under the plan', async ({ page }, info) => {
+test('in the editor: Sheets & files gives a picture with its title strip and the layout file, refuses a bad layout file, and a survey photo is scaled under the plan', async ({ page }, info) => {
   await signIn(page, 'ivo@saltmarsh.test');
   await page.getByRole('link', { name: 'Adeyemi — L3H2 touring' }).first().click();
   await expect(page.getByTestId('plan')).toBeVisible();
 
-  await page.getByRole('button', { name: /^File/ }).click();
-  const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('menuitem', { name: /Export PNG/ }).click()]);
+  await page.getByRole('button', { name: /^Sheets & files/ }).click();
+  const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('menuitem', { name: /Picture of this view/ }).click()]);
   const pngFile = info.outputPath('plan.png');
   await png.saveAs(pngFile);
   expect([...fs.readFileSync(pngFile).subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  // The picture is the view (at twice the screen resolution) plus its title strip, 58 px × 2.
+  const planBox = (await page.getByTestId('plan').boundingBox())!;
+  const picture = fs.readFileSync(pngFile);
+  const height = picture.readUInt32BE(20);
+  expect(Math.abs(height - (Math.round(planBox.height) * 2 + 116))).toBeLessThanOrEqual(4);
 
-  await page.getByRole('button', { name: /^File/ }).click();
-  const [json] = await Promise.all([page.waitForEvent('download'), page.getByRole('menuitem', { name: /Export JSON/ }).click()]);
+  await page.getByRole('button', { name: /^Sheets & files/ }).click();
+  const [json] = await Promise.all([page.waitForEvent('download'), page.getByRole('menuitem', { name: /Layout file/ }).click()]);
   const doc = JSON.parse(fs.readFileSync(await json.path(), 'utf8'));
   expect(doc.schemaVersion).toBe(1);
   expect(doc.name).toBe('Adeyemi — L3H2 touring');
 
   const bad = { ...doc, bay: { ...doc.bay, length: 3000.5 } };
-  await page.getByLabel('Choose a layout file to import').setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) });
+  await page.getByLabel('Choose a layout file to open as a new layout').setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) });
   const problems = page.getByTestId('import-problems');
   await expect(problems).toContainText('Bay length: must be a whole number of millimetres');
   await problems.getByRole('button', { name: 'Close' }).click();
 
-  await page.getByRole('button', { name: /^Tracing/ }).click();
-  await page.getByLabel('Add a photo to trace').setInputFiles({ name: 'floor.png', mimeType: 'image/png', buffer: pngBytes(400, 200, [90, 120, 150]) });
-  const dialog = page.getByTestId('calibrate-dialog');
+  await page.getByRole('button', { name: /^Survey photos/ }).click();
+  await page.getByLabel('Add a survey photo').setInputFiles({ name: 'floor.png', mimeType: 'image/png', buffer: pngBytes(400, 200, [90, 120, 150]) });
+  const dialog = page.getByTestId('scale-photo-dialog');
   const img = dialog.getByTestId('calibrate-image');
   await expect(img).toBeVisible();
   const box = (await img.boundingBox())!;
@@ -125,12 +130,12 @@ test('in the editor: the File menu exports PNG and JSON, refuses a bad import wi
   await page.mouse.click(box.x + box.width - 2, box.y + box.height / 2);
   await dialog.getByLabel('Real distance between the points').fill('3700');
   await dialog.getByRole('button', { name: 'Place under the plan' }).click();
-  await expect(page.getByRole('button', { name: /^Tracing\s*1/ })).toBeVisible();
-  await expect(page.getByRole('dialog', { name: 'Tracing photos' })).toContainText(/mm\/px/);
+  await expect(page.getByRole('button', { name: /^Survey photos\s*1/ })).toBeVisible();
+  await expect(page.getByRole('dialog', { name: 'Survey photos' })).toContainText(/mm\/px/);
   await keepScreenshot(page, 'editor-tracing-photo');
 
   // A good file imports as a new layout.
   await page.keyboard.press('Escape');
-  await page.getByLabel('Choose a layout file to import').setInputFiles({ name: 'good.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(doc)) });
+  await page.getByLabel('Choose a layout file to open as a new layout').setInputFiles({ name: 'good.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(doc)) });
   await expect(page.getByRole('heading', { name: 'Adeyemi — L3H2 touring (imported)' })).toBeVisible();
 });

@@ -76,17 +76,17 @@ describe('commands', () => {
     expect(h.get().selection).toEqual([]);
   });
 
-  it('arrangement, ghost and snap-step commands', () => {
+  it('arrangement, phantom and snap-step commands', () => {
     const h = harness();
     dispatchKey(key('s'), h.get(), false);
     expect(h.get().arrangement).toBe('sleep');
     dispatchKey(key('o'), h.get(), false);
-    expect(h.get().ghost).toBe('lounge');
+    expect(h.get().phantom).toBe('lounge');
     dispatchKey(key('g'), h.get(), false);
-    expect(h.get().snap.step).toBe(50);
+    expect(h.get().steps.step).toBe(50);
     dispatchKey(key('g'), h.get(), false);
     dispatchKey(key('g'), h.get(), false);
-    expect(h.get().snap.step).toBe(10);
+    expect(h.get().steps.step).toBe(10);
     const before = h.get().viewport.scale;
     dispatchKey(key('='), h.get(), false);
     expect(h.get().viewport.scale).toBeCloseTo(before * 1.25);

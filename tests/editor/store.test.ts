@@ -47,7 +47,7 @@ describe('editor store: placing modules', () => {
     const store = createEditorStore({ doc: testDoc([mod('a')]), version: 3, readOnly: true });
     store.getState().select(['a']);
     const r = store.getState().deleteSelection();
-    expect(r).toEqual({ ok: false, error: 'This layout is read-only.' });
+    expect(r).toEqual({ ok: false, error: 'This layout is view only.' });
     expect(store.getState().doc.modules).toHaveLength(1);
   });
 });
@@ -85,7 +85,7 @@ describe('editor store: moving with snapping', () => {
 
   it('moves freely to the millimetre with snapping off', () => {
     const h = harness([mod('a', { x: 1000, y: 800 })]);
-    h.get().setSnap({ enabled: false });
+    h.get().setSteps({ enabled: false });
     h.get().beginMove(['a']);
     h.get().dragTo(12.6, -7.2);
     h.get().commitGesture();
@@ -94,7 +94,7 @@ describe('editor store: moving with snapping', () => {
 
   it('uses the chosen grid step (50 mm)', () => {
     const h = harness([mod('a', { x: 1000, y: 800 })]);
-    h.get().setSnap({ step: 50 });
+    h.get().setSteps({ step: 50 });
     h.get().beginMove(['a']);
     h.get().dragTo(80, 130);
     h.get().commitGesture();
@@ -306,7 +306,7 @@ describe('editor store: arrangements', () => {
   });
 
   it('snaps only to modules of the arrangement on show', () => {
-    const h = harness([mod('a', { x: 1000, y: 800 }), mod('ghost', { x: 1404, y: 800, arrangements: ['sleep'] })]);
+    const h = harness([mod('a', { x: 1000, y: 800 }), mod('phantom', { x: 1404, y: 800, arrangements: ['sleep'] })]);
     h.get().setArrangement('lounge');
     h.get().beginMove(['a']);
     h.get().dragTo(2, 0);
@@ -316,15 +316,15 @@ describe('editor store: arrangements', () => {
     expect(g.preview.dx).toBe(0); // the grid, not the sleep-only module 2 mm away... 1002 -> 1000
   });
 
-  it('the ghost overlay cannot show the arrangement already on show', () => {
+  it('the phantom overlay cannot show the arrangement already on show', () => {
     const h = harness();
     h.get().setArrangement('lounge');
-    h.get().setGhost('lounge');
-    expect(h.get().ghost).toBeNull();
-    h.get().setGhost('sleep');
-    expect(h.get().ghost).toBe('sleep');
+    h.get().setPhantom('lounge');
+    expect(h.get().phantom).toBeNull();
+    h.get().setPhantom('sleep');
+    expect(h.get().phantom).toBe('sleep');
     h.get().setArrangement('sleep');
-    expect(h.get().ghost).toBeNull();
+    expect(h.get().phantom).toBeNull();
   });
 });
 

@@ -189,6 +189,8 @@ describe('paying on the hosted checkout', () => {
     expect(text).toContain(`£${(q.depositMinor / 100).toLocaleString('en-GB', { minimumFractionDigits: 2 })}`);
     expect(text).toContain(`/layouts/${w.clientLayoutId}/quote`);
     expect(text).toMatch(/not a VAT invoice/);
+    // The receipt carries the caution: licensed fitters certify gas, 230 V, heater and belt work.
+    expect(text).toMatch(/qualified, licensed fitters to local codes/);
 
     const shown = await call(quoteRoute.GET, { as: w.client, params: { id: w.clientLayoutId } });
     expect(shown.body.quote).toMatchObject({ status: 'paid', canPay: false, receiptTo: 'priya@client.test' });

@@ -138,6 +138,8 @@ describe('POST /api/layouts/:id/quote', () => {
     expect(res.body.mail).toBe('sent');
     const mails = await mailFor(db, 'priya@client.test');
     expect(mails.some((m) => /Your quote for .* is ready/.test(m.parsed.subject ?? '') && (m.parsed.text ?? '').includes('Fitting from March.'))).toBe(true);
+    // …and the caution that licensed fitters certify the gas, 230 V, heater and belt work.
+    expect(mails.some((m) => /Your quote for .* is ready/.test(m.parsed.subject ?? '') && /qualified, licensed fitters to local codes/.test(m.parsed.text ?? ''))).toBe(true);
     expect(await quoteRows(w.clientLayoutId)).toHaveLength(1);
   });
 

@@ -91,12 +91,12 @@ export const SHARING_ROWS: Row[] = [
     request: async (fx) => {
       const { addComment } = await import('@/db/sharing/comments');
       const { thread } = await addComment(designerOf(fx), fx.world.clientLayoutId, { kind: 'pin', arrangement: 'sleep', x: 500, y: 500, body: 'matrix' });
-      return { params: { id: fx.world.clientLayoutId, commentId: thread.id }, json: { resolved: true } };
+      return { params: { id: fx.world.clientLayoutId, commentId: thread.id }, json: { settled: true } };
     },
     expect: READ,
   },
   {
-    // The designer's own comment: the designer (author) and the owner may remove it, the client may not.
+    // The designer's own mark-up: the designer (author) and the owner may remove it, the client may not.
     route: '/api/layouts/[id]/comments/[commentId]', method: 'DELETE',
     request: async (fx) => {
       const { addComment } = await import('@/db/sharing/comments');

@@ -1,13 +1,13 @@
 // The mail words: user text is escaped in HTML, subjects stay on one line, only http(s) links.
 import { describe, expect, it } from 'vitest';
 import { compose, escapeHtml, oneLine } from '@/lib/mail/compose';
-import { commentMail, decisionMail, invitationMail, revisionIssuedMail, SIGN_OFF_CAUTION } from '@/lib/mail/messages';
+import { markupMail, decisionMail, invitationMail, revisionIssuedMail, SIGN_OFF_CAUTION } from '@/lib/mail/messages';
 import { publicUrl, PublicUrlMissing } from '@/lib/mail/public-url';
 import { outboxEnabled } from '@/lib/mail/outbox-mode';
 
 describe('compose', () => {
   it('escapes every piece of user text in the HTML body', () => {
-    const m = commentMail({ recipientName: 'Ivo', authorName: '<b>Priya</b>', layoutName: 'Van & co', body: '<script>alert(1)</script>', reply: false, url: 'https://app.test/layouts/1' });
+    const m = markupMail({ recipientName: 'Ivo', authorName: '<b>Priya</b>', layoutName: 'Van & co', body: '<script>alert(1)</script>', reply: false, url: 'https://app.test/layouts/1' });
     expect(m.html).not.toContain('<script>');
     expect(m.html).toContain('&lt;script&gt;alert(1)&lt;/script&gt;');
     expect(m.html).toContain('Van &amp; co');
@@ -27,7 +27,7 @@ describe('compose', () => {
   it('says what each message is about', () => {
     const inv = invitationMail({ clientName: 'Sam', studioName: 'Saltmarsh Van Works', inviterName: 'Ivo Brandt', url: 'http://127.0.0.1:3000/invite/abc', expiresAt: new Date('2030-01-08T00:00:00Z'), layoutName: 'Stock van' });
     expect(inv.subject).toBe('Saltmarsh Van Works invites you to follow your van\'s design');
-    expect(inv.text).toContain('Set your password: http://127.0.0.1:3000/invite/abc');
+    expect(inv.text).toContain('Join the studio: http://127.0.0.1:3000/invite/abc');
     expect(inv.text).toContain('until 2030-01-08');
     const d = decisionMail({ recipientName: 'Ivo', clientName: 'Sam', layoutName: 'Stock van', letter: 'A', decision: 'approved', message: '', url: 'https://a.test/r' });
     expect(d.subject).toBe('Sam approved revision A of Stock van');
@@ -35,6 +35,10 @@ describe('compose', () => {
     // Approvals and new revisions carry the sign-off caution (gas, 230 V, heating, belts, weight).
     expect(d.text).toContain(SIGN_OFF_CAUTION);
     expect(revisionIssuedMail({ clientName: 'P', studioName: 'S', layoutName: 'L', letter: 'B', note: '', url: 'https://a.test/r' }).html).toContain('qualified fitters');
+    const note = markupMail({ recipientName: 'Ivo', authorName: 'Sam', layoutName: 'Stock van', body: 'Bed 50 mm longer?', reply: false, url: 'https://a.test/l' });
+    expect(note.subject).toBe('Sam left a mark-up on Stock van');
+    expect(note.text).toContain('Sam left a mark-up on Stock van:');
+    expect(markupMail({ recipientName: 'Sam', authorName: 'Ivo', layoutName: 'Stock van', body: 'Yes', reply: true, url: 'https://a.test/l' }).subject).toBe('Ivo replied to a mark-up on Stock van');
     expect(escapeHtml(`"'`)).toBe('&quot;&#39;');
   });
 });

@@ -81,7 +81,7 @@ describe('issuing revisions', () => {
     expect(res.body.revision).not.toHaveProperty('doc');
     expect(res.body.mail).toBe('sent');
     const [mail] = await mailFor(db, 'priya@client.test');
-    expect(mail.parsed.subject).toBe('Revision A of Nair — L2H2 weekender is ready for you');
+    expect(mail.parsed.subject).toBe('Revision A of Nair — L2H2 weekender is issued for your approval');
     expect(linkIn(mail.parsed, '/layouts/').pathname).toBe(`/layouts/${w.clientLayoutId}/revisions`);
     expect(mail.parsed.text).toContain('> First proposal: bed across the rear.');
   });
@@ -176,7 +176,7 @@ describe('approving and asking for changes', () => {
     const mails = await mailFor(db, 'maren@saltmarsh.test');
     expect(mails.map((m) => m.parsed.subject)).toEqual(expect.arrayContaining([
       'Priya Nair approved revision B of Nair — L2H2 weekender',
-      'Priya Nair asked for changes to revision B of Nair — L2H2 weekender',
+      'Priya Nair returned revision B of Nair — L2H2 weekender for changes',
     ]));
   });
 
@@ -223,7 +223,7 @@ describe('comparing revisions', () => {
     expect(Array.isArray(res.body.findings)).toBe(true);
     const current = await call(compare.GET, { params: { id: w.clientLayoutId }, path: '/x?from=B&to=current', as: w.designer });
     expect(current.status).toBe(200);
-    expect(current.body.to.label).toMatch(/Current draft/);
+    expect(current.body.to.label).toBe('Preliminary, as last saved');
     expect(current.body.diff.moved).toHaveLength(1);
   });
 

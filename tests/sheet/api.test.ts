@@ -51,7 +51,7 @@ describe('GET /api/layouts/:id/sheet', () => {
     const read = await readPdf(res.bytes);
     expect(read.pages[0].width).toBeCloseTo(841.89, 1);
     const words = read.pages[0].texts.map((t) => t.str);
-    expect(words).toEqual(expect.arrayContaining(['Saltmarsh Van Works', 'Nair — L2H2 weekender', 'Priya Nair', 'Working copy', '1:20']));
+    expect(words).toEqual(expect.arrayContaining(['Saltmarsh Van Works', 'Nair — L2H2 weekender', 'Priya Nair', 'Preliminary', '1:20']));
   });
 
   it('makes A3 at 1:25 when asked', async () => {
@@ -111,7 +111,7 @@ describe('GET /api/layouts/:id/sheet', () => {
     expect(issued.status).toBe(201);
     const { revision: { letter } } = await issued.json();
     expect(letter).toMatch(/^[A-Z]+$/);
-    // Change the working copy after issuing: the revision's sheet must not follow.
+    // Change the layout after issuing: the revision's sheet must not follow.
     const cur = await (await oneLayout.GET(new Request(`http://localhost:3000/api/layouts/${w.otherLayoutId}`, { headers: cookie }), { params: Promise.resolve({ id: w.otherLayoutId }) })).json();
     const doc = structuredClone(cur.doc);
     doc.modules[0].label = 'Relabelled after the issue';
@@ -127,7 +127,7 @@ describe('GET /api/layouts/:id/sheet', () => {
     expect(all).not.toContain('Relabelled after the issue');
     const working = await readPdf((await get(w.otherLayoutId, w.designer)).bytes);
     expect(working.pages.map((p) => p.text).join(' ')).toContain('Relabelled after the issue');
-    expect(working.pages[0].texts.map((t) => t.str)).toContain('Working copy');
+    expect(working.pages[0].texts.map((t) => t.str)).toContain('Preliminary');
   });
 
   it('answers 404 for a revision that was never issued and 400 for a malformed letter', async () => {

@@ -6,6 +6,7 @@ import { composeSheet, fitOf, renderPdf, suggestFit, type SheetRequest } from '@
 import { printable, textWidth, wrap } from '@/lib/sheet/typography';
 import { starterLayout, bayTemplate, emptyLayout, type LayoutDoc } from '@/lib/layout';
 import type { CheckReport } from '@/lib/checks/types';
+import { diffRevisions } from '@/lib/layout/revision-diff';
 import { fontsReady } from './sheet-fonts';
 
 const lounge = starterLayout('starter-l-lounge')!;
@@ -93,10 +94,37 @@ describe('what the sheet holds', () => {
     });
   });
 
-  it('says "working copy" when there is no revision letter, and names a missing client', () => {
+  it('says "Preliminary" when there is no revision letter, and names a missing client', () => {
     const w = composeSheet(request({ details: { ...details, revision: null, client: null } }));
     if (!w.ok) throw new Error(w.message);
-    expect(textsOf(w.sheet.pages[0])).toEqual(expect.arrayContaining(['Working copy', 'No client named']));
+    expect(textsOf(w.sheet.pages[0])).toEqual(expect.arrayContaining(['Preliminary', 'No client named']));
+  });
+
+  it('prints where an issued revision stands, its revision table, and clouds with the letter round what changed', () => {
+    const moved = { ...lounge, modules: lounge.modules.map((m, i) => (i === 0 ? { ...m, x: m.x + 200 } : m)) };
+    const everywhere = lounge.modules[0].arrangements.length;
+    const plain = composeSheet(request({ doc: moved, details: { ...details, issueState: 'changes-asked' } }));
+    const marked = composeSheet(request({
+      doc: moved,
+      details: { ...details, issueState: 'changes-asked' },
+      revisions: [
+        { letter: 'A', date: '2025-11-20', description: 'First proposal', by: 'Ivo Brandt' },
+        { letter: 'B', date: '2025-12-02', description: 'Bed moved 200 mm rearwards', by: 'Ivo Brandt' },
+      ],
+      changes: { letter: 'B', diff: diffRevisions(lounge, moved) },
+    }));
+    if (!plain.ok || !marked.ok) throw new Error('does not fit');
+    const all = marked.sheet.pages.flatMap((p) => textsOf(p));
+    expect(textsOf(marked.sheet.pages[0])).toEqual(expect.arrayContaining(['Revision · Returned for changes', 'B']));
+    expect(all).toEqual(expect.arrayContaining(['Revisions', 'Rev', 'Date', 'Description', 'By', 'First proposal', 'Bed moved 200 mm rearwards', '2025-11-20']));
+    // One cloud (a polygon of many points) and one delta triangle (three points) per arrangement the module is in.
+    const polys = (r: typeof marked) => (r.ok ? r.sheet.pages.flatMap((p) => p.items.filter((i): i is Extract<typeof i, { type: 'polygon' }> => i.type === 'polygon')) : []);
+    const extra = polys(marked).length - polys(plain).length;
+    expect(extra).toBe(2 * everywhere);
+    expect(polys(marked).filter((p) => p.stroke === 'copper' && p.points.length === 3)).toHaveLength(everywhere);
+    expect(polys(marked).filter((p) => p.stroke === 'copper' && p.points.length > 20)).toHaveLength(everywhere);
+    // The triangles carry the letter.
+    expect(marked.sheet.pages.flatMap((p) => p.items).filter((i) => i.type === 'text' && i.text === 'B' && i.ink === 'copper')).toHaveLength(everywhere);
   });
 
   it('lists every module in the schedule with kind, size, elevation and mass', () => {

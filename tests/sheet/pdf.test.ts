@@ -100,8 +100,8 @@ describe('other papers and scales', () => {
     expect(at10.pages[0].texts.map((t) => t.str)).toContain('500 mm'); // the bar is 500 mm at 1:10
   });
 
-  it('writes "Working copy" without a revision letter', async () => {
+  it('writes "Preliminary" without a revision letter', async () => {
     const read = await pdfOf({ details: { ...details, revision: undefined } });
-    expect(read.pages[0].texts.map((t) => t.str)).toContain('Working copy');
+    expect(read.pages[0].texts.map((t) => t.str)).toContain('Preliminary');
   });
 });

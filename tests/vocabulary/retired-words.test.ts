@@ -83,16 +83,16 @@ const RETIRED: Retired[] = [
   { what: 'a program or library named in the interface', pattern: /\b(PVWatts|PVGIS|pvlib|pdf-lib|fontkit|Konva|zustand|Drizzle|PGlite|nodemailer|convert-units)\b/, allow: /^lib\/(checks|planning)\// },
   { what: 'a program, library or shop named in a check message', pattern: /\b(PVWatts|PVGIS|pvlib|convert-units|Better Sleep Council|IKEA|Amazon)\b|as cited in the brief/i, pendingOn: 'numbers' },
   // Words of other programs (the mark-ups, states, overlay, steps, tracing, file menu and conflict renames).
-  { what: 'comment pins and resolving', pattern: /\b(comment pins?|pin(ned)? a comment|Pin comment|Add a comment)\b/i, pendingOn: 'voice' },
-  { what: 'resolve / resolved', pattern: /\b(resolve[sd]?|resolving)\b/i, pendingOn: 'voice' },
-  { what: 'ghost / onion skin', pattern: /\b(ghost(ed)?|onion[- ]?skin)\b/i, pendingOn: 'voice' },
-  { what: 'snap', pattern: /\bsnap(ping|s)?\b/i, pendingOn: 'voice' },
-  { what: 'calibrate', pattern: /\bcalibrat(e|ed|ion|ing)\b/i, pendingOn: 'voice' },
-  { what: 'working copy', pattern: /\bworking copy\b/i, pendingOn: 'voice' },
-  { what: 'revoke', pattern: /\brevok(e|ed|es|ing)\b/i, pendingOn: 'voice' },
-  { what: 'reload theirs / keep mine', pattern: /\b(reload theirs|keep mine|load theirs|drop my changes)\b/i, pendingOn: 'voice' },
-  { what: 'review-platform states', pattern: /\b(Changes asked|Ask for changes)\b/, pendingOn: 'voice' },
-  { what: 'format names as file commands', pattern: /\b(Export|Import) (PNG|JSON)\b/, pendingOn: 'voice' },
+  { what: 'comment pins and resolving', pattern: /\b(comment pins?|pin(ned)? a comment|Pin comment|Add a comment)\b/i },
+  { what: 'resolve / resolved', pattern: /\b(resolve[sd]?|resolving)\b/i },
+  { what: 'ghost / onion skin', pattern: /\b(ghost(ed)?|onion[- ]?skin)\b/i },
+  { what: 'snap', pattern: /\bsnap(ping|s)?\b/i },
+  { what: 'calibrate', pattern: /\bcalibrat(e|ed|ion|ing)\b/i },
+  { what: 'working copy', pattern: /\bworking copy\b/i },
+  { what: 'revoke', pattern: /\brevok(e|ed|es|ing)\b/i },
+  { what: 'reload theirs / keep mine', pattern: /\b(reload theirs|keep mine|load theirs|drop my changes)\b/i },
+  { what: 'review-platform states', pattern: /\b(Changes asked|Ask for changes)\b/ },
+  { what: 'format names as file commands', pattern: /\b(Export|Import) (PNG|JSON)\b/ },
 ];
 
 const said = SCOPES.flatMap(filesUnder).flatMap(saidIn);

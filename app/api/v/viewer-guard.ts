@@ -24,9 +24,10 @@ export function takeViewerToken(req: Request): void {
 }
 
 export function refuseUnusable(resolved: Exclude<ResolvedLink, { status: 'active' }>): never {
-  if (resolved.status === 'revoked') throw new HttpError(410, 'This viewer link was withdrawn by the workshop.', { status: 'revoked' });
   if (resolved.status === 'expired') throw new HttpError(410, `This viewer link expired on ${resolved.expiresAt.slice(0, 10)}.`, { status: 'expired' });
-  throw new HttpError(404, 'There is no viewer link at this address.', { status: 'unknown' });
+  if (resolved.status === 'unknown') throw new HttpError(404, 'There is no viewer link at this address.', { status: 'unknown' });
+  // What is left is a withdrawn link; its stored status id goes out as the API's `status`.
+  throw new HttpError(410, 'This viewer link was withdrawn by the workshop.', { status: resolved.status });
 }
 
 /** Wraps a handler's answer (or error answer) with the viewer headers. */

@@ -34,7 +34,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   }
   const what = inv.role === 'designer'
     ? 'to draw and check the studio’s van layouts as a designer.'
-    : 'to follow your van’s design, comment on the plan and approve revisions.';
+    : 'to follow your van’s design, leave mark-ups on the plan and approve revisions.';
   const intro = <p className="mb-4 text-sm text-ink-soft">{inv.inviterName ? `${inv.inviterName} invited you` : 'You were invited'} {what}</p>;
   const here = `/invite/${token}`;
 

@@ -11,24 +11,24 @@ import type { Module } from '@/lib/layout';
 import { drawModule } from './moduleSymbols';
 import type { CanvasFonts } from './useCanvasFonts';
 
-export function moduleSceneFunc(ghost: boolean) {
+export function moduleSceneFunc(phantom: boolean) {
   return (context: Konva.Context, shape: Konva.Shape) => {
     const m = shape.getAttr('module') as Module;
     const fonts = shape.getAttr('fonts') as CanvasFonts | undefined;
     // World layers carry the viewport scale (px per mm); width/height attrs may differ from the
     // module's own during a live resize.
     const scale = shape.getLayer()?.scaleX() || 1;
-    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props }, { scale, ghost, fonts });
+    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props }, { scale, phantom, fonts });
   };
 }
 
 const solid = moduleSceneFunc(false);
-const ghosted = moduleSceneFunc(true);
+const phantomDrawn = moduleSceneFunc(true);
 
-export const ModuleShape = memo(function ModuleShape({ module, fonts, ghost = false, fontsReady = 0 }: { module: Module; fonts: CanvasFonts; ghost?: boolean; fontsReady?: number }) {
+export const ModuleShape = memo(function ModuleShape({ module, fonts, phantom = false, fontsReady = 0 }: { module: Module; fonts: CanvasFonts; phantom?: boolean; fontsReady?: number }) {
   return (
     <Shape
-      id={ghost ? undefined : `module-${module.id}`}
+      id={phantom ? undefined : `module-${module.id}`}
       x={module.x}
       y={module.y}
       width={module.length}
@@ -36,7 +36,7 @@ export const ModuleShape = memo(function ModuleShape({ module, fonts, ghost = fa
       module={module}
       fonts={fonts}
       fontsReady={fontsReady}
-      sceneFunc={ghost ? ghosted : solid}
+      sceneFunc={phantom ? phantomDrawn : solid}
       listening={false}
       perfectDrawEnabled={false}
     />

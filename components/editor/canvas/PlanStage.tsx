@@ -28,7 +28,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
     useShallow((st) => ({
       doc: st.doc,
       arrangement: st.arrangement,
-      ghost: st.ghost,
+      phantom: st.phantom,
       selection: st.selection,
       highlight: st.highlight,
       viewport: st.viewport,
@@ -71,7 +71,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
         <Stage width={size.w} height={size.h}>
           {underlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
-          <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} ghost={s.ghost} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
+          <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
           {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />

@@ -8,5 +8,6 @@ import 'konva/lib/shapes/Rect';
 import 'konva/lib/shapes/Text';
 import 'konva/lib/shapes/Circle';
 import 'konva/lib/shapes/Image';
+import 'konva/lib/shapes/Line';
 
-export { Stage, Layer, Group, Shape, Rect, Text, Circle, Image } from 'react-konva/lib/ReactKonvaCore';
+export { Stage, Layer, Group, Shape, Rect, Text, Circle, Image, Line } from 'react-konva/lib/ReactKonvaCore';

@@ -23,7 +23,7 @@ export interface ModuleLook {
 export interface DrawOptions {
   /** Screen px per mm. */
   scale: number;
-  ghost?: boolean;
+  phantom?: boolean;
   fonts?: { text: string; mono: string };
 }
 
@@ -34,14 +34,14 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   const px = 1 / o.scale;
   const L = m.length, W = m.width;
   ctx.save();
-  if (o.ghost) ctx.globalAlpha = 0.32;
+  if (o.phantom) ctx.globalAlpha = 0.45;
 
   // Base sheet and family hatching.
   ctx.beginPath();
   ctx.rect(0, 0, L, W);
-  ctx.fillStyle = o.ghost ? 'rgba(245,242,234,0.2)' : theme.paper;
+  ctx.fillStyle = o.phantom ? 'rgba(245,242,234,0.2)' : theme.paper;
   ctx.fill();
-  if (!o.ghost) {
+  if (!o.phantom) {
     if (spec.family === 'timber') fillHatch(ctx, 'timber');
     else if (spec.family === 'upholstery') fillHatch(ctx, 'stipple');
   }
@@ -49,18 +49,19 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   // Outline by family.
   ctx.lineWidth = 1.25 * px;
   ctx.strokeStyle = theme.ink;
-  ctx.setLineDash(o.ghost || m.kind === 'overhead-locker' || m.kind === 'bed-infill' ? [5 * px, 3 * px] : []);
-  if (spec.family === 'electrics' && !o.ghost) ctx.setLineDash([1.2 * px, 2.6 * px]);
+  // Phantom line (alternate position): long dash, two short dashes. Hidden edges: plain dashes.
+  ctx.setLineDash(o.phantom ? [12 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px] : m.kind === 'overhead-locker' || m.kind === 'bed-infill' ? [5 * px, 3 * px] : []);
+  if (spec.family === 'electrics' && !o.phantom) ctx.setLineDash([1.2 * px, 2.6 * px]);
   ctx.strokeRect(0, 0, L, W);
   ctx.setLineDash([]);
-  if (spec.family === 'gas' && !o.ghost) {
+  if (spec.family === 'gas' && !o.phantom) {
     const inset = Math.min(3 * px, L / 4, W / 4);
     ctx.lineWidth = 0.9 * px;
     ctx.strokeRect(inset, inset, L - 2 * inset, W - 2 * inset);
   }
 
   const screenMin = Math.min(L, W) * o.scale;
-  if (!o.ghost && screenMin >= 10) {
+  if (!o.phantom && screenMin >= 10) {
     drawSymbol(ctx, m, px);
   }
   if (screenMin >= 18 && L * o.scale >= 36) drawLabel(ctx, m.label || spec.title, L, W, o, px);

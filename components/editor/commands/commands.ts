@@ -30,8 +30,8 @@ function showArrangement(a: Arrangement, key: string): Command {
   return { id: `arrangement.${a}`, label: `Show ${a}`, group: 'arrangement', shortcut: [key], enabled: (s) => s.arrangement !== a, run: (s) => s.setArrangement(a) };
 }
 
-/** Which arrangement the overlay ghosts: the one that differs most from the one on show. */
-export function ghostPartner(a: Arrangement): Arrangement {
+/** Which arrangement the phantom lines show: the one that differs most from the one on show. */
+export function phantomPartner(a: Arrangement): Arrangement {
   return a === 'sleep' ? 'lounge' : a === 'lounge' ? 'sleep' : 'lounge';
 }
 
@@ -72,11 +72,11 @@ export const COMMANDS: Command[] = [
   { id: 'view.zoom-out', label: 'Zoom out', group: 'view', shortcut: ['-'], enabled: () => true, run: (s) => s.zoomBy(0.8) },
   { id: 'view.fit', label: 'Fit bay', group: 'view', shortcut: ['0'], enabled: () => true, run: (s) => s.fit() },
   { id: 'view.actual', label: 'Actual size (1:1)', group: 'view', shortcut: ['1'], enabled: () => true, run: (s) => s.actualSize() },
-  { id: 'view.ghost', label: 'Ghost the other arrangement', group: 'view', shortcut: ['O'], enabled: () => true, run: (s) => s.setGhost(s.ghost ? null : ghostPartner(s.arrangement)) },
-  { id: 'view.snap', label: 'Snapping on/off', group: 'view', shortcut: ['Shift+S'], enabled: editable, run: (s) => s.setSnap({ enabled: !s.snap.enabled }) },
+  { id: 'view.phantom', label: 'Show the other arrangement in phantom lines', group: 'view', shortcut: ['O'], enabled: () => true, run: (s) => s.setPhantom(s.phantom ? null : phantomPartner(s.arrangement)) },
+  { id: 'view.steps', label: 'Move in steps or freely', group: 'view', shortcut: ['Shift+S'], enabled: editable, run: (s) => s.setSteps({ enabled: !s.steps.enabled }) },
   {
-    id: 'view.grid-step', label: 'Next snap step (10 / 50 / 100 mm)', group: 'view', shortcut: ['G'], enabled: editable,
-    run: (s) => s.setSnap({ step: GRID_STEPS[(GRID_STEPS.indexOf(s.snap.step) + 1) % GRID_STEPS.length], enabled: true }),
+    id: 'view.grid-step', label: 'Next step size (10 / 50 / 100 mm)', group: 'view', shortcut: ['G'], enabled: editable,
+    run: (s) => s.setSteps({ step: GRID_STEPS[(GRID_STEPS.indexOf(s.steps.step) + 1) % GRID_STEPS.length], enabled: true }),
   },
 
   showArrangement('travel', 'T'),

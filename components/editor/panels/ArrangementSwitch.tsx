@@ -1,7 +1,7 @@
 'use client';
 /**
- * The arrangement switch (travel / lounge / sleep) and the ghost overlay option that shows another
- * arrangement dashed over this one. Switching is a view change: instant, never in undo.
+ * The arrangement switch (travel / lounge / sleep) and the phantom option: another arrangement
+ * drawn in phantom lines (thin, dashed — the drafting line for an alternate position) over this one. Switching is a view change: instant, never in undo.
  */
 import { useShallow } from 'zustand/react/shallow';
 import type { Arrangement } from '@/lib/layout/schema';
@@ -12,7 +12,7 @@ const WORDS: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge',
 
 export function ArrangementSwitch() {
   const api = useEditorApi();
-  const { arrangement, ghost } = useEditor(useShallow((s) => ({ arrangement: s.arrangement, ghost: s.ghost })));
+  const { arrangement, phantom } = useEditor(useShallow((s) => ({ arrangement: s.arrangement, phantom: s.phantom })));
   return (
     <div className="flex items-center gap-3">
       <div role="radiogroup" aria-label="Arrangement" className="flex overflow-hidden rounded border border-ink-faint">
@@ -31,12 +31,12 @@ export function ArrangementSwitch() {
         ))}
       </div>
       <label className="flex items-center gap-1.5 text-sm text-ink-soft">
-        Ghost
+        Phantom
         <select
-          value={ghost ?? ''}
-          onChange={(e) => api.getState().setGhost((e.target.value || null) as Arrangement | null)}
+          value={phantom ?? ''}
+          onChange={(e) => api.getState().setPhantom((e.target.value || null) as Arrangement | null)}
           className="rounded border border-paper-edge bg-paper px-1 py-0.5 text-sm"
-          aria-label="Show another arrangement ghosted"
+          aria-label="Show another arrangement in phantom lines"
         >
           <option value="">none</option>
           {ARRANGEMENTS.filter((a) => a !== arrangement).map((a) => <option key={a} value={a}>{a}</option>)}

@@ -47,7 +47,7 @@ export const BayPanel = memo(function BayPanel() {
           </div>
           <div className="flex items-center gap-4 pt-1">
             <label className="flex items-center gap-1.5"><input type="checkbox" className="accent-copper" checked={bay.bulkhead} onChange={(e) => setBay({ bulkhead: e.target.checked })} /> Bulkhead</label>
-            <label className="flex items-center gap-1.5">Cab seats
+            <label className="flex items-center gap-1.5">Seats in the cab
               <input type="number" min={0} max={9} value={bay.cabSeats} onChange={(e) => setBay({ cabSeats: Math.max(0, Math.min(9, Math.round(Number(e.target.value) || 0))) })} className="w-14 rounded border border-paper-edge bg-paper px-1 py-0.5 font-mono" />
             </label>
           </div>

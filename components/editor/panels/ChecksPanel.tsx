@@ -16,6 +16,7 @@ import { NotYetChecked, SourceDisclosure, StatusBadge } from '@/components/check
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
 import type { LiveChecks } from '../api/useLiveChecks';
 import { groupFindings } from './findingGroups';
+import { CHECKS_CAUTION } from '@/lib/layout/cautions';
 
 function amount(v: number | undefined, unit: string | undefined, units: LengthUnit): string | undefined {
   if (v === undefined || !Number.isFinite(v)) return undefined;
@@ -94,7 +95,7 @@ export function ChecksPanel({ checks, layoutId }: { checks: LiveChecks; layoutId
           />
         )}
         <p className="mt-2 border-t border-paper-edge pt-2 text-[11px] text-ink-soft">
-          Checks are planning aids, not certification. Gas, 230 V, heating, seat belts and weight limits must follow your local codes and be fitted and signed off by a qualified, licensed person.
+          {CHECKS_CAUTION}
         </p>
       </div>
     </div>

@@ -4,7 +4,7 @@
  * menu use, so label, shortcut and enabled state always agree. Never runs anything else.
  */
 import type { ComponentType } from 'react';
-import { RotateCw, Copy, Trash2, Undo2, Redo2, ZoomIn, ZoomOut, Maximize, Ruler, Keyboard, Layers, Save, type LucideProps } from 'lucide-react';
+import { RotateCw, Copy, Trash2, Undo2, Redo2, ZoomIn, ZoomOut, Maximize, Ruler, Keyboard, SquareDashed, Save, type LucideProps } from 'lucide-react';
 import { toast } from 'sonner';
 import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
@@ -13,7 +13,7 @@ import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 const ICONS: Record<string, ComponentType<LucideProps>> = {
   'edit.rotate': RotateCw, 'edit.duplicate': Copy, 'edit.delete': Trash2, 'edit.undo': Undo2, 'edit.redo': Redo2,
   'view.zoom-in': ZoomIn, 'view.zoom-out': ZoomOut, 'view.fit': Maximize, 'view.actual': Ruler, 'help.shortcuts': Keyboard,
-  'view.ghost': Layers, 'edit.save': Save,
+  'view.phantom': SquareDashed, 'edit.save': Save,
 };
 
 export function CommandButton({ id, withLabel = false, pressed }: { id: string; withLabel?: boolean; pressed?: boolean }) {

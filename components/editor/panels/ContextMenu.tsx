@@ -9,7 +9,7 @@ import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
 
-const ITEMS = ['edit.rotate', 'edit.duplicate', 'edit.delete', 'select.all', 'view.fit', 'view.ghost', 'help.shortcuts'];
+const ITEMS = ['edit.rotate', 'edit.duplicate', 'edit.delete', 'select.all', 'view.fit', 'view.phantom', 'help.shortcuts'];
 
 export function ContextMenu({ at, onClose }: { at: { x: number; y: number }; onClose: () => void }) {
   const api = useEditorApi();

@@ -1,13 +1,16 @@
 'use client';
 /**
  * The Details panel: the selected module's form (loaded on first selection), a summary with the
- * shared commands for a multi-selection, or a hint when nothing is selected. Read-only viewers
+ * shared commands for a multi-selection, or a hint when nothing is selected; a caution above the
+ * form for kinds whose fitting can hurt someone (gas, 230 V, heating, travel seats). View-only viewers
  * see the same values, disabled. Never writes the document except through store actions.
  */
 import { memo, lazy, Suspense, useDeferredValue, useMemo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
+import { kindCaution } from '@/lib/layout/cautions';
+import { CautionNote } from '@/components/ui/CautionNote';
 import { useEditor } from '../store/EditorStoreContext';
 import { CommandButton } from './CommandButton';
 
@@ -48,10 +51,16 @@ export const DetailsPanel = memo(function DetailsPanel() {
       </div>
     );
   }
+  const caution = kindCaution(selected[0].kind);
   return (
-    <Suspense fallback={<p className="p-4 text-sm text-ink-soft">Opening the details…</p>}>
-      <ModuleForm key={selected[0].id} module={selected[0]} />
-    </Suspense>
+    <>
+      {caution && (
+        <div className="px-4 pt-3"><CautionNote title={caution.title} compact testId="details-caution">{caution.text}</CautionNote></div>
+      )}
+      <Suspense fallback={<p className="p-4 text-sm text-ink-soft">Opening the details…</p>}>
+        <ModuleForm key={selected[0].id} module={selected[0]} />
+      </Suspense>
+    </>
   );
 });
 

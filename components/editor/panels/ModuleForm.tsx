@@ -13,11 +13,11 @@ import { useShallow } from 'zustand/react/shallow';
 import { ARRANGEMENTS, FACINGS, SURFACES } from '@/lib/layout/vocabulary';
 import type { Module } from '@/lib/layout/schema';
 import { KINDS, KIND_LIST } from '@/lib/layout/kinds';
+import { FACING_WORDS, propWord } from '@/lib/layout/field-words';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { formValuesOf, moduleFormSchema, patchFrom, type ModuleFormValues, type ModuleFormOutput } from './moduleForm';
 import { CommandButton } from './CommandButton';
 
-const FACING_WORDS: Record<Module['facing'], string> = { front: 'front (towards the cab)', rear: 'rear', left: 'left wall', right: 'right wall' };
 
 function firstError(errors: FieldErrors<ModuleFormValues>): string | undefined {
   for (const v of Object.values(errors)) {
@@ -169,11 +169,4 @@ export default function ModuleForm({ module }: { module: Module }) {
   );
 }
 
-const PROP_WORDS: Record<string, string> = {
-  litres: 'Capacity (litres)', watts: 'Power (W)', dutyCycle: 'Duty cycle (0–1)', burners: 'Burners', cylinders: 'Cylinders',
-  cylinderKg: 'Cylinder size (kg)', belted: 'Belted seat', fillLevel: 'Fill level drawn (0–1)',
-  approved: 'Seat and belt of an approved type', anchorageTested: 'Anchorages fitted to the maker’s kit or tested',
-};
-function propLabel(k: string) {
-  return PROP_WORDS[k] ?? k.replace(/([A-Z])/g, ' $1').toLowerCase();
-}
+const propLabel = propWord;

@@ -5,9 +5,10 @@
  * first free spot. Never edits the document except through the store's addModule.
  */
 import { memo, useMemo, useState } from 'react';
-import { Search } from 'lucide-react';
+import { Search, TriangleAlert } from 'lucide-react';
 import { toast } from 'sonner';
 import { formatLength } from '@/lib/layout/units';
+import { kindCaution } from '@/lib/layout/cautions';
 import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';
 import { matchKinds } from './partsSearch';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
@@ -72,6 +73,7 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: (
               onClick={() => place(k)}
               data-kind={k.kind}
               aria-label={`Place ${k.title}, ${formatLength(k.length, units)} by ${formatLength(k.width, units)}`}
+              aria-describedby={kindCaution(k.kind) ? `shelf-caution-${k.kind}` : undefined}
               className="flex w-full cursor-grab items-center gap-2 rounded px-2 py-1.5 text-left hover:bg-paper focus-visible:outline-2 focus-visible:outline-copper active:cursor-grabbing"
             >
               <Swatch family={k.family} />
@@ -80,6 +82,12 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: (
                 <span className="block font-mono text-[11px] text-ink-soft">
                   {formatLength(k.length, units)} × {formatLength(k.width, units)}
                 </span>
+                {kindCaution(k.kind) && (
+                  <span id={`shelf-caution-${k.kind}`} className="mt-0.5 flex items-start gap-1 text-[11px] leading-tight text-ochre" data-testid="shelf-caution">
+                    <TriangleAlert size={11} className="mt-px shrink-0" aria-hidden="true" />
+                    <span className="text-ink-soft">{kindCaution(k.kind)!.brief}</span>
+                  </span>
+                )}
               </span>
             </button>
           </li>

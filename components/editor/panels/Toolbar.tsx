@@ -1,7 +1,7 @@
 'use client';
 /**
  * The strip above the plan: layout name, arrangement switch, the edit and view commands (the
- * same command objects as the keyboard), snap step, display units, the 1:1 screen scale and the
+ * same command objects as the keyboard), the step size for moving (or free movement), display units, the 1:1 screen scale and the
  * save indicator. Never edits the document except through commands and store actions.
  */
 import { memo, type ReactNode } from 'react';
@@ -16,7 +16,7 @@ import type { SaveStatus } from '../api/useAutosave';
 
 export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra }: { saveStatus: SaveStatus; saveDetail?: string | null; extra?: ReactNode }) {
   const api = useEditorApi();
-  const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, snap: st.snap, units: st.units, scale: st.viewport.scale, actual: st.actualPxPerMm, ghost: st.ghost, version: st.version })));
+  const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, steps: st.steps, units: st.units, scale: st.viewport.scale, actual: st.actualPxPerMm, phantom: st.phantom, version: st.version })));
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-paper-edge bg-paper px-3 py-2">
       <h1 className="max-w-[16rem] truncate text-sm font-semibold" title={s.name}>{s.name}</h1>
@@ -43,11 +43,15 @@ export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra }: 
         </label>
       </div>
       {!s.readOnly && (
-        <label className="flex items-center gap-1.5 text-sm text-ink-soft">
-          <input type="checkbox" className="accent-copper" checked={s.snap.enabled} onChange={(e) => api.getState().setSnap({ enabled: e.target.checked })} />
-          Snap
-          <select value={s.snap.step} onChange={(e) => api.getState().setSnap({ step: Number(e.target.value) as GridStep })} className="rounded border border-paper-edge bg-paper px-1 py-0.5 font-mono text-xs" aria-label="Snap step">
-            {GRID_STEPS.map((g) => <option key={g} value={g}>{g} mm</option>)}
+        <label className="flex items-center gap-1.5 text-sm text-ink-soft" title="Steps: moves land on whole steps and line up with the edges nearby. Free: any whole millimetre.">
+          Move
+          <select
+            value={s.steps.enabled ? String(s.steps.step) : 'free'}
+            onChange={(e) => api.getState().setSteps(e.target.value === 'free' ? { enabled: false } : { enabled: true, step: Number(e.target.value) as GridStep })}
+            className="rounded border border-paper-edge bg-paper px-1 py-0.5 font-mono text-xs" aria-label="Move in steps of"
+          >
+            {GRID_STEPS.map((g) => <option key={g} value={g}>in {g} mm steps</option>)}
+            <option value="free">freely (1 mm)</option>
           </select>
         </label>
       )}

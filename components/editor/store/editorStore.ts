@@ -42,12 +42,12 @@ export interface EditorState {
   /** Modules a clicked finding names: drawn highlighted until the selection changes. */
   highlight: string[];
   arrangement: Arrangement;
-  /** Another arrangement drawn ghosted over the current one, or null. */
-  ghost: Arrangement | null;
+  /** Another arrangement drawn in phantom lines over the current one, or null. */
+  phantom: Arrangement | null;
   viewport: Viewport;
   /** Screen pixels per mm that make the drawing real size on this display (1:1). */
   actualPxPerMm: number;
-  snap: { enabled: boolean; step: GridStep };
+  steps: { enabled: boolean; step: GridStep };
   gesture: Gesture | null;
   history: History;
   shortcutSheetOpen: boolean;
@@ -83,7 +83,7 @@ export interface EditorState {
   selectAll(): void;
   setHighlight(ids: string[]): void;
   setArrangement(a: Arrangement): void;
-  setGhost(a: Arrangement | null): void;
+  setPhantom(a: Arrangement | null): void;
   setViewport(v: Viewport): void;
   resizeViewport(width: number, height: number): void;
   zoomBy(factor: number, sx?: number, sy?: number): void;
@@ -91,7 +91,7 @@ export interface EditorState {
   fit(): void;
   actualSize(): void;
   setActualPxPerMm(v: number): void;
-  setSnap(s: Partial<EditorState['snap']>): void;
+  setSteps(s: Partial<EditorState["steps"]>): void;
   setUnits(u: LengthUnit): void;
   setShortcutSheet(open: boolean): void;
 
@@ -113,7 +113,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
     /** Write a new document as one undo entry; refuse (and say why) on any schema error. */
     function commit(label: string, change: () => { doc: LayoutDoc; selection?: string[] }, mergeKey?: string): EditResult {
       const s = get();
-      if (s.readOnly) return { ok: false, error: 'This layout is read-only.' };
+      if (s.readOnly) return { ok: false, error: 'This layout is view only.' };
       try {
         const { doc, selection } = change();
         if (doc === s.doc) return { ok: true };
@@ -132,7 +132,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
     const selected = () => get().selection.filter((id) => get().doc.modules.some((m) => m.id === id));
     const snapOpts = () => {
       const s = get();
-      return { enabled: s.snap.enabled, step: s.snap.step, threshold: screenToMm(s.viewport, SNAP_PX) };
+      return { enabled: s.steps.enabled, step: s.steps.step, threshold: screenToMm(s.viewport, SNAP_PX) };
     };
 
     return {
@@ -144,10 +144,10 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       selection: [],
       highlight: [],
       arrangement: 'lounge',
-      ghost: null,
+      phantom: null,
       viewport: fitToBay(initialViewport, opts.doc.bay.length, opts.doc.bay.width),
       actualPxPerMm: CSS_PX_PER_MM,
-      snap: { enabled: true, step: 10 },
+      steps: { enabled: true, step: 10 },
       gesture: null,
       history: emptyHistory(),
       shortcutSheetOpen: false,
@@ -156,7 +156,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       addModule(kind, centre) {
         let id: string | undefined;
         const r = commit('Place module', () => {
-          const placed = edits.placeModule(get().doc, kind, centre, get().snap.enabled ? get().snap.step : 1);
+          const placed = edits.placeModule(get().doc, kind, centre, get().steps.enabled ? get().steps.step : 1);
           id = placed.module.id;
           return { doc: placed.doc, selection: [placed.module.id] };
         });
@@ -305,10 +305,10 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (s.gesture) set({ gesture: null });
         // Keep only selected modules that exist in the arrangement now shown.
         const inA = new Set(s.doc.modules.filter((m) => m.arrangements.includes(a)).map((m) => m.id));
-        set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), ghost: s.ghost === a ? null : s.ghost });
+        set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), phantom: s.phantom === a ? null : s.phantom });
       },
-      setGhost(a) {
-        set({ ghost: a === get().arrangement ? null : a });
+      setPhantom(a) {
+        set({ phantom: a === get().arrangement ? null : a });
       },
       setViewport(v) {
         set({ viewport: v });
@@ -338,8 +338,8 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       setActualPxPerMm(v) {
         if (Number.isFinite(v) && v > 0.5 && v < 20) set({ actualPxPerMm: v });
       },
-      setSnap(snap) {
-        set({ snap: { ...get().snap, ...snap } });
+      setSteps(steps) {
+        set({ steps: { ...get().steps, ...steps } });
       },
       setUnits(units) {
         set({ units });

@@ -14,6 +14,7 @@ import { Caution, CheckField, FieldGroup, QuantityField, YesNoField } from '../f
 import type { PanelProps } from '../panelProps';
 import { useSectionForm } from '../useSectionForm';
 import { gasDefaults, gasSchema, gasSystems } from './gasForm';
+import { PLANNING_CAUTION } from '@/lib/layout/cautions';
 import { formatNumber } from '@/lib/format';
 
 export function GasPanel({ doc, readOnly, onSystems, onValidity, findings }: PanelProps) {
@@ -68,8 +69,7 @@ export function GasPanel({ doc, readOnly, onSystems, onValidity, findings }: Pan
         </div>
         {inv.present && (
           <Caution>
-            <p>Gas must be installed and tightness-tested by a qualified gas engineer under local codes (EN 1949 in Europe), with a certificate. Fit a carbon-monoxide alarm and an LPG alarm near the floor.</p>
-            <p>Never sleep with a flueless appliance (a hob) burning, and never use one to heat the van. Turn the cylinder off when travelling unless the installation is approved for use on the move.</p>
+            {PLANNING_CAUTION.gas.map((t) => <p key={t}>{t}</p>)}
           </Caution>
         )}
         <FindingList findings={findingsOf(findings, 'gas.')} testId="findings-gas" />

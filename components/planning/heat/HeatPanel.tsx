@@ -16,6 +16,7 @@ import { newRowId } from '../ids';
 import type { PanelProps } from '../panelProps';
 import { useSectionForm } from '../useSectionForm';
 import { heatDefaults, heatSchema, heatSystems } from './heatForm';
+import { PLANNING_CAUTION } from '@/lib/layout/cautions';
 import { formatNumber } from '@/lib/format';
 
 const FACE = { floor: 'Floor', walls: 'Walls', roof: 'Roof' } as const;
@@ -116,7 +117,7 @@ export function HeatPanel({ doc, readOnly, onSystems, onValidity, findings }: Pa
         </div>
         {h.heaterIds.length > 0 && fuel !== 'electric' && (
           <Caution>
-            <p>A fuel-burning heater makes carbon monoxide. Follow the maker&apos;s installation manual and local codes (UN ECE R122 for vehicle heaters; from memory): exhaust outlet away from doors, opening windows and the fuel filler, combustion intake apart from the exhaust, the maker&apos;s seals and exhaust parts only. Fit a CO alarm (Gas panel).{fuel === 'gas' ? ' A gas heater is part of the gas installation: a qualified gas engineer installs and tests it.' : ''}</p>
+            <p>{PLANNING_CAUTION.heating}{fuel === 'gas' ? ` ${PLANNING_CAUTION.gasHeater}` : ''}</p>
           </Caution>
         )}
         <FindingList findings={findingsOf(findings, 'heat.')} testId="findings-heat" />

@@ -11,6 +11,7 @@ import type { Finding } from '@/lib/checks/types';
 import { cableSize, checkFittedCable, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, EN1648_MIN_AUX_AH, powerBudget, type InsulationRating } from '@/lib/planning';
 import { FindingList, findingsOf } from '../FindingList';
 import { Caution } from '../fields';
+import { PLANNING_CAUTION } from '@/lib/layout/cautions';
 import { formatNumber } from '@/lib/format';
 
 const SEASON = { summer: 'Summer', shoulder: 'Spring/autumn', winter: 'Winter' } as const;
@@ -106,7 +107,7 @@ export function PowerResults({ doc, findings }: { doc: LayoutDoc; findings: Find
       )}
       {mains && (
         <Caution>
-          <p>230 V can kill. Have the hook-up, inverter and mains circuits designed, installed and tested by a qualified electrician under local codes (IEC 60364-7-721 / BS 7671 Section 721; from memory), with 30 mA RCD protection and a certificate. Keep 230 V and 12 V wiring apart.</p>
+          <p>{PLANNING_CAUTION.power}</p>
         </Caution>
       )}
       <FindingList findings={findingsOf(findings, 'power.')} testId="findings-power" />

@@ -17,11 +17,13 @@ export default async function LayoutPage({ params, searchParams }: { params: Pro
     throw err;
   });
   const studio = await getStudio(actor);
-  const { comment } = await searchParams;
+  // `?markup=` from a mail's link; `?comment=` is what mail sent before the rename said.
+  const { markup, comment } = await searchParams;
+  const focus = typeof markup === 'string' ? markup : typeof comment === 'string' ? comment : null;
   return (
     <div className="h-[calc(100vh-48px)]">
-      {/* The editor with comment pins, the comments column and the sharing entry points (components/sharing). */}
-      <LayoutWorkspace layoutId={layout.id} initialDoc={layout.doc} initialVersion={layout.version} canEdit={layout.canEdit} units={studio.units} focusComment={typeof comment === 'string' ? comment : null} />
+      {/* The editor with its mark-ups, the Mark-ups list and the sharing entry points (components/sharing). */}
+      <LayoutWorkspace layoutId={layout.id} initialDoc={layout.doc} initialVersion={layout.version} canEdit={layout.canEdit} units={studio.units} focusMarkup={focus} />
     </div>
   );
 }

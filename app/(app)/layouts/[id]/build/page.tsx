@@ -8,6 +8,7 @@ import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';
 import { BuildPlanner } from '@/components/planning/BuildPlanner';
 import { buildTabFrom } from '@/components/planning/buildTabs';
+import { BUILD_PLAN_CAUTION } from '@/lib/layout/cautions';
 
 export const metadata: Metadata = { title: 'Build plan' };
 
@@ -33,11 +34,11 @@ export default async function BuildPlanPage({ params, searchParams }: { params: 
         <p className="text-sm text-ink-soft">
           Bay <span className="font-mono">{layout.bay.length} × {layout.bay.width} × {layout.bay.height} mm</span> · version <span className="font-mono">{layout.version}</span>
           {layout.client ? ` · for ${layout.client.name}` : ''}
-          {layout.canEdit ? '' : ' · read-only'}
+          {layout.canEdit ? '' : ' · view only'}
         </p>
         {layout.doc.systems?.note && <p className="mt-1 text-sm text-ink-soft">{layout.doc.systems.note}</p>}
         <p className="mt-1 text-xs text-ink-soft">
-          Figures here help plan the build; they do not replace the vehicle&apos;s plate, a weighbridge, the makers&apos; instructions or local codes. Gas, 230 V and heater installations need qualified installers.
+          {BUILD_PLAN_CAUTION}
         </p>
       </header>
       <BuildPlanner

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { headers } from 'next/headers';
 import { notFound, redirect } from 'next/navigation';
-import { ArrowLeft, CircleCheck, Info } from 'lucide-react';
+import { ArrowLeft, CircleCheck, Info, TriangleAlert } from 'lucide-react';
 import { currentActor } from '@/lib/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getCurrentQuote } from '@/db/quotes';
@@ -10,6 +10,7 @@ import { NotFoundError } from '@/db/errors';
 import { checkReturnedSession } from '@/lib/payments/deposit';
 import { QuoteView } from '@/components/planning/quote/QuoteView';
 import { PayDepositButton } from '@/components/planning/quote/PayDepositButton';
+import { QUOTE_CAUTION } from '@/lib/layout/cautions';
 import { paymentsConfigured } from '@/lib/payments/config';
 
 export const metadata: Metadata = { title: 'Quote' };
@@ -75,6 +76,9 @@ export default async function QuotePage({ params, searchParams }: { params: Prom
               <PayDepositButton layoutId={layout.id} depositMinor={quote.depositMinor} currency={quote.currency} />
             </div>
           )}
+          <p role="note" className="flex gap-2 rounded-sm border border-ochre bg-ochre-light p-3 text-sm" data-testid="quote-caution">
+            <TriangleAlert size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" /> {QUOTE_CAUTION}
+          </p>
           {quote.status === 'sent' && !quote.canPay && (
             <p className="text-sm text-ink-soft">{layout.canEdit ? 'Waiting for the client to pay the deposit.' : 'This quote was sent to someone else.'}</p>
           )}

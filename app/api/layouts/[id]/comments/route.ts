@@ -3,26 +3,26 @@ import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respo
 import { addComment, COMMENT_MAX, listThreads } from '@/db/sharing/comments';
 import { layoutFor } from '@/db/sharing/access';
 import { arrangementSchema } from '@/lib/layout/schema';
-import { notifyComment } from '@/lib/mail/notify';
+import { notifyMarkup } from '@/lib/mail/notify';
 
 export const dynamic = 'force-dynamic';
 
 type Ctx = { params: Promise<{ id: string }> };
 
-const text = z.string().trim().min(1, 'write something in the comment').max(COMMENT_MAX, `keep a comment under ${COMMENT_MAX} characters`);
+const text = z.string().trim().min(1, 'write something in the mark-up').max(COMMENT_MAX, `keep a mark-up under ${COMMENT_MAX} characters`);
 const mm = z.number().int('a whole number of millimetres').min(-100_000).max(100_000);
 const commentBody = z.union([
   z.strictObject({ arrangement: arrangementSchema, x: mm, y: mm, body: text }),
-  z.strictObject({ parentId: z.uuid('reply to a comment on this layout'), body: text }),
-], { error: 'send a pin (arrangement, x, y, body) or a reply (parentId, body)' });
+  z.strictObject({ parentId: z.uuid('reply to a mark-up on this layout'), body: text }),
+], { error: 'send a new mark-up (arrangement, x, y, body) or a reply (parentId, body)' });
 
-/** The layout's comment threads, oldest first. */
+/** The layout's mark-up threads, oldest first (the path keeps its first name). */
 export const GET = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   return json({ threads: await listThreads(actor, (await params).id) });
 });
 
-/** Pins a new comment to a point of the plan, or replies in a thread; tells the other side. */
+/** Places a new mark-up at a point of the plan, or replies in a thread; tells the other side. */
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
@@ -30,6 +30,6 @@ export const POST = handle<Ctx>(async (req, { params }) => {
   const body = parseWith(commentBody, await readJson(req, 16 * 1024));
   const input = 'parentId' in body ? { kind: 'reply' as const, ...body } : { kind: 'pin' as const, ...body };
   const { thread, layout, threadAuthorId } = await addComment(actor, id, input);
-  const mail = await notifyComment(req, actor, layout, thread, input.kind === 'reply', threadAuthorId);
+  const mail = await notifyMarkup(req, actor, layout, thread, input.kind === 'reply', threadAuthorId);
   return json({ thread, mail }, { status: 201 });
 });

@@ -3,14 +3,16 @@
  * studio's units and check defaults — for the PDF route and the HTML print view alike (the checks
  * and the drawing itself run in the work pool, lib/workers: job `sheet` / `sheetPdf`), after the rights checks of `getLayout` (404 for anyone who may not see it). The
  * revisions feature can pass a frozen revision (letter and document) to print that instead of
- * the working copy (`?revision=B`). Server only; never trusts a query string beyond its schema.
+ * the layout as it stands (`?revision=B`); the sheet then carries its revision table and clouds
+ * round what changed since the revision before. Server only; never trusts a query string beyond its schema.
  */
 import 'server-only';
 import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
-import { getRevision, revisionIdByLetter } from '@/db/sharing/revisions';
+import { getRevision, listRevisions, revisionIdByLetter, type RevisionDto } from '@/db/sharing/revisions';
+import { diffRevisions } from '@/lib/layout/revision-diff';
 import type { LayoutDoc } from '@/lib/layout';
 import { REVISION_LETTER } from '@/lib/sheet';
 import { formatDate } from '@/lib/format';
@@ -20,7 +22,7 @@ import type { SheetInput } from '@/lib/workers/jobs';
 export const sheetQuerySchema = z.strictObject({
   paper: z.enum(['a4', 'a3'], 'paper is a4 or a3').default('a4'),
   scale: z.enum(['10', '20', '25'], 'scale is 10, 20 or 25 (for 1:10, 1:20, 1:25)').default('20').transform((s) => Number(s) as 10 | 20 | 25),
-  /** An issued revision's letter: print that frozen copy instead of the working copy. */
+  /** An issued revision's letter: print that frozen copy instead of the layout as it stands. */
   revision: z.string().regex(REVISION_LETTER, 'a revision letter, e.g. A or B').optional(),
 });
 export type SheetQuery = z.infer<typeof sheetQuerySchema>;
@@ -33,6 +35,7 @@ export function queryOf(url: string | URLSearchParams): Record<string, string> {
 export interface FrozenRevision {
   letter: string;
   doc: LayoutDoc;
+  state?: RevisionDto['state'];
 }
 
 export interface SheetContext {
@@ -49,7 +52,7 @@ export function today(now = new Date()): string {
 /** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
 export async function frozenRevision(actor: Actor, layoutId: string, letter: string): Promise<FrozenRevision> {
   const rev = await getRevision(actor, layoutId, await revisionIdByLetter(actor, layoutId, letter));
-  return { letter: rev.letter, doc: rev.doc };
+  return { letter: rev.letter, doc: rev.doc, state: rev.state };
 }
 
 export async function sheetRequestFor(actor: Actor, layoutId: string, revision?: FrozenRevision | string): Promise<SheetContext> {
@@ -58,6 +61,7 @@ export async function sheetRequestFor(actor: Actor, layoutId: string, revision?:
   if (revision && !REVISION_LETTER.test(revision.letter)) throw new Error(`not a revision letter: ${revision.letter}`);
   const studio = await getStudio(actor);
   const doc = revision?.doc ?? layout.doc;
+  const { rows, changes } = await revisionMarks(actor, layoutId, revision ?? null);
   return {
     layoutId: layout.id,
     layoutName: layout.name,
@@ -65,9 +69,22 @@ export async function sheetRequestFor(actor: Actor, layoutId: string, revision?:
       doc,
       studioDefaults: studio.checkDefaults,
       units: studio.units,
-      details: { studio: studio.name, client: layout.client?.name ?? null, layout: layout.name, revision: revision?.letter ?? null, date: today() },
+      details: { studio: studio.name, client: layout.client?.name ?? null, layout: layout.name, revision: revision?.letter ?? null, issueState: revision?.state ?? null, date: today() },
+      revisions: rows,
+      changes,
     },
   };
+}
+
+/** The revision table up to the printed revision (all of them for the layout as it stands), and its changes since the one before. */
+async function revisionMarks(actor: Actor, layoutId: string, printed: FrozenRevision | null) {
+  const newestFirst = await listRevisions(actor, layoutId);
+  const oldestFirst = [...newestFirst].reverse();
+  const upTo = printed ? oldestFirst.findIndex((r) => r.letter === printed.letter) : oldestFirst.length - 1;
+  const rows = oldestFirst.slice(0, upTo + 1).map((r) => ({ letter: r.letter, date: formatDate(r.issuedAt), description: r.note, by: r.issuedBy }));
+  const before = printed && upTo > 0 ? oldestFirst[upTo - 1] : null;
+  const changes = printed && before ? { letter: printed.letter, diff: diffRevisions((await getRevision(actor, layoutId, before.id)).doc, printed.doc) } : null;
+  return { rows, changes };
 }
 
 /** A download name like "Nair — L2H2 weekender, plan sheet A4 1-20.pdf". */

@@ -6,11 +6,12 @@ import { currentActor } from '@/lib/auth/session';
 import { layoutFor } from '@/db/sharing/access';
 import { listRevisions } from '@/db/sharing/revisions';
 import { NotFoundError } from '@/db/errors';
+import { getStudio } from '@/db/studios';
 import { RevisionCompare } from '@/components/sharing/RevisionCompare';
 
 export const metadata: Metadata = { title: 'Compare revisions' };
 
-/** Two revisions (or a revision and the current draft) side by side. */
+/** Two revisions (or a revision and the layout as last saved) side by side. */
 export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
@@ -19,7 +20,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
     if (err instanceof NotFoundError) notFound();
     throw err;
   });
-  const revisions = await listRevisions(actor, id);
+  const [revisions, studio] = await Promise.all([listRevisions(actor, id), getStudio(actor)]);
   const letters = revisions.map((r) => r.letter).reverse();
   const sp = await searchParams;
   const pick = (v: string | string[] | undefined, fallback: string) => (typeof v === 'string' && (v === 'current' || letters.includes(v)) ? v : fallback);
@@ -32,7 +33,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
       {letters.length === 0 ? (
         <p className="panel p-6 text-sm text-ink-soft">There are no revisions to compare yet.</p>
       ) : (
-        <RevisionCompare layoutId={id} letters={letters} from={from} to={to} />
+        <RevisionCompare layoutId={id} revisions={revisions} from={from} to={to} units={studio.units} />
       )}
     </main>
   );

@@ -1,5 +1,5 @@
-// Comments pinned to the plan: the workshop and the layout's client pin, reply, resolve and
-// reopen, and change or remove their own; strangers get 404; bad input 400 with nothing stored;
+// Mark-ups on the plan (stored in the comments table): the workshop and the layout's client place
+// them, reply, settle them and open them again, and change or remove their own; strangers get 404; bad input 400 with nothing stored;
 // the other side hears by mail.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { count } from 'drizzle-orm';
@@ -29,7 +29,7 @@ afterAll(() => smtp.close());
 const commentCount = async () => (await db.select({ n: count() }).from(comments))[0].n;
 const pin = { arrangement: 'sleep', x: 1800, y: 600, body: 'Can the bed be 50 mm longer here?' };
 
-describe('pinning comments', () => {
+describe('placing mark-ups', () => {
   it('refuses anonymous (401) and strangers (404) for reading and writing; stores nothing', async () => {
     const params = { id: w.clientLayoutId };
     expect((await call(threads.GET, { params, as: null })).status).toBe(401);
@@ -55,15 +55,15 @@ describe('pinning comments', () => {
     expect(await commentCount()).toBe(0);
   });
 
-  it('lets the client pin a comment in millimetres, and mails the workshop a link to it', async () => {
+  it('lets the client place a mark-up in millimetres, and mails the workshop a link to it', async () => {
     const res = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: w.client, json: pin });
     expect(res.status).toBe(201);
-    expect(res.body.thread).toMatchObject({ arrangement: 'sleep', x: 1800, y: 600, body: pin.body, author: { name: 'Priya Nair', role: 'client', isYou: true }, resolved: null, replies: [] });
+    expect(res.body.thread).toMatchObject({ arrangement: 'sleep', x: 1800, y: 600, body: pin.body, author: { name: 'Priya Nair', role: 'client', isYou: true }, settled: null, replies: [] });
     expect(JSON.stringify(res.body)).not.toContain('@');
     // The layout was made by the designer: the designer hears of it.
     const [mail] = await mailFor(db, 'ivo@saltmarsh.test');
-    expect(mail.parsed.subject).toBe('Priya Nair commented on Nair — L2H2 weekender');
-    expect(linkIn(mail.parsed, '/layouts/').searchParams.get('comment')).toBe(res.body.thread.id);
+    expect(mail.parsed.subject).toBe('Priya Nair left a mark-up on Nair — L2H2 weekender');
+    expect(linkIn(mail.parsed, '/layouts/').searchParams.get('markup')).toBe(res.body.thread.id);
   });
 
   it('lets the designer reply and the client hear of it; replies to replies join the thread', async () => {
@@ -76,36 +76,36 @@ describe('pinning comments', () => {
     expect(nested.body.thread.id).toBe(thread.id);
     expect(nested.body.thread.replies.map((r: { body: string }) => r.body)).toEqual(['Yes, if the kitchen moves forward 50 mm.', 'Fine by me.']);
     const [mail] = await mailFor(db, 'priya@client.test');
-    expect(mail.parsed.subject).toBe('Ivo Brandt replied on Nair — L2H2 weekender');
+    expect(mail.parsed.subject).toBe('Ivo Brandt replied to a mark-up on Nair — L2H2 weekender');
   });
 
-  it('does not let a comment of one layout take replies through another', async () => {
+  it('does not let a mark-up of one layout take replies through another', async () => {
     const [thread] = (await call(threads.GET, { params: { id: w.clientLayoutId }, as: w.designer })).body.threads;
     const res = await call(threads.POST, { method: 'POST', params: { id: w.otherLayoutId }, as: w.designer, json: { parentId: thread.id, body: 'sneaky' } });
     expect(res.status).toBe(400);
   });
 });
 
-describe('resolving threads', () => {
-  it('lets either side resolve and reopen; strangers 404; replies cannot be resolved', async () => {
+describe('settling mark-ups', () => {
+  it('lets either side settle and open again; strangers 404; replies cannot be settled', async () => {
     const [thread] = (await call(threads.GET, { params: { id: w.clientLayoutId }, as: w.client })).body.threads;
     const params = { id: w.clientLayoutId, commentId: thread.id };
     expect(await openThreadCounts([w.clientLayoutId])).toEqual(new Map([[w.clientLayoutId, 1]]));
-    for (const who of STRANGERS) expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: as(w, who), json: { resolved: true } })).status, who).toBe(404);
-    expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: null, json: { resolved: true } })).status).toBe(401);
-    expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: w.client, json: { resolved: 'yes' } })).status).toBe(400);
+    for (const who of STRANGERS) expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: as(w, who), json: { settled: true } })).status, who).toBe(404);
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: null, json: { settled: true } })).status).toBe(401);
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params, as: w.client, json: { settled: 'yes' } })).status).toBe(400);
     const reply = thread.replies[0];
-    expect((await call(oneThread.PATCH, { method: 'PATCH', params: { ...params, commentId: reply.id }, as: w.client, json: { resolved: true } })).status).toBe(400);
-    const resolved = await call(oneThread.PATCH, { method: 'PATCH', params, as: w.client, json: { resolved: true } });
-    expect(resolved.status).toBe(200);
-    expect(resolved.body.thread.resolved).toEqual({ at: expect.any(String) });
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params: { ...params, commentId: reply.id }, as: w.client, json: { settled: true } })).status).toBe(400);
+    const settled = await call(oneThread.PATCH, { method: 'PATCH', params, as: w.client, json: { settled: true } });
+    expect(settled.status).toBe(200);
+    expect(settled.body.thread.settled).toEqual({ at: expect.any(String) });
     expect(await openThreadCounts([w.clientLayoutId])).toEqual(new Map([[w.clientLayoutId, 0]]));
-    const reopened = await call(oneThread.PATCH, { method: 'PATCH', params, as: w.designer, json: { resolved: false } });
-    expect(reopened.body.thread.resolved).toBeNull();
-    expect((await call(oneThread.PATCH, { method: 'PATCH', params: { ...params, id: w.otherLayoutId }, as: w.designer, json: { resolved: true } })).status).toBe(404);
+    const reopened = await call(oneThread.PATCH, { method: 'PATCH', params, as: w.designer, json: { settled: false } });
+    expect(reopened.body.thread.settled).toBeNull();
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params: { ...params, id: w.otherLayoutId }, as: w.designer, json: { settled: true } })).status).toBe(404);
   });
 
-  it('lets the designer pin in any arrangement, and the other client never sees it', async () => {
+  it('lets the designer place a mark-up in any arrangement, and the other client never sees it', async () => {
     const res = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: w.owner, json: { arrangement: 'travel', x: 400, y: 300, body: 'Seat belt anchorage to be confirmed by the workshop (licensed fitter).' } });
     expect(res.status).toBe(201);
     const other = await call(threads.GET, { params: { id: w.otherLayoutId }, as: w.otherClient });
@@ -122,7 +122,7 @@ describe('resolving threads', () => {
   });
 });
 
-describe('changing and removing comments', () => {
+describe('changing and removing mark-ups', () => {
   const params = (commentId: string) => ({ id: w.clientLayoutId, commentId });
   const newThread = async (who: 'client' | 'designer', body: string) => {
     const res = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: as(w, who), json: { ...pin, body } });
@@ -130,14 +130,14 @@ describe('changing and removing comments', () => {
     return res.body.thread as { id: string; body: string };
   };
 
-  it('lets the author change their words, marks the comment edited, and refuses everyone else', async () => {
+  it('lets the author change their words, marks the note edited, and refuses everyone else', async () => {
     const thread = await newThread('client', 'Is the tank 70 l?');
     const edited = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'client'), json: { body: 'Is the fresh tank 70 l or 100 l?' } });
     expect(edited.status).toBe(200);
     expect(edited.body.thread.body).toBe('Is the fresh tank 70 l or 100 l?');
     expect(edited.body.thread.editedAt).toEqual(expect.any(String));
     expect(edited.body.thread.canEdit).toBe(true);
-    // Not the author: the workshop sees it and may resolve it, but not put words in the client's mouth.
+    // Not the author: the workshop sees it and may settle it, but not put words in the client's mouth.
     const byDesigner = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body: 'rewritten' } });
     expect(byDesigner.status).toBe(403);
     for (const who of STRANGERS) {
@@ -155,12 +155,12 @@ describe('changing and removing comments', () => {
       const res = await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body } });
       expect(res.status).toBe(400);
     }
-    expect((await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body: 'x', resolved: true } })).status).toBe(400);
+    expect((await call(oneThread.PATCH, { method: 'PATCH', params: params(thread.id), as: as(w, 'designer'), json: { body: 'x', settled: true } })).status).toBe(400);
     const list = await call(threads.GET, { params: { id: w.clientLayoutId }, as: as(w, 'designer') });
     expect(list.body.threads.find((t: { id: string }) => t.id === thread.id)).toMatchObject({ body: 'Gas locker drains through the floor.', editedAt: null });
   });
 
-  it('lets the author or the owner remove a comment; a first comment takes its thread and replies with it', async () => {
+  it('lets the author or the owner remove a note; a first note takes its thread and replies with it', async () => {
     const before = await commentCount();
     const thread = await newThread('designer', 'Move the heater outlet 100 mm aft.');
     const reply = await call(threads.POST, { method: 'POST', params: { id: w.clientLayoutId }, as: as(w, 'client'), json: { parentId: thread.id, body: 'Fine by me.' } });

@@ -1,14 +1,15 @@
 'use client';
 /**
- * The comments column beside the plan: every thread of the layout, numbered as its pin, with
- * replies, resolve / reopen, changing or removing one's own comments, and the form for a new pin (placed by clicking the plan, or typed
- * as x and y in millimetres for keyboard use). Talks to /api/layouts/[id]/comments through
- * TanStack Query. Must never draw on the canvas (CommentPinsLayer does) nor hold the document.
+ * The Mark-ups list beside the plan: every mark-up thread of the layout, numbered as its keyed
+ * note on the plan, with replies, settling (and opening again), changing or removing one's own
+ * notes, and the form for a new mark-up (its point placed by clicking the plan, or typed as x and
+ * y in millimetres for keyboard use). Talks to /api/layouts/[id]/comments through TanStack Query.
+ * Must never draw on the canvas (MarkupLayer does) nor hold the document.
  */
 import { useState } from 'react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
-import { CheckCircle2, MapPin, MessageSquare, Pencil, RotateCcw, Trash2, X } from 'lucide-react';
+import { CheckCircle2, Hexagon, Pencil, RotateCcw, Trash2, X } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { CommentDto, ThreadDto } from '@/db/sharing/comments';
@@ -17,7 +18,7 @@ import { formatDateTime } from '@/lib/format';
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'travel', lounge: 'lounge', sleep: 'sleep' };
 const ROLE_WORD = { owner: 'workshop', designer: 'workshop', client: 'client' } as const;
 
-export interface PendingPin {
+export interface PendingMarkup {
   arrangement: Arrangement;
   x: number;
   y: number;
@@ -33,17 +34,17 @@ interface Props {
   placing: boolean;
   onStartPlacing: () => void;
   onCancelPlacing: () => void;
-  pending: PendingPin | null;
-  onPendingChange: (p: PendingPin | null) => void;
+  pending: PendingMarkup | null;
+  onPendingChange: (p: PendingMarkup | null) => void;
   onClose: () => void;
 }
 
-export function CommentsPanel(p: Props) {
+export function MarkupsPanel(p: Props) {
   const qc = useQueryClient();
-  const key = ['comments', p.layoutId];
+  const key = ['markups', p.layoutId];
   const refresh = () => qc.invalidateQueries({ queryKey: key });
   const [draft, setDraft] = useState('');
-  const [showResolved, setShowResolved] = useState(false);
+  const [showSettled, setShowSettled] = useState(false);
 
   const create = useMutation({
     mutationFn: (body: Record<string, unknown>) => apiFetch<{ thread: ThreadDto }>(`/api/layouts/${p.layoutId}/comments`, { method: 'POST', json: body }),
@@ -52,21 +53,21 @@ export function CommentsPanel(p: Props) {
       p.onPendingChange(null);
       p.onActivate(thread.id);
       refresh();
-      toast.success('Comment pinned');
+      toast.success('Mark-up placed');
     },
     onError: (err) => toast.error(err.message),
   });
 
-  const visible = p.threads.filter((t) => showResolved || !t.resolved || t.id === p.activeId);
-  const resolvedCount = p.threads.filter((t) => t.resolved).length;
+  const visible = p.threads.filter((t) => showSettled || !t.settled || t.id === p.activeId);
+  const settledCount = p.threads.filter((t) => t.settled).length;
 
   return (
-    <aside className="flex w-72 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Comments" data-testid="comments-panel">
+    <aside className="flex w-72 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Mark-ups" data-testid="markups-panel">
       <div className="flex items-center gap-2 border-b border-paper-edge px-3 py-2">
-        <MessageSquare size={14} aria-hidden="true" />
-        <h2 className="text-sm font-semibold">Comments</h2>
-        <span className="font-mono text-xs text-ink-soft">{p.threads.filter((t) => !t.resolved).length} open</span>
-        <button type="button" className="ml-auto rounded-sm p-1 text-ink-soft hover:text-ink" aria-label="Close comments" onClick={p.onClose}><X size={14} /></button>
+        <Hexagon size={14} aria-hidden="true" />
+        <h2 className="text-sm font-semibold">Mark-ups</h2>
+        <span className="font-mono text-xs text-ink-soft">{p.threads.filter((t) => !t.settled).length} open</span>
+        <button type="button" className="ml-auto rounded-sm p-1 text-ink-soft hover:text-ink" aria-label="Close mark-ups" onClick={p.onClose}><X size={14} /></button>
       </div>
 
       <div className="border-b border-paper-edge p-3">
@@ -80,7 +81,7 @@ export function CommentsPanel(p: Props) {
             }}
           >
             <p className="text-xs text-ink-soft">
-              New pin in the <strong>{ARRANGEMENT_WORD[p.pending.arrangement]}</strong> arrangement
+              New mark-up in the <strong>{ARRANGEMENT_WORD[p.pending.arrangement]}</strong> arrangement
             </p>
             <div className="grid grid-cols-2 gap-2">
               {(['x', 'y'] as const).map((axis) => (
@@ -96,32 +97,32 @@ export function CommentsPanel(p: Props) {
                 </label>
               ))}
             </div>
-            <label className="label" htmlFor="new-comment">Comment</label>
-            <textarea id="new-comment" className="field min-h-20" value={draft} onChange={(e) => setDraft(e.target.value)} maxLength={2000} required autoFocus />
+            <label className="label" htmlFor="new-markup">Note</label>
+            <textarea id="new-markup" className="field min-h-20" value={draft} onChange={(e) => setDraft(e.target.value)} maxLength={2000} required autoFocus />
             <div className="flex gap-2">
-              <button type="submit" className="btn-primary" disabled={create.isPending || !draft.trim()}>{create.isPending ? 'Pinning…' : 'Pin comment'}</button>
+              <button type="submit" className="btn-primary" disabled={create.isPending || !draft.trim()}>{create.isPending ? 'Placing…' : 'Place mark-up'}</button>
               <button type="button" className="btn-quiet" onClick={() => { p.onPendingChange(null); setDraft(''); }}>Cancel</button>
             </div>
           </form>
         ) : p.placing ? (
           <div className="space-y-2 text-sm" role="status">
-            <p>Click the plan where the comment belongs.</p>
+            <p>Click the point of the plan the note is about.</p>
             <button type="button" className="btn-quiet" onClick={p.onCancelPlacing}>Cancel</button>
           </div>
         ) : (
           <button type="button" className="btn-primary w-full" onClick={p.onStartPlacing}>
-            <MapPin size={14} aria-hidden="true" /> Add a comment
+            <Hexagon size={14} aria-hidden="true" /> Add a mark-up
           </button>
         )}
       </div>
 
       <div className="min-h-0 flex-1 overflow-y-auto">
         {p.loading ? (
-          <p className="p-3 text-sm text-ink-soft" role="status">Loading comments…</p>
+          <p className="p-3 text-sm text-ink-soft" role="status">Loading mark-ups…</p>
         ) : p.error ? (
-          <p className="p-3 text-sm text-brick" role="alert">Could not load comments: {p.error}</p>
+          <p className="p-3 text-sm text-brick" role="alert">Could not load the mark-ups: {p.error}</p>
         ) : p.threads.length === 0 ? (
-          <p className="p-3 text-sm text-ink-soft">No comments yet. Pin one to a spot on the plan.</p>
+          <p className="p-3 text-sm text-ink-soft">No mark-ups yet. Add one and click the point of the plan it is about.</p>
         ) : (
           <ol className="divide-y divide-paper-edge">
             {visible.map((t) => (
@@ -129,10 +130,10 @@ export function CommentsPanel(p: Props) {
             ))}
           </ol>
         )}
-        {resolvedCount > 0 && (
+        {settledCount > 0 && (
           <label className="flex items-center gap-2 p-3 text-xs text-ink-soft">
-            <input type="checkbox" className="accent-copper" checked={showResolved} onChange={(e) => setShowResolved(e.target.checked)} />
-            Show {resolvedCount} resolved
+            <input type="checkbox" className="accent-copper" checked={showSettled} onChange={(e) => setShowSettled(e.target.checked)} />
+            Show {settledCount} settled
           </label>
         )}
       </div>
@@ -147,32 +148,36 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
     onSuccess: () => { setReply(''); onChanged(); },
     onError: (err) => toast.error(err.message),
   });
-  const resolve = useMutation({
-    mutationFn: (resolved: boolean) => apiFetch(`/api/layouts/${layoutId}/comments/${thread.id}`, { method: 'PATCH', json: { resolved } }),
+  const settle = useMutation({
+    mutationFn: (settled: boolean) => apiFetch(`/api/layouts/${layoutId}/comments/${thread.id}`, { method: 'PATCH', json: { settled } }),
     onSuccess: onChanged,
     onError: (err) => toast.error(err.message),
   });
   return (
-    <li className={`p-3 text-sm ${active ? 'bg-copper-light/40' : ''}`} data-testid="comment-thread" data-thread-id={thread.id}>
+    <li className={`p-3 text-sm ${active ? 'bg-copper-light/40' : ''}`} data-testid="markup-thread" data-thread-id={thread.id} data-settled={thread.settled ? 'yes' : 'no'}>
       <button type="button" className="flex w-full items-start gap-2 text-left" onClick={() => onActivate(active ? null : thread.id)} aria-expanded={active}>
-        <span className={`mt-0.5 inline-flex h-5 w-5 shrink-0 items-center justify-center rounded-full font-mono text-xs ${thread.resolved ? 'border border-copper text-copper' : 'bg-copper text-paper'}`}>{number}</span>
+        <KeyedNumber number={number} settled={!!thread.settled} />
         <span className="min-w-0 flex-1">
           <span className="block whitespace-pre-wrap break-words">{thread.body}</span>
           <span className="mt-1 block text-xs text-ink-soft">
             {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {formatDateTime(thread.createdAt)}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
             <span className="font-mono">x {thread.x} mm, y {thread.y} mm</span>
           </span>
-          {thread.resolved && <span className="mt-1 inline-flex items-center gap-1 text-xs text-moss"><CheckCircle2 size={12} aria-hidden="true" /> Resolved</span>}
+          {thread.settled ? (
+            <span className="mt-1 inline-flex items-center gap-1 text-xs text-moss"><CheckCircle2 size={12} aria-hidden="true" /> Settled</span>
+          ) : (
+            <span className="mt-1 inline-flex items-center gap-1 text-xs text-copper-dark">Open</span>
+          )}
         </span>
       </button>
       {active && (
         <div className="mt-2 space-y-2 pl-7">
-          <OwnCommentControls layoutId={layoutId} comment={thread} first onChanged={onChanged} onRemoved={() => { onActivate(null); onChanged(); }} />
+          <OwnNoteControls layoutId={layoutId} note={thread} first onChanged={onChanged} onRemoved={() => { onActivate(null); onChanged(); }} />
           {thread.replies.map((r) => (
-            <div key={r.id} className="border-l-2 border-paper-edge pl-2" data-testid="comment-reply">
+            <div key={r.id} className="border-l-2 border-paper-edge pl-2" data-testid="markup-reply">
               <p className="whitespace-pre-wrap break-words">{r.body}</p>
               <p className="text-xs text-ink-soft">{r.author.name} ({ROLE_WORD[r.author.role]}) · {formatDateTime(r.createdAt)}{r.editedAt ? ' · edited' : ''}</p>
-              <OwnCommentControls layoutId={layoutId} comment={r} onChanged={onChanged} onRemoved={onChanged} />
+              <OwnNoteControls layoutId={layoutId} note={r} onChanged={onChanged} onRemoved={onChanged} />
             </div>
           ))}
           <form className="space-y-1" onSubmit={(e) => { e.preventDefault(); send.mutate(); }}>
@@ -180,10 +185,10 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
             <textarea id={`reply-${thread.id}`} className="field min-h-14" placeholder="Reply…" value={reply} onChange={(e) => setReply(e.target.value)} maxLength={2000} />
             <div className="flex flex-wrap gap-2">
               <button type="submit" className="btn-quiet" disabled={send.isPending || !reply.trim()}>Reply</button>
-              {thread.resolved ? (
-                <button type="button" className="btn-quiet" onClick={() => resolve.mutate(false)} disabled={resolve.isPending}><RotateCcw size={12} aria-hidden="true" /> Reopen</button>
+              {thread.settled ? (
+                <button type="button" className="btn-quiet" onClick={() => settle.mutate(false)} disabled={settle.isPending}><RotateCcw size={12} aria-hidden="true" /> Mark open again</button>
               ) : (
-                <button type="button" className="btn-quiet" onClick={() => resolve.mutate(true)} disabled={resolve.isPending}><CheckCircle2 size={12} aria-hidden="true" /> Resolve</button>
+                <button type="button" className="btn-quiet" onClick={() => settle.mutate(true)} disabled={settle.isPending}><CheckCircle2 size={12} aria-hidden="true" /> Mark settled</button>
               )}
             </div>
           </form>
@@ -193,33 +198,45 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
   );
 }
 
-/** Edit and Remove for a comment the caller may change; nothing at all for others' comments. */
-function OwnCommentControls({ layoutId, comment, first = false, onChanged, onRemoved }: { layoutId: string; comment: CommentDto; first?: boolean; onChanged: () => void; onRemoved: () => void }) {
+/** The mark-up's number in the same hexagon as on the plan: filled while open, hollow once settled. */
+function KeyedNumber({ number, settled }: { number: number; settled: boolean }) {
+  return (
+    <span className="relative mt-0.5 inline-flex h-6 w-6 shrink-0 items-center justify-center" aria-label={`Mark-up ${number}`}>
+      <svg viewBox="-12 -12 24 24" className="absolute inset-0 h-6 w-6" aria-hidden="true">
+        <polygon points="11,0 5.5,9.5 -5.5,9.5 -11,0 -5.5,-9.5 5.5,-9.5" className={settled ? 'fill-paper stroke-ink-soft' : 'fill-copper stroke-copper-dark'} strokeWidth={1.4} />
+      </svg>
+      <span className={`relative font-mono text-xs ${settled ? 'text-ink-soft' : 'text-paper'}`}>{number}</span>
+    </span>
+  );
+}
+
+/** Edit and Remove for a note the caller may change; nothing at all for others' notes. */
+function OwnNoteControls({ layoutId, note, first = false, onChanged, onRemoved }: { layoutId: string; note: CommentDto; first?: boolean; onChanged: () => void; onRemoved: () => void }) {
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
-  const [text, setText] = useState(comment.body);
-  const url = `/api/layouts/${layoutId}/comments/${comment.id}`;
+  const [text, setText] = useState(note.body);
+  const url = `/api/layouts/${layoutId}/comments/${note.id}`;
   const save = useMutation({
     mutationFn: () => apiFetch(url, { method: 'PATCH', json: { body: text } }),
-    onSuccess: () => { setEditing(false); onChanged(); toast.success('Comment changed'); },
+    onSuccess: () => { setEditing(false); onChanged(); toast.success('Mark-up changed'); },
     onError: (err) => toast.error(err.message),
   });
   const remove = useMutation({
     mutationFn: () => apiFetch(url, { method: 'DELETE' }),
-    onSuccess: () => { setConfirming(false); onRemoved(); toast.success(first ? 'Thread removed' : 'Reply removed'); },
+    onSuccess: () => { setConfirming(false); onRemoved(); toast.success(first ? 'Mark-up removed' : 'Reply removed'); },
     onError: (err) => toast.error(err.message),
   });
-  if (!comment.canEdit && !comment.canDelete) return null;
-  const what = first ? 'comment' : 'reply';
+  if (!note.canEdit && !note.canDelete) return null;
+  const what = first ? 'mark-up' : 'reply';
   if (editing) {
     return (
       <form className="space-y-1" onSubmit={(e) => { e.preventDefault(); save.mutate(); }}>
-        <label className="sr-only" htmlFor={`edit-${comment.id}`}>Change your {what}</label>
-        <textarea id={`edit-${comment.id}`} className="field min-h-14" value={text} onChange={(e) => setText(e.target.value)} maxLength={2000} autoFocus
-          onKeyDown={(e) => { if (e.key === 'Escape') { setEditing(false); setText(comment.body); } }} />
+        <label className="sr-only" htmlFor={`edit-${note.id}`}>Change your {what}</label>
+        <textarea id={`edit-${note.id}`} className="field min-h-14" value={text} onChange={(e) => setText(e.target.value)} maxLength={2000} autoFocus
+          onKeyDown={(e) => { if (e.key === 'Escape') { setEditing(false); setText(note.body); } }} />
         <div className="flex gap-2">
           <button type="submit" className="btn-quiet" disabled={save.isPending || !text.trim()}>{save.isPending ? 'Saving…' : 'Save'}</button>
-          <button type="button" className="btn-quiet" onClick={() => { setEditing(false); setText(comment.body); }}>Cancel</button>
+          <button type="button" className="btn-quiet" onClick={() => { setEditing(false); setText(note.body); }}>Cancel</button>
         </div>
       </form>
     );
@@ -227,7 +244,7 @@ function OwnCommentControls({ layoutId, comment, first = false, onChanged, onRem
   if (confirming) {
     return (
       <div className="flex flex-wrap items-center gap-2 text-xs" role="group" aria-label={`Remove this ${what}?`}>
-        <span>{first ? 'Remove this thread and its replies?' : 'Remove this reply?'}</span>
+        <span>{first ? 'Remove this mark-up and its replies?' : 'Remove this reply?'}</span>
         <button type="button" className="btn-quiet text-brick" onClick={() => remove.mutate()} disabled={remove.isPending} autoFocus>Remove</button>
         <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>Keep</button>
       </div>
@@ -235,12 +252,12 @@ function OwnCommentControls({ layoutId, comment, first = false, onChanged, onRem
   }
   return (
     <div className="flex gap-2 text-xs">
-      {comment.canEdit && (
+      {note.canEdit && (
         <button type="button" className="inline-flex items-center gap-1 text-ink-soft hover:text-ink" onClick={() => setEditing(true)} aria-label={`Edit your ${what}`}>
           <Pencil size={12} aria-hidden="true" /> Edit
         </button>
       )}
-      {comment.canDelete && (
+      {note.canDelete && (
         <button type="button" className="inline-flex items-center gap-1 text-ink-soft hover:text-brick" onClick={() => setConfirming(true)} aria-label={`Remove this ${what}`}>
           <Trash2 size={12} aria-hidden="true" /> Remove
         </button>
