@@ -51,7 +51,7 @@ export function pvwattsLosses(parts: PvwattsLossParts = PVWATTS_DEFAULT_LOSS_PAR
 /** The PVWatts default total, % (≈ 14.08). */
 export const PVWATTS_DEFAULT_LOSSES_PCT = pvwattsLosses();
 
-export const SOLAR_LOSS_SOURCE = 'System losses 14.08 %: A. P. Dobos, PVWatts Version 5 Manual, NREL Technical Report NREL/TP-6A20-62641 (2014) (secondary: figures as reproduced from the report)';
+export const SOLAR_LOSS_SOURCE = 'System losses 14.08 %: the ten default losses multiplied together, A. P. Dobos, NREL Technical Report NREL/TP-6A20-62641 (2014) (secondary: figures as reproduced from the report)';
 
 /**
  * Daily energy from the array, Wh: nameplate W × peak sun hours × (1 − losses). Peak sun hours are
