@@ -10,23 +10,28 @@ import { startTestServer, stopProcessGroup, type TestServer } from '../../script
 import { DEMO_PASSWORD } from '../../lib/demo-accounts';
 
 const PORT = 3311;
-const DB = 'system-connection';
-let server: TestServer | undefined;
 
-async function restart(env: Record<string, string>, fresh = false): Promise<TestServer> {
-  if (server) await stopProcessGroup(server.process);
-  server = await startTestServer({ port: PORT, db: DB, seed: fresh, fresh, quiet: true, env });
-  return server;
+/** Each block runs its own server (own port and folder), started once and stopped after it. */
+function serverFor(env: Record<string, string>, port: number, db: string) {
+  const box: { server?: TestServer } = {};
+  beforeAll(async () => {
+    box.server = await startTestServer({ port, db, seed: true, fresh: true, quiet: true, env });
+  }, 180_000);
+  afterAll(async () => {
+    if (box.server) await stopProcessGroup(box.server.process);
+  });
+  return () => box.server!;
 }
 
-afterAll(async () => {
-  if (server) await stopProcessGroup(server.process);
-});
-
-/** 61 viewer requests, one past the burst; each may say it comes from somewhere else. */
+/**
+ * 200 viewer requests, each of which may say it comes from somewhere else. One bucket (a burst of
+ * 60, refilled at 5 a second) runs dry well before the end however slow the machine; 200 buckets
+ * of one request each never do.
+ */
+const BURST = 200;
 async function burst(base: string, forwardedFor: (i: number) => string | null): Promise<number[]> {
   const statuses: number[] = [];
-  for (let i = 0; i < 61; i++) {
+  for (let i = 0; i < BURST; i++) {
     const xff = forwardedFor(i);
     const res = await fetch(`${base}/api/v/no-such-link-${i}`, { headers: xff ? { 'x-forwarded-for': xff } : {} });
     statuses.push(res.status);
@@ -52,48 +57,44 @@ async function sessionSetCookie(base: string, headers: Record<string, string>): 
 }
 
 describe('without a trusted proxy', () => {
-  beforeAll(async () => {
-    await restart({ TRUST_PROXY: '' }, true);
-  }, 180_000);
+  const server = serverFor({ TRUST_PROXY: '' }, PORT, 'system-connection');
 
   it('a caller-set X-Forwarded-For does not choose the rate-limit bucket', async () => {
-    const statuses = await burst(server!.url, (i) => `203.0.113.${i}`);
+    const statuses = await burst(server().url, (i) => `203.0.113.${i}`);
     expect(statuses.slice(0, 60).every((s) => s === 404)).toBe(true);
-    expect(statuses[60]).toBe(429);
+    expect(statuses).toContain(429);
   });
 
   it('X-Forwarded-Proto: https from the caller brings neither HSTS nor a __Secure- cookie', async () => {
-    const res = await fetch(`${server!.url}/api/health`, { headers: { 'x-forwarded-proto': 'https' } });
+    const res = await fetch(`${server().url}/api/health`, { headers: { 'x-forwarded-proto': 'https' } });
     expect(res.headers.get('strict-transport-security')).toBeNull();
-    const cookie = await sessionSetCookie(server!.url, { 'x-forwarded-proto': 'https' });
+    const cookie = await sessionSetCookie(server().url, { 'x-forwarded-proto': 'https' });
     expect(cookie).toMatch(/^authjs\.session-token=/);
     expect(cookie).not.toMatch(/;\s*Secure/i);
   });
 });
 
 describe('with TRUST_PROXY=1 (one proxy in front)', () => {
-  beforeAll(async () => {
-    await restart({ TRUST_PROXY: '1' });
-  }, 180_000);
+  const server = serverFor({ TRUST_PROXY: '1' }, PORT + 1, 'system-connection-proxy');
 
   it('the proxy-reported address chooses the bucket', async () => {
-    const spread = await burst(server!.url, (i) => `198.51.100.${i}`);
+    const spread = await burst(server().url, (i) => `198.51.100.${i}`);
     expect(spread.every((s) => s === 404)).toBe(true);
     // The proxy appends the client last; an address the client put in front of it is not trusted.
-    const one = await burst(server!.url, (i) => `10.0.0.${i}, 192.0.2.7`);
+    const one = await burst(server().url, (i) => `10.0.0.${i}, 192.0.2.7`);
     expect(one.slice(0, 60).every((s) => s === 404)).toBe(true);
-    expect(one[60]).toBe(429);
+    expect(one).toContain(429);
   });
 
   it('X-Forwarded-Proto: https from the proxy brings HSTS and a Secure __Secure- session cookie; http brings neither', async () => {
-    const https = await fetch(`${server!.url}/api/health`, { headers: { 'x-forwarded-proto': 'https' } });
+    const https = await fetch(`${server().url}/api/health`, { headers: { 'x-forwarded-proto': 'https' } });
     expect(https.headers.get('strict-transport-security')).toMatch(/max-age=\d+/);
-    const plain = await fetch(`${server!.url}/api/health`, { headers: { 'x-forwarded-proto': 'http' } });
+    const plain = await fetch(`${server().url}/api/health`, { headers: { 'x-forwarded-proto': 'http' } });
     expect(plain.headers.get('strict-transport-security')).toBeNull();
-    const secure = await sessionSetCookie(server!.url, { 'x-forwarded-proto': 'https' });
+    const secure = await sessionSetCookie(server().url, { 'x-forwarded-proto': 'https' });
     expect(secure).toMatch(/^__Secure-authjs\.session-token=/);
     expect(secure).toMatch(/;\s*Secure/i);
-    const insecure = await sessionSetCookie(server!.url, { 'x-forwarded-proto': 'http' });
+    const insecure = await sessionSetCookie(server().url, { 'x-forwarded-proto': 'http' });
     expect(insecure).toMatch(/^authjs\.session-token=/);
   });
 });
