@@ -22,7 +22,7 @@ test('pages load with no CSP violation and carry the security headers', async ({
   // 12 h at most (OWASP ASVS 4.0 §3.3: idle and absolute session limits).
   expect(cookie!.expires * 1000 - Date.now()).toBeLessThanOrEqual(12 * 3600 * 1000 + 60_000);
 
-  await page.getByRole('link', { name: 'Nair — L2H2 weekender' }).click();
+  await page.getByRole('link', { name: 'Nair — L2H2 weekender' }).first().click();
   await page.waitForURL(/\/layouts\/[0-9a-f-]{36}$/);
   await page.locator('canvas').first().waitFor();
   await page.goto('/settings');
