@@ -29,7 +29,7 @@ const numberIn = async (page: Page, field: string) => Number(await detail(page, 
 test.describe('layout editor', () => {
   // FIXME(next session): times out on a checkbox after the lazy-loading and renaming merges;
   // the keyboard, zoom and read-only flows below still cover placing, moving and undo.
-  test.fixme('place by drag, move with the mouse, sleep findings follow, undo, saved after reload', async ({ page }) => {
+  test('place by drag, move with the mouse, sleep findings follow, undo, saved after reload', async ({ page }) => {
     await signIn(page, 'ivo@saltmarsh.test');
     await openLayout(page, STOCK);
     const { plan, box, scale, at } = await planGeometry(page);
@@ -60,7 +60,7 @@ test.describe('layout editor', () => {
 
     // Sleep: no bed yet, so the bed-length finding warns; placing a bed turns it to a pass.
     await page.getByTestId('arrangement-sleep').click();
-    await page.getByLabel('show passes').check();
+    await page.getByLabel('show what meets').check();
     const sleepLength = page.locator('[data-finding="sleep.length"][data-arrangement="sleep"]').first();
     await expect(sleepLength).toHaveAttribute('data-status', 'warn');
     await page.locator('[data-kind="bed-platform"]').click();

@@ -9,7 +9,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestServer, stopProcessGroup, type TestServer } from '../../scripts/lib/test-server';
 import { DEMO_PASSWORD } from '../../lib/demo-accounts';
 
-const PORT = 3311;
+/** The system tests' port (`SYSTEM_TEST_PORT`, as in crash.test.ts) and the one after it. */
+const PORT = Number(process.env.SYSTEM_TEST_PORT ?? 3291);
 
 /** Each block runs its own server (own port and folder), started once and stopped after it. */
 function serverFor(env: Record<string, string>, port: number, db: string) {
