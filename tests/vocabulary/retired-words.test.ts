@@ -64,8 +64,6 @@ function saidIn(file: string): Said[] {
 interface Retired {
   what: string;
   pattern: RegExp;
-  /** Renames still on another branch: switch the entry on (delete this) once they are merged. */
-  pendingOn?: 'voice' | 'numbers';
   /** Files where the pattern is a legitimate use (data ids, a name the user typed). */
   allow?: RegExp;
 }
@@ -105,25 +103,13 @@ describe('retired words', () => {
 
   for (const r of RETIRED) {
     const hits = () => said.filter((s) => r.pattern.test(s.text) && !(r.allow && r.allow.test(s.file))).map((s) => `${s.file}:${s.line}: ${s.text.slice(0, 120)}`);
-    if (r.pendingOn) it.todo(`${r.what} (switch on after the ${r.pendingOn} renames are merged)`);
-    else it(`never shows ${r.what}`, () => expect(hits()).toEqual([]));
+    it(`never shows ${r.what}`, () => expect(hits()).toEqual([]));
   }
 
   it('catches a retired word when one is put back', () => {
     const sample: Said[] = [{ file: 'components/x.tsx', line: 1, text: '2 Pass, 1 FAIL' }, { file: 'components/x.tsx', line: 2, text: 'walkway.width' }];
-    expect(RETIRED.filter((r) => !r.pendingOn && sample.some((s) => r.pattern.test(s.text))).map((r) => r.what)).toEqual([
+    expect(RETIRED.filter((r) => sample.some((s) => r.pattern.test(s.text))).map((r) => r.what)).toEqual([
       'PASS/WARN/FAIL as display words', 'a rule id printed as a code',
     ]);
   });
 });
-
-/** For the lead: `RETIRED_PENDING=1 npx vitest run tests/vocabulary` lists what the pending entries still find. */
-if (process.env.RETIRED_PENDING) {
-  describe('pending retired words (report only)', () => {
-    for (const r of RETIRED.filter((x) => x.pendingOn)) {
-      it(`${r.what} [${r.pendingOn}]`, () => {
-        expect(said.filter((s) => r.pattern.test(s.text) && !(r.allow && r.allow.test(s.file))).map((s) => `${s.file}:${s.line}: ${s.text.slice(0, 120)}`)).toEqual([]);
-      });
-    }
-  });
-}
