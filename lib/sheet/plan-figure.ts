@@ -24,6 +24,24 @@ export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
  */
 export const HATCH_MODULE_LIMIT = 300;
 
+/**
+ * Modules one figure (a plan or the section) draws, the first by schedule number (common practice,
+ * no source: a van holds tens of modules, and a thousand already fill a plan edge to edge). Beyond
+ * it a note under the figure says how many more are left out, so a layout of thousands of modules
+ * cannot make a sheet that takes seconds to draw or megabytes to send.
+ */
+export const FIGURE_MODULE_LIMIT = 1000;
+
+/** The modules a figure draws (in schedule order) and how many it leaves out. */
+export function drawnModules<M>(modules: M[]): { drawn: M[]; leftOut: number } {
+  return { drawn: modules.slice(0, FIGURE_MODULE_LIMIT), leftOut: Math.max(0, modules.length - FIGURE_MODULE_LIMIT) };
+}
+
+/** The note under a figure that leaves modules out. */
+export function leftOutNote(count: number, leftOut: number, figure: 'plan' | 'section'): string {
+  return `Only the first ${count - leftOut} of ${count} modules are drawn; ${leftOut} more are left out of this ${figure}.`;
+}
+
 export const ARRANGEMENT_CAPTION: Record<Arrangement, string> = {
   travel: 'Travel: driving, belted seats in use',
   lounge: 'Lounge: parked, daytime',
@@ -75,7 +93,9 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   // Modules present in this arrangement.
   const numbers = scheduleNumbers(doc);
   // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top.
-  const present = doc.modules.filter((m) => m.arrangements.includes(arrangement)).sort((a, b) => a.elevation - b.elevation);
+  const inArrangement = doc.modules.filter((m) => m.arrangements.includes(arrangement));
+  const { drawn, leftOut } = drawnModules(inArrangement);
+  const present = drawn.sort((a, b) => a.elevation - b.elevation);
   for (const m of present) {
     items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0, doc.modules.length <= HATCH_MODULE_LIMIT));
   }
@@ -94,10 +114,11 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   items.push(...dimension({ from: [bx, by], to: [bx, by + W], offset: 9, text: formatLength(bay.width, units), tag: `dimension:bay-width:${arrangement}` }));
 
   // Caption.
-  const count = doc.modules.filter((m) => m.arrangements.includes(arrangement)).length;
+  const count = inArrangement.length;
   items.push({ type: 'text', x: bx, y: by + W + 6.5, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
   const note = doc.modules.length > HATCH_MODULE_LIMIT ? ' · hatching left out (many modules)' : '';
   items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'}${note} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
+  if (leftOut > 0) items.push({ type: 'text', x: bx, y: by + W + 9.3, text: leftOutNote(count, leftOut, 'plan'), size: TYPE.small, ink: 'soft' });
   return items;
 }
 
@@ -148,8 +169,16 @@ function drawModule(m: Module, x: number, y: number, w: number, h: number, numbe
       { type: 'text', x: x + 0.8, y: y + 2.6, text: String(number), size: TYPE.small, font: 'sans-bold', ink: 'soft' },
     ];
   }
+  const outline = family === 'electrics' ? { stroke: 'ink' as const, width: LINE.medium, dash: [0.4, 0.6] as [number, number] } : { stroke: 'ink' as const, width: LINE.medium };
+  if (!hatched) {
+    // Nothing goes between the white ground and the outline: one rectangle, filled then stroked.
+    const items: SheetItem[] = [{ type: 'rect', x, y, w, h, fill: 'white', ...outline }];
+    if (family === 'gas' && w > 1.6 && h > 1.6) items.push({ type: 'rect', x: x + 0.6, y: y + 0.6, w: w - 1.2, h: h - 1.2, stroke: 'ink', width: LINE.thin });
+    items.push(...numberTag(m, x, y, w, h, number));
+    return items;
+  }
   const items: SheetItem[] = [{ type: 'rect', x, y, w, h, fill: 'white' }];
-  switch (hatched ? family : 'none') {
+  switch (family) {
     case 'timber':
       items.push(...hatch(x, y, w, h, 1.4, 45, 'faint'));
       break;
@@ -159,11 +188,10 @@ function drawModule(m: Module, x: number, y: number, w: number, h: number, numbe
     default:
       break;
   }
-  if (family === 'electrics') items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: [0.4, 0.6] });
-  else items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
+  items.push({ type: 'rect', x, y, w, h, ...outline });
   if (family === 'gas' && w > 1.6 && h > 1.6) items.push({ type: 'rect', x: x + 0.6, y: y + 0.6, w: w - 1.2, h: h - 1.2, stroke: 'ink', width: LINE.thin });
   // The kind's symbol, from the table the editor draws too.
-  if (hatched) items.push(...symbolItems(m, x, y, w / m.length));
+  items.push(...symbolItems(m, x, y, w / m.length));
   items.push(...numberTag(m, x, y, w, h, number));
   return items;
 }

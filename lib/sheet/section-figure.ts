@@ -9,7 +9,7 @@ import { formatLength } from '../layout/units';
 import type { LayoutDoc, LengthUnit } from '../layout';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
-import { HATCH_MODULE_LIMIT, scheduleNumbers, thickness } from './plan-figure';
+import { drawnModules, HATCH_MODULE_LIMIT, leftOutNote, scheduleNumbers, thickness } from './plan-figure';
 import type { SheetItem } from './primitives';
 
 export const SECTION_MARGIN = { left: 13, top: 6, right: 16, bottom: 10 } as const;
@@ -58,7 +58,9 @@ export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: numbe
 
   // Modules as height bands; sleep-only ones dashed.
   const numbers = scheduleNumbers(doc);
-  const ordered = [...doc.modules].sort((a, b) => Number(dayModule(b)) - Number(dayModule(a)));
+  const { drawn, leftOut } = drawnModules(doc.modules);
+  const hatched = doc.modules.length <= HATCH_MODULE_LIMIT;
+  const ordered = drawn.sort((a, b) => Number(dayModule(b)) - Number(dayModule(a)));
   for (const m of ordered) {
     const x = bx + s(m.x);
     const bottom = floorT + m.elevation;
@@ -67,8 +69,8 @@ export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: numbe
     const h = s(m.height);
     if (dayModule(m)) {
       items.push({ type: 'rect', x, y, w, h, fill: 'white', stroke: 'ink', width: LINE.medium });
-      if (doc.modules.length <= HATCH_MODULE_LIMIT) items.push(...hatch(x, y, w, h, 1.6, 45, 'faint'));
-      items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
+      // The outline again over the hatching (without hatching the first one is already on top).
+      if (hatched) items.push(...hatch(x, y, w, h, 1.6, 45, 'faint'), { type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium });
     } else {
       items.push({ type: 'rect', x, y, w, h, stroke: 'soft', width: LINE.thin, dash: [1, 0.7] });
     }
@@ -98,6 +100,7 @@ export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: numbe
 
   items.push({ type: 'text', x: bx, y: zy(0) + 6.5, text: 'Side section along the length', size: TYPE.caption, font: 'sans-bold' });
   items.push({ type: 'text', x: bx + L, y: zy(0) + 6.5, text: `lounge solid, sleep-only dashed · 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
+  if (leftOut > 0) items.push({ type: 'text', x: bx, y: zy(0) + 9.3, text: leftOutNote(doc.modules.length, leftOut, 'section'), size: TYPE.small, ink: 'soft' });
   return items;
 }
 
