@@ -12,6 +12,7 @@ import path from 'node:path';
  */
 const PURE_FOLDERS = ['geometry', 'checks', 'layout', 'planning', 'editor', 'fakes', 'adapters'];
 const PURE_FILES = [
+  'sheet/bounded',
   'sheet/compose',
   'sheet/layout-file',
   'sheet/paper',

@@ -2,13 +2,17 @@
  * Hostile layouts through every route that runs checks, draws a plan sheet or compares revisions:
  * all modules on one spot, 5,000 modules, 5,000 modules overlapping in sleep, the most build-up
  * layers, the most doors and arches (tests/hardening/fixtures/adversarial-layouts.ts). Every answer
- * is bounded: it comes within the work pool's job time limit (15 s; past it the pool answers 503
- * with Retry-After rather than running on), JSON answers and PDFs stay under 2 MB, and the heap
- * stays under 512 MB (each pool worker is capped at that too). Before the overlap rule was
- * bounded, the first layout ran the process out of heap through every one of these routes.
- *
- * The 2 s goal per route is measured, not asserted, by `npm run bench:hostile` (bench/hostile.ts):
- * this machine is shared, and under load a job may reach the time limit and get 503.
+ * is bounded:
+ * - it is a real answer: 200 (a sheet whose bay fits no paper: 422 with the reason), never the
+ *   503 the work pool gives when a job runs past its time limit or a worker dies at its 512 MB
+ *   heap cap (BAYWRIGHT_WORKER_HEAP_MB) — so a strict status is also the workers' heap check;
+ * - JSON answers, PDFs and the print view's SVG markup are under 2 MB, and this process's heap
+ *   stays under 512 MB (hard limits);
+ * - it comes within 12 s. The goal is 2 s (`npm run bench:hostile` measures it against the
+ *   production server); the limit here is six times that because this shared two-core machine
+ *   runs other suites beside this one, and it is still far below the minutes an unbounded rule
+ *   took. Before the overlap rule was bounded, the first layout ran the process out of heap through
+ *   every one of these routes; before the sheet was bounded, its PDF took 10 s and its SVG 8 MB.
  */
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { createElement } from 'react';
@@ -32,8 +36,8 @@ import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
 import { ADVERSARIAL_LAYOUTS } from './fixtures/adversarial-layouts';
 
-/** The pool's job time limit (BAYWRIGHT_JOB_TIMEOUT_MS default) plus the request's own work around it. */
-const LIMIT_MS = 15_000 + 5_000;
+/** Six times the 2 s goal: see the header. */
+const LIMIT_MS = 12_000;
 const LIMIT_BYTES = 2 * 1024 * 1024;
 const LIMIT_HEAP = 512 * 1024 * 1024;
 
@@ -74,21 +78,28 @@ beforeEach(() => {
   sheetRoute.sheetAddressLimiter.clear();
 });
 
-async function timed(what: string, run: () => Promise<{ status: number; bytes: number; retryAfter?: string | null }>, statuses: number[] = [200, 503], sizeLimit = true) {
+async function timed(what: string, run: () => Promise<{ status: number; bytes: number }>, statuses: number[] = [200]) {
   const t0 = performance.now();
-  const { status, bytes, retryAfter } = await run();
+  const { status, bytes } = await run();
   const ms = performance.now() - t0;
   expect(statuses, `${what}: status ${status}`).toContain(status);
-  if (status === 503 && retryAfter !== undefined) expect(Number(retryAfter), `${what}: Retry-After`).toBeGreaterThan(0);
-  expect(ms, `${what}: ${ms.toFixed(0)} ms`).toBeLessThan(LIMIT_MS);
-  if (sizeLimit) expect(bytes, `${what}: ${bytes} bytes`).toBeLessThan(LIMIT_BYTES);
+  expect(bytes, `${what}: ${bytes} bytes`).toBeLessThan(LIMIT_BYTES);
   expect(process.memoryUsage().heapUsed, `${what}: heap`).toBeLessThan(LIMIT_HEAP);
+  expect(ms, `${what}: ${ms.toFixed(0)} ms`).toBeLessThan(LIMIT_MS);
 }
 
 async function viaRoute(handler: Parameters<typeof call>[0], options: Parameters<typeof call>[1]) {
   const res = await call(handler, options);
-  return { status: res.status, retryAfter: res.headers.get('retry-after'), bytes: Buffer.byteLength(typeof res.body === 'string' ? res.body : JSON.stringify(res.body ?? '')) };
+  return { status: res.status, bytes: Buffer.byteLength(typeof res.body === 'string' ? res.body : JSON.stringify(res.body ?? '')) };
 }
+
+/**
+ * Layouts whose bay fits no paper: the sheet routes refuse them with 422 and the reason. At 1:25 a
+ * bay longer than about 9 m cannot fit A3's drawing area (400 mm of frame less the plan's
+ * margins); these bays are 20 m (doors and arches) and tens of metres (5,000 modules in rows).
+ */
+const FITS_NO_PAPER = new Set(['5,000 modules', 'maximum doors and arches']);
+const sheetStatus = (name: string) => [FITS_NO_PAPER.has(name) ? 422 : 200];
 
 describe.each(ADVERSARIAL_LAYOUTS.map((l, i) => [l.name, i] as const))('%s', (name, i) => {
   const s = () => stored[i];
@@ -114,9 +125,9 @@ describe.each(ADVERSARIAL_LAYOUTS.map((l, i) => [l.name, i] as const))('%s', (na
       `${name} sheet PDF`,
       async () => {
         const res = await call(sheetRoute.GET, { path: `/api/layouts/${s().id}/sheet?paper=a3&scale=25`, params: { id: s().id }, as: w.designer });
-        return { status: res.status, retryAfter: res.headers.get('retry-after'), bytes: Number(res.headers.get('content-length') ?? Buffer.byteLength(String(res.body))) };
+        return { status: res.status, bytes: Number(res.headers.get('content-length') ?? Buffer.byteLength(String(res.body))) };
       },
-      [200, 422, 503], // a bay too long for any paper is refused with the reason; past the job time limit, 503
+      sheetStatus(name),
     );
   });
 
@@ -131,12 +142,11 @@ describe.each(ADVERSARIAL_LAYOUTS.map((l, i) => [l.name, i] as const))('%s', (na
           throw e;
         });
         if (!result) return { status: 503, bytes: 0 };
-        if (!result.ok) return { status: 422, bytes: 0 };
-        const markup = result.sheet.pages.map((page, k) => renderToStaticMarkup(createElement(SheetSvg, { page, label: `Sheet ${k + 1}` }))).join('');
+        if (!result.ok) return { status: 422, bytes: Buffer.byteLength(JSON.stringify(result)) };
+        const markup = result.sheet.pages.map((page, k) => renderToStaticMarkup(createElement(SheetSvg, { page, number: k + 1, label: `Sheet ${k + 1}` }))).join('');
         return { status: 200, bytes: Buffer.byteLength(markup) };
       },
-      [200, 422, 503],
-      false, // the print view's markup of a dense layout can pass 2 MB: measured by bench:hostile, not yet bounded
+      sheetStatus(name),
     );
   });
 });

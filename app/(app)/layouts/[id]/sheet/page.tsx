@@ -72,7 +72,7 @@ export default async function SheetPage({ params, searchParams }: Props) {
         <main className="sheet-stack flex min-w-0 flex-1 flex-col items-center gap-6" aria-label="Plan sheet pages">
           {result.ok ? (
             result.sheet.pages.map((page, i) => (
-              <SheetSvg key={i} page={page} label={`Sheet ${i + 1} of ${result.sheet.pages.length}, ${paper.label} landscape at 1:${query.scale}`} />
+              <SheetSvg key={i} page={page} number={i + 1} label={`Sheet ${i + 1} of ${result.sheet.pages.length}, ${paper.label} landscape at 1:${query.scale}`} />
             ))
           ) : (
             <div role="alert" className="panel max-w-2xl border-brick bg-brick-light p-4 text-sm text-ink" data-testid="sheet-does-not-fit">

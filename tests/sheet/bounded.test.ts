@@ -1,0 +1,85 @@
+// A plan sheet of a layout with thousands of modules stays bounded: each figure draws at most a
+// thousand modules and says how many it leaves out, the PDF and the print view's SVG stay well
+// under 2 MB, and the SVG writer escapes every text and shares its styles.
+import { describe, expect, it } from 'vitest';
+import { composeSheet, renderPdf, sheetPageSvg, type SheetPage, type SheetRequest } from '@/lib/sheet';
+import type { LayoutDoc } from '@/lib/layout';
+import { maximumBuildUp, stackedOnOneSpot } from '../hardening/fixtures/adversarial-layouts';
+import { fontsReady } from './sheet-fonts';
+
+const MB = 1024 * 1024;
+
+function sheetOf(doc: LayoutDoc, over: Partial<SheetRequest> = {}) {
+  const r = composeSheet({ doc, report: null, paper: 'a3', scale: 25, units: 'mm', details: { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: doc.name, date: '2026-12-03' }, ...over });
+  if (!r.ok) throw new Error(r.message);
+  return r.sheet;
+}
+
+const texts = (pages: SheetPage[]) => pages.flatMap((p) => p.items.flatMap((i) => (i.type === 'text' ? [i.text] : [])));
+
+describe('a sheet of 5,000 modules on one spot', () => {
+  const doc = stackedOnOneSpot(5000);
+  const sheet = sheetOf(doc);
+
+  it('draws the first 1,000 modules in each plan and in the section, and says so under each', () => {
+    const said = texts(sheet.pages);
+    // Every module is in all three arrangements: three plans and the section each leave 4,000 out.
+    expect(said.filter((t) => t === 'Only the first 1000 of 5000 modules are drawn; 4000 more are left out of this plan.')).toHaveLength(3);
+    expect(said.filter((t) => t === 'Only the first 1000 of 5000 modules are drawn; 4000 more are left out of this section.')).toHaveLength(1);
+    // Module 1000 is drawn in each plan (its number tag; the section numbers only modules at least
+    // 4 mm wide on paper, and these are 0.2 mm), module 1001 nowhere; the schedule lists the first 300.
+    expect(said.filter((t) => t === '1000')).toHaveLength(3);
+    expect(said.filter((t) => t === '1001')).toHaveLength(0);
+  });
+
+  it('stays a bounded drawing: under 15,000 marks, a PDF and an SVG print view each under 2 MB', async () => {
+    const marks = sheet.pages.reduce((n, p) => n + p.items.length, 0);
+    expect(marks).toBeLessThan(15_000);
+    const pdf = await renderPdf(sheet, { fonts: await fontsReady });
+    expect(pdf.byteLength).toBeLessThan(2 * MB);
+    const svg = sheet.pages.map((p, i) => sheetPageSvg(p, `s${i + 1}-`)).join('');
+    expect(svg.length).toBeLessThan(2 * MB);
+  }, 30_000);
+});
+
+describe('a sheet of 1,000 modules', () => {
+  const sheet = sheetOf(maximumBuildUp(1000));
+
+  it('draws every module (nothing left out) and its print view is under 2 MB', () => {
+    expect(texts(sheet.pages).some((t) => t.startsWith('Only the first'))).toBe(false);
+    expect(texts(sheet.pages).filter((t) => t === '1000')).toHaveLength(4); // three plans and the section
+    const svg = sheet.pages.map((p, i) => sheetPageSvg(p, `s${i + 1}-`)).join('');
+    expect(svg.length).toBeLessThan(2 * MB);
+  });
+});
+
+describe('the SVG writer', () => {
+  const page: SheetPage = {
+    width: 297,
+    height: 210,
+    items: [
+      { type: 'text', x: 10, y: 20, text: 'Bench </text><script>alert(1)</script> & "seat"', size: 8 },
+      { type: 'rect', x: 1.23456, y: 2, w: 3, h: 4, fill: 'white', stroke: 'ink', width: 0.3 },
+      { type: 'rect', x: 5, y: 6, w: 7, h: 8, fill: 'white', stroke: 'ink', width: 0.3 },
+      { type: 'line', x1: 0, y1: 0, x2: 10, y2: 10, width: 0.1, ink: 'faint' },
+      { type: 'line', x1: 0, y1: 5, x2: 10, y2: 15, width: 0.1, ink: 'faint' },
+      { type: 'line', x1: 0, y1: 0, x2: 100, y2: 0, width: 0.18, ink: 'ink', tag: 'dimension:bay-length:travel' },
+    ],
+  };
+  const svg = sheetPageSvg(page, 's7-');
+
+  it('escapes what people typed: a label can never become markup', () => {
+    expect(svg).toContain('Bench &lt;/text&gt;&lt;script&gt;alert(1)&lt;/script&gt; &amp; "seat"');
+    expect(svg).not.toMatch(/<script/i);
+  });
+
+  it('writes each style once as a class of this page, rounds to 1/100 mm, and strokes a run of lines as one path', () => {
+    expect(svg.match(/<rect class="s7-1"/g)).toHaveLength(2);
+    expect(svg).toContain('.s7-1{fill:#FFFFFF;stroke:#1E2A2F;stroke-width:0.3px}');
+    expect(svg).toContain('x="1.23"');
+    expect(svg).toContain('<path class="s7-2" d="M0 0L10 10M0 5L10 15"/>');
+    expect(svg).toContain('data-tag="dimension:bay-length:travel"');
+    // 8 pt = 8 × 25.4 / 72 mm = 2.822 mm
+    expect(svg).toContain('font-size:2.822px');
+  });
+});
