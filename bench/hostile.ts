@@ -6,7 +6,7 @@
  *   copy), the plan sheet as PDF and the print view (SVG). Goal: 2 s.
  * - GET /api/health p95 while one client hammers the heaviest check request (5,000 modules on one
  *   spot, posted to /api/checks) as fast as its rate limit lets it (10 a second). Goal: ≤ 50 ms.
- * Runs on port 3312 on its own database folder; timings on a shared machine are noisy.
+ * Runs on BENCH_HOSTILE_PORT (default 3312) on its own database folder; timings on a shared machine are noisy.
  */
 import autocannon from 'autocannon';
 import { startTestServer } from '../scripts/lib/test-server';
@@ -30,6 +30,7 @@ export interface HostileResult {
 
 const json = { 'content-type': 'application/json' };
 const ATTACK_SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+const PORT = Number(process.env.BENCH_HOSTILE_PORT ?? 3312);
 
 async function timedFetch(session: HttpSession | null, base: string, path: string, init: RequestInit = {}): Promise<{ ms: number; status: number; bytes: number }> {
   const t0 = performance.now();
@@ -39,7 +40,7 @@ async function timedFetch(session: HttpSession | null, base: string, path: strin
 }
 
 export async function benchHostile(): Promise<HostileResult> {
-  const server = await startTestServer({ port: 3312, db: 'bench-hostile', seed: true, fresh: true, quiet: true });
+  const server = await startTestServer({ port: PORT, db: 'bench-hostile', seed: true, fresh: true, quiet: true });
   try {
     const session = await signInOverHttp(server.url, 'ivo@saltmarsh.test', DEMO_PASSWORD);
     const routes: RouteWorst[] = [];
