@@ -55,7 +55,7 @@ test('forgot password → mail → new password → change it in Settings', asyn
   // names the server's configured host (localhost), never the caller's Host header.
   const links = (mail.text ?? '').match(/https?:\/\/[^\s<>"]+/g) ?? [];
   expect(links).toHaveLength(1);
-  const link = new URL(links[0]);
+  const link = new URL(links[0] ?? 'about:blank');
   const served = new URL(baseURL!);
   expect(link.protocol).toBe(served.protocol);
   expect(link.port).toBe(served.port);
