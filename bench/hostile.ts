@@ -46,10 +46,14 @@ export async function benchHostile(): Promise<HostileResult> {
     const routes: RouteWorst[] = [];
     for (const { name, make } of ADVERSARIAL_LAYOUTS) {
       const doc = make();
-      const created = await (await session.fetch('/api/layouts', { method: 'POST', headers: json, body: JSON.stringify({ name: doc.name, doc }) })).json();
-      const id = created.id as string;
-      await session.fetch(`/api/layouts/${id}/revisions`, { method: 'POST', headers: json, body: JSON.stringify({ note: 'bench' }) });
-      const link = await (await session.fetch(`/api/layouts/${id}/links`, { method: 'POST', headers: json, body: '{}' })).json();
+      const made = await session.fetch('/api/layouts', { method: 'POST', headers: json, body: JSON.stringify({ name: doc.name, doc }) });
+      if (made.status !== 201) throw new Error(`${name}: saving the layout answered ${made.status}: ${(await made.text()).slice(0, 300)}`);
+      const id = (await made.json()).id as string;
+      const issued = await session.fetch(`/api/layouts/${id}/revisions`, { method: 'POST', headers: json, body: JSON.stringify({ note: 'bench' }) });
+      if (issued.status !== 201) throw new Error(`${name}: issuing revision A answered ${issued.status}`);
+      const linked = await session.fetch(`/api/layouts/${id}/links`, { method: 'POST', headers: json, body: '{}' });
+      if (linked.status !== 201) throw new Error(`${name}: making a viewer link answered ${linked.status}`);
+      const link = await linked.json();
       const token = String(link.path).split('/').pop();
       const cases: Array<[string, () => Promise<{ ms: number; status: number; bytes: number }>]> = [
         ['POST /api/checks', () => timedFetch(session, server.url, '/api/checks', { method: 'POST', headers: json, body: JSON.stringify(doc) })],

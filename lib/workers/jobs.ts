@@ -9,6 +9,7 @@
 import { runChecks, type CheckReport } from '../checks';
 import { diffFindings, type FindingChange } from '../layout/revision-diff';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
+import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
 import type { SheetFonts } from '../sheet/fonts';
 
@@ -16,6 +17,14 @@ export interface ChecksInput {
   doc: LayoutDoc;
   studioDefaults?: LayoutSettings;
 }
+
+export interface CheckInputInput {
+  /** A posted document as parsed from JSON, not yet validated. */
+  input: unknown;
+  studioDefaults?: LayoutSettings;
+}
+
+export type CheckInputOutput = { ok: true; report: CheckReport } | { ok: false; issues: FieldIssue[] };
 
 export interface CompareChecksInput {
   from: LayoutDoc;
@@ -48,6 +57,15 @@ function checkedSheet({ studioDefaults, ...request }: SheetInput): SheetResult {
 export const JOBS = {
   /** The check report of one document. */
   checks: (input: ChecksInput): CheckReport => runChecks(input.doc, { studioDefaults: input.studioDefaults }),
+  /**
+   * A posted document validated (and migrated) the way every incoming document is, then checked:
+   * validating thousands of modules is itself tens of milliseconds, so it happens here too.
+   */
+  checkInput: (input: CheckInputInput): CheckInputOutput => {
+    const parsed = parseLayoutDoc(input.input);
+    if (!parsed.ok) return { ok: false, issues: parsed.issues };
+    return { ok: true, report: runChecks(parsed.value, { studioDefaults: input.studioDefaults }) };
+  },
   /** Both documents checked, and the findings whose status changed. */
   compareChecks: (input: CompareChecksInput): CompareChecksOutput => {
     const before = runChecks(input.from, { studioDefaults: input.studioDefaults });

@@ -294,6 +294,13 @@ describe('text that is not text: a lone UTF-16 surrogate', () => {
     expect((await db.select().from(layouts)).length).toBe(before);
   });
 
+  it('accepts a whole character sent as an escaped surrogate pair', async () => {
+    const body = JSON.stringify({ name: 'Van X', bayTemplateId: 'l2h2' }).replace('X', '\\ud83d\\ude90');
+    const res = await call(list.POST, { method: 'POST', as: w.designer, body, headers: { 'content-type': 'application/json' } });
+    expect(res.status).toBe(201);
+    expect(res.body.name).toBe('Van \u{1F690}');
+  });
+
   it('is refused on a save too, and the stored layout keeps its name', async () => {
     const id = w.clientLayoutId;
     const before = await stored(id);

@@ -1,7 +1,6 @@
 import { handle, HttpError, invalid, json, readJson, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { clientAddress } from '@/lib/auth/address';
-import { parseLayoutDoc } from '@/lib/layout/parse';
 import { runJob } from '@/lib/workers/pool';
 import { studioCheckDefaults } from '@/db/studios';
 
@@ -13,7 +12,10 @@ const limiter = new RateLimiter(Math.max(20, perSecond * 2), perSecond);
 /** Per client address as well (lib/auth/address), so many accounts behind one address share a bound: five users' worth. */
 const addressLimiter = new RateLimiter(Math.max(100, perSecond * 10), perSecond * 5);
 
-/** Runs the checks on a posted layout document, in the work pool (503 + Retry-After when it is full). Nothing is stored. */
+/**
+ * Validates and checks a posted layout document, both in the work pool (503 + Retry-After when it
+ * is full), so a document of thousands of modules costs this thread only its JSON parse. Nothing is stored.
+ */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
   if (!limiter.take(actor.userId)) {
@@ -23,7 +25,7 @@ export const POST = handle(async (req) => {
   if (!addressLimiter.take(address)) {
     throw new HttpError(429, 'Too many check requests from this address; wait a moment.', { retryAfter: addressLimiter.retryAfter(address) });
   }
-  const parsed = parseLayoutDoc(await readJson(req));
-  if (!parsed.ok) throw invalid(parsed.issues);
-  return json(await runJob('checks', { doc: parsed.value, studioDefaults: await studioCheckDefaults(actor) }));
+  const checked = await runJob('checkInput', { input: await readJson(req), studioDefaults: await studioCheckDefaults(actor) });
+  if (!checked.ok) throw invalid(checked.issues);
+  return json(checked.report);
 });
