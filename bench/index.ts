@@ -25,6 +25,7 @@ interface Line {
 
 async function main() {
   buildIfNeeded();
+  const loadBefore = os.loadavg();
   const checks = benchChecks();
   const api = await benchApi();
   const hostile = await benchHostile();
@@ -83,7 +84,11 @@ async function main() {
 
   const results = {
     at: new Date().toISOString(),
-    machine: { cpus: os.cpus().length, model: os.cpus()[0]?.model, node: process.version, memoryGiB: round(os.totalmem() / 2 ** 30, 1) },
+    machine: {
+      cpus: os.cpus().length, model: os.cpus()[0]?.model, node: process.version, memoryGiB: round(os.totalmem() / 2 ** 30, 1),
+      // Load average (1 min) when the run started and ended: other work on the machine slows every figure.
+      load: { before: round(loadBefore[0], 1), after: round(os.loadavg()[0], 1) },
+    },
     checks, api, hostile, editor, bundles, vitals, startup, lines,
   };
   fs.mkdirSync('bench', { recursive: true });
@@ -95,10 +100,12 @@ async function main() {
   console.log(table);
 }
 
-function report(table: string, machine: { cpus: number; model?: string; node: string; memoryGiB: number }, at: string): string {
+function report(table: string, machine: { cpus: number; model?: string; node: string; memoryGiB: number; load: { before: number; after: number } }, at: string): string {
+  const loaded = Math.max(machine.load.before, machine.load.after) > machine.cpus * 0.5;
   return `# Benchmarks
 
 Measured with \`npm run bench\` on ${at.slice(0, 10)}: ${machine.cpus} cores (${machine.model ?? 'unknown CPU'}), ${machine.memoryGiB} GiB, Node ${machine.node}.
+Load average when the run started and ended: ${machine.load.before} and ${machine.load.after}${loaded ? ` — the machine was busy with other work (more than ${machine.cpus * 0.5} runnable processes on ${machine.cpus} cores), so every time below is slower and noisier than on an idle machine` : ''}.
 The raw figures are in \`bench/results.json\`. This file is written by the same run.
 
 ${table}

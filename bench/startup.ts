@@ -53,9 +53,10 @@ export async function benchStartup(): Promise<{ coldS: number; warmS: number }> 
   const dir = path.join(process.cwd(), 'data', db);
   fs.rmSync(dir, { recursive: true, force: true });
   fs.rmSync(`${dir}.pid`, { force: true });
-  const coldS = await timeToFirst200(db, 3310);
+  const port = Number(process.env.BENCH_STARTUP_PORT ?? 3310);
+  const coldS = await timeToFirst200(db, port);
   const warm: number[] = [];
-  for (let i = 0; i < 3; i++) warm.push(await timeToFirst200(db, 3310));
+  for (let i = 0; i < 3; i++) warm.push(await timeToFirst200(db, port));
   return { coldS: round(coldS, 2), warmS: round(Math.min(...warm), 2) };
 }
 
