@@ -29,29 +29,46 @@ export function problem(status: number, error: string, extra: Record<string, unk
 /** Ample for a layout of a few thousand modules; anything larger is refused before parsing. */
 export const MAX_JSON_BYTES = 2 * 1024 * 1024;
 
-export async function readJson(req: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {
+/**
+ * The body as JSON text, checked the way `readJson` checks it except that the text is parsed only
+ * when it could hold a NUL or a lone surrogate (then here, to name the field): for work that parses
+ * a large document off this thread. Whoever parses it must still answer 400 for text that is not JSON.
+ */
+export async function readJsonText(req: Request, maxBytes = MAX_JSON_BYTES): Promise<string> {
   const type = req.headers.get('content-type') ?? '';
   if (!/^application\/json\b/i.test(type)) throw new HttpError(415, 'Send the body as application/json.');
   const declared = Number(req.headers.get('content-length') ?? '0');
   if (declared > maxBytes) throw new HttpError(413, `The body is larger than ${Math.round(maxBytes / 1024)} KB.`);
   const text = await readLimited(req, maxBytes);
   if (!text.trim()) throw new HttpError(400, 'The body is empty; send a JSON document.');
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    throw new HttpError(400, 'The body is not valid JSON.');
-  }
   // Walking every string of a large document costs more than its parse; the walk (which names
   // the field) runs only when the text could hold a NUL or a lone surrogate: as an escape, or raw
   // (a raw NUL is not valid JSON). A false alarm only means the walk runs.
-  const bad = mayHoldUnstorableText(text) ? unstorableText(value) : null;
+  if (mayHoldUnstorableText(text)) refuseUnstorableText(parseJsonText(text));
+  return text;
+}
+
+export const NOT_JSON = 'The body is not valid JSON.';
+
+function parseJsonText(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new HttpError(400, NOT_JSON);
+  }
+}
+
+function refuseUnstorableText(value: unknown): void {
+  const bad = unstorableText(value);
   if (bad) {
     throw new HttpError(400, 'Some fields are not valid.', {
       issues: [{ path: bad.path, message: bad.nul ? 'text may not contain NUL characters' : 'text has a broken character (a lone UTF-16 surrogate)' }],
     });
   }
-  return value;
+}
+
+export async function readJson(req: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {
+  return parseJsonText(await readJsonText(req, maxBytes));
 }
 
 function mayHoldUnstorableText(text: string): boolean {

@@ -10,7 +10,7 @@ import { runChecks, type CheckReport } from '../checks';
 import { diffFindings, type FindingChange } from '../layout/revision-diff';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
-import { composeSheet, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
+import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
 import type { SheetFonts } from '../sheet/fonts';
 
 export interface ChecksInput {
@@ -19,12 +19,12 @@ export interface ChecksInput {
 }
 
 export interface CheckInputInput {
-  /** A posted document as parsed from JSON, not yet validated. */
-  input: unknown;
+  /** A posted document as JSON text, not yet parsed or validated. */
+  text: string;
   studioDefaults?: LayoutSettings;
 }
 
-export type CheckInputOutput = { ok: true; report: CheckReport } | { ok: false; issues: FieldIssue[] };
+export type CheckInputOutput = { ok: true; report: CheckReport } | { ok: false; notJson: true } | { ok: false; issues: FieldIssue[] };
 
 export interface CompareChecksInput {
   from: LayoutDoc;
@@ -44,6 +44,8 @@ export type SheetInput = Omit<SheetRequest, 'report' | 'checksUnavailable'> & { 
 export type SheetPdfOutput = Exclude<SheetResult, { ok: true }> | { ok: true; pdf: Uint8Array };
 
 function checkedSheet({ studioDefaults, ...request }: SheetInput): SheetResult {
+  // A bay that fits no paper at this scale is refused with the reason before any check runs.
+  if (!fitOf(request.doc, request.paper, request.scale).fits) return composeSheet({ ...request, report: null });
   let report: CheckReport | null = null;
   let checksUnavailable: string | undefined;
   try {
@@ -58,11 +60,18 @@ export const JOBS = {
   /** The check report of one document. */
   checks: (input: ChecksInput): CheckReport => runChecks(input.doc, { studioDefaults: input.studioDefaults }),
   /**
-   * A posted document validated (and migrated) the way every incoming document is, then checked:
-   * validating thousands of modules is itself tens of milliseconds, so it happens here too.
+   * A posted document parsed, validated (and migrated) the way every incoming document is, then
+   * checked: parsing, copying and validating thousands of modules is itself tens of milliseconds,
+   * so it happens here too (the text crosses to the worker as one string).
    */
   checkInput: (input: CheckInputInput): CheckInputOutput => {
-    const parsed = parseLayoutDoc(input.input);
+    let raw: unknown;
+    try {
+      raw = JSON.parse(input.text);
+    } catch {
+      return { ok: false, notJson: true };
+    }
+    const parsed = parseLayoutDoc(raw);
     if (!parsed.ok) return { ok: false, issues: parsed.issues };
     return { ok: true, report: runChecks(parsed.value, { studioDefaults: input.studioDefaults }) };
   },

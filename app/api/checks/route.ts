@@ -1,4 +1,4 @@
-import { handle, HttpError, invalid, json, readJson, requireActor } from '@/lib/api/respond';
+import { handle, HttpError, invalid, json, NOT_JSON, readJsonText, requireActor } from '@/lib/api/respond';
 import { RateLimiter } from '@/lib/api/rate-limit';
 import { clientAddress } from '@/lib/auth/address';
 import { runJob } from '@/lib/workers/pool';
@@ -13,8 +13,9 @@ const limiter = new RateLimiter(Math.max(20, perSecond * 2), perSecond);
 const addressLimiter = new RateLimiter(Math.max(100, perSecond * 10), perSecond * 5);
 
 /**
- * Validates and checks a posted layout document, both in the work pool (503 + Retry-After when it
- * is full), so a document of thousands of modules costs this thread only its JSON parse. Nothing is stored.
+ * Parses, validates and checks a posted layout document, all in the work pool (503 + Retry-After
+ * when it is full), so a document of thousands of modules costs this thread only reading its text.
+ * Nothing is stored.
  */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
@@ -25,7 +26,8 @@ export const POST = handle(async (req) => {
   if (!addressLimiter.take(address)) {
     throw new HttpError(429, 'Too many check requests from this address; wait a moment.', { retryAfter: addressLimiter.retryAfter(address) });
   }
-  const checked = await runJob('checkInput', { input: await readJson(req), studioDefaults: await studioCheckDefaults(actor) });
-  if (!checked.ok) throw invalid(checked.issues);
-  return json(checked.report);
+  const checked = await runJob('checkInput', { text: await readJsonText(req), studioDefaults: await studioCheckDefaults(actor) });
+  if (checked.ok) return json(checked.report);
+  if ('notJson' in checked) throw new HttpError(400, NOT_JSON);
+  throw invalid(checked.issues);
 });
