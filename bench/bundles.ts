@@ -39,6 +39,8 @@ export const BUDGETS: Record<string, number> = {
   '/sign-in': 130,
   '/sign-up': 130,
   '/invite/[token]': 130,
+  '/reset-password': 130,
+  '/reset-password/[token]': 130,
   '/layouts': 150,
   '/layouts/new': 150,
   '/layouts/[id]': 250,
@@ -120,9 +122,22 @@ async function prepare(browser: Browser, base: string) {
   const raw = await (await page.request.get(`${base}/outbox/${mailId}/raw`)).text();
   const token = raw.replace(/=\r?\n/g, '').match(/\/invite\/([A-Za-z0-9_-]{43})/)?.[1];
   if (!token) throw new Error('the invitation mail carries no /invite/ link');
+  // A password-reset link for the owner, the same way (the mail goes out after the answer).
+  const asked = await page.request.post(`${base}/api/password-reset`, { data: { email: OWNER }, headers: { origin: base } });
+  if (asked.status() >= 300) throw new Error(`POST /api/password-reset: HTTP ${asked.status()}`);
+  let resetToken: string | undefined;
+  for (let i = 0; i < 60 && !resetToken; i++) {
+    await page.goto(`${base}/outbox`);
+    const resetRow = page.getByRole('row').filter({ hasText: OWNER }).filter({ hasText: /new Baywright password/ }).first();
+    if (await resetRow.count()) {
+      const resetRaw = await (await page.request.get(`${base}/outbox/${await resetRow.getAttribute('data-mail-id')}/raw`)).text();
+      resetToken = resetRaw.replace(/=\r?\n/g, '').match(/\/reset-password\/([A-Za-z0-9_-]{43})/)?.[1];
+    } else await page.waitForTimeout(250);
+  }
+  if (!resetToken) throw new Error('no password-reset mail with a /reset-password/ link reached the outbox');
   const storage = await context.storageState();
   await context.close();
-  return { layoutId: layout.id, viewerPath: link.path, token, mailId, storage };
+  return { layoutId: layout.id, viewerPath: link.path, token, resetToken, mailId, storage };
 }
 
 type Visit = { route: string; path: string; signedIn: boolean; ready: (p: Page) => Promise<unknown> };
@@ -137,6 +152,8 @@ function visits(p: Awaited<ReturnType<typeof prepare>>): Visit[] {
     { route: '/sign-in', path: '/sign-in', signedIn: false, ready: (page) => page.getByLabel('E-mail').waitFor() },
     { route: '/sign-up', path: '/sign-up', signedIn: false, ready: heading },
     { route: '/invite/[token]', path: `/invite/${p.token}`, signedIn: false, ready: (page) => page.getByTestId('invited-email').waitFor() },
+    { route: '/reset-password', path: '/reset-password', signedIn: false, ready: (page) => page.getByLabel('E-mail').waitFor() },
+    { route: '/reset-password/[token]', path: `/reset-password/${p.resetToken}`, signedIn: false, ready: (page) => page.getByRole('button', { name: 'Set the new password' }).waitFor() },
     { route: '/v/[token]', path: p.viewerPath, signedIn: false, ready: plan },
     { route: '/layouts', path: '/layouts', signedIn: true, ready: (page) => page.getByRole('link', { name: 'Nair — L2H2 weekender' }).waitFor() },
     { route: '/layouts/new', path: '/layouts/new', signedIn: true, ready: (page) => page.getByLabel('Layout name').waitFor() },

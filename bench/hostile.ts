@@ -25,6 +25,8 @@ export interface RouteWorst {
 
 export interface HostileResult {
   routes: RouteWorst[];
+  /** The same measurement with nobody attacking, in the same run. */
+  healthAlone: { p50: number; p95: number; p99: number; requests: number };
   healthUnderAttack: { p50: number; p95: number; p99: number; requests: number; attackerStatuses: Record<string, number> };
 }
 
@@ -75,6 +77,16 @@ export async function benchHostile(): Promise<HostileResult> {
       }
     }
 
+    // Health alone first, the same way, so the figure under attack can be read against this machine's own floor.
+    const quiet: number[] = [];
+    await new Promise<void>((resolve, reject) => {
+      const instance = autocannon({ url: `${server.url}/api/health`, connections: 2, duration: ATTACK_SECONDS }, (err) => (err ? reject(err) : resolve()));
+      instance.on('response', (_c: unknown, _s: number, _b: number, t: number) => quiet.push(t));
+    });
+    quiet.sort((a, b) => a - b);
+    const healthAlone = { p50: round(percentile(quiet, 50), 1), p95: round(percentile(quiet, 95), 1), p99: round(percentile(quiet, 99), 1), requests: quiet.length };
+    console.log(`GET /api/health alone: p50 ${healthAlone.p50} / p95 ${healthAlone.p95} / p99 ${healthAlone.p99} ms (${quiet.length} requests)`);
+
     // One client posts the heaviest check request as fast as its limit allows; health is measured meanwhile.
     const heavy = JSON.stringify(stackedOnOneSpot());
     const attackerStatuses: Record<string, number> = {};
@@ -99,7 +111,7 @@ export async function benchHostile(): Promise<HostileResult> {
     times.sort((a, b) => a - b);
     const healthUnderAttack = { p50: round(percentile(times, 50), 1), p95: round(percentile(times, 95), 1), p99: round(percentile(times, 99), 1), requests: times.length, attackerStatuses };
     console.log(`GET /api/health under attack: p50 ${healthUnderAttack.p50} / p95 ${healthUnderAttack.p95} / p99 ${healthUnderAttack.p99} ms (${times.length} requests); attacker got ${JSON.stringify(attackerStatuses)}`);
-    return { routes, healthUnderAttack };
+    return { routes, healthAlone, healthUnderAttack };
   } finally {
     await server.stop();
   }
