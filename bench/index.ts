@@ -105,7 +105,7 @@ function report(table: string, machine: { cpus: number; model?: string; node: st
   return `# Benchmarks
 
 Measured with \`npm run bench\` on ${at.slice(0, 10)}: ${machine.cpus} cores (${machine.model ?? 'unknown CPU'}), ${machine.memoryGiB} GiB, Node ${machine.node}.
-Load average when the run started and ended: ${machine.load.before} and ${machine.load.after}${loaded ? ` — the machine was busy with other work (more than ${machine.cpus * 0.5} runnable processes on ${machine.cpus} cores), so every time below is slower and noisier than on an idle machine` : ''}.
+Load average when the run started and ended: ${machine.load.before} and ${machine.load.after}${loaded ? ` — the machine was busy with other work (a load above ${machine.cpus * 0.5} on ${machine.cpus} cores), so every time below is slower and noisier than on an idle machine` : ''}.
 The raw figures are in \`bench/results.json\`. This file is written by the same run.
 
 ${table}
