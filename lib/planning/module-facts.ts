@@ -7,6 +7,7 @@
  */
 import { kindSpec } from '../layout/kinds';
 import type { LayoutDoc, Module } from '../layout';
+import { inArrangement } from '../layout/bay';
 
 export function moduleMassKg(m: Module): number {
   return m.massKg ?? kindSpec(m.kind).massKg;
@@ -42,7 +43,7 @@ export function modulesOfKind(doc: LayoutDoc, kind: Module['kind']): Module[] {
 
 /** Travel seats with a belt (kind `seat`, present in the travel arrangement, `belted` not false). */
 export function beltedTravelSeats(doc: LayoutDoc): Module[] {
-  return doc.modules.filter((m) => m.kind === 'seat' && m.arrangements.includes('travel') && booleanProp(m, 'belted') !== false);
+  return doc.modules.filter((m) => m.kind === 'seat' && inArrangement(m, 'travel') && booleanProp(m, 'belted') !== false);
 }
 
 /** Name for messages and tables: the module's label, else its kind's name — never its id. */

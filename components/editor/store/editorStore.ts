@@ -15,6 +15,7 @@ import * as edits from './moduleEdits';
 import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
 import { px } from '../types';
 import { readableProblem } from '@/lib/layout/field-names';
+import { inArrangement, modulesIn } from '@/lib/layout/bay';
 
 export interface EditorOptions {
   doc: LayoutDoc;
@@ -163,7 +164,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (r.ok && id) {
           const m = get().doc.modules.find((o) => o.id === id)!;
           // A kind that does not exist in the arrangement on show (a table while showing sleep): show one it exists in.
-          if (!m.arrangements.includes(get().arrangement)) set({ arrangement: m.arrangements[0] });
+          if (!inArrangement(m, get().arrangement)) set({ arrangement: m.arrangements[0] });
         }
         return { ...r, id };
       },
@@ -295,7 +296,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       },
       selectAll() {
         const s = get();
-        set({ selection: s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement)).map((m) => m.id) });
+        set({ selection: modulesIn(s.doc, s.arrangement).map((m) => m.id) });
       },
       setHighlight(ids) {
         set({ highlight: ids, selection: ids.filter((id) => get().doc.modules.some((m) => m.id === id)) });
@@ -304,7 +305,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         const s = get();
         if (s.gesture) set({ gesture: null });
         // Keep only selected modules that exist in the arrangement now shown.
-        const inA = new Set(s.doc.modules.filter((m) => m.arrangements.includes(a)).map((m) => m.id));
+        const inA = new Set(modulesIn(s.doc, a).map((m) => m.id));
         set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), phantom: s.phantom === a ? null : s.phantom });
       },
       setPhantom(a) {
