@@ -15,7 +15,7 @@
  */
 import { kindSpec } from '../layout/kinds';
 import type { LayoutDoc, Module, ModuleKind } from '../layout';
-import { moduleName, numericProp } from './module-facts';
+import { moduleFacts, moduleName } from './module-facts';
 import { nestCutList, STANDARD_SHEET, type NestOptions, type NestResult, type SheetSize } from './sheet-nesting';
 
 export interface SheetMaterial {
@@ -95,7 +95,7 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
     const { front, depth } = faceDims(m);
     const h = m.height;
     const inner = Math.max(1, front - 2 * t);
-    const shelves = Math.max(0, Math.round(numericProp(m, 'shelves') ?? rule.shelves ?? 0));
+    const shelves = Math.max(0, Math.round(moduleFacts(m).shelves ?? rule.shelves ?? 0));
     const add = (piece: string, material: CutPart['material'], length: number, width: number, grain: boolean, qty = 1) => {
       for (let i = 1; i <= qty; i++) {
         for (const [j, part] of splitToSheet(length, width, grain, sheet, trim).entries()) {

@@ -7,7 +7,7 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Arrangement, Bay, BuildUp, LayoutDoc, Module, ModuleKind, Occupants } from '@/lib/layout/schema';
 import type { LengthUnit } from '@/lib/layout/units';
-import { bayProblem, buildUpProblem, occupantsProblem } from './docRules';
+import { baySchema, buildUpSchema, firstProblem, occupantsSchema } from '@/lib/layout/schema';
 import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
 import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
@@ -205,21 +205,21 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       updateBay(patch) {
         return commit('Edit bay', () => {
           const bay = { ...get().doc.bay, ...patch };
-          const problem = bayProblem(bay);
+          const problem = firstProblem(baySchema, bay);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, bay } };
         });
       },
       updateBuildUp(buildUp) {
         return commit('Edit build-up', () => {
-          const problem = buildUpProblem(buildUp);
+          const problem = firstProblem(buildUpSchema, buildUp);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, buildUp } };
         });
       },
       updateOccupants(occupants) {
         return commit('Edit occupants', () => {
-          const problem = occupantsProblem(occupants);
+          const problem = firstProblem(occupantsSchema, occupants);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, occupants } };
         });

@@ -2,11 +2,10 @@
  * Pure edits of the layout document for the editor's store: place, move, resize, rotate,
  * duplicate, delete and patch modules, each returning a new document (the old one is kept
  * untouched for undo). Every length written is rounded to whole millimetres and checked against
- * the document schema. Must never touch React, Konva or the network.
+ * the document schema itself (lib/layout/schema.ts). Must never touch React, Konva or the network.
  */
-import { KINDS } from '@/lib/layout/kinds';
-import type { Arrangement, Facing, LayoutDoc, Module, ModuleKind } from '@/lib/layout/schema';
-import { moduleProblem } from './docRules';
+import { KINDS, kindSpec } from '@/lib/layout/kinds';
+import { firstProblem, moduleSchema, type Arrangement, type Facing, type LayoutDoc, type Module, type ModuleKind } from '@/lib/layout/schema';
 import { rectFromExtent, rectsOverlap } from '@/lib/geometry/rect';
 import { footprintRect, inArrangement, linedInterior, shareAnArrangement, type Footprint } from '@/lib/layout/bay';
 import { snapToStep } from '../geometry/snapping';
@@ -34,7 +33,7 @@ export function checkedModule(m: Module): Module {
     elevation: Math.round(m.elevation),
     height: Math.round(m.height),
   };
-  const problem = moduleProblem(rounded);
+  const problem = firstProblem(moduleSchema, rounded);
   if (problem) throw new EditError(problem);
   return rounded;
 }
@@ -45,8 +44,8 @@ function replaceModules(doc: LayoutDoc, changed: Map<string, Module>): LayoutDoc
 
 /** A new module of `kind` with the kind's defaults (lib/layout/kinds.ts). */
 export function moduleFromKind(kind: ModuleKind, id: string): Module {
-  const spec = KINDS[kind];
-  if (!spec) throw new EditError(`unknown module kind "${String(kind)}"`);
+  if (!Object.hasOwn(KINDS, kind)) throw new EditError(`unknown module kind "${String(kind)}"`);
+  const spec = kindSpec(kind);
   return checkedModule({
     id,
     kind,
@@ -61,7 +60,7 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
     ...(spec.surface ? { surface: spec.surface } : {}),
     massKg: spec.massKg,
     ...(spec.props ? { props: { ...spec.props } } : {}),
-  });
+  } as Module);
 }
 
 /**
@@ -157,7 +156,13 @@ export function duplicateModules(doc: LayoutDoc, ids: readonly string[], offset 
 export function patchModule(doc: LayoutDoc, id: string, patch: Partial<Omit<Module, 'id'>>): LayoutDoc {
   const m = doc.modules.find((o) => o.id === id);
   if (!m) throw new EditError(`no module "${id}"`);
-  const next: Module = { ...m, ...patch, id };
+  const next = { ...m, ...patch, id } as Module;
+  // A new kind keeps only the values it declares (a tank's litres mean nothing to a wardrobe).
+  if (patch.kind !== undefined && patch.kind !== m.kind && next.props) {
+    const declared = kindSpec(next.kind).values;
+    const kept = Object.fromEntries(Object.entries(next.props).filter(([k]) => Object.hasOwn(declared, k)));
+    next.props = Object.keys(kept).length ? kept : undefined;
+  }
   for (const key of Object.keys(next) as (keyof Module)[]) if (next[key] === undefined) delete next[key];
   return replaceModules(doc, new Map([[id, checkedModule(next)]]));
 }
