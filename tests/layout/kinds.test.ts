@@ -62,15 +62,12 @@ describe.each(MODULE_KINDS)('kind %s', (kind) => {
       for (const [length, width] of [[600, 400], [300, 900]]) {
         const shapes = moduleSymbol({ kind, length, width, facing, props: kindSpec(kind).props });
         expect(shapes.length).toBeGreaterThan(0);
-        for (const s of shapes) {
-          const pts = s.type === 'circle' ? [[s.cx - s.r, s.cy - s.r], [s.cx + s.r, s.cy + s.r]] : s.points;
-          for (const [x, y] of pts) {
-            expect(x).toBeGreaterThanOrEqual(-1e-9);
-            expect(x).toBeLessThanOrEqual(length + 1e-9);
-            expect(y).toBeGreaterThanOrEqual(-1e-9);
-            expect(y).toBeLessThanOrEqual(width + 1e-9);
-          }
-        }
+        const xs = shapes.flatMap((s) => (s.type === 'circle' ? [s.cx - s.r, s.cx + s.r] : s.points.map((p) => p[0])));
+        const ys = shapes.flatMap((s) => (s.type === 'circle' ? [s.cy - s.r, s.cy + s.r] : s.points.map((p) => p[1])));
+        expect(Math.min(...xs)).toBeGreaterThanOrEqual(-1e-9);
+        expect(Math.max(...xs)).toBeLessThanOrEqual(length + 1e-9);
+        expect(Math.min(...ys)).toBeGreaterThanOrEqual(-1e-9);
+        expect(Math.max(...ys)).toBeLessThanOrEqual(width + 1e-9);
       }
     }
   });
