@@ -74,6 +74,11 @@ export interface KindFacts {
   gasCylinders?: { count: number; kgEach: number };
   /** What it burns, as typed (hob, heater); undefined when not given. */
   fuel?: string;
+  /**
+   * An appliance that may burn gas in the living space: whether it is flueless (a hob) or room-sealed
+   * (a heater), and what it burns when `fuel` is not typed: gas, or the heating fuel of the build plan.
+   */
+  gasAppliance?: { flueless: boolean; untypedFuel: 'gas' | 'heating' };
   /** A travel seat's belt and its fitting. */
   seat?: { belted: boolean; approvedType: boolean; anchorageTested: boolean };
   /** Shelves inside a carcass (cut list); undefined: the carcass's usual number. */
@@ -210,7 +215,7 @@ export const KINDS = {
     length: 500, width: 350, elevation: 900, height: 60, massKg: 6, arrangements: ALL, usedFromFront: true,
     values: { burners: amount('Burners', 1, 6, true), fuel: words('Fuel'), ...LOAD },
     props: { burners: 2 },
-    facts: (v) => ({ ...loadFacts(v), fuel: v.fuel }),
+    facts: (v) => ({ ...loadFacts(v), fuel: v.fuel, gasAppliance: { flueless: true, untypedFuel: 'gas' } }),
     symbol: (m) => {
       const L = m.length, W = m.width;
       const n = clampInt(m.props?.burners, 1, 4, 2);
@@ -305,7 +310,7 @@ export const KINDS = {
     // `watts` is the heat output; the heater's fan draw is entered as a load on the power tab.
     values: { watts: amount('Power (W)', 0, 100_000), fuel: words('Fuel') },
     props: { watts: 2000 },
-    facts: (v) => ({ heatOutputW: v.watts, fuel: v.fuel }),
+    facts: (v) => ({ heatOutputW: v.watts, fuel: v.fuel, gasAppliance: { flueless: false, untypedFuel: 'heating' } }),
     symbol: (m) => [0, 1, 2].map((k) => {
       const L = m.length, W = m.width, x0 = L * (0.3 + 0.2 * k);
       return path(cubic([x0, W * 0.2], [x0 + L * 0.08, W * 0.4], [x0 - L * 0.08, W * 0.6], [x0, W * 0.8]));

@@ -41,14 +41,14 @@ export interface GasInventory {
   gasKg: number;
 }
 
-/** A hob burns gas unless its `fuel` prop says otherwise; a heater only when `fuel` is gas. */
+/** A hob burns gas unless its fuel says otherwise; a heater only when its fuel (else the heating fuel) is gas. */
 export function gasInventory(doc: LayoutDoc): GasInventory {
   const appliances: GasAppliance[] = [];
   for (const m of doc.modules) {
-    const fuel = moduleFacts(m).fuel?.toLowerCase();
-    if (m.kind === 'hob' && (fuel === undefined || fuel === 'gas' || fuel === 'lpg')) appliances.push({ moduleId: m.id, name: moduleName(m), flueless: true });
-    const heaterFuel = fuel ?? doc.systems?.heating?.fuel;
-    if (m.kind === 'heater' && (heaterFuel === 'gas' || heaterFuel === 'lpg')) appliances.push({ moduleId: m.id, name: moduleName(m), flueless: false });
+    const facts = moduleFacts(m);
+    if (!facts.gasAppliance) continue;
+    const fuel = facts.fuel?.toLowerCase() ?? (facts.gasAppliance.untypedFuel === 'gas' ? 'gas' : doc.systems?.heating?.fuel);
+    if (fuel === 'gas' || fuel === 'lpg') appliances.push({ moduleId: m.id, name: moduleName(m), flueless: facts.gasAppliance.flueless });
   }
   const lockers = doc.modules.filter((m) => m.kind === 'gas-locker');
   let cylinders = 0;

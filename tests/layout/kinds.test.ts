@@ -22,7 +22,7 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   table: {},
   'kitchen-counter': {},
   'sink-unit': {},
-  hob: {},
+  hob: { gasAppliance: { flueless: true, untypedFuel: 'gas' } },
   fridge: { load: { watts: 45, dutyCycle: 0.33 } },
   wardrobe: {},
   'drawer-unit': {},
@@ -31,7 +31,7 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   'grey-water-tank': { waterLitres: 50 },
   'gas-locker': { gasCylinders: { count: 1, kgEach: 6 } },
   'electrics-bay': {},
-  heater: { heatOutputW: 2000 },
+  heater: { heatOutputW: 2000, gasAppliance: { flueless: false, untypedFuel: 'heating' } },
   'toilet-cabinet': {},
   'shower-tray': {},
   step: {},
@@ -100,7 +100,7 @@ describe('kind-specific values', () => {
 
   it('a module’s own values override the defaults in its facts', () => {
     const heater = { ...placed('heater'), props: { watts: 4000, fuel: 'diesel' } } as Module;
-    expect(kindFacts(heater)).toEqual({ heatOutputW: 4000, fuel: 'diesel' });
+    expect(kindFacts(heater)).toEqual({ heatOutputW: 4000, fuel: 'diesel', gasAppliance: { flueless: false, untypedFuel: 'heating' } });
     const seat = { ...placed('seat'), props: { belted: false } } as Module;
     expect(kindFacts(seat).seat).toEqual({ belted: false, approvedType: false, anchorageTested: false });
   });
