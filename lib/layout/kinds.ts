@@ -68,8 +68,8 @@ export interface KindFacts {
   load?: { watts: number; hoursPerDay?: number; dutyCycle?: number };
   /** Heat output, W (heat-loss balance). */
   heatOutputW?: number;
-  /** Water held when full, litres (water plan, axle loads). */
-  waterLitres?: number;
+  /** A water tank: fresh or grey, and litres held when full (water plan, axle loads). */
+  water?: { use: 'fresh' | 'grey'; litres: number };
   /** Gas cylinders held (gas locker). */
   gasCylinders?: { count: number; kgEach: number };
   /** What it burns, as typed (hob, heater); undefined when not given. */
@@ -275,13 +275,13 @@ export const KINDS = {
     kind: 'fresh-water-tank', title: 'Fresh water tank', keywords: ['water', 'tank', 'fresh', 'drinking'], family: 'water',
     length: 700, width: 350, elevation: 0, height: 300, massKg: 6, arrangements: ALL, usedFromFront: false,
     values: { ...TANK, ...LOAD }, props: { litres: 70 },
-    facts: (v) => ({ ...loadFacts(v), waterLitres: v.litres }), symbol: (m) => tankSymbol(m, false),
+    facts: (v) => ({ ...loadFacts(v), water: { use: 'fresh', litres: Math.max(0, v.litres ?? 0) } }), symbol: (m) => tankSymbol(m, false),
   }),
   'grey-water-tank': defineKind({
     kind: 'grey-water-tank', title: 'Grey water tank', keywords: ['grey', 'waste water', 'tank'], family: 'water',
     length: 600, width: 350, elevation: 0, height: 250, massKg: 5, arrangements: ALL, usedFromFront: false,
     values: { ...TANK, ...LOAD }, props: { litres: 50 },
-    facts: (v) => ({ ...loadFacts(v), waterLitres: v.litres }), symbol: (m) => tankSymbol(m, true),
+    facts: (v) => ({ ...loadFacts(v), water: { use: 'grey', litres: Math.max(0, v.litres ?? 0) } }), symbol: (m) => tankSymbol(m, true),
   }),
   'gas-locker': defineKind({
     kind: 'gas-locker', title: 'Gas locker', keywords: ['lpg', 'cylinder', 'bottle', 'gas'], family: 'gas',

@@ -22,8 +22,9 @@ export function moduleFacts(m: Module): KindFacts {
   return kindFacts(m);
 }
 
-export function modulesOfKind(doc: LayoutDoc, kind: Module['kind']): Module[] {
-  return doc.modules.filter((m) => m.kind === kind);
+/** The water tanks of one use (fresh or grey), in document order. */
+export function waterTanks(doc: LayoutDoc, use: 'fresh' | 'grey'): Module[] {
+  return doc.modules.filter((m) => moduleFacts(m).water?.use === use);
 }
 
 /** Travel seats with a belt (kind `seat`, present in the travel arrangement, `belted` not false). */
@@ -44,5 +45,5 @@ export function moduleRef(m: Pick<Module, 'kind' | 'label'>): string {
 
 /** Litres a tank module holds (its capacity, else the kind's default). */
 export function tankLitres(m: Module): number {
-  return Math.max(0, moduleFacts(m).waterLitres ?? 0);
+  return moduleFacts(m).water?.litres ?? 0;
 }
