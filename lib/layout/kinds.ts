@@ -81,9 +81,17 @@ export interface KindFacts {
   gasAppliance?: { flueless: boolean; untypedFuel: 'gas' | 'heating' };
   /** A travel seat's belt and its fitting. */
   seat?: { belted: boolean; approvedType: boolean; anchorageTested: boolean };
-  /** Shelves inside a carcass (cut list); undefined: the carcass's usual number. */
-  shelves?: number;
+  /**
+   * The sheet panels its carcass is cut from (cut list; common practice, no source: a starting list
+   * for the workshop, not a joinery design), with its shelves and what its top panel is called.
+   * Absent: bought in, not cut — `notCut` says why when that needs saying.
+   */
+  carcass?: { pieces: CarcassPiece[]; shelves: number; topName?: string };
+  notCut?: string;
 }
+
+export type CarcassPiece = 'sides' | 'top' | 'bottom' | 'back' | 'shelves' | 'front' | 'worktop';
+const carcass = (pieces: CarcassPiece[], shelves = 0, topName?: string): KindFacts => ({ carcass: { pieces, shelves, ...(topName ? { topName } : {}) } });
 
 function loadFacts(v: { watts?: number; hoursPerDay?: number; dutyCycle?: number }): KindFacts {
   return v.watts === undefined ? {} : { load: { watts: v.watts, hoursPerDay: v.hoursPerDay, dutyCycle: v.dutyCycle } };
@@ -161,7 +169,7 @@ export const KINDS = {
   'bed-platform': defineKind({
     kind: 'bed-platform', title: 'Bed platform', keywords: ['bed', 'fixed bed', 'mattress'], family: 'upholstery',
     length: 1900, width: 1400, elevation: 0, height: 900, massKg: 45, surface: 'sleep', arrangements: ALL, usedFromFront: false,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['worktop', 'front'], 0, 'bed top') }),
     symbol: (m) => {
       // Pillow at the end nearest the cab unless the bed faces rearwards.
       const L = m.length, W = m.width, alongX = L >= W;
@@ -175,12 +183,12 @@ export const KINDS = {
   'bed-infill': defineKind({
     kind: 'bed-infill', title: 'Bed infill board', keywords: ['infill', 'slide-out', 'cushion', 'bed'], family: 'upholstery',
     length: 700, width: 600, elevation: 380, height: 80, massKg: 8, surface: 'sleep', arrangements: ['sleep'], usedFromFront: false,
-    values: { ...LOAD }, facts: loadFacts, symbol: () => [],
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['top']) }), symbol: () => [],
   }),
   'bench-seat': defineKind({
     kind: 'bench-seat', title: 'Bench seat', keywords: ['lounge', 'seating', 'sofa', 'bench'], family: 'upholstery',
     length: 1100, width: 550, elevation: 0, height: 460, massKg: 22, surface: 'seat', arrangements: ['lounge', 'sleep'], usedFromFront: true,
-    values: { ...LOAD }, facts: loadFacts, symbol: (m) => seatSymbol(m, false),
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'front']) }), symbol: (m) => seatSymbol(m, false),
   }),
   seat: defineKind({
     kind: 'seat', title: 'Travel seat', keywords: ['belted seat', 'passenger', 'seat'], family: 'upholstery',
@@ -193,18 +201,18 @@ export const KINDS = {
   table: defineKind({
     kind: 'table', title: 'Table', keywords: ['dining', 'desk', 'table'], family: 'timber',
     length: 700, width: 500, elevation: 700, height: 30, massKg: 6, surface: 'counter', arrangements: ['lounge'], usedFromFront: true,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['worktop'], 0, 'table top') }),
     symbol: (m) => [roundRect(m.length * 0.08, m.width * 0.08, m.length * 0.84, m.width * 0.84, Math.min(m.length, m.width) * 0.1)],
   }),
   'kitchen-counter': defineKind({
     kind: 'kitchen-counter', title: 'Kitchen counter', keywords: ['kitchen', 'worktop', 'galley', 'counter'], family: 'timber',
     length: 1200, width: 500, elevation: 0, height: 900, massKg: 35, surface: 'counter', arrangements: ALL, usedFromFront: true,
-    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), shelves: v.shelves }), symbol: () => [],
+    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'bottom', 'back', 'shelves', 'worktop'], v.shelves ?? 1) }), symbol: () => [],
   }),
   'sink-unit': defineKind({
     kind: 'sink-unit', title: 'Sink unit', keywords: ['sink', 'basin', 'tap', 'kitchen'], family: 'water',
     length: 450, width: 450, elevation: 0, height: 900, massKg: 12, surface: 'counter', arrangements: ALL, usedFromFront: true,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'bottom', 'back', 'worktop']) }),
     symbol: (m) => {
       const L = m.length, W = m.width, bw = L * 0.62, bh = W * 0.55;
       return [roundRect(L / 2 - bw / 2, W / 2 - bh / 2, bw, bh, Math.min(bw, bh) * 0.2), { type: 'circle', cx: L / 2, cy: W / 2, r: Math.min(L, W) * 0.05 }];
@@ -248,7 +256,7 @@ export const KINDS = {
   wardrobe: defineKind({
     kind: 'wardrobe', title: 'Wardrobe', keywords: ['cupboard', 'hanging', 'tall unit', 'closet'], family: 'timber',
     length: 500, width: 500, elevation: 0, height: 1750, massKg: 25, arrangements: ALL, usedFromFront: true,
-    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), shelves: v.shelves }),
+    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'bottom', 'back', 'shelves'], v.shelves ?? 1) }),
     symbol: (m) => {
       const L = m.length, W = m.width;
       return [{ ...path(L >= W ? [[L * 0.1, W / 2], [L * 0.9, W / 2]] : [[L / 2, W * 0.1], [L / 2, W * 0.9]]), dash: 'dashed' }];
@@ -257,7 +265,7 @@ export const KINDS = {
   'drawer-unit': defineKind({
     kind: 'drawer-unit', title: 'Drawer unit', keywords: ['drawers', 'storage', 'chest'], family: 'timber',
     length: 450, width: 450, elevation: 0, height: 700, massKg: 15, arrangements: ALL, usedFromFront: true,
-    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), shelves: v.shelves }),
+    values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'bottom', 'back', 'shelves'], v.shelves ?? 2) }),
     symbol: (m) => {
       const L = m.length, W = m.width, across = m.facing === 'left' || m.facing === 'right';
       return [1, 2, 3].map((i) => {
@@ -269,7 +277,7 @@ export const KINDS = {
   'overhead-locker': defineKind({
     kind: 'overhead-locker', title: 'Overhead locker', keywords: ['locker', 'cupboard', 'high storage'], family: 'timber',
     length: 1000, width: 350, elevation: 1450, height: 350, massKg: 10, arrangements: ALL, usedFromFront: false,
-    values: { ...LOAD }, facts: loadFacts, symbol: () => [],
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'bottom', 'back']) }), symbol: () => [],
   }),
   'fresh-water-tank': defineKind({
     kind: 'fresh-water-tank', title: 'Fresh water tank', keywords: ['water', 'tank', 'fresh', 'drinking'], family: 'water',
@@ -288,7 +296,7 @@ export const KINDS = {
     length: 400, width: 350, elevation: 0, height: 650, massKg: 8, arrangements: ALL, usedFromFront: true,
     values: { cylinders: amount('Cylinders', 0, 10, true), cylinderKg: amount('Cylinder size (kg)', 0, 100), ...LOAD },
     props: { cylinders: 1, cylinderKg: 6 },
-    facts: (v) => ({ ...loadFacts(v), gasCylinders: { count: Math.max(0, Math.round(v.cylinders ?? 0)), kgEach: Math.max(0, v.cylinderKg ?? 0) } }),
+    facts: (v) => ({ ...loadFacts(v), notCut: 'a gas locker is a sealed, purpose-made box (EN 1949); not cut from plywood here', gasCylinders: { count: Math.max(0, Math.round(v.cylinders ?? 0)), kgEach: Math.max(0, v.cylinderKg ?? 0) } }),
     symbol: (m) => {
       const n = clampInt(m.props?.cylinders, 1, 3, 1);
       const r = Math.min(m.length / n, m.width) * 0.3;
@@ -298,7 +306,7 @@ export const KINDS = {
   'electrics-bay': defineKind({
     kind: 'electrics-bay', title: 'Electrics bay', keywords: ['battery', 'inverter', 'charger', 'fuse', 'electrics'], family: 'electrics',
     length: 600, width: 400, elevation: 0, height: 400, massKg: 30, arrangements: ALL, usedFromFront: true,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'bottom', 'back']) }),
     symbol: (m) => {
       const cx = m.length / 2, cy = m.width / 2, h = Math.min(m.length, m.width) * 0.5;
       return [path([[cx + h * 0.15, cy - h / 2], [cx - h * 0.2, cy + h * 0.05], [cx + h * 0.15, cy + h * 0.05], [cx - h * 0.15, cy + h / 2]])];
@@ -319,7 +327,7 @@ export const KINDS = {
   'toilet-cabinet': defineKind({
     kind: 'toilet-cabinet', title: 'Toilet cabinet', keywords: ['toilet', 'cassette', 'loo', 'wc'], family: 'sanitary',
     length: 450, width: 450, elevation: 0, height: 500, massKg: 12, arrangements: ALL, usedFromFront: true,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'back']) }),
     symbol: (m) => [{ type: 'path', points: ellipse(m.length / 2, m.width / 2, m.length * 0.28, m.width * 0.34), closed: true }],
   }),
   'shower-tray': defineKind({
@@ -334,7 +342,7 @@ export const KINDS = {
   step: defineKind({
     kind: 'step', title: 'Step', keywords: ['entry step', 'stair'], family: 'timber',
     length: 400, width: 300, elevation: 0, height: 200, massKg: 4, arrangements: ALL, usedFromFront: false,
-    values: { ...LOAD }, facts: loadFacts,
+    values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'front']) }),
     symbol: (m) => [0.35, 0.6].map((t) => path([[m.length * (t - 0.12), m.width * 0.25], [m.length * t, m.width / 2], [m.length * (t - 0.12), m.width * 0.75]])),
   }),
 };

@@ -2,8 +2,9 @@
 // document schema, draws a symbol inside its outline, and gives planning its facts; its typed
 // values refuse names it does not declare. The expected facts below are written out by hand from
 // what each kind is in the trade (a fridge draws power part of the day, a heater gives heat, a tank
-// holds water, a gas locker holds cylinders, a travel seat is belted); the sizes and defaults are
-// the registry's own starting points (common practice, no source).
+// holds water, a gas locker holds cylinders, a travel seat is belted, a counter is a carcass with a
+// worktop); the sizes, defaults and carcass panels are the registry's own starting points (common
+// practice, no source).
 import { describe, expect, it } from 'vitest';
 import { KINDS, MODULE_KINDS, kindFacts, kindSpec, kindValuesSchema, shownFields, type KindFacts, type ModuleKind } from '@/lib/layout/kinds';
 import { moduleSchema, type Module } from '@/lib/layout/schema';
@@ -15,26 +16,26 @@ import { matchKinds } from '@/components/editor/panels/partsSearch';
 
 /** What planning should read from a module placed with its kind's defaults. */
 const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
-  'bed-platform': {},
-  'bed-infill': {},
-  'bench-seat': {},
+  'bed-platform': { carcass: { pieces: ['worktop', 'front'], shelves: 0, topName: 'bed top' } },
+  'bed-infill': { carcass: { pieces: ['top'], shelves: 0 } },
+  'bench-seat': { carcass: { pieces: ['sides', 'top', 'front'], shelves: 0 } },
   seat: { seat: { belted: true, approvedType: false, anchorageTested: false } },
-  table: {},
-  'kitchen-counter': {},
-  'sink-unit': {},
+  table: { carcass: { pieces: ['worktop'], shelves: 0, topName: 'table top' } },
+  'kitchen-counter': { carcass: { pieces: ['sides', 'bottom', 'back', 'shelves', 'worktop'], shelves: 1 } },
+  'sink-unit': { carcass: { pieces: ['sides', 'bottom', 'back', 'worktop'], shelves: 0 } },
   hob: { gasAppliance: { flueless: true, untypedFuel: 'gas' } },
   fridge: { load: { watts: 45, dutyCycle: 0.33 } },
-  wardrobe: {},
-  'drawer-unit': {},
-  'overhead-locker': {},
+  wardrobe: { carcass: { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 1 } },
+  'drawer-unit': { carcass: { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 2 } },
+  'overhead-locker': { carcass: { pieces: ['sides', 'top', 'bottom', 'back'], shelves: 0 } },
   'fresh-water-tank': { water: { use: 'fresh', litres: 70 } },
   'grey-water-tank': { water: { use: 'grey', litres: 50 } },
-  'gas-locker': { gasCylinders: { count: 1, kgEach: 6 } },
-  'electrics-bay': {},
+  'gas-locker': { gasCylinders: { count: 1, kgEach: 6 }, notCut: expect.stringMatching(/sealed, purpose-made box/) },
+  'electrics-bay': { carcass: { pieces: ['sides', 'top', 'bottom', 'back'], shelves: 0 } },
   heater: { heatOutputW: 2000, gasAppliance: { flueless: false, untypedFuel: 'heating' } },
-  'toilet-cabinet': {},
+  'toilet-cabinet': { carcass: { pieces: ['sides', 'top', 'back'], shelves: 0 } },
   'shower-tray': {},
-  step: {},
+  step: { carcass: { pieces: ['sides', 'top', 'front'], shelves: 0 } },
 };
 
 const placed = (kind: ModuleKind): Module => moduleFromKind(kind, `m-${kind}`);
