@@ -16,7 +16,8 @@ import { getDb } from './client';
 import { layouts, paymentEvents, payments, quotes, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
 import type { Actor } from './actor';
-import { editableLayoutFor, layoutFor, studioName } from './sharing/access';
+import { loadLayoutFor } from './access';
+import { studioName } from './studios';
 import { isUniqueViolation } from './sharing/pg-errors';
 import { priceListOfStudio } from './prices';
 import { computePartsList, quoteDeposit, type PartsList, type PriceList } from '../lib/planning/parts-list';
@@ -101,7 +102,7 @@ async function latestQuoteRow(layoutId: string): Promise<QuoteRow | null> {
 
 /** The layout's current quote (the newest one), or null when none was sent. Any reader of the layout. */
 export async function getCurrentQuote(actor: Actor, layoutId: string): Promise<QuoteDto | null> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   const row = await latestQuoteRow(layout.id);
   return row ? toDto(row, layout.name, actor) : null;
 }
@@ -117,7 +118,7 @@ function priced(doc: LayoutDoc, list: PriceList, cut: CutListOptions): PartsList
 
 /** The live parts list of the saved layout, priced from the studio's list. Workshop only. */
 export async function previewPartsList(actor: Actor, layoutId: string, cut: CutListOptions = {}): Promise<PartsPreviewDto> {
-  const layout = await editableLayoutFor(actor, layoutId, 'see the working parts list');
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'see the working parts list' });
   const list = await priceListOfStudio(actor.studioId);
   return {
     layoutId: layout.id,
@@ -129,7 +130,7 @@ export async function previewPartsList(actor: Actor, layoutId: string, cut: CutL
 }
 
 export async function sendQuote(actor: Actor, layoutId: string, input: SendQuoteBody): Promise<QuoteDto> {
-  const layout = await editableLayoutFor(actor, layoutId, 'send a quote');
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'send a quote' });
   if (input.layoutVersion !== layout.version) throw new VersionConflictError({ version: layout.version });
   if (!layout.clientId) throw new BadRequestError('Share this layout with a client before sending a quote.');
   const list = await priceListOfStudio(actor.studioId);
@@ -187,7 +188,7 @@ export interface CheckoutTarget {
 
 /** The quote the asking client may pay now. Only the client it was sent to. */
 export async function quoteForCheckout(actor: Actor, layoutId: string): Promise<CheckoutTarget> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   if (!layout.isClient) throw new ForbiddenError('Only the client pays the deposit.');
   const row = await latestQuoteRow(layout.id);
   if (!row) throw new NotFoundError('There is no quote for this layout yet.');
@@ -299,7 +300,7 @@ export async function recordDepositPaid(p: ProviderPayment): Promise<PaidOutcome
 
 /** The session of this layout's current quote that the asking reader may check on return from the checkout. */
 export async function checkoutSessionOfLayout(actor: Actor, layoutId: string, sessionId: string): Promise<string | null> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   if (!/^cs_[A-Za-z0-9_]{1,200}$/.test(sessionId)) return null;
   const db = await getDb();
   const [row] = await db

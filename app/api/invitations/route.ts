@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { listInvitations } from '@/db/sharing/invitations';
-import { requireEditor } from '@/db/sharing/access';
+import { requireWorkshop } from '@/db/access';
 import { inviteAndMail } from '@/lib/mail/invite';
 
 export const dynamic = 'force-dynamic';
@@ -24,7 +24,7 @@ export const GET = handle(async (req) => {
  */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
-  requireEditor(actor, 'invite clients');
+  requireWorkshop(actor, 'invite clients');
   const body = parseWith(inviteBody, await readJson(req, 16 * 1024));
   return json(await inviteAndMail(req, actor, { ...body, role: 'client' }), { status: 201 });
 });

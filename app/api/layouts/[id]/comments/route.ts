@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { addComment, COMMENT_MAX, listThreads } from '@/db/sharing/comments';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { arrangementSchema } from '@/lib/layout/schema';
 import { notifyMarkup } from '@/lib/mail/notify';
 
@@ -26,7 +26,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  await layoutFor(actor, id);
+  await loadLayoutFor(actor, id);
   const body = parseWith(commentBody, await readJson(req, 16 * 1024));
   const input = 'parentId' in body ? { kind: 'reply' as const, ...body } : { kind: 'pin' as const, ...body };
   const { thread, layout, threadAuthorId } = await addComment(actor, id, input);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { createViewerLink, LABEL_MAX, listViewerLinks, MAX_LINK_DAYS, viewerPath } from '@/db/sharing/viewer-links';
-import { editableLayoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 
 export const dynamic = 'force-dynamic';
 
@@ -25,7 +25,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  await editableLayoutFor(actor, id, 'share viewer links');
+  await loadLayoutFor(actor, id, { forEdit: 'share viewer links' });
   const body = parseWith(createBody, await readJson(req, 16 * 1024));
   const expiresAt = body.expiresInDays ? new Date(Date.now() + body.expiresInDays * 86_400_000) : null;
   const { link, token } = await createViewerLink(actor, id, { revisionId: body.revisionId ?? null, expiresAt, label: body.label });
