@@ -70,7 +70,7 @@ export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string
     <div className="space-y-3" data-testid="parts-list">
       <div className="flex flex-wrap items-center gap-3">
         <a className="btn-quiet" href={csvHref(layoutId, cut)} download><Download size={14} aria-hidden="true" /> Download CSV</a>
-        <span className="text-xs text-ink-soft">{dirty ? 'The CSV and the quote use the saved version: save to include your latest entries.' : 'From the saved version, with the cut-list options shown.'}</span>
+        <span className="text-xs text-ink-soft">{dirty ? 'The CSV and the quote use the saved version; your latest entries are being saved.' : 'From the saved version, with the cut-list options shown.'}</span>
       </div>
       {list.unpriced.length > 0 && (
         <p className="rounded-sm border border-brick bg-brick-light p-2 text-sm" role="alert">
