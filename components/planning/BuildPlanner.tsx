@@ -24,7 +24,7 @@ import { SaveIndicator } from '@/components/editor/panels/SaveIndicator';
 import { systemChecks } from '@/lib/checks/systems';
 import type { Finding } from '@/lib/checks/types';
 import type { CutOptions } from './cut/CutListPanel';
-import { PlanTabs } from './PlanTabs';
+import { Tabs } from '@/components/ui/Tabs';
 import type { PanelProps } from './panelProps';
 import { BUILD_TABS, type BuildTab } from './buildTabs';
 import { ShowTabContext } from './FindingList';
@@ -193,7 +193,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
         />
       )}
       <ShowTabContext.Provider value={openTab}>
-      <PlanTabs tabs={tabs} active={tab} onChange={(t) => openTab(t as BuildTab)}>
+      <Tabs className="panel" label="Build plan" tabs={tabs} active={tab} onChange={(t) => openTab(t as BuildTab)}>
         <div className="p-4" key={formKey}>
           {/* Forms stay mounted (hidden) so a half-typed field survives a tab change. */}
           {(['weight', 'power', 'water', 'gas', 'heat'] as const).filter((t) => visited.has(t)).map((t) => (
@@ -205,7 +205,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
             ? <QuotePanel layoutId={layoutId} savedDoc={savedDoc} savedVersion={version} clientName={clientName} dirty={dirty} cut={cut} canSend={canEdit} />
             : <p className="text-sm">Your workshop&apos;s quote for this layout is on <a className="text-copper underline" href={`/layouts/${layoutId}/quote`}>the quote page</a>.</p>)}
         </div>
-      </PlanTabs>
+      </Tabs>
       </ShowTabContext.Provider>
     </div>
     </EditorStoreProvider>
