@@ -24,6 +24,7 @@ import { computePartsList, quoteDeposit, type PartsList, type PriceList } from '
 import type { LayoutDoc } from '../lib/layout/schema';
 import type { CutListOptions } from '../lib/planning/cut-list';
 import type { SendQuoteBody } from '../lib/api/planning-bodies';
+import { formatMoney } from '../lib/format';
 
 /** The payment API takes no charge below this many minor units (0.50 in GBP/EUR/USD; from memory of its minimums). */
 export const MIN_DEPOSIT_MINOR = 50;
@@ -141,7 +142,7 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
   }
   if (parts.lines.length === 0 || parts.grossMinor <= 0) throw new BadRequestError('The parts list is empty: there is nothing to quote yet.');
   const depositMinor = quoteDeposit(parts.grossMinor, input.depositPct);
-  if (depositMinor < MIN_DEPOSIT_MINOR) throw new BadRequestError(`A deposit of ${(depositMinor / 100).toFixed(2)} ${parts.currency} is below what the checkout can take (${(MIN_DEPOSIT_MINOR / 100).toFixed(2)}).`);
+  if (depositMinor < MIN_DEPOSIT_MINOR) throw new BadRequestError(`A deposit of ${formatMoney(depositMinor, parts.currency)} is below what the checkout can take (${formatMoney(MIN_DEPOSIT_MINOR, parts.currency)}).`);
   if (depositMinor > MAX_DEPOSIT_MINOR) throw new BadRequestError('The deposit is larger than the checkout can take in one payment.');
 
   const db = await getDb();

@@ -15,6 +15,7 @@ import type { Actor } from '../actor';
 import type { LayoutDoc } from '../../lib/layout/schema';
 import { loadLayoutFor } from '../access';
 import { isId } from '../ids';
+import { formatDate } from '../../lib/format';
 import { isUniqueViolation } from './pg-errors';
 
 import type { LayoutState, RevisionState } from '../../lib/layout/drawing-issue';
@@ -203,7 +204,7 @@ export async function decideRevision(actor: Actor, layoutId: string, revisionId:
       .where(and(eq(revisionDecisions.revisionId, revisionId), eq(revisionDecisions.decision, 'approved')))
       .limit(1);
     if (approved) {
-      throw new ConflictError(`Revision ${rev.letter} was approved by ${approved.by} on ${approved.at.toISOString().slice(0, 10)}; an approval cannot be changed.`);
+      throw new ConflictError(`Revision ${rev.letter} was approved by ${approved.by} on ${formatDate(approved.at)}; an approval cannot be changed.`);
     }
     if (rev.seq !== latest) throw new ConflictError(`Revision ${rev.letter} has been superseded by a newer revision; look at the latest one.`);
     await tx.insert(revisionDecisions).values({
