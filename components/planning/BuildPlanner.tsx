@@ -19,7 +19,6 @@ import { EditorStoreProvider } from '@/components/editor/store/EditorStoreContex
 import { useAutosave } from '@/components/editor/api/useAutosave';
 import { useEditorKeyboard } from '@/components/editor/commands/useEditorKeyboard';
 import { CommandButton } from '@/components/editor/panels/CommandButton';
-import { ConflictDialog } from '@/components/editor/panels/ConflictDialog';
 import { SaveIndicator } from '@/components/editor/panels/SaveIndicator';
 import { systemChecks } from '@/lib/checks/systems';
 import type { Finding } from '@/lib/checks/types';
@@ -41,6 +40,8 @@ const HeatPanel = dynamic(() => import('./heat/HeatPanel').then((m) => m.HeatPan
 const PartsListPanel = dynamic(() => import('./parts/PartsListPanel').then((m) => m.PartsListPanel), { loading: loadingTab });
 const CutListPanel = dynamic(() => import('./cut/CutListPanel').then((m) => m.CutListPanel), { loading: loadingTab });
 const QuotePanel = dynamic(() => import('./quote/QuotePanel').then((m) => m.QuotePanel), { loading: loadingTab });
+// Shown only when someone saved first.
+const ConflictDialog = dynamic(() => import('@/components/editor/panels/ConflictDialog').then((m) => m.ConflictDialog));
 
 
 const TOPIC: Record<BuildTab, { title: string; prefix?: string }> = {
@@ -184,7 +185,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
           )}
         </div>
       )}
-      {canEdit && (
+      {canEdit && save.conflict && (
         <ConflictDialog
           conflict={save.conflict}
           onTakeTheirs={() => save.takeTheirs()}
