@@ -3,13 +3,14 @@ import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respo
 import { listInvitations } from '@/db/sharing/invitations';
 import { requireWorkshop } from '@/db/access';
 import { inviteAndMail } from '@/lib/mail/invite';
+import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';
 
 const inviteBody = z.strictObject({
   email: z.email('enter a valid e-mail address').max(254),
   name: z.string().trim().min(1, 'give the client’s name').max(80),
-  layoutId: z.uuid('choose one of this studio’s layouts').nullable().optional(),
+  layoutId: idField('choose one of this studio’s layouts').nullable().optional(),
 });
 
 /** The studio's invitations and their state (owners and designers). */

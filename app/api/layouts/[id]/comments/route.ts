@@ -4,6 +4,7 @@ import { addComment, COMMENT_MAX, listThreads } from '@/db/sharing/comments';
 import { loadLayoutFor } from '@/db/access';
 import { arrangementSchema } from '@/lib/layout/schema';
 import { notifyMarkup } from '@/lib/mail/notify';
+import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';
 
@@ -13,7 +14,7 @@ const text = z.string().trim().min(1, 'write something in the mark-up').max(COMM
 const mm = z.number().int('a whole number of millimetres').min(-100_000).max(100_000);
 const commentBody = z.union([
   z.strictObject({ arrangement: arrangementSchema, x: mm, y: mm, body: text }),
-  z.strictObject({ parentId: z.uuid('reply to a mark-up on this layout'), body: text }),
+  z.strictObject({ parentId: idField('reply to a mark-up on this layout'), body: text }),
 ], { error: 'send a new mark-up (arrangement, x, y, body) or a reply (parentId, body)' });
 
 /** The layout's mark-up threads, oldest first (the path keeps its first name). */

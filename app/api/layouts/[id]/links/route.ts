@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { createViewerLink, LABEL_MAX, listViewerLinks, MAX_LINK_DAYS, viewerPath } from '@/db/sharing/viewer-links';
 import { loadLayoutFor } from '@/db/access';
+import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';
 
@@ -9,7 +10,7 @@ type Ctx = { params: Promise<{ id: string }> };
 
 const createBody = z.strictObject({
   /** Omit (or null) for a live link; a revision id for a frozen one. */
-  revisionId: z.uuid('choose one of this layout’s revisions').nullable().optional(),
+  revisionId: idField('choose one of this layout’s revisions').nullable().optional(),
   /** Days until the link stops working; omit (or null) for a link that lasts until revoked. */
   expiresInDays: z.number().int('whole days').min(1, 'at least one day').max(MAX_LINK_DAYS, `at most ${MAX_LINK_DAYS} days`).nullable().optional(),
   label: z.string().trim().max(LABEL_MAX, `keep the label under ${LABEL_MAX} characters`).optional(),
