@@ -12,6 +12,7 @@ import type { LayoutDoc } from '@/lib/layout';
 import type { EditorStore } from '../store/editorStore';
 import { isDirty } from '../store/editorStore';
 import { saveLayout, type FetchLike, type SavedCopy } from './layoutApi';
+import { fieldName } from '@/lib/layout/field-names';
 
 export const AUTOSAVE_DELAY_MS = 1200;
 
@@ -72,7 +73,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
       case 'invalid':
         blocked.current = 'invalid';
         setStatus('error');
-        setLastError(result.issues.length ? `${result.message}: ${result.issues.slice(0, 3).map((i) => `${i.path} ${i.message}`).join('; ')}` : result.message);
+        setLastError(result.issues.length ? `${result.message}: ${result.issues.slice(0, 3).map((i) => `${fieldName(i.path)}: ${i.message}`).join('; ')}` : result.message);
         toast.error(`Not saved: ${result.message}`);
         return;
       case 'forbidden':
