@@ -14,6 +14,7 @@ import { listNames, mm, moduleName, plural } from './naming';
 import { SOURCES } from './sources';
 import type { Finding } from './types';
 import { inArrangement } from '../layout/bay';
+import { formatWhole } from '../format';
 
 export function fitInside(doc: LayoutDoc, t: BuildUpThickness): Finding[] {
   const { length: L, width: W, height: H } = doc.bay;
@@ -251,7 +252,7 @@ export function fitOverlap(doc: LayoutDoc): Finding[] {
       measured: found.examined,
       required: budget,
       unit: 'pairs',
-      message: `So many modules are piled on top of one another that the overlap check stopped after comparing ${found.examined.toLocaleString('en-GB')} pairs (the limit for ${plural(all.length, 'module')}); the piles found so far are listed, others may remain. Pull the piled-up modules apart and check again. ${SOURCES.overlap.brief}.`,
+      message: `So many modules are piled on top of one another that the overlap check stopped after comparing ${formatWhole(found.examined)} pairs (the limit for ${plural(all.length, 'module')}); the piles found so far are listed, others may remain. Pull the piled-up modules apart and check again. ${SOURCES.overlap.brief}.`,
       source: SOURCES.overlap.cite,
     });
   }
