@@ -33,7 +33,7 @@ const config = [
     },
   },
   {
-    files: ['lib/layout/**/*.ts', 'lib/checks/**/*.ts', 'lib/planning/**/*.ts', 'lib/symbols/**/*.ts', 'lib/sheet/**/*.ts', 'lib/format.ts'],
+    files: ['lib/layout/**/*.ts', 'lib/checks/**/*.ts', 'lib/planning/**/*.ts', 'lib/symbols/**/*.ts', 'lib/sheet/**/*.ts', 'lib/format.ts', 'lib/look.ts'],
     rules: { 'no-restricted-imports': ['error', { paths: uiAndServer, patterns: uiAndServerPatterns }] },
   },
   {
