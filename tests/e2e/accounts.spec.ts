@@ -87,7 +87,7 @@ test('forgot password → mail → new password → change it in Settings', asyn
   await reader.getByLabel('E-mail').fill(EMAIL);
   await reader.getByLabel('Password').fill(FIRST);
   await reader.getByRole('button', { name: 'Sign in' }).click();
-  await expect(reader.getByRole('alert')).toBeVisible();
+  await expect(reader.getByRole('alert').filter({ hasText: 'That e-mail and password do not match an account.' })).toBeVisible();
   await expect(reader).toHaveURL(/\/sign-in/);
 
   // Settings → Your password.
