@@ -12,13 +12,13 @@ import { formatLongDate as day, formatMoney } from '../format';
 export { formatMoney };
 
 export function quoteSentMail(p: {
-  clientName: string; studioName: string; designerName: string; layoutName: string;
+  clientName: string; studioName: string; designerName: string; layoutName: string; quoteRef: string;
   grossMinor: number; depositMinor: number; depositPct: number; currency: string; note: string; url: string;
 }): ComposedMail {
   return compose(`Your quote for ${oneLine(p.layoutName, 80)} is ready`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,
     paragraphs: [
-      `${p.designerName} at ${p.studioName} has sent you a quote for ${p.layoutName}: ${formatMoney(p.grossMinor, p.currency)} including VAT.`,
+      `${p.designerName} at ${p.studioName} has sent you quote ${p.quoteRef} for ${p.layoutName}: ${formatMoney(p.grossMinor, p.currency)} including VAT.`,
       `A deposit of ${p.depositPct} %, ${formatMoney(p.depositMinor, p.currency)}, books the build. You can look over every line of the quote and pay the deposit online.`,
     ],
     quote: p.note || undefined,

@@ -8,7 +8,7 @@ import 'server-only';
 import { log } from '@/lib/log';
 import type { Actor } from '@/db/actor';
 import type { QuoteDto } from '@/db/quotes';
-import { markReceiptSent, receiptFacts } from '@/db/quotes';
+import { markReceiptSent, quoteReference, receiptFacts } from '@/db/quotes';
 import { layoutClient } from '@/db/sharing/recipients';
 import { depositReceiptMail, quoteSentMail } from '@/lib/mail/receipt';
 import { returnOrigin } from './return-origin';
@@ -33,7 +33,7 @@ export async function mailQuoteToClient(req: Request, actor: Actor, quote: Quote
     const url = `${returnOrigin(req)}${quotePath(quote.layoutId)}`;
     await sendMail({
       ...quoteSentMail({
-        clientName: client.name, studioName: quote.studioName, designerName: actor.name, layoutName: quote.layoutName,
+        clientName: client.name, studioName: quote.studioName, designerName: actor.name, layoutName: quote.layoutName, quoteRef: quote.reference,
         grossMinor: quote.grossMinor, depositMinor: quote.depositMinor, depositPct: quote.depositPct, currency: quote.currency, note: quote.note, url,
       }),
       to: client,
@@ -57,7 +57,7 @@ export async function mailReceipt(req: Request, quoteId: string, paymentRef: str
     await sendMail({
       ...depositReceiptMail({
         clientName: facts.client.name, studioName: facts.studioName, layoutName: facts.layoutName,
-        quoteRef: q.id.slice(0, 8).toUpperCase(), depositMinor: q.depositMinor, grossMinor: q.grossMinor,
+        quoteRef: quoteReference(q.number), depositMinor: q.depositMinor, grossMinor: q.grossMinor,
         currency: q.currency, paidAt: q.paidAt ?? new Date(), paymentRef, url,
       }),
       to: facts.client,

@@ -43,7 +43,7 @@ export async function openDepositCheckout(req: Request, actor: Actor, layoutId: 
       price_data: {
         currency: q.currency.toLowerCase(),
         unit_amount: q.depositMinor,
-        product_data: { name: `Deposit (${q.depositPct} %) for ${q.layoutName}`.slice(0, 250), description: `${q.studioName}: quote ${q.id.slice(0, 8).toUpperCase()}` },
+        product_data: { name: `Deposit (${q.depositPct} %) for ${q.layoutName}`.slice(0, 250), description: `${q.studioName}: quote ${q.reference}` },
       },
     }],
     success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,

@@ -113,7 +113,7 @@ describe('the API of a production server without payments or mail', () => {
 
   it('answers 503 "not set up" to the client paying a deposit, and opens no payment', async () => {
     await db.insert(quotes).values({
-      layoutId: w.clientLayoutId, studioId: w.owner.studioId, clientId: w.client.id, layoutVersion: 1, currency: 'GBP',
+      layoutId: w.clientLayoutId, studioId: w.owner.studioId, number: 1, clientId: w.client.id, layoutVersion: 1, currency: 'GBP',
       parts: { lines: [] } as never, grossMinor: 500_000, depositPct: 20, depositMinor: 100_000, sentByName: 'Maren',
     });
     production();
