@@ -52,7 +52,7 @@ describe('imports that run back up the layers are refused', () => {
     // server/ sits below the app.
     ['server/mail/probe.ts', "import * as route from '@/app/api/layouts/route';", /pages or route handlers/],
     // A page takes nothing from a route folder.
-    ['app/(app)/layouts/[id]/probe/page.tsx', "import { sheetRequestFor } from '@/app/api/layouts/[id]/sheet/sheet-request';", /route folder/],
+    ['app/(app)/layouts/[id]/probe/page.tsx', "import { guardViewer } from '@/app/api/v/viewer-guard';", /route folder/],
     ['app/(app)/layouts/probe/page.tsx', "import { x } from '../../../api/layouts/helper';", /route folder/],
     // The fakes: only through the switch.
     ['server/mail/probe.ts', "import { startFakeSmtpOnce } from '@/dev/fakes/smtp/server';", /local fakes/],
