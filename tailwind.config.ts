@@ -1,24 +1,18 @@
 /**
- * Baywright's look: a warm drafting sheet, ink lines, one copper accent, muted status colours
- * that always travel with an icon and a word (DESIGN.md, "Look").
+ * Baywright's look as a Tailwind theme: colours and faces come from lib/look.ts, their one home
+ * (DESIGN.md, "Look"). Add a colour there, never here.
  */
 import type { Config } from 'tailwindcss';
+import { colours, typefaces } from './lib/look';
 
 const config: Config = {
   content: ['./app/**/*.{ts,tsx}', './components/**/*.{ts,tsx}'],
   theme: {
     extend: {
-      colors: {
-        paper: { DEFAULT: '#F5F2EA', deep: '#ECE7DA', edge: '#DDD6C4' },
-        ink: { DEFAULT: '#1E2A2F', soft: '#4A5A61', faint: '#8A969B' },
-        copper: { DEFAULT: '#A4522A', dark: '#833F1E', light: '#F1DED3' },
-        moss: { DEFAULT: '#55703F', light: '#E3EAD9' },
-        ochre: { DEFAULT: '#A87C1E', light: '#F3E8CC' },
-        brick: { DEFAULT: '#9E3B2F', light: '#F2DCD7' },
-      },
+      colors: colours,
       fontFamily: {
-        sans: ['var(--font-text)', 'system-ui', 'sans-serif'],
-        mono: ['var(--font-mono)', 'ui-monospace', 'monospace'],
+        sans: [`var(${typefaces.text.cssVariable})`, ...typefaces.text.fallback],
+        mono: [`var(${typefaces.mono.cssVariable})`, ...typefaces.mono.fallback],
       },
     },
   },

@@ -7,8 +7,7 @@ import { and, eq, sql } from 'drizzle-orm';
 import { getDb, type Db } from './client';
 import { prepared } from './prepared';
 import { memberships, users } from './schema';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isId } from './ids';
 
 export type StudioRole = 'owner' | 'designer' | 'client';
 
@@ -47,24 +46,10 @@ function actorQuery(db: Db, withStudio: boolean) {
  * joined to the membership the session names (or their first).
  */
 export async function loadActor(userId: string, studioId: string | undefined, sessionVersion: number | undefined): Promise<Actor | null> {
-  if (!UUID.test(userId) || (studioId !== undefined && !UUID.test(studioId))) return null;
+  if (!isId(userId) || (studioId !== undefined && !isId(studioId))) return null;
   const db = await getDb();
   const query = prepared(db, studioId ? 'actor_in_studio' : 'actor_first_studio', (d) => actorQuery(d, Boolean(studioId)));
   const [row] = await query.execute({ userId, studioId });
   if (!row || (sessionVersion ?? 0) !== row.sessionVersion) return null;
   return { userId: row.userId, email: row.email, name: row.name, studioId: row.studioId, role: row.role };
-}
-
-export function canEditLayouts(actor: Actor): boolean {
-  return actor.role === 'owner' || actor.role === 'designer';
-}
-
-/**
- * The one rule for who may read a layout: the owners and designers of its studio, and the one
- * client of that studio it is shared with. Every data function that reads a layout (or what hangs
- * off it) asks this; a client of the same studio is a stranger to every other client's layouts.
- */
-export function mayReadLayout(actor: Actor, layout: { studioId: string; clientId: string | null }): boolean {
-  if (layout.studioId !== actor.studioId) return false;
-  return canEditLayouts(actor) || (actor.role === 'client' && layout.clientId === actor.userId);
 }

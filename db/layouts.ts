@@ -1,8 +1,7 @@
 /**
- * Layouts: the studio's plans. Every function takes the Actor and checks rights inside:
- * owners and designers read and write their studio's layouts; a client reads only layouts shared
- * with them; anyone else gets "not found" (404, never 403, for ids they may not know).
- * Returns DTOs, never rows.
+ * Layouts: the studio's plans. Every function takes the Actor and checks rights inside, by the
+ * one rule in `db/access.ts` (the workshop reads and writes its studio's layouts; a client reads
+ * only the layouts shared with them; anyone else gets "not found"). Returns DTOs, never rows.
  */
 import 'server-only';
 import { and, desc, eq, isNotNull, isNull, or, sql } from 'drizzle-orm';
@@ -10,8 +9,10 @@ import { alias } from 'drizzle-orm/pg-core';
 import { getDb, type Db } from './client';
 import { prepared } from './prepared';
 import { layouts, memberships, payments, quotes, users } from './schema';
-import { BadRequestError, ConflictError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
-import { canEditLayouts, mayReadLayout, type Actor } from './actor';
+import { BadRequestError, ConflictError, ForbiddenError, VersionConflictError } from './errors';
+import type { Actor } from './actor';
+import { loadLayoutFor, mayEditLayout, requireWorkshop, rightsOver, visibleLayouts, type EditableLayoutAccess } from './access';
+import { isId } from './ids';
 import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
 import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-summary';
@@ -65,6 +66,7 @@ function baseSelect() {
 
 type MetaRow = {
   id: string;
+  studioId: string;
   name: string;
   version: number;
   createdAt: Date;
@@ -108,24 +110,17 @@ function summaryOf(row: MetaRow, facts: DocFacts): LayoutSummaryDto {
 }
 
 function withoutDoc(row: MetaRow, facts: DocFacts, actor: Actor): Omit<LayoutDto, 'doc'> {
-  return { ...summaryOf(row, facts), createdAt: row.createdAt.toISOString(), canEdit: canEditLayouts(actor) };
+  return { ...summaryOf(row, facts), createdAt: row.createdAt.toISOString(), canEdit: mayEditLayout(actor, row) };
 }
 
 function toDto(row: Row, actor: Actor): LayoutDto {
   return { ...withoutDoc(row, docFacts(row.doc), actor), doc: row.doc };
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** The layouts in use (default), or with `archived` the archived ones only. */
 export async function listLayouts(actor: Actor, options: { archived?: boolean } = {}): Promise<LayoutSummaryDto[]> {
   const db = await getDb();
-  const visible = and(
-    canEditLayouts(actor)
-      ? eq(layouts.studioId, actor.studioId)
-      : and(eq(layouts.studioId, actor.studioId), eq(layouts.clientId, actor.userId)),
-    options.archived ? isNotNull(layouts.archivedAt) : isNull(layouts.archivedAt),
-  );
+  const visible = and(visibleLayouts(actor), options.archived ? isNotNull(layouts.archivedAt) : isNull(layouts.archivedAt));
   const rows = await db
     .select(baseSelect())
     .from(layouts)
@@ -161,17 +156,16 @@ function layoutMetaByIdQuery(db: Db) {
     .prepare('layout_meta_by_id');
 }
 
-/** Staff see their studio's layouts, a client only those shared with them; others learn nothing. */
-function assertVisible<R extends { studioId: string; clientId: string | null }>(actor: Actor, row: R | undefined): asserts row is R {
-  if (!row || !mayReadLayout(actor, row)) throw new NotFoundError('No such layout.');
-}
-
-/** The stored row if the actor may read it; NotFoundError otherwise. */
+/**
+ * The stored row with the names the DTO shows, if the actor may read it (`rightsOver`, the one
+ * rule); NotFoundError otherwise. One joined query: this is the read the editor and the viewer
+ * wait for, so it does not go through `loadLayoutFor` first.
+ */
 async function readable(actor: Actor, id: string): Promise<Row> {
-  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
+  if (!isId(id)) rightsOver(actor, null);
   const db = await getDb();
   const [row] = await prepared(db, 'layout_by_id', layoutByIdQuery).execute({ id });
-  assertVisible(actor, row);
+  rightsOver(actor, row);
   return { ...row, doc: readStoredDoc(row.doc) };
 }
 
@@ -209,10 +203,10 @@ function cacheDoc(row: Row): CachedDoc {
  * serialised again each time.
  */
 export async function getLayoutJson(actor: Actor, id: string): Promise<{ version: number; json: string }> {
-  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
+  if (!isId(id)) rightsOver(actor, null);
   const db = await getDb();
   const [meta] = await prepared(db, 'layout_meta_by_id', layoutMetaByIdQuery).execute({ id });
-  assertVisible(actor, meta);
+  rightsOver(actor, meta);
   let row: MetaRow = meta;
   let doc = docCache.get(docKey(meta));
   if (!doc) {
@@ -232,7 +226,7 @@ export function clearDocCache(): void {
 
 async function assertClientOfStudio(studioId: string, clientId: string | null | undefined): Promise<void> {
   if (!clientId) return;
-  if (!UUID.test(clientId)) throw new BadRequestError('That client is not a client of this studio.');
+  if (!isId(clientId)) throw new BadRequestError('That client is not a client of this studio.');
   const db = await getDb();
   const [m] = await db
     .select({ role: memberships.role })
@@ -243,7 +237,7 @@ async function assertClientOfStudio(studioId: string, clientId: string | null | 
 }
 
 export async function createLayout(actor: Actor, input: { name: string; doc: LayoutDoc; clientId?: string | null }): Promise<LayoutDto> {
-  if (!canEditLayouts(actor)) throw new ForbiddenError('Clients cannot create layouts.');
+  requireWorkshop(actor, 'create layouts');
   await assertClientOfStudio(actor.studioId, input.clientId);
   const db = await getDb();
   const doc = { ...input.doc, name: input.name };
@@ -260,30 +254,8 @@ export interface SaveInput {
   clientId?: string | null;
 }
 
-declare const checked: unique symbol;
-/** A layout the actor may write, as `editableLayout` found it; only that function makes one. */
-export type EditableLayout = { readonly id: string; readonly studioId: string; readonly name: string; readonly [checked]: true };
-
-/**
- * The rights half of a save, on its own so a route can refuse a stranger (404) or a client (403)
- * before it says anything about the version or the body.
- */
-export async function editableLayout(actor: Actor, id: string): Promise<EditableLayout> {
-  if (!UUID.test(id)) throw new NotFoundError('No such layout.');
-  const db = await getDb();
-  // Not the document: a save replaces it, so reading (and parsing) it here would be wasted.
-  const [row] = await prepared(db, 'layout_rights_by_id', (d) =>
-    d
-      .select({ id: layouts.id, studioId: layouts.studioId, clientId: layouts.clientId, name: layouts.name })
-      .from(layouts)
-      .where(eq(layouts.id, sql.placeholder('id')))
-      .limit(1)
-      .prepare('layout_rights_by_id'),
-  ).execute({ id });
-  assertVisible(actor, row);
-  if (!canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
-  return { id: row.id, studioId: row.studioId, name: row.name } as EditableLayout;
-}
+/** A layout the actor may write: `loadLayoutFor(actor, id, { forEdit: true })`, before the body is read. */
+export type EditableLayout = EditableLayoutAccess;
 
 export interface SavedLayoutDto {
   id: string;
@@ -297,7 +269,7 @@ export interface SavedLayoutDto {
  * so of two saves based on the same version exactly one wins; the other gets the current copy.
  */
 export async function saveLayout(actor: Actor, layout: EditableLayout, baseVersion: number, input: SaveInput): Promise<SavedLayoutDto> {
-  if (layout.studioId !== actor.studioId || !canEditLayouts(actor)) throw new ForbiddenError('This layout is read-only for you.');
+  if (!mayEditLayout(actor, layout)) throw new ForbiddenError('Only the workshop can change this layout.');
   if (input.clientId !== undefined) await assertClientOfStudio(actor.studioId, input.clientId);
   const name = input.name ?? input.doc.name ?? layout.name;
   const db = await getDb();
@@ -347,8 +319,7 @@ function isForeignKeyViolation(err: unknown): boolean {
 }
 
 export async function deleteLayout(actor: Actor, id: string): Promise<void> {
-  await readable(actor, id);
-  if (!canEditLayouts(actor)) throw new ForbiddenError('Clients cannot delete layouts.');
+  await loadLayoutFor(actor, id, { forEdit: 'delete layouts' });
   const db = await getDb();
   if (await holdsPayments(db, id)) throw new ConflictError(KEEPS_PAYMENTS_MESSAGE);
   try {
@@ -364,8 +335,7 @@ export async function deleteLayout(actor: Actor, id: string): Promise<void> {
  * document, its version, revisions, quotes, payments or approvals, so links and caches stay valid.
  */
 export async function setLayoutArchived(actor: Actor, id: string, archived: boolean): Promise<LayoutSummaryDto> {
-  await readable(actor, id);
-  if (!canEditLayouts(actor)) throw new ForbiddenError(archived ? 'Clients cannot archive layouts.' : 'Clients cannot restore layouts.');
+  await loadLayoutFor(actor, id, { forEdit: archived ? 'archive layouts' : 'restore layouts' });
   const db = await getDb();
   await db
     .update(layouts)

@@ -10,7 +10,8 @@ import { eq } from 'drizzle-orm';
 import { getDb } from './client';
 import { priceLists, users } from './schema';
 import { ForbiddenError } from './errors';
-import { canEditLayouts, type Actor } from './actor';
+import type { Actor } from './actor';
+import { requireWorkshop } from './access';
 import type { PriceList } from '../lib/planning/parts-list';
 import type { PriceListBody } from '../lib/api/planning-bodies';
 
@@ -32,7 +33,7 @@ export async function priceListOfStudio(studioId: string): Promise<PriceList | n
 }
 
 export async function getPriceList(actor: Actor): Promise<PriceListDto> {
-  if (!canEditLayouts(actor)) throw new ForbiddenError('Only the workshop sees the price list.');
+  requireWorkshop(actor, 'see the price list');
   const db = await getDb();
   const [row] = await db
     .select({ list: priceLists, updatedBy: users.name })

@@ -16,13 +16,15 @@ import { getDb } from './client';
 import { layouts, paymentEvents, payments, quotes, studios, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
 import type { Actor } from './actor';
-import { editableLayoutFor, layoutFor, studioName } from './sharing/access';
+import { loadLayoutFor } from './access';
+import { studioName } from './studios';
 import { isUniqueViolation } from './sharing/pg-errors';
 import { priceListOfStudio } from './prices';
 import { computePartsList, quoteDeposit, type PartsList, type PriceList } from '../lib/planning/parts-list';
 import type { LayoutDoc } from '../lib/layout/schema';
 import type { CutListOptions } from '../lib/planning/cut-list';
 import type { SendQuoteBody } from '../lib/api/planning-bodies';
+import { formatMoney } from '../lib/format';
 
 /** The payment API takes no charge below this many minor units (0.50 in GBP/EUR/USD; from memory of its minimums). */
 export const MIN_DEPOSIT_MINOR = 50;
@@ -109,7 +111,7 @@ async function latestQuoteRow(layoutId: string): Promise<QuoteRow | null> {
 
 /** The layout's current quote (the newest one), or null when none was sent. Any reader of the layout. */
 export async function getCurrentQuote(actor: Actor, layoutId: string): Promise<QuoteDto | null> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   const row = await latestQuoteRow(layout.id);
   return row ? toDto(row, layout.name, actor) : null;
 }
@@ -125,7 +127,7 @@ function priced(doc: LayoutDoc, list: PriceList, cut: CutListOptions): PartsList
 
 /** The live parts list of the saved layout, priced from the studio's list. Workshop only. */
 export async function previewPartsList(actor: Actor, layoutId: string, cut: CutListOptions = {}): Promise<PartsPreviewDto> {
-  const layout = await editableLayoutFor(actor, layoutId, 'see the working parts list');
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'see the working parts list' });
   const list = await priceListOfStudio(actor.studioId);
   return {
     layoutId: layout.id,
@@ -137,7 +139,7 @@ export async function previewPartsList(actor: Actor, layoutId: string, cut: CutL
 }
 
 export async function sendQuote(actor: Actor, layoutId: string, input: SendQuoteBody): Promise<QuoteDto> {
-  const layout = await editableLayoutFor(actor, layoutId, 'send a quote');
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'send a quote' });
   if (input.layoutVersion !== layout.version) throw new VersionConflictError({ version: layout.version });
   if (!layout.clientId) throw new BadRequestError('Share this layout with a client before sending a quote.');
   const list = await priceListOfStudio(actor.studioId);
@@ -148,7 +150,7 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
   }
   if (parts.lines.length === 0 || parts.grossMinor <= 0) throw new BadRequestError('The parts list is empty: there is nothing to quote yet.');
   const depositMinor = quoteDeposit(parts.grossMinor, input.depositPct);
-  if (depositMinor < MIN_DEPOSIT_MINOR) throw new BadRequestError(`A deposit of ${(depositMinor / 100).toFixed(2)} ${parts.currency} is below what the checkout can take (${(MIN_DEPOSIT_MINOR / 100).toFixed(2)}).`);
+  if (depositMinor < MIN_DEPOSIT_MINOR) throw new BadRequestError(`A deposit of ${formatMoney(depositMinor, parts.currency)} is below what the checkout can take (${formatMoney(MIN_DEPOSIT_MINOR, parts.currency)}).`);
   if (depositMinor > MAX_DEPOSIT_MINOR) throw new BadRequestError('The deposit is larger than the checkout can take in one payment.');
 
   const db = await getDb();
@@ -202,7 +204,7 @@ export interface CheckoutTarget {
 
 /** The quote the asking client may pay now. Only the client it was sent to. */
 export async function quoteForCheckout(actor: Actor, layoutId: string): Promise<CheckoutTarget> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   if (!layout.isClient) throw new ForbiddenError('Only the client pays the deposit.');
   const row = await latestQuoteRow(layout.id);
   if (!row) throw new NotFoundError('There is no quote for this layout yet.');
@@ -314,7 +316,7 @@ export async function recordDepositPaid(p: ProviderPayment): Promise<PaidOutcome
 
 /** The session of this layout's current quote that the asking reader may check on return from the checkout. */
 export async function checkoutSessionOfLayout(actor: Actor, layoutId: string, sessionId: string): Promise<string | null> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   if (!/^cs_[A-Za-z0-9_]{1,200}$/.test(sessionId)) return null;
   const db = await getDb();
   const [row] = await db

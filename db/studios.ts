@@ -11,6 +11,7 @@ import { getDb } from './client';
 import { layouts, memberships, studios, users } from './schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from './errors';
 import type { Actor, StudioRole } from './actor';
+import { isId } from './ids';
 import { settingsSchema, type LayoutDoc, type LayoutSettings } from '../lib/layout/schema';
 import type { LengthUnit } from '../lib/layout/units';
 
@@ -77,6 +78,7 @@ export function requireOwner(actor: Actor): void {
 }
 
 export async function changeRole(actor: Actor, userId: string, role: StudioRole): Promise<void> {
+  if (!isId(userId)) throw new NotFoundError('No such member.');
   requireOwner(actor);
   if (userId === actor.userId) throw new BadRequestError('You cannot change your own role.');
   const db = await getDb();
@@ -89,6 +91,7 @@ export async function changeRole(actor: Actor, userId: string, role: StudioRole)
 }
 
 export async function removeMember(actor: Actor, userId: string): Promise<void> {
+  if (!isId(userId)) throw new NotFoundError('No such member.');
   requireOwner(actor);
   if (userId === actor.userId) throw new BadRequestError('You cannot remove yourself.');
   const db = await getDb();
@@ -121,4 +124,11 @@ export async function studioCheckDefaults(actor: Actor): Promise<LayoutSettings>
 export function withStudioDefaults(doc: LayoutDoc, defaults: LayoutSettings): LayoutDoc {
   if (!Object.keys(defaults).length) return doc;
   return { ...doc, settings: { ...defaults, ...doc.settings } };
+}
+
+/** A studio's name for mail and quotes, or a neutral stand-in if it has gone. */
+export async function studioName(studioId: string): Promise<string> {
+  const db = await getDb();
+  const [s] = await db.select({ name: studios.name }).from(studios).where(eq(studios.id, studioId)).limit(1);
+  return s?.name ?? 'Your workshop';
 }

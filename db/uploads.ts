@@ -13,9 +13,10 @@ import fs from 'node:fs';
 import { and, count, desc, eq, inArray, sum } from 'drizzle-orm';
 import { getDb } from './client';
 import { layouts, uploads, users } from './schema';
-import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from './errors';
-import { canEditLayouts, mayReadLayout, type Actor } from './actor';
-import { getLayout } from './layouts';
+import { BadRequestError, ConflictError, NotFoundError } from './errors';
+import type { Actor } from './actor';
+import { loadLayoutFor, rightsOver } from './access';
+import { isId } from './ids';
 import { cleanFileName, withExtension } from '../lib/uploads/file-name';
 import { extensionOf, isImage, uploadKind, type UploadType } from '../lib/uploads/file-type';
 import { listStored, readStored, removeStored, storedExists, storedPath, storeUpload, MAX_UPLOAD_BYTES } from '../lib/uploads/store';
@@ -27,8 +28,6 @@ export type { UploadDto };
 
 /** A layout keeps at most this many reference files (common practice, no source: a tidy folder). */
 export const MAX_UPLOADS_PER_LAYOUT = 40;
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 const uploadColumns = {
   id: uploads.id,
@@ -73,9 +72,12 @@ function toDto(row: Row): UploadDto {
   };
 }
 
-/** The upload's row if the actor may see its layout; NotFoundError otherwise. */
-async function readable(actor: Actor, uploadId: string): Promise<Row> {
-  if (!UUID.test(uploadId)) throw new NotFoundError('No such file.');
+/**
+ * The upload's row if the actor may see its layout (the one rule, applied to the layout the row
+ * joins); NotFoundError otherwise, ForbiddenError with `forEdit` for the layout's client.
+ */
+async function readable(actor: Actor, uploadId: string, forEdit?: string): Promise<Row> {
+  if (!isId(uploadId)) throw new NotFoundError(NO_FILE);
   const db = await getDb();
   const [row] = await db
     .select(uploadColumns)
@@ -84,16 +86,14 @@ async function readable(actor: Actor, uploadId: string): Promise<Row> {
     .leftJoin(users, eq(users.id, uploads.uploadedBy))
     .where(eq(uploads.id, uploadId))
     .limit(1);
-  if (!row || !mayReadLayout(actor, { studioId: row.studioId, clientId: row.layoutClientId })) throw new NotFoundError('No such file.');
-  return row;
+  rightsOver(actor, row && { studioId: row.studioId, clientId: row.layoutClientId }, { notFound: NO_FILE, forEdit });
+  return row!;
 }
 
-function requireEditor(actor: Actor, what: string) {
-  if (!canEditLayouts(actor)) throw new ForbiddenError(`Only the studio's owners and designers can ${what}.`);
-}
+const NO_FILE = 'No such file.';
 
 export async function listUploads(actor: Actor, layoutId: string): Promise<UploadDto[]> {
-  await getLayout(actor, layoutId); // 404 for anyone who may not see the layout
+  await loadLayoutFor(actor, layoutId); // 404 for anyone who may not see the layout
   const db = await getDb();
   const rows = await db
     .select(uploadColumns)
@@ -117,8 +117,7 @@ export interface IncomingFile {
  * for them), then the stream goes to disk with its size and type checked, then the row.
  */
 export async function addUpload(actor: Actor, layoutId: string, file: IncomingFile, limit = MAX_UPLOAD_BYTES): Promise<UploadDto> {
-  const layout = await getLayout(actor, layoutId);
-  if (!layout.canEdit) throw new ForbiddenError("Only the studio's owners and designers can add files.");
+  await loadLayoutFor(actor, layoutId, { forEdit: 'add files' });
   const db = await getDb();
   const [{ n }] = await db.select({ n: count() }).from(uploads).where(eq(uploads.layoutId, layoutId));
   if (n >= MAX_UPLOADS_PER_LAYOUT) throw new ConflictError(`This layout already has ${MAX_UPLOADS_PER_LAYOUT} reference files; delete one first.`);
@@ -162,8 +161,7 @@ export async function openUpload(actor: Actor, uploadId: string): Promise<{ uplo
 
 /** Removes the row first (so no one is offered a file that is going), then the bytes. */
 export async function deleteUpload(actor: Actor, uploadId: string): Promise<void> {
-  const row = await readable(actor, uploadId);
-  requireEditor(actor, 'delete files');
+  const row = await readable(actor, uploadId, 'delete files');
   const db = await getDb();
   await db.delete(uploads).where(eq(uploads.id, row.id));
   await removeStored(row.storedName).catch((err) => log.error('could not remove a stored upload', { error: err }));
@@ -171,14 +169,12 @@ export async function deleteUpload(actor: Actor, uploadId: string): Promise<void
 
 /** Rights for placing an image, checked before the request body is read (404 / 403). */
 export async function checkCanPlace(actor: Actor, uploadId: string): Promise<void> {
-  await readable(actor, uploadId);
-  requireEditor(actor, 'place tracing images');
+  await readable(actor, uploadId, 'place survey photos');
 }
 
 /** Places an image under the plan (or takes it away with null). Photos only. */
 export async function setTracing(actor: Actor, uploadId: string, placement: TracingPlacement | null): Promise<UploadDto> {
-  const row = await readable(actor, uploadId);
-  requireEditor(actor, 'place tracing images');
+  const row = await readable(actor, uploadId, 'place survey photos');
   if (placement && !isImage(row.contentType as UploadType)) {
     throw new BadRequestError('Only photos (JPEG, PNG, WebP) can be placed under the plan; open the PDF drawing to read it.');
   }

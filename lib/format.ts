@@ -48,13 +48,28 @@ export function formatLongDate(d: When): string {
   return longDate.format(asDate(d));
 }
 
-const numberFormats = new Map<number, Intl.NumberFormat>();
+const numberFormats = new Map<string, Intl.NumberFormat>();
 
-/** A number with thousands separators and a fixed count of decimals: `1,234`, `12.5`. */
+function numberFormat(min: number, max: number): Intl.NumberFormat {
+  const key = `${min}:${max}`;
+  let f = numberFormats.get(key);
+  if (!f) numberFormats.set(key, (f = new Intl.NumberFormat(LOCALE, { minimumFractionDigits: min, maximumFractionDigits: max })));
+  return f;
+}
+
+/** A number with thousands separators and at most `digits` decimals: `1,234`, `12.5`. */
 export function formatNumber(n: number, digits = 0): string {
-  let f = numberFormats.get(digits);
-  if (!f) numberFormats.set(digits, (f = new Intl.NumberFormat(LOCALE, { minimumFractionDigits: 0, maximumFractionDigits: digits })));
-  return f.format(n);
+  return numberFormat(0, digits).format(n);
+}
+
+/** A number with thousands separators and exactly `digits` decimals: `1,234.50`, `0.33`. */
+export function formatFixed(n: number, digits: number): string {
+  return numberFormat(digits, digits).format(n);
+}
+
+/** Whole units with thousands separators, rounded half up: `1,235` (masses in kg, energy in Wh). */
+export function formatWhole(n: number): string {
+  return numberFormat(0, 0).format(Math.round(n));
 }
 
 const moneyFormats = new Map<string, Intl.NumberFormat | null>();
@@ -72,5 +87,10 @@ export function formatMoney(minor: number | null | undefined, currency: string):
     }
     moneyFormats.set(code, f);
   }
-  return f ? f.format(minor / 100) : `${(minor / 100).toFixed(2)} ${code}`;
+  return f ? f.format(minor / 100) : `${formatAmount(minor)} ${code}`;
+}
+
+/** Minor units as a plain amount in major units with two decimals, no sign or separators: `1240.00` (a CSV cell, a money field). */
+export function formatAmount(minor: number): string {
+  return (minor / 100).toFixed(2);
 }

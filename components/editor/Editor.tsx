@@ -17,7 +17,7 @@ import { DetailsPanel } from './panels/DetailsPanel';
 import { ChecksPanel } from './panels/ChecksPanel';
 import { foldWaiting, statusCounts } from '@/lib/checks/words';
 import { Toolbar } from './panels/Toolbar';
-import { Tabs } from './panels/Tabs';
+import { Tabs } from '@/components/ui/Tabs';
 import { ShortcutSheet } from './panels/ShortcutSheet';
 import { ConflictDialog } from './panels/ConflictDialog';
 import { SelectionAnnouncer } from './panels/SelectionAnnouncer';
@@ -89,7 +89,9 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
             {menu && <Suspense fallback={null}><ContextMenu at={menu} onClose={closeMenu} /></Suspense>}
           </div>
           <Tabs
-            className="h-64 shrink-0 border-t border-paper-edge"
+            className="flex h-64 min-h-0 shrink-0 flex-col border-t border-paper-edge"
+            panelClassName="min-h-0 flex-1 overflow-auto"
+            label="Checks and section"
             active={bottom}
             onChange={setBottom}
             tabs={[
@@ -102,7 +104,9 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
         </main>
         <aside className="flex w-80 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Details and bay">
           <Tabs
-            className="h-full"
+            className="flex h-full min-h-0 flex-col"
+            panelClassName="min-h-0 flex-1 overflow-auto"
+            label="Details and bay"
             active={side}
             onChange={setSide}
             tabs={[

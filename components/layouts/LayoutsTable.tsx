@@ -3,10 +3,9 @@
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import {
-  createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState,
-} from '@tanstack/react-table';
-import { ArrowDown, ArrowUp, Hexagon, Plus, Search } from 'lucide-react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { Hexagon, Plus, Search } from 'lucide-react';
+import { DataTable } from '@/components/ui/DataTable';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { LayoutSummaryDto } from '@/db/layouts';
 import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
@@ -21,7 +20,6 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
     queryKey: ['layouts', { archived: showArchived }],
     queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>(showArchived ? '/api/layouts?archived=1' : '/api/layouts'),
   });
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
   const [filter, setFilter] = useState('');
 
   const columns = useMemo(
@@ -71,17 +69,6 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
     [canCreate],
   );
 
-  const table = useReactTable({
-    data: query.data?.layouts ?? [],
-    columns,
-    state: { sorting, globalFilter: filter },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setFilter,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  });
-
   return (
     <div>
       <div className="mb-4 flex items-center gap-3">
@@ -119,39 +106,13 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
           {canCreate && <Link href="/layouts/new" className="btn-primary mt-4">Create the first layout</Link>}
         </div>
       ) : (
-        <div className="panel overflow-x-auto">
-          <table className="w-full text-left text-sm">
-            <thead className="border-b border-paper-edge bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id}>
-                  {hg.headers.map((h) => {
-                    const sorted = h.column.getIsSorted();
-                    return (
-                      <th key={h.id} className="px-3 py-2 font-medium" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : 'none'}>
-                        <button type="button" className="inline-flex items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          {sorted === 'asc' ? <ArrowUp size={12} aria-hidden="true" /> : sorted === 'desc' ? <ArrowDown size={12} aria-hidden="true" /> : null}
-                        </button>
-                      </th>
-                    );
-                  })}
-                </tr>
-              ))}
-            </thead>
-            <tbody>
-              {table.getRowModel().rows.map((row) => (
-                <tr key={row.id} className="border-b border-paper-edge last:border-0 hover:bg-paper-deep/50">
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                  ))}
-                </tr>
-              ))}
-              {table.getRowModel().rows.length === 0 && (
-                <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-ink-soft">No layout matches “{filter}”.</td></tr>
-              )}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          data={query.data.layouts}
+          columns={columns}
+          initialSorting={[{ id: 'updatedAt', desc: true }]}
+          filter={filter}
+          noMatch={`No layout matches “${filter}”.`}
+        />
       )}
     </div>
   );

@@ -1,27 +1,33 @@
 'use client';
 /**
- * The build-plan page's working area: tabs for Weight, Power, Water, Gas and ventilation,
- * Heating and insulation (each a form over `doc.systems` with its results and findings), the
- * parts list, the cut list and the quote. It keeps the draft document and the saved one, runs
- * the system checks on the draft as it changes, and saves the draft's systems with the layout
- * version (If-Match); when someone saved first it says so and offers to put these entries on
- * their version or to open the saved version. Never touches modules or the bay: those are the editor's.
+ * The build-plan page: tabs for Weight, Power, Water, Gas and ventilation, Heating and insulation
+ * (each a form over `doc.systems` with its results and findings), the parts list, the cut list and
+ * the quote. The document lives in the editor's store, as in the editor: every form edit is one
+ * `updateSystems` (one undo entry; typing merges), autosave saves it with the layout version
+ * (If-Match) through the one save function, and a conflict opens the editor's dialog, which here
+ * also offers to put these entries on their version. Never touches modules or the bay: those are
+ * the editor's.
  */
-import { useCallback, useEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
 import dynamic from 'next/dynamic';
-import { CircleAlert, CircleX, Save } from 'lucide-react';
-import { toast } from 'sonner';
+import { useStore } from 'zustand';
+import { CircleAlert, CircleX } from 'lucide-react';
 import type { LayoutDoc, LengthUnit } from '@/lib/layout';
+import { BUILD_PLAN_CAUTION } from '@/lib/layout/cautions';
+import { createEditorStore, isDirty } from '@/components/editor/store/editorStore';
+import { EditorStoreProvider } from '@/components/editor/store/EditorStoreContext';
+import { useAutosave } from '@/components/editor/api/useAutosave';
+import { useEditorKeyboard } from '@/components/editor/commands/useEditorKeyboard';
+import { CommandButton } from '@/components/editor/panels/CommandButton';
+import { SaveIndicator } from '@/components/editor/panels/SaveIndicator';
 import { systemChecks } from '@/lib/checks/systems';
 import type { Finding } from '@/lib/checks/types';
 import type { CutOptions } from './cut/CutListPanel';
-import { PlanTabs } from './PlanTabs';
-import { saveLayoutDoc, stableJson, withSystems, type SaveOutcome } from './saveLayout';
+import { Tabs } from '@/components/ui/Tabs';
 import type { PanelProps } from './panelProps';
 import { BUILD_TABS, type BuildTab } from './buildTabs';
 import { ShowTabContext } from './FindingList';
 import { foldWaiting, statusCounts } from '@/lib/checks/words';
-import { fieldName } from '@/lib/layout/field-names';
 
 // Each tab's panel is its own chunk, fetched when the tab is first opened (the page's own tab
 // comes with the page). A visited form stays mounted, hidden, so half-typed fields survive.
@@ -34,6 +40,8 @@ const HeatPanel = dynamic(() => import('./heat/HeatPanel').then((m) => m.HeatPan
 const PartsListPanel = dynamic(() => import('./parts/PartsListPanel').then((m) => m.PartsListPanel), { loading: loadingTab });
 const CutListPanel = dynamic(() => import('./cut/CutListPanel').then((m) => m.CutListPanel), { loading: loadingTab });
 const QuotePanel = dynamic(() => import('./quote/QuotePanel').then((m) => m.QuotePanel), { loading: loadingTab });
+// Shown only when someone saved first.
+const ConflictDialog = dynamic(() => import('@/components/editor/panels/ConflictDialog').then((m) => m.ConflictDialog));
 
 
 const TOPIC: Record<BuildTab, { title: string; prefix?: string }> = {
@@ -49,6 +57,7 @@ const TOPIC: Record<BuildTab, { title: string; prefix?: string }> = {
 
 export interface BuildPlannerProps {
   layoutId: string;
+  layoutName: string;
   initialDoc: LayoutDoc;
   initialVersion: number;
   canEdit: boolean;
@@ -57,7 +66,8 @@ export interface BuildPlannerProps {
   initialTab?: BuildTab;
 }
 
-type Conflict = Extract<SaveOutcome, { kind: 'conflict' }>['theirs'];
+/** The build plan's own commands: the editor's, limited to what a form page does. */
+const PLAN_COMMANDS = ['edit.undo', 'edit.redo', 'edit.save'] as const;
 
 const noSubscription = () => () => undefined;
 
@@ -68,8 +78,14 @@ function counts(findings: Finding[], prefix: string) {
 
 export function BuildPlanner(props: BuildPlannerProps) {
   const { layoutId, canEdit, units, clientName } = props;
-  const [saved, setSaved] = useState({ doc: props.initialDoc, version: props.initialVersion });
-  const [draft, setDraft] = useState(props.initialDoc);
+  const [store] = useState(() => createEditorStore({ doc: props.initialDoc, version: props.initialVersion, readOnly: !canEdit, units }));
+  const doc = useStore(store, (s) => s.doc);
+  const savedDoc = useStore(store, (s) => s.savedDoc);
+  const version = useStore(store, (s) => s.version);
+  const unsaved = useStore(store, isDirty);
+  const save = useAutosave(store, layoutId, canEdit);
+  useEditorKeyboard(store, PLAN_COMMANDS);
+
   const [formKey, setFormKey] = useState(0);
   const [tab, setTab] = useState<BuildTab>(props.initialTab ?? 'weight');
   const [visited, setVisited] = useState<ReadonlySet<BuildTab>>(() => new Set([props.initialTab ?? 'weight']));
@@ -78,24 +94,29 @@ export function BuildPlanner(props: BuildPlannerProps) {
     setVisited((v) => (v.has(t) ? v : new Set(v).add(t)));
   };
   const [invalid, setInvalid] = useState<Set<string>>(new Set());
-  const [saving, setSaving] = useState(false);
-  const [conflict, setConflict] = useState<Conflict | null>(null);
-  const [refused, setRefused] = useState<Extract<SaveOutcome, { kind: 'invalid' }> | null>(null);
   const [cut, setCut] = useState<CutOptions>({ kerfMm: 3, trimMm: 0, respectGrain: true });
 
   // False in the server render and during hydration, true once React runs here (tests wait for it).
   const hydrated = useSyncExternalStore(noSubscription, () => true, () => false);
-  const findings = useMemo(() => systemChecks(draft), [draft]);
-  const dirty = useMemo(() => stableJson(draft.systems ?? null) !== stableJson(saved.doc.systems ?? null), [draft, saved]);
+  const findings = useMemo(() => systemChecks(doc), [doc]);
+  const dirty = unsaved || save.status === 'saving';
 
-  useEffect(() => {
-    if (!dirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
-
-  const onSystems = useCallback((patch: Parameters<PanelProps['onSystems']>[0]) => setDraft((d) => withSystems(d, patch)), []);
+  // A form's own edit goes to the store; any other change of the inputs (undo, redo, their version
+  // after a conflict) reloads the forms, which read their values once, at mount.
+  const fromForm = useRef(false);
+  useEffect(() => store.subscribe((s, prev) => {
+    if (s.doc.systems === prev.doc.systems || fromForm.current) return;
+    setInvalid(new Set());
+    setFormKey((k) => k + 1);
+  }), [store]);
+  const onSystems = useCallback((patch: Parameters<PanelProps['onSystems']>[0]) => {
+    fromForm.current = true;
+    try {
+      store.getState().updateSystems(patch);
+    } finally {
+      fromForm.current = false;
+    }
+  }, [store]);
   const validity = useMemo(() => {
     const make = (id: string) => (ok: boolean) => setInvalid((s) => {
       if (ok === !s.has(id)) return s;
@@ -107,38 +128,14 @@ export function BuildPlanner(props: BuildPlannerProps) {
     return Object.fromEntries(BUILD_TABS.map((t) => [t, make(t)])) as Record<BuildTab, (ok: boolean) => void>;
   }, []);
 
-  const save = async (doc: LayoutDoc, version: number) => {
-    setSaving(true);
-    setRefused(null);
-    const out = await saveLayoutDoc(layoutId, doc, version);
-    setSaving(false);
-    if (out.kind === 'saved') {
-      setSaved({ doc, version: out.version });
-      setConflict(null);
-      toast.success(`Build plan saved (version ${out.version})`);
-    } else if (out.kind === 'conflict') setConflict(out.theirs);
-    else if (out.kind === 'invalid') setRefused(out);
-    else toast.error(out.message);
-  };
+  /** After a conflict: their drawing, with my build-plan entries put on it as one edit (undoable), which then autosaves. */
+  const keepMine = () => save.takeTheirs((mine) => {
+    const theirs = store.getState().doc.systems ?? {};
+    const keys = new Set([...Object.keys(theirs), ...Object.keys(mine.systems ?? {})]) as Set<keyof NonNullable<LayoutDoc['systems']>>;
+    store.getState().updateSystems(Object.fromEntries([...keys].map((k) => [k, mine.systems?.[k]])), 'Put my build plan on their version');
+  });
 
-  const keepMineOnTheirs = () => {
-    if (!conflict) return;
-    const merged = { ...conflict.doc, systems: draft.systems };
-    if (!merged.systems) delete merged.systems;
-    setDraft(merged);
-    setSaved({ doc: conflict.doc, version: conflict.version });
-    void save(merged, conflict.version);
-  };
-  const loadTheirs = () => {
-    if (!conflict) return;
-    setSaved({ doc: conflict.doc, version: conflict.version });
-    setDraft(conflict.doc);
-    setInvalid(new Set());
-    setFormKey((k) => k + 1);
-    setConflict(null);
-  };
-
-  const panelProps = (t: BuildTab): PanelProps => ({ doc: draft, units, readOnly: !canEdit, onSystems, onValidity: validity[t], findings });
+  const panelProps = (t: BuildTab): PanelProps => ({ doc, units, readOnly: !canEdit, onSystems, onValidity: validity[t], findings });
   const panels: Partial<Record<BuildTab, ReactNode>> = {
     weight: <WeightPanel {...panelProps('weight')} />,
     power: <PowerPanel {...panelProps('power')} />,
@@ -164,49 +161,54 @@ export function BuildPlanner(props: BuildPlannerProps) {
   });
 
   return (
+    <EditorStoreProvider store={store}>
+    <header>
+      <h1 className="text-xl font-semibold">Build plan · {props.layoutName}</h1>
+      <p className="text-sm text-ink-soft" data-testid="build-plan-facts">
+        Bay <span className="font-mono">{doc.bay.length} × {doc.bay.width} × {doc.bay.height} mm</span> · version <span className="font-mono" data-testid="saved-version">{version}</span>
+        {clientName ? ` · for ${clientName}` : ''}
+        {canEdit ? '' : ' · view only'}
+      </p>
+      {doc.systems?.note && <p className="mt-1 text-sm text-ink-soft">{doc.systems.note}</p>}
+      <p className="mt-1 text-xs text-ink-soft">{BUILD_PLAN_CAUTION}</p>
+    </header>
     <div className="space-y-4" data-testid="build-planner" data-dirty={dirty} data-hydrated={hydrated}>
       {canEdit && (
         <div className="sticky top-0 z-10 flex flex-wrap items-center gap-3 border-b border-paper-edge bg-paper py-2">
-          <button type="button" className="btn-primary" disabled={!dirty || saving || invalid.size > 0 || !!conflict} onClick={() => save(draft, saved.version)}>
-            <Save size={14} aria-hidden="true" /> {saving ? 'Saving…' : 'Save build plan'}
-          </button>
-          <span className="text-sm text-ink-soft" role="status" data-testid="save-state">
-            {invalid.size > 0 ? `Correct the marked fields in ${[...invalid].map((t) => TOPIC[t as BuildTab].title).join(', ')} to save.`
-              : dirty ? 'Unsaved changes.' : `Saved · version ${saved.version}`}
-          </span>
+          <CommandButton id="edit.undo" withLabel />
+          <CommandButton id="edit.redo" withLabel />
+          <SaveIndicator status={save.status} version={version} detail={save.lastError} />
+          {invalid.size > 0 && (
+            <span className="text-sm text-brick" role="status" data-testid="fields-to-correct">
+              Correct the marked fields in {[...invalid].map((t) => TOPIC[t as BuildTab].title).join(', ')}: until then their last good values are the ones saved.
+            </span>
+          )}
         </div>
       )}
-      {conflict && (
-        <div role="alert" className="rounded-sm border border-brick bg-brick-light p-3 text-sm" data-testid="conflict">
-          <p className="font-semibold">Someone saved this layout after you opened it (now version {conflict.version}{conflict.updatedBy ? `, by ${conflict.updatedBy}` : ''}).</p>
-          <p className="mt-1">Your build-plan entries are still here. Their drawing may have changed modules, so check the results after either choice.</p>
-          <div className="mt-2 flex flex-wrap gap-2">
-            <button type="button" className="btn-primary" onClick={keepMineOnTheirs}>Put my build plan on their version and save</button>
-            <button type="button" className="btn-quiet" onClick={loadTheirs}>Discard my entries and open the saved version</button>
-          </div>
-        </div>
-      )}
-      {refused && (
-        <div role="alert" className="rounded-sm border border-brick bg-brick-light p-3 text-sm">
-          <p className="font-semibold">{refused.message}</p>
-          <ul className="mt-1 list-disc pl-5 text-xs">{refused.issues.map((i, n) => <li key={n}>{fieldName(i.path)}: {i.message}</li>)}</ul>
-        </div>
+      {canEdit && save.conflict && (
+        <ConflictDialog
+          conflict={save.conflict}
+          onTakeTheirs={() => save.takeTheirs()}
+          onClose={save.closeConflict}
+          keepMine={{ label: 'Put my build plan on their version', run: keepMine }}
+        />
       )}
       <ShowTabContext.Provider value={openTab}>
-      <PlanTabs tabs={tabs} active={tab} onChange={(t) => openTab(t as BuildTab)}>
+      <Tabs className="panel" label="Build plan" tabs={tabs} active={tab} onChange={(t) => openTab(t as BuildTab)}>
         <div className="p-4" key={formKey}>
           {/* Forms stay mounted (hidden) so a half-typed field survives a tab change. */}
           {(['weight', 'power', 'water', 'gas', 'heat'] as const).filter((t) => visited.has(t)).map((t) => (
             <div key={t} hidden={tab !== t}>{panels[t]}</div>
           ))}
-          {tab === 'parts' && canEdit && <PartsListPanel layoutId={layoutId} doc={draft} cut={cut} dirty={dirty} />}
-          {tab === 'cut' && <CutListPanel doc={draft} options={cut} onOptions={setCut} />}
+          {tab === 'parts' && canEdit && <PartsListPanel layoutId={layoutId} doc={doc} cut={cut} dirty={dirty} />}
+          {tab === 'cut' && <CutListPanel doc={doc} options={cut} onOptions={setCut} />}
           {tab === 'quote' && (canEdit
-            ? <QuotePanel layoutId={layoutId} savedDoc={saved.doc} savedVersion={saved.version} clientName={clientName} dirty={dirty} cut={cut} canSend={canEdit} />
+            ? <QuotePanel layoutId={layoutId} savedDoc={savedDoc} savedVersion={version} clientName={clientName} dirty={dirty} cut={cut} canSend={canEdit} />
             : <p className="text-sm">Your workshop&apos;s quote for this layout is on <a className="text-copper underline" href={`/layouts/${layoutId}/quote`}>the quote page</a>.</p>)}
         </div>
-      </PlanTabs>
+      </Tabs>
       </ShowTabContext.Provider>
     </div>
+    </EditorStoreProvider>
   );
 }

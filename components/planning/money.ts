@@ -3,6 +3,8 @@
  * currency sign, typed as `12.50`, `£12.50` or `12,50`. Pure TypeScript. Must never turn text
  * that is not an amount into zero.
  */
+import { formatAmount } from '@/lib/format';
+
 export { formatMoney } from '@/lib/format';
 
 /** Minor units from `12.50`, `£12.50`, `€ 12,50`, `1,250.00`; null when it is not an amount. */
@@ -16,7 +18,7 @@ export function parseMoneyMinor(text: string): number | null {
 }
 
 export function moneyText(minor: number | undefined): string {
-  return minor === undefined ? '' : (minor / 100).toFixed(2);
+  return minor === undefined ? '' : formatAmount(minor);
 }
 
 /** A quantity with its unit as a reader says it: `1 sheet`, `3 sheets`, `12 m`, `190 Ah`; bare for `each`. */

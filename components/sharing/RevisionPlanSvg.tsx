@@ -11,12 +11,13 @@ import type { Arrangement, LayoutDoc, Module } from '@/lib/layout/schema';
 import { moduleName } from '@/lib/layout/revision-words';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
 import { boundingRect, deltaTriangle, rectFromExtent, revisionCloud, type Rect } from '@/lib/geometry';
+import { palette } from '@/lib/look';
 
 export type PlanSide = 'from' | 'to';
 
-const INK = '#1E2A2F';
-const FAINT = '#8A969B';
-const CLOUD = '#A4522A';
+const INK = palette.ink;
+const FAINT = palette.inkFaint;
+const CLOUD = palette.copper;
 
 function wallThickness(doc: LayoutDoc): number {
   return doc.buildUp.walls.reduce((t, l) => t + l.thickness, 0);
@@ -73,7 +74,7 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
         {/* lined interior */}
         {wall > 0 && <rect x={0} y={wall} width={length} height={Math.max(0, width - 2 * wall)} fill="none" stroke={FAINT} strokeWidth={font / 12} strokeDasharray={`${font / 2} ${font / 3}`} />}
         {doc.bay.wheelArches.map((a, i) => (
-          <rect key={i} x={a.x} y={a.side === 'left' ? 0 : width - a.width} width={a.length} height={a.width} fill="#ECE7DA" stroke={FAINT} strokeWidth={font / 12} />
+          <rect key={i} x={a.x} y={a.side === 'left' ? 0 : width - a.width} width={a.length} height={a.width} fill={palette.paperDeep} stroke={FAINT} strokeWidth={font / 12} />
         ))}
         {/* the cab is at x = 0 */}
         <path d={`M ${-pad * 0.2} ${width / 2 - font} L ${-pad * 0.7} ${width / 2} L ${-pad * 0.2} ${width / 2 + font} Z`} fill={INK} />
@@ -84,7 +85,7 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
         ))}
         {modules.map((m) => (
           <g key={m.id} data-module-id={m.id}>
-            <rect x={m.x} y={m.y} width={m.length} height={m.width} fill="#F5F2EA" stroke={INK} strokeWidth={font / 12} />
+            <rect x={m.x} y={m.y} width={m.length} height={m.width} fill={palette.paper} stroke={INK} strokeWidth={font / 12} />
             <text x={m.x + m.length / 2} y={m.y + m.width / 2} fontSize={font} textAnchor="middle" dominantBaseline="middle" fill={INK} fontFamily="var(--font-text), sans-serif">
               {moduleName(m)}
             </text>
@@ -98,7 +99,7 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
           return (
             <g key={`cloud-${k.id}`} data-cloud={k.id} data-mark={k.what}>
               <polygon points={pointsAttr(cloud)} fill="none" stroke={CLOUD} strokeWidth={font / 7} strokeLinejoin="round" />
-              <polygon points={pointsAttr(deltaTriangle(cx, cy, tri))} fill="#FFFFFF" stroke={CLOUD} strokeWidth={font / 8} strokeLinejoin="round" />
+              <polygon points={pointsAttr(deltaTriangle(cx, cy, tri))} fill={palette.white} stroke={CLOUD} strokeWidth={font / 8} strokeLinejoin="round" />
               <text x={cx} y={cy + tri * 0.08} fontSize={tri * (letter.length > 1 ? 0.38 : 0.5)} textAnchor="middle" dominantBaseline="middle" fill={CLOUD} fontFamily="var(--font-mono), monospace">{letter}</text>
               {k.what === 'removed' && (
                 <text x={k.area.x0 + (k.area.x1 - k.area.x0) / 2} y={k.area.y0 + (k.area.y1 - k.area.y0) / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill={FAINT} fontFamily="var(--font-text), sans-serif">

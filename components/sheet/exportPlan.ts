@@ -45,7 +45,7 @@ export function scaleBarMm(pxPerMm: number, maxPx: number): number {
 
 function drawTitleStrip(ctx: CanvasRenderingContext2D, width: number, top: number, r: number, t: PictureTitle): void {
   const h = TITLE_STRIP_PX * r;
-  ctx.fillStyle = '#FFFFFF';
+  ctx.fillStyle = theme.white;
   ctx.fillRect(0, top, width, h);
   ctx.strokeStyle = theme.ink;
   ctx.lineWidth = 1.5 * r;
@@ -72,7 +72,7 @@ function drawTitleStrip(ctx: CanvasRenderingContext2D, width: number, top: numbe
   const y0 = top + 24 * r;
   const cells = 4;
   for (let i = 0; i < cells; i++) {
-    ctx.fillStyle = i % 2 ? '#FFFFFF' : theme.ink;
+    ctx.fillStyle = i % 2 ? theme.white : theme.ink;
     ctx.fillRect(x0 + (i * barPx) / cells, y0, barPx / cells, 5 * r);
   }
   ctx.strokeStyle = theme.ink;

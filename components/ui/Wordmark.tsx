@@ -1,12 +1,14 @@
 // Baywright's mark: a bay in plan, bare-metal outline with a copper dimension tick above it.
+import { palette } from '@/lib/look';
+
 export function Wordmark({ className = '' }: { className?: string }) {
   return (
     <span className={`inline-flex items-center gap-2 font-semibold tracking-tight ${className}`}>
       <svg width="26" height="18" viewBox="0 0 26 18" aria-hidden="true">
-        <path d="M2 4h22M2 2.5v3M24 2.5v3" stroke="#A4522A" strokeWidth="1.2" fill="none" />
-        <rect x="2" y="8" width="22" height="9" fill="none" stroke="#1E2A2F" strokeWidth="1.8" />
-        <rect x="4" y="10" width="7" height="5" fill="none" stroke="#1E2A2F" strokeWidth="0.8" />
-        <path d="M14 10l4 5M17 10l4 5" stroke="#1E2A2F" strokeWidth="0.6" />
+        <path d="M2 4h22M2 2.5v3M24 2.5v3" stroke={palette.copper} strokeWidth="1.2" fill="none" />
+        <rect x="2" y="8" width="22" height="9" fill="none" stroke={palette.ink} strokeWidth="1.8" />
+        <rect x="4" y="10" width="7" height="5" fill="none" stroke={palette.ink} strokeWidth="0.8" />
+        <path d="M14 10l4 5M17 10l4 5" stroke={palette.ink} strokeWidth="0.6" />
       </svg>
       Baywright
     </span>

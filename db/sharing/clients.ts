@@ -8,7 +8,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { getDb } from '../client';
 import { layouts, memberships, users } from '../schema';
 import type { Actor } from '../actor';
-import { requireEditor } from './access';
+import { requireWorkshop, visibleLayouts } from '../access';
 import { layoutStates, type LayoutState } from './revisions';
 
 export interface ClientDto {
@@ -20,7 +20,7 @@ export interface ClientDto {
 }
 
 export async function listClients(actor: Actor): Promise<ClientDto[]> {
-  requireEditor(actor, 'see the client list');
+  requireWorkshop(actor, 'see the client list');
   const db = await getDb();
   const people = await db
     .select({ userId: users.id, name: users.name, email: users.email, joinedAt: memberships.createdAt })
@@ -31,7 +31,7 @@ export async function listClients(actor: Actor): Promise<ClientDto[]> {
   const shared = await db
     .select({ id: layouts.id, name: layouts.name, clientId: layouts.clientId })
     .from(layouts)
-    .where(eq(layouts.studioId, actor.studioId))
+    .where(visibleLayouts(actor))
     .orderBy(asc(layouts.name));
   const states = await layoutStates(shared.map((l) => l.id));
   return people.map((p) => ({
@@ -47,9 +47,9 @@ export async function listClients(actor: Actor): Promise<ClientDto[]> {
 
 /** Layouts with no client yet: what an invitation may share. */
 export async function unsharedLayouts(actor: Actor): Promise<{ id: string; name: string }[]> {
-  requireEditor(actor, 'invite clients');
+  requireWorkshop(actor, 'invite clients');
   const db = await getDb();
   const rows = await db.select({ id: layouts.id, name: layouts.name, clientId: layouts.clientId }).from(layouts)
-    .where(eq(layouts.studioId, actor.studioId)).orderBy(asc(layouts.name));
+    .where(visibleLayouts(actor)).orderBy(asc(layouts.name));
   return rows.filter((r) => !r.clientId).map(({ id, name }) => ({ id, name }));
 }

@@ -14,7 +14,8 @@ import { comments } from '../schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../errors';
 import type { Actor, StudioRole } from '../actor';
 import { ARRANGEMENTS, type Arrangement } from '../../lib/layout/schema';
-import { layoutFor, UUID, type LayoutAccess } from './access';
+import { loadLayoutFor, type LayoutAccessWithDoc } from '../access';
+import { isId } from '../ids';
 
 export const COMMENT_MAX = 2000;
 /** How far outside the bare-metal outline a mark-up's point may sit (a note about the cab or the rear door). */
@@ -72,7 +73,7 @@ function threads(rows: Row[], actor: Actor): ThreadDto[] {
 }
 
 export async function listThreads(actor: Actor, layoutId: string): Promise<ThreadDto[]> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   const db = await getDb();
   const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
   return threads(rows, actor);
@@ -89,7 +90,7 @@ function checkBody(body: string): string {
   return text;
 }
 
-function checkPin(layout: LayoutAccess, x: number, y: number): void {
+function checkPin(layout: LayoutAccessWithDoc, x: number, y: number): void {
   const { length, width } = layout.doc.bay;
   if (x < -PIN_MARGIN_MM || x > length + PIN_MARGIN_MM || y < -PIN_MARGIN_MM || y > width + PIN_MARGIN_MM) {
     throw new BadRequestError(`Place the mark-up on the plan: x from 0 to ${length} mm, y from 0 to ${width} mm.`);
@@ -97,8 +98,8 @@ function checkPin(layout: LayoutAccess, x: number, y: number): void {
 }
 
 /** Returns the thread the new comment belongs to, and who else should hear of it. */
-export async function addComment(actor: Actor, layoutId: string, input: NewComment): Promise<{ thread: ThreadDto; layout: LayoutAccess; commentId: string; threadAuthorId: string | null }> {
-  const layout = await layoutFor(actor, layoutId);
+export async function addComment(actor: Actor, layoutId: string, input: NewComment): Promise<{ thread: ThreadDto; layout: LayoutAccessWithDoc; commentId: string; threadAuthorId: string | null }> {
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true });
   const body = checkBody(input.body);
   const db = await getDb();
   let rootId: string;
@@ -114,7 +115,7 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
     rootId = row.id;
     commentId = row.id;
   } else {
-    if (!UUID.test(input.parentId)) throw new BadRequestError('That mark-up is not on this layout.');
+    if (!isId(input.parentId)) throw new BadRequestError('That mark-up is not on this layout.');
     const [parent] = await db.select().from(comments).where(and(eq(comments.id, input.parentId), eq(comments.layoutId, layoutId))).limit(1);
     if (!parent) throw new BadRequestError('That mark-up is not on this layout.');
     // Replies hang off the thread's first comment: threads are one level deep.
@@ -131,7 +132,7 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
 
 /** Marks a thread settled (or open again); the workshop and the layout's client may both. */
 export async function setSettled(actor: Actor, layoutId: string, commentId: string, settled: boolean): Promise<ThreadDto> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
   if (row.parentId) throw new BadRequestError('Settle the thread from its first note.');
   const db = await getDb();
@@ -143,7 +144,7 @@ export async function setSettled(actor: Actor, layoutId: string, commentId: stri
 }
 
 async function commentOf(layoutId: string, commentId: string): Promise<Row> {
-  if (!UUID.test(commentId)) throw new NotFoundError('No such mark-up.');
+  if (!isId(commentId)) throw new NotFoundError('No such mark-up.');
   const db = await getDb();
   const [row] = await db.select().from(comments).where(and(eq(comments.id, commentId), eq(comments.layoutId, layoutId))).limit(1);
   if (!row) throw new NotFoundError('No such mark-up.');
@@ -158,7 +159,7 @@ async function threadOf(actor: Actor, layoutId: string, rootId: string): Promise
 
 /** The author changes their own words; the note keeps its place, point and replies. */
 export async function editComment(actor: Actor, layoutId: string, commentId: string, body: string): Promise<ThreadDto> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
   if (row.authorId !== actor.userId) throw new ForbiddenError('Only its author can change a mark-up.');
   const text = checkBody(body);
@@ -172,7 +173,7 @@ export async function editComment(actor: Actor, layoutId: string, commentId: str
  * a thread's first note removes the thread with its replies and its symbol.
  */
 export async function deleteComment(actor: Actor, layoutId: string, commentId: string): Promise<{ removedThread: boolean }> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   const row = await commentOf(layoutId, commentId);
   if (row.authorId !== actor.userId && actor.role !== 'owner') throw new ForbiddenError('Only its author or the studio owner can remove a mark-up.');
   const db = await getDb();

@@ -14,7 +14,8 @@ import { settingsSchema, type LayoutDoc } from '../../lib/layout/schema';
 import { diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
 import { runJob } from '../../lib/workers/pool';
 import { AS_LAST_SAVED } from '../../lib/layout/drawing-issue';
-import { layoutFor, UUID } from './access';
+import { loadLayoutFor } from '../access';
+import { isId } from '../ids';
 import { getRevision, revisionIdByLetter } from './revisions';
 
 export interface ComparedSide {
@@ -34,16 +35,16 @@ export interface ComparisonDto {
 
 async function side(actor: Actor, layoutId: string, ref: string): Promise<Omit<ComparedSide, 'ok'>> {
   if (ref === 'current') {
-    const layout = await layoutFor(actor, layoutId);
+    const layout = await loadLayoutFor(actor, layoutId, { withDoc: true });
     return { label: AS_LAST_SAVED, letter: null, at: new Date().toISOString(), doc: layout.doc };
   }
-  const id = UUID.test(ref) ? ref : await revisionIdByLetter(actor, layoutId, ref.toUpperCase());
+  const id = isId(ref) ? ref : await revisionIdByLetter(actor, layoutId, ref.toUpperCase());
   const rev = await getRevision(actor, layoutId, id);
   return { label: `Revision ${rev.letter}`, letter: rev.letter, at: rev.issuedAt, doc: rev.doc };
 }
 
 export async function compareRevisions(actor: Actor, layoutId: string, fromRef: string, toRef: string): Promise<ComparisonDto> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   if (fromRef.length > 64 || toRef.length > 64) throw new NotFoundError('No such revision.');
   const [from, to] = await Promise.all([side(actor, layoutId, fromRef), side(actor, layoutId, toRef)]);
   const db = await getDb();

@@ -20,7 +20,8 @@ import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '.
 import type { Actor, StudioRole } from '../actor';
 import { normaliseEmail } from '../accounts';
 import { hashPassword } from '../../lib/auth/password';
-import { requireEditor, UUID } from './access';
+import { requireWorkshop } from '../access';
+import { isId } from '../ids';
 import { hashToken, isTokenShaped, newToken } from './tokens';
 import { isUniqueViolation } from './pg-errors';
 
@@ -88,7 +89,7 @@ function toDto(r: Awaited<ReturnType<typeof rows>>[number]): InvitationDto {
 }
 
 export async function listInvitations(actor: Actor): Promise<InvitationDto[]> {
-  requireEditor(actor, 'see invitations');
+  requireWorkshop(actor, 'see invitations');
   return (await rows(actor.studioId)).map(toDto);
 }
 
@@ -122,7 +123,7 @@ async function assertInvitable(actor: Actor, email: string, layoutId: string | n
     .limit(1);
   if (member) throw new ConflictError(`That address already belongs to a ${member.role} of this studio.`);
   if (layoutId) {
-    if (!UUID.test(layoutId)) throw new BadRequestError('Choose one of this studio’s layouts.');
+    if (!isId(layoutId)) throw new BadRequestError('Choose one of this studio’s layouts.');
     const [layout] = await db.select({ studioId: layouts.studioId, clientId: layouts.clientId }).from(layouts).where(eq(layouts.id, layoutId)).limit(1);
     if (!layout || layout.studioId !== actor.studioId) throw new BadRequestError('Choose one of this studio’s layouts.');
     if (layout.clientId) throw new ConflictError('That layout is already shared with another client.');
@@ -140,7 +141,7 @@ async function studioAndInviter(actor: Actor) {
  * revoked first, so only the newest mail works.
  */
 export async function createInvitation(actor: Actor, input: NewInvitation, now = new Date()): Promise<IssuedInvitation> {
-  requireEditor(actor, 'invite clients');
+  requireWorkshop(actor, 'invite clients');
   const role = input.role ?? 'client';
   if (role !== 'client' && actor.role !== 'owner') throw new ForbiddenError('Only the studio owner can invite designers.');
   if (role !== 'client' && input.layoutId) throw new BadRequestError('Layouts are shared with clients; invite a designer without one.');
@@ -169,8 +170,8 @@ export async function createInvitation(actor: Actor, input: NewInvitation, now =
 }
 
 async function ownRow(actor: Actor, id: string): Promise<Row> {
-  requireEditor(actor, 'manage invitations');
-  if (!UUID.test(id)) throw new NotFoundError('No such invitation.');
+  requireWorkshop(actor, 'manage invitations');
+  if (!isId(id)) throw new NotFoundError('No such invitation.');
   const db = await getDb();
   const [row] = await db.select().from(invitations).where(and(eq(invitations.id, id), eq(invitations.studioId, actor.studioId))).limit(1);
   if (!row) throw new NotFoundError('No such invitation.');

@@ -10,7 +10,7 @@ import { getDb } from '../client';
 import { outboxMail } from '../schema';
 import { ForbiddenError, NotFoundError } from '../errors';
 import type { Actor } from '../actor';
-import { UUID } from './access';
+import { isId } from '../ids';
 
 export interface ReceivedMail {
   studioId: string | null;
@@ -38,7 +38,7 @@ export interface OutboxMailDto extends OutboxItemDto {
 /** A stored message, whatever its size, is capped by the mail server's own limit first. */
 export async function storeReceivedMail(mail: ReceivedMail): Promise<string> {
   const db = await getDb();
-  const studioId = mail.studioId && UUID.test(mail.studioId) ? mail.studioId : null;
+  const studioId = mail.studioId && isId(mail.studioId) ? mail.studioId : null;
   const [row] = await db
     .insert(outboxMail)
     .values({ ...mail, studioId, subject: mail.subject.slice(0, 998) })
@@ -64,7 +64,7 @@ export async function listOutbox(actor: Actor, limit = 200): Promise<OutboxItemD
 
 async function ownMail(actor: Actor, id: string) {
   requireOwner(actor);
-  if (!UUID.test(id)) throw new NotFoundError('No such message.');
+  if (!isId(id)) throw new NotFoundError('No such message.');
   const db = await getDb();
   const [row] = await db.select().from(outboxMail).where(and(eq(outboxMail.id, id), eq(outboxMail.studioId, actor.studioId))).limit(1);
   if (!row) throw new NotFoundError('No such message.');

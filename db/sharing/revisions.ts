@@ -13,7 +13,9 @@ import { revisionDecisions, revisions, users } from '../schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '../errors';
 import type { Actor } from '../actor';
 import type { LayoutDoc } from '../../lib/layout/schema';
-import { editableLayoutFor, layoutFor, UUID } from './access';
+import { loadLayoutFor } from '../access';
+import { isId } from '../ids';
+import { formatDate } from '../../lib/format';
 import { isUniqueViolation } from './pg-errors';
 
 import type { LayoutState, RevisionState } from '../../lib/layout/drawing-issue';
@@ -115,14 +117,14 @@ async function rowsFor(layoutId: string, revisionId?: string) {
 
 /** Newest first. Anyone who may see the layout may see its revisions. */
 export async function listRevisions(actor: Actor, layoutId: string): Promise<RevisionDto[]> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   const { revs, decisions, latestSeq } = await rowsFor(layoutId);
   return revs.map((r) => toDto(r, decisions.filter((d) => d.revisionId === r.id), latestSeq));
 }
 
 export async function getRevision(actor: Actor, layoutId: string, revisionId: string): Promise<RevisionWithDocDto> {
-  await layoutFor(actor, layoutId);
-  if (!UUID.test(revisionId)) throw new NotFoundError('No such revision.');
+  await loadLayoutFor(actor, layoutId);
+  if (!isId(revisionId)) throw new NotFoundError('No such revision.');
   const { revs, decisions, latestSeq } = await rowsFor(layoutId, revisionId);
   const row = revs[0];
   if (!row) throw new NotFoundError('No such revision.');
@@ -131,7 +133,7 @@ export async function getRevision(actor: Actor, layoutId: string, revisionId: st
 
 /** Looks a revision up by its letter (for addresses such as ?from=A&to=B). */
 export async function revisionIdByLetter(actor: Actor, layoutId: string, letter: string): Promise<string> {
-  await layoutFor(actor, layoutId);
+  await loadLayoutFor(actor, layoutId);
   if (!/^[A-Z]{1,3}$/.test(letter)) throw new NotFoundError(`No revision ${letter.slice(0, 8)}.`);
   const db = await getDb();
   const [row] = await db.select({ id: revisions.id }).from(revisions).where(and(eq(revisions.layoutId, layoutId), eq(revisions.letter, letter))).limit(1);
@@ -144,7 +146,7 @@ export async function revisionIdByLetter(actor: Actor, layoutId: string, letter:
  * when the latest revision already froze this very version: there would be nothing new to send.
  */
 export async function issueRevision(actor: Actor, layoutId: string, input: { note: string }): Promise<RevisionWithDocDto> {
-  const layout = await editableLayoutFor(actor, layoutId, 'issue revisions');
+  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'issue revisions' });
   const note = input.note.trim();
   if (note.length > NOTE_MAX) throw new BadRequestError(`Keep the note under ${NOTE_MAX} characters.`);
   const db = await getDb();
@@ -185,9 +187,9 @@ export interface DecisionInput {
  * revision that a newer one has superseded.
  */
 export async function decideRevision(actor: Actor, layoutId: string, revisionId: string, input: DecisionInput): Promise<RevisionDto> {
-  const layout = await layoutFor(actor, layoutId);
+  const layout = await loadLayoutFor(actor, layoutId);
   if (!layout.isClient) throw new ForbiddenError('Only the client this layout is shared with can approve it or return it for changes.');
-  if (!UUID.test(revisionId)) throw new NotFoundError('No such revision.');
+  if (!isId(revisionId)) throw new NotFoundError('No such revision.');
   const message = (input.message ?? '').trim();
   if (input.decision === 'changes' && !message) throw new BadRequestError('Say what you would like changed.');
   if (message.length > MESSAGE_MAX) throw new BadRequestError(`Keep the message under ${MESSAGE_MAX} characters.`);
@@ -202,7 +204,7 @@ export async function decideRevision(actor: Actor, layoutId: string, revisionId:
       .where(and(eq(revisionDecisions.revisionId, revisionId), eq(revisionDecisions.decision, 'approved')))
       .limit(1);
     if (approved) {
-      throw new ConflictError(`Revision ${rev.letter} was approved by ${approved.by} on ${approved.at.toISOString().slice(0, 10)}; an approval cannot be changed.`);
+      throw new ConflictError(`Revision ${rev.letter} was approved by ${approved.by} on ${formatDate(approved.at)}; an approval cannot be changed.`);
     }
     if (rev.seq !== latest) throw new ConflictError(`Revision ${rev.letter} has been superseded by a newer revision; look at the latest one.`);
     await tx.insert(revisionDecisions).values({

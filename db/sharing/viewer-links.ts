@@ -17,7 +17,8 @@ import { BadRequestError, NotFoundError } from '../errors';
 import type { Actor } from '../actor';
 import { settingsSchema, type LayoutDoc, type LayoutSettings } from '../../lib/layout/schema';
 import type { LengthUnit } from '../../lib/layout/units';
-import { editableLayoutFor, UUID } from './access';
+import { loadLayoutFor } from '../access';
+import { isId } from '../ids';
 import { hashToken, isTokenShaped, newToken } from './tokens';
 import { revisionState, type RevisionState } from './revisions';
 
@@ -81,7 +82,7 @@ function toDto(r: Awaited<ReturnType<typeof linkRows>>[number]): ViewerLinkDto {
 }
 
 export async function listViewerLinks(actor: Actor, layoutId: string): Promise<ViewerLinkDto[]> {
-  await editableLayoutFor(actor, layoutId, 'see viewer links');
+  await loadLayoutFor(actor, layoutId, { forEdit: 'see viewer links' });
   return (await linkRows(layoutId)).map(toDto);
 }
 
@@ -93,10 +94,10 @@ export interface CreateLinkInput {
 
 /** Creates a link; the token is in the answer once and nowhere else, ever. */
 export async function createViewerLink(actor: Actor, layoutId: string, input: CreateLinkInput, now = new Date()): Promise<{ link: ViewerLinkDto; token: string }> {
-  await editableLayoutFor(actor, layoutId, 'share viewer links');
+  await loadLayoutFor(actor, layoutId, { forEdit: 'share viewer links' });
   const db = await getDb();
   if (input.revisionId) {
-    if (!UUID.test(input.revisionId)) throw new BadRequestError('That revision is not one of this layout’s.');
+    if (!isId(input.revisionId)) throw new BadRequestError('That revision is not one of this layout’s.');
     const [rev] = await db.select({ id: revisions.id }).from(revisions)
       .where(and(eq(revisions.id, input.revisionId), eq(revisions.layoutId, layoutId))).limit(1);
     if (!rev) throw new BadRequestError('That revision is not one of this layout’s.');
@@ -118,8 +119,8 @@ export async function createViewerLink(actor: Actor, layoutId: string, input: Cr
 
 /** Revoking is final; revoking twice is harmless. */
 export async function revokeViewerLink(actor: Actor, layoutId: string, linkId: string): Promise<ViewerLinkDto> {
-  await editableLayoutFor(actor, layoutId, 'revoke viewer links');
-  if (!UUID.test(linkId)) throw new NotFoundError('No such viewer link.');
+  await loadLayoutFor(actor, layoutId, { forEdit: 'withdraw viewer links' });
+  if (!isId(linkId)) throw new NotFoundError('No such viewer link.');
   const db = await getDb();
   const res = await db
     .update(viewerLinks)

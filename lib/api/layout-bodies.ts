@@ -7,9 +7,10 @@ import { baySchema, plainText, type LayoutDoc } from '@/lib/layout/schema';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { bayTemplate, emptyLayout, starterLayout } from '@/lib/layout/templates';
 import { invalid } from './respond';
+import { idField } from '@/db/ids';
 
 const name = plainText(120).pipe(z.string().trim().min(1, 'give the layout a name'));
-const clientId = z.uuid('choose a client from the list').nullable().optional();
+const clientId = idField('choose a client from the list').nullable().optional();
 
 export const createLayoutBody = z
   .strictObject({

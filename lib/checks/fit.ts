@@ -13,6 +13,7 @@ import { archBoxes, moduleRect, topAboveBare, undersideAboveBare, type BuildUpTh
 import { listNames, mm, moduleName, plural } from './naming';
 import { SOURCES } from './sources';
 import type { Finding } from './types';
+import { formatWhole } from '../format';
 
 export function fitInside(doc: LayoutDoc, t: BuildUpThickness): Finding[] {
   const { length: L, width: W, height: H } = doc.bay;
@@ -250,7 +251,7 @@ export function fitOverlap(doc: LayoutDoc): Finding[] {
       measured: found.examined,
       required: budget,
       unit: 'pairs',
-      message: `So many modules are piled on top of one another that the overlap check stopped after comparing ${found.examined.toLocaleString('en-GB')} pairs (the limit for ${plural(all.length, 'module')}); the piles found so far are listed, others may remain. Pull the piled-up modules apart and check again. ${SOURCES.overlap.brief}.`,
+      message: `So many modules are piled on top of one another that the overlap check stopped after comparing ${formatWhole(found.examined)} pairs (the limit for ${plural(all.length, 'module')}); the piles found so far are listed, others may remain. Pull the piled-up modules apart and check again. ${SOURCES.overlap.brief}.`,
       source: SOURCES.overlap.cite,
     });
   }

@@ -3,6 +3,8 @@
  * text body and a matching simple HTML body. Every piece of user text is HTML-escaped; links are
  * only ever http(s). Pure: no network, no database. Must never put unescaped input into HTML.
  */
+import { palette } from '../look';
+
 export interface MessageParts {
   greeting: string;
   paragraphs: string[];
@@ -47,12 +49,12 @@ export function compose(subject: string, parts: MessageParts): ComposedMail {
     footer,
   ].join('\n');
   const html = [
-    '<!doctype html><html><body style="font-family:system-ui,sans-serif;color:#1E2A2F;background:#F5F2EA;padding:24px">',
+    `<!doctype html><html><body style="font-family:system-ui,sans-serif;color:${palette.ink};background:${palette.paper};padding:24px">`,
     `<p>${escapeHtml(parts.greeting)}</p>`,
     ...parts.paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
-    parts.quote ? `<blockquote style="border-left:3px solid #A4522A;margin:0;padding:4px 12px;white-space:pre-wrap">${escapeHtml(parts.quote)}</blockquote>` : '',
-    parts.action && url ? `<p><a href="${escapeHtml(url)}" style="color:#A4522A">${escapeHtml(parts.action.label)}</a></p>` : '',
-    `<p style="color:#4A5A61;font-size:12px">${escapeHtml(footer)}</p>`,
+    parts.quote ? `<blockquote style="border-left:3px solid ${palette.copper};margin:0;padding:4px 12px;white-space:pre-wrap">${escapeHtml(parts.quote)}</blockquote>` : '',
+    parts.action && url ? `<p><a href="${escapeHtml(url)}" style="color:${palette.copper}">${escapeHtml(parts.action.label)}</a></p>` : '',
+    `<p style="color:${palette.inkSoft};font-size:12px">${escapeHtml(footer)}</p>`,
     '</body></html>',
   ].join('');
   return { subject: oneLine(subject, 200), text, html };

@@ -6,12 +6,13 @@
 import { compose, oneLine, type ComposedMail } from './compose';
 
 import { SIGN_OFF_CAUTION } from '../layout/cautions';
+import { formatDate } from '../format';
 
 /** Said wherever a plan is issued or approved (its words live in lib/layout/cautions). */
 export { SIGN_OFF_CAUTION };
 
 export function invitationMail(p: { clientName: string; studioName: string; inviterName: string; url: string; expiresAt: Date; layoutName?: string | null; role?: 'designer' | 'client' }): ComposedMail {
-  const until = p.expiresAt.toISOString().slice(0, 10);
+  const until = formatDate(p.expiresAt);
   const designer = p.role === 'designer';
   return compose(designer ? `${oneLine(p.studioName, 80)} invites you to draw layouts with them` : `${oneLine(p.studioName, 80)} invites you to follow your van's design`, {
     greeting: `Hello ${oneLine(p.clientName, 80)},`,

@@ -13,7 +13,7 @@ import { invitationPath, markInvitationSent } from '@/db/sharing/invitations';
 import type { RevisionDto } from '@/db/sharing/revisions';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { layoutClient, revisionIssuerId, workshopFor, type Recipient } from '@/db/sharing/recipients';
-import { studioName } from '@/db/sharing/access';
+import { studioName } from '@/db/studios';
 import { markupMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
 import { publicUrl } from './public-url';
 import { MAIL_NOT_CONFIGURED, mailConfigured, sendMail } from './transport';

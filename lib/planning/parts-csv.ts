@@ -7,6 +7,7 @@
  * Pure text. Must never import UI, framework or database code.
  */
 import type { PartsList } from './parts-list';
+import { formatAmount } from '../format';
 
 function cell(value: string | number | null): string {
   let s = value === null ? '' : String(value);
@@ -15,7 +16,7 @@ function cell(value: string | number | null): string {
 }
 
 function money(minor: number | null): string {
-  return minor === null ? '' : (minor / 100).toFixed(2);
+  return minor === null ? '' : formatAmount(minor);
 }
 
 export function partsListCsv(list: PartsList): string {

@@ -12,6 +12,7 @@ import { computeAxleLoads } from './axle-loads';
 import { userPayloadRequired } from './payload';
 import { powerBudget, type Season } from './power-budget';
 import { COMFORT_DAYS_BETWEEN_FILLS, waterPlan } from './water-plan';
+import { formatWhole } from '../format';
 
 export interface BuildPlanSummary {
   mass: {
@@ -43,12 +44,12 @@ export interface BuildPlanSummary {
 const SEASON_WORDS: Record<Season, string> = { summer: 'summer', shoulder: 'spring/autumn', winter: 'winter' };
 
 function kg(n: number): string {
-  return `${Math.round(n).toLocaleString('en-GB')} kg`;
+  return `${formatWhole(n)} kg`;
 }
 
 function signedWh(n: number): string {
   const r = Math.round(n);
-  return `${r > 0 ? '+' : r < 0 ? '−' : ''}${Math.abs(r).toLocaleString('en-GB')} Wh`;
+  return `${r > 0 ? '+' : r < 0 ? '−' : ''}${formatWhole(Math.abs(r))} Wh`;
 }
 
 export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
@@ -101,9 +102,9 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
     lines.push({
       topic: 'Power',
       status: worst.netWh < 0 ? 'attention' : 'ok',
-      text: `Uses ${Math.round(p.dailyUseWh).toLocaleString('en-GB')} Wh a day; balance ${summary.power.seasons.map((s) => `${SEASON_WORDS[s.season]} ${signedWh(s.netWh)}`).join(', ')}; ${p.autonomyDays !== null && Number.isFinite(p.autonomyDays) ? `${p.autonomyDays.toFixed(1)} days` : 'unlimited days'} on the ${p.battery.capacityAh} Ah battery alone.`,
+      text: `Uses ${formatWhole(p.dailyUseWh)} Wh a day; balance ${summary.power.seasons.map((s) => `${SEASON_WORDS[s.season]} ${signedWh(s.netWh)}`).join(', ')}; ${p.autonomyDays !== null && Number.isFinite(p.autonomyDays) ? `${p.autonomyDays.toFixed(1)} days` : 'unlimited days'} on the ${p.battery.capacityAh} Ah battery alone.`,
     });
-  } else lines.push({ topic: 'Power', status: 'unknown', text: `Uses ${Math.round(p.dailyUseWh).toLocaleString('en-GB')} Wh a day; enter the battery and charging for the balance.` });
+  } else lines.push({ topic: 'Power', status: 'unknown', text: `Uses ${formatWhole(p.dailyUseWh)} Wh a day; enter the battery and charging for the balance.` });
   if (w.freshTankIds.length || w.greyTankIds.length) {
     lines.push({ topic: 'Water', status: w.days !== null && w.days < COMFORT_DAYS_BETWEEN_FILLS ? 'attention' : 'ok', text: `Fresh ${w.freshL} L, grey ${w.greyL} L; ${w.days !== null ? `${w.days.toFixed(1)} days` : 'no use entered'} at ${w.litresPerPersonPerDay} L per person a day for ${w.persons}.` });
   } else lines.push({ topic: 'Water', status: 'unknown', text: 'No water tanks drawn.' });

@@ -9,11 +9,12 @@ import { LINE, TYPE } from './drafting';
 import type { ColumnFlow } from './flow';
 import type { FontFace, SheetItem } from './primitives';
 import { fit, lineHeight } from './typography';
+import { formatWhole } from '../format';
 
 const ROW = lineHeight(TYPE.label) + 1.2;
 const NUMBER_COL = 26;
 
-const kg = (n: number | null) => (n === null ? '—' : Math.round(n).toLocaleString('en-GB'));
+const kg = (n: number | null) => (n === null ? '—' : formatWhole(n));
 
 function cells(x: number, y: number, width: number, texts: string[], font: FontFace): SheetItem[] {
   const labelWidth = width - 3 * NUMBER_COL;
@@ -48,6 +49,6 @@ export function flowMassBalance(flow: ColumnFlow, doc: LayoutDoc): void {
     ...cells(x, y, width, ['Payload left', left(b.left.frontKg), left(b.left.rearKg), left(b.left.kg)], 'mono'),
     { type: 'line', x1: x, y1: y + ROW, x2: x + width, y2: y + ROW, width: LINE.thin, ink: 'ink' },
   ]);
-  const com = b.centreOfMass ? `Laden centre of mass ${Math.round(b.centreOfMass.x).toLocaleString('en-GB')} mm behind the front of the load floor, ${Math.round(b.centreOfMass.y).toLocaleString('en-GB')} mm from the left wall.` : 'The split between the axles needs the wheelbase, the front axle position and the mass in running order on the front axle.';
+  const com = b.centreOfMass ? `Laden centre of mass ${formatWhole(b.centreOfMass.x)} mm behind the front of the load floor, ${formatWhole(b.centreOfMass.y)} mm from the left wall.` : 'The split between the axles needs the wheelbase, the front axle position and the mass in running order on the front axle.';
   flow.place(ROW + 1, (x, y) => [{ type: 'text', x, y: y + ROW, text: `${com} Lever rule; planning figures — weigh the finished van, axle by axle.`, size: TYPE.small, ink: 'soft' }]);
 }

@@ -4,6 +4,7 @@
  * the PDF export and SVG for the HTML print view, so both show exactly the same sheet.
  * Types only; must never depend on a renderer.
  */
+import { palette } from '../look';
 
 export type Ink = 'ink' | 'soft' | 'faint' | 'copper' | 'paper' | 'moss' | 'ochre' | 'brick' | 'white';
 export type FontFace = 'sans' | 'sans-bold' | 'mono';
@@ -71,15 +72,15 @@ export interface SheetDocument {
   pages: SheetPage[];
 }
 
-/** Hex values of the inks (same as tailwind.config.ts / DESIGN.md "Look"). */
+/** Hex values of the inks, from the one palette (lib/look.ts). */
 export const INK_HEX: Record<Ink, string> = {
-  ink: '#1E2A2F',
-  soft: '#4A5A61',
-  faint: '#8A969B',
-  copper: '#A4522A',
-  paper: '#F5F2EA',
-  moss: '#55703F',
-  ochre: '#A87C1E',
-  brick: '#9E3B2F',
-  white: '#FFFFFF',
+  ink: palette.ink,
+  soft: palette.inkSoft,
+  faint: palette.inkFaint,
+  copper: palette.copper,
+  paper: palette.paper,
+  moss: palette.moss,
+  ochre: palette.ochre,
+  brick: palette.brick,
+  white: palette.white,
 };

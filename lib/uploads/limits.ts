@@ -6,6 +6,7 @@
 import 'server-only';
 import fs from 'node:fs';
 import { imageSize } from 'image-size';
+import { formatWhole } from '../format';
 
 /** Longest side and pixel count an uploaded image may decode to (common practice, no source: a 40 MP camera photo fits). */
 export const MAX_IMAGE_SIDE_PX = 12_000;
@@ -31,7 +32,7 @@ export function checkImageDimensions(file: string): void {
   if (!width || !height) throw new ImageTooLargeError('The image’s size could not be read; save it again as PNG or JPEG.');
   if (width > MAX_IMAGE_SIDE_PX || height > MAX_IMAGE_SIDE_PX || width * height > MAX_IMAGE_PIXELS) {
     throw new ImageTooLargeError(
-      `The image is ${width} × ${height} px; images may be at most ${MAX_IMAGE_SIDE_PX.toLocaleString('en-GB')} px on a side and ${MAX_IMAGE_PIXELS / 1_000_000} megapixels. Make it smaller and upload it again.`,
+      `The image is ${width} × ${height} px; images may be at most ${formatWhole(MAX_IMAGE_SIDE_PX)} px on a side and ${MAX_IMAGE_PIXELS / 1_000_000} megapixels. Make it smaller and upload it again.`,
     );
   }
 }

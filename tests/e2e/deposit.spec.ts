@@ -1,6 +1,7 @@
 // Build planning to deposit, end to end in Chromium: the designer opens the build plan from the
-// editor, changes the maximum authorised mass (typed with its unit) and saves it with the
-// layout version (and, when someone saved first, puts the build plan on their version), looks
+// editor, changes the maximum authorised mass (typed with its unit), which saves itself with the
+// layout version like the editor's drawing (undo and redo included; when someone saved first, the
+// build plan goes on their version), looks
 // at the cut list and the parts list (with its CSV), and sends the client
 // a quote; the client opens it, pays the deposit on the local test checkout and comes back to a
 // paid quote; the receipt is in the development outbox. Screenshots kept as artifacts.
@@ -35,34 +36,48 @@ test('designer sends a quote → client pays the deposit on the hosted checkout 
   await expect(designer.getByRole('heading', { name: `Build plan · ${LAYOUT}` })).toBeVisible();
   await expect(designer.locator('[data-testid=build-planner][data-hydrated=true]')).toBeVisible({ timeout: 30_000 });
 
-  // Weight: type the maximum authorised mass in tonnes; the results follow before saving.
+  // Weight: type the maximum authorised mass in tonnes; the results follow at once and the entry
+  // saves itself, as the editor does (no save button), and the header shows the saved version.
+  const status = designer.getByTestId('save-status');
   const mam = designer.getByTestId('w-mam');
   await mam.fill('3.5 t');
   await expect(designer.getByTestId('bar-total')).toContainText('of 3,500 kg');
-  await expect(designer.getByTestId('save-state')).toHaveText('Unsaved changes.');
-  await designer.getByRole('button', { name: 'Save build plan' }).click();
-  await expect(designer.getByTestId('save-state')).toHaveText('Saved · version 2');
+  await expect(designer.getByRole('button', { name: /save build plan/i })).toHaveCount(0);
+  await expect(status).toHaveAttribute('data-status', 'saved', { timeout: 15_000 });
+  await expect(status).toContainText('v2');
+  await expect(designer.getByTestId('saved-version')).toHaveText('2');
   await expect(designer.getByTestId('com-marker')).toBeVisible();
   await keepScreenshot(designer, 'build-plan-weight');
 
-  // A field that is not a mass holds the save and says why.
+  // The entry is one undo step, as in the editor: undo brings the starter's figure back and saves that.
+  await designer.getByRole('button', { name: 'Undo' }).click();
+  await expect(mam).toHaveValue('3300');
+  await expect(designer.getByTestId('saved-version')).toHaveText('3', { timeout: 15_000 });
+  await designer.getByRole('button', { name: 'Redo' }).click();
+  await expect(mam).toHaveValue('3500');
+  await expect(designer.getByTestId('saved-version')).toHaveText('4', { timeout: 15_000 });
+
+  // A field that is not a mass is marked, says why, and is not saved.
   await mam.fill('heavy');
   await expect(designer.getByText('type a mass, e.g. 2100 kg or 2.1 t')).toBeVisible();
-  await expect(designer.getByRole('button', { name: 'Save build plan' })).toBeDisabled();
+  await expect(designer.getByTestId('fields-to-correct')).toContainText('Weight');
   await mam.fill('3500');
-  await expect(designer.getByTestId('save-state')).toHaveText('Saved · version 2');
+  await expect(designer.getByTestId('fields-to-correct')).toHaveCount(0);
+  await expect(status).toHaveAttribute('data-status', 'saved');
+  await expect(designer.getByTestId('saved-version')).toHaveText('4');
 
-  // Someone saves the drawing meanwhile: the save is refused (412), and the build plan is put on
-  // their version without losing either change.
-  await mam.fill('3450 kg');
+  // Someone saves the drawing meanwhile: the next entry's save is refused (412), and the build
+  // plan is put on their version without losing either change.
   const theirs = await (await designer.request.get(`/api/layouts/${layoutId}`)).json();
   theirs.doc.modules[0].label = 'Sink, moved by a colleague';
-  const other = await designer.request.put(`/api/layouts/${layoutId}`, { data: { doc: theirs.doc }, headers: { 'if-match': '2' } });
+  const other = await designer.request.put(`/api/layouts/${layoutId}`, { data: { doc: theirs.doc }, headers: { 'if-match': '4' } });
   expect(other.status()).toBe(200);
-  await designer.getByRole('button', { name: 'Save build plan' }).click();
-  await expect(designer.getByTestId('conflict')).toContainText('now version 3');
-  await designer.getByRole('button', { name: 'Put my build plan on their version and save' }).click();
-  await expect(designer.getByTestId('save-state')).toHaveText('Saved · version 4');
+  await mam.fill('3450 kg');
+  const dialog = designer.getByTestId('conflict-dialog');
+  await expect(dialog).toContainText('Version 5', { timeout: 15_000 });
+  await dialog.getByRole('button', { name: 'Put my build plan on their version' }).click();
+  await expect(designer.getByTestId('saved-version')).toHaveText('6', { timeout: 15_000 });
+  await expect(status).toHaveAttribute('data-status', 'saved');
   const merged = (await (await designer.request.get(`/api/layouts/${layoutId}`)).json()).doc;
   expect(merged.modules[0].label).toBe('Sink, moved by a colleague');
   expect(merged.systems.vehicle.maxAuthorisedMassKg).toBe(3450);
@@ -85,7 +100,7 @@ test('designer sends a quote → client pays the deposit on the hosted checkout 
   const csv = await designer.request.get(csvHref!);
   expect(csv.status()).toBe(200);
   expect(csv.headers()['content-type']).toContain('text/csv');
-  expect(csv.headers()['content-disposition']).toMatch(/attachment; filename=".*-v4-parts\.csv"/);
+  expect(csv.headers()['content-disposition']).toMatch(/attachment; filename=".*-v6-parts\.csv"/);
   expect(await csv.text()).toMatch(/^Item,Category,Quantity/);
 
   // Quote: 25 % deposit, sent to Priya.

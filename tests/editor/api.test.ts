@@ -22,7 +22,13 @@ describe('saving', () => {
   it('turns a 412 into a conflict carrying their version', async () => {
     const theirs = testDoc([mod('x')]);
     const r = await saveLayout(reply(412, { error: 'stale', current: { version: 9, doc: theirs, updatedAt: 't' } }), 'L1', testDoc(), 7);
-    expect(r).toEqual({ kind: 'conflict', current: { version: 9, doc: theirs, updatedAt: 't' } });
+    expect(r).toEqual({ kind: 'conflict', current: { version: 9, doc: theirs, updatedAt: 't', updatedBy: null } });
+  });
+
+  it('names who saved first when the server says (the build plan and the editor share this save)', async () => {
+    const theirs = testDoc([mod('x')]);
+    const r = await saveLayout(reply(412, { error: 'stale', current: { version: 9, doc: theirs, updatedBy: 'Maren Holt' } }), 'L1', testDoc(), 7);
+    expect(r).toEqual({ kind: 'conflict', current: { version: 9, doc: theirs, updatedAt: undefined, updatedBy: 'Maren Holt' } });
   });
 
   it('400 gives the issues, 403 says read-only, 500 and network errors retry, junk never throws', async () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { harness, mod, expectValid } from './harness';
-import { isDirty } from '@/components/editor/store/editorStore';
+import { harness, mod, expectValid, testDoc } from './harness';
+import { createEditorStore, isDirty } from '@/components/editor/store/editorStore';
 
 describe('editor store: placing modules', () => {
   it('adds a module from its kind with the catalogue defaults, selected, as one undo entry', () => {
@@ -347,5 +347,56 @@ describe('editor store: bay edits', () => {
     expect(h.get().updateOccupants({ standingHeight: 1900, sleepers: [1900] }).ok).toBe(true);
     expect(h.get().updateOccupants({ standingHeight: 1900, sleepers: [100] }).ok).toBe(false);
     expect(h.get().history.past).toHaveLength(2);
+  });
+});
+
+describe('editor store: the build plan’s inputs (systems)', () => {
+  it('an edit of one section is one undo entry, keeps the others, and undoes to the document before', () => {
+    const h = harness();
+    const before = h.get().doc;
+    expect(h.get().updateSystems({ water: { persons: 2 } }).ok).toBe(true);
+    expect(h.get().updateSystems({ vehicle: { maxAuthorisedMassKg: 3500 } }, 'Maximum authorised mass').ok).toBe(true);
+    expect(h.get().doc.systems).toEqual({ water: { persons: 2 }, vehicle: { maxAuthorisedMassKg: 3500 } });
+    expect(h.get().history.past.map((e) => e.label)).toEqual(['Edit the build plan', 'Maximum authorised mass']);
+    expect(isDirty(h.get())).toBe(true);
+    h.get().undo();
+    expect(h.get().doc.systems).toEqual({ water: { persons: 2 } });
+    h.get().undo();
+    expect(h.get().doc).toBe(before);
+    h.get().redo();
+    expect(h.get().doc.systems).toEqual({ water: { persons: 2 } });
+    expectValid(h.get().doc);
+  });
+
+  it('typing into the same section within a burst merges into one entry; a pause starts another', () => {
+    const clock = { t: 0 };
+    const h = harness([], clock);
+    for (const persons of [1, 2, 3]) {
+      clock.t += 200;
+      h.get().updateSystems({ water: { persons } });
+    }
+    expect(h.get().history.past).toHaveLength(1);
+    clock.t += 5000;
+    h.get().updateSystems({ water: { persons: 4 } });
+    expect(h.get().history.past).toHaveLength(2);
+    h.get().undo();
+    expect(h.get().doc.systems).toEqual({ water: { persons: 3 } });
+  });
+
+  it('the same values again add no entry; removing the last section removes systems altogether', () => {
+    const h = harness();
+    h.get().updateSystems({ water: { persons: 2 } });
+    const doc = h.get().doc;
+    h.get().updateSystems({ water: { persons: 2 } });
+    expect(h.get().doc).toBe(doc);
+    expect(h.get().history.past).toHaveLength(1);
+    h.get().updateSystems({ water: undefined });
+    expect('systems' in h.get().doc).toBe(false);
+  });
+
+  it('is refused on a view-only layout', () => {
+    const store = createEditorStore({ doc: testDoc(), version: 1, readOnly: true });
+    expect(store.getState().updateSystems({ water: { persons: 2 } })).toEqual({ ok: false, error: 'This layout is view only.' });
+    expect(store.getState().doc.systems).toBeUndefined();
   });
 });

@@ -1,6 +1,6 @@
 /**
  * The matrix must catch a weakened client rule. Here the one rule of who may read a layout
- * (`mayReadLayout` in db/actor.ts) is replaced by "any member of the studio", and the matrix's
+ * (`mayReadLayout` in db/access-rule.ts) is replaced by "any member of the studio", and the matrix's
  * own rows are run for its "another client of the same studio" caller: rows must now fail, the
  * layout read among them. Without that caller, this weakening passed the whole matrix.
  */
@@ -14,8 +14,8 @@ import { buildWorld } from '../helpers/world';
 import { ROWS, type Fixture } from './access-rows';
 import { discoverRoutes } from './discover-routes';
 
-vi.mock('@/db/actor', async (importOriginal) => {
-  const original = await importOriginal<typeof import('@/db/actor')>();
+vi.mock('@/db/access-rule', async (importOriginal) => {
+  const original = await importOriginal<typeof import('@/db/access-rule')>();
   return {
     ...original,
     // The weakening under test: a client of the studio reads every layout of the studio.

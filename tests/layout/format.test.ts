@@ -1,7 +1,7 @@
 // One format for people: dates in the studio's time zone with the zone named, money with its sign,
 // numbers with thousands separators, field paths as on-screen names.
 import { describe, expect, it } from 'vitest';
-import { formatDate, formatDateTime, formatLongDate, formatMoney, formatNumber, STUDIO_TIME_ZONE } from '@/lib/format';
+import { formatAmount, formatDate, formatDateTime, formatFixed, formatLongDate, formatMoney, formatNumber, formatWhole, STUDIO_TIME_ZONE } from '@/lib/format';
 import { fieldName, readableProblem } from '@/lib/layout/field-names';
 
 describe('format', () => {
@@ -26,6 +26,20 @@ describe('format', () => {
     expect(formatNumber(12345.6)).toBe('12,346');
     expect(formatNumber(12.345, 1)).toBe('12.3');
     expect(formatNumber(12, 1)).toBe('12');
+  });
+
+  it('writes a fixed count of decimals, whole units rounded half up, and plain amounts for files and fields', () => {
+    expect(formatFixed(0.333, 2)).toBe('0.33');
+    expect(formatFixed(1234.5, 2)).toBe('1,234.50');
+    expect(formatWhole(2499.5)).toBe('2,500');
+    expect(formatWhole(-2.5)).toBe('-2'); // Math.round: half towards +∞
+    expect(formatAmount(123456)).toBe('1234.56');
+    expect(formatAmount(5)).toBe('0.05');
+  });
+
+  it('puts a date near midnight on the studio’s day, not the server’s (UTC) day', () => {
+    // 23:30 UTC on 30 June is 00:30 BST on 1 July in London.
+    expect(formatDate('2026-06-30T23:30:00Z')).toBe('1 Jul 2026');
   });
 });
 

@@ -8,7 +8,7 @@ import { powerDefaults, powerSchema, powerSystems } from '@/components/planning/
 import { gasDefaults, gasSchema, gasSystems } from '@/components/planning/gas/gasForm';
 import { heatDefaults, heatSchema, heatSystems } from '@/components/planning/heat/heatForm';
 import { waterDefaults, waterSchema } from '@/components/planning/water/WaterPanel';
-import { stableJson, withSystems, saveLayoutDoc } from '@/components/planning/saveLayout';
+import { stableJson, withSystems } from '@/components/editor/store/systemsEdits';
 
 const starters = ['starter-l-lounge', 'starter-rear-bed'].map((id) => [id, starterLayout(id)!] as const);
 
@@ -97,28 +97,5 @@ describe('edits through the forms', () => {
   it('refuses a λ listed twice for one material', () => {
     const r = heatSchema.safeParse({ ...heatDefaults(doc), conductivities: [{ material: 'Cork', lambda: '0.04' }, { material: 'cork', lambda: '0.05' }] });
     expect(r.error?.issues[0].message).toBe('already listed');
-  });
-});
-
-describe('saveLayoutDoc', () => {
-  const doc = starterLayout('starter-l-lounge')!;
-  const answer = (status: number, body: unknown) => async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
-
-  it('sends the version in If-Match and reads the new version', async () => {
-    let seen: RequestInit | undefined;
-    const out = await saveLayoutDoc('abc', doc, 7, (async (_u: string, init?: RequestInit) => {
-      seen = init;
-      return new Response(JSON.stringify({ version: 8 }), { status: 200 });
-    }) as typeof fetch);
-    expect(out).toEqual({ kind: 'saved', version: 8 });
-    expect((seen?.headers as Record<string, string>)['if-match']).toBe('7');
-  });
-
-  it('turns 412 into a conflict carrying their version, and 400/403/500 into clear outcomes', async () => {
-    expect(await saveLayoutDoc('abc', doc, 7, answer(412, { error: 'x', current: { version: 9, doc, updatedBy: 'Maren Holt' } }) as typeof fetch)).toEqual({ kind: 'conflict', theirs: { version: 9, doc, updatedBy: 'Maren Holt' } });
-    expect(await saveLayoutDoc('abc', doc, 7, answer(400, { error: 'Some fields are not valid.', issues: [{ path: 'doc.systems', message: 'bad' }] }) as typeof fetch)).toEqual({ kind: 'invalid', message: 'Some fields are not valid.', issues: [{ path: 'doc.systems', message: 'bad' }] });
-    expect((await saveLayoutDoc('abc', doc, 7, answer(403, { error: 'read-only' }) as typeof fetch)).kind).toBe('forbidden');
-    expect((await saveLayoutDoc('abc', doc, 7, answer(500, {}) as typeof fetch)).kind).toBe('error');
-    expect((await saveLayoutDoc('abc', doc, 7, (async () => { throw new TypeError('offline'); }) as typeof fetch)).kind).toBe('error');
   });
 });

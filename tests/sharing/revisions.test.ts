@@ -186,7 +186,7 @@ describe('approving and asking for changes', () => {
     for (const json of [{ decision: 'changes', message: 'On second thoughts…' }, { decision: 'approve' }]) {
       const res = await call(decision.POST, { method: 'POST', params, as: w.client, json });
       expect(res.status).toBe(409);
-      expect(res.body.error).toMatch(/approved by Priya Nair on \d{4}-\d\d-\d\d; an approval cannot be changed/);
+      expect(res.body.error).toMatch(/approved by Priya Nair on \d{1,2} [A-Z][a-z]{2} \d{4}; an approval cannot be changed/);
     }
     const rows = await db.select().from(revisionDecisions).where(eq(revisionDecisions.revisionId, B));
     expect(rows.filter((r) => r.decision === 'approved')).toHaveLength(1);

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
-import { canEditLayouts } from '@/db/actor';
+import { isWorkshop } from '@/db/access';
 import { listClients, unsharedLayouts } from '@/db/sharing/clients';
 import { ClientsTable } from '@/components/sharing/ClientsTable';
 import { InviteClientForm } from '@/components/sharing/InviteClientForm';
@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: 'Clients' };
 export default async function ClientsPage() {
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
-  if (!canEditLayouts(actor)) notFound();
+  if (!isWorkshop(actor)) notFound();
   const [clients, layouts] = await Promise.all([listClients(actor), unsharedLayouts(actor)]);
   return (
     <main className="mx-auto max-w-6xl space-y-8 px-6 py-8">

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
-import { canEditLayouts } from '@/db/actor';
+import { isWorkshop } from '@/db/access';
 import { LayoutsTable } from '@/components/layouts/LayoutsTable';
 
 export const metadata: Metadata = { title: 'Layouts' };
@@ -12,7 +12,7 @@ export default async function LayoutsPage() {
   return (
     <main className="mx-auto max-w-6xl px-6 py-8">
       <h1 className="mb-6 text-2xl font-semibold">Layouts</h1>
-      <LayoutsTable canCreate={canEditLayouts(actor)} />
+      <LayoutsTable canCreate={isWorkshop(actor)} />
     </main>
   );
 }

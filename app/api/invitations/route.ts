@@ -1,15 +1,16 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { listInvitations } from '@/db/sharing/invitations';
-import { requireEditor } from '@/db/sharing/access';
+import { requireWorkshop } from '@/db/access';
 import { inviteAndMail } from '@/lib/mail/invite';
+import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';
 
 const inviteBody = z.strictObject({
   email: z.email('enter a valid e-mail address').max(254),
   name: z.string().trim().min(1, 'give the client’s name').max(80),
-  layoutId: z.uuid('choose one of this studio’s layouts').nullable().optional(),
+  layoutId: idField('choose one of this studio’s layouts').nullable().optional(),
 });
 
 /** The studio's invitations and their state (owners and designers). */
@@ -24,7 +25,7 @@ export const GET = handle(async (req) => {
  */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
-  requireEditor(actor, 'invite clients');
+  requireWorkshop(actor, 'invite clients');
   const body = parseWith(inviteBody, await readJson(req, 16 * 1024));
   return json(await inviteAndMail(req, actor, { ...body, role: 'client' }), { status: 201 });
 });

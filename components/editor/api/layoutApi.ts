@@ -1,6 +1,7 @@
 /**
- * The editor's calls to the server: save with the version (If-Match), save a copy, run the live
- * checks. Every answer becomes a typed result; a bad or missing response becomes a clear error,
+ * The client's calls to the layout API: save with the version (If-Match) — the one save every
+ * screen that edits a layout uses (the editor and the build plan, both through `useAutosave`) —
+ * save a copy, run the live checks. Every answer becomes a typed result; a bad or missing response becomes a clear error,
  * never an exception the UI has not planned for. Must never import the database.
  */
 import type { LayoutDoc } from '@/lib/layout';
@@ -13,9 +14,17 @@ export interface FieldIssue {
   message: string;
 }
 
+/** The copy someone else saved, as a 412 answer carries it. */
+export interface SavedCopy {
+  version: number;
+  doc: LayoutDoc;
+  updatedAt?: string;
+  updatedBy?: string | null;
+}
+
 export type SaveResult =
   | { kind: 'saved'; version: number; updatedAt?: string }
-  | { kind: 'conflict'; current: { version: number; doc: LayoutDoc; updatedAt?: string } }
+  | { kind: 'conflict'; current: SavedCopy }
   | { kind: 'invalid'; message: string; issues: FieldIssue[] }
   | { kind: 'forbidden'; message: string }
   | { kind: 'error'; message: string; retry: boolean };
@@ -49,9 +58,17 @@ export async function saveLayout(fetchFn: FetchLike, id: string, doc: LayoutDoc,
     return { kind: 'saved', version: v, updatedAt: typeof b.updatedAt === 'string' ? b.updatedAt : undefined };
   }
   if (res.status === 412) {
-    const cur = b.current as { version?: unknown; doc?: unknown; updatedAt?: unknown } | undefined;
+    const cur = b.current as { version?: unknown; doc?: unknown; updatedAt?: unknown; updatedBy?: unknown } | undefined;
     if (cur && Number.isInteger(cur.version) && cur.doc && typeof cur.doc === 'object') {
-      return { kind: 'conflict', current: { version: cur.version as number, doc: cur.doc as LayoutDoc, updatedAt: typeof cur.updatedAt === 'string' ? cur.updatedAt : undefined } };
+      return {
+        kind: 'conflict',
+        current: {
+          version: cur.version as number,
+          doc: cur.doc as LayoutDoc,
+          updatedAt: typeof cur.updatedAt === 'string' ? cur.updatedAt : undefined,
+          updatedBy: typeof cur.updatedBy === 'string' ? cur.updatedBy : null,
+        },
+      };
     }
     return { kind: 'error', message: 'Someone saved first, and the server did not send their version.', retry: false };
   }

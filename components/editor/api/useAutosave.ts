@@ -1,6 +1,7 @@
 'use client';
 /**
- * Autosave: a changed document is saved a moment after the last edit (or at once on "Save now"),
+ * Autosave, for every screen that edits a layout through the editor store (the editor, the build
+ * plan): a changed document is saved a moment after the last edit (or at once on "Save now"),
  * with its version in If-Match. One save at a time; edits made while saving go in the next one.
  * A 412 stops saving and hands the conflict to the dialog; a lost connection retries with
  * back-off. Also guards against leaving the page with unsaved changes. Never saves read-only.
@@ -10,7 +11,8 @@ import { toast } from 'sonner';
 import type { LayoutDoc } from '@/lib/layout';
 import type { EditorStore } from '../store/editorStore';
 import { isDirty } from '../store/editorStore';
-import { saveLayout, type FetchLike } from './layoutApi';
+import { saveLayout, type FetchLike, type SavedCopy } from './layoutApi';
+import { fieldName } from '@/lib/layout/field-names';
 
 export const AUTOSAVE_DELAY_MS = 1200;
 
@@ -18,7 +20,7 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error' |
 
 export interface Conflict {
   mine: LayoutDoc;
-  theirs: { version: number; doc: LayoutDoc; updatedAt?: string };
+  theirs: SavedCopy;
 }
 
 export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean, fetchFn: FetchLike = fetch) {
@@ -71,7 +73,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
       case 'invalid':
         blocked.current = 'invalid';
         setStatus('error');
-        setLastError(result.issues.length ? `${result.message}: ${result.issues.slice(0, 3).map((i) => `${i.path} ${i.message}`).join('; ')}` : result.message);
+        setLastError(result.issues.length ? `${result.message}: ${result.issues.slice(0, 3).map((i) => `${fieldName(i.path)}: ${i.message}`).join('; ')}` : result.message);
         toast.error(`Not saved: ${result.message}`);
         return;
       case 'forbidden':
@@ -148,13 +150,18 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
     if (timer.current) clearTimeout(timer.current);
   }, []);
 
-  /** After the conflict dialog: their version replaces ours (history cleared), saving resumes. */
-  const takeTheirs = useCallback(() => {
+  /**
+   * After the conflict dialog: their version replaces ours (history cleared), saving resumes.
+   * `carry` may then put some of my work on their version as a new edit (one undo entry), which
+   * autosaves like any other.
+   */
+  const takeTheirs = useCallback((carry?: (mine: LayoutDoc) => void) => {
     if (!conflict) return;
     api.getState().replaceDoc(conflict.theirs.doc, conflict.theirs.version);
     blocked.current = null;
     setConflict(null);
     setStatus('saved');
+    carry?.(conflict.mine);
   }, [api, conflict]);
 
   const closeConflict = useCallback(() => setConflict(null), []);

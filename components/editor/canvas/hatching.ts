@@ -5,6 +5,7 @@
  * shape instead of thousands of line nodes. Browser canvas only; never imported by the store.
  */
 import { theme } from '../theme';
+import { palette, withAlpha } from '@/lib/look';
 
 export type HatchKind = 'timber' | 'stipple' | 'band' | 'cross' | 'wash';
 
@@ -25,7 +26,7 @@ function drawTile(c: CanvasRenderingContext2D, kind: HatchKind, s: number, pr: n
       diagonal(c, s, -1);
       break;
     case 'cross':
-      c.strokeStyle = 'rgba(30, 42, 47, 0.5)';
+      c.strokeStyle = withAlpha(palette.ink, 0.5);
       c.lineWidth = 0.8 * pr;
       diagonal(c, s, 1);
       diagonal(c, s, -1);

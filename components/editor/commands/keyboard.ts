@@ -27,8 +27,8 @@ export function commandForKey(e: KeyLike, isMac: boolean, commands: Command[] = 
 }
 
 /** Run the command a key means, if it is enabled now. Returns the command run, if any. */
-export function dispatchKey(e: KeyLike, state: EditorState, isMac: boolean): { command?: Command; result?: { ok: boolean; error?: string } } {
-  const c = commandForKey(e, isMac);
+export function dispatchKey(e: KeyLike, state: EditorState, isMac: boolean, commands: Command[] = COMMANDS): { command?: Command; result?: { ok: boolean; error?: string } } {
+  const c = commandForKey(e, isMac, commands);
   if (!c || !c.enabled(state)) return {};
   const result = c.run(state);
   return { command: c, result: result ?? undefined };

@@ -13,11 +13,12 @@ import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';
 import { matchKinds } from './partsSearch';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
+import { theme } from '../theme';
 
 const FAMILY_SWATCH: Record<MaterialFamily, string> = {
-  timber: 'repeating-linear-gradient(135deg, #8A969B 0 1px, transparent 1px 5px)',
-  upholstery: 'radial-gradient(#4A5A61 0.8px, transparent 1px) 0 0 / 5px 5px',
-  water: 'linear-gradient(to bottom, transparent 40%, #4A5A61 40% 46%, #DDD6C4 46%)',
+  timber: `repeating-linear-gradient(135deg, ${theme.inkFaint} 0 1px, transparent 1px 5px)`,
+  upholstery: `radial-gradient(${theme.inkSoft} 0.8px, transparent 1px) 0 0 / 5px 5px`,
+  water: `linear-gradient(to bottom, transparent 40%, ${theme.inkSoft} 40% 46%, ${theme.paperEdge} 46%)`,
   electrics: 'none',
   gas: 'none',
   appliance: 'none',

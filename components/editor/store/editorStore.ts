@@ -6,12 +6,14 @@
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Arrangement, Bay, BuildUp, LayoutDoc, Module, ModuleKind, Occupants } from '@/lib/layout/schema';
+import type { Systems } from '@/lib/layout/systems';
 import type { LengthUnit } from '@/lib/layout/units';
 import { bayProblem, buildUpProblem, occupantsProblem } from './docRules';
 import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
 import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
 import * as edits from './moduleEdits';
+import { withSystems } from './systemsEdits';
 import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
 import { px } from '../types';
 import { readableProblem } from '@/lib/layout/field-names';
@@ -67,6 +69,11 @@ export interface EditorState {
   updateBuildUp(buildUp: BuildUp): EditResult;
   updateOccupants(occupants: Occupants): EditResult;
   renameLayout(name: string): EditResult;
+  /**
+   * Replaces the named sections of the build plan's inputs (`doc.systems`; undefined removes one).
+   * ONE undo entry; typing into the same sections within a burst merges into it.
+   */
+  updateSystems(patch: Partial<Systems>, label?: string): EditResult;
   undo(): void;
   redo(): void;
 
@@ -228,6 +235,9 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (!trimmed) return { ok: false, error: 'Give the layout a name.' };
         if (trimmed.length > 120) return { ok: false, error: 'A layout name has at most 120 characters.' };
         return commit('Rename layout', () => ({ doc: { ...get().doc, name: trimmed } }));
+      },
+      updateSystems(patch, label = 'Edit the build plan') {
+        return commit(label, () => ({ doc: withSystems(get().doc, patch) }), `systems:${Object.keys(patch).sort().join(',')}`);
       },
       undo() {
         const s = get();

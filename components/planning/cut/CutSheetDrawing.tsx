@@ -6,9 +6,10 @@
  * beside the drawing names every part in full). Draws the placements it is given; never moves one.
  */
 import type { NestedSheet, SheetSize } from '@/lib/planning';
+import { palette } from '@/lib/look';
 
-const INK = '#1E2A2F';
-const SOFT = '#8A969B';
+const INK = palette.ink;
+const SOFT = palette.inkFaint;
 
 function pieceName(label: string): string {
   const i = label.lastIndexOf(' — ');
@@ -36,7 +37,7 @@ export function CutSheetDrawing({ sheet, nested, trimMm, numbers, title }: { she
         {tick(-70, 0)}{tick(-70, sheet.width)}
         <text x={-95} y={sheet.width / 2} textAnchor="middle" transform={`rotate(-90 ${-95} ${sheet.width / 2})`}>{sheet.width}</text>
       </g>
-      <rect x={0} y={0} width={sheet.length} height={sheet.width} fill="#FBF9F4" stroke={INK} strokeWidth={8} />
+      <rect x={0} y={0} width={sheet.length} height={sheet.width} fill={palette.paperLight} stroke={INK} strokeWidth={8} />
       {trimMm > 0 && <rect x={trimMm} y={trimMm} width={sheet.length - 2 * trimMm} height={sheet.width - 2 * trimMm} fill="none" stroke={SOFT} strokeWidth={3} strokeDasharray="20 14" />}
       {nested.placements.map((p) => {
         const n = numbers.get(p.partId) ?? 0;
@@ -45,7 +46,7 @@ export function CutSheetDrawing({ sheet, nested, trimMm, numbers, title }: { she
         return (
           <g key={p.partId} data-part={p.partId}>
             <rect x={p.x} y={p.y} width={p.length} height={p.width} fill={`url(#${hatchId})`} stroke={INK} strokeWidth={4} />
-            <rect x={p.x + p.length / 2 - size * 1.2} y={p.y + p.width / 2 - size * (showText ? 2.1 : 0.8)} width={size * 2.4} height={size * 1.3} fill="#FBF9F4" opacity={0.9} />
+            <rect x={p.x + p.length / 2 - size * 1.2} y={p.y + p.width / 2 - size * (showText ? 2.1 : 0.8)} width={size * 2.4} height={size * 1.3} fill={palette.paperLight} opacity={0.9} />
             <text x={p.x + p.length / 2} y={p.y + p.width / 2 - size * (showText ? 1.1 : -0.1)} fontSize={Math.max(size, 18)} textAnchor="middle" fill={INK} fontWeight={600}>{n}</text>
             {showText && (
               <>

@@ -6,10 +6,11 @@
  * and the total. Unpriced lines are flagged, never counted as zero. The CSV download is the
  * saved version's, from the server. Computes through `computePartsList` only.
  */
-import { useMemo, useState } from 'react';
+import { useMemo } from 'react';
 import Link from 'next/link';
-import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
-import { ArrowDown, ArrowUp, Download, CircleAlert } from 'lucide-react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { Download, CircleAlert } from 'lucide-react';
+import { DataTable } from '@/components/ui/DataTable';
 import { computePartsList, type PartsLine } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
 import { usePriceList } from '../usePriceList';
@@ -26,7 +27,6 @@ export function csvHref(layoutId: string, cut: CutOptions): string {
 
 export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string; doc: LayoutDoc; cut: CutOptions; dirty: boolean }) {
   const prices = usePriceList();
-  const [sorting, setSorting] = useState<SortingState>([]);
   const result = useMemo(() => {
     if (!prices.data?.exists) return null;
     try {
@@ -39,25 +39,17 @@ export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string
   const columns = useMemo(() => [
     col.accessor('description', { header: 'Item', cell: (c) => <span>{c.getValue()}</span> }),
     col.accessor('category', { header: 'Category', cell: (c) => <span className="text-ink-soft">{CATEGORY[c.getValue()]}</span> }),
-    col.accessor('qty', { header: 'Qty', cell: (c) => <span className="font-mono">{quantityText(c.getValue(), c.row.original.unit)}</span> }),
+    col.accessor('qty', { header: 'Qty', meta: { align: 'right' }, cell: (c) => <span className="font-mono">{quantityText(c.getValue(), c.row.original.unit)}</span> }),
     col.accessor('unitPriceMinor', {
       header: 'Unit price',
+      meta: { align: 'right' },
       cell: (c) => c.getValue() === null
         ? <span className="inline-flex items-center gap-1 text-brick"><CircleAlert size={12} aria-hidden="true" />not priced</span>
         : <span className="font-mono">{formatMoney(c.getValue(), currency)}<span className="text-ink-faint">/{c.row.original.unit}</span></span>,
     }),
-    col.accessor('netMinor', { header: 'Net', cell: (c) => <span className="font-mono">{formatMoney(c.getValue(), currency)}</span> }),
-    col.accessor('labourHours', { header: 'Labour h', cell: (c) => <span className="font-mono">{Math.round(c.getValue() * 100) / 100}</span> }),
+    col.accessor('netMinor', { header: 'Net', meta: { align: 'right' }, cell: (c) => <span className="font-mono">{formatMoney(c.getValue(), currency)}</span> }),
+    col.accessor('labourHours', { header: 'Labour h', meta: { align: 'right' }, cell: (c) => <span className="font-mono">{Math.round(c.getValue() * 100) / 100}</span> }),
   ], [currency]);
-  const table = useReactTable({
-    data: result?.ok ? result.list.lines : [],
-    columns,
-    state: { sorting },
-    onSortingChange: setSorting,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-  });
-
   if (prices.isPending) return <p className="panel p-4 text-sm text-ink-soft" role="status">Loading the price list…</p>;
   if (prices.isError) return <p className="panel border-brick p-4 text-sm" role="alert">Could not load the price list: {prices.error.message}</p>;
   if (!prices.data.exists) {
@@ -65,50 +57,33 @@ export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string
   }
   if (!result?.ok) return <p className="panel border-brick p-4 text-sm" role="alert">The parts list cannot be priced: {result?.error}</p>;
   const list = result.list;
-  const right = (id: string) => ['qty', 'unitPriceMinor', 'netMinor', 'labourHours'].includes(id);
   return (
     <div className="space-y-3" data-testid="parts-list">
       <div className="flex flex-wrap items-center gap-3">
         <a className="btn-quiet" href={csvHref(layoutId, cut)} download><Download size={14} aria-hidden="true" /> Download CSV</a>
-        <span className="text-xs text-ink-soft">{dirty ? 'The CSV and the quote use the saved version: save to include your latest entries.' : 'From the saved version, with the cut-list options shown.'}</span>
+        <span className="text-xs text-ink-soft">{dirty ? 'The CSV and the quote use the saved version; your latest entries are being saved.' : 'From the saved version, with the cut-list options shown.'}</span>
       </div>
       {list.unpriced.length > 0 && (
         <p className="rounded-sm border border-brick bg-brick-light p-2 text-sm" role="alert">
           Not priced yet: {[...new Set(list.lines.filter((l) => l.unitPriceMinor === null).map((l) => l.description))].join(', ')}. Add them in <Link className="text-copper underline" href="/settings#price-list">Settings → Price list</Link> before sending a quote.
         </p>
       )}
-      <div className="panel overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-paper-edge bg-paper-deep text-xs text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => (
-                  <th key={h.id} className={`px-3 py-2 font-medium ${right(h.column.id) ? 'text-right' : ''}`} aria-sort={h.column.getIsSorted() === 'asc' ? 'ascending' : h.column.getIsSorted() === 'desc' ? 'descending' : 'none'}>
-                    <button type="button" className="inline-flex items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
-                      {flexRender(h.column.columnDef.header, h.getContext())}
-                      {h.column.getIsSorted() === 'asc' ? <ArrowUp size={12} aria-hidden="true" /> : h.column.getIsSorted() === 'desc' ? <ArrowDown size={12} aria-hidden="true" /> : null}
-                    </button>
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-paper-edge" data-key={row.original.key}>
-                {row.getVisibleCells().map((cell) => <td key={cell.id} className={`px-3 py-1.5 ${right(cell.column.id) ? 'text-right' : ''}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
-              </tr>
-            ))}
-          </tbody>
-          <tfoot className="border-t-2 border-ink text-sm">
+      <DataTable
+        data={list.lines}
+        columns={columns}
+        headCase="normal"
+        dense
+        rowProps={(row) => ({ 'data-key': row.original.key })}
+        footer={(
+          <>
             <tr><td className="px-3 py-1" colSpan={4}>Materials</td><td className="px-3 text-right font-mono">{formatMoney(list.materialsMinor, currency)}</td><td /></tr>
             <tr><td className="px-3 py-1" colSpan={4}>Labour, <span className="font-mono">{Math.round(list.labourHours * 100) / 100} h</span> at <span className="font-mono">{formatMoney(prices.data.labourRateMinor, currency)}</span>/h</td><td className="px-3 text-right font-mono">{formatMoney(list.labourMinor, currency)}</td><td /></tr>
             <tr><td className="px-3 py-1" colSpan={4}>Net</td><td className="px-3 text-right font-mono">{formatMoney(list.netMinor, currency)}</td><td /></tr>
             <tr><td className="px-3 py-1" colSpan={4}>VAT <span className="font-mono">{list.vatPct} %</span></td><td className="px-3 text-right font-mono">{formatMoney(list.vatMinor, currency)}</td><td /></tr>
             <tr className="font-semibold"><td className="px-3 py-1.5" colSpan={4}>Total</td><td className="px-3 text-right font-mono" data-testid="parts-total">{formatMoney(list.grossMinor, currency)}</td><td /></tr>
-          </tfoot>
-        </table>
-      </div>
+          </>
+        )}
+      />
     </div>
   );
 }

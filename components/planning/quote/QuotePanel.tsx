@@ -83,7 +83,7 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
   const blocker = !canSend ? 'Only the workshop sends quotes.'
     : !clientName ? 'Share this layout with a client before sending a quote.'
       : paid ? 'The deposit is paid: this layout’s quote stays as it is.'
-        : dirty ? 'Save the build plan first: the quote is priced from the saved version.'
+        : dirty ? 'Your latest entries are being saved: the quote is priced from the saved version.'
           : prices.data && !prices.data.exists ? 'Set up the studio price list first.'
             : preview && preview.unpriced.length ? `Price these first: ${preview.unpriced.join(', ')}.` : null;
 

@@ -9,10 +9,11 @@
 import type { LayoutDoc } from '@/lib/layout';
 import type { MassReport } from '@/lib/planning';
 import { formatNumber } from '@/lib/format';
+import { palette } from '@/lib/look';
 
-const INK = '#1E2A2F';
-const SOFT = '#8A969B';
-const COPPER = '#A4522A';
+const INK = palette.ink;
+const SOFT = palette.inkFaint;
+const COPPER = palette.copper;
 
 export function CentreOfMassPlan({ doc, report }: { doc: LayoutDoc; report: MassReport }) {
   const v = doc.systems?.vehicle ?? {};

@@ -4,8 +4,9 @@
  * Draws the `MassBalance` it is given (lib/planning); computes nothing.
  */
 import type { MassBalance } from '@/lib/planning';
+import { formatWhole } from '@/lib/format';
 
-const kg = (n: number | null) => (n === null ? '—' : Math.round(n).toLocaleString('en-GB'));
+const kg = (n: number | null) => (n === null ? '—' : formatWhole(n));
 
 export function MassBalanceTable({ balance }: { balance: MassBalance }) {
   const { rows, total, limits, left, split } = balance;

@@ -5,14 +5,11 @@
  */
 import { needsInWords, type InputNeed } from '../../planning/inputs';
 import type { Finding } from '../types';
-
-const formats = new Map<number, Intl.NumberFormat>();
+import { formatFixed } from '../../format';
 
 export function num(n: number, digits = 0): string {
   if (!Number.isFinite(n)) return n > 0 ? 'unlimited' : 'n/a';
-  let f = formats.get(digits);
-  if (!f) formats.set(digits, (f = new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits })));
-  return f.format(n);
+  return formatFixed(n, digits);
 }
 
 export function round(n: number, digits = 2): number {

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
 import { currentActor } from '@/lib/auth/session';
-import { canEditLayouts } from '@/db/actor';
+import { isWorkshop } from '@/db/access';
 import { NewLayoutForm } from '@/components/layouts/NewLayoutForm';
 import { BAY_TEMPLATES } from '@/lib/layout/templates';
 
@@ -10,7 +10,7 @@ export const metadata: Metadata = { title: 'New layout' };
 export default async function NewLayoutPage() {
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
-  if (!canEditLayouts(actor)) redirect('/layouts');
+  if (!isWorkshop(actor)) redirect('/layouts');
   return (
     <main className="mx-auto max-w-2xl px-6 py-8">
       <h1 className="mb-6 text-2xl font-semibold">New layout</h1>

@@ -1,7 +1,8 @@
 import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { baseVersionFrom, saveLayoutBody } from '@/lib/api/layout-bodies';
 import { parseLayoutDoc } from '@/lib/layout/parse';
-import { deleteLayout, editableLayout, getLayoutJson, saveLayout } from '@/db/layouts';
+import { deleteLayout, getLayoutJson, saveLayout } from '@/db/layouts';
+import { loadLayoutFor } from '@/db/access';
 
 export const dynamic = 'force-dynamic';
 
@@ -21,7 +22,7 @@ export const PUT = handle<Ctx>(async (req, { params }) => {
   const { id } = await params;
   const base = baseVersionFrom(req);
   // Rights first, so a stranger learns nothing from the version rules.
-  const layout = await editableLayout(actor, id);
+  const layout = await loadLayoutFor(actor, id, { forEdit: true });
   if (base === null) throw new HttpError(428, 'Say which version you edited: send If-Match with the layout version.');
   if (Number.isNaN(base)) throw new HttpError(400, 'If-Match must be the layout version, a whole number.');
   const body = parseWith(saveLayoutBody, await readJson(req));

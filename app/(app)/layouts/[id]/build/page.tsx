@@ -8,7 +8,6 @@ import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';
 import { BuildPlanner } from '@/components/planning/BuildPlanner';
 import { buildTabFrom } from '@/components/planning/buildTabs';
-import { BUILD_PLAN_CAUTION } from '@/lib/layout/cautions';
 
 export const metadata: Metadata = { title: 'Build plan' };
 
@@ -29,20 +28,9 @@ export default async function BuildPlanPage({ params, searchParams }: { params: 
         <Link href={`/layouts/${layout.id}`} className="inline-flex items-center gap-1 text-ink-soft hover:text-ink"><ArrowLeft size={14} aria-hidden="true" /> Back to the plan</Link>
         <Link href={`/layouts/${layout.id}/quote`} className="inline-flex items-center gap-1 text-ink-soft hover:text-ink"><Receipt size={14} aria-hidden="true" /> Quote</Link>
       </nav>
-      <header>
-        <h1 className="text-xl font-semibold">Build plan · {layout.name}</h1>
-        <p className="text-sm text-ink-soft">
-          Bay <span className="font-mono">{layout.bay.length} × {layout.bay.width} × {layout.bay.height} mm</span> · version <span className="font-mono">{layout.version}</span>
-          {layout.client ? ` · for ${layout.client.name}` : ''}
-          {layout.canEdit ? '' : ' · view only'}
-        </p>
-        {layout.doc.systems?.note && <p className="mt-1 text-sm text-ink-soft">{layout.doc.systems.note}</p>}
-        <p className="mt-1 text-xs text-ink-soft">
-          {BUILD_PLAN_CAUTION}
-        </p>
-      </header>
       <BuildPlanner
         layoutId={layout.id}
+        layoutName={layout.name}
         initialDoc={layout.doc}
         initialVersion={layout.version}
         canEdit={layout.canEdit}

@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { addComment, COMMENT_MAX, listThreads } from '@/db/sharing/comments';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { arrangementSchema } from '@/lib/layout/schema';
 import { notifyMarkup } from '@/lib/mail/notify';
+import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';
 
@@ -13,7 +14,7 @@ const text = z.string().trim().min(1, 'write something in the mark-up').max(COMM
 const mm = z.number().int('a whole number of millimetres').min(-100_000).max(100_000);
 const commentBody = z.union([
   z.strictObject({ arrangement: arrangementSchema, x: mm, y: mm, body: text }),
-  z.strictObject({ parentId: z.uuid('reply to a mark-up on this layout'), body: text }),
+  z.strictObject({ parentId: idField('reply to a mark-up on this layout'), body: text }),
 ], { error: 'send a new mark-up (arrangement, x, y, body) or a reply (parentId, body)' });
 
 /** The layout's mark-up threads, oldest first (the path keeps its first name). */
@@ -26,7 +27,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  await layoutFor(actor, id);
+  await loadLayoutFor(actor, id);
   const body = parseWith(commentBody, await readJson(req, 16 * 1024));
   const input = 'parentId' in body ? { kind: 'reply' as const, ...body } : { kind: 'pin' as const, ...body };
   const { thread, layout, threadAuthorId } = await addComment(actor, id, input);

@@ -1,7 +1,7 @@
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { sendQuoteBody } from '@/lib/api/planning-bodies';
 import { getCurrentQuote, sendQuote } from '@/db/quotes';
-import { editableLayoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { mailQuoteToClient } from '@/lib/payments/deposit-mail';
 
 export const dynamic = 'force-dynamic';
@@ -18,7 +18,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
 export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
-  await editableLayoutFor(actor, id, 'send a quote'); // rights before the body is read
+  await loadLayoutFor(actor, id, { forEdit: 'send a quote' }); // rights before the body is read
   const body = parseWith(sendQuoteBody, await readJson(req));
   const quote = await sendQuote(actor, id, body);
   const mail = await mailQuoteToClient(req, actor, quote);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { issueRevision, listRevisions, NOTE_MAX } from '@/db/sharing/revisions';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { notifyRevisionIssued } from '@/lib/mail/notify';
 
 export const dynamic = 'force-dynamic';
@@ -23,10 +23,10 @@ export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id } = await params;
   // Rights before body: a stranger learns nothing from the validation messages.
-  await layoutFor(actor, id);
+  await loadLayoutFor(actor, id);
   const body = parseWith(issueBody, await readJson(req, 16 * 1024));
   const revision = await issueRevision(actor, id, body);
-  const layout = await layoutFor(actor, id);
+  const layout = await loadLayoutFor(actor, id);
   const { doc: _doc, ...summary } = revision;
   const mail = await notifyRevisionIssued(req, actor, layout, summary);
   return json({ revision: summary, mail }, { status: 201 });

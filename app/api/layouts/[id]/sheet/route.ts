@@ -4,7 +4,7 @@ import { sheetFonts } from '@/lib/api/sheet-fonts';
 import { clientAddress } from '@/lib/auth/address';
 import { runJob } from '@/lib/workers/pool';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
-import { getLayout } from '@/db/layouts';
+import { loadLayoutFor } from '@/db/access';
 import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
 
 export const dynamic = 'force-dynamic';
@@ -37,7 +37,7 @@ export const GET = handle<Ctx>(async (req, { params }) => {
   const { id } = await params;
   const parsed = sheetQuerySchema.safeParse(queryOf(req.url));
   if (!parsed.success) {
-    await getLayout(actor, id); // rights first, so a stranger learns nothing from the query rules
+    await loadLayoutFor(actor, id); // rights first, so a stranger learns nothing from the query rules
     parseWith(sheetQuerySchema, queryOf(req.url)); // throws the 400 with field paths
   }
   const q = parsed.data!;

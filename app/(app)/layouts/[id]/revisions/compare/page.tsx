@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
 import { ArrowLeft } from 'lucide-react';
 import { currentActor } from '@/lib/auth/session';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { listRevisions } from '@/db/sharing/revisions';
 import { NotFoundError } from '@/db/errors';
 import { getStudio } from '@/db/studios';
@@ -16,7 +16,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const actor = await currentActor();
   if (!actor) redirect('/sign-in');
   const { id } = await params;
-  const layout = await layoutFor(actor, id).catch((err) => {
+  const layout = await loadLayoutFor(actor, id).catch((err) => {
     if (err instanceof NotFoundError) notFound();
     throw err;
   });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { COMMENT_MAX, deleteComment, editComment, setSettled } from '@/db/sharing/comments';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 
 export const dynamic = 'force-dynamic';
 
@@ -22,7 +22,7 @@ const patchBody = z.union(
 export const PATCH = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id, commentId } = await params;
-  await layoutFor(actor, id);
+  await loadLayoutFor(actor, id);
   const body = parseWith(patchBody, await readJson(req, 16 * 1024));
   if ('body' in body) return json({ thread: await editComment(actor, id, commentId, body.body) });
   return json({ thread: await setSettled(actor, id, commentId, body.settled) });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
 import { decideRevision, getRevision, MESSAGE_MAX } from '@/db/sharing/revisions';
-import { layoutFor } from '@/db/sharing/access';
+import { loadLayoutFor } from '@/db/access';
 import { ForbiddenError } from '@/db/errors';
 import { notifyDecision } from '@/lib/mail/notify';
 
@@ -19,7 +19,7 @@ export const POST = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
   const { id, revisionId } = await params;
   // Rights before body: 404 for strangers, 403 for the workshop, then the body's rules.
-  const layout = await layoutFor(actor, id);
+  const layout = await loadLayoutFor(actor, id);
   await getRevision(actor, id, revisionId);
   if (!layout.isClient) throw new ForbiddenError('Only the client this layout is shared with can approve it or ask for changes.');
   const body = parseWith(decisionBody, await readJson(req, 16 * 1024));
