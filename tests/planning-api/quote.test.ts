@@ -6,7 +6,7 @@ import * as partsRoute from '@/app/api/layouts/[id]/quote/parts/route';
 import * as prices from '@/app/api/studio/prices/route';
 import { layouts, quotes } from '@/db/schema';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

@@ -10,7 +10,7 @@
  */
 import 'server-only';
 import { refund, reserve, throttleKey, type ThrottleRule } from '@/db/throttle';
-import { HttpError } from '@/lib/api/respond';
+import { HttpError } from '@/server/api/respond';
 
 const HOUR = 3_600_000;
 const DAY = 24 * HOUR;

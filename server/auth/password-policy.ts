@@ -10,7 +10,7 @@
 import 'server-only';
 import { dictionary } from '@zxcvbn-ts/language-common';
 import { refine } from 'zod/mini';
-import { passwordLengthSchema } from './password-rules';
+import { passwordLengthSchema } from '../../lib/auth/password-rules';
 
 export const PASSWORD_TOO_COMMON = 'this password is on a list of common passwords; choose one that is not';
 

@@ -10,9 +10,9 @@ import type { Actor } from '@/db/actor';
 import type { QuoteDto } from '@/db/quotes';
 import { markReceiptSent, quoteReference, receiptFacts } from '@/db/quotes';
 import { layoutClient } from '@/db/sharing/recipients';
-import { depositReceiptMail, quoteSentMail } from '@/lib/mail/receipt';
+import { depositReceiptMail, quoteSentMail } from '@/server/mail/receipt';
 import { returnOrigin } from './return-origin';
-import { mailConfigured, sendMail } from '@/lib/mail/transport';
+import { mailConfigured, sendMail } from '@/server/mail/transport';
 
 export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
 

@@ -1,13 +1,13 @@
 /**
  * The key that signs session tokens. AUTH_SECRET in production, where a missing one stops the
  * server (never a generated key: it would sign sessions nobody configured). Where local stand-ins
- * are allowed (outside production, the demo, the tests: lib/local-mode) a random key is made once
+ * are allowed (outside production, the demo, the tests: server/local-mode) a random key is made once
  * and kept in ./data/.auth-secret so sessions survive restarts.
  */
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
-import { dataRoot } from '../data-root';
+import { dataRoot } from '../../lib/data-root';
 import { proxyTrust, publicUrlIsHttps } from './address';
 import { localStandInsAllowed } from '../local-mode';
 
@@ -55,7 +55,7 @@ export function secureCookiesWanted(): boolean {
 /**
  * Auth.js's `useSecureCookies`: always with an https public URL; per request behind a trusted
  * proxy (undefined lets Auth.js follow the request's scheme, which the connection policy in
- * lib/auth/address.ts took from the proxy's X-Forwarded-Proto); never otherwise.
+ * server/auth/address.ts took from the proxy's X-Forwarded-Proto); never otherwise.
  */
 export function secureCookiesSetting(): boolean | undefined {
   if (publicUrlIsHttps()) return true;

@@ -7,7 +7,7 @@ import 'server-only';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { issuesFromZod, type FieldIssue } from '@/lib/layout/parse';
-import { actorFromRequest } from '@/lib/auth/session';
+import { actorFromRequest } from '@/server/auth/session';
 import type { Actor } from '@/db/actor';
 import { WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
 import { correlationId, describeError, log, routeOf } from '@/lib/log';

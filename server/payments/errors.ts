@@ -7,7 +7,7 @@
 import 'server-only';
 import { log } from '@/lib/log';
 import Stripe from 'stripe';
-import { HttpError } from '@/lib/api/respond';
+import { HttpError } from '@/server/api/respond';
 import { PaymentsNotConfigured } from './config';
 
 export function asPaymentHttpError(err: unknown): unknown {

@@ -1,7 +1,7 @@
 /**
  * Starts the local fake payment API as its own process for the demo and e2e runs:
  *   FAKE_STRIPE_PORT=12111 FAKE_STRIPE_WEBHOOK_URL=http://127.0.0.1:3000/api/payments/webhook \
- *   STRIPE_WEBHOOK_SECRET=whsec_baywright_fake npx tsx lib/fakes/stripe/run.ts
+ *   STRIPE_WEBHOOK_SECRET=whsec_baywright_fake npx tsx dev/fakes/stripe/run.ts
  * Prints its URL, stops cleanly on SIGINT/SIGTERM. Test keys only; never a real service.
  */
 import { startFakeStripe } from './server';

@@ -6,7 +6,7 @@
  * does not depend on this cache, because the caller is looked up in the database each time.
  */
 import 'server-only';
-import { Lru } from '../cache/lru';
+import { Lru } from '../../lib/cache/lru';
 
 export interface SessionClaims {
   uid?: string;

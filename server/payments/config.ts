@@ -1,6 +1,6 @@
 /**
  * Where the deposit flow's payment API is and which keys it uses. Where local stand-ins are
- * allowed (outside production, or the demo and tests: lib/local-mode) that is always the local fake payment API (lib/fakes/stripe)
+ * allowed (outside production, or the demo and tests: server/local-mode) that is always the local fake payment API (dev/fakes/stripe)
  * on 127.0.0.1, with a test key and a webhook secret made for this data folder; a real
  * deployment sets STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET and the official service is used.
  *

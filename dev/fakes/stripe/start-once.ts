@@ -1,17 +1,17 @@
 /**
  * Starts this process's local fake payment API once (dev reloads get the same one), for
- * lib/fakes/local-services. Port: FAKE_STRIPE_PORT, default 12111; when the default is taken
+ * dev/fakes/local-services. Port: FAKE_STRIPE_PORT, default 12111; when the default is taken
  * (another app process on this machine runs its own fake) it falls back to a free port, and
- * publishes whichever it got for lib/payments. Webhooks go to this app's own
+ * publishes whichever it got for server/payments. Webhooks go to this app's own
  * `/api/payments/webhook` on 127.0.0.1 and PORT (FAKE_STRIPE_WEBHOOK_URL overrides), signed with
- * lib/payments' webhook secret.
+ * server/payments' webhook secret.
  *
- * Must never run in production unless asked (lib/local-mode), listen beyond loopback, or
+ * Must never run in production unless asked (server/local-mode), listen beyond loopback, or
  * sign with anything but the local secret.
  */
 import 'server-only';
-import { log } from '../../log';
-import { DEFAULT_FAKE_STRIPE_PORT, setFakeStripeAddress, webhookSecret } from '../../payments/config';
+import { log } from '../../../lib/log';
+import { DEFAULT_FAKE_STRIPE_PORT, setFakeStripeAddress, webhookSecret } from '../../../server/payments/config';
 import { startFakeStripe, type FakeStripe } from './server';
 
 type GlobalWithFake = typeof globalThis & { __baywrightFakeStripeServer?: Promise<FakeStripe> };

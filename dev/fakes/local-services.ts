@@ -4,14 +4,14 @@
  * condition under which it runs; production deployments point at the real services instead and
  * never start a fake unless asked (BAYWRIGHT_DEMO=1 or BAYWRIGHT_LOCAL_FAKES=1).
  */
-import { log } from '../log';
-import { localStandInsAllowed } from '../local-mode';
+import { log } from '../../lib/log';
+import { localStandInsAllowed } from '../../server/local-mode';
 
 type Starter = { name: string; wanted: () => boolean; start: () => Promise<void> };
 
 const g = globalThis as typeof globalThis & { __baywrightServices?: Promise<void> };
 
-/** Fakes run outside production, and in production only when the demo or a test asks (lib/local-mode). */
+/** Fakes run outside production, and in production only when the demo or a test asks (server/local-mode). */
 export function fakesWanted(): boolean {
   return localStandInsAllowed();
 }
@@ -19,7 +19,7 @@ export function fakesWanted(): boolean {
 /** The fakes this app starts itself; each entry imports its fake lazily. */
 const STARTERS: Starter[] = [
   {
-    // Development mail server: invitations and notifications land in /outbox (lib/fakes/smtp).
+    // Development mail server: invitations and notifications land in /outbox (dev/fakes/smtp).
     name: 'mail server',
     wanted: () => fakesWanted() && !process.env.SMTP_URL,
     start: async () => {
@@ -28,7 +28,7 @@ const STARTERS: Starter[] = [
     },
   },
   {
-    // Local test payment API for the deposit flow: hosted checkout and signed webhooks (lib/fakes/stripe).
+    // Local test payment API for the deposit flow: hosted checkout and signed webhooks (dev/fakes/stripe).
     name: 'payment API',
     wanted: () => fakesWanted(),
     start: async () => {

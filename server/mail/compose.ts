@@ -3,7 +3,7 @@
  * text body and a matching simple HTML body. Every piece of user text is HTML-escaped; links are
  * only ever http(s). Pure: no network, no database. Must never put unescaped input into HTML.
  */
-import { palette } from '../look';
+import { palette } from '../../lib/look';
 
 export interface MessageParts {
   greeting: string;

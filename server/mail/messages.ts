@@ -5,8 +5,8 @@
  */
 import { compose, oneLine, type ComposedMail } from './compose';
 
-import { SIGN_OFF_CAUTION } from '../layout/cautions';
-import { formatDate } from '../format';
+import { SIGN_OFF_CAUTION } from '../../lib/layout/cautions';
+import { formatDate } from '../../lib/format';
 
 /** Said wherever a plan is issued or approved (its words live in lib/layout/cautions). */
 export { SIGN_OFF_CAUTION };

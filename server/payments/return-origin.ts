@@ -1,14 +1,14 @@
 /**
  * The address links back into the app are built on (the checkout's return, the quote and receipt
  * mail). Must never let a request choose the address where a public URL is configured or where
- * lib/mail/public-url refuses the request as a stand-in (production without the demo).
+ * server/mail/public-url refuses the request as a stand-in (production without the demo).
  */
 import 'server-only';
-import { publicOrigin } from '@/lib/mail/public-url';
+import { publicOrigin } from '@/server/mail/public-url';
 
 /**
  * Where the checkout sends the client back to: the configured public address when there is one
- * (lib/mail/public-url decides whether the request may stand in); otherwise the host the browser
+ * (server/mail/public-url decides whether the request may stand in); otherwise the host the browser
  * itself used, so its session cookie comes along (the server may see itself as localhost while the
  * browser is on 127.0.0.1). Origin was already checked against Host by the route's `handle`.
  */

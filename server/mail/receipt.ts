@@ -4,10 +4,10 @@
  * inputs (names, amounts in minor units, dates, an absolute link the caller built), in the style
  * of messages.ts. Must never look anything up or send anything.
  */
-import { QUOTE_CAUTION } from '../layout/cautions';
+import { QUOTE_CAUTION } from '../../lib/layout/cautions';
 import { compose, oneLine, type ComposedMail } from './compose';
 
-import { formatLongDate as day, formatMoney } from '../format';
+import { formatLongDate as day, formatMoney } from '../../lib/format';
 
 export { formatMoney };
 

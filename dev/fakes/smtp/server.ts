@@ -6,15 +6,15 @@
  * the port for the app's mail transport (./address).
  *
  * Must never listen on anything but loopback, never relay mail anywhere, and never run in a
- * deployment that talks to a real relay (SMTP_URL set), or in production unless asked (lib/local-mode).
+ * deployment that talks to a real relay (SMTP_URL set), or in production unless asked (server/local-mode).
  */
 import 'server-only';
 import { log } from '@/lib/log';
-import { localStandInsAllowed } from '@/lib/local-mode';
+import { localStandInsAllowed } from '@/server/local-mode';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { storeReceivedMail, type ReceivedMail } from '@/db/sharing/outbox';
-import { setFakeSmtpAddress } from './address';
+import { setFakeSmtpAddress } from '../../../server/local-mode';
 
 /** Larger messages are refused with SMTP 552 (our own mail is a few kB). */
 export const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;

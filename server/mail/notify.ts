@@ -17,7 +17,7 @@ import { studioName } from '@/db/studios';
 import { markupMail, decisionMail, invitationMail, revisionIssuedMail } from './messages';
 import { publicUrl } from './public-url';
 import { MAIL_NOT_CONFIGURED, mailConfigured, sendMail } from './transport';
-import { HttpError } from '@/lib/api/respond';
+import { HttpError } from '@/server/api/respond';
 import type { ComposedMail } from './compose';
 
 export type MailOutcome = 'sent' | 'not-sent' | 'no-recipient' | 'not-configured';
@@ -28,7 +28,7 @@ export function requireMail(): void {
 }
 
 /**
- * Sends one mail per recipient. `sender` is counted against the mail budget (lib/mail/budget.ts);
+ * Sends one mail per recipient. `sender` is counted against the mail budget (server/mail/budget.ts);
  * invitations took theirs before anything changed, so they pass none here.
  */
 async function deliver(studioId: string, to: Recipient[], build: (r: Recipient) => ComposedMail, sender?: Actor): Promise<MailOutcome> {

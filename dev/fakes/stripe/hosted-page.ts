@@ -6,7 +6,7 @@
  * payment provider's page.
  */
 import type { StoredSession } from './checkout-sessions';
-import { formatMoney as formatAmount } from '../../format';
+import { formatMoney as formatAmount } from '../../../lib/format';
 
 export function escapeHtml(s: string): string {
   return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);

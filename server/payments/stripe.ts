@@ -1,6 +1,6 @@
 /**
  * The official `stripe` SDK, set up for this process: pointed at the local fake payment API
- * unless this is a real deployment (lib/payments/config). One client per key and address.
+ * unless this is a real deployment (server/payments/config). One client per key and address.
  * Only the endpoints the deposit flow needs are used (Checkout Sessions create and retrieve) and
  * webhooks are verified with the SDK's own `webhooks.constructEvent`.
  * Must never be imported by client components, and never log keys or signatures.
