@@ -25,6 +25,7 @@ import { DEMO_PASSWORD } from '../lib/demo-accounts';
 import { generateLayout } from '../tests/checks/fixtures/generatedLayout';
 import type { LayoutDoc } from '../lib/layout';
 import { percentile, round } from './stats';
+import { inArrangement } from '@/lib/layout/bay';
 
 const LAUNCH = {
   executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -125,7 +126,7 @@ async function dragBench(page: Page, base: string, id: string, doc: LayoutDoc, r
     await openEditor(page, base, id);
     await instrument(page);
     // Grab a module near the front-left, in the arrangement on show (lounge), and drag it rearwards.
-    const m = doc.modules.filter((o) => o.arrangements.includes('lounge') && o.elevation === 0).sort((a, b) => a.x - b.x || a.y - b.y)[0];
+    const m = doc.modules.filter((o) => inArrangement(o, 'lounge') && o.elevation === 0).sort((a, b) => a.x - b.x || a.y - b.y)[0];
     const start = await screenOf(page, m.x + m.length / 2, m.y + m.width / 2);
     const plan = page.getByTestId('plan');
     const box = (await plan.boundingBox())!;
@@ -177,7 +178,7 @@ async function dropToFindings(page: Page, base: string, id: string, doc: LayoutD
   await openEditor(page, base, id);
   await page.getByTestId('checks-status').filter({ hasText: 'up to date' }).waitFor({ timeout: 30_000 });
   await page.evaluate('if (window.__baywrightChecks) window.__baywrightChecks.latencies = []');
-  const m = doc.modules.filter((o) => o.arrangements.includes('lounge') && o.elevation === 0 && o.kind === 'drawer-unit')[0] ?? doc.modules[0];
+  const m = doc.modules.filter((o) => inArrangement(o, 'lounge') && o.elevation === 0 && o.kind === 'drawer-unit')[0] ?? doc.modules[0];
   await page.evaluate('performance.clearResourceTimings()');
   for (let i = 0; i < DROPS; i++) {
     const dir = i % 2 === 0 ? 1 : -1;

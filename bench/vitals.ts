@@ -24,6 +24,7 @@ import { DEMO_PASSWORD } from '../lib/demo-accounts';
 import { generateLayout } from '../tests/checks/fixtures/generatedLayout';
 import { LAUNCH } from './bundles';
 import { round } from './stats';
+import { inArrangement } from '@/lib/layout/bay';
 
 const VITALS_SOURCE = fs.readFileSync(path.join(process.cwd(), 'node_modules/web-vitals/dist/web-vitals.iife.js'), 'utf8');
 /** Registered before any page script runs; every report (reportAllChanges) overwrites the last. */
@@ -129,8 +130,8 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
 
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, storageState: storage });
   const editor = `${base}/layouts/${ids.layout}`;
-  const lounge = doc.modules.filter((m) => m.arrangements.includes('lounge') && m.elevation === 0 && m.kind === 'drawer-unit')[0]
-    ?? doc.modules.filter((m) => m.arrangements.includes('lounge') && m.elevation === 0)[0];
+  const lounge = doc.modules.filter((m) => inArrangement(m, 'lounge') && m.elevation === 0 && m.kind === 'drawer-unit')[0]
+    ?? doc.modules.filter((m) => inArrangement(m, 'lounge') && m.elevation === 0)[0];
   const interactions: InteractionVitals[] = [];
   try {
     interactions.push({

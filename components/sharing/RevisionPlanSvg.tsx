@@ -10,7 +10,8 @@
 import type { Arrangement, LayoutDoc, Module } from '@/lib/layout/schema';
 import { moduleName } from '@/lib/layout/revision-words';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
-import { boundingRect, deltaTriangle, rectFromExtent, revisionCloud, type Rect } from '@/lib/geometry';
+import { boundingRect, deltaTriangle, revisionCloud, type Rect } from '@/lib/geometry';
+import { archBoxes, inArrangement, linedInterior, modulesIn, moduleRect as rectOf } from '@/lib/layout/bay';
 import { palette } from '@/lib/look';
 
 export type PlanSide = 'from' | 'to';
@@ -19,11 +20,6 @@ const INK = palette.ink;
 const FAINT = palette.inkFaint;
 const CLOUD = palette.copper;
 
-function wallThickness(doc: LayoutDoc): number {
-  return doc.buildUp.walls.reduce((t, l) => t + l.thickness, 0);
-}
-
-const rectOf = (m: Module): Rect => rectFromExtent(m.x, m.y, m.length, m.width);
 const pointsAttr = (pts: [number, number][]) => pts.map(([x, y]) => `${x.toFixed(1)},${y.toFixed(1)}`).join(' ');
 
 export interface RevisionMark {
@@ -38,11 +34,11 @@ export interface RevisionMark {
 /** The clouds one arrangement needs on the later side. */
 export function revisionMarks(diff: RevisionDiff, arrangement: Arrangement): RevisionMark[] {
   const marks: RevisionMark[] = [];
-  for (const m of diff.added) if (m.arrangements.includes(arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'added', area: rectOf(m), was: null });
-  for (const m of diff.removed) if (m.arrangements.includes(arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'removed', area: rectOf(m), was: m });
+  for (const m of diff.added) if (inArrangement(m, arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'added', area: rectOf(m), was: null });
+  for (const m of diff.removed) if (inArrangement(m, arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'removed', area: rectOf(m), was: m });
   for (const c of diff.changed) {
-    const here = c.after.arrangements.includes(arrangement);
-    const there = c.before.arrangements.includes(arrangement);
+    const here = inArrangement(c.after, arrangement);
+    const there = inArrangement(c.before, arrangement);
     if (!here && !there) continue;
     const placed = c.moved || c.resized;
     const area = here && there && placed ? boundingRect([rectOf(c.before), rectOf(c.after)])! : rectOf(here ? c.after : c.before);
@@ -55,8 +51,8 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
   const { length, width } = doc.bay;
   const pad = Math.max(length, width) * 0.09;
   const font = Math.max(40, width / 28);
-  const wall = wallThickness(doc);
-  const modules = doc.modules.filter((m) => m.arrangements.includes(arrangement));
+  const lined = linedInterior(doc);
+  const modules = modulesIn(doc, arrangement);
   const marks = side === 'to' ? revisionMarks(diff, arrangement) : [];
   const tri = font * 2;
 
@@ -72,9 +68,9 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
         {/* bare metal */}
         <rect x={0} y={0} width={length} height={width} fill="none" stroke={INK} strokeWidth={font / 4} />
         {/* lined interior */}
-        {wall > 0 && <rect x={0} y={wall} width={length} height={Math.max(0, width - 2 * wall)} fill="none" stroke={FAINT} strokeWidth={font / 12} strokeDasharray={`${font / 2} ${font / 3}`} />}
-        {doc.bay.wheelArches.map((a, i) => (
-          <rect key={i} x={a.x} y={a.side === 'left' ? 0 : width - a.width} width={a.length} height={a.width} fill={palette.paperDeep} stroke={FAINT} strokeWidth={font / 12} />
+        {lined.y0 > 0 && <rect x={lined.x0} y={lined.y0} width={lined.x1 - lined.x0} height={Math.max(0, lined.y1 - lined.y0)} fill="none" stroke={FAINT} strokeWidth={font / 12} strokeDasharray={`${font / 2} ${font / 3}`} />}
+        {archBoxes(doc).map(({ rect: r }, i) => (
+          <rect key={i} x={r.x0} y={r.y0} width={r.x1 - r.x0} height={r.y1 - r.y0} fill={palette.paperDeep} stroke={FAINT} strokeWidth={font / 12} />
         ))}
         {/* the cab is at x = 0 */}
         <path d={`M ${-pad * 0.2} ${width / 2 - font} L ${-pad * 0.7} ${width / 2} L ${-pad * 0.2} ${width / 2 + font} Z`} fill={INK} />

@@ -7,7 +7,7 @@
  */
 import { clusterByGap, intervalGap, intervalOverlap, largestRectangle, WorkLimitError, type Rect, type WorkBudget } from '../geometry';
 import type { LayoutDoc, Module } from '../layout/schema';
-import { inArrangement, moduleRect, topAboveBare, type BuildUpThickness } from './bayModel';
+import { inArrangement, moduleRect, topAboveBare, type BuildUpThickness } from '../layout/bay';
 import { largestFittingMattress, type Mattress } from './mattress';
 import type { CheckSettings } from './settings';
 

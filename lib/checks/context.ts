@@ -6,7 +6,7 @@
  */
 import { WorkBudget, type Rect } from '../geometry';
 import type { Arrangement, LayoutDoc } from '../layout/schema';
-import { buildUpThickness, inArrangement, moduleRect, type BuildUpThickness } from './bayModel';
+import { buildUpThickness, inArrangement, moduleRect, type BuildUpThickness } from '../layout/bay';
 import { findBeds, type Bed } from './beds';
 import { analyseFloor, type FloorAnalysis } from './floorAnalysis';
 import { RULE_CONSTANTS, type CheckSettings } from './settings';

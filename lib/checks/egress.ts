@@ -6,7 +6,8 @@
  */
 import { FreeFloorModel, intervalOverlap } from '../geometry';
 import type { Module } from '../layout/schema';
-import { describeDoor, doorOpenings, linedInterior, moduleRect } from './bayModel';
+import { doorOpenings, linedInterior, moduleRect } from '../layout/bay';
+import { describeDoor } from './moduleRoles';
 import type { CheckContext } from './context';
 import { floorObstacles } from './floorAnalysis';
 import { listNames, mm, moduleName } from './naming';
@@ -43,7 +44,7 @@ export function egressSleep(ctx: CheckContext): Finding[] {
   const r = corridor / 2;
   const pieceRects = beds.flatMap((b) => b.pieces.map(moduleRect));
   const model = new FreeFloorModel({
-    interior: linedInterior(ctx.doc, ctx.t.wallT),
+    interior: linedInterior(ctx.doc),
     obstacles: floorObstacles(ctx.doc, 'sleep'),
     openings: doorOpenings(ctx.doc).map((d) => d.opening),
     marks: pieceRects.flatMap((p) => [p.x0, p.x1, p.x0 - r, p.x1 + r]),

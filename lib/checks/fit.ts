@@ -9,10 +9,11 @@
 import { intervalOverlap, overlapGroups, rectsOverlap } from '../geometry';
 import { ARRANGEMENTS } from '../layout/vocabulary';
 import type { Arrangement, LayoutDoc, Module } from '../layout/schema';
-import { archBoxes, moduleRect, topAboveBare, undersideAboveBare, type BuildUpThickness } from './bayModel';
+import { archBoxes, moduleRect, topAboveBare, undersideAboveBare, type BuildUpThickness } from '../layout/bay';
 import { listNames, mm, moduleName, plural } from './naming';
 import { SOURCES } from './sources';
 import type { Finding } from './types';
+import { inArrangement } from '../layout/bay';
 import { formatWhole } from '../format';
 
 export function fitInside(doc: LayoutDoc, t: BuildUpThickness): Finding[] {
@@ -115,7 +116,7 @@ export function fitWheelArch(doc: LayoutDoc, t: BuildUpThickness): Finding[] {
 }
 
 function commonArrangements(a: Module, b: Module): Arrangement[] {
-  return ARRANGEMENTS.filter((x) => a.arrangements.includes(x) && b.arrangements.includes(x));
+  return ARRANGEMENTS.filter((x) => inArrangement(a, x) && inArrangement(b, x));
 }
 
 /**
@@ -137,7 +138,7 @@ function heightsOverlap(a: Module, b: Module): boolean {
 
 /** Modules drawn identically (same box, same arrangements) overlap each other wholly; they are compared once. */
 function twinKey(m: Module): string {
-  return `${m.x},${m.y},${m.length},${m.width},${m.elevation},${m.height},${ARRANGEMENTS.filter((a) => m.arrangements.includes(a)).join('+')}`;
+  return `${m.x},${m.y},${m.length},${m.width},${m.elevation},${m.height},${ARRANGEMENTS.filter((a) => inArrangement(m, a)).join('+')}`;
 }
 
 function pairFinding(a: Module, b: Module): Finding {
@@ -165,7 +166,7 @@ function clusterFinding(members: Module[], deepA: Module, deepB: Module): Findin
   const ra = moduleRect(deepA), rb = moduleRect(deepB);
   const ox = intervalOverlap(ra.x0, ra.x1, rb.x0, rb.x1);
   const oy = intervalOverlap(ra.y0, ra.y1, rb.y0, rb.y1);
-  const arrangements = ARRANGEMENTS.filter((x) => members.filter((m) => m.arrangements.includes(x)).length >= 2);
+  const arrangements = ARRANGEMENTS.filter((x) => members.filter((m) => inArrangement(m, x)).length >= 2);
   const shown = members.slice(0, OVERLAP_LIMITS.idsPerCluster);
   return {
     id: 'fit.overlap',

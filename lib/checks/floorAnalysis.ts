@@ -12,7 +12,8 @@
  */
 import { FreeFloorModel, type FreeFloor, type Rect, type WorkBudget } from '../geometry';
 import type { Arrangement, LayoutDoc, Module } from '../layout/schema';
-import { archBoxes, blocksFloor, doorOpenings, inArrangement, linedInterior, moduleRect, usedFromFront, workingZone, type BuildUpThickness } from './bayModel';
+import { archBoxes, doorOpenings, inArrangement, linedInterior, moduleRect, workingZone, type BuildUpThickness } from '../layout/bay';
+import { blocksFloor, usedFromFront } from './moduleRoles';
 import { RULE_CONSTANTS } from './settings';
 
 export interface WorkTarget {
@@ -56,7 +57,7 @@ export function analyseFloor(doc: LayoutDoc, t: BuildUpThickness, arrangement: A
   const near = options.nearBy ?? options.radius;
   for (const q of options.queried ?? []) marks.push(q.x0, q.x1, q.x0 - near, q.x1 + near);
   const openings = doorOpenings(doc).map((d) => d.opening);
-  const model = new FreeFloorModel({ interior: linedInterior(doc, t.wallT), obstacles: floorObstacles(doc, arrangement), openings, marks, budget: options.budget });
+  const model = new FreeFloorModel({ interior: linedInterior(doc), obstacles: floorObstacles(doc, arrangement), openings, marks, budget: options.budget });
   const floor = model.sweep(options.radius);
   return {
     arrangement,

@@ -11,7 +11,7 @@
  * framework or database code.
  */
 import type { Arrangement } from '../layout/schema';
-import { moduleRect } from './bayModel';
+import { moduleRect } from '../layout/bay';
 import { RULE_CONSTANTS } from './settings';
 import type { CheckContext } from './context';
 import { mm, moduleName } from './naming';

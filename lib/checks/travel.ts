@@ -7,7 +7,7 @@
  * Pure: must never import UI, framework or database code.
  */
 import { beltedTravelSeats } from '../planning/module-facts';
-import { inArrangement } from './bayModel';
+import { inArrangement } from '../layout/bay';
 import type { CheckContext } from './context';
 import { listNames, moduleName, plural } from './naming';
 import { SOURCES } from './sources';

@@ -10,7 +10,8 @@
  */
 import { widestRouteBounds, widestRouteIntoZone } from '../geometry';
 import type { Arrangement } from '../layout/schema';
-import { describeDoor, doorOpenings } from './bayModel';
+import { doorOpenings } from '../layout/bay';
+import { describeDoor } from './moduleRoles';
 import type { CheckContext } from './context';
 import type { FloorAnalysis } from './floorAnalysis';
 import { listNames, mm, moduleName, plural } from './naming';

@@ -4,6 +4,7 @@
  * of "Mass" and "Seats in the cab", never of `massKg` or `cabSeats`. Pure words; must never
  * import React, Next or the database.
  */
+import { valueLabel } from './kinds';
 import type { Module } from './schema';
 
 export const MODULE_FIELD_WORDS = {
@@ -17,16 +18,9 @@ export const MODULE_FIELD_WORDS = {
 
 export const FACING_WORDS: Record<Module['facing'], string> = { front: 'front (towards the cab)', rear: 'rear', left: 'left wall', right: 'right wall' };
 
-/** A kind's own values (module `props`), by key. */
-export const PROP_WORDS: Record<string, string> = {
-  litres: 'Capacity (litres)', capacityL: 'Capacity (litres)', watts: 'Power (W)', dutyCycle: 'Duty cycle (0–1)', burners: 'Burners', cylinders: 'Cylinders',
-  cylinderKg: 'Cylinder size (kg)', belted: 'Belted seat', fillLevel: 'Fill level drawn (0–1)',
-  approved: 'Seat and belt of an approved type', anchorageTested: 'Anchorages fitted to the maker’s kit or tested',
-};
-
-/** The name of a kind's own value; an unlisted key is spelt out in words ("fuelType" → "fuel type"). */
+/** The name of a kind's own value (its label in the kind registry); an unknown key is spelt out in words ("fuelType" → "Fuel type"). */
 export function propWord(key: string): string {
-  const known = PROP_WORDS[key];
+  const known = valueLabel(key);
   if (known) return known;
   const spaced = key.replace(/([a-z0-9])([A-Z])/g, '$1 $2').replace(/[_-]+/g, ' ').toLowerCase();
   return spaced.charAt(0).toUpperCase() + spaced.slice(1);

@@ -1,4 +1,6 @@
 export * from './schema';
+export * from './document';
+export * from './bay';
 export * from './parse';
 export * from './kinds';
 export * from './units';

@@ -3,10 +3,11 @@
  * the current schema, then validation. Errors come back as a list of field paths and messages so
  * an API can return them as a 400 and a form can show them beside the field.
  */
-import type { z } from 'zod';
-import { layoutDocSchema, type LayoutDoc } from './schema';
+import type { z } from 'zod/mini';
+import { CURRENT_SCHEMA_VERSION, layoutDocSchema, type LayoutDoc } from './document';
+import { kindSpec, KINDS, type ModuleKind } from './kinds';
 
-export const CURRENT_SCHEMA_VERSION = 1;
+export { CURRENT_SCHEMA_VERSION };
 
 export interface FieldIssue {
   /** Dotted path into the document, e.g. `modules.3.width`; empty for the document itself. */
@@ -20,9 +21,33 @@ export type ParseResult<T> = { ok: true; value: T } | { ok: false; issues: Field
 const migrations: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {
   // 0: documents written before the version field existed carry everything version 1 has.
   0: (doc) => ({ ...doc, schemaVersion: 1 }),
+  // 1: a module's `props` was a free bag of names; now each kind declares its values (kinds.ts).
+  // Values the module's kind declares are kept (a number or yes/no typed as text is read as one);
+  // names the kind does not declare, and values outside their limits, are dropped.
+  1: (doc) => ({ ...doc, schemaVersion: 2, modules: Array.isArray(doc.modules) ? doc.modules.map(typedProps) : doc.modules }),
 };
 
-export function issuesFromZod(error: z.ZodError): FieldIssue[] {
+function typedProps(m: unknown): unknown {
+  if (typeof m !== 'object' || m === null || Array.isArray(m)) return m;
+  const { props, ...rest } = m as Record<string, unknown>;
+  const kind = rest.kind;
+  if (props === undefined || typeof kind !== 'string' || !Object.hasOwn(KINDS, kind)) return m;
+  if (typeof props !== 'object' || props === null || Array.isArray(props)) return rest;
+  const fields = kindSpec(kind as ModuleKind).values;
+  const out: Record<string, unknown> = {};
+  for (const [key, raw] of Object.entries(props)) {
+    const field = Object.hasOwn(fields, key) ? fields[key] : undefined;
+    if (!field) continue;
+    const value = field.input === 'number' && typeof raw === 'string' && raw.trim() !== '' ? Number(raw.trim().replace(',', '.'))
+      : field.input === 'boolean' && (raw === 'true' || raw === 'false') ? raw === 'true'
+        : field.input === 'text' && typeof raw === 'number' ? String(raw)
+          : raw;
+    if (field.schema.safeParse(value).success) out[key] = value;
+  }
+  return Object.keys(out).length > 0 ? { ...rest, props: out } : rest;
+}
+
+export function issuesFromZod(error: { issues: readonly z.core.$ZodIssue[] }): FieldIssue[] {
   return error.issues.map((issue) => ({
     path: issue.path.map(String).join('.'),
     message: issue.message,

@@ -9,6 +9,7 @@
  * check engine.
  */
 import type { Arrangement, LayoutDoc, Module } from './schema';
+import { layersThickness } from './bay';
 
 export interface Moved {
   dx: number;
@@ -92,7 +93,7 @@ function bayChanges(before: LayoutDoc, after: LayoutDoc): BayChange[] {
   if (before.bay.bulkhead !== after.bay.bulkhead) out.push({ field: 'bulkhead', before: before.bay.bulkhead ? 'yes' : 'no', after: after.bay.bulkhead ? 'yes' : 'no' });
   if (!same(before.bay.wheelArches, after.bay.wheelArches)) out.push({ field: 'wheelArches', before: `${before.bay.wheelArches.length}`, after: `${after.bay.wheelArches.length}` });
   if (!same(before.bay.doors, after.bay.doors)) out.push({ field: 'doors', before: `${before.bay.doors.length}`, after: `${after.bay.doors.length}` });
-  const thickness = (d: LayoutDoc) => (['floor', 'roof', 'walls'] as const).map((s) => `${s} ${d.buildUp[s].reduce((t, l) => t + l.thickness, 0)} mm`).join(', ');
+  const thickness = (d: LayoutDoc) => (['floor', 'roof', 'walls'] as const).map((s) => `${s} ${layersThickness(d.buildUp[s])} mm`).join(', ');
   if (!same(before.buildUp, after.buildUp)) out.push({ field: 'buildUp', before: thickness(before), after: thickness(after) });
   if (!same(before.occupants, after.occupants)) {
     const words = (d: LayoutDoc) => `standing ${d.occupants.standingHeight} mm, ${d.occupants.sleepers.length} sleeper(s)`;

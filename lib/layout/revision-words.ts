@@ -59,10 +59,12 @@ export function moduleChangeWords(c: ModuleChange, units: LengthUnit = 'mm'): { 
     else if (field === 'surface') lines.push(`${MODULE_FIELD_WORDS.surface}: ${value(b.surface)} → ${value(a.surface)}`);
     else if (field === 'massKg') lines.push(`${MODULE_FIELD_WORDS.massKg}: ${b.massKg === undefined ? 'none' : `${b.massKg} kg`} → ${a.massKg === undefined ? 'none' : `${a.massKg} kg`}`);
     else if (field === 'props') {
-      const keys = [...new Set([...Object.keys(b.props ?? {}), ...Object.keys(a.props ?? {})])].sort();
+      const bp: Record<string, unknown> = b.props ?? {};
+      const ap: Record<string, unknown> = a.props ?? {};
+      const keys = [...new Set([...Object.keys(bp), ...Object.keys(ap)])].sort();
       for (const k of keys) {
-        const before = b.props?.[k];
-        const after = a.props?.[k];
+        const before = bp[k];
+        const after = ap[k];
         if (JSON.stringify(before ?? null) !== JSON.stringify(after ?? null)) lines.push(`${propWord(k)}: ${value(before)} → ${value(after)}`);
       }
     }

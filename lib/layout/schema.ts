@@ -1,26 +1,34 @@
 /**
- * The layout document: the one contract between the editor, the server, the check engine and
- * the stored rows. Plain, serialisable data; every length is an integer number of millimetres,
- * every mass kilograms. Coordinates: origin at the front-left corner of the bare-metal load floor,
- * x rearwards, y across to the right wall, z up from the bare floor.
+ * The layout document's parts — bay, build-up, occupants, modules, settings — as one zod schema
+ * (the small `zod/mini` build, so the editor validates every edit with this same schema in the
+ * browser). `document.ts` puts them together into the whole document. Plain, serialisable data;
+ * every length is an integer number of millimetres, every mass kilograms. Coordinates: origin at
+ * the front-left corner of the bare-metal load floor, x rearwards, y across to the right wall, z up
+ * from the bare floor. A module's kind-specific values (`props`) are typed per kind: the schema is
+ * a union on `kind`, each branch taking its values from the kind registry (`kinds.ts`).
  *
  * Must never import React, Konva, Next or the database (lint-enforced).
  */
-import { z } from 'zod';
-import { systemsSchema } from './systems';
-import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, SURFACES } from './vocabulary';
+import * as z from 'zod/mini';
+import { KINDS, kindValuesSchema, MODULE_KINDS, type KindValues, type ModuleKind } from './kinds';
+import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_LIMITS, SURFACES } from './vocabulary';
 
 export { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, SURFACES };
+export type { ModuleKind };
+export type { LayoutDoc, LayoutDocInput } from './document';
 
 /** An integer length in millimetres. Bounded so no arithmetic can overflow into nonsense. */
-const mm = (max = 100_000) => z.number().int('must be a whole number of millimetres').min(0).max(max);
+const mmBetween = (min: number, max: number) =>
+  z.int('must be a whole number of millimetres').check(z.refine((v) => v >= min && v <= max, `must be between ${min} and ${max} mm`));
+const mm = (max = 100_000) => mmBetween(0, max);
 /** A signed integer length (positions may sit left of or in front of the origin while being fixed). */
-const mmSigned = (limit = 100_000) => z.number().int('must be a whole number of millimetres').min(-limit).max(limit);
-const id = z.string().min(1).max(64).regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, - and _ only');
+const mmSigned = (limit = 100_000) => mmBetween(-limit, limit);
+const id = z.string().check(z.minLength(1, 'letters, digits, - and _ only (1–64)'), z.maxLength(64, 'letters, digits, - and _ only (1–64)'), z.regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, - and _ only'));
 /** Text a person typed: bounded, and free of control characters (PostgreSQL cannot even store NUL). */
 export const plainText = (max: number) =>
-  z.string().max(max).refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'control characters are not allowed');
+  z.string().check(z.maxLength(max, `at most ${max} characters`), z.refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'control characters are not allowed'));
 const text = plainText;
+const atMost = (n: number, what: string) => z.maxLength(n, `at most ${n} ${what}`);
 
 export type Arrangement = (typeof ARRANGEMENTS)[number];
 export const arrangementSchema = z.enum(ARRANGEMENTS);
@@ -29,7 +37,6 @@ export type Facing = (typeof FACINGS)[number];
 
 export type Surface = (typeof SURFACES)[number];
 
-export type ModuleKind = (typeof MODULE_KINDS)[number];
 export const moduleKindSchema = z.enum(MODULE_KINDS);
 
 export const wheelArchSchema = z.strictObject({
@@ -51,110 +58,112 @@ export const doorSchema = z.strictObject({
 });
 export type Door = z.infer<typeof doorSchema>;
 
+const bayMm = (limit: { min: number; max: number }, what: string) =>
+  mm(limit.max).check(z.refine((v) => v >= limit.min, `a bay is at least ${limit.min} mm ${what}`));
 
 export const baySchema = z
   .strictObject({
-    length: mm(BAY_LIMITS.length.max).min(BAY_LIMITS.length.min, `a bay is at least ${BAY_LIMITS.length.min} mm long`),
-    width: mm(BAY_LIMITS.width.max).min(BAY_LIMITS.width.min, `a bay is at least ${BAY_LIMITS.width.min} mm wide`),
-    height: mm(BAY_LIMITS.height.max).min(BAY_LIMITS.height.min, `a bay is at least ${BAY_LIMITS.height.min} mm high`),
-    wheelArches: z.array(wheelArchSchema).max(8).default([]),
-    doors: z.array(doorSchema).max(12).default([]),
-    bulkhead: z.boolean().default(true),
-    cabSeats: z.number().int().min(0).max(9).default(2),
+    length: bayMm(BAY_LIMITS.length, 'long'),
+    width: bayMm(BAY_LIMITS.width, 'wide'),
+    height: bayMm(BAY_LIMITS.height, 'high'),
+    wheelArches: z._default(z.array(wheelArchSchema).check(atMost(8, 'wheel arches')), []),
+    doors: z._default(z.array(doorSchema).check(atMost(12, 'doors')), []),
+    bulkhead: z._default(z.boolean(), true),
+    cabSeats: z._default(z.int('a whole number from 0 to 9').check(z.refine((v) => v >= 0 && v <= 9, 'a whole number from 0 to 9')), 2),
   })
-  .superRefine((bay, ctx) => {
+  .check(z.superRefine((bay, ctx) => {
     bay.doors.forEach((door, i) => {
       const wallLength = door.wall === 'rear' ? bay.width : bay.length;
       if (door.offset + door.width > wallLength) {
-        ctx.addIssue({ code: 'custom', path: ['doors', i, 'width'], message: `door runs past the end of the ${door.wall} wall (${wallLength} mm)` });
+        ctx.addIssue({ code: 'custom', path: ['doors', i, 'width'], message: `door runs past the end of the ${door.wall} wall (${wallLength} mm)`, input: door });
       }
     });
     bay.wheelArches.forEach((arch, i) => {
       if (arch.x + arch.length > bay.length) {
-        ctx.addIssue({ code: 'custom', path: ['wheelArches', i, 'length'], message: `wheel arch runs past the rear of the bay (${bay.length} mm)` });
+        ctx.addIssue({ code: 'custom', path: ['wheelArches', i, 'length'], message: `wheel arch runs past the rear of the bay (${bay.length} mm)`, input: arch });
       }
     });
-  });
+  }));
 export type Bay = z.infer<typeof baySchema>;
 
 export const layerSchema = z.strictObject({
-  material: text(80).pipe(z.string().min(1, 'name the material')),
+  material: text(80).check(z.minLength(1, 'name the material')),
   thickness: mm(1000),
 });
 export type Layer = z.infer<typeof layerSchema>;
 
 export const buildUpSchema = z.strictObject({
-  floor: z.array(layerSchema).max(12).default([]),
-  roof: z.array(layerSchema).max(12).default([]),
-  walls: z.array(layerSchema).max(12).default([]),
+  floor: z._default(z.array(layerSchema).check(atMost(12, 'layers')), []),
+  roof: z._default(z.array(layerSchema).check(atMost(12, 'layers')), []),
+  walls: z._default(z.array(layerSchema).check(atMost(12, 'layers')), []),
 });
 export type BuildUp = z.infer<typeof buildUpSchema>;
 
 export const occupantsSchema = z.strictObject({
   /** The stature of the tallest person who must stand upright, in mm. */
-  standingHeight: mm(2800).default(1800),
+  standingHeight: z._default(mm(2800), 1800),
   /** Statures of the people who sleep in the van, in mm. */
-  sleepers: z.array(mm(2800).min(300)).max(12).default([]),
+  sleepers: z._default(z.array(mmBetween(300, 2800)).check(atMost(12, 'sleepers')), []),
 });
 export type Occupants = z.infer<typeof occupantsSchema>;
 
-/** Kind-specific values: tank litres, fridge watts, whether a seat is belted, … Flat and small. */
-export const modulePropsSchema = z
-  .record(z.string().max(40).regex(/^[A-Za-z][A-Za-z0-9]*$/, 'prop names are letters and digits'), z.union([z.number().finite(), z.boolean(), text(200)]))
-  .refine((r) => Object.keys(r).length <= 32, 'at most 32 props');
+const limited = (l: { min: number; max: number }, need: string) =>
+  mm(l.max).check(z.refine((v) => v >= l.min, need));
 
-
-export const moduleSchema = z.strictObject({
+/** Everything a module has whatever its kind. */
+const moduleBaseShape = {
   id,
-  kind: moduleKindSchema,
-  label: text(80).optional(),
+  label: z.optional(text(80)),
   x: mmSigned(MODULE_LIMITS.position.max),
   y: mmSigned(MODULE_LIMITS.position.max),
-  length: mm(MODULE_LIMITS.length.max).min(MODULE_LIMITS.length.min, 'a module has a length'),
-  width: mm(MODULE_LIMITS.width.max).min(MODULE_LIMITS.width.min, 'a module has a width'),
+  length: limited(MODULE_LIMITS.length, 'a module has a length'),
+  width: limited(MODULE_LIMITS.width, 'a module has a width'),
   /** Underside above the FINISHED floor. */
   elevation: mm(MODULE_LIMITS.elevation.max),
-  height: mm(MODULE_LIMITS.height.max).min(MODULE_LIMITS.height.min, 'a module has a height'),
+  height: limited(MODULE_LIMITS.height, 'a module has a height'),
   facing: z.enum(FACINGS),
-  arrangements: z.array(arrangementSchema).min(1, 'a module exists in at least one arrangement').max(3)
-    .refine((a) => new Set(a).size === a.length, 'each arrangement once'),
-  surface: z.enum(SURFACES).optional(),
-  massKg: z.number().finite().min(MODULE_LIMITS.massKg.min).max(MODULE_LIMITS.massKg.max).optional(),
-  props: modulePropsSchema.optional(),
-});
-export type Module = z.infer<typeof moduleSchema>;
+  arrangements: z.array(arrangementSchema).check(
+    z.minLength(1, 'a module exists in at least one arrangement'),
+    atMost(3, 'arrangements'),
+    z.refine((a) => new Set(a).size === a.length, 'each arrangement once'),
+  ),
+  surface: z.optional(z.enum(SURFACES)),
+  massKg: z.optional(z.number().check(z.refine((v) => v >= MODULE_LIMITS.massKg.min && v <= MODULE_LIMITS.massKg.max, `from ${MODULE_LIMITS.massKg.min} to ${MODULE_LIMITS.massKg.max} kg`))),
+};
+type ModuleBase = z.output<z.ZodMiniObject<typeof moduleBaseShape>>;
+type ModuleBaseInput = z.input<z.ZodMiniObject<typeof moduleBaseShape>>;
+
+/** A placed module: what every module has, its kind, and that kind's own typed values. */
+export type Module = { [K in ModuleKind]: ModuleBase & { kind: K; props?: KindValues<K> } }[ModuleKind];
+type ModuleInput = { [K in ModuleKind]: ModuleBaseInput & { kind: K; props?: KindValues<K> } }[ModuleKind];
+/** The module of one kind. */
+export type ModuleOf<K extends ModuleKind> = Extract<Module, { kind: K }>;
+
+const moduleBranches = (Object.keys(KINDS) as ModuleKind[]).map((kind) =>
+  z.strictObject({ ...moduleBaseShape, kind: z.literal(kind), props: z.optional(kindValuesSchema(kind)) }),
+);
+export const moduleSchema = z.discriminatedUnion('kind', moduleBranches as [(typeof moduleBranches)[number], ...(typeof moduleBranches)[number][]], 'unknown kind of module') as unknown as z.ZodMiniType<Module, ModuleInput>;
 
 export type MattressRegion = (typeof MATTRESS_REGIONS)[number];
 
 export const settingsSchema = z.strictObject({
-  walkwayMin: mm(2000).optional(),
-  bedAllowance: mm(1000).optional(),
-  bedWidthPerSleeper: mm(2000).optional(),
-  levelTolerance: mm(500).optional(),
-  headMargin: mm(1000).optional(),
-  mattressRegion: z.enum(MATTRESS_REGIONS).optional(),
+  walkwayMin: z.optional(mm(2000)),
+  bedAllowance: z.optional(mm(1000)),
+  bedWidthPerSleeper: z.optional(mm(2000)),
+  levelTolerance: z.optional(mm(500)),
+  headMargin: z.optional(mm(1000)),
+  mattressRegion: z.optional(z.enum(MATTRESS_REGIONS)),
 });
 export type LayoutSettings = z.infer<typeof settingsSchema>;
 
+/** The layout's name: trimmed, never empty. */
+export const layoutNameSchema = z.pipe(text(120), z.string().check(z.trim(), z.minLength(1, 'give the layout a name')));
 
-export const layoutDocSchema = z
-  .strictObject({
-    schemaVersion: z.literal(1),
-    name: text(120).pipe(z.string().trim().min(1, 'give the layout a name')),
-    bay: baySchema,
-    buildUp: buildUpSchema,
-    occupants: occupantsSchema,
-    modules: z.array(moduleSchema).max(5000),
-    settings: settingsSchema.optional(),
-    systems: systemsSchema.optional(),
-  })
-  .superRefine((doc, ctx) => {
-    const seen = new Set<string>();
-    doc.modules.forEach((m, i) => {
-      if (seen.has(m.id)) ctx.addIssue({ code: 'custom', path: ['modules', i, 'id'], message: `module id "${m.id}" is used twice` });
-      seen.add(m.id);
-    });
-  });
-export type LayoutDoc = z.infer<typeof layoutDocSchema>;
-/** What a caller may send before defaults are filled in. */
-export type LayoutDocInput = z.input<typeof layoutDocSchema>;
+/** The first problem with a value, as "field.path: message" (the editor's refusal), or null. */
+export function firstProblem(schema: z.ZodMiniType, value: unknown): string | null {
+  const r = schema.safeParse(value);
+  if (r.success) return null;
+  const issue = r.error.issues[0];
+  const path = issue.path.map(String).join('.');
+  return path ? `${path}: ${issue.message}` : issue.message;
+}

@@ -4,7 +4,8 @@
  * Values are typical for the class — measure your own van.
  */
 import { z } from 'zod';
-import { baySchema, type Bay, type LayoutDoc, layoutDocSchema, buildUpSchema, type BuildUp } from './schema';
+import { baySchema, type Bay, buildUpSchema, type BuildUp } from './schema';
+import { CURRENT_SCHEMA_VERSION, layoutDocSchema, type LayoutDoc } from './document';
 import l1h1 from '../../public/templates/bay-l1h1.json';
 import l2h1 from '../../public/templates/bay-l2h1.json';
 import l2h2 from '../../public/templates/bay-l2h2.json';
@@ -52,7 +53,7 @@ export const DEFAULT_BUILD_UP: BuildUp = buildUpSchema.parse({
 /** A new, empty layout in the given bay. */
 export function emptyLayout(name: string, bay: Bay): LayoutDoc {
   return layoutDocSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name,
     bay,
     buildUp: DEFAULT_BUILD_UP,

@@ -16,7 +16,7 @@
 import type { LayoutDoc } from '../layout';
 import { leverSplit } from './lever';
 import { INPUTS, type InputNeed } from './inputs';
-import { beltedTravelSeats, moduleCentre, moduleMassKg, moduleName, moduleRef, numericProp, tankLitres } from './module-facts';
+import { beltedTravelSeats, moduleCentre, moduleFacts, moduleMassKg, moduleName, moduleRef } from './module-facts';
 import { OCCUPANT_KG, personalEffectsAllowance } from './payload';
 
 /** kg per litre used for tank contents (round figure, errs heavy; see header). */
@@ -97,14 +97,16 @@ export function computeAxleLoads(doc: LayoutDoc): MassReport {
   for (const m of doc.modules) {
     const c = moduleCentre(m);
     items.push({ id: `module:${m.id}`, label: moduleName(m), group: 'module', massKg: moduleMassKg(m), x: c.x, y: c.y, moduleId: m.id });
-    if (m.kind === 'fresh-water-tank' || m.kind === 'grey-water-tank') {
-      const fill = (m.kind === 'fresh-water-tank' ? load.freshFillPct ?? 100 : load.greyFillPct ?? 0) / 100;
-      const kg = tankLitres(m) * fill * WATER_KG_PER_L;
+    const water = moduleFacts(m).water;
+    if (water) {
+      const fill = (water.use === 'fresh' ? load.freshFillPct ?? 100 : load.greyFillPct ?? 0) / 100;
+      const kg = water.litres * fill * WATER_KG_PER_L;
       if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleRef(m)} at ${Math.round(fill * 100)} %`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
     }
-    if (m.kind === 'gas-locker') {
-      const cylinders = Math.max(0, Math.round(numericProp(m, 'cylinders') ?? 0));
-      const contentKg = Math.max(0, numericProp(m, 'cylinderKg') ?? 0);
+    const held = moduleFacts(m).gasCylinders;
+    if (held) {
+      const cylinders = held.count;
+      const contentKg = held.kgEach;
       const tareKg = doc.systems?.gas?.cylinderTareKg ?? contentKg;
       if (doc.systems?.gas?.cylinderTareKg === undefined && cylinders > 0) assumptions.push(`each cylinder's tare taken as its gas content (${contentKg} kg); enter the stamped cylinder tare on the gas tab`);
       const kg = cylinders * (contentKg + tareKg);

@@ -1,6 +1,7 @@
 /**
- * The cut list: sheet-material panels of each cabinet-type module, from simple per-kind rules,
- * grouped by sheet material and nested onto standard sheets.
+ * The cut list: sheet-material panels of each cabinet-type module, from the panels its kind's
+ * carcass is made of (declared with the kind, lib/layout/kinds.ts), grouped by sheet material and
+ * nested onto standard sheets.
  *
  * Rules (common practice, no source; a starting list for the workshop, not a joinery design):
  * a carcass has two sides (depth × height) between which the top, bottom and shelves sit
@@ -14,8 +15,8 @@
  * Pure; never throws on a valid LayoutDoc. Must never import UI, framework or database code.
  */
 import { kindSpec } from '../layout/kinds';
-import type { LayoutDoc, Module, ModuleKind } from '../layout';
-import { moduleName, numericProp } from './module-facts';
+import type { LayoutDoc, Module } from '../layout';
+import { moduleFacts, moduleName } from './module-facts';
 import { nestCutList, STANDARD_SHEET, type NestOptions, type NestResult, type SheetSize } from './sheet-nesting';
 
 export interface SheetMaterial {
@@ -42,28 +43,6 @@ export interface CutPart {
   grain: boolean;
 }
 
-type Piece = 'sides' | 'top' | 'bottom' | 'back' | 'shelves' | 'front' | 'worktop';
-
-/** Which panels each cabinet-type kind gets; kinds not listed are bought in, not cut. */
-const RULES: Partial<Record<ModuleKind, { pieces: Piece[]; shelves?: number }>> = {
-  'kitchen-counter': { pieces: ['sides', 'bottom', 'back', 'shelves', 'worktop'], shelves: 1 },
-  'sink-unit': { pieces: ['sides', 'bottom', 'back', 'worktop'] },
-  wardrobe: { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 1 },
-  'drawer-unit': { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 2 },
-  'overhead-locker': { pieces: ['sides', 'top', 'bottom', 'back'] },
-  'toilet-cabinet': { pieces: ['sides', 'top', 'back'] },
-  'electrics-bay': { pieces: ['sides', 'top', 'bottom', 'back'] },
-  'bench-seat': { pieces: ['sides', 'top', 'front'] },
-  'bed-platform': { pieces: ['worktop', 'front'] },
-  'bed-infill': { pieces: ['top'] },
-  table: { pieces: ['worktop'] },
-  step: { pieces: ['sides', 'top', 'front'] },
-};
-
-const NOT_CUT_REASON: Partial<Record<ModuleKind, string>> = {
-  'gas-locker': 'a gas locker is a sealed, purpose-made box (EN 1949); not cut from plywood here',
-};
-
 export interface CutListOptions extends NestOptions {
   sheet?: SheetSize;
 }
@@ -87,15 +66,16 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
   const t = SHEET_MATERIALS['ply-15'].thicknessMm;
   const tb = SHEET_MATERIALS['ply-6'].thicknessMm;
   for (const m of doc.modules) {
-    const rule = RULES[m.kind];
+    const facts = moduleFacts(m);
+    const rule = facts.carcass;
     if (!rule) {
-      skipped.push({ moduleId: m.id, reason: NOT_CUT_REASON[m.kind] ?? `${kindSpec(m.kind).title.toLowerCase()}: bought in, no sheet parts` });
+      skipped.push({ moduleId: m.id, reason: facts.notCut ?? `${kindSpec(m.kind).title.toLowerCase()}: bought in, no sheet parts` });
       continue;
     }
     const { front, depth } = faceDims(m);
     const h = m.height;
     const inner = Math.max(1, front - 2 * t);
-    const shelves = Math.max(0, Math.round(numericProp(m, 'shelves') ?? rule.shelves ?? 0));
+    const shelves = Math.max(0, Math.round(rule.shelves));
     const add = (piece: string, material: CutPart['material'], length: number, width: number, grain: boolean, qty = 1) => {
       for (let i = 1; i <= qty; i++) {
         for (const [j, part] of splitToSheet(length, width, grain, sheet, trim).entries()) {
@@ -113,7 +93,7 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
         case 'back': add('back', 'ply-6', front, h, false); break;
         case 'shelves': if (shelves > 0) add('shelf', 'ply-15', inner, Math.max(1, depth - tb), false, shelves); break;
         case 'front': add('front', 'ply-15', front, h, true); break;
-        case 'worktop': add(m.kind === 'bed-platform' ? 'bed top' : m.kind === 'table' ? 'table top' : 'worktop', 'ply-18', Math.max(front, depth), Math.min(front, depth), true); break;
+        case 'worktop': add(rule.topName ?? 'worktop', 'ply-18', Math.max(front, depth), Math.min(front, depth), true); break;
       }
     }
   }

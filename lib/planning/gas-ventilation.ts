@@ -15,7 +15,7 @@
  * Pure. Must never import UI, framework or database code.
  */
 import type { LayoutDoc, Module } from '../layout';
-import { moduleName, numericProp, stringProp } from './module-facts';
+import { moduleFacts, moduleName } from './module-facts';
 
 export const LOCKER_VENT_MIN_CM2 = 100;
 export const LOCKER_VENT_FLOOR_FRACTION = 0.02;
@@ -41,22 +41,22 @@ export interface GasInventory {
   gasKg: number;
 }
 
-/** A hob burns gas unless its `fuel` prop says otherwise; a heater only when `fuel` is gas. */
+/** A hob burns gas unless its fuel says otherwise; a heater only when its fuel (else the heating fuel) is gas. */
 export function gasInventory(doc: LayoutDoc): GasInventory {
   const appliances: GasAppliance[] = [];
   for (const m of doc.modules) {
-    const fuel = stringProp(m, 'fuel')?.toLowerCase();
-    if (m.kind === 'hob' && (fuel === undefined || fuel === 'gas' || fuel === 'lpg')) appliances.push({ moduleId: m.id, name: moduleName(m), flueless: true });
-    const heaterFuel = fuel ?? doc.systems?.heating?.fuel;
-    if (m.kind === 'heater' && (heaterFuel === 'gas' || heaterFuel === 'lpg')) appliances.push({ moduleId: m.id, name: moduleName(m), flueless: false });
+    const facts = moduleFacts(m);
+    if (!facts.gasAppliance) continue;
+    const fuel = facts.fuel?.toLowerCase() ?? (facts.gasAppliance.untypedFuel === 'gas' ? 'gas' : doc.systems?.heating?.fuel);
+    if (fuel === 'gas' || fuel === 'lpg') appliances.push({ moduleId: m.id, name: moduleName(m), flueless: facts.gasAppliance.flueless });
   }
   const lockers = doc.modules.filter((m) => m.kind === 'gas-locker');
   let cylinders = 0;
   let gasKg = 0;
   for (const l of lockers) {
-    const n = Math.max(0, Math.round(numericProp(l, 'cylinders') ?? 0));
-    cylinders += n;
-    gasKg += n * Math.max(0, numericProp(l, 'cylinderKg') ?? 0);
+    const held = moduleFacts(l).gasCylinders ?? { count: 0, kgEach: 0 };
+    cylinders += held.count;
+    gasKg += held.count * held.kgEach;
   }
   return { present: appliances.length > 0 || lockers.length > 0, appliances, lockers, cylinders, gasKg };
 }

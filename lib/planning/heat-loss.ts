@@ -15,7 +15,7 @@
  */
 import type { Layer, LayoutDoc } from '../layout';
 import { conductivityOf } from './conductivity';
-import { numericProp } from './module-facts';
+import { moduleFacts } from './module-facts';
 
 export type Face = 'floor' | 'walls' | 'roof';
 
@@ -102,7 +102,7 @@ export function heatLoss(doc: LayoutDoc): HeatLossReport {
   const totalWPerK = faces.reduce((a, f) => a + f.wPerK, 0) + windowsWPerK + ventilationWPerK;
   const deltaK = ins.deltaK ?? DEFAULT_DELTA_K;
   const heaters = doc.modules.filter((m) => m.kind === 'heater');
-  const heaterW = heaters.reduce((a, m) => a + Math.max(0, numericProp(m, 'watts') ?? 0), 0);
+  const heaterW = heaters.reduce((a, m) => a + Math.max(0, moduleFacts(m).heatOutputW ?? 0), 0);
   return {
     uValues,
     faces,

@@ -1,11 +1,12 @@
 /**
  * Facts about placed modules that build planning reads: mass (the module's own `massKg`
- * overrides its kind's default), plan centre, numeric props with kind defaults, and which
- * modules are travel seats, tanks, gas appliances.
+ * overrides its kind's default), plan centre, the kind's facts from its typed values (declared
+ * with the kind in lib/layout/kinds.ts), and which modules are travel seats.
  *
  * Pure: reads a LayoutDoc, returns plain data. Must never import UI, framework or database code.
  */
-import { kindSpec } from '../layout/kinds';
+import { kindFacts, kindSpec, type KindFacts } from '../layout/kinds';
+import { inArrangement } from '../layout/bay';
 import type { LayoutDoc, Module } from '../layout';
 
 export function moduleMassKg(m: Module): number {
@@ -16,33 +17,19 @@ export function moduleCentre(m: Module): { x: number; y: number } {
   return { x: m.x + m.length / 2, y: m.y + m.width / 2 };
 }
 
-/** A numeric prop of the module, else its kind's default, else undefined. */
-export function numericProp(m: Module, name: string): number | undefined {
-  const own = m.props?.[name];
-  if (typeof own === 'number' && Number.isFinite(own)) return own;
-  const dflt = kindSpec(m.kind).props?.[name];
-  return typeof dflt === 'number' && Number.isFinite(dflt) ? dflt : undefined;
+/** What the module's kind and values mean to planning (its own values, else its kind's defaults). */
+export function moduleFacts(m: Module): KindFacts {
+  return kindFacts(m);
 }
 
-export function stringProp(m: Module, name: string): string | undefined {
-  const own = m.props?.[name];
-  return typeof own === 'string' ? own : undefined;
-}
-
-export function booleanProp(m: Module, name: string): boolean | undefined {
-  const own = m.props?.[name];
-  if (typeof own === 'boolean') return own;
-  const dflt = kindSpec(m.kind).props?.[name];
-  return typeof dflt === 'boolean' ? dflt : undefined;
-}
-
-export function modulesOfKind(doc: LayoutDoc, kind: Module['kind']): Module[] {
-  return doc.modules.filter((m) => m.kind === kind);
+/** The water tanks of one use (fresh or grey), in document order. */
+export function waterTanks(doc: LayoutDoc, use: 'fresh' | 'grey'): Module[] {
+  return doc.modules.filter((m) => moduleFacts(m).water?.use === use);
 }
 
 /** Travel seats with a belt (kind `seat`, present in the travel arrangement, `belted` not false). */
 export function beltedTravelSeats(doc: LayoutDoc): Module[] {
-  return doc.modules.filter((m) => m.kind === 'seat' && m.arrangements.includes('travel') && booleanProp(m, 'belted') !== false);
+  return doc.modules.filter((m) => m.kind === 'seat' && inArrangement(m, 'travel') && moduleFacts(m).seat?.belted !== false);
 }
 
 /** Name for messages and tables: the module's label, else its kind's name — never its id. */
@@ -56,7 +43,7 @@ export function moduleRef(m: Pick<Module, 'kind' | 'label'>): string {
   return label ? `“${label}”` : `the ${kindSpec(m.kind).title.toLowerCase()}`;
 }
 
-/** Litres a tank module holds (`props.litres`, else the kind's default). */
+/** Litres a tank module holds (its capacity, else the kind's default). */
 export function tankLitres(m: Module): number {
-  return Math.max(0, numericProp(m, 'litres') ?? 0);
+  return moduleFacts(m).water?.litres ?? 0;
 }

@@ -14,7 +14,7 @@
 import type { LayoutDoc } from '../layout';
 import { autonomyDays, batteryAhFor, CHEMISTRIES, usableWh } from './battery-sizing';
 import { INPUTS, type InputNeed } from './inputs';
-import { moduleName, numericProp } from './module-facts';
+import { moduleFacts, moduleName } from './module-facts';
 import { PVWATTS_DEFAULT_LOSSES_PCT, solarDailyWh } from './solar-yield';
 
 export const DEFAULT_INVERTER_EFFICIENCY_PCT = 90; // common practice, no source
@@ -82,11 +82,12 @@ export function powerBudget(doc: LayoutDoc): PowerBudget {
 
   if (power.includeModuleLoads !== false) {
     for (const m of doc.modules) {
-      if (m.kind === 'heater') continue; // a heater's `watts` is its heat output; enter its fan draw as a load
-      const watts = numericProp(m, 'watts');
-      if (watts === undefined) continue;
+      // A heater's power is its heat output (no load here); enter its fan draw as a load.
+      const load = moduleFacts(m).load;
+      if (load === undefined) continue;
+      const watts = load.watts;
       // No hours or duty cycle on the module: counted as running all day (errs high).
-      const hours = hoursOf(numericProp(m, 'hoursPerDay'), numericProp(m, 'dutyCycle') ?? 1);
+      const hours = hoursOf(load.hoursPerDay, load.dutyCycle ?? 1);
       loads.push({ id: `module:${m.id}`, label: moduleName(m), watts, hoursPerDay: hours, supply: 'dc', whPerDay: watts * hours, moduleId: m.id });
     }
   }

@@ -17,7 +17,7 @@
  */
 import type { LayoutDoc } from '../layout';
 import { WATER_KG_PER_L } from './axle-loads';
-import { modulesOfKind, tankLitres } from './module-facts';
+import { tankLitres, waterTanks } from './module-facts';
 
 /** NZS 5465 (secondary): 4 L per person per day, for 3 days. */
 export const NZS5465_L_PER_PERSON_DAY = 4;
@@ -47,8 +47,8 @@ export interface WaterPlan {
 }
 
 export function waterPlan(doc: LayoutDoc): WaterPlan {
-  const fresh = modulesOfKind(doc, 'fresh-water-tank');
-  const grey = modulesOfKind(doc, 'grey-water-tank');
+  const fresh = waterTanks(doc, 'fresh');
+  const grey = waterTanks(doc, 'grey');
   const freshL = fresh.reduce((a, m) => a + tankLitres(m), 0);
   const greyL = grey.reduce((a, m) => a + tankLitres(m), 0);
   const persons = doc.systems?.water?.persons ?? Math.max(1, doc.occupants.sleepers.length);

@@ -14,6 +14,7 @@ import { onPaper } from './paper';
 import type { SheetItem } from './primitives';
 import { fit } from './typography';
 import { symbolItems } from './module-symbol';
+import { archBoxes, buildUpThickness, modulesIn } from '../layout/bay';
 
 /** Paper space around the bay for dimension strings (left, top) and the caption (bottom). */
 export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
@@ -37,10 +38,6 @@ export function planSize(doc: LayoutDoc, scale: number): { width: number; height
   };
 }
 
-export function thickness(layers: { thickness: number }[]): number {
-  return layers.reduce((sum, l) => sum + l.thickness, 0);
-}
-
 /** Schedule numbers: the module's position in the document, from 1, so plan and table agree. */
 export function scheduleNumbers(doc: LayoutDoc): Map<string, number> {
   return new Map(doc.modules.map((m, i) => [m.id, i + 1]));
@@ -53,7 +50,7 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   const by = oy + PLAN_MARGIN.top;
   const L = s(bay.length);
   const W = s(bay.width);
-  const wallT = s(thickness(doc.buildUp.walls));
+  const wallT = s(buildUpThickness(doc).wallT);
   const items: SheetItem[] = [];
 
   // Build-up band along both side walls (the lined interior runs from wallT to width − wallT).
@@ -65,17 +62,19 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   }
 
   // Wheel arches, cross-hatched.
-  for (const arch of bay.wheelArches) {
-    const y = arch.side === 'left' ? by : by + W - s(arch.width);
-    const x = bx + s(arch.x);
-    items.push(...hatch(x, y, s(arch.length), s(arch.width), 1.2, 45, 'soft'), ...hatch(x, y, s(arch.length), s(arch.width), 1.2, -45, 'soft'));
-    items.push({ type: 'rect', x, y, w: s(arch.length), h: s(arch.width), stroke: 'ink', width: LINE.thin });
+  for (const { rect: r } of archBoxes(doc)) {
+    const x = bx + s(r.x0);
+    const y = by + s(r.y0);
+    const w = s(r.x1 - r.x0);
+    const h = s(r.y1 - r.y0);
+    items.push(...hatch(x, y, w, h, 1.2, 45, 'soft'), ...hatch(x, y, w, h, 1.2, -45, 'soft'));
+    items.push({ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.thin });
   }
 
   // Modules present in this arrangement.
   const numbers = scheduleNumbers(doc);
   // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top.
-  const present = doc.modules.filter((m) => m.arrangements.includes(arrangement)).sort((a, b) => a.elevation - b.elevation);
+  const present = modulesIn(doc, arrangement).sort((a, b) => a.elevation - b.elevation);
   for (const m of present) {
     items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0, doc.modules.length <= HATCH_MODULE_LIMIT));
   }
@@ -94,7 +93,7 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
   items.push(...dimension({ from: [bx, by], to: [bx, by + W], offset: 9, text: formatLength(bay.width, units), tag: `dimension:bay-width:${arrangement}` }));
 
   // Caption.
-  const count = doc.modules.filter((m) => m.arrangements.includes(arrangement)).length;
+  const count = modulesIn(doc, arrangement).length;
   items.push({ type: 'text', x: bx, y: by + W + 6.5, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
   const note = doc.modules.length > HATCH_MODULE_LIMIT ? ' · hatching left out (many modules)' : '';
   items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'}${note} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });

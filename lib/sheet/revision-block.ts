@@ -4,13 +4,14 @@
  * the revision clouds with their delta triangles drawn on each arrangement's plan round what
  * changed since the revision before. Pure: revisions and a diff in, sheet items out.
  */
-import { boundingRect, deltaTriangle, rectFromExtent, revisionCloud, type Rect } from '../geometry';
-import type { Arrangement, Module } from '../layout';
+import { boundingRect, deltaTriangle, revisionCloud, type Rect } from '../geometry';
+import type { Arrangement } from '../layout';
 import type { RevisionDiff } from '../layout/revision-diff';
 import type { ColumnFlow } from './flow';
 import { LINE, TYPE } from './drafting';
 import type { SheetItem } from './primitives';
 import { fit, lineHeight, wrap } from './typography';
+import { inArrangement, moduleRect as rectOf } from '../layout/bay';
 
 export interface RevisionRow {
   letter: string;
@@ -65,16 +66,14 @@ export function flowRevisionTable(flow: ColumnFlow, rows: RevisionRow[]): void {
   });
 }
 
-const rectOf = (m: Module): Rect => rectFromExtent(m.x, m.y, m.length, m.width);
-
 /** Bay-millimetre areas to cloud in one arrangement: added, removed and changed modules (old and new place together). */
 export function cloudAreas(diff: RevisionDiff, arrangement: Arrangement): Rect[] {
   const out: Rect[] = [];
-  for (const m of diff.added) if (m.arrangements.includes(arrangement)) out.push(rectOf(m));
-  for (const m of diff.removed) if (m.arrangements.includes(arrangement)) out.push(rectOf(m));
+  for (const m of diff.added) if (inArrangement(m, arrangement)) out.push(rectOf(m));
+  for (const m of diff.removed) if (inArrangement(m, arrangement)) out.push(rectOf(m));
   for (const c of diff.changed) {
-    const here = c.after.arrangements.includes(arrangement);
-    const there = c.before.arrangements.includes(arrangement);
+    const here = inArrangement(c.after, arrangement);
+    const there = inArrangement(c.before, arrangement);
     if (here && there) out.push(boundingRect([rectOf(c.before), rectOf(c.after)])!);
     else if (here || there) out.push(rectOf(here ? c.after : c.before));
   }

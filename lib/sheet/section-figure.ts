@@ -6,11 +6,12 @@
  * Pure: a document in, sheet items out; must never render.
  */
 import { formatLength } from '../layout/units';
-import type { LayoutDoc, LengthUnit } from '../layout';
+import type { LayoutDoc, LengthUnit, Module } from '../layout';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
-import { HATCH_MODULE_LIMIT, scheduleNumbers, thickness } from './plan-figure';
+import { HATCH_MODULE_LIMIT, scheduleNumbers } from './plan-figure';
 import type { SheetItem } from './primitives';
+import { buildUpThickness, inArrangement } from '../layout/bay';
 
 export const SECTION_MARGIN = { left: 13, top: 6, right: 16, bottom: 10 } as const;
 
@@ -24,7 +25,7 @@ export function sectionSize(doc: LayoutDoc, scale: number): { width: number; hei
 /** The widest stretch along x where nothing stands on the floor in the lounge (for the figure). */
 export function freeStretch(doc: LayoutDoc): { from: number; to: number } | null {
   const blocked = doc.modules
-    .filter((m) => m.arrangements.includes('lounge') && m.elevation < 1000)
+    .filter((m) => inArrangement(m, 'lounge') && m.elevation < 1000)
     .map((m) => [Math.max(0, m.x), Math.min(doc.bay.length, m.x + m.length)] as [number, number])
     .filter(([a, b]) => b > a)
     .sort((p, q) => p[0] - q[0]);
@@ -44,8 +45,7 @@ export function freeStretch(doc: LayoutDoc): { from: number; to: number } | null
 export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: number, units: LengthUnit): SheetItem[] {
   const { bay } = doc;
   const s = (mm: number) => onPaper(mm, scale);
-  const floorT = thickness(doc.buildUp.floor);
-  const roofT = thickness(doc.buildUp.roof);
+  const { floorT, roofT } = buildUpThickness(doc);
   const bx = ox + SECTION_MARGIN.left;
   const floorY = oy + SECTION_MARGIN.top + s(bay.height); // paper y of the bare floor (z = 0)
   const zy = (z: number) => floorY - s(z);
@@ -101,8 +101,8 @@ export function drawSection(doc: LayoutDoc, ox: number, oy: number, scale: numbe
   return items;
 }
 
-function dayModule(m: { arrangements: string[] }): boolean {
-  return m.arrangements.includes('lounge') || m.arrangements.includes('travel');
+function dayModule(m: Pick<Module, 'arrangements'>): boolean {
+  return inArrangement(m, 'lounge') || inArrangement(m, 'travel');
 }
 
 /** A plain standing figure, feet at (x, footY), `h` mm tall on paper: head, body, arms, legs. */

@@ -3,13 +3,13 @@
  * document (import, "keep mine as a copy"), a bay template, a starter layout or a custom bay.
  */
 import { z } from 'zod';
-import { baySchema, plainText, type LayoutDoc } from '@/lib/layout/schema';
+import { baySchema, layoutNameSchema, type LayoutDoc } from '@/lib/layout/schema';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { bayTemplate, emptyLayout, starterLayout } from '@/lib/layout/templates';
 import { invalid } from './respond';
 import { idField } from '@/db/ids';
 
-const name = plainText(120).pipe(z.string().trim().min(1, 'give the layout a name'));
+const name = layoutNameSchema;
 const clientId = idField('choose a client from the list').nullable().optional();
 
 export const createLayoutBody = z
@@ -19,7 +19,7 @@ export const createLayoutBody = z
     doc: z.unknown().optional(),
     bayTemplateId: z.string().max(40).optional(),
     starterId: z.string().max(40).optional(),
-    bay: baySchema.optional(),
+    bay: z.optional(baySchema),
   })
   .refine((b) => [b.doc, b.bayTemplateId, b.starterId, b.bay].filter((v) => v !== undefined).length === 1, {
     message: 'start from exactly one of: doc, bayTemplateId, starterId or bay',
@@ -48,7 +48,7 @@ export function docForNewLayout(body: CreateLayoutBody): LayoutDoc {
 
 export const saveLayoutBody = z.strictObject({
   doc: z.unknown(),
-  name: name.optional(),
+  name: z.optional(name),
   clientId,
 });
 

@@ -4,7 +4,7 @@ import { fitToBay, gridSpacing, toScreenX, toScreenY, toWorld, zoomAt, clampScal
 import { moduleDimensions, overallDimensions } from '@/components/editor/geometry/dimensions';
 import { drawOrder, handleAt, moduleAt, modulesInMarquee } from '@/components/editor/geometry/hitTest';
 import { snapMove, snapResize, snapTargets } from '@/components/editor/geometry/snapping';
-import { clearHeight, linedInterior } from '@/components/editor/geometry/bayGeometry';
+import { clearHeight, linedInterior } from '@/lib/layout/bay';
 import { rulerStep } from '@/components/editor/canvas/rulerDrawing';
 import { testDoc, mod } from './harness';
 import { px } from '@/components/editor/types';
@@ -61,8 +61,8 @@ describe('viewport transform', () => {
 describe('bay geometry', () => {
   it('lined interior and clear height follow the build-up', () => {
     const doc = testDoc();
-    // 1800 − 2 × 36 mm walls = 1728
-    expect(linedInterior(doc)).toEqual({ x: 0, y: 36, length: 3400, width: 1728 });
+    // 1800 − 36 mm wall = 1764
+    expect(linedInterior(doc)).toEqual({ x0: 0, y0: 36, x1: 3400, y1: 1764 });
     // 1900 − (10 + 12 + 2) floor − (20 + 6) roof
     expect(clearHeight(doc)).toBe(1850);
   });

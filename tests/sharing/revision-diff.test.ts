@@ -53,7 +53,7 @@ describe('diffRevisions', () => {
   it('lists edits that are neither move nor resize', () => {
     const before = base();
     const m = before.modules[0];
-    const after = withModules(before, [{ ...m, label: 'Renamed', facing: m.facing === 'left' ? 'right' : 'left', arrangements: ['sleep'], props: { ...m.props, litres: 99 } }, ...before.modules.slice(1)]);
+    const after = withModules(before, [{ ...m, label: 'Renamed', facing: m.facing === 'left' ? 'right' : 'left', arrangements: ['sleep'], props: { watts: 99 } }, ...before.modules.slice(1)]);
     const c = diffRevisions(before, after).changed[0];
     expect(c.other).toEqual(expect.arrayContaining(['label', 'facing', 'arrangements', 'props']));
     expect(c.moved).toBeNull();
@@ -61,8 +61,8 @@ describe('diffRevisions', () => {
 
   it('ignores the order of arrangements and of props', () => {
     const before = base();
-    const m = { ...before.modules[0], arrangements: ['travel', 'lounge'] as Module['arrangements'], props: { a: 1, b: 2 } };
-    const m2 = { ...m, arrangements: ['lounge', 'travel'] as Module['arrangements'], props: { b: 2, a: 1 } };
+    const m = { ...before.modules[0], kind: 'fridge' as const, arrangements: ['travel', 'lounge'] as Module['arrangements'], props: { litres: 1, watts: 2 } };
+    const m2 = { ...m, arrangements: ['lounge', 'travel'] as Module['arrangements'], props: { watts: 2, litres: 1 } };
     expect(diffRevisions(withModules(before, [m]), withModules(before, [m2])).changed).toEqual([]);
   });
 

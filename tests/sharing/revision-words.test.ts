@@ -23,9 +23,9 @@ describe('moduleChangeWords', () => {
 
   it('names edited fields as the Details panel does, with before and after', () => {
     const before = base();
-    const m: Module = { ...before.modules[0], label: 'Rear bed', massKg: 60, props: { litres: 70 } };
+    const m: Module = { ...before.modules[0], kind: 'fridge', label: 'Rear bed', massKg: 60, props: { litres: 70 } };
     const doc = { ...before, modules: [m] };
-    const after = { ...before, modules: [{ ...m, label: undefined, massKg: 72, facing: 'left' as const, props: { litres: 100, belted: true } }] };
+    const after = { ...before, modules: [{ ...m, label: undefined, massKg: 72, facing: 'left' as const, props: { litres: 100, watts: 60 } }] };
     const c = diffRevisions(doc, after).changed[0];
     const w = moduleChangeWords(c);
     expect(w.verb).toBe('Changed');
@@ -33,7 +33,7 @@ describe('moduleChangeWords', () => {
       'Label: Rear bed → none',
       'Mass: 60 kg → 72 kg',
       'Capacity (litres): 70 → 100',
-      'Belted seat: none → yes',
+      'Power (W): none → 60',
     ]));
     expect(w.lines.join(' ')).not.toMatch(KEYS);
     expect(w.lines.join(' ')).not.toContain(m.id);

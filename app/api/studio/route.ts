@@ -9,7 +9,7 @@ export const dynamic = 'force-dynamic';
 const studioBody = z.strictObject({
   name: z.string().trim().min(1).max(80).optional(),
   units: z.enum(LENGTH_UNITS).optional(),
-  checkDefaults: settingsSchema.optional(),
+  checkDefaults: z.optional(settingsSchema),
 });
 
 export const GET = handle(async (req) => {

@@ -12,6 +12,7 @@ import { drawOrder } from '../geometry/hitTest';
 import { ModuleShape } from './ModuleShape';
 import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
+import { inArrangement } from '@/lib/layout/bay';
 
 interface Props {
   modules: Module[];
@@ -27,8 +28,8 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   const { shown, phantoms } = useMemo(() => {
     const hide = new Set(hidden);
     return {
-      shown: drawOrder(modules.filter((m) => m.arrangements.includes(arrangement) && !hide.has(m.id))),
-      phantoms: phantom ? modules.filter((m) => m.arrangements.includes(phantom) && !m.arrangements.includes(arrangement)) : [],
+      shown: drawOrder(modules.filter((m) => inArrangement(m, arrangement) && !hide.has(m.id))),
+      phantoms: phantom ? modules.filter((m) => inArrangement(m, phantom) && !inArrangement(m, arrangement)) : [],
     };
   }, [modules, arrangement, phantom, hidden]);
   return (

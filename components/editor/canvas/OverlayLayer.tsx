@@ -17,6 +17,7 @@ import { drawDimension } from './dimensionDrawing';
 import { theme } from '../theme';
 import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
+import { modulesIn } from '@/lib/layout/bay';
 
 export const HANDLE_PX = 8;
 
@@ -36,7 +37,7 @@ interface Props {
 export const OverlayLayer = memo(function OverlayLayer(p: Props) {
   const scale = p.viewport.scale;
   const px = 1 / scale;
-  const inView = p.doc.modules.filter((m) => m.arrangements.includes(p.arrangement));
+  const inView = modulesIn(p.doc, p.arrangement);
   const byId = new Map(inView.map((m) => [m.id, m]));
   const failing = p.failing.map((id) => byId.get(id)).filter((m) => m !== undefined);
   const highlighted = p.highlight.map((id) => byId.get(id)).filter((m) => m !== undefined);

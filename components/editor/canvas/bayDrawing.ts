@@ -7,7 +7,7 @@
 import type { LayoutDoc } from '@/lib/layout';
 import { theme, canvasFonts } from '../theme';
 import { fillHatch } from './hatching';
-import { wallThickness, wheelArchRects } from '../geometry/bayGeometry';
+import { archBoxes, buildUpThickness } from '@/lib/layout/bay';
 import { gridSpacing } from '../geometry/viewport';
 
 type Ctx = CanvasRenderingContext2D;
@@ -37,7 +37,7 @@ export function drawGrid(ctx: Ctx, scale: number, area: { x0: number; y0: number
 export function drawBay(ctx: Ctx, doc: LayoutDoc, scale: number, fonts = canvasFonts): void {
   const { length: L, width: W } = doc.bay;
   const px = 1 / scale;
-  const t = wallThickness(doc);
+  const t = buildUpThickness(doc).wallT;
   ctx.save();
 
   // Wall build-up band along both side walls.
@@ -55,9 +55,9 @@ export function drawBay(ctx: Ctx, doc: LayoutDoc, scale: number, fonts = canvasF
   }
 
   // Wheel arches, cross-hatched.
-  for (const r of wheelArchRects(doc)) {
+  for (const { rect: r } of archBoxes(doc)) {
     ctx.beginPath();
-    ctx.rect(r.x, r.y, r.length, r.width);
+    ctx.rect(r.x0, r.y0, r.x1 - r.x0, r.y1 - r.y0);
     ctx.fillStyle = theme.paperDeep;
     ctx.fill();
     fillHatch(ctx, 'cross');

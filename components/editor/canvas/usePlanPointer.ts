@@ -16,6 +16,7 @@ import { toWorld, screenToMm } from '../geometry/viewport';
 import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitTest';
 import { HANDLE_PX } from './OverlayLayer';
 import { isTypingTarget } from '../commands/keyboard';
+import { inArrangement, modulesIn } from '@/lib/layout/bay';
 
 export const KIND_DRAG_TYPE = 'application/x-baywright-kind';
 /** Pointer travel (px) before a press on a module becomes a drag rather than a click. */
@@ -55,11 +56,11 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       if (space.current) return (el!.style.cursor = 'grab');
       const w = world(p);
       if (!s.readOnly && s.selection.length === 1) {
-        const m = s.doc.modules.find((o) => o.id === s.selection[0] && o.arrangements.includes(s.arrangement));
+        const m = s.doc.modules.find((o) => o.id === s.selection[0] && inArrangement(o, s.arrangement));
         const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
         if (h) return (el!.style.cursor = cursorForHandle(h));
       }
-      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      const hit = moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
       el!.style.cursor = hit && !s.readOnly ? 'move' : hit ? 'pointer' : 'default';
     }
 
@@ -88,7 +89,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const w = world(p);
       el!.setPointerCapture(e.pointerId);
       if (!s.readOnly && s.selection.length === 1) {
-        const m = s.doc.modules.find((o) => o.id === s.selection[0] && o.arrangements.includes(s.arrangement));
+        const m = s.doc.modules.find((o) => o.id === s.selection[0] && inArrangement(o, s.arrangement));
         const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
         if (m && h) {
           s.beginResize(m.id, h);
@@ -96,7 +97,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
           return;
         }
       }
-      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      const hit = moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
       if (hit) {
         if (e.shiftKey) s.select([hit.id], 'toggle');
         else if (!s.selection.includes(hit.id)) s.select([hit.id]);
@@ -181,7 +182,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const p = local(e);
       const s = api.getState();
       const w = world(p);
-      const hit = moduleAt(drawOrder(s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement))), w.x, w.y);
+      const hit = moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
       if (hit && !s.selection.includes(hit.id)) s.select([hit.id]);
       onContextMenu(p.x, p.y);
     }

@@ -6,6 +6,7 @@
 import type { Arrangement } from '@/lib/layout';
 import { canRedo, canUndo, type EditorState } from '../store/editorStore';
 import { GRID_STEPS } from '../geometry/snapping';
+import { modulesIn } from '@/lib/layout/bay';
 
 export type CommandGroup = 'edit' | 'select' | 'view' | 'arrangement' | 'help';
 
@@ -36,7 +37,7 @@ export function phantomPartner(a: Arrangement): Arrangement {
 }
 
 function stepSelection(s: EditorState, dir: 1 | -1) {
-  const inView = s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement));
+  const inView = modulesIn(s.doc, s.arrangement);
   if (inView.length === 0) return;
   const cur = inView.findIndex((m) => m.id === s.selection[s.selection.length - 1]);
   const next = cur === -1 ? (dir === 1 ? 0 : inView.length - 1) : (cur + dir + inView.length) % inView.length;

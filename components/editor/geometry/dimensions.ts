@@ -4,7 +4,7 @@
  * string is a segment in mm with the value it reads. Pure math; never formats units or draws.
  */
 import type { Arrangement, LayoutDoc, Module } from '@/lib/layout';
-import { linedInterior, type Rect } from './bayGeometry';
+import { inArrangement, linedInterior, type Footprint } from '@/lib/layout/bay';
 
 export type DimensionRole = 'overall' | 'size' | 'gap-lining' | 'gap-module';
 
@@ -29,7 +29,7 @@ export function overallDimensions(doc: LayoutDoc, offset: number): DimensionStri
   ];
 }
 
-function overlapsAcross(a: Rect, b: Rect, axis: 'x' | 'y'): boolean {
+function overlapsAcross(a: Footprint, b: Footprint, axis: 'x' | 'y'): boolean {
   // Gaps along x only make sense between rects that share some y range, and vice versa.
   return axis === 'x' ? a.y < b.y + b.width && b.y < a.y + a.width : a.x < b.x + b.length && b.x < a.x + a.length;
 }
@@ -41,7 +41,7 @@ function overlapsAcross(a: Rect, b: Rect, axis: 'x' | 'y'): boolean {
  */
 export function moduleDimensions(doc: LayoutDoc, m: Module, arrangement: Arrangement): DimensionString[] {
   const lined = linedInterior(doc);
-  const others = doc.modules.filter((o) => o.id !== m.id && o.arrangements.includes(arrangement) && overlapsElevation(o, m));
+  const others = doc.modules.filter((o) => o.id !== m.id && inArrangement(o, arrangement) && overlapsElevation(o, m));
   const out: DimensionString[] = [
     { role: 'size', axis: 'x', from: m.x, to: m.x + m.length, at: m.y - 1, value: m.length },
     { role: 'size', axis: 'y', from: m.y, to: m.y + m.width, at: m.x - 1, value: m.width },
@@ -52,19 +52,19 @@ export function moduleDimensions(doc: LayoutDoc, m: Module, arrangement: Arrange
 
   // Towards the left wall (smaller y)
   const up = nearestBefore(others, m, 'y');
-  const upEdge = up ? up.y + up.width : lined.y;
+  const upEdge = up ? up.y + up.width : lined.y0;
   if (upEdge <= m.y) out.push({ role: up ? 'gap-module' : 'gap-lining', axis: 'y', from: upEdge, to: m.y, at: midX, value: m.y - upEdge, neighbourId: up?.id });
   // Towards the right wall
   const down = nearestAfter(others, m, 'y');
-  const downEdge = down ? down.y : lined.y + lined.width;
+  const downEdge = down ? down.y : lined.y1;
   if (downEdge >= m.y + m.width) out.push({ role: down ? 'gap-module' : 'gap-lining', axis: 'y', from: m.y + m.width, to: downEdge, at: midX, value: downEdge - (m.y + m.width), neighbourId: down?.id });
   // Towards the cab
   const front = nearestBefore(others, m, 'x');
-  const frontEdge = front ? front.x + front.length : lined.x;
+  const frontEdge = front ? front.x + front.length : lined.x0;
   if (frontEdge <= m.x) out.push({ role: front ? 'gap-module' : 'gap-lining', axis: 'x', from: frontEdge, to: m.x, at: midY, value: m.x - frontEdge, neighbourId: front?.id });
   // Towards the rear
   const rear = nearestAfter(others, m, 'x');
-  const rearEdge = rear ? rear.x : lined.x + lined.length;
+  const rearEdge = rear ? rear.x : lined.x1;
   if (rearEdge >= m.x + m.length) out.push({ role: rear ? 'gap-module' : 'gap-lining', axis: 'x', from: m.x + m.length, to: rearEdge, at: midY, value: rearEdge - (m.x + m.length), neighbourId: rear?.id });
   return out;
 }

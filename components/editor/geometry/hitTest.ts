@@ -4,7 +4,8 @@
  * Pure math; never reads the DOM or the store.
  */
 import type { Module } from '@/lib/layout';
-import { rectsOverlap, type Rect } from './bayGeometry';
+import { rectsOverlap, type Rect } from '@/lib/geometry/rect';
+import { footprintRect, type Footprint } from '@/lib/layout/bay';
 import { HANDLES, type HandleId } from './snapping';
 
 /** Draw order: lower modules first, so a hob on a counter is drawn (and hit) on top. */
@@ -24,14 +25,14 @@ export function moduleAt(ordered: Module[], x: number, y: number, slop = 0): Mod
   return undefined;
 }
 
-export function handlePoint(r: Rect, h: HandleId): { x: number; y: number } {
+export function handlePoint(r: Footprint, h: HandleId): { x: number; y: number } {
   const x = h.includes('w') ? r.x : h.includes('e') ? r.x + r.length : r.x + r.length / 2;
   const y = h.includes('n') ? r.y : h.includes('s') ? r.y + r.width : r.y + r.width / 2;
   return { x, y };
 }
 
 /** The resize handle within `radius` mm of (x, y), if any. */
-export function handleAt(r: Rect, x: number, y: number, radius: number): HandleId | undefined {
+export function handleAt(r: Footprint, x: number, y: number, radius: number): HandleId | undefined {
   let best: { h: HandleId; d: number } | undefined;
   for (const h of HANDLES) {
     const p = handlePoint(r, h);
@@ -41,15 +42,11 @@ export function handleAt(r: Rect, x: number, y: number, radius: number): HandleI
   return best?.h;
 }
 
-/** Modules the marquee rectangle touches. */
-export function modulesInMarquee(modules: Module[], marquee: Rect): string[] {
-  const norm: Rect = {
-    x: Math.min(marquee.x, marquee.x + marquee.length),
-    y: Math.min(marquee.y, marquee.y + marquee.width),
-    length: Math.abs(marquee.length),
-    width: Math.abs(marquee.width),
-  };
-  return modules.filter((m) => rectsOverlap(m, norm)).map((m) => m.id);
+/** Modules the marquee touches; the marquee is a drag from its corner, so its extents may be negative. */
+export function modulesInMarquee(modules: Module[], marquee: Footprint): string[] {
+  const x1 = marquee.x + marquee.length, y1 = marquee.y + marquee.width;
+  const norm: Rect = { x0: Math.min(marquee.x, x1), y0: Math.min(marquee.y, y1), x1: Math.max(marquee.x, x1), y1: Math.max(marquee.y, y1) };
+  return modules.filter((m) => rectsOverlap(footprintRect(m), norm)).map((m) => m.id);
 }
 
 export function cursorForHandle(h: HandleId): string {

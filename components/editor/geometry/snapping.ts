@@ -4,7 +4,8 @@
  * the snapped offset and the guide lines to show. Pure math on mm; never reads the store.
  */
 import type { LayoutDoc, Arrangement } from '@/lib/layout';
-import { linedInterior, wheelArchRects, type Rect } from './bayGeometry';
+import { archBoxes, footprintRect, inArrangement, linedInterior, type Footprint } from '@/lib/layout/bay';
+import type { Rect } from '@/lib/geometry/rect';
 
 export const GRID_STEPS = [10, 50, 100] as const;
 export type GridStep = (typeof GRID_STEPS)[number];
@@ -39,21 +40,21 @@ export function snapTargets(doc: LayoutDoc, arrangement: Arrangement, exclude: R
     { at: length, from: 0, to: width },
   ];
   const ys: SnapTargets['ys'] = [
-    { at: lined.y, from: 0, to: length },
-    { at: lined.y + lined.width, from: 0, to: length },
+    { at: lined.y0, from: 0, to: length },
+    { at: lined.y1, from: 0, to: length },
     { at: 0, from: 0, to: length },
     { at: width, from: 0, to: length },
   ];
-  for (const r of wheelArchRects(doc)) addRect(r);
+  for (const a of archBoxes(doc)) addRect(a.rect);
   for (const m of doc.modules) {
-    if (exclude.has(m.id) || !m.arrangements.includes(arrangement)) continue;
-    addRect(m);
+    if (exclude.has(m.id) || !inArrangement(m, arrangement)) continue;
+    addRect(footprintRect(m));
   }
   return { xs, ys };
 
   function addRect(r: Rect) {
-    xs.push({ at: r.x, from: r.y, to: r.y + r.width }, { at: r.x + r.length, from: r.y, to: r.y + r.width });
-    ys.push({ at: r.y, from: r.x, to: r.x + r.length }, { at: r.y + r.width, from: r.x, to: r.x + r.length });
+    xs.push({ at: r.x0, from: r.y0, to: r.y1 }, { at: r.x1, from: r.y0, to: r.y1 });
+    ys.push({ at: r.y0, from: r.x0, to: r.x1 }, { at: r.y1, from: r.x0, to: r.x1 });
   }
 }
 
@@ -77,7 +78,7 @@ export function snapToStep(value: number, step: number): number {
  * or the centre) that comes within `threshold` of a target sticks to it; otherwise the box's
  * near corner lands on the grid step.
  */
-export function snapMove(box: Rect, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { dx: number; dy: number; guides: SnapGuide[] } {
+export function snapMove(box: Footprint, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { dx: number; dy: number; guides: SnapGuide[] } {
   if (!opts.enabled) return { dx: Math.round(dx), dy: Math.round(dy), guides: [] };
   const guides: SnapGuide[] = [];
   const nx = box.x + dx;
@@ -119,7 +120,7 @@ export const MIN_SIDE = 20;
  * (y = 0, the left wall), 'w' is the left of the screen (x = 0, the cab end). The moving edges
  * snap like a move; the opposite edges stay put; no side shrinks below MIN_SIDE.
  */
-export function snapResize(rect: Rect, handle: HandleId, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { rect: Rect; guides: SnapGuide[] } {
+export function snapResize(rect: Footprint, handle: HandleId, dx: number, dy: number, targets: SnapTargets, opts: SnapOptions): { rect: Footprint; guides: SnapGuide[] } {
   let x0 = rect.x, x1 = rect.x + rect.length, y0 = rect.y, y1 = rect.y + rect.width;
   const guides: SnapGuide[] = [];
   const moveX = handle.includes('w') ? 'x0' : handle.includes('e') ? 'x1' : null;

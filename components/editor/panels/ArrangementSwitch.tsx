@@ -5,7 +5,7 @@
  */
 import { useShallow } from 'zustand/react/shallow';
 import type { Arrangement } from '@/lib/layout/schema';
-import { EDITOR_ARRANGEMENTS as ARRANGEMENTS } from '../store/docRules';
+import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 
 const WORDS: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };

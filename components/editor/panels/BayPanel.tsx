@@ -14,7 +14,7 @@ import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout/schema';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { LengthField } from './LengthField';
 import { LAYER_PRESETS } from './buildUpPresets';
-import { clearHeight, layersThickness } from '../geometry/bayGeometry';
+import { clearHeight, layersThickness } from '@/lib/layout/bay';
 import { formatLength } from '@/lib/layout/units';
 
 const section = 'space-y-2 border-b border-paper-edge p-4';

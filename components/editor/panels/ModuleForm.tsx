@@ -12,8 +12,8 @@ import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
 import { ARRANGEMENTS, FACINGS, SURFACES } from '@/lib/layout/vocabulary';
 import type { Module } from '@/lib/layout/schema';
-import { KINDS, KIND_LIST } from '@/lib/layout/kinds';
-import { FACING_WORDS, propWord } from '@/lib/layout/field-words';
+import { KIND_LIST, kindSpec, shownFields } from '@/lib/layout/kinds';
+import { FACING_WORDS } from '@/lib/layout/field-words';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { formValuesOf, moduleFormSchema, patchFrom, type ModuleFormValues, type ModuleFormOutput } from './moduleForm';
 import { CommandButton } from './CommandButton';
@@ -52,8 +52,8 @@ export default function ModuleForm({ module }: { module: Module }) {
     },
   );
   const onBlurApply = { onBlur: () => void apply() };
-  const spec = KINDS[module.kind];
-  const propKeys = Array.from(new Set([...Object.keys(spec.props ?? {}), ...Object.keys(module.props ?? {})]));
+  const spec = kindSpec(module.kind);
+  const valueFields = shownFields(module);
   const err = (name: keyof ModuleFormValues) => {
     const e = formState.errors[name];
     return e && 'message' in e && typeof e.message === 'string' ? e.message : undefined;
@@ -135,19 +135,18 @@ export default function ModuleForm({ module }: { module: Module }) {
           </span>
           {err('massKg') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('massKg')}</span>}
         </label>
-        {propKeys.length > 0 && (
+        {valueFields.length > 0 && (
           <fieldset className="space-y-2">
             <legend className="text-xs font-medium text-ink-soft">{spec.title} details</legend>
-            {propKeys.map((k) => {
-              const sample = module.props?.[k] ?? spec.props?.[k];
-              return typeof sample === 'boolean' ? (
+            {valueFields.map(({ key: k, field }) => {
+              return field.input === 'boolean' ? (
                 <label key={k} className="flex items-center gap-2">
                   <input type="checkbox" {...register(`props.${k}`, { onChange: () => void apply() })} className="accent-copper" />
-                  {propLabel(k)}
+                  {field.label}
                 </label>
               ) : (
                 <label key={k} className="block">
-                  <span className="text-xs text-ink-soft">{propLabel(k)}</span>
+                  <span className="text-xs text-ink-soft">{field.label}</span>
                   <input {...register(`props.${k}`, onBlurApply)} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
                 </label>
               );
@@ -169,4 +168,3 @@ export default function ModuleForm({ module }: { module: Module }) {
   );
 }
 
-const propLabel = propWord;

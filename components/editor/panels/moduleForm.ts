@@ -4,7 +4,8 @@
  * millimetres. Pure: no React, so it is tested on its own.
  */
 import * as z from 'zod/mini';
-import { ARRANGEMENTS, FACINGS, MODULE_KINDS, MODULE_LIMITS, SURFACES } from '@/lib/layout/vocabulary';
+import { ARRANGEMENTS, FACINGS, MODULE_LIMITS, SURFACES } from '@/lib/layout/vocabulary';
+import { kindSpec, MODULE_KINDS } from '@/lib/layout/kinds';
 import type { Module } from '@/lib/layout/schema';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
@@ -89,17 +90,21 @@ export function formValuesOf(m: Module, unit: LengthUnit): ModuleFormValues {
   };
 }
 
-/** Props typed as text go back as numbers when they read as numbers, as they were stored. */
-function propsOut(values: Record<string, string | boolean>, before: Module['props']): Module['props'] {
-  const out: NonNullable<Module['props']> = {};
+/**
+ * The kind's values as typed in: number fields go back as numbers (text that does not read as one
+ * stays text, and the schema names the field); yes/no and text fields as they are.
+ */
+function propsOut(kind: Module['kind'], values: Record<string, string | boolean>): Module['props'] {
+  const fields = kindSpec(kind).values;
+  const out: Record<string, string | number | boolean> = {};
   for (const [k, v] of Object.entries(values)) {
-    if (typeof v === 'boolean') out[k] = v;
-    else if (typeof before?.[k] === 'number' || /^-?\d+(\.\d+)?$/.test(v.trim())) {
+    if (typeof v === 'boolean' || fields[k]?.input !== 'number') out[k] = v;
+    else {
       const n = Number(v.trim().replace(',', '.'));
       out[k] = Number.isFinite(n) ? n : v;
-    } else out[k] = v;
+    }
   }
-  return Object.keys(out).length ? out : undefined;
+  return Object.keys(out).length ? (out as Module['props']) : undefined;
 }
 
 /** The fields that changed, as a patch for the store (undefined clears an optional field). */
@@ -112,7 +117,7 @@ export function patchFrom(m: Module, v: ModuleFormOutput): Partial<Omit<Module, 
     arrangements: ARRANGEMENTS.filter((a) => v.arrangements.includes(a)),
     surface: v.surface === '' ? undefined : v.surface,
     massKg: v.massKg,
-    props: propsOut(v.props, m.props),
+    props: propsOut(m.kind, v.props),
   };
   const patch: Partial<Omit<Module, 'id'>> = {};
   for (const key of Object.keys(next) as (keyof typeof next)[]) {

@@ -10,7 +10,7 @@ import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
 import { useEditor } from '../store/EditorStoreContext';
-import { clearHeight, floorThickness, roofThickness } from '../geometry/bayGeometry';
+import { buildUpThickness, clearHeight, modulesIn } from '@/lib/layout/bay';
 import { drawOrder } from '../geometry/hitTest';
 import { theme } from '../theme';
 
@@ -31,13 +31,12 @@ export const SectionView = memo(function SectionView() {
   }, []);
 
   const { length: L, height: H } = doc.bay;
-  const fT = floorThickness(doc);
-  const rT = roofThickness(doc);
+  const { floorT: fT, roofT: rT } = buildUpThickness(doc);
   const clear = clearHeight(doc);
   const k = Math.max(0.01, Math.min((size.w - PAD.left - PAD.right) / L, (size.h - PAD.top - PAD.bottom) / H));
   const X = (x: number) => PAD.left + x * k;
   const Y = (z: number) => PAD.top + (H - z) * k;
-  const modules = drawOrder(doc.modules.filter((m) => m.arrangements.includes(arrangement)));
+  const modules = drawOrder(modulesIn(doc, arrangement));
   const fx = Math.min(L - 150, Math.max(150, figureX ?? Math.round(L * 0.3)));
   const statureOptions = Array.from(new Set([doc.occupants.standingHeight, ...doc.occupants.sleepers])).sort((a, b) => a - b);
   const who = stature ?? doc.occupants.standingHeight;

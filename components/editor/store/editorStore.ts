@@ -8,7 +8,7 @@ import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Arrangement, Bay, BuildUp, LayoutDoc, Module, ModuleKind, Occupants } from '@/lib/layout/schema';
 import type { Systems } from '@/lib/layout/systems';
 import type { LengthUnit } from '@/lib/layout/units';
-import { bayProblem, buildUpProblem, occupantsProblem } from './docRules';
+import { baySchema, buildUpSchema, firstProblem, occupantsSchema } from '@/lib/layout/schema';
 import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
 import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
@@ -17,6 +17,7 @@ import { withSystems } from './systemsEdits';
 import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
 import { px } from '../types';
 import { readableProblem } from '@/lib/layout/field-names';
+import { inArrangement, modulesIn } from '@/lib/layout/bay';
 
 export interface EditorOptions {
   doc: LayoutDoc;
@@ -170,7 +171,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (r.ok && id) {
           const m = get().doc.modules.find((o) => o.id === id)!;
           // A kind that does not exist in the arrangement on show (a table while showing sleep): show one it exists in.
-          if (!m.arrangements.includes(get().arrangement)) set({ arrangement: m.arrangements[0] });
+          if (!inArrangement(m, get().arrangement)) set({ arrangement: m.arrangements[0] });
         }
         return { ...r, id };
       },
@@ -211,21 +212,21 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       updateBay(patch) {
         return commit('Edit bay', () => {
           const bay = { ...get().doc.bay, ...patch };
-          const problem = bayProblem(bay);
+          const problem = firstProblem(baySchema, bay);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, bay } };
         });
       },
       updateBuildUp(buildUp) {
         return commit('Edit build-up', () => {
-          const problem = buildUpProblem(buildUp);
+          const problem = firstProblem(buildUpSchema, buildUp);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, buildUp } };
         });
       },
       updateOccupants(occupants) {
         return commit('Edit occupants', () => {
-          const problem = occupantsProblem(occupants);
+          const problem = firstProblem(occupantsSchema, occupants);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, occupants } };
         });
@@ -305,7 +306,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       },
       selectAll() {
         const s = get();
-        set({ selection: s.doc.modules.filter((m) => m.arrangements.includes(s.arrangement)).map((m) => m.id) });
+        set({ selection: modulesIn(s.doc, s.arrangement).map((m) => m.id) });
       },
       setHighlight(ids) {
         set({ highlight: ids, selection: ids.filter((id) => get().doc.modules.some((m) => m.id === id)) });
@@ -314,7 +315,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         const s = get();
         if (s.gesture) set({ gesture: null });
         // Keep only selected modules that exist in the arrangement now shown.
-        const inA = new Set(s.doc.modules.filter((m) => m.arrangements.includes(a)).map((m) => m.id));
+        const inA = new Set(modulesIn(s.doc, a).map((m) => m.id));
         set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), phantom: s.phantom === a ? null : s.phantom });
       },
       setPhantom(a) {

@@ -5,27 +5,29 @@
  * must never touch Konva nodes (the canvas reads the preview and draws it).
  */
 import type { Arrangement, LayoutDoc } from '@/lib/layout';
-import { boundsOf, modulesIn, type Rect } from '../geometry/bayGeometry';
+import { boundingRect } from '@/lib/geometry/rect';
+import { footprintRect, modulesIn, rectFootprint, type Footprint } from '@/lib/layout/bay';
 import { modulesInMarquee } from '../geometry/hitTest';
 import { snapMove, snapResize, snapTargets, type HandleId, type SnapGuide, type SnapOptions, type SnapTargets } from '../geometry/snapping';
 
 export type Gesture =
-  | { kind: 'move'; ids: string[]; box: Rect; targets: SnapTargets; preview: { dx: number; dy: number; guides: SnapGuide[] } }
-  | { kind: 'resize'; ids: [string]; handle: HandleId; start: Rect; targets: SnapTargets; preview: { rect: Rect; guides: SnapGuide[] } }
-  | { kind: 'marquee'; ids: string[]; additive: boolean; base: string[]; origin: { x: number; y: number }; preview: { rect: Rect; hits: string[] } };
+  | { kind: 'move'; ids: string[]; box: Footprint; targets: SnapTargets; preview: { dx: number; dy: number; guides: SnapGuide[] } }
+  | { kind: 'resize'; ids: [string]; handle: HandleId; start: Footprint; targets: SnapTargets; preview: { rect: Footprint; guides: SnapGuide[] } }
+  | { kind: 'marquee'; ids: string[]; additive: boolean; base: string[]; origin: { x: number; y: number }; preview: { rect: Footprint; hits: string[] } };
 
 export function startMove(doc: LayoutDoc, arrangement: Arrangement, ids: string[]): Gesture | null {
   const set = new Set(ids);
   const moving = doc.modules.filter((m) => set.has(m.id));
-  const box = boundsOf(moving);
-  if (!box) return null;
+  const bounds = boundingRect(moving.map(footprintRect));
+  if (!bounds) return null;
+  const box = rectFootprint(bounds);
   return { kind: 'move', ids: moving.map((m) => m.id), box, targets: snapTargets(doc, arrangement, set), preview: { dx: 0, dy: 0, guides: [] } };
 }
 
 export function startResize(doc: LayoutDoc, arrangement: Arrangement, id: string, handle: HandleId): Gesture | null {
   const m = doc.modules.find((o) => o.id === id);
   if (!m) return null;
-  const start: Rect = { x: m.x, y: m.y, length: m.length, width: m.width };
+  const start: Footprint = { x: m.x, y: m.y, length: m.length, width: m.width };
   return { kind: 'resize', ids: [id], handle, start, targets: snapTargets(doc, arrangement, new Set([id])), preview: { rect: start, guides: [] } };
 }
 

@@ -2,12 +2,12 @@
  * Pure edits of the layout document for the editor's store: place, move, resize, rotate,
  * duplicate, delete and patch modules, each returning a new document (the old one is kept
  * untouched for undo). Every length written is rounded to whole millimetres and checked against
- * the document schema. Must never touch React, Konva or the network.
+ * the document schema itself (lib/layout/schema.ts). Must never touch React, Konva or the network.
  */
-import { KINDS } from '@/lib/layout/kinds';
-import type { Arrangement, Facing, LayoutDoc, Module, ModuleKind } from '@/lib/layout/schema';
-import { moduleProblem } from './docRules';
-import { linedInterior, rectsOverlap, type Rect } from '../geometry/bayGeometry';
+import { KINDS, kindSpec } from '@/lib/layout/kinds';
+import { firstProblem, moduleSchema, type Arrangement, type Facing, type LayoutDoc, type Module, type ModuleKind } from '@/lib/layout/schema';
+import { rectFromExtent, rectsOverlap } from '@/lib/geometry/rect';
+import { footprintRect, inArrangement, linedInterior, shareAnArrangement, type Footprint } from '@/lib/layout/bay';
 import { snapToStep } from '../geometry/snapping';
 import { newModuleId } from './ids';
 
@@ -33,7 +33,7 @@ export function checkedModule(m: Module): Module {
     elevation: Math.round(m.elevation),
     height: Math.round(m.height),
   };
-  const problem = moduleProblem(rounded);
+  const problem = firstProblem(moduleSchema, rounded);
   if (problem) throw new EditError(problem);
   return rounded;
 }
@@ -44,8 +44,8 @@ function replaceModules(doc: LayoutDoc, changed: Map<string, Module>): LayoutDoc
 
 /** A new module of `kind` with the kind's defaults (lib/layout/kinds.ts). */
 export function moduleFromKind(kind: ModuleKind, id: string): Module {
-  const spec = KINDS[kind];
-  if (!spec) throw new EditError(`unknown module kind "${String(kind)}"`);
+  if (!Object.hasOwn(KINDS, kind)) throw new EditError(`unknown module kind "${String(kind)}"`);
+  const spec = kindSpec(kind);
   return checkedModule({
     id,
     kind,
@@ -60,7 +60,7 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
     ...(spec.surface ? { surface: spec.surface } : {}),
     massKg: spec.massKg,
     ...(spec.props ? { props: { ...spec.props } } : {}),
-  });
+  } as Module);
 }
 
 /**
@@ -70,12 +70,12 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
  */
 export function freeSpot(doc: LayoutDoc, m: Pick<Module, 'length' | 'width' | 'arrangements' | 'elevation' | 'height'>): { x: number; y: number } {
   const lined = linedInterior(doc);
-  const others = doc.modules.filter((o) => o.arrangements.some((a) => m.arrangements.includes(a)) && o.elevation < m.elevation + m.height && m.elevation < o.elevation + o.height);
+  const others = doc.modules.filter((o) => shareAnArrangement(o, m) && o.elevation < m.elevation + m.height && m.elevation < o.elevation + o.height);
   const step = 50;
-  for (let x = lined.x; x + m.length <= lined.x + lined.length; x += step) {
-    for (let y = lined.y; y + m.width <= lined.y + lined.width; y += step) {
-      const r: Rect = { x, y, length: m.length, width: m.width };
-      if (!others.some((o) => rectsOverlap(o, r))) return { x, y };
+  for (let x = lined.x0; x + m.length <= lined.x1; x += step) {
+    for (let y = lined.y0; y + m.width <= lined.y1; y += step) {
+      const r = rectFromExtent(x, y, m.length, m.width);
+      if (!others.some((o) => rectsOverlap(footprintRect(o), r))) return { x, y };
     }
   }
   return { x: Math.round((doc.bay.length - m.length) / 2), y: Math.round((doc.bay.width - m.width) / 2) };
@@ -93,8 +93,8 @@ export function placeModule(doc: LayoutDoc, kind: ModuleKind, centre?: { x: numb
     const lined = linedInterior(doc);
     let x = snapToStep(centre.x - base.length / 2, step);
     let y = snapToStep(centre.y - base.width / 2, step);
-    if (base.length <= lined.length) x = Math.min(Math.max(x, lined.x), lined.x + lined.length - base.length);
-    if (base.width <= lined.width) y = Math.min(Math.max(y, lined.y), lined.y + lined.width - base.width);
+    if (base.length <= lined.x1 - lined.x0) x = Math.min(Math.max(x, lined.x0), lined.x1 - base.length);
+    if (base.width <= lined.y1 - lined.y0) y = Math.min(Math.max(y, lined.y0), lined.y1 - base.width);
     pos = { x, y };
   } else {
     pos = freeSpot(doc, base);
@@ -111,7 +111,7 @@ export function moveModules(doc: LayoutDoc, ids: readonly string[], dx: number, 
   return replaceModules(doc, changed);
 }
 
-export function resizeModule(doc: LayoutDoc, id: string, rect: Rect): LayoutDoc {
+export function resizeModule(doc: LayoutDoc, id: string, rect: Footprint): LayoutDoc {
   const m = doc.modules.find((o) => o.id === id);
   if (!m) throw new EditError(`no module "${id}"`);
   return replaceModules(doc, new Map([[id, checkedModule({ ...m, ...rect })]]));
@@ -156,7 +156,13 @@ export function duplicateModules(doc: LayoutDoc, ids: readonly string[], offset 
 export function patchModule(doc: LayoutDoc, id: string, patch: Partial<Omit<Module, 'id'>>): LayoutDoc {
   const m = doc.modules.find((o) => o.id === id);
   if (!m) throw new EditError(`no module "${id}"`);
-  const next: Module = { ...m, ...patch, id };
+  const next = { ...m, ...patch, id } as Module;
+  // A new kind keeps only the values it declares (a tank's litres mean nothing to a wardrobe).
+  if (patch.kind !== undefined && patch.kind !== m.kind && next.props) {
+    const declared = kindSpec(next.kind).values;
+    const kept = Object.fromEntries(Object.entries(next.props).filter(([k]) => Object.hasOwn(declared, k)));
+    next.props = Object.keys(kept).length ? kept : undefined;
+  }
   for (const key of Object.keys(next) as (keyof Module)[]) if (next[key] === undefined) delete next[key];
   return replaceModules(doc, new Map([[id, checkedModule(next)]]));
 }
@@ -165,9 +171,9 @@ export function patchModule(doc: LayoutDoc, id: string, patch: Partial<Omit<Modu
 export function toggleMembership(doc: LayoutDoc, id: string, arrangement: Arrangement): LayoutDoc {
   const m = doc.modules.find((o) => o.id === id);
   if (!m) throw new EditError(`no module "${id}"`);
-  const has = m.arrangements.includes(arrangement);
+  const has = inArrangement(m, arrangement);
   if (has && m.arrangements.length === 1) throw new EditError('a module exists in at least one arrangement');
   const order: Arrangement[] = ['travel', 'lounge', 'sleep'];
-  const arrangements = has ? m.arrangements.filter((a) => a !== arrangement) : order.filter((a) => a === arrangement || m.arrangements.includes(a));
+  const arrangements = has ? m.arrangements.filter((a) => a !== arrangement) : order.filter((a) => a === arrangement || inArrangement(m, a));
   return patchModule(doc, id, { arrangements });
 }

@@ -8,6 +8,7 @@ import { useMemo } from 'react';
 import * as z from 'zod/mini';
 import { DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterPlan } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
+import { kindFacts } from '@/lib/layout/kinds';
 import { FindingList, findingsOf } from '../FindingList';
 import { FieldGroup, QuantityField } from '../fields';
 import type { PanelProps } from '../panelProps';
@@ -33,7 +34,7 @@ export function WaterPanel({ doc, readOnly, onSystems, onValidity, findings }: P
   });
   const e = form.formState.errors;
   const w = useMemo(() => waterPlan(doc), [doc]);
-  const tanks = doc.modules.filter((m) => m.kind === 'fresh-water-tank' || m.kind === 'grey-water-tank');
+  const tanks = doc.modules.filter((m) => kindFacts(m).water !== undefined);
   return (
     <div className="grid gap-6 xl:grid-cols-2">
       <form className="space-y-4" onSubmit={(ev) => ev.preventDefault()} noValidate aria-label="Water inputs">

@@ -9,6 +9,7 @@
 import type { LayoutDoc } from '@/lib/layout';
 import type { MassReport } from '@/lib/planning';
 import { formatNumber } from '@/lib/format';
+import { archBoxes, modulesIn } from '@/lib/layout/bay';
 import { palette } from '@/lib/look';
 
 const INK = palette.ink;
@@ -43,10 +44,10 @@ export function CentreOfMassPlan({ doc, report }: { doc: LayoutDoc; report: Mass
         </pattern>
       </defs>
       <rect x={0} y={0} width={L} height={W} fill="none" stroke={INK} strokeWidth={font / 4} />
-      {doc.bay.wheelArches.map((a, i) => (
-        <rect key={i} x={a.x} y={a.side === 'left' ? 0 : W - a.width} width={a.length} height={a.width} fill="url(#com-arch)" stroke={SOFT} strokeWidth={font / 10} />
+      {archBoxes(doc).map(({ rect: r }, i) => (
+        <rect key={i} x={r.x0} y={r.y0} width={r.x1 - r.x0} height={r.y1 - r.y0} fill="url(#com-arch)" stroke={SOFT} strokeWidth={font / 10} />
       ))}
-      {doc.modules.filter((m) => m.arrangements.includes('travel')).map((m) => (
+      {modulesIn(doc, 'travel').map((m) => (
         <rect key={m.id} x={m.x} y={m.y} width={m.length} height={m.width} fill="rgba(30,42,47,0.06)" stroke={SOFT} strokeWidth={font / 12} />
       ))}
       <text x={-font * 0.5} y={W / 2} fontSize={font} textAnchor="end" dominantBaseline="middle" fill={INK}>cab ←</text>

@@ -8,6 +8,7 @@
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
+import { kindFacts } from '../../layout/kinds';
 import {
   beltedTravelSeats,
   computeAxleLoads,
@@ -192,8 +193,9 @@ export function massChecks(doc: LayoutDoc): Finding[] {
   }
 
   for (const seat of beltedTravelSeats(doc)) {
-    const approved = seat.props?.approved === true ? true : undefined;
-    const anchored = seat.props?.anchorageTested === true ? true : undefined;
+    const fitting = kindFacts(seat).seat;
+    const approved = fitting?.approvedType ? true : undefined;
+    const anchored = fitting?.anchorageTested ? true : undefined;
     out.push(caution(
       'mass.seat-anchorage',
       [

@@ -1,0 +1,146 @@
+/**
+ * The bay model: the layout document seen as geometry, in bay coordinates (mm, origin at the
+ * front-left corner of the bare-metal floor, x rearwards, y across). One home for the build-up
+ * thicknesses, the clear height, the lined interior, the wheel-arch boxes, door openings, module
+ * footprints and arrangement membership — the editor, the checks, the plan sheet and every SVG
+ * view read the bay through here, so none of them re-derives "where the lining is" differently.
+ * Pure: plain rectangles from lib/geometry in, plain numbers out; must never decide pass or fail
+ * (that is lib/checks) nor import UI, framework or database code.
+ */
+import type { Opening } from '../geometry/freeFloor';
+import { rectFromExtent, type Rect } from '../geometry/rect';
+import type { Arrangement, Door, LayoutDoc, Module } from './schema';
+
+/** A placed box as the document writes it: min corner and extents along x and y. */
+export interface Footprint {
+  x: number;
+  y: number;
+  length: number;
+  width: number;
+}
+
+// ---- build-up ---------------------------------------------------------------------------------
+
+/** The total thickness of a stack of build-up layers (mm). */
+export function layersThickness(layers: readonly { thickness: number }[] | undefined): number {
+  return (layers ?? []).reduce((sum, l) => sum + l.thickness, 0);
+}
+
+export interface BuildUpThickness {
+  floorT: number;
+  roofT: number;
+  wallT: number;
+}
+
+export function buildUpThickness(doc: Pick<LayoutDoc, 'buildUp'>): BuildUpThickness {
+  return { floorT: layersThickness(doc.buildUp?.floor), roofT: layersThickness(doc.buildUp?.roof), wallT: layersThickness(doc.buildUp?.walls) };
+}
+
+/** Floor-to-lining height once floor and roof build-up are in (mm). */
+export function clearHeight(doc: Pick<LayoutDoc, 'bay' | 'buildUp'>): number {
+  const t = buildUpThickness(doc);
+  return doc.bay.height - t.floorT - t.roofT;
+}
+
+// ---- plan -------------------------------------------------------------------------------------
+
+/**
+ * The lined interior in plan: wall lining to wall lining across (y from the wall build-up to
+ * bay width − wall build-up), bulkhead to rear along. Not clamped: a build-up thicker than half
+ * the bay leaves an inverted box, inside which nothing fits.
+ */
+export function linedInterior(doc: Pick<LayoutDoc, 'bay' | 'buildUp'>): Rect {
+  const wallT = buildUpThickness(doc).wallT;
+  return { x0: 0, y0: wallT, x1: doc.bay.length, y1: doc.bay.width - wallT };
+}
+
+export interface ArchBox {
+  side: 'left' | 'right';
+  /** Plan footprint: against the left wall (y = 0) or the right wall (y = bay width). */
+  rect: Rect;
+  /** Top of the arch above the bare floor. */
+  height: number;
+}
+
+export function archBoxes(doc: Pick<LayoutDoc, 'bay'>): ArchBox[] {
+  return (doc.bay.wheelArches ?? []).map((a) => ({
+    side: a.side,
+    height: a.height,
+    rect: rectFromExtent(a.x, a.side === 'left' ? 0 : doc.bay.width - a.width, a.length, a.width),
+  }));
+}
+
+export interface DoorOpening {
+  door: Door;
+  opening: Opening;
+}
+
+/** Doors as openings of the lined interior: right wall = max y, left wall = min y, rear = max x. */
+export function doorOpenings(doc: Pick<LayoutDoc, 'bay'>): DoorOpening[] {
+  return (doc.bay.doors ?? []).map((door) => ({
+    door,
+    opening: {
+      edge: door.wall === 'right' ? 'maxY' : door.wall === 'left' ? 'minY' : 'maxX',
+      from: door.offset,
+      to: door.offset + door.width,
+    },
+  }));
+}
+
+/** A placed box (a module, a drag) as a rectangle. */
+export function footprintRect(f: Footprint): Rect {
+  return rectFromExtent(f.x, f.y, f.length, f.width);
+}
+
+/** A rectangle written back the document's way. */
+export function rectFootprint(r: Rect): Footprint {
+  return { x: r.x0, y: r.y0, length: r.x1 - r.x0, width: r.y1 - r.y0 };
+}
+
+/** The module's footprint in plan. */
+export const moduleRect: (m: Footprint) => Rect = footprintRect;
+
+/**
+ * Where a person's centre must stand to work the module: the strip in front of its facing side,
+ * up to `reach` mm out, exactly as long as that side (so a corner touched from beside does not count).
+ */
+export function workingZone(m: Module, reach: number): Rect {
+  const r = moduleRect(m);
+  switch (m.facing) {
+    case 'front':
+      return { x0: r.x0 - reach, y0: r.y0, x1: r.x0, y1: r.y1 };
+    case 'rear':
+      return { x0: r.x1, y0: r.y0, x1: r.x1 + reach, y1: r.y1 };
+    case 'left':
+      return { x0: r.x0, y0: r.y0 - reach, x1: r.x1, y1: r.y0 };
+    case 'right':
+      return { x0: r.x0, y0: r.y1, x1: r.x1, y1: r.y1 + reach };
+  }
+}
+
+// ---- heights ----------------------------------------------------------------------------------
+
+/** Underside above the BARE floor (the document's elevation is above the finished floor). */
+export function undersideAboveBare(m: Pick<Module, 'elevation'>, floorT: number): number {
+  return floorT + m.elevation;
+}
+export function topAboveBare(m: Pick<Module, 'elevation' | 'height'>, floorT: number): number {
+  return floorT + m.elevation + m.height;
+}
+
+// ---- arrangements -----------------------------------------------------------------------------
+
+/** Whether the module exists in the arrangement. */
+export function inArrangement(m: Pick<Module, 'arrangements'>, arrangement: Arrangement): boolean {
+  return m.arrangements.includes(arrangement);
+}
+
+/** The modules present in one arrangement, in document order. */
+export function modulesIn<M extends Pick<Module, 'arrangements'>>(doc: { modules: M[] }, arrangement: Arrangement): M[] {
+  return doc.modules.filter((m) => inArrangement(m, arrangement));
+}
+
+/** Whether two modules ever stand in the bay at the same time. */
+export function shareAnArrangement(a: Pick<Module, 'arrangements'>, b: Pick<Module, 'arrangements'>): boolean {
+  return a.arrangements.some((x) => inArrangement(b, x));
+}
