@@ -6,7 +6,7 @@
  * The proxy only redirects signed-out visitors for comfort; every route handler checks again.
  */
 import type { NextAuthConfig } from 'next-auth';
-import { authSecret, SESSION_MAX_AGE_S, secureCookiesSetting, withinAbsoluteLifetime } from './lib/auth/secret';
+import { authSecret, SESSION_MAX_AGE_S, secureCookiesSetting, withinAbsoluteLifetime } from './server/auth/secret';
 
 export const authConfig = {
   trustHost: true,

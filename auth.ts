@@ -9,7 +9,7 @@ import { z } from 'zod';
 import { authConfig } from './auth.config';
 import { authenticate, endSessions } from './db/accounts';
 import { loadActor } from './db/actor';
-import { clientAddress } from './lib/auth/address';
+import { clientAddress } from './server/auth/address';
 import { describeError, log } from './lib/log';
 
 class RateLimited extends CredentialsSignin {

@@ -1,20 +1,20 @@
 /**
  * Server start (Node runtime only, never during `next build`): installs the connection policy
- * (lib/auth/address.ts: client addresses, HTTPS, HSTS), opens the database at once, so a
+ * (server/auth/address.ts: client addresses, HTTPS, HSTS), opens the database at once, so a
  * second process on the same embedded-database folder stops with a clear message instead of
  * failing on its first request; then starts the local fakes of hosted services (mail, payments)
  * where this environment wants them.
  */
-import { installConnectionPolicy } from './lib/auth/address';
+import { installConnectionPolicy } from './server/auth/address';
 import { DatabaseLockedError, dataDir, getHandle } from './db/client';
-import { startLocalServices } from './lib/fakes/local-services';
+import { startLocalStandIns } from './server/local-mode';
 import { log } from './lib/log';
-import { authSecret, MissingAuthSecret } from './lib/auth/secret';
+import { authSecret, MissingAuthSecret } from './server/auth/secret';
 
 export async function startServer(): Promise<void> {
   // First: every request's client address and scheme come from its connection (or a trusted proxy).
   installConnectionPolicy();
-  // Fail closed: production without AUTH_SECRET does not start (lib/auth/secret).
+  // Fail closed: production without AUTH_SECRET does not start (server/auth/secret).
   try {
     authSecret();
   } catch (err) {
@@ -34,7 +34,7 @@ export async function startServer(): Promise<void> {
     throw err;
   }
   await startBackupSocket();
-  await startLocalServices();
+  await startLocalStandIns();
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
   void import('./db/uploads')
     .then((m) => m.sweepOrphanUploads())

@@ -1,6 +1,6 @@
 import path from 'node:path';
 import type { NextConfig } from 'next';
-import { SECURITY_HEADERS } from './lib/security/csp';
+import { SECURITY_HEADERS } from './server/security/csp';
 
 const root = path.resolve(__dirname);
 
@@ -12,7 +12,7 @@ const nextConfig: NextConfig = {
   turbopack: { root },
   outputFileTracingRoot: root,
   // Runtime data and other build folders are never part of the server bundle.
-  // The plan sheet reads its faces at run time (lib/api/sheet-fonts.ts).
+  // The plan sheet reads its faces at run time (server/api/sheet-fonts.ts).
   outputFileTracingIncludes: { '/api/layouts/[id]/sheet': ['./fonts/*.woff'] },
   outputFileTracingExcludes: { '*': ['data/**', '.next-*/**', 'artifacts/**', 'test-results/**'] },
   poweredByHeader: false,

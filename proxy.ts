@@ -6,7 +6,7 @@
 import NextAuth from 'next-auth';
 import { NextResponse } from 'next/server';
 import { authConfig } from './auth.config';
-import { contentSecurityPolicy } from './lib/security/csp';
+import { contentSecurityPolicy } from './server/security/csp';
 
 const { auth } = NextAuth(authConfig);
 

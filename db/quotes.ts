@@ -11,9 +11,9 @@
  * paid the layout's quote stays as it is. Returns DTOs, never rows; never stores card data.
  */
 import 'server-only';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { getDb } from './client';
-import { layouts, paymentEvents, payments, quotes, users } from './schema';
+import { layouts, paymentEvents, payments, quotes, studios, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError, VersionConflictError } from './errors';
 import type { Actor } from './actor';
 import { loadLayoutFor } from './access';
@@ -33,8 +33,15 @@ export const MAX_DEPOSIT_MINOR = 99_999_999;
 
 export type QuoteStatus = 'sent' | 'superseded' | 'paid';
 
+/** How people name a quote: the studio's running number, `Q-0007` (more digits past 9999). */
+export function quoteReference(n: number): string {
+  return `Q-${String(n).padStart(4, '0')}`;
+}
+
 export interface QuoteDto {
   id: string;
+  /** What people read and quote back: `Q-0007`, numbered per studio. Never the id. */
+  reference: string;
   layoutId: string;
   layoutName: string;
   layoutVersion: number;
@@ -73,6 +80,7 @@ async function toDto(row: QuoteRow, layoutName: string, actor: Actor): Promise<Q
   const [client] = row.clientId ? await db.select({ name: users.name }).from(users).where(eq(users.id, row.clientId)).limit(1) : [];
   return {
     id: row.id,
+    reference: quoteReference(row.number),
     layoutId: row.layoutId,
     layoutName,
     layoutVersion: row.layoutVersion,
@@ -152,11 +160,18 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
       const [paid] = await tx.select({ id: quotes.id }).from(quotes).where(and(eq(quotes.layoutId, layout.id), eq(quotes.status, 'paid'))).limit(1);
       if (paid) throw new ConflictError('A deposit has already been paid on this layout’s quote; that quote stays as it is.');
       await tx.update(quotes).set({ status: 'superseded' }).where(and(eq(quotes.layoutId, layout.id), eq(quotes.status, 'sent')));
+      // The studio row's lock orders concurrent sends, so numbers are neither repeated nor skipped.
+      const [numbered] = await tx
+        .update(studios)
+        .set({ lastQuoteNumber: sql`${studios.lastQuoteNumber} + 1` })
+        .where(eq(studios.id, layout.studioId))
+        .returning({ number: studios.lastQuoteNumber });
       const [created] = await tx
         .insert(quotes)
         .values({
           layoutId: layout.id,
           studioId: layout.studioId,
+          number: numbered.number,
           clientId: layout.clientId,
           layoutVersion: layout.version,
           status: 'sent',

@@ -37,6 +37,8 @@ export const quotes = pgTable(
     layoutId: uuid('layout_id').notNull().references((): AnyPgColumn => layouts.id, { onDelete: 'cascade' }),
     /** Copied from the layout so a rights check needs no join; a layout never changes studio. */
     studioId: uuid('studio_id').notNull().references((): AnyPgColumn => studios.id, { onDelete: 'cascade' }),
+    /** Numbered per studio in the order sent (shown as its reference, `Q-0007`); never reused. */
+    number: integer('number').notNull(),
     /** The client the quote was sent to. */
     clientId: uuid('client_id').references((): AnyPgColumn => users.id, { onDelete: 'set null' }),
     /** The layout version the parts list was priced from. */
@@ -60,6 +62,7 @@ export const quotes = pgTable(
   },
   (t) => [
     index('quotes_layout').on(t.layoutId, t.sentAt),
+    uniqueIndex('quotes_studio_number').on(t.studioId, t.number),
     // At most one quote per layout waiting for its deposit: two racing "send" requests cannot both land.
     uniqueIndex('quotes_one_open').on(t.layoutId).where(sql`${t.status} = 'sent'`),
     // At most one paid quote per layout.

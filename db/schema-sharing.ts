@@ -133,7 +133,7 @@ export const invitations = pgTable(
 );
 
 /**
- * Mail received by the development mail server (lib/fakes/smtp), shared by every app process on
+ * Mail received by the development mail server (dev/fakes/smtp), shared by every app process on
  * the database. `studioId` comes from the X-Baywright-Studio header our own mail carries.
  */
 export const outboxMail = pgTable(

@@ -30,6 +30,8 @@ export const studios = pgTable('studios', {
   units: unitEnum('units').notNull().default('mm'),
   /** Studio-wide check defaults layered under each layout's own settings (walkway width, mattress region…). */
   checkDefaults: jsonb('check_defaults').$type<Record<string, unknown>>().notNull().default({}),
+  /** The number of the studio's last quote: quotes are numbered Q-0001, Q-0002… per studio. */
+  lastQuoteNumber: integer('last_quote_number').notNull().default(0),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });
 

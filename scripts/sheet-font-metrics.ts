@@ -9,7 +9,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import fontkit from '@pdf-lib/fontkit';
 import { SHEET_FONT_FILES } from '../lib/sheet/fonts';
-import { woffToSfnt } from '../lib/api/woff';
+import { woffToSfnt } from '../server/api/woff';
 
 const root = path.resolve(__dirname, '..');
 /** fontkit's parsed horizontal metrics table, which its types leave out. */

@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
 import { redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { AppHeader } from '@/components/ui/AppHeader';
-import { outboxEnabled } from '@/lib/mail/outbox-mode';
+import { outboxEnabled } from '@/server/mail/outbox-mode';
 
 export const dynamic = 'force-dynamic';
 

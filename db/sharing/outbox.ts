@@ -1,8 +1,8 @@
 /**
- * The development outbox: mail the local mail server (lib/fakes/smtp) received, kept in the
+ * The development outbox: mail the local mail server (dev/fakes/smtp) received, kept in the
  * database so several app processes on one database see the same mail. Owners read their own
  * studio's mail (our messages carry an X-Baywright-Studio header); nobody else reads any.
- * Must never be reachable in production unless the outbox is switched on (lib/mail/outbox-mode).
+ * Must never be reachable in production unless the outbox is switched on (server/mail/outbox-mode).
  */
 import 'server-only';
 import { and, desc, eq } from 'drizzle-orm';

@@ -2,7 +2,7 @@
  * Who hears about what, for the notification mail: the layout's client hears of new revisions
  * and of the workshop's comments; the workshop (whoever issued the revision or made the layout,
  * else the studio's owners) hears of decisions and of the client's comments. Returns addresses
- * for lib/mail only. Must never be used to build an API answer.
+ * for server/mail only. Must never be used to build an API answer.
  */
 import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';

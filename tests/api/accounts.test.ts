@@ -8,8 +8,8 @@ import { memberships, users } from '@/db/schema';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, sessionCookie } from '../helpers/http';
-import { decodeCached, type SessionClaims } from '@/lib/auth/token-cache';
-import { PEER_HEADER } from '@/lib/auth/address';
+import { decodeCached, type SessionClaims } from '@/server/auth/token-cache';
+import { PEER_HEADER } from '@/server/auth/address';
 
 let db: Db;
 beforeAll(async () => {

@@ -23,12 +23,14 @@ beforeAll(async () => {
   w = await buildWorld(db);
 });
 
+let nextQuoteNumber = 1;
+
 /** A layout of the demo studio shared with `client`, with a quote and (optionally) a payment in a given state. */
 async function layoutWithQuote(name: string, money: 'none' | 'open' | 'paid' | 'paid-quote-only'): Promise<string> {
   const doc = { ...starterLayout('starter-l-lounge')!, name };
   const [layout] = await db.insert(layouts).values({ studioId: w.owner.studioId, clientId: w.client.id, name, doc }).returning({ id: layouts.id });
   const [q] = await db.insert(quotes).values({
-    layoutId: layout.id, studioId: w.owner.studioId, clientId: w.client.id, layoutVersion: 1,
+    layoutId: layout.id, studioId: w.owner.studioId, number: nextQuoteNumber++, clientId: w.client.id, layoutVersion: 1,
     status: money === 'paid' || money === 'paid-quote-only' ? 'paid' : 'sent',
     currency: 'GBP', parts: { lines: [] } as never, grossMinor: 1_200_000, depositPct: 20, depositMinor: 240_000,
     sentByName: 'Maren', paidAt: money.startsWith('paid') ? new Date() : null,

@@ -61,7 +61,7 @@ describe('db:backup and db:restore', () => {
     const w = await buildWorld(db);
     const [rev] = await db.insert(revisions).values({ layoutId: w.clientLayoutId, seq: 1, letter: 'A', doc: (await db.select({ doc: layouts.doc }).from(layouts).limit(1))[0].doc, layoutVersion: 1 }).returning();
     const [q] = await db.insert(quotes).values({
-      layoutId: w.clientLayoutId, studioId: w.owner.studioId, clientId: w.client.id, layoutVersion: 1, status: 'paid', currency: 'GBP',
+      layoutId: w.clientLayoutId, studioId: w.owner.studioId, number: 1, clientId: w.client.id, layoutVersion: 1, status: 'paid', currency: 'GBP',
       parts: { lines: [] } as never, grossMinor: 900_000, depositPct: 25, depositMinor: 225_000, sentByName: 'Maren', paidAt: new Date(),
     }).returning();
     await db.insert(payments).values({ quoteId: q.id, studioId: w.owner.studioId, checkoutSessionId: 'cs_test_backup', amountMinor: 225_000, currency: 'GBP', status: 'paid', providerPaymentId: 'pi_test_backup', paidAt: new Date() });

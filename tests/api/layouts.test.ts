@@ -67,7 +67,7 @@ describe('POST /api/layouts', () => {
     const res = await call(list.POST, { method: 'POST', as: w.designer, json: { name: 'Test van', bayTemplateId: 'l3h3', clientId: w.client.id } });
     expect(res.status).toBe(201);
     expect(res.body.version).toBe(1);
-    expect(res.body.doc.bay.height).toBe(2150);
+    expect(res.body.doc.bay.height).toBe(2250); // the L3H3 template's bay height
     expect(res.body.client.id).toBe(w.client.id);
     const row = await stored(res.body.id);
     expect(row.studioId).toBe(w.designer.studioId);

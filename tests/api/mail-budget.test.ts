@@ -1,6 +1,6 @@
 // Mail budgets: nobody who signs up can make the app mail an address over and over. Counted in
 // the database per person (40 an hour), per studio (150 an hour) and, for invitations and
-// resends, per studio and address (3 a day); lib/mail/budget.ts. Other mail-sending actions
+// resends, per studio and address (3 a day); server/mail/budget.ts. Other mail-sending actions
 // (comments, revisions, decisions, quotes) keep their change and report the mail as not sent.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { count, eq } from 'drizzle-orm';
@@ -10,9 +10,9 @@ import * as members from '@/app/api/studio/members/route';
 import * as comments from '@/app/api/layouts/[id]/comments/route';
 import { invitations, outboxMail } from '@/db/schema';
 import { clearAllThrottles } from '@/db/throttle';
-import { MAIL_BUDGETS, takeMailBudget } from '@/lib/mail/budget';
+import { MAIL_BUDGETS, takeMailBudget } from '@/server/mail/budget';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

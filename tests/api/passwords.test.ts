@@ -2,7 +2,7 @@
 // the common-password list of @zxcvbn-ts/language-common; OWASP ASVS 4.0.3 V2.1.1 and V2.1.7)
 // on every path that sets one: sign-up, accepting an invitation, change, reset.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { PEER_HEADER } from '@/lib/auth/address';
+import { PEER_HEADER } from '@/server/auth/address';
 import { eq } from 'drizzle-orm';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import * as changeRoute from '@/app/api/account/password/route';
@@ -15,10 +15,10 @@ import { authenticate } from '@/db/accounts';
 import { clearAllThrottles } from '@/db/throttle';
 import { passwordResets, users } from '@/db/schema';
 import { resetPassword } from '@/db/password-resets';
-import { settledResetMail } from '@/lib/mail/password-reset';
-import { PASSWORD_TOO_COMMON } from '@/lib/auth/password-policy';
+import { settledResetMail } from '@/server/mail/password-reset';
+import { PASSWORD_TOO_COMMON } from '@/server/auth/password-policy';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call, type SessionUser } from '../helpers/http';
 import { linkIn, mailFor, startMailSink } from '../sharing/helpers';

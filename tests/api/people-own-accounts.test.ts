@@ -3,7 +3,7 @@
 // attack (invite an unregistered address with a chosen password, remove the membership, keep
 // the account) and the "attach an existing account and learn its name" leak are both gone.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { PEER_HEADER } from '@/lib/auth/address';
+import { PEER_HEADER } from '@/server/auth/address';
 import { eq } from 'drizzle-orm';
 import * as members from '@/app/api/studio/members/route';
 import * as invites from '@/app/api/invitations/route';
@@ -13,7 +13,7 @@ import { memberships, users } from '@/db/schema';
 import { authenticate } from '@/db/accounts';
 import { clearAllThrottles } from '@/db/throttle';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

@@ -8,7 +8,7 @@ import * as authRoute from '@/app/api/auth/[...nextauth]/route';
 import * as list from '@/app/api/layouts/route';
 import { endSessions } from '@/db/accounts';
 import { users } from '@/db/schema';
-import { SESSION_ABSOLUTE_S } from '@/lib/auth/secret';
+import { SESSION_ABSOLUTE_S } from '@/server/auth/secret';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, sessionCookie } from '../helpers/http';
@@ -41,7 +41,7 @@ describe('the absolute session lifetime', () => {
 
   it('refuses a token that carries no sign-in time at all', async () => {
     const { encode } = await import('next-auth/jwt');
-    const { authSecret, sessionCookieName } = await import('@/lib/auth/secret');
+    const { authSecret, sessionCookieName } = await import('@/server/auth/secret');
     const token = await encode({ token: { uid: w.designer.id, studioId: w.designer.studioId, sv: 0 }, secret: authSecret(), salt: sessionCookieName() });
     expect((await call(list.GET, { headers: { cookie: `${sessionCookieName()}=${token}` } })).status).toBe(401);
   });

@@ -3,7 +3,7 @@
 // restrictions", no more than 100 failed attempts per hour on one account). Every attempt is
 // reserved in the database before the password is compared.
 import { beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
-import { PEER_HEADER } from '@/lib/auth/address';
+import { PEER_HEADER } from '@/server/auth/address';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authenticate, SIGN_IN_FAILURE_LIMIT, SIGN_IN_RULES } from '@/db/accounts';
 import { clearAllThrottles, reserve } from '@/db/throttle';

@@ -1,5 +1,6 @@
 // Fit rules, hand-worked in our L2H2 template with the default build-up (floor 24, roof 26, walls
-// 36 mm): lined interior y 36..1734, x 0..3100, lined roof 1924 mm above the bare floor; arches
+// 36 mm): lined interior y 36..1764 (1800 − 36), x 0..3100, lined roof 2000 − 26 = 1974 mm above the bare floor
+// (1950 mm above the 24 mm floor build-up); arches
 // x 1700..2650, standing in 210 mm, 320 mm high. Each rule: pass, exactly at the limit, fail.
 import { describe, expect, it } from 'vitest';
 import { runChecks } from '@/lib/checks';
@@ -9,16 +10,16 @@ const box = (over: Partial<Parameters<typeof mod>[0]>) => mod({ id: 'box', kind:
 
 describe('fit.inside', () => {
   it('passes exactly against the linings, the front, the rear and the lined roof (0 mm to spare)', () => {
-    const doc = l2h2Doc({ modules: [box({ id: 'left', y: 36 }), box({ id: 'right', y: 1734 - 400, x: 1000 }), box({ id: 'front', x: 0, y: 700 }), box({ id: 'rear', x: 2700, y: 700 }), box({ id: 'high', x: 1500, y: 700, elevation: 1000, height: 900 })] });
+    const doc = l2h2Doc({ modules: [box({ id: 'left', y: 36 }), box({ id: 'right', y: 1764 - 400, x: 1000 }), box({ id: 'front', x: 0, y: 700 }), box({ id: 'rear', x: 2700, y: 700 }), box({ id: 'high', x: 1500, y: 700, elevation: 1000, height: 950 })] });
     const f = only(doc, 'fit.inside');
     expect(f).toMatchObject({ status: 'pass', measured: 0, required: 0, unit: 'mm' });
   });
   it.each([
     ['left wall lining', { y: 35 }, -1],
-    ['right wall lining', { y: 1735 - 400 }, -1],
+    ['right wall lining', { y: 1765 - 400 }, -1],
     ['front of the bay', { x: -1 }, -1],
     ['rear of the bay', { x: 2701 }, -1],
-    ['lined roof', { elevation: 1000, height: 901 }, -1],
+    ['lined roof', { elevation: 1000, height: 951 }, -1],
   ])('fails 1 mm into the %s', (where, over, margin) => {
     const f = only(l2h2Doc({ modules: [box(over)] }), 'fit.inside');
     expect(f).toMatchObject({ status: 'fail', measured: margin, required: 0, moduleIds: ['box'] });

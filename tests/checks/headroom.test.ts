@@ -12,39 +12,39 @@ const UK_MEN = { p5: 1625, p50: 1740, p95: 1855 }; // Bodyspace Table 10.1 (from
 const US_MEN_P95 = 1870; // same tables, US adults 19–65 (from memory)
 
 describe('headroom.standing', () => {
-  it('L2H2 after the default build-up (24 mm floor, 26 mm roof) leaves 1900 mm clear', () => {
+  it('L2H2 (2000 mm bare) after the default build-up (24 mm floor, 26 mm roof) leaves 2000 − 50 = 1950 mm clear', () => {
     const f = only(l2h2Doc(), 'headroom.standing');
-    expect(f.measured).toBe(1900);
-    expect(f.message).toMatch(/Clear standing height 1900 mm after 24 mm floor and 26 mm roof build-up/);
+    expect(f.measured).toBe(1950);
+    expect(f.message).toMatch(/Clear standing height 1950 mm after 24 mm floor and 26 mm roof build-up/);
   });
-  it('a 95th-percentile British man in shoes (1855 + 25 = 1880 mm) fits exactly with the 20 mm margin: pass', () => {
+  it('a 95th-percentile British man in shoes (1855 + 25 = 1880 mm) needs 1880 + 20 = 1900 mm: pass, and the bay fits people up to 1950 − 20 = 1930 mm', () => {
     const f = only(l2h2Doc({ occupants: { standingHeight: UK_MEN.p95 + SHOES } }), 'headroom.standing');
     // required is the figure the shortfall is measured against: 1880 mm stature + 20 mm margin = 1900 mm.
-    expect(f).toMatchObject({ status: 'pass', measured: 1900, required: 1900, unit: 'mm' });
-    expect(f.message).toMatch(/fits people up to 1880 mm tall with the margin/);
+    expect(f).toMatchObject({ status: 'pass', measured: 1950, required: 1900, unit: 'mm' });
+    expect(f.message).toMatch(/fits people up to 1930 mm tall with the margin/);
   });
-  it('1 mm taller is inside the margin: warn; exactly the clear height still stands: warn; 1 mm more: fail', () => {
-    const warn = only(l2h2Doc({ occupants: { standingHeight: 1881 } }), 'headroom.standing');
-    expect(warn).toMatchObject({ status: 'warn', measured: 1900, required: 1901 });
-    expect(warn.message).toMatch(/needs 1901 mm \(the tallest person’s 1881 mm stature \+ 20 mm margin\).*1 mm short of the margin/);
-    expect(only(l2h2Doc({ occupants: { standingHeight: 1900 } }), 'headroom.standing').status).toBe('warn');
-    const f = only(l2h2Doc({ occupants: { standingHeight: 1901 } }), 'headroom.standing');
-    expect(f).toMatchObject({ status: 'fail', required: 1921 });
+  it('1 mm taller than 1930 is inside the margin: warn; exactly the clear height still stands: warn; 1 mm more: fail', () => {
+    const warn = only(l2h2Doc({ occupants: { standingHeight: 1931 } }), 'headroom.standing');
+    expect(warn).toMatchObject({ status: 'warn', measured: 1950, required: 1951 });
+    expect(warn.message).toMatch(/needs 1951 mm \(the tallest person’s 1931 mm stature \+ 20 mm margin\).*1 mm short of the margin/);
+    expect(only(l2h2Doc({ occupants: { standingHeight: 1950 } }), 'headroom.standing').status).toBe('warn');
+    const f = only(l2h2Doc({ occupants: { standingHeight: 1951 } }), 'headroom.standing');
+    expect(f).toMatchObject({ status: 'fail', required: 1971 });
     expect(f.message).toMatch(/cannot stand upright: 1 mm short of their stature, 21 mm short with the margin/);
   });
-  it('a 95th-percentile US man in shoes (1870 + 25 = 1895 mm) stands in L2H2 only inside the margin: warn', () => {
-    expect(only(l2h2Doc({ occupants: { standingHeight: US_MEN_P95 + SHOES } }), 'headroom.standing').status).toBe('warn');
+  it('a 95th-percentile US man in shoes (1870 + 25 = 1895 mm) needs 1915 mm and stands in L2H2 (1950 mm clear): pass', () => {
+    expect(only(l2h2Doc({ occupants: { standingHeight: US_MEN_P95 + SHOES } }), 'headroom.standing').status).toBe('pass');
   });
-  it('in a standard-roof L2H1 (1400 mm bare) even a 5th-percentile British man (1625 + 25 mm) cannot stand', () => {
+  it('in a standard-roof L2H1 (1500 mm bare, 1450 mm clear) even a 5th-percentile British man (1625 + 25 mm) cannot stand', () => {
     const h1 = bayTemplate('l2h1')!.bay;
     const f = only(l2h2Doc({ bay: h1, occupants: { standingHeight: UK_MEN.p5 + SHOES } }), 'headroom.standing');
-    expect(f).toMatchObject({ status: 'fail', measured: 1350 });
+    expect(f).toMatchObject({ status: 'fail', measured: 1450 });
   });
   it('common practice stated by a practising builder: a person 1870 mm tall stands upright in a high-roof (H2) van after floor and roof insulation', () => {
     expect(only(l2h2Doc({ occupants: { standingHeight: 1870 } }), 'headroom.standing').status).toBe('pass');
   });
-  it('thicker build-up costs headroom: 50 mm of roof insulation more turns the 1870 mm pass into a fail', () => {
-    const doc = l2h2Doc({ occupants: { standingHeight: 1870 }, buildUp: { floor: [{ material: 'Ply', thickness: 24 }], roof: [{ material: 'PIR board', thickness: 76 }], walls: [] } });
+  it('thicker build-up costs headroom: 100 mm of roof insulation more (2000 − 24 − 126 = 1850 mm clear) turns the 1870 mm pass into a fail', () => {
+    const doc = l2h2Doc({ occupants: { standingHeight: 1870 }, buildUp: { floor: [{ material: 'Ply', thickness: 24 }], roof: [{ material: 'PIR board', thickness: 126 }], walls: [] } });
     expect(only(doc, 'headroom.standing')).toMatchObject({ status: 'fail', measured: 1850 });
   });
 });

@@ -1,6 +1,6 @@
-// Building layout documents for the rule tests: our own L2H2 bay template (3100 × 1770 × 1950,
-// arches 320 mm high standing in 210 mm at x 1700–2650, sliding door on the right at 150–1420,
-// rear door 105–1665) with the default build-up (floor 24, roof 26, walls 36 mm), or a bare box.
+// Building layout documents for the rule tests: our own L2H2 bay template (3100 × 1800 × 2000,
+// invented round figures; arches 320 mm high standing in 210 mm at x 1700–2650, sliding door on
+// the right at 150–1350, rear door 150–1650) with the default build-up (floor 24, roof 26, walls 36 mm), or a bare box.
 import { expect } from 'vitest';
 import { runChecks, type CheckReport, type Finding } from '@/lib/checks';
 import { bayTemplate, DEFAULT_BUILD_UP, layoutDocSchema, type LayoutDoc, type LayoutDocInput } from '@/lib/layout';

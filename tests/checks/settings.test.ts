@@ -18,7 +18,8 @@ describe('check settings', () => {
     expect(resolveSettings(l2h2Doc(), { headMargin: 50 })).toMatchObject({ headMargin: 50, walkwayMin: 450 });
   });
   it('a studio default changes the outcome of a run', () => {
-    const doc = l2h2Doc({ occupants: { standingHeight: 1870 } }); // clear height 1900
+    // Clear height 2000 − 24 − 26 = 1950 mm: 1920 + 20 mm margin = 1940 passes, 1920 + 40 = 1960 does not.
+    const doc = l2h2Doc({ occupants: { standingHeight: 1920 } });
     expect(runChecks(doc).findings.find((f) => f.id === 'headroom.standing')!.status).toBe('pass');
     expect(runChecks(doc, { studioDefaults: { headMargin: 40 } }).findings.find((f) => f.id === 'headroom.standing')!.status).toBe('warn');
   });

@@ -64,7 +64,7 @@ describe('walkway.reach', () => {
     const bench = mod({ id: 'bench', kind: 'bench-seat', x: 2550, y: 36, length: 550, width: 1698, elevation: 300, height: 160, facing: 'front' });
     const f = only(l2h2Doc({ modules: [sink, bench] }), 'walkway.reach', 'lounge');
     expect(f.status).toBe('pass');
-    const noSlide = l2h2Doc({ modules: [sink, bench], bay: { doors: [{ id: 'rear', wall: 'rear', offset: 105, width: 1560 }] } });
+    const noSlide = l2h2Doc({ modules: [sink, bench], bay: { doors: [{ id: 'rear', wall: 'rear', offset: 150, width: 1500 }] } });
     expect(only(noSlide, 'walkway.reach', 'lounge')).toMatchObject({ status: 'fail', measured: 0, required: 2 });
   });
 });

@@ -36,14 +36,14 @@ test.describe('layout editor', () => {
     await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'saved');
     expect(scale).toBeGreaterThan(0);
 
-    // Place a bench seat by dragging it from the Parts shelf to the middle of the bay (x 2150, y 885).
-    const drop = at(2150, 885);
+    // Place a bench seat by dragging it from the Parts shelf to the middle of the L4H3 bay, 4500 × 1800 (x 2250, y 900).
+    const drop = at(2250, 900);
     await page.locator('[data-kind="bench-seat"]').dragTo(plan, { targetPosition: { x: drop.x - box.x, y: drop.y - box.y } });
     await expect(detail(page, 'x')).toBeVisible();
     const placedX = await numberIn(page, 'x');
     const placedY = await numberIn(page, 'y');
-    expect(Math.abs(placedX + 550 - 2150)).toBeLessThanOrEqual(20); // centred on the drop, 10 mm grid
-    expect(Math.abs(placedY + 275 - 885)).toBeLessThanOrEqual(20);
+    expect(Math.abs(placedX + 550 - 2250)).toBeLessThanOrEqual(20); // centred on the drop, 10 mm grid
+    expect(Math.abs(placedY + 275 - 900)).toBeLessThanOrEqual(20);
 
     // Move it 100 px rearwards with the mouse: the Details panel shows the new position.
     await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'none');

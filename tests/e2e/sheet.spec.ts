@@ -153,7 +153,7 @@ test('in the editor: Sheets & files gives a picture with its title strip and the
   const box = (await img.boundingBox())!;
   await page.mouse.click(box.x + 2, box.y + box.height / 2);
   await page.mouse.click(box.x + box.width - 2, box.y + box.height / 2);
-  await dialog.getByLabel('Real distance between the points').fill('3700');
+  await dialog.getByLabel('Real distance between the points').fill('3800');
   await dialog.getByRole('button', { name: 'Place under the plan' }).click();
   await expect(page.getByRole('button', { name: /^Survey photos\s*1/ })).toBeVisible();
   await expect(page.getByRole('dialog', { name: 'Survey photos' })).toContainText(/mm\/px/);

@@ -32,11 +32,11 @@ describe('viewport transform', () => {
   });
 
   it('fit-to-bay shows the whole bay centred inside the margin, and scale is clamped', () => {
-    const v = fitToBay(vp(), 4300, 1770, 72);
+    const v = fitToBay(vp(), 4500, 1800, 72);
     expect(toScreenX(v, 0)).toBeGreaterThanOrEqual(72 - 1e-9);
-    expect(toScreenX(v, 4300)).toBeLessThanOrEqual(1000 - 72 + 1e-9);
+    expect(toScreenX(v, 4500)).toBeLessThanOrEqual(1000 - 72 + 1e-9);
     expect(toScreenY(v, 0)).toBeGreaterThanOrEqual(0);
-    expect((toScreenX(v, 0) + toScreenX(v, 4300)) / 2).toBeCloseTo(500);
+    expect((toScreenX(v, 0) + toScreenX(v, 4500)) / 2).toBeCloseTo(500);
     expect(clampScale(1e9)).toBe(MAX_SCALE);
     expect(clampScale(Number.NaN)).toBe(1);
   });
@@ -61,7 +61,8 @@ describe('viewport transform', () => {
 describe('bay geometry', () => {
   it('lined interior and clear height follow the build-up', () => {
     const doc = testDoc();
-    expect(linedInterior(doc)).toEqual({ x0: 0, y0: 36, x1: 3400, y1: 1734 });
+    // 1800 − 36 mm wall = 1764
+    expect(linedInterior(doc)).toEqual({ x0: 0, y0: 36, x1: 3400, y1: 1764 });
     // 1900 − (10 + 12 + 2) floor − (20 + 6) roof
     expect(clearHeight(doc)).toBe(1850);
   });
@@ -70,7 +71,7 @@ describe('bay geometry', () => {
 describe('dimension strings', () => {
   it('overall size of the bay along and across', () => {
     const d = overallDimensions(testDoc(), 100);
-    expect(d.map((x) => [x.axis, x.value])).toEqual([['x', 3400], ['y', 1770]]);
+    expect(d.map((x) => [x.axis, x.value])).toEqual([['x', 3400], ['y', 1800]]);
   });
 
   it('gaps to the lining on open sides and to the nearest neighbour where there is one', () => {
@@ -79,7 +80,7 @@ describe('dimension strings', () => {
     const dims = moduleDimensions(doc, a, 'lounge');
     const byDir = Object.fromEntries(dims.filter((d) => d.role !== 'size').map((d) => [`${d.axis}:${d.from < (d.axis === 'x' ? a.x : a.y) ? 'before' : 'after'}`, d]));
     expect(byDir['y:before']).toMatchObject({ role: 'gap-lining', value: 500 - 36 });
-    expect(byDir['y:after']).toMatchObject({ role: 'gap-lining', value: 1734 - 900 });
+    expect(byDir['y:after']).toMatchObject({ role: 'gap-lining', value: 1764 - 900 });
     expect(byDir['x:before']).toMatchObject({ role: 'gap-lining', value: 1000 });
     expect(byDir['x:after']).toMatchObject({ role: 'gap-module', value: 200, neighbourId: 'b' });
     expect(dims.filter((d) => d.role === 'size').map((d) => d.value)).toEqual([400, 400]);

@@ -3,12 +3,12 @@ import { layoutDocSchema, emptyLayout, type LayoutDoc } from '@/lib/layout';
 import { createEditorStore } from '@/components/editor/store/editorStore';
 import type { Module } from '@/lib/layout';
 
-/** An L2H2-like bay; walls 36 mm (24 + 12), so the lining runs y = 36 … 1734. */
+/** An invented high-roof bay in round figures; walls 36 mm (24 + 12), so the lining runs y = 36 … 1764. */
 export function testDoc(modules: Module[] = []): LayoutDoc {
   const doc = emptyLayout('Harness van', {
-    length: 3400, width: 1770, height: 1900,
+    length: 3400, width: 1800, height: 1900,
     wheelArches: [{ side: 'left', x: 1800, length: 950, width: 210, height: 320 }],
-    doors: [{ id: 'slide', wall: 'right', offset: 150, width: 1250 }],
+    doors: [{ id: 'slide', wall: 'right', offset: 150, width: 1200 }],
     bulkhead: true, cabSeats: 2,
   });
   doc.buildUp.walls = [{ material: 'Closed-cell foam', thickness: 24 }, { material: 'Plywood lining', thickness: 12 }];

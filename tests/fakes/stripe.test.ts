@@ -5,7 +5,7 @@ import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createHmac } from 'node:crypto';
 import Stripe from 'stripe';
-import { parseFormBody, signatureHeader, startFakeStripe, type FakeStripe } from '@/lib/fakes/stripe';
+import { parseFormBody, signatureHeader, startFakeStripe, type FakeStripe } from '@/dev/fakes/stripe';
 
 const SECRET = 'whsec_baywright_fake';
 const KEY = 'sk_test_baywright_fake';

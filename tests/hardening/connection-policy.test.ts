@@ -1,12 +1,12 @@
-// The connection policy and client addresses (lib/auth/address.ts), in-process: what a caller
+// The connection policy and client addresses (server/auth/address.ts), in-process: what a caller
 // sends in forwarded headers counts only when TRUST_PROXY says a proxy sent it; HTTPS (HSTS,
 // Secure cookies) follows the public URL or the trusted proxy. The same against the real server:
 // tests/system/connection.test.ts.
 import { afterEach, describe, expect, it } from 'vitest';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { Socket } from 'node:net';
-import { applyConnectionPolicy, clientAddress, HSTS, parseTrustProxy, PEER_HEADER, requestIsSecure } from '@/lib/auth/address';
-import { sessionCookieName, secureCookiesSetting } from '@/lib/auth/secret';
+import { applyConnectionPolicy, clientAddress, HSTS, parseTrustProxy, PEER_HEADER, requestIsSecure } from '@/server/auth/address';
+import { sessionCookieName, secureCookiesSetting } from '@/server/auth/secret';
 
 const saved = { TRUST_PROXY: process.env.TRUST_PROXY, AUTH_URL: process.env.AUTH_URL, BAYWRIGHT_PUBLIC_URL: process.env.BAYWRIGHT_PUBLIC_URL };
 afterEach(() => {

@@ -7,10 +7,10 @@
  */
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { eq } from 'drizzle-orm';
-import { localStandInsAllowed } from '@/lib/local-mode';
-import { fakeSmtpWanted } from '@/lib/fakes/smtp/server';
-import { paymentsConfigured, usesFakePayments } from '@/lib/payments/config';
-import { mailConfigured } from '@/lib/mail/transport';
+import { localStandInsAllowed } from '@/server/local-mode';
+import { fakeSmtpWanted } from '@/dev/fakes/smtp/server';
+import { paymentsConfigured, usesFakePayments } from '@/server/payments/config';
+import { mailConfigured } from '@/server/mail/transport';
 import { invitations, quotes } from '@/db/schema';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
@@ -60,7 +60,7 @@ describe('the auth secret', () => {
     vi.stubEnv('BAYWRIGHT_DEMO', '');
     vi.stubEnv('BAYWRIGHT_LOCAL_FAKES', '');
     vi.resetModules();
-    const { authSecret } = await import('@/lib/auth/secret');
+    const { authSecret } = await import('@/server/auth/secret');
     expect(() => authSecret()).toThrow(/AUTH_SECRET is not set.*openssl rand/);
 
     const { setLogSink } = await import('@/lib/log');
@@ -86,7 +86,7 @@ describe('the auth secret', () => {
     vi.stubEnv('AUTH_SECRET', '');
     vi.stubEnv('BAYWRIGHT_DEMO', '1');
     vi.resetModules();
-    const { authSecret } = await import('@/lib/auth/secret');
+    const { authSecret } = await import('@/server/auth/secret');
     expect(authSecret().length).toBeGreaterThanOrEqual(32);
   });
 });
@@ -113,7 +113,7 @@ describe('the API of a production server without payments or mail', () => {
 
   it('answers 503 "not set up" to the client paying a deposit, and opens no payment', async () => {
     await db.insert(quotes).values({
-      layoutId: w.clientLayoutId, studioId: w.owner.studioId, clientId: w.client.id, layoutVersion: 1, currency: 'GBP',
+      layoutId: w.clientLayoutId, studioId: w.owner.studioId, number: 1, clientId: w.client.id, layoutVersion: 1, currency: 'GBP',
       parts: { lines: [] } as never, grossMinor: 500_000, depositPct: 20, depositMinor: 100_000, sentByName: 'Maren',
     });
     production();

@@ -15,7 +15,7 @@ import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call, type CallOptions } from '../helpers/http';
 import { buildWorld } from '../helpers/world';
-import { PEER_HEADER } from '@/lib/auth/address';
+import { PEER_HEADER } from '@/server/auth/address';
 import { ROWS, type Fixture } from './access-rows';
 import { captureLog, KNOWN_TEST_PASSWORDS, leakedSecrets, storedHashes, type LogCapture } from '../helpers/log-capture';
 import { DUMMY_HASH } from '@/lib/auth/password';

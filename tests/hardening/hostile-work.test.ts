@@ -24,7 +24,7 @@ import * as compareRoute from '@/app/api/layouts/[id]/revisions/compare/route';
 import * as revisionsRoute from '@/app/api/layouts/[id]/revisions/route';
 import * as linksRoute from '@/app/api/layouts/[id]/links/route';
 import * as viewerChecks from '@/app/api/v/[token]/checks/route';
-import { sheetRequestFor } from '@/app/api/layouts/[id]/sheet/sheet-request';
+import { sheetRequestFor } from '@/server/sheet/sheet-request';
 import { SheetSvg } from '@/components/sheet/SheetSvg';
 import { loadActor } from '@/db/actor';
 import { layouts } from '@/db/schema';

@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { users } from '@/db/schema';
 import type { Db } from '@/db/client';
-import { handle } from '@/lib/api/respond';
+import { handle } from '@/server/api/respond';
 import { hashPassword } from '@/lib/auth/password';
 import { log, redact, redactText } from '@/lib/log';
 import { useFreshDb } from '../helpers/db';

@@ -3,7 +3,7 @@
  * Auth.js session cookie minted by Auth.js's own encoder.
  */
 import { encode } from 'next-auth/jwt';
-import { authSecret, sessionCookieName, SESSION_MAX_AGE_S } from '../../lib/auth/secret';
+import { authSecret, sessionCookieName, SESSION_MAX_AGE_S } from '../../server/auth/secret';
 
 export interface SessionUser {
   id: string;

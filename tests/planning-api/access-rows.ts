@@ -29,8 +29,8 @@ let fakeStarted: Promise<void> | null = null;
 /** One fake payment API for the whole test process; the app's config is pointed at it. */
 function ensureFakePayments(): Promise<void> {
   fakeStarted ??= (async () => {
-    const { startFakeStripe } = await import('@/lib/fakes/stripe');
-    const { setFakeStripeAddress } = await import('@/lib/payments/config');
+    const { startFakeStripe } = await import('@/dev/fakes/stripe');
+    const { setFakeStripeAddress } = await import('@/server/payments/config');
     const fake = await startFakeStripe({ port: 0 });
     setFakeStripeAddress({ host: '127.0.0.1', port: fake.port });
   })();
@@ -71,7 +71,7 @@ export const PLANNING_ROWS: Row[] = [
     route: '/api/payments/webhook', method: 'POST',
     request: async () => {
       process.env.STRIPE_WEBHOOK_SECRET ??= WEBHOOK_SECRET;
-      const { signatureHeader } = await import('@/lib/fakes/stripe');
+      const { signatureHeader } = await import('@/dev/fakes/stripe');
       const body = JSON.stringify({ id: `evt_test_matrix_${seq++}`, object: 'event', type: 'customer.created', data: { object: {} } });
       return { body, headers: { 'content-type': 'application/json', 'stripe-signature': signatureHeader(body, process.env.STRIPE_WEBHOOK_SECRET!) } };
     },

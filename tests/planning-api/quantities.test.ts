@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { field, parseMassKg, parseMetres, parseWithUnit, KG_PER_LB } from '@/components/planning/quantities';
 import { parseMoneyMinor, formatMoney, quantityText } from '@/components/planning/money';
-import { returnOrigin } from '@/lib/payments/return-origin';
+import { returnOrigin } from '@/server/payments/return-origin';
 
 describe('parseMassKg', () => {
   it.each([

@@ -6,7 +6,7 @@ import * as partsRoute from '@/app/api/layouts/[id]/quote/parts/route';
 import * as prices from '@/app/api/studio/prices/route';
 import { layouts, quotes } from '@/db/schema';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
@@ -135,8 +135,12 @@ describe('POST /api/layouts/:id/quote', () => {
     expect(q.sentByName).toBe('Ivo Brandt');
     expect(q.note).toBe('Fitting from March.');
     expect(q.canPay).toBe(false);
+    // People name a quote by the studio's running number, never by its id: the studio's first quote.
+    expect(q.reference).toBe('Q-0001');
     expect(res.body.mail).toBe('sent');
     const mails = await mailFor(db, 'priya@client.test');
+    expect(mails.some((m) => (m.parsed.text ?? '').includes('quote Q-0001 for'))).toBe(true);
+    expect(mails.some((m) => (m.parsed.text ?? '').includes(q.id.slice(0, 8).toUpperCase()))).toBe(false);
     expect(mails.some((m) => /Your quote for .* is ready/.test(m.parsed.subject ?? '') && (m.parsed.text ?? '').includes('Fitting from March.'))).toBe(true);
     // …and the caution that licensed fitters certify the gas, 230 V, heater and belt work.
     expect(mails.some((m) => /Your quote for .* is ready/.test(m.parsed.subject ?? '') && /qualified, licensed fitters to local codes/.test(m.parsed.text ?? ''))).toBe(true);
@@ -163,6 +167,7 @@ describe('POST /api/layouts/:id/quote', () => {
     expect(rows.filter((r) => r.status === 'sent')).toHaveLength(1);
     const current = await call(quoteRoute.GET, { as: w.client, params: { id: w.clientLayoutId } });
     expect(current.body.quote.depositPct).toBe(40);
+    expect(current.body.quote.reference).toBe('Q-0002');
   });
 
   it('lets only one of two simultaneous quotes for a layout be open', async () => {
@@ -170,6 +175,11 @@ describe('POST /api/layouts/:id/quote', () => {
     expect([a.status, b.status]).toContain(201);
     for (const r of [a, b]) expect([201, 409]).toContain(r.status);
     expect((await quoteRows(w.clientLayoutId)).filter((r) => r.status === 'sent')).toHaveLength(1);
+    // Q-0001 and Q-0002 came before; the two sends here are numbered one after the other (or, when one is
+    // refused, it takes no number): no number is skipped or repeated.
+    const stored = (await quoteRows(w.clientLayoutId)).map((r) => r.number).sort((x, y) => x - y);
+    const sent = [a, b].filter((r) => r.status === 201).length;
+    expect(stored).toEqual(sent === 2 ? [1, 2, 3, 4] : [1, 2, 3]);
   });
 });
 

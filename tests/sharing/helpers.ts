@@ -7,7 +7,7 @@ import { desc } from 'drizzle-orm';
 import { simpleParser, type ParsedMail } from 'mailparser';
 import type { Db } from '../../db/client';
 import { outboxMail } from '../../db/schema';
-import { startFakeSmtp, type FakeSmtp } from '../../lib/fakes/smtp/server';
+import { startFakeSmtp, type FakeSmtp } from '../../dev/fakes/smtp/server';
 import type { World } from '../helpers/world';
 import type { SessionUser } from '../helpers/http';
 

@@ -15,7 +15,7 @@ import { viewInvitation } from '@/db/sharing/invitations';
 import { listClients } from '@/db/sharing/clients';
 import { authenticate } from '@/db/accounts';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';
@@ -35,7 +35,7 @@ beforeAll(async () => {
   stockLayoutId = stock.id;
 });
 afterAll(() => smtp.close());
-// Each case starts with full mail budgets (lib/mail/budget.ts has its own tests).
+// Each case starts with full mail budgets (server/mail/budget.ts has its own tests).
 beforeEach(() => clearAllThrottles());
 
 const invitationCount = async () => (await db.select({ n: count() }).from(invitations))[0].n;

@@ -1,9 +1,9 @@
 // The mail words: user text is escaped in HTML, subjects stay on one line, only http(s) links.
 import { describe, expect, it } from 'vitest';
-import { compose, escapeHtml, oneLine } from '@/lib/mail/compose';
-import { markupMail, decisionMail, invitationMail, revisionIssuedMail, SIGN_OFF_CAUTION } from '@/lib/mail/messages';
-import { publicUrl, PublicUrlMissing } from '@/lib/mail/public-url';
-import { outboxEnabled } from '@/lib/mail/outbox-mode';
+import { compose, escapeHtml, oneLine } from '@/server/mail/compose';
+import { markupMail, decisionMail, invitationMail, revisionIssuedMail, SIGN_OFF_CAUTION } from '@/server/mail/messages';
+import { publicUrl, PublicUrlMissing } from '@/server/mail/public-url';
+import { outboxEnabled } from '@/server/mail/outbox-mode';
 
 describe('compose', () => {
   it('escapes every piece of user text in the HTML body', () => {

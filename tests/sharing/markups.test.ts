@@ -9,7 +9,7 @@ import * as layoutList from '@/app/api/layouts/route';
 import { comments } from '@/db/schema';
 import { openThreadCounts } from '@/db/sharing/comments';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

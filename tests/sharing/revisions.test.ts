@@ -10,7 +10,7 @@ import * as layoutRoute from '@/app/api/layouts/[id]/route';
 import * as layoutList from '@/app/api/layouts/route';
 import { layouts, revisionDecisions, revisions } from '@/db/schema';
 import type { Db } from '@/db/client';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

@@ -16,7 +16,7 @@ import { viewerLinks } from '@/db/schema';
 import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import type { Db } from '@/db/client';
 import type { LayoutDoc } from '@/lib/layout/schema';
-import type { FakeSmtp } from '@/lib/fakes/smtp/server';
+import type { FakeSmtp } from '@/dev/fakes/smtp/server';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
 import { buildWorld, type World } from '../helpers/world';

@@ -46,7 +46,7 @@ describe('fitting the bay to the paper', () => {
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.message).toMatch(/does not fit on A4 landscape at 1:10/);
-    expect(r.message).toMatch(/3100 × 1770 mm/);
+    expect(r.message).toMatch(/3100 × 1800 mm/);
     expect(r.message).toMatch(/Choose 1:20 on A4/);
     expect(r.suggestion).toEqual({ paper: 'a4', scale: 20 });
   });

@@ -9,7 +9,7 @@ import { PDFDocument, PDFName, PDFDict, PDFRawStream, PDFRef, decodePDFRawStream
 import { composeSheet, renderPdf, SHEET_FONT_FILES } from '@/lib/sheet';
 import { textWidth, printable } from '@/lib/sheet/typography';
 import { PT_PER_MM } from '@/lib/sheet/paper';
-import { woffToSfnt } from '@/lib/api/woff';
+import { woffToSfnt } from '@/server/api/woff';
 import { starterLayout } from '@/lib/layout';
 import { fontsReady } from './sheet-fonts';
 import { readPdf } from './read-pdf';

@@ -6,7 +6,7 @@ import { starterLayout } from '@/lib/layout';
 import { horizontalOfLength, readPdf, type PdfPageRead } from './read-pdf';
 import { fontsReady } from './sheet-fonts';
 
-const doc = starterLayout('starter-l-lounge')!; // bay 3100 × 1770 × 1950 mm
+const doc = starterLayout('starter-l-lounge')!; // bay 3100 × 1800 × 2000 mm
 const details = { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: 'Nair — L2H2 weekender', revision: 'C', date: '2025-12-02' };
 
 async function pdfOf(over: Partial<SheetRequest>) {
@@ -55,8 +55,8 @@ describe('A4 at 1:20', () => {
     expect(Math.abs(line.x2 - line.x1)).toBeCloseTo(mmToPt(155), 1);
   });
 
-  it('draws the 1770 mm bay width as a vertical line of 88.5 mm = 250.87 pt', () => {
-    const vertical = read.pages[0].segments.filter((s) => Math.abs(s.x1 - s.x2) < 0.01 && Math.abs(Math.abs(s.y2 - s.y1) - mmToPt(88.5)) < 0.05);
+  it('draws the 1800 mm bay width as a vertical line of 90 mm = 255.12 pt', () => {
+    const vertical = read.pages[0].segments.filter((s) => Math.abs(s.x1 - s.x2) < 0.01 && Math.abs(Math.abs(s.y2 - s.y1) - mmToPt(90)) < 0.05);
     expect(vertical.length).toBeGreaterThan(0);
   });
 

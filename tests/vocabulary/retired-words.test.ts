@@ -1,5 +1,5 @@
 // The words Baywright retired stay retired. Reads the text people see — string literals, template
-// text and JSX text of app/, components/, lib/mail, lib/sheet and the messages of lib/checks and
+// text and JSX text of app/, components/, server/mail, lib/sheet and the messages of lib/checks and
 // lib/planning — and fails on any retired word (DESIGN.md's "Retired" paragraph, issue 13's list,
 // the glossary in DEVELOPERS.md). Class names, test ids, imports, type literals, object keys and
 // comparisons are data, not words, and are skipped; `pass`/`warn`/`fail` in lower case are data ids.
@@ -9,7 +9,7 @@ import ts from 'typescript';
 import { describe, expect, it } from 'vitest';
 
 const ROOT = path.join(__dirname, '..', '..');
-const SCOPES = ['app', 'components', 'lib/mail', 'lib/sheet', 'lib/checks', 'lib/planning'];
+const SCOPES = ['app', 'components', 'server/mail', 'lib/sheet', 'lib/checks', 'lib/planning'];
 /** Attributes whose values are for code, not for people. */
 const CODE_ATTRIBUTES = /^(className|key|id|type|role|href|src|name|htmlFor|value|method|action|target|rel|autoComplete|inputMode|accept|form|lang|dir|data-.*|sizes|pattern|step|encType|as|fill|stroke|fontFamily|textAnchor|strokeDasharray|transform|d|viewBox|points|preserveAspectRatio)$/;
 

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { isWorkshop } from '@/db/access';
 import { listClients, unsharedLayouts } from '@/db/sharing/clients';
 import { ClientsTable } from '@/components/sharing/ClientsTable';

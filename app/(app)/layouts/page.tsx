@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { isWorkshop } from '@/db/access';
 import { LayoutsTable } from '@/components/layouts/LayoutsTable';
 

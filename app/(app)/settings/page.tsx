@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { getStudio } from '@/db/studios';
 import { MembersPanel } from '@/components/settings/MembersPanel';
 import { StudioPanel } from '@/components/settings/StudioPanel';

@@ -1,6 +1,6 @@
-import { handle, HttpError, invalid, json, NOT_JSON, readJsonText, requireActor } from '@/lib/api/respond';
-import { RateLimiter } from '@/lib/api/rate-limit';
-import { clientAddress } from '@/lib/auth/address';
+import { handle, HttpError, invalid, json, NOT_JSON, readJsonText, requireActor } from '@/server/api/respond';
+import { RateLimiter } from '@/server/api/rate-limit';
+import { clientAddress } from '@/server/auth/address';
 import { runJob } from '@/lib/workers/pool';
 import { studioCheckDefaults } from '@/db/studios';
 
@@ -9,7 +9,7 @@ export const dynamic = 'force-dynamic';
 /** Live checks while editing: a burst of 20, then 10 a second per user (CHECKS_RATE_PER_SECOND to change; the load benchmark raises it). */
 const perSecond = Number(process.env.CHECKS_RATE_PER_SECOND ?? 10);
 const limiter = new RateLimiter(Math.max(20, perSecond * 2), perSecond);
-/** Per client address as well (lib/auth/address), so many accounts behind one address share a bound: five users' worth. */
+/** Per client address as well (server/auth/address), so many accounts behind one address share a bound: five users' worth. */
 const addressLimiter = new RateLimiter(Math.max(100, perSecond * 10), perSecond * 5);
 
 /**

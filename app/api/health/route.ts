@@ -4,7 +4,7 @@
  */
 import { sql } from 'drizzle-orm';
 import { getDb } from '@/db/client';
-import { json, problem } from '@/lib/api/respond';
+import { json, problem } from '@/server/api/respond';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { listInvitations } from '@/db/sharing/invitations';
 import { requireWorkshop } from '@/db/access';
-import { inviteAndMail } from '@/lib/mail/invite';
+import { inviteAndMail } from '@/server/mail/invite';
 import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';

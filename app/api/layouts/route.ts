@@ -1,5 +1,5 @@
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
-import { createLayoutBody, docForNewLayout } from '@/lib/api/layout-bodies';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
+import { createLayoutBody, docForNewLayout } from '@/server/api/layout-bodies';
 import { z } from 'zod';
 import { createLayout, listLayouts } from '@/db/layouts';
 

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { handle, HttpError, json, parseWith, readJson } from '@/lib/api/respond';
+import { handle, HttpError, json, parseWith, readJson } from '@/server/api/respond';
 import { reserve, throttleKey } from '@/db/throttle';
-import { clientAddress } from '@/lib/auth/address';
-import { startPasswordResetMail } from '@/lib/mail/password-reset';
+import { clientAddress } from '@/server/auth/address';
+import { startPasswordResetMail } from '@/server/mail/password-reset';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { handle, HttpError, json, parseWith, readJson } from '@/lib/api/respond';
+import { handle, HttpError, json, parseWith, readJson } from '@/server/api/respond';
 import { signUp } from '@/db/accounts';
-import { newPasswordSchema } from '@/lib/auth/password-policy';
-import { RateLimiter } from '@/lib/api/rate-limit';
-import { clientAddress } from '@/lib/auth/address';
+import { newPasswordSchema } from '@/server/auth/password-policy';
+import { RateLimiter } from '@/server/api/rate-limit';
+import { clientAddress } from '@/server/auth/address';
 
 export const dynamic = 'force-dynamic';
 

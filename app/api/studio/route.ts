@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { getStudio, updateStudio } from '@/db/studios';
 import { settingsSchema } from '@/lib/layout/schema';
 import { LENGTH_UNITS } from '@/lib/layout/units';

@@ -4,9 +4,9 @@
  * answers for unknown, revoked and expired links. Must never accept a session or a write.
  */
 import 'server-only';
-import { HttpError } from '@/lib/api/respond';
-import { RateLimiter } from '@/lib/api/rate-limit';
-import { clientAddress } from '@/lib/auth/address';
+import { HttpError } from '@/server/api/respond';
+import { RateLimiter } from '@/server/api/rate-limit';
+import { clientAddress } from '@/server/auth/address';
 import type { ResolvedLink } from '@/db/sharing/viewer-links';
 
 export const VIEWER_HEADERS = {

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { viewInvitation } from '@/db/sharing/invitations';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { AuthCard } from '@/components/auth/AuthCard';
 import { AcceptInvitationForm } from '@/components/sharing/AcceptInvitationForm';
 import { JoinWithAccount } from '@/components/sharing/JoinWithAccount';

@@ -24,7 +24,7 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
     <article className="panel space-y-4 p-5" data-testid="quote">
       <header className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <h2 className="text-lg font-semibold">Quote {quote.id.slice(0, 8).toUpperCase()}</h2>
+          <h2 className="text-lg font-semibold">Quote {quote.reference}</h2>
           <p className="text-sm text-ink-soft">
             {quote.studioName} · sent by {quote.sentByName} on {formatDateTime(quote.sentAt)} · priced from layout version <span className="font-mono">{quote.layoutVersion}</span>
             {quote.clientName ? ` · for ${quote.clientName}` : ''}

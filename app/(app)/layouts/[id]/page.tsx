@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';

@@ -2,9 +2,9 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
 import { ArrowLeft, Download } from 'lucide-react';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { getOutboxMail } from '@/db/sharing/outbox';
-import { outboxEnabled } from '@/lib/mail/outbox-mode';
+import { outboxEnabled } from '@/server/mail/outbox-mode';
 import { NotFoundError } from '@/db/errors';
 import { formatDateTime } from '@/lib/format';
 

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { changePassword } from '@/db/accounts';
-import { newPasswordSchema } from '@/lib/auth/password-policy';
-import { clientAddress } from '@/lib/auth/address';
+import { newPasswordSchema } from '@/server/auth/password-policy';
+import { clientAddress } from '@/server/auth/address';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,4 +1,4 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { revokeInvitation } from '@/db/sharing/invitations';
 
 export const dynamic = 'force-dynamic';

@@ -1,10 +1,10 @@
 import { z } from 'zod';
-import { handle, HttpError, json, parseWith, readJson } from '@/lib/api/respond';
+import { handle, HttpError, json, parseWith, readJson } from '@/server/api/respond';
 import { acceptInvitation } from '@/db/sharing/invitations';
-import { newPasswordSchema } from '@/lib/auth/password-policy';
-import { RateLimiter } from '@/lib/api/rate-limit';
-import { clientAddress } from '@/lib/auth/address';
-import { actorFromRequest } from '@/lib/auth/session';
+import { newPasswordSchema } from '@/server/auth/password-policy';
+import { RateLimiter } from '@/server/api/rate-limit';
+import { clientAddress } from '@/server/auth/address';
+import { actorFromRequest } from '@/server/auth/session';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,5 +1,5 @@
-import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
-import { baseVersionFrom, saveLayoutBody } from '@/lib/api/layout-bodies';
+import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/server/api/respond';
+import { baseVersionFrom, saveLayoutBody } from '@/server/api/layout-bodies';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { deleteLayout, getLayoutJson, saveLayout } from '@/db/layouts';
 import { loadLayoutFor } from '@/db/access';

@@ -1,6 +1,6 @@
-import { handle, HttpError, json } from '@/lib/api/respond';
-import { takeWebhook, WebhookRefused } from '@/lib/payments/deposit';
-import { asPaymentHttpError } from '@/lib/payments/errors';
+import { handle, HttpError, json } from '@/server/api/respond';
+import { takeWebhook, WebhookRefused } from '@/server/payments/deposit';
+import { asPaymentHttpError } from '@/server/payments/errors';
 
 export const dynamic = 'force-dynamic';
 

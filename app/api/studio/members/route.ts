@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { listMembers, requireOwner } from '@/db/studios';
-import { inviteAndMail } from '@/lib/mail/invite';
+import { inviteAndMail } from '@/server/mail/invite';
 
 export const dynamic = 'force-dynamic';
 

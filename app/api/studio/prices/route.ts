@@ -1,4 +1,4 @@
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { priceListBody } from '@/lib/api/planning-bodies';
 import { getPriceList, requirePriceListOwner, savePriceList } from '@/db/prices';
 

@@ -1,4 +1,4 @@
-import { handle, requireActor } from '@/lib/api/respond';
+import { handle, requireActor } from '@/server/api/respond';
 import { deleteUpload, openUpload } from '@/db/uploads';
 import { contentDisposition } from '@/lib/uploads/file-name';
 import { isImage } from '@/lib/uploads/file-type';

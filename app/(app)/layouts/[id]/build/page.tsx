@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
 import { ArrowLeft, Receipt } from 'lucide-react';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';

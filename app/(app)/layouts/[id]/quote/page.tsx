@@ -3,15 +3,15 @@ import Link from 'next/link';
 import { headers } from 'next/headers';
 import { notFound, redirect } from 'next/navigation';
 import { ArrowLeft, CircleCheck, Info, TriangleAlert } from 'lucide-react';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getCurrentQuote } from '@/db/quotes';
 import { NotFoundError } from '@/db/errors';
-import { checkReturnedSession } from '@/lib/payments/deposit';
+import { checkReturnedSession } from '@/server/payments/deposit';
 import { QuoteView } from '@/components/planning/quote/QuoteView';
 import { PayDepositButton } from '@/components/planning/quote/PayDepositButton';
 import { QUOTE_CAUTION } from '@/lib/layout/cautions';
-import { paymentsConfigured } from '@/lib/payments/config';
+import { paymentsConfigured } from '@/server/payments/config';
 
 export const metadata: Metadata = { title: 'Quote' };
 

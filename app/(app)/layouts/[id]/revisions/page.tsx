@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
 import { ArrowLeft } from 'lucide-react';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { loadLayoutFor } from '@/db/access';
 import { layoutStates, listRevisions } from '@/db/sharing/revisions';
 import { NotFoundError } from '@/db/errors';

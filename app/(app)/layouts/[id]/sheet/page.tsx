@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound, redirect } from 'next/navigation';
-import { currentActor } from '@/lib/auth/session';
+import { currentActor } from '@/server/auth/session';
 import { NotFoundError } from '@/db/errors';
 import { PAPER_MM } from '@/lib/sheet';
 import { runJob, WorkPoolBusyError } from '@/lib/workers/pool';
-import { sheetQuerySchema, sheetRequestFor } from '@/app/api/layouts/[id]/sheet/sheet-request';
+import { sheetQuerySchema, sheetRequestFor } from '@/server/sheet/sheet-request';
 import { SheetSvg } from '@/components/sheet/SheetSvg';
 import { SheetControls } from '@/components/sheet/SheetControls';
 import { UploadsPanel } from '@/components/uploads/UploadsPanel';

@@ -1,6 +1,6 @@
-import { handle, HttpError, requireActor } from '@/lib/api/respond';
+import { handle, HttpError, requireActor } from '@/server/api/respond';
 import { getOutboxRaw } from '@/db/sharing/outbox';
-import { outboxEnabled } from '@/lib/mail/outbox-mode';
+import { outboxEnabled } from '@/server/mail/outbox-mode';
 
 export const dynamic = 'force-dynamic';
 

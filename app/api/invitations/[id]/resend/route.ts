@@ -1,7 +1,7 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { getInvitation, renewInvitation } from '@/db/sharing/invitations';
-import { requireMailBudget } from '@/lib/mail/budget';
-import { requireMail, sendInvitation } from '@/lib/mail/notify';
+import { requireMailBudget } from '@/server/mail/budget';
+import { requireMail, sendInvitation } from '@/server/mail/notify';
 
 export const dynamic = 'force-dynamic';
 

@@ -3,7 +3,7 @@
  * readable), DELETE restores it. Staff of the layout's studio only; the layout's client gets 403,
  * anyone else 404.
  */
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { setLayoutArchived } from '@/db/layouts';
 
 export const dynamic = 'force-dynamic';

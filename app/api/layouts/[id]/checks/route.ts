@@ -1,4 +1,4 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { getLayout } from '@/db/layouts';
 import { runJob } from '@/lib/workers/pool';
 import { studioCheckDefaults } from '@/db/studios';

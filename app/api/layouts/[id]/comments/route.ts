@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { addComment, COMMENT_MAX, listThreads } from '@/db/sharing/comments';
 import { loadLayoutFor } from '@/db/access';
 import { arrangementSchema } from '@/lib/layout/schema';
-import { notifyMarkup } from '@/lib/mail/notify';
+import { notifyMarkup } from '@/server/mail/notify';
 import { idField } from '@/db/ids';
 
 export const dynamic = 'force-dynamic';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { createViewerLink, LABEL_MAX, listViewerLinks, MAX_LINK_DAYS, viewerPath } from '@/db/sharing/viewer-links';
 import { loadLayoutFor } from '@/db/access';
 import { idField } from '@/db/ids';

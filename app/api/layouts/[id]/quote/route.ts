@@ -1,8 +1,8 @@
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { sendQuoteBody } from '@/lib/api/planning-bodies';
 import { getCurrentQuote, sendQuote } from '@/db/quotes';
 import { loadLayoutFor } from '@/db/access';
-import { mailQuoteToClient } from '@/lib/payments/deposit-mail';
+import { mailQuoteToClient } from '@/server/payments/deposit-mail';
 
 export const dynamic = 'force-dynamic';
 

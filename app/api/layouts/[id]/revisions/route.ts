@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { issueRevision, listRevisions, NOTE_MAX } from '@/db/sharing/revisions';
 import { loadLayoutFor } from '@/db/access';
-import { notifyRevisionIssued } from '@/lib/mail/notify';
+import { notifyRevisionIssued } from '@/server/mail/notify';
 
 export const dynamic = 'force-dynamic';
 

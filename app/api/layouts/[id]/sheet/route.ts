@@ -1,11 +1,11 @@
-import { handle, HttpError, parseWith, requireActor } from '@/lib/api/respond';
-import { RateLimiter } from '@/lib/api/rate-limit';
-import { sheetFonts } from '@/lib/api/sheet-fonts';
-import { clientAddress } from '@/lib/auth/address';
+import { handle, HttpError, parseWith, requireActor } from '@/server/api/respond';
+import { RateLimiter } from '@/server/api/rate-limit';
+import { sheetFonts } from '@/server/api/sheet-fonts';
+import { clientAddress } from '@/server/auth/address';
 import { runJob } from '@/lib/workers/pool';
 import { contentDisposition, cleanFileName } from '@/lib/uploads/file-name';
 import { loadLayoutFor } from '@/db/access';
-import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from './sheet-request';
+import { queryOf, sheetFileName, sheetQuerySchema, sheetRequestFor } from '../../../../../server/sheet/sheet-request';
 
 export const dynamic = 'force-dynamic';
 
@@ -17,7 +17,7 @@ type Ctx = { params: Promise<{ id: string }> };
  * 3 s per user (common practice, no source) — plenty for printing, not enough to tie the server up.
  */
 export const sheetLimiter = new RateLimiter(10, 1 / 3);
-/** Per client address too (lib/auth/address): three users' worth. */
+/** Per client address too (server/auth/address): three users' worth. */
 export const sheetAddressLimiter = new RateLimiter(30, 1);
 
 /**

@@ -1,4 +1,4 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { addUpload, listUploads } from '@/db/uploads';
 
 export const dynamic = 'force-dynamic';

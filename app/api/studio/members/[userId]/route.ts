@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { changeRole, removeMember } from '@/db/studios';
 
 export const dynamic = 'force-dynamic';

@@ -1,4 +1,4 @@
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { checkCanPlace, setTracing } from '@/db/uploads';
 import { tracingPlacementSchema } from '@/lib/tracing/calibration';
 

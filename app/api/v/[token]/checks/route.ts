@@ -1,4 +1,4 @@
-import { handle, json } from '@/lib/api/respond';
+import { handle, json } from '@/server/api/respond';
 import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import { runJob } from '@/lib/workers/pool';
 import { refuseUnusable, takeViewerToken, withViewerHeaders } from '../../viewer-guard';

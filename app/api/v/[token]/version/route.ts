@@ -1,4 +1,4 @@
-import { handle, json } from '@/lib/api/respond';
+import { handle, json } from '@/server/api/respond';
 import { viewerLinkVersion } from '@/db/sharing/viewer-links';
 import { refuseUnusable, takeViewerToken, withViewerHeaders } from '../../viewer-guard';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { COMMENT_MAX, deleteComment, editComment, setSettled } from '@/db/sharing/comments';
 import { loadLayoutFor } from '@/db/access';
 

@@ -1,4 +1,4 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
+import { handle, json, requireActor } from '@/server/api/respond';
 import { revokeViewerLink } from '@/db/sharing/viewer-links';
 
 export const dynamic = 'force-dynamic';

@@ -1,6 +1,6 @@
-import { handle, json, requireActor } from '@/lib/api/respond';
-import { openDepositCheckout } from '@/lib/payments/deposit';
-import { asPaymentHttpError } from '@/lib/payments/errors';
+import { handle, json, requireActor } from '@/server/api/respond';
+import { openDepositCheckout } from '@/server/payments/deposit';
+import { asPaymentHttpError } from '@/server/payments/errors';
 
 export const dynamic = 'force-dynamic';
 

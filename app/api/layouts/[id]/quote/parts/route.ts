@@ -1,4 +1,4 @@
-import { handle, HttpError, json, parseWith, requireActor } from '@/lib/api/respond';
+import { handle, HttpError, json, parseWith, requireActor } from '@/server/api/respond';
 import { cutOptionsQuery } from '@/lib/api/planning-bodies';
 import { previewPartsList } from '@/db/quotes';
 import { partsListCsv } from '@/lib/planning/parts-csv';

@@ -1,4 +1,4 @@
-import { handle, HttpError, json, requireActor } from '@/lib/api/respond';
+import { handle, HttpError, json, requireActor } from '@/server/api/respond';
 import { compareRevisions } from '@/db/sharing/compare';
 
 export const dynamic = 'force-dynamic';

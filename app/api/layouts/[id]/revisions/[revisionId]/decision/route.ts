@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { handle, json, parseWith, readJson, requireActor } from '@/lib/api/respond';
+import { handle, json, parseWith, readJson, requireActor } from '@/server/api/respond';
 import { decideRevision, getRevision, MESSAGE_MAX } from '@/db/sharing/revisions';
 import { loadLayoutFor } from '@/db/access';
 import { ForbiddenError } from '@/db/errors';
-import { notifyDecision } from '@/lib/mail/notify';
+import { notifyDecision } from '@/server/mail/notify';
 
 export const dynamic = 'force-dynamic';
 
