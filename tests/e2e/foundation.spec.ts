@@ -4,7 +4,7 @@ import { keepScreenshot, signIn } from './helpers';
 
 test('the demo designer creates a layout from a template and opens it from the table', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
-  await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender' })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true })).toBeVisible();
   await keepScreenshot(page, 'layouts-table');
 
   await page.getByRole('link', { name: 'New layout' }).click();
@@ -19,7 +19,7 @@ test('the demo designer creates a layout from a template and opens it from the t
   const row = page.getByRole('row', { name: /Holt — L3H3 family van/ });
   await expect(row).toContainText('L3H3');
   await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender' })).toHaveCount(0);
-  await row.getByRole('link', { name: 'Holt — L3H3 family van' }).click();
+  await row.getByRole('link', { name: 'Holt — L3H3 family van', exact: true }).click();
   await expect(page).toHaveURL(/\/layouts\/[0-9a-f-]{36}$/);
 });
 
@@ -34,7 +34,7 @@ test('a wrong password is refused with a clear message', async ({ page }) => {
 
 test('a client sees only the layout shared with them and cannot create one', async ({ page }) => {
   await signIn(page, 'priya@client.test');
-  await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender' })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true })).toBeVisible();
   await expect(page.getByRole('link', { name: 'Adeyemi — L3H2 touring' })).toHaveCount(0);
   await expect(page.getByRole('link', { name: 'New layout' })).toHaveCount(0);
   await keepScreenshot(page, 'client-layouts');

@@ -55,6 +55,9 @@ test('every screen, in the studio’s words', async ({ browser }) => {
   for (const tab of ['weight', 'power', 'water', 'gas', 'heat', 'parts', 'cut', 'quote']) {
     await designer.locator(`[role=tab][data-tab=${tab}]`).click();
     await expect(designer.locator(`[role=tab][data-tab=${tab}]`)).toHaveAttribute('aria-selected', 'true');
+    // Each tab's panel loads on demand: photograph it once it has drawn, not its loading line.
+    const panel = designer.getByTestId('build-planner').getByRole('tabpanel');
+    await expect(panel).not.toContainText('Loading…', { timeout: 30_000 });
     await keepScreenshot(designer, `screen-build-${tab}`);
   }
   const planText = await designer.getByTestId('build-planner').innerText();

@@ -8,7 +8,7 @@ import { pngBytes } from '../uploads/fixtures';
 import { readPdf } from '../sheet/read-pdf';
 
 async function openSheet(page: Page, layout = 'Nair — L2H2 weekender') {
-  const href = await page.getByRole('link', { name: layout }).first().getAttribute('href');
+  const href = await page.getByRole('link', { name: layout, exact: true }).first().getAttribute('href');
   expect(href).toMatch(/^\/layouts\/[0-9a-f-]{36}$/);
   await page.goto(`${href}/sheet`);
   await expect(page.getByRole('heading', { name: 'Plan sheet' })).toBeVisible();
