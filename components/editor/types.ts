@@ -26,8 +26,10 @@ export interface EditorExtensions {
   planOverlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
   /** Extra Konva layers drawn under the plan (tracing photos), never listening for events. */
   planUnderlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
-  /** Extra controls at the right end of the toolbar. */
+  /** Extra controls at the right end of the toolbar (behind "More" on a tablet). */
   toolbarExtra?: ReactNode;
+  /** A panel of the page's own beside Details (Mark-ups): docked on a desktop, a drawer on a tablet; its toggle sits in the toolbar. */
+  sidePanel?: { title: string; count?: number; countLabel?: string; content: ReactNode };
   /** Where findings come from instead of POST /api/checks (a viewer link has no session). */
   fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>;
   /** A newer stored copy to show while read-only (live viewer links): replaces the document when its version moves on. */

@@ -10,7 +10,7 @@ import Link from 'next/link';
 import dynamic from 'next/dynamic';
 import { useCallback, useEffect, useMemo, useRef, useState, type ComponentType, type MouseEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { Hexagon, History, Share2 } from 'lucide-react';
+import { History, Share2 } from 'lucide-react';
 import { EditorLoader } from '@/components/editor/EditorLoader';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { EditorProps } from '@/components/editor/types';
@@ -26,6 +26,8 @@ import { BuildPlanLink } from '@/components/planning/BuildPlanLink';
 import { markupAt, planPointAt, type MarkupView } from './markupGeometry';
 import type { MarkupLayerProps } from './MarkupLayer';
 import { useStudioTools } from '@/components/uploads/useStudioTools';
+import { setDrawer } from '@/components/ui/drawers';
+import { useScreenClass } from '@/components/ui/screenClass';
 
 /** New mark-ups from the other side show up within this long (common practice, no source). */
 const MARKUPS_POLL_MS = 10_000;
@@ -44,7 +46,12 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
     refetchInterval: MARKUPS_POLL_MS,
   });
   const threads = useMemo(() => threadsQuery.data?.threads ?? [], [threadsQuery.data]);
-  const [open, setOpen] = useState(true);
+  // The Mark-ups list opens on demand (or from a mail's link to one mark-up), like every other drawer.
+  const floating = useScreenClass() !== 'desktop';
+  const setOpen = useCallback((next: boolean) => setDrawer(next ? 'markups' : null), []);
+  useEffect(() => {
+    if (focusMarkup) setDrawer('markups');
+  }, [focusMarkup]);
   const [placing, setPlacing] = useState(false);
   const [pending, setPending] = useState<PendingMarkup | null>(null);
   const [activeId, setActiveId] = useState<string | null>(focusMarkup ?? null);
@@ -90,10 +97,7 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
   const toolbarExtra = (
     <>
     {studioTools.toolbar}
-    <div className="flex items-center gap-1" role="group" aria-label="Working with the client">
-      <button type="button" className={`btn-quiet px-2 py-1 ${open ? 'border-ink' : ''}`} aria-pressed={open} onClick={() => setOpen((o) => !o)}>
-        <Hexagon size={14} aria-hidden="true" /> Mark-ups <span className="font-mono text-xs" aria-label={`${openCount} open`}>{openCount}</span>
-      </button>
+    <div className="flex flex-wrap items-center gap-1" role="group" aria-label="Working with the client">
       <Link href={`/layouts/${layoutId}/revisions`} className="btn-quiet px-2 py-1"><History size={14} aria-hidden="true" /> Revisions</Link>
       <BuildPlanLink layoutId={layoutId} />
       {canEdit && (
@@ -106,12 +110,7 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
   const planOverlay = ({ viewport, arrangement }: { viewport: Viewport; arrangement: Arrangement }) =>
     Markups ? <Markups markups={markups} arrangement={arrangement} viewport={viewport} activeId={activeId} pending={pending} onView={onView} /> : null;
 
-  return (
-    <div className={`flex h-full min-h-0 ${placing ? '[&_[data-testid=plan]]:cursor-crosshair' : ''}`} data-placing={placing || undefined}>
-      <div className="h-full min-w-0 flex-1" onClickCapture={onPlanClick}>
-        <EditorLoader {...editorProps} layoutId={layoutId} canEdit={canEdit} extensions={{ planOverlay, toolbarExtra, planUnderlay: studioTools.planUnderlay }} />
-      </div>
-      {open && (
+  const markupsPanel = (
         <MarkupsPanel
           layoutId={layoutId}
           threads={threads}
@@ -120,13 +119,34 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
           activeId={activeId}
           onActivate={setActiveId}
           placing={placing}
-          onStartPlacing={() => { setPending(null); setPlacing(true); }}
+          onStartPlacing={() => {
+            setPending(null);
+            setPlacing(true);
+            // On a tablet or phone the drawer covers the plan: step aside until the point is placed.
+            if (floating) setDrawer(null);
+          }}
           onCancelPlacing={() => setPlacing(false)}
           pending={pending}
           onPendingChange={setPending}
           onClose={() => setOpen(false)}
         />
-      )}
+  );
+
+  return (
+    <div className={`flex h-full min-h-0 ${placing ? '[&_[data-testid=plan]]:cursor-crosshair' : ''}`} data-placing={placing || undefined}>
+      <div className="h-full min-w-0 flex-1" onClickCapture={onPlanClick}>
+        <EditorLoader
+          {...editorProps}
+          layoutId={layoutId}
+          canEdit={canEdit}
+          extensions={{
+            planOverlay,
+            toolbarExtra,
+            planUnderlay: studioTools.planUnderlay,
+            sidePanel: { title: 'Mark-ups', count: openCount, countLabel: `${openCount} open`, content: markupsPanel },
+          }}
+        />
+      </div>
       <Dialog open={sharing} title="Share this layout" onClose={() => setSharing(false)} testId="share-dialog">
         <SharePanel layoutId={layoutId} />
         <div className="mt-4 text-right"><button type="button" className="btn-quiet" onClick={() => setSharing(false)}>Done</button></div>

@@ -62,7 +62,7 @@ export function MarkupsPanel(p: Props) {
   const settledCount = p.threads.filter((t) => t.settled).length;
 
   return (
-    <aside className="flex w-72 shrink-0 flex-col border-l border-paper-edge bg-paper" aria-label="Mark-ups" data-testid="markups-panel">
+    <aside className="flex h-full min-h-0 w-full flex-col bg-paper" aria-label="Mark-ups" data-testid="markups-panel">
       <div className="flex items-center gap-2 border-b border-paper-edge px-3 py-2">
         <Hexagon size={14} aria-hidden="true" />
         <h2 className="text-sm font-semibold">Mark-ups</h2>

@@ -19,12 +19,17 @@ import { isTypingTarget } from '../commands/keyboard';
 import { inArrangement, modulesIn } from '@/lib/layout/bay';
 
 export const KIND_DRAG_TYPE = 'application/x-baywright-kind';
-/** Pointer travel (px) before a press on a module becomes a drag rather than a click. */
+/** Pointer travel (px) before a press on a module becomes a drag rather than a click; a finger wobbles more than a mouse. */
 const DRAG_START_PX = 3;
+const TOUCH_DRAG_START_PX = 8;
+/** A finger held this long on a module without moving opens its actions (common practice on touch screens, no source). */
+export const LONG_PRESS_MS = 500;
+/** Half the side of a resize handle's target for a finger: 44 × 44 CSS px (WCAG 2.2 SC 2.5.5 Target Size, enhanced). */
+export const TOUCH_HANDLE_PX = 22;
 
 type Stroke =
   | { mode: 'pan'; lastX: number; lastY: number }
-  | { mode: 'press'; startX: number; startY: number; ids: string[]; hitId: string; shift: boolean }
+  | { mode: 'press'; startX: number; startY: number; ids: string[]; hitId: string; shift: boolean; touch: boolean }
   | { mode: 'gesture'; startX: number; startY: number }
   | { mode: 'ignored' };
 
@@ -33,6 +38,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
   const space = useRef(false);
   const touches = useRef(new Map<number, { x: number; y: number }>());
   const pinch = useRef<{ dist: number; midX: number; midY: number } | null>(null);
+  const longPress = useRef<ReturnType<typeof setTimeout> | null>(null);
 
   useEffect(() => {
     const el = container.current;
@@ -49,6 +55,10 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     const world = (p: { x: number; y: number }) => toWorld(api.getState().viewport, p.x, p.y);
     const report = (r: { ok: boolean; error?: string }) => {
       if (!r.ok && r.error) toast.error(r.error);
+    };
+    const stopLongPress = () => {
+      if (longPress.current) clearTimeout(longPress.current);
+      longPress.current = null;
     };
 
     function hoverCursor(p: { x: number; y: number }) {
@@ -68,6 +78,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       if (e.pointerType === 'touch') {
         touches.current.set(e.pointerId, local(e));
         if (touches.current.size === 2) {
+          stopLongPress();
           api.getState().cancelGesture();
           setStroke({ mode: 'ignored' });
           const [a, b] = [...touches.current.values()];
@@ -88,9 +99,18 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const s = api.getState();
       const w = world(p);
       el!.setPointerCapture(e.pointerId);
+      const touch = e.pointerType === 'touch';
+      if (s.placing) {
+        // A kind picked on the shelf by touch: this tap says where it goes.
+        const kind = s.placing;
+        s.setPlacing(null);
+        report(s.addModule(kind, w));
+        setStroke({ mode: 'ignored' });
+        return;
+      }
       if (!s.readOnly && s.selection.length === 1) {
         const m = s.doc.modules.find((o) => o.id === s.selection[0] && inArrangement(o, s.arrangement));
-        const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
+        const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, touch ? TOUCH_HANDLE_PX : HANDLE_PX));
         if (m && h) {
           s.beginResize(m.id, h);
           setStroke({ mode: 'gesture', startX: w.x, startY: w.y });
@@ -102,7 +122,23 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         if (e.shiftKey) s.select([hit.id], 'toggle');
         else if (!s.selection.includes(hit.id)) s.select([hit.id]);
         const sel = api.getState().selection;
-        setStroke(!s.readOnly && sel.includes(hit.id) ? { mode: 'press', startX: w.x, startY: w.y, ids: sel, hitId: hit.id, shift: e.shiftKey } : { mode: 'ignored' });
+        setStroke(!s.readOnly && sel.includes(hit.id) ? { mode: 'press', startX: w.x, startY: w.y, ids: sel, hitId: hit.id, shift: e.shiftKey, touch } : { mode: 'ignored' });
+        if (touch) {
+          // Long-press: the module's actions, as a right-click gives them.
+          stopLongPress();
+          longPress.current = setTimeout(() => {
+            longPress.current = null;
+            const st = stroke.current;
+            if (st && st.mode !== 'press' && st.mode !== 'ignored') return; // already dragging
+            setStroke({ mode: 'ignored' });
+            onContextMenu(p.x, p.y);
+          }, LONG_PRESS_MS);
+        }
+        return;
+      }
+      if (touch) {
+        // One finger on empty plan pans; marquee selection is for the mouse.
+        setStroke({ mode: 'pan', lastX: p.x, lastY: p.y });
         return;
       }
       s.beginMarquee(w.x, w.y, e.shiftKey);
@@ -136,7 +172,8 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       const w = world(p);
       if (st.mode === 'press') {
         const moved = Math.hypot(w.x - st.startX, w.y - st.startY) * s.viewport.scale;
-        if (moved < DRAG_START_PX) return;
+        if (moved < (st.touch ? TOUCH_DRAG_START_PX : DRAG_START_PX)) return;
+        stopLongPress();
         s.beginMove(st.ids);
         setStroke({ mode: 'gesture', startX: st.startX, startY: st.startY });
       } else if (!s.gesture) {
@@ -148,6 +185,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     }
 
     function onPointerUp(e: PointerEvent) {
+      stopLongPress();
       if (e.pointerType === 'touch') {
         touches.current.delete(e.pointerId);
         if (touches.current.size < 2) pinch.current = null;
@@ -162,6 +200,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     }
 
     function onPointerCancel(e: PointerEvent) {
+      stopLongPress();
       touches.current.delete(e.pointerId);
       pinch.current = null;
       setStroke(null);
@@ -242,6 +281,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el.removeEventListener('drop', onDrop);
       window.removeEventListener('keydown', onKeyDown);
       window.removeEventListener('keyup', onKeyUp);
+      stopLongPress();
     };
   }, [container, api, onContextMenu]);
 }

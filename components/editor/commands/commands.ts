@@ -65,8 +65,8 @@ export const COMMANDS: Command[] = [
   { id: 'select.previous', label: 'Select previous module', group: 'select', shortcut: ['['], enabled: (s) => s.doc.modules.length > 0, run: (s) => stepSelection(s, -1) },
   {
     id: 'select.escape', label: 'Cancel gesture / clear selection', group: 'select', shortcut: ['Escape'],
-    enabled: (s) => s.gesture !== null || s.selection.length > 0 || s.shortcutSheetOpen,
-    run: (s) => (s.gesture ? s.cancelGesture() : s.shortcutSheetOpen ? s.setShortcutSheet(false) : s.select([])),
+    enabled: (s) => s.gesture !== null || s.placing !== null || s.selection.length > 0 || s.shortcutSheetOpen,
+    run: (s) => (s.gesture ? s.cancelGesture() : s.placing ? s.setPlacing(null) : s.shortcutSheetOpen ? s.setShortcutSheet(false) : s.select([])),
   },
 
   { id: 'view.zoom-in', label: 'Zoom in', group: 'view', shortcut: ['=', 'Plus'], enabled: () => true, run: (s) => s.zoomBy(1.25) },

@@ -10,9 +10,10 @@ import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 
 const WORDS: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
 
-export function ArrangementSwitch() {
+/** The three arrangements; `withPhantom` adds the phantom choice beside them (the tablet toolbar keeps it in its menu). */
+export function ArrangementSwitch({ withPhantom = true }: { withPhantom?: boolean }) {
   const api = useEditorApi();
-  const { arrangement, phantom } = useEditor(useShallow((s) => ({ arrangement: s.arrangement, phantom: s.phantom })));
+  const arrangement = useEditor((s) => s.arrangement);
   return (
     <div className="flex items-center gap-3">
       <div role="radiogroup" aria-label="Arrangement" className="flex overflow-hidden rounded border border-ink-faint">
@@ -30,18 +31,26 @@ export function ArrangementSwitch() {
           </button>
         ))}
       </div>
-      <label className="flex items-center gap-1.5 text-sm text-ink-soft">
-        Phantom
-        <select
-          value={phantom ?? ''}
-          onChange={(e) => api.getState().setPhantom((e.target.value || null) as Arrangement | null)}
-          className="rounded border border-paper-edge bg-paper px-1 py-0.5 text-sm"
-          aria-label="Show another arrangement in phantom lines"
-        >
-          <option value="">none</option>
-          {ARRANGEMENTS.filter((a) => a !== arrangement).map((a) => <option key={a} value={a}>{a}</option>)}
-        </select>
-      </label>
+      {withPhantom && <PhantomSelect />}
     </div>
+  );
+}
+
+export function PhantomSelect() {
+  const api = useEditorApi();
+  const { arrangement, phantom } = useEditor(useShallow((s) => ({ arrangement: s.arrangement, phantom: s.phantom })));
+  return (
+    <label className="flex items-center gap-1.5 text-sm text-ink-soft">
+      Phantom
+      <select
+        value={phantom ?? ''}
+        onChange={(e) => api.getState().setPhantom((e.target.value || null) as Arrangement | null)}
+        className="rounded border border-paper-edge bg-paper px-1 py-0.5 text-sm"
+        aria-label="Show another arrangement in phantom lines"
+      >
+        <option value="">none</option>
+        {ARRANGEMENTS.filter((a) => a !== arrangement).map((a) => <option key={a} value={a}>{a}</option>)}
+      </select>
+    </label>
   );
 }

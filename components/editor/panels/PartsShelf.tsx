@@ -2,7 +2,8 @@
 /**
  * The Parts shelf: every module kind with its default size, searchable by name and trade words.
  * Drag a part onto the plan to place it there, or press it (mouse or keyboard) to place it in the
- * first free spot. Never edits the document except through the store's addModule.
+ * first free spot. On a tablet (`pickToPlace`) a tap picks the part and the next tap on the plan
+ * places it; the keyboard still places at once. Never edits the document except through the store's addModule.
  */
 import { memo, useMemo, useState } from 'react';
 import { Search, TriangleAlert } from 'lucide-react';
@@ -13,6 +14,7 @@ import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';
 import { matchKinds } from './partsSearch';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
+import { setDrawer } from '@/components/ui/drawers';
 import { theme } from '../theme';
 
 const FAMILY_SWATCH: Record<MaterialFamily, string> = {
@@ -30,7 +32,7 @@ function Swatch({ family }: { family: MaterialFamily }) {
   return <span aria-hidden className={`inline-block h-6 w-8 shrink-0 border-ink bg-paper ${border}`} style={{ background: FAMILY_SWATCH[family] }} />;
 }
 
-export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: () => void }) {
+export const PartsShelf = memo(function PartsShelf({ focusPlan, pickToPlace = false }: { focusPlan: () => void; pickToPlace?: boolean }) {
   const api = useEditorApi();
   const units = useEditor((s) => s.units);
   const [query, setQuery] = useState('');
@@ -42,9 +44,15 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: (
     toast.success(`${k.title} placed. Arrow keys move it; R rotates.`, { duration: 2500 });
     focusPlan();
   };
+  /** A tap (not a key press: `detail` 0) on a tablet picks the part; the drawer gets out of the way of the plan. */
+  const pick = (k: KindSpec, detail: number) => {
+    if (!pickToPlace || detail === 0) return place(k);
+    api.getState().setPlacing(k.kind);
+    setDrawer(null);
+  };
 
   return (
-    <nav aria-label="Parts shelf" className="flex h-full w-60 shrink-0 flex-col border-r border-paper-edge bg-paper-deep">
+    <nav aria-label="Parts shelf" className="flex h-full w-full min-w-0 flex-col bg-paper-deep">
       <div className="border-b border-paper-edge p-3">
         <h2 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">Parts shelf</h2>
         <label className="flex items-center gap-2 rounded border border-paper-edge bg-paper px-2 py-1.5 focus-within:ring-2 focus-within:ring-copper">
@@ -71,7 +79,7 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan }: { focusPlan: (
                 e.dataTransfer.setData('text/plain', k.title);
                 e.dataTransfer.effectAllowed = 'copy';
               }}
-              onClick={() => place(k)}
+              onClick={(e) => pick(k, e.detail)}
               data-kind={k.kind}
               aria-label={`Place ${k.title}, ${formatLength(k.length, units)} by ${formatLength(k.width, units)}`}
               aria-describedby={kindCaution(k.kind) ? `shelf-caution-${k.kind}` : undefined}

@@ -47,6 +47,8 @@ export interface EditorState {
   arrangement: Arrangement;
   /** Another arrangement drawn in phantom lines over the current one, or null. */
   phantom: Arrangement | null;
+  /** A kind picked on the Parts shelf by touch, waiting for a tap on the plan to say where; a view state, never in undo. */
+  placing: ModuleKind | null;
   viewport: Viewport;
   /** Screen pixels per mm that make the drawing real size on this display (1:1). */
   actualPxPerMm: number;
@@ -92,6 +94,8 @@ export interface EditorState {
   setHighlight(ids: string[]): void;
   setArrangement(a: Arrangement): void;
   setPhantom(a: Arrangement | null): void;
+  /** Pick a kind to place with the next tap on the plan (null: stop). Not in undo. */
+  setPlacing(kind: ModuleKind | null): void;
   setViewport(v: Viewport): void;
   resizeViewport(width: number, height: number): void;
   zoomBy(factor: number, sx?: number, sy?: number): void;
@@ -153,6 +157,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       highlight: [],
       arrangement: 'lounge',
       phantom: null,
+      placing: null,
       viewport: fitToBay(initialViewport, opts.doc.bay.length, opts.doc.bay.width),
       actualPxPerMm: CSS_PX_PER_MM,
       steps: { enabled: true, step: 10 },
@@ -317,6 +322,9 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         // Keep only selected modules that exist in the arrangement now shown.
         const inA = new Set(modulesIn(s.doc, a).map((m) => m.id));
         set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), phantom: s.phantom === a ? null : s.phantom });
+      },
+      setPlacing(kind) {
+        set({ placing: get().readOnly ? null : kind });
       },
       setPhantom(a) {
         set({ phantom: a === get().arrangement ? null : a });
