@@ -20,8 +20,16 @@ export function ContextMenu({ at, onClose }: { at: { x: number; y: number }; onC
     const away = (e: PointerEvent) => {
       if (!ref.current?.contains(e.target as Node)) onClose();
     };
+    // Escape closes it wherever the focus is (a long press leaves it on the plan).
+    const escape = (e: KeyboardEvent) => {
+      if (e.key === 'Escape') onClose();
+    };
     window.addEventListener('pointerdown', away, true);
-    return () => window.removeEventListener('pointerdown', away, true);
+    window.addEventListener('keydown', escape);
+    return () => {
+      window.removeEventListener('pointerdown', away, true);
+      window.removeEventListener('keydown', escape);
+    };
   }, [onClose]);
   const mac = isMacPlatform();
   return (
