@@ -131,6 +131,7 @@ test('invite → view → mark-up → settle → approve → issue → return fo
   const box = (await plan.boundingBox())!;
   const scale = Number(await plan.getAttribute('data-scale'));
   const [ox, oy] = (await plan.getAttribute('data-origin'))!.split(',').map(Number);
+  await client.getByTestId('toggle-markups').click(); // the Mark-ups list opens on demand
   await client.getByRole('button', { name: 'Add a mark-up' }).click();
   await client.mouse.click(box.x + ox + 1500 * scale, box.y + oy + 600 * scale);
   await client.getByRole('textbox', { name: 'Note', exact: true }).fill('Could the bed be 50 mm longer? I am 1.88 m tall.');
