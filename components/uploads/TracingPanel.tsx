@@ -5,7 +5,7 @@
  * the upload (studio data), never in the layout document, so viewer links never show them.
  * Owners and designers place; the layout's client sees what is placed.
  */
-import { useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import dynamic from 'next/dynamic';
 import { toast } from 'sonner';
 import { Camera, ChevronDown, ImagePlus } from 'lucide-react';
@@ -55,8 +55,26 @@ export function TracingPanel({ layoutId, canEdit, units }: { layoutId: string; c
     }
   }
 
+  // Escape or a tap outside closes the list, wherever the focus is (not while calibrating: that dialog is its own).
+  const root = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (!open || calibrating) return;
+    const away = (e: PointerEvent) => {
+      if (!root.current?.contains(e.target as Node)) setOpen(false);
+    };
+    const key = (e: KeyboardEvent) => {
+      if (e.key === 'Escape') setOpen(false);
+    };
+    window.addEventListener('pointerdown', away, true);
+    window.addEventListener('keydown', key);
+    return () => {
+      window.removeEventListener('pointerdown', away, true);
+      window.removeEventListener('keydown', key);
+    };
+  }, [open, calibrating]);
+
   return (
-    <div className="relative" onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}>
+    <div ref={root} className="relative" data-testid="tracing-control">
       <button type="button" className="btn-quiet px-2 py-1" aria-haspopup="dialog" aria-expanded={open} onClick={() => setOpen((o) => !o)}>
         <Camera size={14} aria-hidden="true" /> Survey photos{placed ? <span className="font-mono text-xs">{placed}</span> : null} <ChevronDown size={12} aria-hidden="true" />
       </button>

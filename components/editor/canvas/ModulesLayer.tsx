@@ -5,12 +5,11 @@
  * events; redrawn only when the document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
-import { Layer } from './konva';
+import { Group } from './konva';
 import type { Arrangement, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
 import { ModuleShape } from './ModuleShape';
-import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -19,12 +18,13 @@ interface Props {
   arrangement: Arrangement;
   phantom: Arrangement | null;
   hidden: readonly string[];
+  /** Redraw when the view moves (line widths follow the scale). */
   viewport: Viewport;
   fonts: CanvasFonts;
   fontsReady: number;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, viewport, fonts, fontsReady }: Props) {
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, fonts, fontsReady }: Props) {
   const { shown, phantoms } = useMemo(() => {
     const hide = new Set(hidden);
     return {
@@ -33,13 +33,13 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
     };
   }, [modules, arrangement, phantom, hidden]);
   return (
-    <Layer {...worldLayerProps(viewport)} listening={false} name="modules">
+    <Group listening={false} name="modules">
       {shown.map((m) => (
         <ModuleShape key={m.id} module={m} fonts={fonts} fontsReady={fontsReady} />
       ))}
       {phantoms.map((m) => (
         <ModuleShape key={`phantom-${m.id}`} module={m} fonts={fonts} phantom fontsReady={fontsReady} />
       ))}
-    </Layer>
+    </Group>
   );
 });

@@ -5,7 +5,8 @@
  * usePlanPointer. Must never draw anything itself.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { Stage } from './konva';
+import { Layer, Stage } from './konva';
+import { worldLayerProps } from './worldTransform';
 import { useShallow } from 'zustand/react/shallow';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { SheetLayer } from './SheetLayer';
@@ -70,8 +71,11 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       {size && (
         <Stage width={size.w} height={size.h}>
           {underlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
-          <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
-          <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
+          {/* The sheet and the modules share one layer: Konva advises at most 3–5 layers per stage. */}
+          <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">
+            <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
+            <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
+          </Layer>
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
           {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />

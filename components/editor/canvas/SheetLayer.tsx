@@ -5,14 +5,13 @@
  * is not redrawn during a drag.
  */
 import { memo } from 'react';
-import { Layer, Shape } from './konva';
+import { Group, Shape } from './konva';
 import type Konva from 'konva';
 import type { LayoutDoc, LengthUnit } from '@/lib/layout';
 import { visibleWorld, type Viewport } from '../geometry/viewport';
 import { drawBay, drawGrid } from './bayDrawing';
 import { drawDimension } from './dimensionDrawing';
 import { overallDimensions } from '../geometry/dimensions';
-import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
 
 interface Props {
@@ -27,7 +26,7 @@ export const SheetLayer = memo(function SheetLayer({ bay, buildUp, viewport, uni
   const scale = viewport.scale;
   const doc = { bay, buildUp } as LayoutDoc;
   return (
-    <Layer {...worldLayerProps(viewport)} listening={false} name="sheet">
+    <Group listening={false} name="sheet">
       <Shape
         sceneFunc={(c: Konva.Context) => drawGrid(c._context, scale, visibleWorld(viewport), bay)}
         listening={false}
@@ -39,6 +38,6 @@ export const SheetLayer = memo(function SheetLayer({ bay, buildUp, viewport, uni
         }}
         listening={false}
       />
-    </Layer>
+    </Group>
   );
 });

@@ -29,6 +29,11 @@ export interface DrawOptions {
 
 type Ctx = CanvasRenderingContext2D;
 
+/** Kinds fixed above head height, drawn in plan as hidden-above lines (dashed, unfilled). */
+export function isOverhead(kind: Module['kind']): boolean {
+  return kind === 'overhead-locker';
+}
+
 export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   const spec = KINDS[m.kind];
   const px = 1 / o.scale;
@@ -36,12 +41,14 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   ctx.save();
   if (o.phantom) ctx.globalAlpha = 0.45;
 
-  // Base sheet and family hatching.
+  // Base sheet and family hatching. Things overhead are drawn as the drafting convention has it:
+  // a dashed outline with no fill, so what stands below them (the kitchen) stays readable.
+  const overhead = isOverhead(m.kind);
   ctx.beginPath();
   ctx.rect(0, 0, L, W);
   ctx.fillStyle = o.phantom ? 'rgba(245,242,234,0.2)' : theme.paper;
-  ctx.fill();
-  if (!o.phantom) {
+  if (!overhead) ctx.fill();
+  if (!o.phantom && !overhead) {
     if (spec.family === 'timber') fillHatch(ctx, 'timber');
     else if (spec.family === 'upholstery') fillHatch(ctx, 'stipple');
   }
@@ -50,7 +57,7 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   ctx.lineWidth = 1.25 * px;
   ctx.strokeStyle = theme.ink;
   // Phantom line (alternate position): long dash, two short dashes. Hidden edges: plain dashes.
-  ctx.setLineDash(o.phantom ? [12 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px] : m.kind === 'overhead-locker' || m.kind === 'bed-infill' ? [5 * px, 3 * px] : []);
+  ctx.setLineDash(o.phantom ? [12 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px] : overhead || m.kind === 'bed-infill' ? [5 * px, 3 * px] : []);
   if (spec.family === 'electrics' && !o.phantom) ctx.setLineDash([1.2 * px, 2.6 * px]);
   ctx.strokeRect(0, 0, L, W);
   ctx.setLineDash([]);
