@@ -50,6 +50,8 @@ export interface EditorState {
   /** A kind picked on the Parts shelf by touch, waiting for a tap on the plan to say where; a view state, never in undo. */
   placing: ModuleKind | null;
   viewport: Viewport;
+  /** The view is fitted to the bay and nobody has zoomed or panned since: it stays fitted as the plan's box changes size. */
+  viewFitted: boolean;
   /** Screen pixels per mm that make the drawing real size on this display (1:1). */
   actualPxPerMm: number;
   steps: { enabled: boolean; step: GridStep };
@@ -159,6 +161,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       phantom: null,
       placing: null,
       viewport: fitToBay(initialViewport, opts.doc.bay.length, opts.doc.bay.width),
+      viewFitted: true,
       actualPxPerMm: CSS_PX_PER_MM,
       steps: { enabled: true, step: 10 },
       gesture: null,
@@ -330,29 +333,30 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         set({ phantom: a === get().arrangement ? null : a });
       },
       setViewport(v) {
-        set({ viewport: v });
+        set({ viewport: v, viewFitted: false });
       },
       resizeViewport(width, height) {
         const v = get().viewport;
         if (v.width === width && v.height === height) return;
-        const first = v.width === 1000 && v.height === 600;
         const next = { ...v, width: px(width), height: px(height) };
-        set({ viewport: first ? fitToBay(next, get().doc.bay.length, get().doc.bay.width) : next });
+        // Open fitted to the bay, and stay fitted while the screen settles (panels load, a drawer
+        // closes, the tablet turns) until the person zooms or pans.
+        set({ viewport: get().viewFitted ? fitToBay(next, get().doc.bay.length, get().doc.bay.width) : next });
       },
       zoomBy(factor, sx, sy) {
         const v = get().viewport;
-        set({ viewport: zoomAt(v, factor, sx ?? v.width / 2, sy ?? v.height / 2) });
+        set({ viewport: zoomAt(v, factor, sx ?? v.width / 2, sy ?? v.height / 2), viewFitted: false });
       },
       panBy(dx, dy) {
-        set({ viewport: panBy(get().viewport, dx, dy) });
+        set({ viewport: panBy(get().viewport, dx, dy), viewFitted: false });
       },
       fit() {
         const s = get();
-        set({ viewport: fitToBay(s.viewport, s.doc.bay.length, s.doc.bay.width) });
+        set({ viewport: fitToBay(s.viewport, s.doc.bay.length, s.doc.bay.width), viewFitted: true });
       },
       actualSize() {
         const s = get();
-        set({ viewport: actualSize(s.viewport, s.actualPxPerMm, s.viewport.width / 2, s.viewport.height / 2) });
+        set({ viewport: actualSize(s.viewport, s.actualPxPerMm, s.viewport.width / 2, s.viewport.height / 2), viewFitted: false });
       },
       setActualPxPerMm(v) {
         if (Number.isFinite(v) && v > 0.5 && v < 20) set({ actualPxPerMm: v });
