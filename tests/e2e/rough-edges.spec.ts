@@ -45,3 +45,42 @@ test('the editor opens with no layer-count warning, the Mark-ups list closed, an
   await page.mouse.click(box.x + box.width / 2, box.y + box.height - 20);
   await expect(popover).toHaveCount(0);
 });
+
+test('the Checks panel recovers by itself when the check service comes back', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  let down = true;
+  await page.route('**/api/checks', (route) => (down ? route.abort('connectionrefused') : route.fallback()));
+  await page.getByRole('link', { name: STOCK }).first().click();
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  const status = page.getByTestId('checks-status');
+  await expect(status).toContainText('checks unavailable', { timeout: 20_000 });
+  down = false; // no edit from here on
+  await expect(status).toContainText('up to date', { timeout: 20_000 });
+});
+
+test('disabled fields look different from editable ones, and radio buttons take the look’s accent', async ({ page, browser }) => {
+  // The designer's editable field, then the client's disabled one in the same Details panel.
+  await signIn(page, 'ivo@saltmarsh.test');
+  await page.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true }).first().click();
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press(']');
+  const editable = page.getByTestId('details-x');
+  await expect(editable).toBeEnabled();
+  const look = (el: HTMLElement) => { const s = getComputedStyle(el); return { bg: s.backgroundColor, cursor: s.cursor, accent: s.accentColor }; };
+  const open = await editable.evaluate(look);
+
+  const client = await (await browser.newContext()).newPage();
+  await signIn(client, 'priya@client.test');
+  await client.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true }).first().click();
+  await expect(client.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await client.getByTestId('plan').focus();
+  await client.keyboard.press(']');
+  const locked = client.getByTestId('details-x');
+  await expect(locked).toBeDisabled();
+  const shut = await locked.evaluate(look);
+  expect(shut.bg).not.toBe(open.bg);
+  expect(shut.cursor).toBe('not-allowed');
+  const box = client.locator('input[type="checkbox"], input[type="radio"]').first();
+  expect((await box.evaluate(look)).accent).toBe('rgb(164, 82, 42)'); // the look's copper, #A4522A (DESIGN.md)
+});

@@ -15,6 +15,8 @@ import { contentKey } from './docKey';
 import { createThrottle } from './throttle';
 
 export const CHECKS_WINDOW_MS = 150;
+/** While the check service is unreachable, ask again this often, so the panel recovers without an edit (common practice, no source). */
+export const CHECKS_RECOVER_MS = 3_000;
 
 export type ChecksStatus = 'checking' | 'ready' | 'unavailable' | 'refused';
 
@@ -55,6 +57,8 @@ export function useLiveChecks(doc: LayoutDoc, fetchChecks?: (doc: LayoutDoc, sig
     gcTime: 60_000,
     retry: (count, err) => err instanceof ChecksRateLimited && count < 4,
     retryDelay: (_count, err) => (err instanceof ChecksRateLimited ? err.retryAfterMs : 500),
+    refetchInterval: (query) => (query.state.error instanceof ChecksUnavailable ? CHECKS_RECOVER_MS : false),
+    refetchOnReconnect: true,
   });
 
   const shownKey = q.isPlaceholderData ? undefined : sent.key;
