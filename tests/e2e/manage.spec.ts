@@ -74,8 +74,10 @@ test('rename, duplicate as variant, compare variants, restore a saved version, a
   await expect(page.getByRole('heading', { name: `Compare variants of ${RENAMED} variant 2` })).toBeVisible();
   const plans = page.getByTestId('compare-plans');
   await expect(plans.locator('figure')).toHaveCount(2);
-  await expect(page.getByTestId('module-changes')).toContainText('Removed');
-  await expect(page.getByTestId('module-changes')).toContainText(removed.label ?? '');
+  // Opened from the variant's row: the variant on the left, its original (which still has the sink unit) on the right.
+  await expect(page.getByTestId('compare-plans').locator('figcaption')).toHaveText([`${RENAMED} variant 2`, RENAMED]);
+  expect(removed.kind).toBe('sink-unit');
+  await expect(page.getByTestId('module-changes')).toContainText('Added Sink unit');
   await expect(page.getByTestId('compare-from-status')).toContainText('Checks');
   await expect(page.getByTestId('finding-changes')).toBeVisible();
   await keepScreenshot(page, 'manage-compare');
