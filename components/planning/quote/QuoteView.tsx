@@ -12,9 +12,9 @@ import { formatDateTime } from '@/lib/format';
 
 
 export function QuoteStatus({ quote }: { quote: QuoteDto }) {
-  if (quote.status === 'paid') return <span className="inline-flex items-center gap-1 rounded-sm bg-moss-light px-2 py-0.5 text-sm font-semibold text-moss" data-testid="quote-status"><CircleCheck size={14} aria-hidden="true" />Deposit paid</span>;
+  if (quote.status === 'paid') return <span className="inline-flex items-center gap-1 rounded-sm bg-moss-light px-2 py-0.5 text-sm font-semibold text-ink" data-testid="quote-status"><CircleCheck size={14} aria-hidden="true" className="text-moss" />Deposit paid</span>;
   if (quote.status === 'superseded') return <span className="inline-flex items-center gap-1 rounded-sm bg-paper-deep px-2 py-0.5 text-sm text-ink-soft" data-testid="quote-status"><CircleSlash size={14} aria-hidden="true" />Replaced by a newer quote</span>;
-  return <span className="inline-flex items-center gap-1 rounded-sm bg-ochre-light px-2 py-0.5 text-sm font-semibold text-ochre" data-testid="quote-status"><Clock size={14} aria-hidden="true" />Waiting for the deposit</span>;
+  return <span className="inline-flex items-center gap-1 rounded-sm bg-ochre-light px-2 py-0.5 text-sm font-semibold text-ink" data-testid="quote-status"><Clock size={14} aria-hidden="true" className="text-ochre" />Waiting for the deposit</span>;
 }
 
 export function QuoteView({ quote }: { quote: QuoteDto }) {
