@@ -127,12 +127,12 @@ test('invite → view → mark-up → settle → approve → issue → return fo
   await expect(client.getByRole('button', { name: 'Share', exact: true })).toHaveCount(0);
 
   // The client places a mark-up about a known point of the bay (x 1500 mm, y 600 mm).
+  await client.getByTestId('toggle-markups').click(); // the Mark-ups list opens on demand (the plan refits beside it)
+  await client.getByRole('button', { name: 'Add a mark-up' }).click();
   const plan = client.getByTestId('plan');
   const box = (await plan.boundingBox())!;
   const scale = Number(await plan.getAttribute('data-scale'));
   const [ox, oy] = (await plan.getAttribute('data-origin'))!.split(',').map(Number);
-  await client.getByTestId('toggle-markups').click(); // the Mark-ups list opens on demand
-  await client.getByRole('button', { name: 'Add a mark-up' }).click();
   await client.mouse.click(box.x + ox + 1500 * scale, box.y + oy + 600 * scale);
   await client.getByRole('textbox', { name: 'Note', exact: true }).fill('Could the bed be 50 mm longer? I am 1.88 m tall.');
   await client.getByRole('button', { name: 'Place mark-up' }).click();
