@@ -1,10 +1,11 @@
 /**
  * A client's brief for proposals: the bay (a template or measured), who sleeps and stands, the
  * bed wanted, the kitchen, water, wet room, fuel, garage and what matters most. One zod schema,
- * shared by the form on "New layout", the route that validates the request and the generator.
+ * shared by the form on "New layout" (so `zod/mini`, as the browser's other forms), the route that
+ * validates the request and the generator.
  * Pure: must never import React, Next, the database or the services.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { baySchema } from '../layout/schema';
 import { MATTRESSES } from '../checks/mattress';
 
@@ -55,40 +56,42 @@ export const PRIORITY_WORDS: Record<Priority, string> = {
   balance: 'Weight balance',
 };
 
-const stature = z.int('a stature in whole millimetres').min(900, 'a stature of at least 900 mm').max(2300, 'a stature of at most 2300 mm');
+const whole = (min: number, max: number, what: string) =>
+  z.int(`${what} in whole numbers`).check(z.gte(min, `${what}: at least ${min}`), z.lte(max, `${what}: at most ${max}`));
+const stature = whole(900, 2300, 'a stature in millimetres');
 
 export const briefBaySchema = z.discriminatedUnion('source', [
-  z.strictObject({ source: z.literal('template'), template: z.string().regex(/^[a-z0-9-]{1,40}$/, 'pick a bay template') }),
+  z.strictObject({ source: z.literal('template'), template: z.string().check(z.regex(/^[a-z0-9-]{1,40}$/, 'pick a bay template')) }),
   z.strictObject({ source: z.literal('measured'), bay: baySchema }),
 ]);
 
 export const briefSchema = z.strictObject({
   bay: briefBaySchema,
-  sleepers: z.array(stature).min(1, 'at least one sleeper').max(6, 'at most six sleepers'),
+  sleepers: z.array(stature).check(z.minLength(1, 'at least one sleeper'), z.maxLength(6, 'at most six sleepers')),
   /** The tallest person who must stand upright; null when nobody stands (a low roof). */
-  standing: stature.nullable(),
+  standing: z.nullable(stature),
   /** Belted travel seats wanted behind the cab (the cab's own seats are counted by the bay). */
-  beltedSeats: z.int().min(0).max(4, 'at most four belted seats behind the cab'),
+  beltedSeats: whole(0, 4, 'belted seats behind the cab'),
   bed: z.enum(BED_PREFERENCES),
   mattress: z.enum(MATTRESS_CLASSES),
   kitchen: z.strictObject({
-    counterMin: z.int('whole millimetres').min(0).max(3000, 'a counter of at most 3000 mm'),
+    counterMin: whole(0, 3000, 'counter length in millimetres'),
     sink: z.boolean(),
     hob: z.boolean(),
     fridge: z.enum(FRIDGE_SIZES),
   }),
   water: z.strictObject({
-    days: z.int('whole days').min(1, 'at least one day').max(14, 'at most 14 days'),
-    people: z.int('whole people').min(1).max(8),
+    days: whole(1, 14, 'days between fills'),
+    people: whole(1, 8, 'people using water'),
   }),
   toilet: z.boolean(),
   shower: z.boolean(),
   fuel: z.enum(['gas', 'electric']),
   /** Clear height wanted under a fixed bed for a garage, mm; null for none. */
-  garageHeight: z.int('whole millimetres').min(200, 'a garage of at least 200 mm').max(1200, 'a garage of at most 1200 mm').nullable(),
+  garageHeight: z.nullable(whole(200, 1200, 'garage height in millimetres')),
   priority: z.enum(PRIORITIES),
   /** Varies the order candidates are tried in; the same brief and seed give the same proposals. */
-  seed: z.int().min(0).max(2 ** 31 - 1).default(1),
+  seed: z._default(whole(0, 2 ** 31 - 1, 'seed'), 1),
 });
 export type Brief = z.infer<typeof briefSchema>;
 export type BriefInput = z.input<typeof briefSchema>;

@@ -1,8 +1,8 @@
 /**
  * The work that runs off the request thread, by name: each job is a pure function of plain,
  * cloneable data (it crosses a worker_threads message), run inside a pool worker
- * (lib/workers/job-worker.ts). To move more work off the request thread — proposal generation,
- * say — add a named job here and call `runJob(name, input)` (lib/workers/pool.ts).
+ * (lib/workers/job-worker.ts). To move more work off the request thread, add a named job here and
+ * call `runJob(name, input)` (lib/workers/pool.ts).
  *
  * Must never import the database, Next, React or `server-only`: a worker has none of them.
  */
@@ -12,6 +12,7 @@ import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
 import type { SheetFonts } from '../sheet/fonts';
+import { generateProposals, type Brief, type ProposalResult } from '../proposals';
 
 export interface ChecksInput {
   doc: LayoutDoc;
@@ -81,6 +82,8 @@ export const JOBS = {
     const after = runChecks(input.to, { studioDefaults: input.studioDefaults });
     return { beforeOk: before.ok, afterOk: after.ok, findings: diffFindings(before.findings, after.findings) };
   },
+  /** Proposals for a validated brief: at most MAX_CANDIDATES candidates laid out and checked. */
+  proposals: (input: { brief: Brief }): ProposalResult => generateProposals(input.brief),
   /** The plan sheet as a drawing model (the print view draws it as SVG). */
   sheet: (input: SheetInput): SheetResult => checkedSheet(input),
   /** The plan sheet as PDF bytes. */

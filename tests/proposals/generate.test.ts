@@ -5,12 +5,15 @@
  * and both numbers, worked out by hand from the template's figures; same brief and seed, same
  * proposals.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { runChecks } from '@/lib/checks';
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { BAY_TEMPLATES } from '@/lib/layout/templates';
 import type { LayoutDoc } from '@/lib/layout/schema';
 import { briefSchema, generateProposals, TYPICAL_BRIEF, type Brief, type ProposalResult } from '@/lib/proposals';
+
+// Each case lays out and checks hundreds of candidates: seconds on a busy two-core machine.
+vi.setConfig({ testTimeout: 60_000 });
 
 const brief = (over: Partial<Brief>): Brief => briefSchema.parse({ ...TYPICAL_BRIEF, ...over });
 const on = (template: string, over: Partial<Brief> = {}) => {
