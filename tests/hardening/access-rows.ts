@@ -89,7 +89,8 @@ const CORE_ROWS: Row[] = [
   { route: '/api/checks', method: 'POST', request: () => ({ json: starterLayout('starter-l-lounge') }), expect: MEMBER },
   // Proposals are the workshop's work: owners and designers of any studio; clients refused.
   {
-    route: '/api/proposals', method: 'POST', request: () => ({ json: { ...TYPICAL_BRIEF, bay: { source: 'template', template: 'l3h2' } } }),
+    // A small bay, so the row tests who may ask, not how long a long bay takes on a loaded machine.
+    route: '/api/proposals', method: 'POST', request: () => ({ json: { ...TYPICAL_BRIEF, bay: { source: 'template', template: 'l1h1' }, standing: null } }),
     expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 },
   },
   {

@@ -6,6 +6,7 @@ import { issuesFromZod } from '@/lib/layout/parse';
 import { bayTemplate } from '@/lib/layout/templates';
 import { briefSchema } from '@/lib/proposals/brief';
 import { runJob } from '@/lib/workers/pool';
+import * as z from 'zod/mini';
 
 export const dynamic = 'force-dynamic';
 
@@ -16,6 +17,9 @@ export const dynamic = 'force-dynamic';
  */
 const limiter = new RateLimiter(3, 0.5);
 const addressLimiter = new RateLimiter(10, 1);
+
+/** The brief, naming a bay template this server has (the templates stay off the browser's bundle). */
+const knownBayBrief = briefSchema.check(z.refine((b) => b.bay.source !== 'template' || bayTemplate(b.bay.template) !== undefined, { message: 'no such bay template', path: ['bay', 'template'] }));
 
 /** A brief is a small form: 16 KB is generous. */
 const MAX_BRIEF_BYTES = 16 * 1024;
@@ -35,9 +39,7 @@ export const POST = handle(async (req) => {
   if (!addressLimiter.take(address)) {
     throw new HttpError(429, 'Too many proposal requests from this address; wait a moment.', { retryAfter: addressLimiter.retryAfter(address) });
   }
-  const parsed = briefSchema.safeParse(await readJson(req, MAX_BRIEF_BYTES));
+  const parsed = knownBayBrief.safeParse(await readJson(req, MAX_BRIEF_BYTES));
   if (!parsed.success) throw invalid(issuesFromZod(parsed.error));
-  const brief = parsed.data;
-  if (brief.bay.source === 'template' && !bayTemplate(brief.bay.template)) throw invalid([{ path: 'bay.template', message: 'no such bay template' }]);
-  return json(await runJob('proposals', { brief }));
+  return json(await runJob('proposals', { brief: parsed.data }));
 });
