@@ -207,9 +207,10 @@ export function generateProposals(brief: Brief, options: GenerateOptions = {}): 
     }
     checked++;
     const report: CheckReport = runChecks(doc);
-    const beds = findBeds(doc, buildUpThickness(doc), settings);
     const failing = report.findings.filter((x: Finding) => x.status === 'fail');
-    const fails = [...failing.map((x) => explainFinding(x, doc, laid.bedAcross)), ...briefMisses(brief, beds)];
+    // Beds are measured again only for a candidate the checks passed: its figures and the mattress class.
+    const beds = failing.length === 0 ? findBeds(doc, buildUpThickness(doc), settings) : [];
+    const fails = [...failing.map((x) => explainFinding(x, doc, laid.bedAcross)), ...(failing.length === 0 ? briefMisses(brief, beds) : [])];
     const shortfall = fails.reduce((s, r) => s + Math.abs(r.required - r.measured), 0);
     evaluated.push({ variant: v, doc, zoning, fails, shortfall, figures: fails.length === 0 ? figuresOf(doc, report, beds) : undefined });
   }
