@@ -132,6 +132,13 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
 
   const error = (key: keyof Values) => formState.errors[key] && <p className="field-error">{formState.errors[key]?.message}</p>;
   const result = run.data;
+  // When the answer comes, bring it into view and move the keyboard focus to its heading.
+  const answer = useRef<HTMLHeadingElement>(null);
+  useEffect(() => {
+    if (!result) return;
+    answer.current?.scrollIntoView({ block: 'start' });
+    answer.current?.focus();
+  }, [result]);
 
   return (
     <div className="space-y-6">
@@ -231,13 +238,14 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
 
       {result && result.ok && (
         <section aria-label="Proposals" className="space-y-3">
+          <h3 ref={answer} tabIndex={-1} className="text-sm font-semibold outline-none">Proposals for this brief</h3>
           <p className="text-sm text-ink-soft">
             {result.proposals.length} proposals from {result.stats.checked} checked candidates ({result.stats.passed} met every check). Each meets every check; open one to refine it.
           </p>
           <ul className="grid grid-cols-1 gap-4 sm:grid-cols-2">
             {result.proposals.map((p) => (
               <li key={p.letter} className="rounded border border-paper-edge bg-paper-light p-3" aria-label={p.title}>
-                <h3 className="text-sm font-semibold">{p.title}</h3>
+                <h4 className="text-sm font-semibold">{p.title}</h4>
                 <p className="text-xs text-ink-soft">{p.zoning}</p>
                 <PlanThumbnail doc={p.doc} title={p.title} />
                 <dl className="mt-2 grid grid-cols-2 gap-x-2 text-xs">
@@ -262,13 +270,13 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
 
       {result && !result.ok && (
         <section aria-label="Why no proposal fits" className="space-y-3">
-          <h3 className="text-sm font-semibold">No arrangement meets this brief in this bay</h3>
+          <h3 ref={answer} tabIndex={-1} className="text-sm font-semibold outline-none">No arrangement meets this brief in this bay</h3>
           <ul className="list-disc space-y-1 pl-5 text-sm">
             {result.reasons.map((r, i) => <li key={i}><span className="font-semibold">{r.rule}:</span> {r.message}</li>)}
           </ul>
           {result.nearest.length > 0 && (
             <>
-              <h4 className="text-sm font-semibold">Nearest candidates</h4>
+              <h4 className="text-sm font-semibold">Nearest candidates, and what each misses</h4>
               <ul className="grid grid-cols-1 gap-4 sm:grid-cols-2">
                 {result.nearest.map((n, i) => (
                   <li key={i} className="rounded border border-paper-edge p-3">

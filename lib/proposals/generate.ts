@@ -16,7 +16,6 @@ import { findBeds, type Bed } from '../checks/beds';
 import { resolveSettings } from '../checks/settings';
 import type { CheckReport, Finding } from '../checks/types';
 import { buildUpThickness } from '../layout/bay';
-import { CURRENT_SCHEMA_VERSION } from '../layout/document';
 import { parseLayoutDoc } from '../layout/parse';
 import type { Bay, LayoutDoc } from '../layout/schema';
 import { bayTemplate, DEFAULT_BUILD_UP } from '../layout/templates';
@@ -26,6 +25,12 @@ import { toModule, type Part } from './parts';
 import { layOut, PATTERNS, patternsFor, type LayoutMiss, type PatternId, type Variant } from './patterns';
 import { figuresOf, scoreAll, type Figures, type Score } from './score';
 import { explainFinding, explainMiss, type Reason } from './reasons';
+
+/**
+ * Proposals are written as version-2 documents (a module's `surface` set by `surfaceOf`) and go
+ * through `parseLayoutDoc`, which migrates them to whatever version this code stores.
+ */
+const PROPOSAL_SCHEMA_VERSION = 2;
 
 /** At most this many candidates are laid out and checked for one brief (bounded work per request). */
 export const MAX_CANDIDATES = 2000;
@@ -138,7 +143,7 @@ function documentOf(f: Frame, brief: Brief, parts: Part[], title: string): Layou
   const placed = f.mirrored ? parts.map((p) => unmirror(p, f.bay.width)) : parts;
   const bay = f.mirrored ? briefBay(brief) : f.bay;
   const parsed = parseLayoutDoc({
-    schemaVersion: CURRENT_SCHEMA_VERSION,
+    schemaVersion: PROPOSAL_SCHEMA_VERSION,
     name: title,
     bay,
     buildUp: DEFAULT_BUILD_UP,

@@ -19,7 +19,7 @@ test('proposals from a brief open as a layout whose checks are all met', async (
   await expect(proposals.first()).toBeVisible({ timeout: 30_000 });
   expect(await proposals.count()).toBeGreaterThanOrEqual(3);
   // Different arrangements, not one plan shifted: each card names its own zoning.
-  const titles = await proposals.locator('h3').allTextContents();
+  const titles = await proposals.locator('h4').allTextContents();
   expect(new Set(titles.map((t) => t.replace(/^Proposal [A-Z]: /, ''))).size).toBeGreaterThanOrEqual(3);
   await keepScreenshot(page, 'proposals');
 
