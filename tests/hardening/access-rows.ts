@@ -10,6 +10,7 @@ import { TYPICAL_BRIEF } from '@/lib/proposals/brief';
 import { SHARING_ROWS } from '../sharing/access-rows';
 import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
+import { MANAGE_ROWS } from './manage-rows';
 
 export const WHO = ['anonymous', 'viewer', 'foreignClient', 'otherClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
@@ -155,4 +156,4 @@ const CORE_ROWS: Row[] = [
   },
 ];
 
-export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS];
+export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS, ...MANAGE_ROWS];
