@@ -7,7 +7,7 @@
  */
 import { clusterByGap, intervalGap, intervalOverlap, largestRectangle, WorkLimitError, type Rect, type WorkBudget } from '../geometry';
 import type { LayoutDoc, Module } from '../layout/schema';
-import { inArrangement, moduleRect, topAboveBare, type BuildUpThickness } from '../layout/bay';
+import { moduleRect, surfaceIn, topAboveBare, type BuildUpThickness } from '../layout/bay';
 import { largestFittingMattress, type Mattress } from './mattress';
 import type { CheckSettings } from './settings';
 
@@ -49,7 +49,7 @@ function seamBridges(rects: Rect[], tolerance: number): Rect[] {
 const MAX_PIECES = 400;
 
 export function findBeds(doc: LayoutDoc, t: BuildUpThickness, settings: CheckSettings, budget?: WorkBudget): Bed[] {
-  const pieces = doc.modules.filter((m) => m.surface === 'sleep' && inArrangement(m, 'sleep'));
+  const pieces = doc.modules.filter((m) => surfaceIn(m, 'sleep') === 'sleep');
   const rects = pieces.map(moduleRect);
   const groups = clusterByGap(rects, settings.levelTolerance, budget);
   const beds = groups.map((g): Omit<Bed, 'number'> => {

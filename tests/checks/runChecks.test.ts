@@ -45,10 +45,10 @@ describe('facts of the trade (common practice, stated by a practising builder), 
   const bay = bayTemplate('l2h2')!.bay;
   // Our own L-shaped lounge: a side bench along the left wall, a rear bench across the back, and an
   // infill board that slides out between them at night, all cushions at 300 mm on the 24 mm floor.
-  const cushions = { elevation: 300, height: 160, surface: 'sleep' as const };
+  const cushions = { elevation: 300, height: 160, surfaces: { travel: 'sleep', lounge: 'sleep', sleep: 'sleep' } as const };
   const lounge = (sleepers: number[]) =>
     layoutDocSchema.parse({
-      schemaVersion: 2,
+      schemaVersion: 3,
       name: 'L-lounge from the L2H2 template',
       bay,
       buildUp: DEFAULT_BUILD_UP,
@@ -112,7 +112,7 @@ describe('the report contract', () => {
     for (const id of ['fit.inside', 'fit.wheel-arch', 'fit.overlap', 'walkway.width', 'walkway.reach', 'headroom.standing', 'headroom.overhead', 'sleep.length', 'sleep.width', 'sleep.level', 'travel.seats', 'egress.sleep']) expect(ids.has(id), id).toBe(true);
   });
   it('no doors and no sleepers: clear warnings saying what is missing, no crash', () => {
-    const doc = l2h2Doc({ occupants: { sleepers: [] }, bay: { doors: [] }, modules: [mod({ id: 'bed', kind: 'bed-platform', x: 1100, y: 36, length: 2000, width: 1400, elevation: 600, height: 300, surface: 'sleep', facing: 'front' })] });
+    const doc = l2h2Doc({ occupants: { sleepers: [] }, bay: { doors: [] }, modules: [mod({ id: 'bed', kind: 'bed-platform', x: 1100, y: 36, length: 2000, width: 1400, elevation: 600, height: 300, surfaces: { travel: 'sleep', lounge: 'sleep', sleep: 'sleep' }, facing: 'front' })] });
     const warned = runChecks(doc).findings.filter((f) => f.status === 'warn').map((f) => f.message);
     expect(warned.some((m) => /No door opening is drawn/.test(m))).toBe(true);
     expect(warned.some((m) => /no sleepers are listed/.test(m))).toBe(true);
@@ -165,7 +165,8 @@ describe('properties (fast-check)', () => {
       height: fc.integer({ min: 1, max: 2500 }),
       facing: fc.constantFrom('front', 'rear', 'left', 'right'),
       arrangements: fc.subarray(['travel', 'lounge', 'sleep'] as const, { minLength: 1 }),
-      surface: fc.option(fc.constantFrom('sleep', 'seat', 'counter'), { nil: undefined }),
+      surfaces: fc.option(fc.record({ travel: fc.constantFrom('sleep', 'seat', 'counter', 'none'), lounge: fc.constantFrom('sleep', 'seat', 'counter', 'none'), sleep: fc.constantFrom('sleep', 'seat', 'counter', 'none') }, { requiredKeys: [] }), { nil: undefined }),
+      mount: fc.constantFrom('inside', 'inside', 'inside', 'under-floor', 'roof', 'rear'),
     });
     const docArb = fc.record({
       modules: fc.array(moduleArb, { maxLength: 25 }),
@@ -177,7 +178,7 @@ describe('properties (fast-check)', () => {
     fc.assert(
       fc.property(docArb, (g) => {
         const input = {
-          schemaVersion: 2,
+          schemaVersion: 3,
           name: 'random',
           bay: { length: 3100, width: 1800, height: 2000, wheelArches: bayTemplate('l2h2')!.bay.wheelArches, doors: g.doors.map((d, i) => ({ ...d, id: `d${i}` })).filter((d) => d.offset + d.width <= (d.wall === 'rear' ? 1800 : 3100)) },
           buildUp: { floor: [], roof: [], walls: [{ material: 'foam', thickness: g.walls }] },

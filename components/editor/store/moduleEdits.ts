@@ -57,7 +57,7 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
     height: spec.height,
     facing: 'front',
     arrangements: [...spec.arrangements],
-    ...(spec.surface ? { surface: spec.surface } : {}),
+    ...(spec.surfaces ? { surfaces: { ...spec.surfaces } } : {}),
     massKg: spec.massKg,
     ...(spec.props ? { props: { ...spec.props } } : {}),
   } as Module);
