@@ -37,6 +37,15 @@ export const RULE_CONSTANTS = Object.freeze({
   walkwayComfortExtra: 100,
   /** Corridor from a bed to a door, mm — common practice, no source (SOURCES.egress). */
   egressCorridor: 400,
+  /** Sleep pieces whose tops step by more than this are separate sleeping places, mm — common practice, no source (SOURCES.placeStep). */
+  placeStep: 150,
+  /**
+   * Sitting height to sit up in bed under, mm: 95th-percentile British man aged 19–65, Pheasant &
+   * Haslegrave, Bodyspace, Table 10.1 (from memory; SOURCES.sittingHeight).
+   */
+  sittingHeight: 965,
+  /** A sleeping place whose mattress top is higher than this needs a ladder or step, mm — EN 747-1, from memory (SOURCES.climb). */
+  climbFrom: 800,
 });
 
 function definedOnly(s: LayoutSettings | undefined): Partial<CheckSettings> {

@@ -356,7 +356,7 @@ export const KINDS = {
     },
   }),
   step: defineKind({
-    kind: 'step', title: 'Step', keywords: ['entry step', 'stair'], family: 'timber',
+    kind: 'step', title: 'Step', keywords: ['entry step', 'stair', 'ladder', 'bunk ladder'], family: 'timber',
     length: 400, width: 300, elevation: 0, height: 200, massKg: 4, arrangements: ALL, usedFromFront: false,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'front']) }),
     symbol: (m) => [0.35, 0.6].map((t) => path([[m.length * (t - 0.12), m.width * 0.25], [m.length * t, m.width / 2], [m.length * (t - 0.12), m.width * 0.75]])),
