@@ -87,7 +87,7 @@ describe('a bunk over the lounge bed', () => {
   // separates places. Box bay 2000 mm high, no build-up.
   const lounge = mod({ id: 'lounge', kind: 'bed-platform', label: 'Lounge bed', x: 0, y: 0, length: 1900, width: 1200, elevation: 300, height: 160, facing: 'front' , surfaces: { sleep: 'sleep' } });
   const bunk = mod({ id: 'bunk', kind: 'bed-platform', label: 'Upper bunk', x: 0, y: 1100, length: 1800, width: 700, elevation: 1150, height: 100, facing: 'front', arrangements: ['sleep'], surfaces: { sleep: 'sleep' } });
-  const ladder = mod({ id: 'ladder', kind: 'step', label: 'Bunk ladder', x: 1900, y: 1400, length: 100, width: 400, height: 1150, facing: 'front', arrangements: ['sleep'] });
+  const ladder = mod({ id: 'ladder', kind: 'step', label: 'Bunk ladder', x: 1800, y: 1200, length: 100, width: 100, height: 1150, facing: 'front', arrangements: ['sleep'] });
   const doc = boxDoc({ modules: [lounge, bunk, ladder], occupants: { sleepers: [1800, 1650, 1200] } });
 
   it('is its own sleeping place, not a bed “1140 mm out of level” with the lounge bed', () => {
