@@ -14,6 +14,7 @@ import { interiorOf } from '../layout/bay';
 import { CheckContext } from './context';
 import { egressSleep } from './egress';
 import { fitInside, fitOverlap, fitWheelArch } from './fit';
+import { fitOutside } from './outside';
 import { headroomOverhead, headroomStanding } from './headroom';
 import { resolveSettings } from './settings';
 import { sleepChecks } from './sleep';
@@ -96,7 +97,7 @@ export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): Check
   // body only; outside-mounted ones have their own fit rule and count in the build-planning figures.
   const ctx = new CheckContext(interiorOf(doc), settings);
   const findings: Finding[] = boundReport([
-    ...guarded('fit', () => [...fitInside(ctx.doc, ctx.t), ...fitWheelArch(ctx.doc, ctx.t), ...fitOverlap(ctx.doc)]),
+    ...guarded('fit', () => [...fitInside(ctx.doc, ctx.t), ...fitWheelArch(ctx.doc, ctx.t), ...fitOverlap(ctx.doc), ...fitOutside(doc, settings)]),
     ...guarded('walkway', () => WALKWAY_ARRANGEMENTS.flatMap((a) => [walkwayReach(ctx, a), walkwayWidth(ctx, a)])),
     ...guarded('headroom', () => [headroomStanding(ctx), ...WALKWAY_ARRANGEMENTS.flatMap((a) => headroomOverhead(ctx, a))]),
     ...guarded('sleep', () => [...sleepChecks(ctx), ...sleepPlaces(ctx)]),

@@ -168,6 +168,8 @@ export const settingsSchema = z.strictObject({
   levelTolerance: z.optional(mm(500)),
   headMargin: z.optional(mm(1000)),
   mattressRegion: z.optional(z.enum(MATTRESS_REGIONS)),
+  /** The load floor's height above the road, unladen (the envelope for modules under the floor). */
+  floorAboveRoad: z.optional(mm(2000)),
 });
 export type LayoutSettings = z.infer<typeof settingsSchema>;
 

@@ -170,3 +170,43 @@ describe('a rack behind the rear axle unloads the front axle (the lever rule)', 
     expect(withRack.rearKg - without.rearKg).toBeCloseTo(35.217, 3);
   });
 });
+
+describe('modules outside the body', () => {
+  // Our L2H2 bay: 3100 × 1800, arches x 1700–2650 standing in 210 mm from each wall. Envelope under
+  // the floor: load floor 550 mm above the road − 200 mm ground clearance kept = 350 mm (both
+  // common practice, no source).
+  const tank = (over: Partial<ReturnType<typeof mod>> = {}) =>
+    mod({ id: 'grey', kind: 'grey-water-tank', label: 'Underslung tank', x: 1000, y: 700, length: 600, width: 400, height: 200, facing: 'front', mount: 'under-floor', ...over });
+
+  it('an underslung tank 200 mm deep inside the floor pan passes; 400 mm deep is 50 mm too deep', () => {
+    expect(only(l2h2Doc({ modules: [tank()] }), 'fit.outside')).toMatchObject({ status: 'pass', measured: 200, required: 350 });
+    const deep = only(l2h2Doc({ modules: [tank({ height: 400 })] }), 'fit.outside');
+    expect(deep).toMatchObject({ status: 'fail', measured: 400, required: 350 });
+    expect(deep.message).toMatch(/hangs 400 mm below the floor, 50 mm more than the 350 mm allowed/);
+    // A floor 650 mm above the road allows 650 − 200 = 450 mm.
+    expect(only(l2h2Doc({ modules: [tank({ height: 400 })], settings: { floorAboveRoad: 650 } }), 'fit.outside').status).toBe('pass');
+  });
+
+  it('under a wheel arch is a failure naming the arch', () => {
+    const f = only(l2h2Doc({ modules: [tank({ x: 1800, y: 0 })] }), 'fit.outside');
+    expect(f.status).toBe('fail');
+    expect(f.message).toMatch(/under the left wheel arch/);
+  });
+
+  it('behind the rear doors: 1000 mm of projection passes, 1001 mm warns, reaching into the body fails', () => {
+    const rack = (x: number, length: number) => mod({ id: 'rack', kind: 'drawer-unit', label: 'Bike rack', x, y: 300, length, width: 1200, height: 800, facing: 'rear', mount: 'rear' });
+    expect(only(l2h2Doc({ modules: [rack(3100, 1000)] }), 'fit.outside')).toMatchObject({ status: 'pass', measured: 1000 });
+    expect(only(l2h2Doc({ modules: [rack(3100, 1001)] }), 'fit.outside')).toMatchObject({ status: 'warn', measured: 1001 });
+    expect(only(l2h2Doc({ modules: [rack(3000, 500)] }), 'fit.outside').status).toBe('fail');
+  });
+
+  it('is left out of the interior rules: a tank under a counter is no overlap, and it blocks no walkway', () => {
+    const counter = mod({ id: 'counter', kind: 'kitchen-counter', x: 1000, y: 36, length: 1200, width: 600, facing: 'right' });
+    const doc = l2h2Doc({ modules: [counter, tank({ y: 36 })] });
+    expect(only(doc, 'fit.overlap')).toMatchObject({ status: 'pass' });
+    expect(findings(runChecks(doc), 'fit.inside').flatMap((f) => f.moduleIds ?? [])).not.toContain('grey');
+    const alone = runChecks(l2h2Doc({ modules: [counter] }));
+    const withTank = runChecks(doc);
+    expect(findings(withTank, 'walkway.width').map((f) => f.measured)).toEqual(findings(alone, 'walkway.width').map((f) => f.measured));
+  });
+});
