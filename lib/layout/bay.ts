@@ -9,7 +9,7 @@
  */
 import type { Opening } from '../geometry/freeFloor';
 import { rectFromExtent, type Rect } from '../geometry/rect';
-import type { Arrangement, Door, LayoutDoc, Module, Mount, Surface } from './schema';
+import type { Arrangement, Door, Facing, LayoutDoc, Module, Mount, Surface } from './schema';
 
 /** A placed box as the document writes it: min corner and extents along x and y. */
 export interface Footprint {
@@ -116,6 +116,24 @@ export function workingZone(m: Module, reach: number): Rect {
     case 'right':
       return { x0: r.x0, y0: r.y1, x1: r.x1, y1: r.y1 + reach };
   }
+}
+
+/**
+ * The way a module should face when it stands against one wall of the lined interior: into the
+ * room, away from that wall (left wall → faces right, right wall → left, rear → front, bulkhead →
+ * rear). A side wall wins over an end wall in a corner; null when it touches no wall, or both side
+ * walls (it spans the van).
+ */
+export function roomFacing(doc: Pick<LayoutDoc, 'bay' | 'buildUp'>, f: Footprint): Facing | null {
+  const lined = linedInterior(doc);
+  const left = f.y <= lined.y0;
+  const right = f.y + f.width >= lined.y1;
+  if (left && right) return null;
+  if (left) return 'right';
+  if (right) return 'left';
+  if (f.x + f.length >= lined.x1) return 'front';
+  if (f.x <= lined.x0) return 'rear';
+  return null;
 }
 
 // ---- heights ----------------------------------------------------------------------------------
