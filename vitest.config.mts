@@ -17,6 +17,7 @@ const PURE_FILES = [
   'sheet/layout-file',
   'sheet/paper',
   'sheet/pdf',
+  'sheet/running-dimensions',
   'sharing/mail-compose',
   'sharing/pin-geometry',
   'sharing/revision-diff',

@@ -9,6 +9,7 @@ import { starterLayout } from '@/lib/layout/templates';
 import { SHARING_ROWS } from '../sharing/access-rows';
 import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
+import { MANAGE_ROWS } from './manage-rows';
 
 export const WHO = ['anonymous', 'viewer', 'foreignClient', 'otherClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
@@ -148,4 +149,4 @@ const CORE_ROWS: Row[] = [
   },
 ];
 
-export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS];
+export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS, ...MANAGE_ROWS];
