@@ -372,12 +372,12 @@ async function nextVariantName(studioId: string, base: string): Promise<string> 
  * linked to its original (a variant of a variant links to the same original). Revisions, mark-ups,
  * files and quotes stay with the layout they belong to.
  */
-export async function duplicateAsVariant(actor: Actor, id: string): Promise<LayoutDto> {
+export async function duplicateAsVariant(actor: Actor, id: string, name?: string): Promise<LayoutDto> {
   const source = await loadLayoutFor(actor, id, { withDoc: true, forEdit: 'duplicate layouts' });
   const db = await getDb();
   const [meta] = await db.select({ variantOf: layouts.variantOf }).from(layouts).where(eq(layouts.id, source.id)).limit(1);
-  const name = await nextVariantName(actor.studioId, source.name);
-  return createLayout(actor, { name, doc: source.doc, clientId: source.clientId, variantOf: meta?.variantOf ?? source.id });
+  const variantName = name ?? (await nextVariantName(actor.studioId, source.name));
+  return createLayout(actor, { name: variantName, doc: source.doc, clientId: source.clientId, variantOf: meta?.variantOf ?? source.id });
 }
 
 /**

@@ -69,7 +69,7 @@ export function LayoutRowActions({ layout, canEdit }: { layout: LayoutSummaryDto
 
   const archive = () => run(`“${layout.name}” archived.`, () => apiFetch(`/api/layouts/${layout.id}/archive`, { method: 'POST' }));
   const restore = () => run(`“${layout.name}” restored to the list.`, () => apiFetch(`/api/layouts/${layout.id}/archive`, { method: 'DELETE' }));
-  const duplicate = () => run(`Variant of “${layout.name}” made.`, () => apiFetch(`/api/layouts/${layout.id}/variants`, { method: 'POST' }));
+  const duplicate = () => run(`Variant of “${layout.name}” made.`, () => apiFetch(`/api/layouts/${layout.id}/variants`, { method: 'POST', json: {} }));
   const remove = async () => {
     if (await run(`“${layout.name}” deleted.`, () => apiFetch(`/api/layouts/${layout.id}`, { method: 'DELETE' }))) setConfirmDelete(false);
   };

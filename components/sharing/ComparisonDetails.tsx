@@ -30,7 +30,10 @@ export function ComparisonDetails({ data, markLetter, units, titles = { modules:
   const { diff } = data;
   const nothing = !diff.added.length && !diff.removed.length && !diff.changed.length;
   const topics = [...new Set(data.findings.map((f) => findingTopic(f.id)).filter((t): t is HazardTopic => t !== null))];
-  const mark = <span className="mt-0.5 text-copper"><RevisionMarkIcon letter={markLetter} /></span>;
+  // Between two variants there is no revision letter: a plain copper mark instead of an empty triangle.
+  const mark = markLetter
+    ? <span className="mt-0.5 text-copper"><RevisionMarkIcon letter={markLetter} /></span>
+    : <span className="mt-0.5 text-copper" aria-hidden="true">◆</span>;
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <section className="panel p-4 text-sm" data-testid="module-changes">

@@ -60,6 +60,9 @@ export function baseVersionFrom(req: Request): number | null {
   return m ? Number(m[1]) : NaN;
 }
 
+/** Duplicating a layout as a variant: `{}` names it "… variant N"; `{ name }` names it so. */
+export const variantBody = z.strictObject({ name: z.optional(name) });
+
 /** Renaming a layout (PATCH /api/layouts/:id). */
 export const renameLayoutBody = z.strictObject({ name });
 

@@ -83,15 +83,15 @@ describe('renaming a layout', () => {
 describe('duplicating a layout as a variant', () => {
   it('names it "… variant 2", then 3, keeps the client, links it to its original and shows both in the table', async () => {
     const { id } = await newLayout('Hale — L3H2 touring');
-    const first = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer });
+    const first = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: {} });
     expect(first.status).toBe(201);
     expect(first.body).toMatchObject({ name: 'Hale — L3H2 touring variant 2', client: { id: w.client.id }, variantOf: { id, name: 'Hale — L3H2 touring' }, version: 1 });
     const original = await read(id);
     expect(first.body.doc.modules).toEqual(original.doc.modules);
-    const second = await call(variants.POST, { method: 'POST', params: { id }, as: w.owner });
+    const second = await call(variants.POST, { method: 'POST', params: { id }, as: w.owner, json: {} });
     expect(second.body.name).toBe('Hale — L3H2 touring variant 3');
     // A variant of a variant takes the next number and links to the same original.
-    const third = await call(variants.POST, { method: 'POST', params: { id: first.body.id }, as: w.designer });
+    const third = await call(variants.POST, { method: 'POST', params: { id: first.body.id }, as: w.designer, json: {} });
     expect(third.body).toMatchObject({ name: 'Hale — L3H2 touring variant 4', variantOf: { id } });
 
     const table = await call(list.GET, { as: w.designer });
@@ -109,12 +109,27 @@ describe('duplicating a layout as a variant', () => {
     ]);
   });
 
+  it('takes a name of its own, and refuses anything but an optional name (400)', async () => {
+    const { id } = await newLayout('Named variant source');
+    const named = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: { name: 'Rear-kitchen option' } });
+    expect(named.status).toBe(201);
+    expect(named.body).toMatchObject({ name: 'Rear-kitchen option', variantOf: { id } });
+    const before = (await db.select({ id: layouts.id }).from(layouts)).length;
+    for (const bad of [{ json: { name: '' } }, { json: { clientId: null } }, { json: [] }, { body: 'plain', headers: { 'content-type': 'text/plain' } }]) {
+      const res = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, ...bad });
+      expect(res.status, JSON.stringify(bad)).toBeGreaterThanOrEqual(400);
+      expect(res.status).toBeLessThan(500);
+      expect(res.body.error).toBeTruthy();
+    }
+    expect((await db.select({ id: layouts.id }).from(layouts)).length).toBe(before);
+  });
+
   it('refuses the client (403) and a stranger (404), and a malformed id is 404; nothing is made', async () => {
     const { id } = await newLayout('Variant rights');
     const before = (await db.select({ id: layouts.id }).from(layouts)).length;
-    expect((await call(variants.POST, { method: 'POST', params: { id }, as: w.client })).status).toBe(403);
-    expect((await call(variants.POST, { method: 'POST', params: { id }, as: w.foreignOwner })).status).toBe(404);
-    expect((await call(variants.POST, { method: 'POST', params: { id: 'not-an-id' }, as: w.designer })).status).toBe(404);
+    expect((await call(variants.POST, { method: 'POST', params: { id }, as: w.client, json: {} })).status).toBe(403);
+    expect((await call(variants.POST, { method: 'POST', params: { id }, as: w.foreignOwner, json: {} })).status).toBe(404);
+    expect((await call(variants.POST, { method: 'POST', params: { id: 'not-an-id' }, as: w.designer, json: {} })).status).toBe(404);
     expect((await db.select({ id: layouts.id }).from(layouts)).length).toBe(before);
   });
 });
@@ -122,7 +137,7 @@ describe('duplicating a layout as a variant', () => {
 describe('archiving and restoring', () => {
   it('an archived variant leaves the default list for the archived one and comes back on restore', async () => {
     const { id } = await newLayout('Archive me');
-    const variant = (await call(variants.POST, { method: 'POST', params: { id }, as: w.designer })).body;
+    const variant = (await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: {} })).body;
     const ids = async (archived: boolean) =>
       (await call(list.GET, { as: w.designer, path: archived ? '/api/layouts?archived=1' : '/api/layouts' })).body.layouts.map((l: { id: string }) => l.id);
     expect((await call(archive.POST, { method: 'POST', params: { id: variant.id }, as: w.designer })).body.archivedAt).not.toBeNull();
@@ -203,7 +218,7 @@ describe('saved versions', () => {
 describe('comparing two variants', () => {
   it('answers both plans as last saved, what differs and the findings whose status differs', async () => {
     const { id } = await newLayout('Compare original');
-    const variant = (await call(variants.POST, { method: 'POST', params: { id }, as: w.designer })).body;
+    const variant = (await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: {} })).body;
     const removed = variant.doc.modules[0];
     await save(variant.id, variant.version, { ...variant.doc, modules: variant.doc.modules.slice(1) });
     const res = await call(compare.GET, { params: { id }, path: `/api/layouts/${id}/compare?with=${variant.id}`, as: w.client });

@@ -36,7 +36,7 @@ export const MANAGE_ROWS: Row[] = [
   },
   {
     route: '/api/layouts/[id]/variants', method: 'POST',
-    request: async (fx) => ({ params: { id: await freshLayout(fx) } }),
+    request: async (fx) => ({ params: { id: await freshLayout(fx) }, json: {} }),
     expect: { ...WRITE, designer: 201, owner: 201 },
   },
   { route: '/api/layouts/[id]/variants', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: READ },
