@@ -4,6 +4,7 @@
 import type { LayoutDoc } from '@/lib/layout/schema';
 import { palette } from '@/lib/look';
 import { kindSpec } from '@/lib/layout/kinds';
+import { surfaceIn } from '@/lib/layout/bay';
 
 const MARGIN = 60;
 
@@ -13,7 +14,7 @@ export function PlanThumbnail({ doc, title }: { doc: LayoutDoc; title: string })
   const standing = doc.modules.filter((m) => m.arrangements.includes('travel') && m.elevation < 1000);
   const high = doc.modules.filter((m) => m.arrangements.includes('travel') && m.elevation >= 1000);
   const sleepOnly = doc.modules.filter((m) => !m.arrangements.includes('travel'));
-  const fill = (m: LayoutDoc['modules'][number]) => (m.surface === 'sleep' ? palette.copperLight : m.kind.includes('water') ? palette.paperDeep : palette.paperLight);
+  const fill = (m: LayoutDoc['modules'][number]) => (surfaceIn(m, 'sleep') === 'sleep' ? palette.copperLight : m.kind.includes('water') ? palette.paperDeep : palette.paperLight);
   const label = (m: LayoutDoc['modules'][number]) => m.label ?? kindSpec(m.kind).title;
   return (
     <svg viewBox={`${-MARGIN} ${-MARGIN} ${L + 2 * MARGIN} ${W + 2 * MARGIN}`} role="img" aria-label={`Plan of ${title}`} className="h-auto w-full">

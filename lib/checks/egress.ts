@@ -1,12 +1,16 @@
 /**
- * egress.sleep — in the sleep arrangement, every bed has a way out: a door opening borders the
- * bed directly, or a corridor at least 400 mm wide (common practice, SOURCES.egress) leads from a
- * bed edge to a door. "From a bed edge" means a 400 mm disk, come in at a door, can step right up
- * to (touch) one of the bed's pieces. Pure: must never import UI, framework or database code.
+ * egress.sleep — in the sleep arrangement, every sleeping place has a way out: a door opening
+ * borders the place directly, or a corridor at least 400 mm wide (common practice, SOURCES.egress)
+ * leads from its edge to a door. "From its edge" means a 400 mm disk, come in at a door, can step
+ * right up to (touch) one of its pieces. A place whose mattress top is more than 800 mm above the
+ * floor (EN 747-1, from memory; SOURCES.climb) also needs a ladder or step (a `step` module present
+ * in sleep within 400 mm of its pieces in plan); without one it fails. Steps are found through an
+ * R-tree, so the work stays n log n. Pure: must never import UI, framework or database code.
  */
-import { FreeFloorModel, intervalOverlap } from '../geometry';
+import { FreeFloorModel, intervalOverlap, RectIndex } from '../geometry';
 import type { Module } from '../layout/schema';
-import { doorOpenings, linedInterior, moduleRect } from '../layout/bay';
+import { doorOpenings, inArrangement, linedInterior, moduleRect } from '../layout/bay';
+import { placeName, type Bed } from './beds';
 import { describeDoor } from './moduleRoles';
 import type { CheckContext } from './context';
 import { floorObstacles } from './floorAnalysis';
@@ -51,8 +55,9 @@ export function egressSleep(ctx: CheckContext): Finding[] {
     budget: ctx.budget,
   });
   const floor = model.sweep(r);
-  return beds.map((bed) => {
-    const name = beds.length > 1 ? `Bed ${bed.number} (${listNames(bed.pieces.map(moduleName), 4)})` : `The bed (${listNames(bed.pieces.map(moduleName), 4)})`;
+  const climb = climbing(ctx, beds);
+  return beds.map((bed, b) => {
+    const name = placeName(bed, beds.length);
     const moduleIds = bed.pieces.map((m) => m.id);
     const direct = new Set(bed.pieces.flatMap((p) => borderingDoors(ctx, p)));
     let mask = 0;
@@ -66,6 +71,24 @@ export function egressSleep(ctx: CheckContext): Finding[] {
       ...[...direct].map((k) => `${describeDoor(doors[k])} borders it`),
       ...viaCorridor.map((k) => `a corridor at least ${mm(corridor)} wide leads to the ${describeDoor(doors[k])}`),
     ];
-    return { ...base, status: 'pass' as const, moduleIds, measured: ways, message: `${name} has ${ways === 1 ? 'a way' : `${ways} ways`} out: ${listNames(said)}. Needs at least one. ${SOURCES.egress.brief}.` };
+    const way = `${name} has ${ways === 1 ? 'a way' : `${ways} ways`} out: ${listNames(said)}. Needs at least one. ${SOURCES.egress.brief}.`;
+    const c = climb[b];
+    if (!c) return { ...base, status: 'pass' as const, moduleIds, measured: ways, message: way };
+    if (c.steps.length === 0) {
+      return { ...base, status: 'fail' as const, moduleIds, measured: ways, message: `${way} But its mattress top is ${mm(bed.top)} above the floor, higher than ${mm(RULE_CONSTANTS.climbFrom)}, and no ladder or step stands within ${mm(corridor)} of it: add one. ${SOURCES.climb.brief}.`, source: `${SOURCES.egress.cite}; ${SOURCES.climb.cite}` };
+    }
+    return { ...base, status: 'pass' as const, moduleIds: [...moduleIds, ...c.steps.map((m) => m.id)], measured: ways, message: `${way} Its mattress top is ${mm(bed.top)} above the floor, so it needs a ladder or step: ${listNames(c.steps.map(moduleName))} beside it. ${SOURCES.climb.brief}.`, source: `${SOURCES.egress.cite}; ${SOURCES.climb.cite}` };
+  });
+}
+
+/** For each place at or above climbFrom, the steps (or ladders) within the corridor width of its pieces; null below it. */
+function climbing(ctx: CheckContext, beds: Bed[]): ({ steps: Module[] } | null)[] {
+  const steps = ctx.doc.modules.filter((m) => m.kind === 'step' && inArrangement(m, 'sleep'));
+  const index = new RectIndex(steps.map(moduleRect));
+  return beds.map((bed) => {
+    if (bed.top <= RULE_CONSTANTS.climbFrom) return null;
+    const near = new Set<number>();
+    for (const p of bed.pieces) for (const j of index.near(moduleRect(p), RULE_CONSTANTS.egressCorridor, ctx.budget)) near.add(j);
+    return { steps: [...near].sort((a, b) => a - b).map((j) => steps[j]) };
   });
 }

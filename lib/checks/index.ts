@@ -10,12 +10,15 @@
  */
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
+import { interiorOf } from '../layout/bay';
 import { CheckContext } from './context';
 import { egressSleep } from './egress';
 import { fitInside, fitOverlap, fitWheelArch } from './fit';
+import { fitOutside } from './outside';
 import { headroomOverhead, headroomStanding } from './headroom';
 import { resolveSettings } from './settings';
 import { sleepChecks } from './sleep';
+import { sleepPlaces } from './places';
 import { systemChecks } from './systems';
 import { travelSeats } from './travel';
 import type { CheckReport, Finding } from './types';
@@ -92,12 +95,14 @@ function guarded(family: string, run: () => Finding[]): Finding[] {
 
 export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): CheckReport {
   const settings = resolveSettings(doc, options.studioDefaults);
-  const ctx = new CheckContext(doc, settings);
+  // The interior rules (fit, walkway, headroom, sleep, egress, travel) see the modules inside the
+  // body only; outside-mounted ones have their own fit rule and count in the build-planning figures.
+  const ctx = new CheckContext(interiorOf(doc), settings);
   const findings: Finding[] = boundReport([
-    ...guarded('fit', () => [...fitInside(doc, ctx.t), ...fitWheelArch(doc, ctx.t), ...fitOverlap(doc)]),
+    ...guarded('fit', () => [...fitInside(ctx.doc, ctx.t), ...fitWheelArch(ctx.doc, ctx.t), ...fitOverlap(ctx.doc), ...fitOutside(doc, settings)]),
     ...guarded('walkway', () => WALKWAY_ARRANGEMENTS.flatMap((a) => [walkwayReach(ctx, a), walkwayWidth(ctx, a)])),
     ...guarded('headroom', () => [headroomStanding(ctx), ...WALKWAY_ARRANGEMENTS.flatMap((a) => headroomOverhead(ctx, a))]),
-    ...guarded('sleep', () => sleepChecks(ctx)),
+    ...guarded('sleep', () => [...sleepChecks(ctx), ...sleepPlaces(ctx)]),
     ...guarded('egress', () => egressSleep(ctx)),
     ...guarded('travel', () => [travelSeats(ctx)]),
     ...guarded('systems', () => systemChecks(doc)),

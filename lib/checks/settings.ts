@@ -16,6 +16,8 @@ export interface CheckSettings {
   /** Headroom above the tallest stature before it stops being a warning. */
   headMargin: number;
   mattressRegion: MattressRegion;
+  /** Height of the load floor above the road, unladen, mm (the under-floor envelope). */
+  floorAboveRoad: number;
 }
 
 export const DEFAULT_SETTINGS: Readonly<CheckSettings> = Object.freeze({
@@ -25,6 +27,7 @@ export const DEFAULT_SETTINGS: Readonly<CheckSettings> = Object.freeze({
   levelTolerance: 20, // common practice, no source (SOURCES.bedLevel)
   headMargin: 20, // common practice, no source (SOURCES.headroom)
   mattressRegion: 'uk',
+  floorAboveRoad: 550, // common practice, no source: a large panel van's load floor, unladen (SOURCES.underFloor)
 });
 
 /** Fixed constants of the rules (not per-layout settings). */
@@ -37,6 +40,19 @@ export const RULE_CONSTANTS = Object.freeze({
   walkwayComfortExtra: 100,
   /** Corridor from a bed to a door, mm — common practice, no source (SOURCES.egress). */
   egressCorridor: 400,
+  /** Sleep pieces whose tops step by more than this are separate sleeping places, mm — common practice, no source (SOURCES.placeStep). */
+  placeStep: 150,
+  /**
+   * Sitting height to sit up in bed under, mm: 95th-percentile British man aged 19–65, Pheasant &
+   * Haslegrave, Bodyspace, Table 10.1 (from memory; SOURCES.sittingHeight).
+   */
+  sittingHeight: 965,
+  /** A sleeping place whose mattress top is higher than this needs a ladder or step, mm — EN 747-1, from memory (SOURCES.climb). */
+  climbFrom: 800,
+  /** Ground clearance an under-floor module keeps, mm — common practice, no source (SOURCES.underFloor). */
+  groundClearance: 200,
+  /** Rear projection beyond which it must be marked, mm — from memory (SOURCES.rearProjection). */
+  rearProjectionMax: 1000,
 });
 
 function definedOnly(s: LayoutSettings | undefined): Partial<CheckSettings> {

@@ -9,10 +9,10 @@
  * Every length and width message names the largest standard mattress (mattressRegion) that fits.
  * Pure: must never import UI, framework or database code.
  */
-import type { Bed } from './beds';
+import { placeName, type Bed } from './beds';
 import type { CheckContext } from './context';
 import { formatMattress, mattressSource, MATTRESSES } from './mattress';
-import { listNames, mm, moduleName, plural } from './naming';
+import { mm, plural } from './naming';
 import { SOURCES } from './sources';
 import type { Finding } from './types';
 
@@ -39,10 +39,7 @@ export function assignSleepers(beds: Bed[], sleepers: number[], perSleeper: numb
   return out;
 }
 
-function bedName(bed: Bed, count: number): string {
-  const pieces = listNames(bed.pieces.map(moduleName), 4);
-  return count > 1 ? `Bed ${bed.number} (${pieces})` : `The bed (${pieces})`;
-}
+const bedName = placeName;
 
 function mattressWords(ctx: CheckContext, bed: Bed): string {
   const region = ctx.settings.mattressRegion;
@@ -65,7 +62,7 @@ export function sleepChecks(ctx: CheckContext): Finding[] {
   if (beds.length === 0) {
     const need = sleepers.length === 0 ? 'no sleepers are listed either' : `${plural(sleepers.length, 'sleeper')} (${sleepers.map(mm).join(', ')}) need one`;
     for (const [id, source] of [['sleep.length', lengthSource], ['sleep.width', widthSource]] as const) {
-      findings.push({ id, status: 'warn', arrangement, measured: 0, required: 1, unit: 'beds', message: `No bed is made up in the sleep arrangement (no module with a sleep surface there); ${need}. Give the bed modules surface “sleep” and the sleep arrangement. ${SOURCES.bedLength.brief}.`, source });
+      findings.push({ id, status: 'warn', arrangement, measured: 0, required: 1, unit: 'beds', message: `No bed is made up in the sleep arrangement (no module whose top is a bed there); ${need}. Set the bed modules’ top in sleep to “bed”. ${SOURCES.bedLength.brief}.`, source });
     }
     return findings;
   }

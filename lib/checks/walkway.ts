@@ -10,8 +10,8 @@
  */
 import { widestRouteBounds, widestRouteIntoZone } from '../geometry';
 import type { Arrangement } from '../layout/schema';
-import { doorOpenings } from '../layout/bay';
-import { describeDoor } from './moduleRoles';
+import { archBoxes, doorOpenings, inArrangement, moduleRect } from '../layout/bay';
+import { blocksFloor, describeDoor } from './moduleRoles';
 import type { CheckContext } from './context';
 import type { FloorAnalysis } from './floorAnalysis';
 import { listNames, mm, moduleName, plural } from './naming';
@@ -122,8 +122,12 @@ export function walkwayWidth(ctx: CheckContext, arrangement: Arrangement): Findi
     return { ...base, status: 'warn', measured: 0, message: `No door opening is drawn in the bay, so the ${arrangement} walkway width cannot be measured: add the doors. ${widthBrief}.` };
   }
   const anyReached = a.targets.some((t) => t.reached);
-  if (!a.floor.anyEntry || (a.targets.length > 0 && !anyReached)) {
-    return { ...base, status: 'warn', measured: 0, message: `In ${arrangement} there is no walkway at least ${mm(walkwayMin)} wide leading in from a door, so its width is 0 mm; a comfortable walkway is ${mm(comfortable)}. ${widthBrief}.` };
+  if (!a.floor.anyEntry) {
+    return { ...base, status: 'warn', measured: 0, message: `In ${arrangement} nobody ${mm(walkwayMin)} wide gets in: ${blockedDoors(ctx, arrangement)}. Clear a door opening to measure the walkway; a comfortable walkway is ${mm(comfortable)}. ${widthBrief}.` };
+  }
+  if (a.targets.length > 0 && !anyReached) {
+    const names = listNames(a.targets.map((t) => `${moduleName(t.module)} (facing ${t.module.facing})`), 4);
+    return { ...base, status: 'warn', measured: 0, message: `In ${arrangement} a person gets in at a door but cannot stand in front of anything worked from its front — ${names}: each front faces a wall or is boxed in by other modules (see the reach result). Turn them to face the room, then the walkway is measured; a comfortable walkway is ${mm(comfortable)}. ${widthBrief}.` };
   }
   const doors = ctx.doc.bay.doors;
   const { t } = ctx;
@@ -138,4 +142,26 @@ export function walkwayWidth(ctx: CheckContext, arrangement: Arrangement): Findi
     measured: diameter,
     message: `The narrowest part of the ${arrangement} walkway is ${mm(diameter)} (the widest person who still gets ${what}); ${ok ? 'at least' : 'below'} the comfortable ${mm(comfortable)} (minimum ${mm(walkwayMin)} + ${mm(RULE_CONSTANTS.walkwayComfortExtra)}).${squeeze} ${widthBrief}.`,
   };
+}
+
+/** Why no door admits the walkway person, door by door: too narrow, or which modules stand in its way. */
+function blockedDoors(ctx: CheckContext, arrangement: Arrangement): string {
+  const { walkwayMin } = ctx.settings;
+  const reasons = doorOpenings(ctx.doc).map(({ door }) => {
+    if (door.width < walkwayMin) return `the ${describeDoor(door)} is narrower than that`;
+    // What stands on the floor within a person's width inside the opening.
+    const span0 = door.offset, span1 = door.offset + door.width;
+    const inside = walkwayMin + ctx.t.wallT;
+    const near = (m: (typeof ctx.doc.modules)[number]) => {
+      const r = moduleRect(m);
+      if (door.wall === 'rear') return r.x1 > ctx.doc.bay.length - walkwayMin && r.y0 < span1 && r.y1 > span0;
+      if (door.wall === 'left') return r.y0 < inside && r.x0 < span1 && r.x1 > span0;
+      return r.y1 > ctx.doc.bay.width - inside && r.x0 < span1 && r.x1 > span0;
+    };
+    const blockers = ctx.doc.modules.filter((m) => inArrangement(m, arrangement) && blocksFloor(m) && near(m)).map(moduleName);
+    const arches = archBoxes(ctx.doc).filter((x) => (door.wall === 'rear' ? x.rect.x1 > ctx.doc.bay.length - walkwayMin : x.side === door.wall && x.rect.x0 < span1 && x.rect.x1 > span0));
+    const what = [...blockers, ...arches.map((x) => `the ${x.side} wheel arch`)];
+    return what.length ? `${listNames(what, 4)} ${what.length === 1 ? 'stands' : 'stand'} in the ${describeDoor(door)}` : `the ${describeDoor(door)} leads to no floor ${mm(walkwayMin)} wide`;
+  });
+  return reasons.join('; ');
 }

@@ -135,3 +135,31 @@ export function overlapGroups(
   }
   return { groups: Array.from(byRoot.values()), deepestPartner, complete, examined };
 }
+
+/**
+ * A fixed set of rectangles to ask "which of these share a positive area with this one?" (or,
+ * with `reach`, lie within that distance of it). Each question's visits are spent from `budget`,
+ * so many questions over a hostile pile stop at the work limit instead of growing as n².
+ */
+export class RectIndex {
+  private readonly index: Flatbush | null;
+
+  constructor(readonly rects: readonly Rect[]) {
+    this.index = buildIndex(rects);
+  }
+
+  /** Indices (ascending) of rectangles overlapping `q` in area, or within `reach` of it when reach > 0. */
+  near(q: Rect, reach = 0, budget?: WorkBudget): number[] {
+    if (!this.index) return [];
+    const out: number[] = [];
+    let visited = 0;
+    this.index.search(q.x0 - reach, q.y0 - reach, q.x1 + reach, q.y1 + reach, (j) => {
+      visited++;
+      const r = this.rects[j];
+      if (reach > 0 ? rectGap(q, r) <= reach : rectsOverlap(q, r)) out.push(j);
+      return false;
+    });
+    budget?.spend(1 + 2 * visited);
+    return out.sort((a, b) => a - b);
+  }
+}

@@ -2,14 +2,14 @@
  * The bay model: the layout document seen as geometry, in bay coordinates (mm, origin at the
  * front-left corner of the bare-metal floor, x rearwards, y across). One home for the build-up
  * thicknesses, the clear height, the lined interior, the wheel-arch boxes, door openings, module
- * footprints and arrangement membership — the editor, the checks, the plan sheet and every SVG
+ * footprints, arrangement membership, what a module's top is in each arrangement and where it is mounted — the editor, the checks, the plan sheet and every SVG
  * view read the bay through here, so none of them re-derives "where the lining is" differently.
  * Pure: plain rectangles from lib/geometry in, plain numbers out; must never decide pass or fail
  * (that is lib/checks) nor import UI, framework or database code.
  */
 import type { Opening } from '../geometry/freeFloor';
 import { rectFromExtent, type Rect } from '../geometry/rect';
-import type { Arrangement, Door, LayoutDoc, Module } from './schema';
+import type { Arrangement, Door, Facing, LayoutDoc, Module, Mount, Surface } from './schema';
 
 /** A placed box as the document writes it: min corner and extents along x and y. */
 export interface Footprint {
@@ -118,6 +118,24 @@ export function workingZone(m: Module, reach: number): Rect {
   }
 }
 
+/**
+ * The way a module should face when it stands against one wall of the lined interior: into the
+ * room, away from that wall (left wall → faces right, right wall → left, rear → front, bulkhead →
+ * rear). A side wall wins over an end wall in a corner; null when it touches no wall, or both side
+ * walls (it spans the van).
+ */
+export function roomFacing(doc: Pick<LayoutDoc, 'bay' | 'buildUp'>, f: Footprint): Facing | null {
+  const lined = linedInterior(doc);
+  const left = f.y <= lined.y0;
+  const right = f.y + f.width >= lined.y1;
+  if (left && right) return null;
+  if (left) return 'right';
+  if (right) return 'left';
+  if (f.x + f.length >= lined.x1) return 'front';
+  if (f.x <= lined.x0) return 'rear';
+  return null;
+}
+
 // ---- heights ----------------------------------------------------------------------------------
 
 /** Underside above the BARE floor (the document's elevation is above the finished floor). */
@@ -143,4 +161,36 @@ export function modulesIn<M extends Pick<Module, 'arrangements'>>(doc: { modules
 /** Whether two modules ever stand in the bay at the same time. */
 export function shareAnArrangement(a: Pick<Module, 'arrangements'>, b: Pick<Module, 'arrangements'>): boolean {
   return a.arrangements.some((x) => inArrangement(b, x));
+}
+
+/**
+ * What the module's top is used as in one arrangement: its `surfaces` entry there, nothing when it
+ * says 'none', has no entry, or the module is not present in that arrangement.
+ */
+export function surfaceIn(m: Pick<Module, 'arrangements' | 'surfaces'>, arrangement: Arrangement): Surface | undefined {
+  if (!inArrangement(m, arrangement)) return undefined;
+  const s = m.surfaces?.[arrangement];
+  return s === undefined || s === 'none' ? undefined : s;
+}
+
+// ---- mounting -----------------------------------------------------------------------------------
+
+/** Where the module is mounted ('inside' when the document does not say). */
+export function mountOf(m: Pick<Module, 'mount'>): Mount {
+  return m.mount ?? 'inside';
+}
+
+/** Whether the module stands inside the body (so the interior fit, walkway, headroom and sleep rules apply). */
+export function mountedInside(m: Pick<Module, 'mount'>): boolean {
+  return mountOf(m) === 'inside';
+}
+
+/** The document with only the modules inside the body: what the interior rules read. */
+export function interiorOf<D extends { modules: Pick<Module, 'mount'>[] }>(doc: D): D {
+  return doc.modules.every(mountedInside) ? doc : { ...doc, modules: doc.modules.filter(mountedInside) };
+}
+
+/** The modules mounted outside the body (under the floor, on the roof, behind the rear doors). */
+export function outsideModules<M extends Pick<Module, 'mount'>>(doc: { modules: M[] }): M[] {
+  return doc.modules.filter((m) => !mountedInside(m));
 }

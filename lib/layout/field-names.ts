@@ -18,7 +18,7 @@ const NAMES: Record<string, string> = {
   standingHeight: 'Standing height', sleepers: 'Sleepers’ statures',
   // settings
   walkwayMin: 'Walkway width', bedAllowance: 'Bed length allowance', bedWidthPerSleeper: 'Bed width per sleeper',
-  levelTolerance: 'Level tolerance', headMargin: 'Headroom margin', mattressRegion: 'Mattress sizes',
+  levelTolerance: 'Level tolerance', headMargin: 'Headroom margin', mattressRegion: 'Mattress sizes', floorAboveRoad: 'Floor height above the road',
   // build plan: weight
   massInRunningOrderKg: 'Mass in running order', frontAxleRunningOrderKg: 'Front axle share of the mass in running order',
   maxAuthorisedMassKg: 'Maximum authorised mass', maxFrontAxleKg: 'Front axle limit', maxRearAxleKg: 'Rear axle limit',

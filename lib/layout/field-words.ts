@@ -12,9 +12,24 @@ export const MODULE_FIELD_WORDS = {
   label: 'Label',
   facing: 'Facing',
   arrangements: 'Exists in',
-  surface: 'Surface',
+  surfaces: 'Top used as',
+  mount: 'Mounted',
   massKg: 'Mass',
 } as const;
+
+/** A module's top, in words ('none': nothing to sit, sleep or work on). */
+export const SURFACE_WORDS = { sleep: 'bed', seat: 'seat', counter: 'worktop', none: 'nothing' } as const;
+
+/** Where a module is mounted, in words. */
+export const MOUNT_WORDS = { inside: 'inside the body', 'under-floor': 'under the floor', roof: 'on the roof', rear: 'behind the rear doors' } as const;
+
+/** A module's top in each arrangement, e.g. "travel seat, lounge seat, sleep bed"; "none" when it has none anywhere. */
+export function surfacesWords(m: Pick<Module, 'arrangements' | 'surfaces'>): string {
+  const parts = (['travel', 'lounge', 'sleep'] as const)
+    .filter((a) => m.arrangements.includes(a) && m.surfaces?.[a] !== undefined)
+    .map((a) => `${a} ${SURFACE_WORDS[m.surfaces![a]!]}`);
+  return parts.length ? parts.join(', ') : 'none';
+}
 
 export const FACING_WORDS: Record<Module['facing'], string> = { front: 'front (towards the cab)', rear: 'rear', left: 'left wall', right: 'right wall' };
 

@@ -1,6 +1,6 @@
 /**
  * The module kinds, each declared once: its shelf entry (title, search words, material family),
- * default footprint, mass, surface and arrangements, whether it is worked from its front, its own
+ * default footprint, mass, surfaces per arrangement and arrangements, whether it is worked from its front, its own
  * typed values (the module's `props`: names, types, limits, defaults and the Details panel's labels),
  * the planning facts those values give, and its plan symbol (plain shapes in the module's own mm
  * frame, drawn by both the editor canvas and the plan sheet). The document schema builds its
@@ -12,6 +12,7 @@
  */
 import * as z from 'zod/mini';
 import { bandRect, clamp01, clampInt, cubic, ellipse, oppositeSide, path, roundRect, type SymbolShape } from '../geometry/shapes';
+import { tankCapacity, type TankSize } from './tank';
 import type { ARRANGEMENTS, FACINGS, SURFACES } from './vocabulary';
 
 type Arrangement = (typeof ARRANGEMENTS)[number];
@@ -68,8 +69,11 @@ export interface KindFacts {
   load?: { watts: number; hoursPerDay?: number; dutyCycle?: number };
   /** Heat output, W (heat-loss balance). */
   heatOutputW?: number;
-  /** A water tank: fresh or grey, and litres held when full (water plan, axle loads). */
-  water?: { use: 'fresh' | 'grey'; litres: number };
+  /**
+   * A water tank: fresh or grey, and litres held when full (water plan, axle loads): the typed
+   * capacity, else the drawn inside volume (`basis` says which; `drawnLitres` is always the drawn one).
+   */
+  water?: { use: 'fresh' | 'grey'; litres: number; basis: 'typed' | 'drawn'; drawnLitres: number };
   /** Gas cylinders held (gas locker). */
   gasCylinders?: { count: number; kgEach: number };
   /** What it burns, as typed (hob, heater); undefined when not given. */
@@ -120,7 +124,8 @@ interface KindDef<K extends string, F extends Fields> {
   elevation: number;
   height: number;
   massKg: number;
-  surface?: Surface;
+  /** What its top is used as in each arrangement (copied onto a new module). */
+  surfaces?: Partial<Record<Arrangement, Surface>>;
   arrangements: Arrangement[];
   /** Worked from its front face, so the walkway must reach it (DESIGN.md). */
   usedFromFront: boolean;
@@ -128,15 +133,19 @@ interface KindDef<K extends string, F extends Fields> {
   values: F;
   /** Defaults of those values, copied onto a new module and read when a module has none. */
   props?: ValuesOf<F>;
-  facts: (v: ValuesOf<F>) => KindFacts;
+  /** Values the Details panel shows even without a default (their default is worked out, e.g. a tank's capacity). */
+  shown?: (keyof F & string)[];
+  /** What its values (and, for a tank, its drawn size) mean to planning. */
+  facts: (v: ValuesOf<F>, size?: TankSize) => KindFacts;
   /** What is drawn inside the outline to say what it is (the working-face mark is added by lib/symbols). */
   symbol: (m: SymbolBox<ValuesOf<F>>) => SymbolShape[];
 }
 
 /** A kind as the rest of the code sees it, whichever kind it is. */
-export interface KindSpec extends Omit<KindDef<ModuleKind, Fields>, 'props' | 'facts' | 'symbol'> {
+export interface KindSpec extends Omit<KindDef<ModuleKind, Fields>, 'props' | 'facts' | 'symbol' | 'shown'> {
   props?: Record<string, number | boolean | string>;
-  facts: (v: Record<string, unknown>) => KindFacts;
+  shown?: string[];
+  facts: (v: Record<string, unknown>, size?: TankSize) => KindFacts;
   symbol: (m: SymbolBox<Record<string, unknown>>) => SymbolShape[];
 }
 
@@ -163,12 +172,19 @@ function tankSymbol(m: SymbolBox<{ fillLevel?: number }>, dashed: boolean): Symb
   ];
 }
 
-const TANK = { litres: amount('Capacity (litres)', 0, 10_000), fillLevel: amount('Fill level drawn (0–1)', 0, 1) };
+const TANK = {
+  litres: amount('Capacity (litres)', 0, 10_000),
+  fillFraction: amount('Share of the inside that holds water (0–1)', 0, 1),
+  fillLevel: amount('Fill level drawn (0–1)', 0, 1),
+};
+const SLEEP_ALL: Partial<Record<Arrangement, Surface>> = { travel: 'sleep', lounge: 'sleep', sleep: 'sleep' };
+const SEAT_ALL: Partial<Record<Arrangement, Surface>> = { travel: 'seat', lounge: 'seat', sleep: 'seat' };
+const COUNTER_ALL: Partial<Record<Arrangement, Surface>> = { travel: 'counter', lounge: 'counter', sleep: 'counter' };
 
 export const KINDS = {
   'bed-platform': defineKind({
     kind: 'bed-platform', title: 'Bed platform', keywords: ['bed', 'fixed bed', 'mattress'], family: 'upholstery',
-    length: 1900, width: 1400, elevation: 0, height: 900, massKg: 45, surface: 'sleep', arrangements: ALL, usedFromFront: false,
+    length: 1900, width: 1400, elevation: 0, height: 900, massKg: 45, surfaces: SLEEP_ALL, arrangements: ALL, usedFromFront: false,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['worktop', 'front'], 0, 'bed top') }),
     symbol: (m) => {
       // Pillow at the end nearest the cab unless the bed faces rearwards.
@@ -182,17 +198,17 @@ export const KINDS = {
   }),
   'bed-infill': defineKind({
     kind: 'bed-infill', title: 'Bed infill board', keywords: ['infill', 'slide-out', 'cushion', 'bed'], family: 'upholstery',
-    length: 700, width: 600, elevation: 380, height: 80, massKg: 8, surface: 'sleep', arrangements: ['sleep'], usedFromFront: false,
+    length: 700, width: 600, elevation: 380, height: 80, massKg: 8, surfaces: { sleep: 'sleep' }, arrangements: ['sleep'], usedFromFront: false,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['top']) }), symbol: () => [],
   }),
   'bench-seat': defineKind({
     kind: 'bench-seat', title: 'Bench seat', keywords: ['lounge', 'seating', 'sofa', 'bench'], family: 'upholstery',
-    length: 1100, width: 550, elevation: 0, height: 460, massKg: 22, surface: 'seat', arrangements: ['lounge', 'sleep'], usedFromFront: true,
+    length: 1100, width: 550, elevation: 0, height: 460, massKg: 22, surfaces: { travel: 'seat', lounge: 'seat', sleep: 'sleep' }, arrangements: ALL, usedFromFront: true,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'front']) }), symbol: (m) => seatSymbol(m, false),
   }),
   seat: defineKind({
     kind: 'seat', title: 'Travel seat', keywords: ['belted seat', 'passenger', 'seat'], family: 'upholstery',
-    length: 600, width: 550, elevation: 0, height: 1150, massKg: 30, surface: 'seat', arrangements: ALL, usedFromFront: true,
+    length: 600, width: 550, elevation: 0, height: 1150, massKg: 30, surfaces: SEAT_ALL, arrangements: ALL, usedFromFront: true,
     values: { belted: flag('Belted seat'), approved: flag('Seat and belt of an approved type'), anchorageTested: flag('Anchorages fitted to the maker’s kit or tested'), ...LOAD },
     props: { belted: true, approved: false, anchorageTested: false },
     facts: (v) => ({ ...loadFacts(v), seat: { belted: v.belted !== false, approvedType: v.approved === true, anchorageTested: v.anchorageTested === true } }),
@@ -200,18 +216,18 @@ export const KINDS = {
   }),
   table: defineKind({
     kind: 'table', title: 'Table', keywords: ['dining', 'desk', 'table'], family: 'timber',
-    length: 700, width: 500, elevation: 700, height: 30, massKg: 6, surface: 'counter', arrangements: ['lounge'], usedFromFront: true,
+    length: 700, width: 500, elevation: 700, height: 30, massKg: 6, surfaces: { lounge: 'counter' }, arrangements: ['lounge'], usedFromFront: true,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['worktop'], 0, 'table top') }),
     symbol: (m) => [roundRect(m.length * 0.08, m.width * 0.08, m.length * 0.84, m.width * 0.84, Math.min(m.length, m.width) * 0.1)],
   }),
   'kitchen-counter': defineKind({
     kind: 'kitchen-counter', title: 'Kitchen counter', keywords: ['kitchen', 'worktop', 'galley', 'counter'], family: 'timber',
-    length: 1200, width: 500, elevation: 0, height: 900, massKg: 35, surface: 'counter', arrangements: ALL, usedFromFront: true,
+    length: 1200, width: 500, elevation: 0, height: 900, massKg: 35, surfaces: COUNTER_ALL, arrangements: ALL, usedFromFront: true,
     values: { ...SHELVES, ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'bottom', 'back', 'shelves', 'worktop'], v.shelves ?? 1) }), symbol: () => [],
   }),
   'sink-unit': defineKind({
     kind: 'sink-unit', title: 'Sink unit', keywords: ['sink', 'basin', 'tap', 'kitchen'], family: 'water',
-    length: 450, width: 450, elevation: 0, height: 900, massKg: 12, surface: 'counter', arrangements: ALL, usedFromFront: true,
+    length: 450, width: 450, elevation: 0, height: 900, massKg: 12, surfaces: COUNTER_ALL, arrangements: ALL, usedFromFront: true,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'bottom', 'back', 'worktop']) }),
     symbol: (m) => {
       const L = m.length, W = m.width, bw = L * 0.62, bh = W * 0.55;
@@ -282,14 +298,14 @@ export const KINDS = {
   'fresh-water-tank': defineKind({
     kind: 'fresh-water-tank', title: 'Fresh water tank', keywords: ['water', 'tank', 'fresh', 'drinking'], family: 'water',
     length: 700, width: 350, elevation: 0, height: 300, massKg: 6, arrangements: ALL, usedFromFront: false,
-    values: { ...TANK, ...LOAD }, props: { litres: 70 },
-    facts: (v) => ({ ...loadFacts(v), water: { use: 'fresh', litres: Math.max(0, v.litres ?? 0) } }), symbol: (m) => tankSymbol(m, false),
+    values: { ...TANK, ...LOAD }, shown: ['litres', 'fillFraction'],
+    facts: (v, size) => ({ ...loadFacts(v), water: { use: 'fresh', ...tankCapacity(size, v) } }), symbol: (m) => tankSymbol(m, false),
   }),
   'grey-water-tank': defineKind({
     kind: 'grey-water-tank', title: 'Grey water tank', keywords: ['grey', 'waste water', 'tank'], family: 'water',
     length: 600, width: 350, elevation: 0, height: 250, massKg: 5, arrangements: ALL, usedFromFront: false,
-    values: { ...TANK, ...LOAD }, props: { litres: 50 },
-    facts: (v) => ({ ...loadFacts(v), water: { use: 'grey', litres: Math.max(0, v.litres ?? 0) } }), symbol: (m) => tankSymbol(m, true),
+    values: { ...TANK, ...LOAD }, shown: ['litres', 'fillFraction'],
+    facts: (v, size) => ({ ...loadFacts(v), water: { use: 'grey', ...tankCapacity(size, v) } }), symbol: (m) => tankSymbol(m, true),
   }),
   'gas-locker': defineKind({
     kind: 'gas-locker', title: 'Gas locker', keywords: ['lpg', 'cylinder', 'bottle', 'gas'], family: 'gas',
@@ -340,7 +356,7 @@ export const KINDS = {
     },
   }),
   step: defineKind({
-    kind: 'step', title: 'Step', keywords: ['entry step', 'stair'], family: 'timber',
+    kind: 'step', title: 'Step', keywords: ['entry step', 'stair', 'ladder', 'bunk ladder'], family: 'timber',
     length: 400, width: 300, elevation: 0, height: 200, massKg: 4, arrangements: ALL, usedFromFront: false,
     values: { ...LOAD }, facts: (v) => ({ ...loadFacts(v), ...carcass(['sides', 'top', 'front']) }),
     symbol: (m) => [0.35, 0.6].map((t) => path([[m.length * (t - 0.12), m.width * 0.25], [m.length * t, m.width / 2], [m.length * (t - 0.12), m.width * 0.75]])),
@@ -374,8 +390,9 @@ export function valuesWithDefaults(m: { kind: ModuleKind; props?: object }): Rec
 }
 
 /** What planning reads about a module: its kind's facts from its values (defaults filled in). */
-export function kindFacts(m: { kind: ModuleKind; props?: object }): KindFacts {
-  return kindSpec(m.kind).facts(valuesWithDefaults(m));
+export function kindFacts(m: { kind: ModuleKind; props?: object } & Partial<TankSize>): KindFacts {
+  const size = m.length !== undefined && m.width !== undefined && m.height !== undefined ? { length: m.length, width: m.width, height: m.height } : undefined;
+  return kindSpec(m.kind).facts(valuesWithDefaults(m), size);
 }
 
 /**
@@ -385,7 +402,7 @@ export function kindFacts(m: { kind: ModuleKind; props?: object }): KindFacts {
 export function shownFields(m: { kind: ModuleKind; props?: object }): { key: string; field: ValueField<unknown> }[] {
   const spec = kindSpec(m.kind);
   return Object.entries(spec.values)
-    .filter(([key]) => (spec.props && key in spec.props) || (m.props && key in m.props))
+    .filter(([key]) => (spec.props && key in spec.props) || spec.shown?.includes(key) || (m.props && key in m.props))
     .map(([key, field]) => ({ key, field: field as ValueField<unknown> }));
 }
 

@@ -25,7 +25,22 @@ const migrations: Record<number, (doc: Record<string, unknown>) => Record<string
   // Values the module's kind declares are kept (a number or yes/no typed as text is read as one);
   // names the kind does not declare, and values outside their limits, are dropped.
   1: (doc) => ({ ...doc, schemaVersion: 2, modules: Array.isArray(doc.modules) ? doc.modules.map(typedProps) : doc.modules }),
+  // 2: a module's top had one `surface` for every arrangement; now it says what it is in each
+  // (`surfaces`). The old value becomes the value in every arrangement the module is present in,
+  // so the checks read exactly what they read before. `mount` is new and defaults to inside.
+  2: (doc) => ({ ...doc, schemaVersion: 3, modules: Array.isArray(doc.modules) ? doc.modules.map(surfacesPerArrangement) : doc.modules }),
 };
+
+function surfacesPerArrangement(m: unknown): unknown {
+  if (typeof m !== 'object' || m === null || Array.isArray(m) || !Object.hasOwn(m, 'surface')) return m;
+  const { surface, ...rest } = m as Record<string, unknown>;
+  if (surface === undefined) return rest;
+  // Anything but a known arrangement list is left for validation to report on the module.
+  const present = Array.isArray(rest.arrangements) ? rest.arrangements.filter((a): a is string => typeof a === 'string') : [];
+  const surfaces: Record<string, unknown> = {};
+  for (const a of present) surfaces[a] = surface;
+  return { ...rest, surfaces };
+}
 
 function typedProps(m: unknown): unknown {
   if (typeof m !== 'object' || m === null || Array.isArray(m)) return m;

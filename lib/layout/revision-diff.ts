@@ -1,7 +1,7 @@
 /**
  * What changed between two revisions of a layout, for the side-by-side comparison: modules
  * added, removed, moved (x, y or elevation) or resized (length, width, height; a 90° turn shows
- * as a swap), other edits to a module (label, facing, arrangements, surface, mass, props), the
+ * as a swap), other edits to a module (label, facing, arrangements, surfaces, mount, mass, props), the
  * bay's own measurements, and which check findings changed status.
  *
  * Pure data in, data out. Findings are taken structurally (id, status, arrangement, moduleIds),
@@ -26,7 +26,7 @@ export interface Resized {
   rotated: boolean;
 }
 
-export type OtherField = 'kind' | 'label' | 'facing' | 'arrangements' | 'surface' | 'massKg' | 'props';
+export type OtherField = 'kind' | 'label' | 'facing' | 'arrangements' | 'surfaces' | 'mount' | 'massKg' | 'props';
 
 export interface ModuleChange {
   id: string;
@@ -78,7 +78,8 @@ function moduleChange(before: Module, after: Module): ModuleChange | null {
   if ((before.label ?? '') !== (after.label ?? '')) other.push('label');
   if (before.facing !== after.facing) other.push('facing');
   if (!same([...before.arrangements].sort(), [...after.arrangements].sort())) other.push('arrangements');
-  if (before.surface !== after.surface) other.push('surface');
+  if (!same(surfaceList(before), surfaceList(after))) other.push('surfaces');
+  if ((before.mount ?? 'inside') !== (after.mount ?? 'inside')) other.push('mount');
   if (before.massKg !== after.massKg) other.push('massKg');
   if (!same(sortedProps(before.props), sortedProps(after.props))) other.push('props');
   if (!moved && !resized && !other.length) return null;
@@ -194,4 +195,9 @@ export function diffFindings(before: FindingLike[], after: FindingLike[]): Findi
     });
   }
   return out.sort((x, y) => (x.direction === y.direction ? x.key.localeCompare(y.key) : x.direction === 'worse' ? -1 : 1));
+}
+
+/** A module's surfaces as a comparable list ('travel:seat', …). */
+function surfaceList(m: Module): string[] {
+  return (['travel', 'lounge', 'sleep'] as const).filter((a) => m.surfaces?.[a] !== undefined).map((a) => `${a}:${m.surfaces![a]}`);
 }

@@ -5,7 +5,7 @@
  * "massKg". Pure: a diff in, sentences out; must never import React, Next or the database.
  */
 import { KINDS, moduleLabel } from './kinds';
-import { BAY_FIELD_WORDS, FACING_WORDS, MODULE_FIELD_WORDS, propWord } from './field-words';
+import { BAY_FIELD_WORDS, FACING_WORDS, MODULE_FIELD_WORDS, MOUNT_WORDS, propWord, surfacesWords } from './field-words';
 import type { BayChange, ModuleChange } from './revision-diff';
 import type { Module } from './schema';
 import { formatLength, type LengthUnit } from './units';
@@ -56,7 +56,8 @@ export function moduleChangeWords(c: ModuleChange, units: LengthUnit = 'mm'): { 
     else if (field === 'label') lines.push(`${MODULE_FIELD_WORDS.label}: ${value(b.label)} → ${value(a.label)}`);
     else if (field === 'facing') lines.push(`${MODULE_FIELD_WORDS.facing}: ${FACING_WORDS[b.facing]} → ${FACING_WORDS[a.facing]}`);
     else if (field === 'arrangements') lines.push(`${MODULE_FIELD_WORDS.arrangements}: ${b.arrangements.map((x) => ARR_WORD[x]).join(', ')} → ${a.arrangements.map((x) => ARR_WORD[x]).join(', ')}`);
-    else if (field === 'surface') lines.push(`${MODULE_FIELD_WORDS.surface}: ${value(b.surface)} → ${value(a.surface)}`);
+    else if (field === 'surfaces') lines.push(`${MODULE_FIELD_WORDS.surfaces}: ${surfacesWords(b)} → ${surfacesWords(a)}`);
+    else if (field === 'mount') lines.push(`${MODULE_FIELD_WORDS.mount}: ${MOUNT_WORDS[b.mount ?? 'inside']} → ${MOUNT_WORDS[a.mount ?? 'inside']}`);
     else if (field === 'massKg') lines.push(`${MODULE_FIELD_WORDS.massKg}: ${b.massKg === undefined ? 'none' : `${b.massKg} kg`} → ${a.massKg === undefined ? 'none' : `${a.massKg} kg`}`);
     else if (field === 'props') {
       const bp: Record<string, unknown> = b.props ?? {};

@@ -11,9 +11,9 @@
  */
 import * as z from 'zod/mini';
 import { KINDS, kindValuesSchema, MODULE_KINDS, type KindValues, type ModuleKind } from './kinds';
-import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_LIMITS, SURFACES } from './vocabulary';
+import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_LIMITS, MOUNTS, SURFACE_CHOICES, SURFACES } from './vocabulary';
 
-export { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, SURFACES };
+export { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, MOUNTS, SURFACE_CHOICES, SURFACES };
 export type { ModuleKind };
 export type { LayoutDoc, LayoutDocInput } from './document';
 
@@ -36,6 +36,19 @@ export const arrangementSchema = z.enum(ARRANGEMENTS);
 export type Facing = (typeof FACINGS)[number];
 
 export type Surface = (typeof SURFACES)[number];
+export type SurfaceChoice = (typeof SURFACE_CHOICES)[number];
+export type Mount = (typeof MOUNTS)[number];
+
+/**
+ * What a module's top is used as, per arrangement ('none': nothing). An arrangement left out, or one
+ * the module is not present in, has no surface. Version 2's single `surface` migrates to this.
+ */
+export const surfacesSchema = z.strictObject({
+  travel: z.optional(z.enum(SURFACE_CHOICES)),
+  lounge: z.optional(z.enum(SURFACE_CHOICES)),
+  sleep: z.optional(z.enum(SURFACE_CHOICES)),
+});
+export type Surfaces = z.infer<typeof surfacesSchema>;
 
 export const moduleKindSchema = z.enum(MODULE_KINDS);
 
@@ -127,7 +140,9 @@ const moduleBaseShape = {
     atMost(3, 'arrangements'),
     z.refine((a) => new Set(a).size === a.length, 'each arrangement once'),
   ),
-  surface: z.optional(z.enum(SURFACES)),
+  surfaces: z.optional(surfacesSchema),
+  /** Inside the body (default), under the floor, on the roof or behind the rear doors. */
+  mount: z.optional(z.enum(MOUNTS)),
   massKg: z.optional(z.number().check(z.refine((v) => v >= MODULE_LIMITS.massKg.min && v <= MODULE_LIMITS.massKg.max, `from ${MODULE_LIMITS.massKg.min} to ${MODULE_LIMITS.massKg.max} kg`))),
 };
 type ModuleBase = z.output<z.ZodMiniObject<typeof moduleBaseShape>>;
@@ -153,6 +168,8 @@ export const settingsSchema = z.strictObject({
   levelTolerance: z.optional(mm(500)),
   headMargin: z.optional(mm(1000)),
   mattressRegion: z.optional(z.enum(MATTRESS_REGIONS)),
+  /** The load floor's height above the road, unladen (the envelope for modules under the floor). */
+  floorAboveRoad: z.optional(mm(2000)),
 });
 export type LayoutSettings = z.infer<typeof settingsSchema>;
 

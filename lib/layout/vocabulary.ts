@@ -9,7 +9,17 @@ export const ARRANGEMENTS = ['travel', 'lounge', 'sleep'] as const;
 
 export const FACINGS = ['front', 'rear', 'left', 'right'] as const;
 
+/** What a module's top is used as in one arrangement. */
 export const SURFACES = ['sleep', 'seat', 'counter'] as const;
+
+/** A per-arrangement surface as the document writes it: one of SURFACES, or 'none' (nothing to use). */
+export const SURFACE_CHOICES = ['sleep', 'seat', 'counter', 'none'] as const;
+
+/**
+ * Where a module is mounted: inside the body (the default), hanging under the floor, on the roof,
+ * or behind the rear doors. Outside mounts keep their place in bay coordinates.
+ */
+export const MOUNTS = ['inside', 'under-floor', 'roof', 'rear'] as const;
 
 export const MATTRESS_REGIONS = ['uk', 'eu', 'us'] as const;
 

@@ -2,8 +2,10 @@
  * Masses and axle loads of the converted van in its laden travel case.
  *
  * `computeAxleLoads(doc)` gathers every mass with a position — the base vehicle in running order
- * (placed from its front-axle share), each module (its `massKg`, else its kind's default), water
- * at the chosen fill (1 kg per litre; fresh water at 20 °C is 0.998 kg/L, handbook value from
+ * (placed from its front-axle share), each module (its `massKg`, else its kind's default) wherever
+ * it is mounted — inside, under the floor, on the roof or behind the rear doors, each at its own
+ * plan position, so a rack behind the rear axle lightens the front — water at the chosen fill of
+ * each tank's typed capacity or drawn inside volume (the label says which) (1 kg per litre; fresh water at 20 °C is 0.998 kg/L, handbook value from
  * memory, so the round figure errs heavy), gas cylinders (content plus tare), passengers at 75 kg
  * (the driver is already in the mass in running order) — every declared person, on a drawn seat
  * where there is one, else at the cab row, said so in `assumptions` — personal effects and free payload items —
@@ -16,7 +18,7 @@
 import type { LayoutDoc } from '../layout';
 import { leverSplit } from './lever';
 import { INPUTS, type InputNeed } from './inputs';
-import { beltedTravelSeats, moduleCentre, moduleFacts, moduleMassKg, moduleName, moduleRef } from './module-facts';
+import { beltedTravelSeats, moduleCentre, moduleFacts, moduleMassKg, moduleName, moduleRef, tankBasisWords } from './module-facts';
 import { OCCUPANT_KG, personalEffectsAllowance } from './payload';
 
 /** kg per litre used for tank contents (round figure, errs heavy; see header). */
@@ -101,7 +103,7 @@ export function computeAxleLoads(doc: LayoutDoc): MassReport {
     if (water) {
       const fill = (water.use === 'fresh' ? load.freshFillPct ?? 100 : load.greyFillPct ?? 0) / 100;
       const kg = water.litres * fill * WATER_KG_PER_L;
-      if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleRef(m)} at ${Math.round(fill * 100)} %`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
+      if (kg > 0) items.push({ id: `water:${m.id}`, label: `Water in ${moduleRef(m)} at ${Math.round(fill * 100)} % of ${round1(water.litres)} L (${tankBasisWords(water.basis)})`, group: 'water', massKg: kg, x: c.x, y: c.y, moduleId: m.id });
     }
     const held = moduleFacts(m).gasCylinders;
     if (held) {

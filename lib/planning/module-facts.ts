@@ -7,6 +7,7 @@
  */
 import { kindFacts, kindSpec, type KindFacts } from '../layout/kinds';
 import { inArrangement } from '../layout/bay';
+import { TANK_WALL_MM } from '../layout/tank';
 import type { LayoutDoc, Module } from '../layout';
 
 export function moduleMassKg(m: Module): number {
@@ -43,7 +44,12 @@ export function moduleRef(m: Pick<Module, 'kind' | 'label'>): string {
   return label ? `“${label}”` : `the ${kindSpec(m.kind).title.toLowerCase()}`;
 }
 
-/** Litres a tank module holds (its capacity, else the kind's default). */
+/** Litres a tank module holds: its typed capacity, else its drawn inside volume (lib/layout/tank.ts). */
 export function tankLitres(m: Module): number {
   return moduleFacts(m).water?.litres ?? 0;
+}
+
+/** Where a tank's litres come from, in words for figures and tables. */
+export function tankBasisWords(basis: 'typed' | 'drawn'): string {
+  return basis === 'typed' ? 'capacity as typed' : `from its drawn size, less a ${TANK_WALL_MM} mm wall`;
 }

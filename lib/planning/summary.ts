@@ -11,8 +11,8 @@ import type { LayoutDoc } from '../layout';
 import { computeAxleLoads } from './axle-loads';
 import { userPayloadRequired } from './payload';
 import { powerBudget, type Season } from './power-budget';
-import { COMFORT_DAYS_BETWEEN_FILLS, waterPlan } from './water-plan';
-import { formatWhole } from '../format';
+import { COMFORT_DAYS_BETWEEN_FILLS, waterBasisWords, waterPlan } from './water-plan';
+import { formatFixed, formatWhole } from '../format';
 
 export interface BuildPlanSummary {
   mass: {
@@ -106,7 +106,7 @@ export function buildPlanSummary(doc: LayoutDoc): BuildPlanSummary {
     });
   } else lines.push({ topic: 'Power', status: 'unknown', text: `Uses ${formatWhole(p.dailyUseWh)} Wh a day; enter the battery and charging for the balance.` });
   if (w.freshTankIds.length || w.greyTankIds.length) {
-    lines.push({ topic: 'Water', status: w.days !== null && w.days < COMFORT_DAYS_BETWEEN_FILLS ? 'attention' : 'ok', text: `Fresh ${w.freshL} L, grey ${w.greyL} L; ${w.days !== null ? `${w.days.toFixed(1)} days` : 'no use entered'} at ${w.litresPerPersonPerDay} L per person a day for ${w.persons}.` });
+    lines.push({ topic: 'Water', status: w.days !== null && w.days < COMFORT_DAYS_BETWEEN_FILLS ? 'attention' : 'ok', text: `Fresh ${formatFixed(w.freshL, 1)} L, grey ${formatFixed(w.greyL, 1)} L (${waterBasisWords(w.freshBasis === w.greyBasis ? w.freshBasis : 'mixed')}); ${w.days !== null ? `${w.days.toFixed(1)} days` : 'no use entered'} at ${w.litresPerPersonPerDay} L per person a day for ${w.persons}.` });
   } else lines.push({ topic: 'Water', status: 'unknown', text: 'No water tanks drawn.' });
   return summary;
 }

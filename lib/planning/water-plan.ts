@@ -1,5 +1,6 @@
 /**
- * Fresh and grey water: tank capacities from the tank modules, their mass, and how many days the
+ * Fresh and grey water: tank capacities from the tank modules (typed, else from the drawn size;
+ * each figure says which), their mass, and how many days the
  * fresh water lasts at the chosen use per person per day.
  *
  * Two bases, never mixed:
@@ -17,7 +18,8 @@
  */
 import type { LayoutDoc } from '../layout';
 import { WATER_KG_PER_L } from './axle-loads';
-import { tankLitres, waterTanks } from './module-facts';
+import { TANK_WALL_MM } from '../layout/tank';
+import { moduleFacts, tankLitres, waterTanks } from './module-facts';
 
 /** NZS 5465 (secondary): 4 L per person per day, for 3 days. */
 export const NZS5465_L_PER_PERSON_DAY = 4;
@@ -28,7 +30,21 @@ export const DEFAULT_L_PER_PERSON_DAY = 10;
 /** Days between fills the comfort estimate aims for — common practice, no source. */
 export const COMFORT_DAYS_BETWEEN_FILLS = 3;
 
+/** One tank's litres and where they come from. */
+export interface TankLitres {
+  id: string;
+  use: 'fresh' | 'grey';
+  litres: number;
+  basis: 'typed' | 'drawn';
+  /** What the drawn inside holds (after the wall allowance and fill fraction). */
+  drawnLitres: number;
+}
+
 export interface WaterPlan {
+  tanks: TankLitres[];
+  /** How the fresh and grey totals were found: every tank's typed capacity, every tank's drawn size, or some of each. */
+  freshBasis: 'typed' | 'drawn' | 'mixed' | 'none';
+  greyBasis: 'typed' | 'drawn' | 'mixed' | 'none';
   freshL: number;
   greyL: number;
   freshTankIds: string[];
@@ -49,12 +65,19 @@ export interface WaterPlan {
 export function waterPlan(doc: LayoutDoc): WaterPlan {
   const fresh = waterTanks(doc, 'fresh');
   const grey = waterTanks(doc, 'grey');
+  const tanks: TankLitres[] = [...fresh, ...grey].map((m) => {
+    const w = moduleFacts(m).water!;
+    return { id: m.id, use: w.use, litres: w.litres, basis: w.basis, drawnLitres: w.drawnLitres };
+  });
   const freshL = fresh.reduce((a, m) => a + tankLitres(m), 0);
   const greyL = grey.reduce((a, m) => a + tankLitres(m), 0);
   const persons = doc.systems?.water?.persons ?? Math.max(1, doc.occupants.sleepers.length);
   const lppd = doc.systems?.water?.litresPerPersonPerDay ?? DEFAULT_L_PER_PERSON_DAY;
   const daily = persons * lppd;
   return {
+    tanks,
+    freshBasis: basisOf(tanks.filter((t) => t.use === 'fresh')),
+    greyBasis: basisOf(tanks.filter((t) => t.use === 'grey')),
     freshL,
     greyL,
     freshTankIds: fresh.map((m) => m.id),
@@ -66,4 +89,16 @@ export function waterPlan(doc: LayoutDoc): WaterPlan {
     freshFullKg: freshL * WATER_KG_PER_L,
     nzsMinimumL: persons * NZS5465_L_PER_PERSON_DAY * NZS5465_DAYS,
   };
+}
+
+function basisOf(tanks: TankLitres[]): WaterPlan['freshBasis'] {
+  if (tanks.length === 0) return 'none';
+  if (tanks.every((t) => t.basis === 'typed')) return 'typed';
+  if (tanks.every((t) => t.basis === 'drawn')) return 'drawn';
+  return 'mixed';
+}
+
+/** How a total was found, in words: "from the tanks’ drawn size" and the like. */
+export function waterBasisWords(basis: WaterPlan['freshBasis']): string {
+  return basis === 'typed' ? 'capacity as typed on the tank' : basis === 'drawn' ? `from the drawn tank size, less a ${TANK_WALL_MM} mm wall` : basis === 'mixed' ? 'typed capacities and drawn sizes' : 'no tank';
 }

@@ -27,8 +27,9 @@ import { figuresOf, scoreAll, type Figures, type Score } from './score';
 import { explainFinding, explainMiss, type Reason } from './reasons';
 
 /**
- * Proposals are written as version-2 documents (a module's `surface` set by `surfaceOf`) and go
- * through `parseLayoutDoc`, which migrates them to whatever version this code stores.
+ * Proposals are written as version-2 documents (a module's one `surface` set by `surfaceOf`) and go
+ * through `parseLayoutDoc`, which migrates them to whatever version this code stores (version 3:
+ * that surface in every arrangement the module is in).
  */
 const PROPOSAL_SCHEMA_VERSION = 2;
 

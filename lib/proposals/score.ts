@@ -8,7 +8,7 @@ import { unionArea } from '../geometry/union';
 import type { Rect } from '../geometry/rect';
 import type { CheckReport } from '../checks/types';
 import type { Bed } from '../checks/beds';
-import { linedInterior, moduleRect } from '../layout/bay';
+import { linedInterior, moduleRect, surfaceIn } from '../layout/bay';
 import type { LayoutDoc } from '../layout/schema';
 import { moduleMassKg, tankLitres } from '../planning/module-facts';
 import { WATER_KG_PER_L } from '../planning/axle-loads';
@@ -69,7 +69,7 @@ export function figuresOf(doc: LayoutDoc, report: CheckReport, beds: Bed[]): Fig
   let storage = 0;
   for (const m of doc.modules) {
     if (STORAGE_KINDS.has(m.kind)) storage += (m.length * m.width * m.height) / 1e6;
-    if (m.surface === 'sleep' && m.kind !== 'bed-infill' && m.elevation > 0) storage += (m.length * m.width * m.elevation) / 1e6;
+    if (surfaceIn(m, 'sleep') === 'sleep' && m.kind !== 'bed-infill' && m.elevation > 0) storage += (m.length * m.width * m.elevation) / 1e6;
   }
   let services = 0;
   for (const m of doc.modules) if (m.elevation === 0 && ['fresh-water-tank', 'grey-water-tank', 'electrics-bay', 'heater'].includes(m.kind)) services += (m.length * m.width * m.height) / 1e6;

@@ -191,6 +191,10 @@ function drawModule(m: Module, x: number, y: number, w: number, h: number, numbe
       { type: 'text', x: x + 0.8, y: y + 2.6, text: String(number), size: TYPE.small, font: 'sans-bold', ink: 'soft' },
     ];
   }
+  if (m.mount !== undefined && m.mount !== 'inside') {
+    // Outside the body (under the floor, on the roof, behind the rear doors): a long-dashed medium outline.
+    return [{ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: [2.4, 0.6] }, ...numberTag(m, x, y, w, h, number)];
+  }
   const outline = family === 'electrics' ? { stroke: 'ink' as const, width: LINE.medium, dash: [0.4, 0.6] as [number, number] } : { stroke: 'ink' as const, width: LINE.medium };
   if (!hatched) {
     // Nothing goes between the white ground and the outline: one rectangle, filled then stroked.

@@ -8,6 +8,7 @@
  * step (n log n); a figure draws at most `FIGURE_MODULE_LIMIT` modules, so at most twice that
  * many stations. Pure: plain sheet items out; must never render.
  */
+import { mountedInside } from '../layout/bay';
 import { toUnit, type LengthUnit } from '../layout/units';
 import type { Module } from '../layout/schema';
 import { LINE, TYPE } from './drafting';
@@ -81,7 +82,8 @@ export function runningDimension(
   geometry: { bx: number; wallY: number; bayLength: number; bayWidth: number; toPaper: (mm: number) => number; units: LengthUnit; tag: string },
 ): { items: SheetItem[]; leftOff: number } {
   const { bx, wallY, bayLength, bayWidth, toPaper, units, tag } = geometry;
-  const along = modules.filter((m) => wallOf(m, bayWidth) === wall);
+  // Along the walls inside the body: a module under the floor, on the roof or behind the doors is not.
+  const along = modules.filter((m) => mountedInside(m) && wallOf(m, bayWidth) === wall);
   const xs = stations(along, bayLength);
   if (xs.length < 2) return { items: [], leftOff: 0 };
   const outward = wall === 'left' ? -1 : 1;

@@ -43,7 +43,7 @@ function versionZeroDoc(name: string): Record<string, unknown> {
 }
 
 function expectCurrent(doc: any) {
-  expect(doc.schemaVersion).toBe(2);
+  expect(doc.schemaVersion).toBe(3);
   expect(doc.bay.doors).toEqual([]);
   expect(doc.bay.wheelArches).toEqual([]);
   expect(doc.bay.bulkhead).toBe(true);

@@ -25,7 +25,7 @@ export interface DocOptions {
 /** A document in the L2H2 bay (override any part). */
 export function l2h2Doc(o: DocOptions = {}): LayoutDoc {
   return layoutDocSchema.parse({
-    schemaVersion: 2,
+    schemaVersion: 3,
     name: 'Test layout',
     bay: { ...L2H2, ...o.bay },
     buildUp: o.buildUp ?? DEFAULT_BUILD_UP,

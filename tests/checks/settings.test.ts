@@ -7,7 +7,7 @@ import { l2h2Doc } from './helpers';
 
 describe('check settings', () => {
   it('defaults: 450 mm walkway (EN 1646-1 for motor caravans, from memory), 100 mm bed allowance, 600 mm per sleeper, 20 mm level and head margins, UK mattresses', () => {
-    expect(DEFAULT_SETTINGS).toEqual({ walkwayMin: 450, bedAllowance: 100, bedWidthPerSleeper: 600, levelTolerance: 20, headMargin: 20, mattressRegion: 'uk' });
+    expect(DEFAULT_SETTINGS).toEqual({ walkwayMin: 450, bedAllowance: 100, bedWidthPerSleeper: 600, levelTolerance: 20, headMargin: 20, mattressRegion: 'uk', floorAboveRoad: 550 }); // floor above the road: common practice, no source
     expect(SOURCES.walkwayMin.cite).toMatch(/^EN 1646-1 .*from memory/);
     expect(SOURCES.bedWidth.cite).toMatch(/common practice/i);
   });

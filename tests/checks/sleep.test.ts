@@ -34,7 +34,7 @@ describe('standard mattress sizes (trade sizes, common practice)', () => {
 
 // Plain box bay (no build-up): beds are bed-platform modules with a sleep surface.
 const bed = (id: string, x: number, y: number, length: number, width: number, extra: Partial<Parameters<typeof mod>[0]> = {}) =>
-  mod({ id, kind: 'bed-platform', x, y, length, width, elevation: 600, height: 200, surface: 'sleep', facing: 'front', ...extra });
+  mod({ id, kind: 'bed-platform', x, y, length, width, elevation: 600, height: 200, surfaces: { travel: 'sleep', lounge: 'sleep', sleep: 'sleep' }, facing: 'front', ...extra });
 
 describe('sleep.length and sleep.width', () => {
   it('a 2000 × 1200 bed for sleepers 1900 and 1650 passes exactly (1900 + 100 long, 2 × 600 wide)', () => {

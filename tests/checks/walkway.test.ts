@@ -86,6 +86,10 @@ describe('walkway.width', () => {
   it('reports 0 mm and warns when nobody can get in; warns for no doors', () => {
     const blocked = boxDoc({ modules: [counter], bay: { doors: [{ id: 'rear', wall: 'rear', offset: 900, width: 300 }] } });
     expect(only(blocked, 'walkway.width', 'lounge')).toMatchObject({ status: 'warn', measured: 0 });
+    // It says what blocks what: a 300 mm door against the 450 mm person.
+    expect(only(blocked, 'walkway.width', 'lounge').message).toMatch(/nobody 450 mm wide gets in: the rear door \(300 mm wide\) is narrower than that/);
+    const wardrobe = { ...counter, id: 'robe', kind: 'wardrobe' as const, label: 'Tall wardrobe', x: 2700, y: 0, length: 300, width: 1800, height: 1750 };
+    expect(only(boxDoc({ modules: [wardrobe] }), 'walkway.width', 'lounge').message).toMatch(/Tall wardrobe stands in the rear door \(1800 mm wide\)/);
     expect(only(boxDoc({ bay: { doors: [] } }), 'walkway.width', 'travel')).toMatchObject({ status: 'warn', measured: 0 });
   });
   it('with nothing to reach it measures the widest person who gets in through a door', () => {

@@ -8,7 +8,7 @@ describe('editor store: placing modules', () => {
     const r = h.get().addModule('bench-seat');
     expect(r.ok).toBe(true);
     const m = h.byId(r.id!)!;
-    expect(m).toMatchObject({ kind: 'bench-seat', length: 1100, width: 550, height: 460, surface: 'seat', arrangements: ['lounge', 'sleep'] });
+    expect(m).toMatchObject({ kind: 'bench-seat', length: 1100, width: 550, height: 460, surfaces: { travel: 'seat', lounge: 'seat', sleep: 'sleep' }, arrangements: ['travel', 'lounge', 'sleep'] });
     expect(m.id).toMatch(/^[A-Za-z0-9_-]+$/);
     // First free spot is against the lining, not inside the wall build-up band.
     expect(m.y).toBeGreaterThanOrEqual(36);

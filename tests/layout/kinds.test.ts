@@ -28,8 +28,10 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   wardrobe: { carcass: { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 1 } },
   'drawer-unit': { carcass: { pieces: ['sides', 'top', 'bottom', 'back', 'shelves'], shelves: 2 } },
   'overhead-locker': { carcass: { pieces: ['sides', 'top', 'bottom', 'back'], shelves: 0 } },
-  'fresh-water-tank': { water: { use: 'fresh', litres: 70 } },
-  'grey-water-tank': { water: { use: 'grey', litres: 50 } },
+  // Capacity from the default drawn size less a 5 mm wall on every face (common practice, no source):
+  // fresh 700 × 350 × 300 → 690 × 340 × 290 mm = 68.034 L; grey 600 × 350 × 250 → 590 × 340 × 240 mm = 48.144 L.
+  'fresh-water-tank': { water: { use: 'fresh', litres: expect.closeTo(68.034, 3), basis: 'drawn', drawnLitres: expect.closeTo(68.034, 3) } },
+  'grey-water-tank': { water: { use: 'grey', litres: expect.closeTo(48.144, 3), basis: 'drawn', drawnLitres: expect.closeTo(48.144, 3) } },
   'gas-locker': { gasCylinders: { count: 1, kgEach: 6 }, notCut: expect.stringMatching(/sealed, purpose-made box/) },
   'electrics-bay': { carcass: { pieces: ['sides', 'top', 'bottom', 'back'], shelves: 0 } },
   heater: { heatOutputW: 2000, gasAppliance: { flueless: false, untypedFuel: 'heating' } },
@@ -87,8 +89,9 @@ describe.each(MODULE_KINDS)('kind %s', (kind) => {
     }
     expect(schema.safeParse(spec.props ?? {}).success).toBe(true);
     expect(schema.safeParse({ paintColour: 'red' }).success).toBe(false);
-    // The Details panel shows the values the kind gives a default.
-    expect(shownFields(placed(kind)).map((f) => f.key)).toEqual(Object.keys(spec.props ?? {}));
+    // The Details panel shows the values the kind gives a default, and those it works out (a tank's capacity).
+    const expected = Object.keys(spec.values).filter((k) => Object.hasOwn(spec.props ?? {}, k) || (spec.shown ?? []).includes(k));
+    expect(shownFields(placed(kind)).map((f) => f.key)).toEqual(expected);
   });
 });
 
@@ -123,7 +126,7 @@ describe('migration of version-1 props', () => {
     const r = parseLayoutDoc(doc);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.value.schemaVersion).toBe(2);
+    expect(r.value.schemaVersion).toBe(3);
     expect(r.value.modules.find((m) => m.kind === 'fridge')!.props).toEqual({ litres: 38.5, dutyCycle: 0.5 });
     expect(r.value.modules.find((m) => m.kind === 'fresh-water-tank')!.props).toBeUndefined();
   });

@@ -18,7 +18,9 @@ describe('buildPlanSummary', () => {
     expect(s.water.freshL).toBe(waterPlan(doc).freshL);
     expect(s.lines.map((l) => l.topic)).toEqual(['Mass', 'Axles', 'Payload', 'Power', 'Water']);
     expect(s.lines.find((l) => l.topic === 'Mass')!.text).toMatch(/^Laden [\d,]+ kg of 3,500 kg maximum authorised mass/);
-    expect(s.lines.find((l) => l.topic === 'Water')!.text).toMatch(/Fresh 70 L, grey 70 L; 4\.4 days at 8 L per person a day for 2/);
+    expect(s.lines.find((l) => l.topic === 'Water')!.text).toMatch(/Fresh 68\.0 L, grey 68\.9 L \(from the drawn tank size, less a 5 mm wall\); 4\.3 days at 8 L per person a day for 2/);
+    // By hand: fresh 700 × 350 × 300 less a 5 mm wall = 690 × 340 × 290 mm = 68.034 L; grey 550 × 450 × 300 → 540 × 440 × 290 = 68.904 L;
+    // 68.034 L ÷ (2 × 8 L a day) = 4.25 days.
     for (const l of s.lines) expect(l.text).toMatch(/\d+(\.\d)? ?(kg|Wh|L|days)|need|enter|No water/);
   });
 

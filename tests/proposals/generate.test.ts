@@ -8,6 +8,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { runChecks } from '@/lib/checks';
 import { parseLayoutDoc } from '@/lib/layout/parse';
+import { surfaceIn } from '@/lib/layout/bay';
 import { BAY_TEMPLATES } from '@/lib/layout/templates';
 import type { LayoutDoc } from '@/lib/layout/schema';
 import { briefSchema, generateProposals, TYPICAL_BRIEF, type Brief, type ProposalResult } from '@/lib/proposals';
@@ -44,7 +45,7 @@ function assertMeetsBrief(b: Brief, doc: LayoutDoc) {
     expect(kinds).not.toContain('gas-locker');
     for (const m of doc.modules) if (m.kind === 'hob' || m.kind === 'heater') expect(String(m.props?.fuel ?? '')).not.toMatch(/LPG|gas/i);
   }
-  const beds = doc.modules.filter((m) => m.surface === 'sleep');
+  const beds = doc.modules.filter((m) => surfaceIn(m, 'sleep') === 'sleep');
   expect(beds.length).toBeGreaterThan(0);
   if (b.bed === 'lounge') expect(beds.some((m) => m.kind === 'bench-seat')).toBe(true);
   if (b.bed === 'across' || b.bed === 'lengthways') expect(beds.every((m) => m.kind === 'bed-platform')).toBe(true);

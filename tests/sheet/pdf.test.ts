@@ -60,17 +60,17 @@ describe('A4 at 1:20', () => {
     expect(vertical.length).toBeGreaterThan(0);
   });
 
-  it('runs the right wall from the bulkhead to the grey-water tank at 2650 mm: a line of 132.5 mm = 375.59 pt', () => {
-    // Travel (page 1): the right wall's first module starts 2650 mm from the front; at 1:20 that is
-    // 2650 / 20 = 132.5 mm on paper, × 72 / 25.4 = 375.59 pt.
+  it('runs the right wall from the bulkhead to the rear bench at 2550 mm: a line of 127.5 mm = 361.42 pt', () => {
+    // Travel (page 1): the right wall's first module (the rear bench, a seat in travel) starts 2550 mm
+    // from the front; at 1:20 that is 2550 / 20 = 127.5 mm on paper, × 72 / 25.4 = 361.42 pt.
     const p = read.pages[0];
-    const runs = horizontalOfLength(p, 375.59, 0.05);
+    const runs = horizontalOfLength(p, 361.42, 0.05);
     expect(runs).toHaveLength(1);
     const [run] = runs;
     const end = Math.max(run.x1, run.x2);
     const start = Math.min(run.x1, run.x2);
-    // Its figure, "2650", is set centred under the tick at its end (IBM Plex Mono: 600/1000 em a figure, 4 × 0.6 × 5.5 pt wide).
-    const figure = p.texts.find((t) => t.str === '2650' && Math.abs(t.x + 6.6 - end) < 1.5);
+    // Its figure, "2550", is set centred under the tick at its end (IBM Plex Mono: 600/1000 em a figure, 4 × 0.6 × 5.5 pt wide).
+    const figure = p.texts.find((t) => t.str === '2550' && Math.abs(t.x + 6.6 - end) < 1.5);
     expect(figure).toBeDefined();
     // The left wall's figures stand at their distance from the same front: 1650 mm → 82.5 mm = 233.86 pt.
     const at1650 = p.texts.filter((t) => t.str === '1650').map((t) => t.x + 6.6 - start);

@@ -51,14 +51,17 @@ describe('running dimensions on the plans', () => {
   const items = sheet(null);
   it('runs the left wall of the travel plan through every station from the front, 1:20', () => {
     // Travel, left wall: sink 0–450, fridge 450–900, worktop 450–1100, hob 550–1000, locker 0–1100,
-    // fresh-water tank 1150–1650, heater 2000–2400 → stations 0, 450, 550, 900, 1000, 1100, 1150, 1650, 2000, 2400.
+    // fresh-water tank 1150–1650, heater 2000–2400, side bench 1100–3100 (a seat in travel) →
+    // stations 0, 450, 550, 900, 1000, 1100, 1150, 1650, 2000, 2400, 3100.
     const runs = lines(items, 'dimension:running-left:travel:');
-    expect(runs.map((l) => Number(l.tag!.split(':').pop()))).toEqual([450, 550, 900, 1000, 1100, 1150, 1650, 2000, 2400]);
-    // Together they are 2400 / 20 = 120 mm of paper, from the front.
+    expect(runs.map((l) => Number(l.tag!.split(':').pop()))).toEqual([450, 550, 900, 1000, 1100, 1150, 1650, 2000, 2400, 3100]);
+    // Together they are 3100 / 20 = 155 mm of paper, from the front.
     const total = runs.reduce((n, l) => n + Math.abs(l.x2 - l.x1), 0);
-    expect(total).toBeCloseTo(120, 6);
-    // The right wall: grey-water tank and electrics bay, both 2650–3050.
-    expect(lines(items, 'dimension:running-right:travel:').map((l) => Math.abs(l.x2 - l.x1))).toEqual([132.5, 20]);
+    expect(total).toBeCloseTo(155, 6);
+    // The right wall: the rear bench 2550–3100 (its middle is right of the centre line) and the
+    // electrics bay 2650–3050; the grey tank hangs under the floor and is no station:
+    // 2550 / 20 = 127.5, 100 / 20 = 5, 400 / 20 = 20, 50 / 20 = 2.5 mm.
+    expect(lines(items, 'dimension:running-right:travel:').map((l) => Math.abs(l.x2 - l.x1))).toEqual([127.5, 5, 20, 2.5]);
   });
 });
 

@@ -18,7 +18,7 @@ export function moduleSceneFunc(phantom: boolean) {
     // World layers carry the viewport scale (px per mm); width/height attrs may differ from the
     // module's own during a live resize.
     const scale = shape.getLayer()?.scaleX() || 1;
-    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props }, { scale, phantom, fonts });
+    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props, mount: m.mount }, { scale, phantom, fonts });
   };
 }
 

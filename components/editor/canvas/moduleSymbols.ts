@@ -18,7 +18,12 @@ export interface ModuleLook {
   width: number;
   facing: Facing;
   props?: Module['props'];
+  /** Outside the body (under the floor, on the roof, behind the rear doors): drawn with a chain outline. */
+  mount?: Module['mount'];
 }
+
+/** The few words a plan label adds for an outside-mounted module. */
+const MOUNT_TAG = { 'under-floor': 'under floor', roof: 'on roof', rear: 'behind doors' } as const;
 
 export interface DrawOptions {
   /** Screen px per mm. */
@@ -59,6 +64,12 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   // Phantom line (alternate position): long dash, two short dashes. Hidden edges: plain dashes.
   ctx.setLineDash(o.phantom ? [12 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px, 2.5 * px] : overhead || m.kind === 'bed-infill' ? [5 * px, 3 * px] : []);
   if (spec.family === 'electrics' && !o.phantom) ctx.setLineDash([1.2 * px, 2.6 * px]);
+  // Outside the body: a heavier chain line (long dash, dot), whatever its family.
+  const outside = m.mount !== undefined && m.mount !== 'inside';
+  if (outside && !o.phantom) {
+    ctx.lineWidth = 1.8 * px;
+    ctx.setLineDash([9 * px, 2.5 * px, 1.5 * px, 2.5 * px]);
+  }
   ctx.strokeRect(0, 0, L, W);
   ctx.setLineDash([]);
   if (spec.family === 'gas' && !o.phantom) {
@@ -71,7 +82,8 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   if (!o.phantom && screenMin >= 10) {
     drawSymbol(ctx, m, px);
   }
-  if (screenMin >= 18 && L * o.scale >= 36) drawLabel(ctx, m.label || spec.title, L, W, o, px);
+  const label = m.label || spec.title;
+  if (screenMin >= 18 && L * o.scale >= 36) drawLabel(ctx, outside ? `${label} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` : label, L, W, o, px);
   ctx.restore();
 }
 

@@ -10,10 +10,10 @@ import { useForm, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
-import { ARRANGEMENTS, FACINGS, SURFACES } from '@/lib/layout/vocabulary';
+import { ARRANGEMENTS, FACINGS, MOUNTS, SURFACE_CHOICES } from '@/lib/layout/vocabulary';
 import type { Module } from '@/lib/layout/schema';
-import { KIND_LIST, kindSpec, shownFields } from '@/lib/layout/kinds';
-import { FACING_WORDS } from '@/lib/layout/field-words';
+import { KIND_LIST, kindFacts, kindSpec, shownFields } from '@/lib/layout/kinds';
+import { FACING_WORDS, MOUNT_WORDS, SURFACE_WORDS } from '@/lib/layout/field-words';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { formValuesOf, moduleFormSchema, patchFrom, type ModuleFormValues, type ModuleFormOutput } from './moduleForm';
 import { CommandButton } from './CommandButton';
@@ -54,6 +54,7 @@ export default function ModuleForm({ module }: { module: Module }) {
   const onBlurApply = { onBlur: () => void apply() };
   const spec = kindSpec(module.kind);
   const valueFields = shownFields(module);
+  const drawnLitres = kindFacts(module).water?.drawnLitres;
   const err = (name: keyof ModuleFormValues) => {
     const e = formState.errors[name];
     return e && 'message' in e && typeof e.message === 'string' ? e.message : undefined;
@@ -108,21 +109,31 @@ export default function ModuleForm({ module }: { module: Module }) {
             </select>
           </label>
           <label className="block">
-            <span className="text-xs text-ink-soft">Surface</span>
-            <select {...register('surface', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
-              <option value="">none</option>
-              {SURFACES.map((s) => <option key={s} value={s}>{s}</option>)}
+            <span className="text-xs text-ink-soft">Mounted</span>
+            <select {...register('mount', { onChange: () => void apply() })} data-testid="details-mount" className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+              {MOUNTS.map((m) => <option key={m} value={m}>{MOUNT_WORDS[m]}</option>)}
             </select>
           </label>
         </div>
         <fieldset>
-          <legend className="text-xs text-ink-soft">Exists in</legend>
-          <div className="mt-1 flex gap-3">
+          <legend className="text-xs text-ink-soft">Exists in, and its top there</legend>
+          <div className="mt-1 grid grid-cols-[auto_1fr] items-center gap-x-3 gap-y-1">
             {ARRANGEMENTS.map((a) => (
-              <label key={a} className="flex items-center gap-1.5">
-                <input type="checkbox" value={a} {...register('arrangements', { onChange: () => void apply() })} className="accent-copper" data-testid={`details-in-${a}`} />
-                {a}
-              </label>
+              <div key={a} className="contents">
+                <label className="flex items-center gap-1.5">
+                  <input type="checkbox" value={a} {...register('arrangements', { onChange: () => void apply() })} className="accent-copper" data-testid={`details-in-${a}`} />
+                  {a}
+                </label>
+                <select
+                  {...register(`surfaces.${a}`, { onChange: () => void apply() })}
+                  aria-label={`Top used as in ${a}`}
+                  data-testid={`details-top-${a}`}
+                  className="w-full rounded border border-paper-edge bg-paper px-2 py-0.5 text-xs"
+                >
+                  <option value="">not set</option>
+                  {SURFACE_CHOICES.map((c) => <option key={c} value={c}>{SURFACE_WORDS[c]}</option>)}
+                </select>
+              </div>
             ))}
           </div>
           {err('arrangements') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('arrangements')}</span>}
@@ -147,7 +158,7 @@ export default function ModuleForm({ module }: { module: Module }) {
               ) : (
                 <label key={k} className="block">
                   <span className="text-xs text-ink-soft">{field.label}</span>
-                  <input {...register(`props.${k}`, onBlurApply)} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
+                  <input {...register(`props.${k}`, onBlurApply)} placeholder={k === 'litres' && drawnLitres !== undefined ? `from its drawn size: ${drawnLitres.toFixed(1)}` : undefined} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
                 </label>
               );
             })}

@@ -4,7 +4,7 @@
  * millimetres. Pure: no React, so it is tested on its own.
  */
 import * as z from 'zod/mini';
-import { ARRANGEMENTS, FACINGS, MODULE_LIMITS, SURFACES } from '@/lib/layout/vocabulary';
+import { ARRANGEMENTS, FACINGS, MODULE_LIMITS, MOUNTS, SURFACE_CHOICES } from '@/lib/layout/vocabulary';
 import { kindSpec, MODULE_KINDS } from '@/lib/layout/kinds';
 import type { Module } from '@/lib/layout/schema';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
@@ -20,7 +20,9 @@ export interface ModuleFormValues {
   height: string;
   facing: Module['facing'];
   arrangements: Module['arrangements'];
-  surface: '' | NonNullable<Module['surface']>;
+  /** The top in each arrangement; '' when the module says nothing there. */
+  surfaces: Record<Module['arrangements'][number], '' | (typeof SURFACE_CHOICES)[number]>;
+  mount: NonNullable<Module['mount']>;
   massKg: string;
   props: Record<string, string | boolean>;
 }
@@ -52,7 +54,12 @@ export function moduleFormSchema(unit: LengthUnit) {
     height: lengthField(unit, MODULE_LIMITS.height.min, MODULE_LIMITS.height.max, 'Height'),
     facing: z.enum(FACINGS),
     arrangements: z.array(z.enum(ARRANGEMENTS)).check(z.minLength(1, 'a module exists in at least one arrangement')),
-    surface: z.union([z.literal(''), z.enum(SURFACES)]),
+    surfaces: z.object({
+      travel: z.union([z.literal(''), z.enum(SURFACE_CHOICES)]),
+      lounge: z.union([z.literal(''), z.enum(SURFACE_CHOICES)]),
+      sleep: z.union([z.literal(''), z.enum(SURFACE_CHOICES)]),
+    }),
+    mount: z.enum(MOUNTS),
     massKg: z.pipe(z.string(), z.transform((s: string, ctx) => {
       const t = s.trim().replace(/\s*kg$/i, '');
       if (t === '') return undefined;
@@ -84,14 +91,15 @@ export function formValuesOf(m: Module, unit: LengthUnit): ModuleFormValues {
     height: len(m.height),
     facing: m.facing,
     arrangements: [...m.arrangements],
-    surface: m.surface ?? '',
+    surfaces: { travel: m.surfaces?.travel ?? '', lounge: m.surfaces?.lounge ?? '', sleep: m.surfaces?.sleep ?? '' },
+    mount: m.mount ?? 'inside',
     massKg: m.massKg === undefined ? '' : String(m.massKg),
     props,
   };
 }
 
 /**
- * The kind's values as typed in: number fields go back as numbers (text that does not read as one
+ * The kind's values as typed in: number fields go back as numbers (a blank one is left out) (text that does not read as one
  * stays text, and the schema names the field); yes/no and text fields as they are.
  */
 function propsOut(kind: Module['kind'], values: Record<string, string | boolean>): Module['props'] {
@@ -99,12 +107,20 @@ function propsOut(kind: Module['kind'], values: Record<string, string | boolean>
   const out: Record<string, string | number | boolean> = {};
   for (const [k, v] of Object.entries(values)) {
     if (typeof v === 'boolean' || fields[k]?.input !== 'number') out[k] = v;
+    else if (v.trim() === '') continue; // left blank: the kind's worked-out default stands (a tank's drawn capacity)
     else {
       const n = Number(v.trim().replace(',', '.'));
       out[k] = Number.isFinite(n) ? n : v;
     }
   }
   return Object.keys(out).length ? (out as Module['props']) : undefined;
+}
+
+/** The per-arrangement tops as the document writes them: only the arrangements that say something. */
+function surfacesOut(v: ModuleFormOutput['surfaces']): Module['surfaces'] {
+  const out: NonNullable<Module['surfaces']> = {};
+  for (const a of ARRANGEMENTS) if (v[a] !== '') out[a] = v[a];
+  return Object.keys(out).length ? out : undefined;
 }
 
 /** The fields that changed, as a patch for the store (undefined clears an optional field). */
@@ -115,7 +131,8 @@ export function patchFrom(m: Module, v: ModuleFormOutput): Partial<Omit<Module, 
     x: v.x, y: v.y, length: v.length, width: v.width, elevation: v.elevation, height: v.height,
     facing: v.facing,
     arrangements: ARRANGEMENTS.filter((a) => v.arrangements.includes(a)),
-    surface: v.surface === '' ? undefined : v.surface,
+    surfaces: surfacesOut(v.surfaces),
+    mount: v.mount === 'inside' ? undefined : v.mount,
     massKg: v.massKg,
     props: propsOut(m.kind, v.props),
   };

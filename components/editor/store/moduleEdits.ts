@@ -7,7 +7,7 @@
 import { KINDS, kindSpec } from '@/lib/layout/kinds';
 import { firstProblem, moduleSchema, type Arrangement, type Facing, type LayoutDoc, type Module, type ModuleKind } from '@/lib/layout/schema';
 import { rectFromExtent, rectsOverlap } from '@/lib/geometry/rect';
-import { footprintRect, inArrangement, linedInterior, shareAnArrangement, type Footprint } from '@/lib/layout/bay';
+import { footprintRect, inArrangement, linedInterior, mountedInside, roomFacing, shareAnArrangement, type Footprint } from '@/lib/layout/bay';
 import { snapToStep } from '../geometry/snapping';
 import { newModuleId } from './ids';
 
@@ -57,7 +57,7 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
     height: spec.height,
     facing: 'front',
     arrangements: [...spec.arrangements],
-    ...(spec.surface ? { surface: spec.surface } : {}),
+    ...(spec.surfaces ? { surfaces: { ...spec.surfaces } } : {}),
     massKg: spec.massKg,
     ...(spec.props ? { props: { ...spec.props } } : {}),
   } as Module);
@@ -99,7 +99,9 @@ export function placeModule(doc: LayoutDoc, kind: ModuleKind, centre?: { x: numb
   } else {
     pos = freeSpot(doc, base);
   }
-  const placed = checkedModule({ ...base, ...pos });
+  // Against a wall, it faces the room from that wall.
+  const facing = roomFacing(doc, { ...base, ...pos }) ?? base.facing;
+  const placed = checkedModule({ ...base, ...pos, facing });
   if (doc.modules.length >= 5000) throw new EditError('a layout holds at most 5000 modules');
   return { doc: { ...doc, modules: [...doc.modules, placed] }, module: placed };
 }
@@ -107,8 +109,19 @@ export function placeModule(doc: LayoutDoc, kind: ModuleKind, centre?: { x: numb
 export function moveModules(doc: LayoutDoc, ids: readonly string[], dx: number, dy: number): LayoutDoc {
   const set = new Set(ids);
   const changed = new Map<string, Module>();
-  for (const m of doc.modules) if (set.has(m.id)) changed.set(m.id, checkedModule({ ...m, x: m.x + dx, y: m.y + dy }));
+  for (const m of doc.modules) if (set.has(m.id)) changed.set(m.id, checkedModule(facingAfterMove(doc, m, { ...m, x: m.x + dx, y: m.y + dy })));
   return replaceModules(doc, changed);
+}
+
+/**
+ * A module moved so that it now stands against a wall it did not stand against before faces the
+ * room from that wall; sliding along a wall, or moving in the open, keeps the facing it has.
+ * Outside-mounted modules keep theirs.
+ */
+function facingAfterMove(doc: LayoutDoc, before: Module, after: Module): Module {
+  if (!mountedInside(after)) return after;
+  const now = roomFacing(doc, after);
+  return now !== null && now !== roomFacing(doc, before) ? { ...after, facing: now } : after;
 }
 
 export function resizeModule(doc: LayoutDoc, id: string, rect: Footprint): LayoutDoc {

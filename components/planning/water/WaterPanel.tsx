@@ -6,7 +6,7 @@
  */
 import { useMemo } from 'react';
 import * as z from 'zod/mini';
-import { DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterPlan } from '@/lib/planning';
+import { DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, waterBasisWords, waterPlan } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
 import { kindFacts } from '@/lib/layout/kinds';
 import { FindingList, findingsOf } from '../FindingList';
@@ -39,7 +39,7 @@ export function WaterPanel({ doc, readOnly, onSystems, onValidity, findings }: P
     <div className="grid gap-6 xl:grid-cols-2">
       <form className="space-y-4" onSubmit={(ev) => ev.preventDefault()} noValidate aria-label="Water inputs">
         <fieldset disabled={readOnly}>
-          <FieldGroup title="Water use" note="Tank sizes come from the tank modules on the plan (their litres in the Details panel).">
+          <FieldGroup title="Water use" note="Tank sizes come from the tank modules on the plan: the capacity typed in the Details panel, else the drawn inside volume.">
             <QuantityField label="People using the water" unit="people" reg={form.register('persons')} error={e.persons} placeholder={String(Math.max(1, doc.occupants.sleepers.length))} hint="empty: the sleepers" />
             <QuantityField label="Use per person a day" unit="L" reg={form.register('litresPerPersonPerDay')} error={e.litresPerPersonPerDay} placeholder={String(DEFAULT_L_PER_PERSON_DAY)} hint="empty: 10 L (drinking, cooking, washing up, a wash; common practice, no source)" />
           </FieldGroup>
@@ -47,8 +47,8 @@ export function WaterPanel({ doc, readOnly, onSystems, onValidity, findings }: P
       </form>
       <section className="space-y-4" aria-label="Water results" data-testid="water-results">
         <div className="panel grid gap-2 p-3 text-sm sm:grid-cols-2">
-          <p>Fresh water: <span className="font-mono">{w.freshL} L</span> <span className="text-ink-soft">({w.freshFullKg} kg full)</span></p>
-          <p>Grey water: <span className="font-mono">{w.greyL} L</span></p>
+          <p>Fresh water: <span className="font-mono" data-testid="water-fresh">{formatNumber(w.freshL, 1)} L</span> <span className="text-ink-soft">({formatNumber(w.freshFullKg, 1)} kg full; {waterBasisWords(w.freshBasis)})</span></p>
+          <p>Grey water: <span className="font-mono">{formatNumber(w.greyL, 1)} L</span> <span className="text-ink-soft">({waterBasisWords(w.greyBasis)})</span></p>
           <p>Lasts: <span className="font-mono" data-testid="water-days">{w.days === null ? '—' : `${formatNumber(w.days, 1)} days`}</span> <span className="text-ink-soft">for {w.persons} at {w.litresPerPersonPerDay} L a day</span></p>
           <p>Self-contained minimum: <span className="font-mono">{w.nzsMinimumL} L</span> <span className="text-ink-soft">({NZS5465_L_PER_PERSON_DAY} L × {NZS5465_DAYS} days each; NZS 5465, as cited)</span></p>
         </div>

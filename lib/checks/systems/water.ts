@@ -6,12 +6,16 @@
  *   practice, hence `warn` rather than `fail`.
  * - `water.days`: a comfort estimate at the use entered on the water tab (or 10 L per person per
  *   day), against 3 days between fills — common practice, no source, and it says so.
- * No tank modules → no water findings.
+ * - `water.capacity`: a tank's typed capacity larger than its drawn inside volume (outside size less
+ *   a 5 mm wall on every face, common practice, no source; times its fill fraction) cannot be
+ *   right: fail, naming the tank. One finding per tank with a typed capacity.
+ * Every total says whether it came from typed capacities or drawn sizes. No tank modules → no water findings.
  *
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
-import { COMFORT_DAYS_BETWEEN_FILLS, DEFAULT_L_PER_PERSON_DAY, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, NZS5465_SOURCE, waterPlan } from '../../planning';
+import { COMFORT_DAYS_BETWEEN_FILLS, DEFAULT_L_PER_PERSON_DAY, moduleRef, NZS5465_DAYS, NZS5465_L_PER_PERSON_DAY, NZS5465_SOURCE, waterBasisWords, waterPlan } from '../../planning';
+import { TANK_WALL_MM } from '../../layout/tank';
 import type { Finding } from '../types';
 import { num, round } from './wording';
 
@@ -27,7 +31,7 @@ export function waterChecks(doc: LayoutDoc): Finding[] {
     required: w.nzsMinimumL,
     unit: 'L',
     moduleIds: w.freshTankIds,
-    message: `Fresh water ${num(w.freshL)} L (${num(w.freshFullKg)} kg when full) for ${people}. The self-containment rule counts ${NZS5465_L_PER_PERSON_DAY} L per person per day for ${NZS5465_DAYS} days, whatever the use entered: ${num(w.nzsMinimumL)} L${w.freshL >= w.nzsMinimumL ? ', met.' : `, ${num(w.nzsMinimumL - w.freshL)} L short.`}`,
+    message: `Fresh water ${num(w.freshL, 1)} L (${waterBasisWords(w.freshBasis)}; ${num(w.freshFullKg, 1)} kg when full) for ${people}. The self-containment rule counts ${NZS5465_L_PER_PERSON_DAY} L per person per day for ${NZS5465_DAYS} days, whatever the use entered: ${num(w.nzsMinimumL)} L${w.freshL >= w.nzsMinimumL ? ', met.' : `, ${num(w.nzsMinimumL - w.freshL)} L short.`}`,
     source: NZS5465_SOURCE,
   });
   if (w.days !== null) {
@@ -52,8 +56,29 @@ export function waterChecks(doc: LayoutDoc): Finding[] {
     moduleIds: [...w.greyTankIds, ...w.freshTankIds],
     message: w.greyL === 0
       ? `No grey water tank: ${num(w.freshL)} L of fresh water has nowhere to go but the ground. A self-contained van holds its grey water in a tank at least as large as the fresh tank.`
-      : `Grey tank ${num(w.greyL)} L against ${num(w.freshL)} L fresh: ${w.greyL >= w.freshL ? 'large enough to hold all the fresh water used.' : 'smaller than the fresh tank, so it fills before the fresh water runs out.'}`,
+      : `Grey tank ${num(w.greyL, 1)} L (${waterBasisWords(w.greyBasis)}) against ${num(w.freshL, 1)} L fresh: ${w.greyL >= w.freshL ? 'large enough to hold all the fresh water used.' : 'smaller than the fresh tank, so it fills before the fresh water runs out.'}`,
     source: NZS5465_SOURCE,
   });
+  const byId = new Map(doc.modules.map((m) => [m.id, m]));
+  for (const t of w.tanks) {
+    if (t.basis !== 'typed') continue;
+    const m = byId.get(t.id)!;
+    // Compared to the tenth of a litre the figures are shown in.
+    const over = round(t.litres, 1) > round(t.drawnLitres, 1);
+    out.push({
+      id: 'water.capacity',
+      status: over ? 'fail' : 'pass',
+      measured: round(t.litres, 1),
+      required: round(t.drawnLitres, 1),
+      unit: 'L',
+      moduleIds: [t.id],
+      message: `${cap(moduleRef(m))} is typed as ${num(t.litres, 1)} L; drawn ${m.length} × ${m.width} × ${m.height} mm, its inside holds ${num(t.drawnLitres, 1)} L after a ${TANK_WALL_MM} mm wall on every face. ${over ? 'A tank cannot hold more than its inside: draw it at its real size or correct the capacity.' : 'The typed capacity fits inside it.'}`,
+      source: `Tank inside volume: outside size less a ${TANK_WALL_MM} mm wall on every face — common practice, no source (moulded tanks have walls of about 4–6 mm)`,
+    });
+  }
   return out;
+}
+
+function cap(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }
