@@ -27,11 +27,10 @@ import { figuresOf, scoreAll, type Figures, type Score } from './score';
 import { explainFinding, explainMiss, type Reason } from './reasons';
 
 /**
- * Proposals are written as version-2 documents (a module's one `surface` set by `surfaceOf`) and go
- * through `parseLayoutDoc`, which migrates them to whatever version this code stores (version 3:
- * that surface in every arrangement the module is in).
+ * Proposals are written as version-3 documents (each module's top per arrangement set by
+ * `surfacesOf`) and go through `parseLayoutDoc`, like every document that enters the system.
  */
-const PROPOSAL_SCHEMA_VERSION = 2;
+const PROPOSAL_SCHEMA_VERSION = 3;
 
 /** At most this many candidates are laid out and checked for one brief (bounded work per request). */
 export const MAX_CANDIDATES = 2000;

@@ -1,12 +1,11 @@
 /**
  * The pieces a proposal is made of, in the bay's frame: a module as the document writes it (one
- * builder, so every proposal module has an id, a role and its arrangements), the surface each
- * role gives a module (kept in one function, `surfaceOf`, so a change to how surfaces are stored
- * touches only it), and the bay's keep-clear zones (door entries, wheel arches).
+ * builder, so every proposal module has an id, a role and its arrangements), the surfaces each
+ * role gives a module per arrangement (kept in one function, `surfacesOf`), and the bay's keep-clear zones (door entries, wheel arches).
  * Pure: must never import React, Next, the database or the services.
  */
 import type { Rect } from '../geometry/rect';
-import type { Arrangement, Bay, Facing, ModuleKind } from '../layout/schema';
+import type { Arrangement, Bay, Facing, ModuleKind, SurfaceChoice, Surfaces } from '../layout/schema';
 import type { LayoutDocInput } from '../layout/document';
 
 type ModuleInput = LayoutDocInput['modules'][number];
@@ -18,22 +17,25 @@ export type Role =
   | 'fresh' | 'grey' | 'electrics' | 'heater' | 'toilet' | 'shower';
 
 /**
- * The one place a proposal decides a module's surface: what a person lies, sits or works on.
- * Bench seats that make up into a bed count as sleep surface (the bed rules measure them).
+ * The one place a proposal decides what a module's top is used as, per arrangement it is in: what a
+ * person lies, sits or works on. Bench seats that make up into the bed are seats by day (travel,
+ * lounge) and sleeping surface by night, as the trade builds them.
  */
-export function surfaceOf(role: Role): 'sleep' | 'seat' | 'counter' | undefined {
+export function surfacesOf(role: Role, arrangements: readonly Arrangement[]): Surfaces | undefined {
+  const day = (surface: SurfaceChoice): Surfaces => Object.fromEntries(arrangements.map((a) => [a, surface]));
   switch (role) {
     case 'bed':
-    case 'bench-bed':
     case 'infill':
-      return 'sleep';
+      return day('sleep');
+    case 'bench-bed':
+      return Object.fromEntries(arrangements.map((a) => [a, a === 'sleep' ? 'sleep' : 'seat']));
     case 'bench':
     case 'seat':
-      return 'seat';
+      return day('seat');
     case 'counter':
     case 'sink':
     case 'table':
-      return 'counter';
+      return day('counter');
     default:
       return undefined;
   }
@@ -57,7 +59,7 @@ export interface Part {
 }
 
 export function toModule(p: Part, index: number): ModuleInput {
-  const surface = surfaceOf(p.role);
+  const surfaces = surfacesOf(p.role, p.arrangements);
   return {
     id: `${p.role}-${index + 1}`,
     label: p.label,
@@ -70,7 +72,7 @@ export function toModule(p: Part, index: number): ModuleInput {
     height: Math.round(p.height),
     facing: p.facing,
     arrangements: p.arrangements,
-    ...(surface ? { surface } : {}),
+    ...(surfaces ? { surfaces } : {}),
     ...(p.props ? { props: p.props } : {}),
   } as ModuleInput;
 }
