@@ -81,6 +81,7 @@ function EditorScreen({ layoutId, canEdit, extensions }: EditorProps) {
   return (
     <div className="flex h-full min-h-0 flex-col bg-paper text-ink" data-testid="editor" data-read-only={!canEdit}>
       <Toolbar saveStatus={save.status} saveDetail={save.lastError} extra={extensions?.toolbarExtra} />
+      {extensions?.banner}
       <div className="flex min-h-0 flex-1">
         {canEdit && <PartsShelf focusPlan={focusPlan} />}
         <main className="flex min-w-0 flex-1 flex-col" aria-label="Plan and checks">

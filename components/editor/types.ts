@@ -28,6 +28,8 @@ export interface EditorExtensions {
   planUnderlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
   /** Extra controls at the right end of the toolbar. */
   toolbarExtra?: ReactNode;
+  /** A strip under the toolbar (rendered inside the editor's store provider): where the layout stands with its revisions. */
+  banner?: ReactNode;
   /** Where findings come from instead of POST /api/checks (a viewer link has no session). */
   fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>;
   /** A newer stored copy to show while read-only (live viewer links): replaces the document when its version moves on. */
