@@ -70,6 +70,16 @@ export const PLANNING_ROWS: Row[] = [
     expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 201, owner: 201, foreignOwner: 404 },
   },
   { route: '/api/layouts/[id]/quote/parts', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: WORKSHOP_READ },
+  {
+    route: '/api/layouts/[id]/quote/pdf', method: 'GET',
+    request: async (fx) => {
+      const { sendQuote } = await import('@/db/quotes');
+      const l = await layoutForClient(fx, `Matrix quote file ${seq++}`);
+      await sendQuote(designerOf(fx), l.id, { layoutVersion: l.version, depositPct: 20, confirmUnapproved: true });
+      return { params: { id: l.id } };
+    },
+    expect: READ,
+  },
   { route: '/api/layouts/[id]/quote/parts', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId }, path: '/parts?revision=preliminary' }), expect: WORKSHOP_READ },
   {
     route: '/api/layouts/[id]/quote/checkout', method: 'POST',
