@@ -232,6 +232,7 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
           note: input.note ?? '',
           sentBy: actor.userId,
           sentByName: actor.name,
+          sentAt: now,
         })
         .returning();
       return created;
