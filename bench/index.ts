@@ -174,7 +174,7 @@ ${table}
   with the CPU throttled; re-run on an idle machine before reading a miss as a regression. On this 2-core machine, repeated runs of the API figures vary by ±20 % with no change to the code
   (autocannon shares the cores with the server). Compare figures from one run, not across runs.
 
-${testTimeSection()}## Reproduce
+${testTimeSection()}${keptSection('bench/idle-runs.md')}## Reproduce
 
 \`\`\`sh
 npm ci
@@ -188,8 +188,13 @@ Run it on an otherwise idle machine: the figures above share two cores with noth
 
 /** The test suite's time (bench/test-time.md, measured with `npm test`, not by this run), kept in the report. */
 function testTimeSection(): string {
+  return keptSection('bench/test-time.md');
+}
+
+/** A section measured by hand, outside this run (bench/*.md), copied into the report as it is. */
+function keptSection(file: string): string {
   try {
-    return `${fs.readFileSync('bench/test-time.md', 'utf8').trim()}\n\n`;
+    return `${fs.readFileSync(file, 'utf8').trim()}\n\n`;
   } catch {
     return '';
   }

@@ -11,7 +11,7 @@ import { studios } from '../schema';
 import { NotFoundError } from '../errors';
 import type { Actor } from '../actor';
 import { settingsSchema, type LayoutDoc } from '../../lib/layout/schema';
-import { diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
+import { diffFindings, diffRevisions, type FindingChange, type RevisionDiff } from '../../lib/layout/revision-diff';
 import { runJob } from '../../lib/workers/pool';
 import { AS_LAST_SAVED } from '../../lib/layout/drawing-issue';
 import { loadLayoutFor } from '../access';
@@ -50,12 +50,16 @@ export async function compareRevisions(actor: Actor, layoutId: string, fromRef: 
   const db = await getDb();
   const [s] = await db.select({ checkDefaults: studios.checkDefaults }).from(studios).where(eq(studios.id, actor.studioId)).limit(1);
   const defaults = settingsSchema.safeParse(s?.checkDefaults).data ?? {};
-  // Both check runs happen in the work pool (lib/workers), off the request thread.
-  const checked = await runJob('compareChecks', { from: from.doc, to: to.doc, studioDefaults: defaults });
+  // Both check runs happen in the work pool (lib/workers), off the request thread, side by side
+  // (one worker each when both are free); the reports are bounded, so diffing them here is cheap.
+  const [before, after] = await Promise.all([
+    runJob('checks', { doc: from.doc, studioDefaults: defaults }),
+    runJob('checks', { doc: to.doc, studioDefaults: defaults }),
+  ]);
   return {
-    from: { ...from, ok: checked.beforeOk },
-    to: { ...to, ok: checked.afterOk },
+    from: { ...from, ok: before.ok },
+    to: { ...to, ok: after.ok },
     diff: diffRevisions(from.doc, to.doc),
-    findings: checked.findings,
+    findings: diffFindings(before.findings, after.findings),
   };
 }

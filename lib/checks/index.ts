@@ -29,6 +29,8 @@ export type { CheckReport, Finding, FindingStatus } from './types';
 export interface RunChecksOptions {
   /** The studio's defaults, layered under `doc.settings`. */
   studioDefaults?: LayoutSettings;
+  /** Told the geometry work the run spent against its budget (tests and benchmarks read it). */
+  onWork?: (work: { used: number; limit: number }) => void;
 }
 
 /**
@@ -100,6 +102,7 @@ export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): Check
     ...guarded('travel', () => [travelSeats(ctx)]),
     ...guarded('systems', () => systemChecks(doc)),
   ]);
+  options.onWork?.({ used: ctx.budget.used, limit: ctx.budget.limit });
   return { ok: !findings.some((f) => f.status === 'fail'), findings };
 }
 

@@ -7,7 +7,6 @@
  * Must never import the database, Next, React or `server-only`: a worker has none of them.
  */
 import { runChecks, type CheckReport } from '../checks';
-import { diffFindings, type FindingChange } from '../layout/revision-diff';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
@@ -26,18 +25,6 @@ export interface CheckInputInput {
 }
 
 export type CheckInputOutput = { ok: true; report: CheckReport } | { ok: false; notJson: true } | { ok: false; issues: FieldIssue[] };
-
-export interface CompareChecksInput {
-  from: LayoutDoc;
-  to: LayoutDoc;
-  studioDefaults?: LayoutSettings;
-}
-
-export interface CompareChecksOutput {
-  beforeOk: boolean;
-  afterOk: boolean;
-  findings: FindingChange[];
-}
 
 /** A plan sheet's inputs, before the checks: the job runs them with the studio's defaults. */
 export type SheetInput = Omit<SheetRequest, 'report' | 'checksUnavailable'> & { studioDefaults?: LayoutSettings };
@@ -76,12 +63,7 @@ export const JOBS = {
     if (!parsed.ok) return { ok: false, issues: parsed.issues };
     return { ok: true, report: runChecks(parsed.value, { studioDefaults: input.studioDefaults }) };
   },
-  /** Both documents checked, and the findings whose status changed. */
-  compareChecks: (input: CompareChecksInput): CompareChecksOutput => {
-    const before = runChecks(input.from, { studioDefaults: input.studioDefaults });
-    const after = runChecks(input.to, { studioDefaults: input.studioDefaults });
-    return { beforeOk: before.ok, afterOk: after.ok, findings: diffFindings(before.findings, after.findings) };
-  },
+
   /** The plan sheet as a drawing model (the print view draws it as SVG). */
   sheet: (input: SheetInput): SheetResult => checkedSheet(input),
   /** The plan sheet as PDF bytes. */
