@@ -25,7 +25,7 @@ export function LayoutStateBadge({ state, letter, changedSince }: { state: Layou
   const { className, Icon } = LOOK[state];
   if (changedSince && letter && state !== 'draft') {
     return (
-      <span className={`inline-flex items-center gap-1 rounded-sm border px-1.5 py-0.5 text-xs font-medium ${className}`} data-state={state} data-changed-since={letter}>
+      <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded-sm border px-1.5 py-0.5 text-xs font-medium ${className}`} data-state={state} data-changed-since={letter}>
         <Icon size={12} aria-hidden="true" />
         {ISSUE_STATE_WORD[state]} <span className="font-mono">{letter}</span>{' · '}
         <Link className="underline underline-offset-2 hover:text-copper" href={changedSinceHref(changedSince.layoutId, letter)} title={`What changed since revision ${letter}`}>
