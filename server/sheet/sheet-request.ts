@@ -13,7 +13,7 @@ import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
-import { getRevision, listRevisions, revisionIdByLetter, type RevisionDto } from '@/db/sharing/revisions';
+import { getRevision, listRevisions, type RevisionDto } from '@/db/sharing/revisions';
 import { diffRevisions } from '@/lib/layout/revision-diff';
 import type { LayoutDoc } from '@/lib/layout';
 import { REVISION_LETTER } from '@/lib/sheet';
@@ -55,12 +55,6 @@ export interface SheetContext {
 
 export function today(now = new Date()): string {
   return formatDate(now);
-}
-
-/** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
-export async function frozenRevision(actor: Actor, layoutId: string, letter: string): Promise<FrozenRevision> {
-  const rev = await getRevision(actor, layoutId, await revisionIdByLetter(actor, layoutId, letter));
-  return { letter: rev.letter, doc: rev.doc, state: rev.state };
 }
 
 /**
