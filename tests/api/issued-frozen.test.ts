@@ -149,7 +149,7 @@ describe('approve B, then edit: the next preliminary starts and B stays frozen',
     expect(draft.firstPage).toContain('Preliminary');
     const older = await sheetText(w.client, '?revision=A');
     expect(older.text).toContain('Bed as first drawn');
-  });
+  }, 90_000); // three full sheets drawn and read back: seconds each on a busy machine
 
   it('prices the parts list from B by default and from the preliminary only when chosen', async () => {
     const byDefault = await call(partsRoute.GET, { params: { id }, as: w.designer, path: '/parts' });
@@ -227,5 +227,5 @@ describe('approve B, then edit: the next preliminary starts and B stays frozen',
     expect(quote.status).toBe(201);
     expect(quote.body.quote.revision).toEqual({ letter: 'C', approved: true });
     expect((await tableRow(w.designer)).sharing).toMatchObject({ state: 'approved', latestRevision: 'C', changedSince: false });
-  });
+  }, 90_000);
 });
