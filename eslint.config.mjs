@@ -11,7 +11,7 @@ import nextTs from 'eslint-config-next/typescript';
 const RULE = '@typescript-eslint/no-restricted-imports';
 
 /** Where each layer lives. */
-const PURE = ['lib/geometry', 'lib/layout', 'lib/checks', 'lib/planning', 'lib/sheet', 'lib/symbols', 'lib/tracing', 'lib/cache'];
+const PURE = ['lib/geometry', 'lib/layout', 'lib/checks', 'lib/planning', 'lib/proposals', 'lib/sheet', 'lib/symbols', 'lib/tracing', 'lib/cache'];
 const PURE_FILES = ['lib/format.ts', 'lib/look.ts'];
 /** The editor's pure core: geometry, commands, store logic, edits and history (hooks `use*.ts` and `.tsx` are UI). */
 const EDITOR_CORE = ['components/editor/geometry', 'components/editor/commands', 'components/editor/store'];

@@ -10,13 +10,14 @@ import path from 'node:path';
  *  - `db`: everything else. Its global set-up provides a migrated PGlite template
  *    (tests/setup/global.ts, cached between runs); each file clones it (tests/helpers/db.ts).
  */
-const PURE_FOLDERS = ['geometry', 'checks', 'layout', 'planning', 'editor', 'fakes', 'adapters', 'layers'];
+const PURE_FOLDERS = ['geometry', 'checks', 'layout', 'planning', 'proposals', 'editor', 'fakes', 'adapters', 'layers'];
 const PURE_FILES = [
   'sheet/bounded',
   'sheet/compose',
   'sheet/layout-file',
   'sheet/paper',
   'sheet/pdf',
+  'sheet/running-dimensions',
   'sharing/mail-compose',
   'sharing/pin-geometry',
   'sharing/revision-diff',

@@ -7,6 +7,7 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import { benchChecks } from './checks';
+import { benchProposals } from './proposals';
 import { benchApi } from './api';
 import { benchHostile } from './hostile';
 import { benchEditor } from './editor';
@@ -27,6 +28,7 @@ async function main() {
   buildIfNeeded();
   const loadBefore = os.loadavg();
   const checks = benchChecks();
+  const proposals = benchProposals();
   const api = await benchApi();
   const hostile = await benchHostile();
   const editor = await benchEditor();
@@ -39,6 +41,12 @@ async function main() {
     { what: 'runChecks median, 200 modules', figure: `${round(checks.m200, 2)} ms`, goal: '≤ 20 ms', met: checks.m200 <= 20 },
     { what: 'runChecks median, 2000 modules', figure: `${round(checks.m2000, 2)} ms`, goal: '—', met: null },
     { what: 'runChecks ratio 2000/200', figure: `${round(checks.ratio, 1)}`, goal: '≤ 15', met: checks.ratio <= 15 },
+    ...proposals.map((p) => ({
+      what: `proposals, typical two-sleeper brief, ${p.template}: time to the final proposals (${p.checked} candidates checked, ${round(p.perSecond, 0)} a second)`,
+      figure: `${round(p.ms, 0)} ms`,
+      goal: '≤ 2000 ms, ≥ 250 checked a second',
+      met: p.ms <= 2000 && (p.checked === 0 || p.perSecond >= 250),
+    })),
     ...(
       [
         ['read a layout', api.read, 50],
@@ -89,7 +97,7 @@ async function main() {
       // Load average (1 min) when the run started and ended: other work on the machine slows every figure.
       load: { before: round(loadBefore[0], 1), after: round(os.loadavg()[0], 1) },
     },
-    checks, api, hostile, editor, bundles, vitals, startup, lines,
+    checks, proposals, api, hostile, editor, bundles, vitals, startup, lines,
   };
   fs.mkdirSync('bench', { recursive: true });
   fs.writeFileSync('bench/results.json', JSON.stringify(results, null, 2) + '\n');

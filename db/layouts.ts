@@ -11,7 +11,7 @@ import { prepared } from './prepared';
 import { layouts, memberships, payments, quotes, users } from './schema';
 import { BadRequestError, ConflictError, ForbiddenError, VersionConflictError } from './errors';
 import type { Actor } from './actor';
-import { loadLayoutFor, mayEditLayout, requireWorkshop, rightsOver, visibleLayouts, type EditableLayoutAccess } from './access';
+import { loadLayoutFor, mayEditLayout, mayReadLayout, requireWorkshop, rightsOver, visibleLayouts, type EditableLayoutAccess } from './access';
 import { isId } from './ids';
 import type { LayoutDoc } from '../lib/layout/schema';
 import { sizeClassOf } from '../lib/layout/templates';
@@ -19,6 +19,7 @@ import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-su
 import { Lru } from '../lib/cache/lru';
 import { jsonText, withJsonField, type JsonText } from '../lib/cache/json-text';
 import { readStoredDoc } from './stored-doc';
+import { recordSave } from './saved-version-record';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -32,6 +33,8 @@ export interface LayoutSummaryDto {
   updatedBy: string | null;
   /** When the layout was archived (ISO time); null while it is in use. */
   archivedAt: string | null;
+  /** The layout this one is a variant of (its original), if any. */
+  variantOf: { id: string; name: string } | null;
   /** In lists only: state with the client and open comment threads (db/sharing). */
   sharing?: LayoutSharingSummary;
 }
@@ -44,6 +47,7 @@ export interface LayoutDto extends LayoutSummaryDto {
 
 const updater = alias(users, 'updater');
 const client = alias(users, 'client');
+const original = alias(layouts, 'original');
 
 function metaSelect() {
   return {
@@ -57,6 +61,10 @@ function metaSelect() {
     clientName: client.name,
     updatedByName: updater.name,
     archivedAt: layouts.archivedAt,
+    variantOfId: layouts.variantOf,
+    variantOfName: original.name,
+    variantOfStudioId: original.studioId,
+    variantOfClientId: original.clientId,
   };
 }
 
@@ -75,6 +83,10 @@ type MetaRow = {
   clientName: string | null;
   updatedByName: string | null;
   archivedAt: Date | null;
+  variantOfId: string | null;
+  variantOfName: string | null;
+  variantOfStudioId: string | null;
+  variantOfClientId: string | null;
 };
 
 type Row = MetaRow & { doc: LayoutDoc };
@@ -90,11 +102,17 @@ function docFacts(doc: LayoutDoc): DocFacts {
   };
 }
 
-function toSummary(row: Row): LayoutSummaryDto {
-  return summaryOf(row, docFacts(row.doc));
+function toSummary(row: Row, actor: Actor): LayoutSummaryDto {
+  return summaryOf(row, docFacts(row.doc), actor);
 }
 
-function summaryOf(row: MetaRow, facts: DocFacts): LayoutSummaryDto {
+/** The original a variant links to, named only to someone who may see it. */
+function variantOfFor(row: MetaRow, actor: Actor): LayoutSummaryDto['variantOf'] {
+  if (!row.variantOfId || row.variantOfName === null || row.variantOfStudioId === null) return null;
+  return mayReadLayout(actor, { studioId: row.variantOfStudioId, clientId: row.variantOfClientId }) ? { id: row.variantOfId, name: row.variantOfName } : null;
+}
+
+function summaryOf(row: MetaRow, facts: DocFacts, actor: Actor): LayoutSummaryDto {
   return {
     id: row.id,
     name: row.name,
@@ -106,11 +124,12 @@ function summaryOf(row: MetaRow, facts: DocFacts): LayoutSummaryDto {
     updatedAt: row.updatedAt.toISOString(),
     updatedBy: row.updatedByName,
     archivedAt: row.archivedAt ? row.archivedAt.toISOString() : null,
+    variantOf: variantOfFor(row, actor),
   };
 }
 
 function withoutDoc(row: MetaRow, facts: DocFacts, actor: Actor): Omit<LayoutDto, 'doc'> {
-  return { ...summaryOf(row, facts), createdAt: row.createdAt.toISOString(), canEdit: mayEditLayout(actor, row) };
+  return { ...summaryOf(row, facts, actor), createdAt: row.createdAt.toISOString(), canEdit: mayEditLayout(actor, row) };
 }
 
 function toDto(row: Row, actor: Actor): LayoutDto {
@@ -126,10 +145,11 @@ export async function listLayouts(actor: Actor, options: { archived?: boolean } 
     .from(layouts)
     .leftJoin(client, eq(client.id, layouts.clientId))
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .leftJoin(original, eq(original.id, layouts.variantOf))
     .where(visible)
     .orderBy(desc(layouts.updatedAt));
   // Summaries read the bay and module count, which every schema version has: no migration needed for a list.
-  const summaries = rows.map(toSummary);
+  const summaries = rows.map((r) => toSummary(r, actor));
   const sharing = await sharingSummaries(summaries.map((l) => ({ id: l.id, version: l.version })));
   return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
 }
@@ -140,6 +160,7 @@ function layoutByIdQuery(db: Db) {
     .from(layouts)
     .leftJoin(client, eq(client.id, layouts.clientId))
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .leftJoin(original, eq(original.id, layouts.variantOf))
     .where(eq(layouts.id, sql.placeholder('id')))
     .limit(1)
     .prepare('layout_by_id');
@@ -151,6 +172,7 @@ function layoutMetaByIdQuery(db: Db) {
     .from(layouts)
     .leftJoin(client, eq(client.id, layouts.clientId))
     .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .leftJoin(original, eq(original.id, layouts.variantOf))
     .where(eq(layouts.id, sql.placeholder('id')))
     .limit(1)
     .prepare('layout_meta_by_id');
@@ -236,16 +258,26 @@ async function assertClientOfStudio(studioId: string, clientId: string | null | 
   if (!m || m.role !== 'client') throw new BadRequestError('That client is not a client of this studio.');
 }
 
-export async function createLayout(actor: Actor, input: { name: string; doc: LayoutDoc; clientId?: string | null }): Promise<LayoutDto> {
+export async function createLayout(
+  actor: Actor,
+  input: { name: string; doc: LayoutDoc; clientId?: string | null; variantOf?: string | null },
+): Promise<LayoutDto> {
   requireWorkshop(actor, 'create layouts');
   await assertClientOfStudio(actor.studioId, input.clientId);
   const db = await getDb();
   const doc = { ...input.doc, name: input.name };
-  const [row] = await db
-    .insert(layouts)
-    .values({ studioId: actor.studioId, clientId: input.clientId ?? null, name: input.name, doc, createdBy: actor.userId, updatedBy: actor.userId })
-    .returning({ id: layouts.id });
-  return getLayout(actor, row.id);
+  const id = await db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(layouts)
+      .values({
+        studioId: actor.studioId, clientId: input.clientId ?? null, name: input.name, doc,
+        createdBy: actor.userId, updatedBy: actor.userId, variantOf: input.variantOf ?? null,
+      })
+      .returning({ id: layouts.id, version: layouts.version });
+    await recordSave(tx, { layoutId: row.id, version: row.version, name: input.name, doc, savedBy: actor.userId });
+    return row.id;
+  });
+  return getLayout(actor, id);
 }
 
 export interface SaveInput {
@@ -268,28 +300,102 @@ export interface SavedLayoutDto {
  * Saves a new document over version `baseVersion`. The compare-and-set happens in one UPDATE,
  * so of two saves based on the same version exactly one wins; the other gets the current copy.
  */
-export async function saveLayout(actor: Actor, layout: EditableLayout, baseVersion: number, input: SaveInput): Promise<SavedLayoutDto> {
+export async function saveLayout(
+  actor: Actor,
+  layout: EditableLayout,
+  baseVersion: number,
+  input: SaveInput,
+  options: { restoredFrom?: number } = {},
+): Promise<SavedLayoutDto> {
   if (!mayEditLayout(actor, layout)) throw new ForbiddenError('Only the workshop can change this layout.');
   if (input.clientId !== undefined) await assertClientOfStudio(actor.studioId, input.clientId);
   const name = input.name ?? input.doc.name ?? layout.name;
+  const doc = { ...input.doc, name };
   const db = await getDb();
-  const [saved] = await db
-    .update(layouts)
-    .set({
-      doc: { ...input.doc, name },
-      name,
-      ...(input.clientId !== undefined ? { clientId: input.clientId } : {}),
-      version: sql`${layouts.version} + 1`,
-      updatedBy: actor.userId,
-      updatedAt: new Date(),
-    })
-    .where(and(eq(layouts.id, layout.id), eq(layouts.studioId, actor.studioId), eq(layouts.version, baseVersion)))
-    .returning({ id: layouts.id, name: layouts.name, version: layouts.version, updatedAt: layouts.updatedAt });
+  // The save and the saved version it leaves land together, or neither does.
+  const saved = await db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(layouts)
+      .set({
+        doc,
+        name,
+        ...(input.clientId !== undefined ? { clientId: input.clientId } : {}),
+        version: sql`${layouts.version} + 1`,
+        updatedBy: actor.userId,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(layouts.id, layout.id), eq(layouts.studioId, actor.studioId), eq(layouts.version, baseVersion)))
+      .returning({ id: layouts.id, name: layouts.name, version: layouts.version, updatedAt: layouts.updatedAt });
+    if (row) await recordSave(tx, { layoutId: row.id, version: row.version, name, doc, savedBy: actor.userId, restoredFrom: options.restoredFrom });
+    return row;
+  });
   if (!saved) {
     const current = await getLayout(actor, layout.id);
     throw new VersionConflictError({ version: current.version, doc: current.doc, updatedAt: current.updatedAt, updatedBy: current.updatedBy });
   }
   return { id: saved.id, name: saved.name, version: saved.version, updatedAt: saved.updatedAt.toISOString() };
+}
+
+/**
+ * Renames a layout: a save of its current document under the new name (the name is part of the
+ * document and its title block), so it moves the version on and is kept among the saved versions.
+ * `baseVersion` is the version the caller saw; without one, the current version.
+ */
+export async function renameLayout(actor: Actor, id: string, name: string, baseVersion: number | null): Promise<SavedLayoutDto> {
+  const layout = await loadLayoutFor(actor, id, { withDoc: true, forEdit: 'rename layouts' });
+  return saveLayout(actor, layout, baseVersion ?? layout.version, { doc: layout.doc, name });
+}
+
+const VARIANT_SUFFIX = / variant \d{1,6}$/;
+
+/** "Kitchen-forward variant 2", "… variant 3": the first number no layout of the studio carries yet. */
+async function nextVariantName(studioId: string, base: string): Promise<string> {
+  const db = await getDb();
+  const stem = base.replace(VARIANT_SUFFIX, '');
+  // Room for " variant 999999" within the 120-character name.
+  const short = stem.length > 104 ? stem.slice(0, 104).trimEnd() : stem;
+  const prefix = `${short} variant `;
+  const like = prefix.replace(/[\\%_]/g, (c) => `\\${c}`) + '%';
+  const taken = await db
+    .select({ name: layouts.name })
+    .from(layouts)
+    .where(and(eq(layouts.studioId, studioId), sql`${layouts.name} like ${like}`))
+    .limit(2000);
+  const used = new Set(taken.map((t) => t.name.slice(prefix.length)));
+  let n = 2;
+  while (used.has(String(n))) n++;
+  return `${prefix}${n}`;
+}
+
+/**
+ * Duplicates a layout as a variant: its current document under "… variant N", for the same client,
+ * linked to its original (a variant of a variant links to the same original). Revisions, mark-ups,
+ * files and quotes stay with the layout they belong to.
+ */
+export async function duplicateAsVariant(actor: Actor, id: string, name?: string): Promise<LayoutDto> {
+  const source = await loadLayoutFor(actor, id, { withDoc: true, forEdit: 'duplicate layouts' });
+  const db = await getDb();
+  const [meta] = await db.select({ variantOf: layouts.variantOf }).from(layouts).where(eq(layouts.id, source.id)).limit(1);
+  const variantName = name ?? (await nextVariantName(actor.studioId, source.name));
+  return createLayout(actor, { name: variantName, doc: source.doc, clientId: source.clientId, variantOf: meta?.variantOf ?? source.id });
+}
+
+/**
+ * The layouts of one family — the original and its variants — that the actor may see, for the
+ * compare page's choice. At most 200.
+ */
+export async function variantFamily(actor: Actor, id: string): Promise<{ id: string; name: string; archived: boolean }[]> {
+  await loadLayoutFor(actor, id);
+  const db = await getDb();
+  const [meta] = await db.select({ variantOf: layouts.variantOf }).from(layouts).where(eq(layouts.id, id)).limit(1);
+  const root = meta?.variantOf ?? id;
+  const rows = await db
+    .select({ id: layouts.id, name: layouts.name, archivedAt: layouts.archivedAt })
+    .from(layouts)
+    .where(and(visibleLayouts(actor), or(eq(layouts.id, root), eq(layouts.variantOf, root))))
+    .orderBy(layouts.createdAt)
+    .limit(200);
+  return rows.map((r) => ({ id: r.id, name: r.name, archived: r.archivedAt !== null }));
 }
 
 /** Said when a layout that holds money records is to be deleted. */
@@ -341,5 +447,5 @@ export async function setLayoutArchived(actor: Actor, id: string, archived: bool
     .update(layouts)
     .set({ archivedAt: archived ? sql`coalesce(${layouts.archivedAt}, now())` : null })
     .where(and(eq(layouts.id, id), eq(layouts.studioId, actor.studioId)));
-  return toSummary(await readable(actor, id));
+  return toSummary(await readable(actor, id), actor);
 }

@@ -3,7 +3,7 @@
  * Migrations are generated from this file by drizzle-kit into `drizzle/`.
  */
 import { sql } from 'drizzle-orm';
-import { pgTable, text, timestamp, integer, jsonb, uniqueIndex, index, primaryKey, pgEnum, uuid } from 'drizzle-orm/pg-core';
+import { pgTable, text, timestamp, integer, jsonb, uniqueIndex, index, primaryKey, pgEnum, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { LayoutDoc } from '../lib/layout/schema';
 
 export const roleEnum = pgEnum('studio_role', ['owner', 'designer', 'client']);
@@ -72,8 +72,30 @@ export const layouts = pgTable(
      * (revisions, quotes, payments, approvals). A layout with a payment can only be archived, never deleted.
      */
     archivedAt: timestamp('archived_at', { withTimezone: true }),
+    /** The layout this one was duplicated from as a variant (same bay and client); null for an original. */
+    variantOf: uuid('variant_of').references((): AnyPgColumn => layouts.id, { onDelete: 'set null' }),
   },
-  (t) => [index('layouts_studio').on(t.studioId), index('layouts_client').on(t.clientId)],
+  (t) => [index('layouts_studio').on(t.studioId), index('layouts_client').on(t.clientId), index('layouts_variant_of').on(t.variantOf)],
+);
+
+/**
+ * Saved versions: the document as each save left it, so a layout can go back to an earlier one
+ * (restored as its newest save; nothing is overwritten). Bounded per layout: the last
+ * `SAVED_VERSIONS_KEPT` saves (db/saved-versions.ts) plus every save an issued revision was frozen from.
+ */
+export const savedVersions = pgTable(
+  'saved_versions',
+  {
+    layoutId: uuid('layout_id').notNull().references((): AnyPgColumn => layouts.id, { onDelete: 'cascade' }),
+    version: integer('version').notNull(),
+    name: text('name').notNull(),
+    doc: jsonb('doc').$type<LayoutDoc>().notNull(),
+    savedBy: uuid('saved_by').references(() => users.id, { onDelete: 'set null' }),
+    savedAt: timestamp('saved_at', { withTimezone: true }).notNull().defaultNow(),
+    /** The version this save put back, when it was a restore. */
+    restoredFrom: integer('restored_from'),
+  },
+  (t) => [primaryKey({ columns: [t.layoutId, t.version] })],
 );
 
 /**

@@ -1,5 +1,6 @@
 'use client';
-// The studio's layouts: sortable, filterable, fetched in the browser; a switch shows the archived ones.
+// The studio's layouts: sortable, filterable, fetched in the browser, each with a small plan and a
+// link to the original it is a variant of; a switch shows the archived ones.
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
@@ -11,6 +12,7 @@ import type { LayoutSummaryDto } from '@/db/layouts';
 import { LayoutStateBadge, stateWord } from '@/components/sharing/LayoutStateBadge';
 import { formatDateTime } from '@/lib/format';
 import { LayoutRowActions } from './LayoutRowActions';
+import { LayoutThumbnail, VariantLink } from './LayoutThumbnail';
 
 const col = createColumnHelper<LayoutSummaryDto>();
 
@@ -24,9 +26,19 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
 
   const columns = useMemo(
     () => [
+      col.display({
+        id: 'plan',
+        header: () => <span className="sr-only">Plan</span>,
+        cell: (c) => <LayoutThumbnail layout={c.row.original} />,
+      }),
       col.accessor('name', {
         header: 'Name',
-        cell: (c) => <Link className="font-medium text-ink underline-offset-2 hover:text-copper hover:underline" href={`/layouts/${c.row.original.id}`}>{c.getValue()}</Link>,
+        cell: (c) => (
+          <>
+            <Link className="font-medium text-ink underline-offset-2 hover:text-copper hover:underline" href={`/layouts/${c.row.original.id}`}>{c.getValue()}</Link>
+            <VariantLink layout={c.row.original} />
+          </>
+        ),
       }),
       col.accessor((r) => r.client?.name ?? '', { id: 'client', header: 'Client', cell: (c) => c.getValue() || <span className="text-ink-faint">—</span> }),
       col.accessor('sizeClass', {

@@ -10,31 +10,19 @@
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useQuery } from '@tanstack/react-query';
-import { ArrowDownRight, ArrowUpRight } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
 import type { Arrangement } from '@/lib/layout/schema';
 import { AS_LAST_SAVED, nextRevisionLetter } from '@/lib/layout/drawing-issue';
-import { bayChangeWords, moduleChangeWords } from '@/lib/layout/revision-words';
-import { moduleLabel } from '@/lib/layout/kinds';
-import { findingTopic, TOPIC_CAUTION, type HazardTopic } from '@/lib/layout/cautions';
 import type { LengthUnit } from '@/lib/layout/units';
-import { formatLength } from '@/lib/layout/units';
 import type { ComparisonDto } from '@/db/sharing/compare';
 import type { RevisionDto } from '@/db/sharing/revisions';
-import { CautionNote } from '@/components/ui/CautionNote';
 import { RevisionPlanSvg } from './RevisionPlanSvg';
-import { StatusInline } from '@/components/checks/FindingParts';
-import { ruleName } from '@/lib/checks/words';
 import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { RevisionTable } from './RevisionTable';
+import { ComparisonDetails } from './ComparisonDetails';
 
 const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
-
-function Status({ s, side }: { s: 'pass' | 'warn' | 'fail' | null; side: 'before' | 'after' }) {
-  if (!s) return <span className="text-ink-soft">{side === 'before' ? 'not raised' : 'no longer raised'}</span>;
-  return <StatusInline status={s} />;
-}
 
 interface Props {
   layoutId: string;
@@ -91,9 +79,6 @@ export function RevisionCompare({ layoutId, revisions, from, to, units }: Props)
 
 function Comparison({ data, arrangement, markLetter, units, revisions, to }: { data: ComparisonDto; arrangement: Arrangement; markLetter: string; units: LengthUnit; revisions: RevisionDto[]; to: string }) {
   const { diff } = data;
-  const nothing = !diff.added.length && !diff.removed.length && !diff.changed.length;
-  const topics = [...new Set(data.findings.map((f) => findingTopic(f.id)).filter((t): t is HazardTopic => t !== null))];
-  const mark = <span className="mt-0.5 text-copper"><RevisionMarkIcon letter={markLetter} /></span>;
   return (
     <>
       <div className="grid gap-4 lg:grid-cols-2" data-testid="compare-plans">
@@ -105,59 +90,7 @@ function Comparison({ data, arrangement, markLetter, units, revisions, to }: { d
         <span>Revision clouds mark what changed in {to === 'current' ? 'the layout as last saved' : `revision ${markLetter}`}; the triangle carries its letter.</span>
         <span>Dashed outlines with two short dashes (phantom lines) show where a module stood before.</span>
       </p>
-      <div className="grid gap-4 lg:grid-cols-2">
-        <section className="panel p-4 text-sm" data-testid="module-changes">
-          <h2 className="mb-2 font-semibold">What changed</h2>
-          {nothing ? (
-            <p className="text-ink-soft">No module changed ({diff.unchanged} the same).</p>
-          ) : (
-            <ul className="space-y-1.5">
-              {diff.added.map((m) => (
-                <li key={`a-${m.id}`} className="flex gap-2">{mark}<span><strong>Added</strong> {moduleLabel(m)} <span className="font-mono text-xs text-ink-soft">{formatLength(m.length, units)} × {formatLength(m.width, units)} × {formatLength(m.height, units)}</span></span></li>
-              ))}
-              {diff.removed.map((m) => <li key={`r-${m.id}`} className="flex gap-2">{mark}<span><strong>Removed</strong> {moduleLabel(m)}</span></li>)}
-              {diff.changed.map((c) => {
-                const w = moduleChangeWords(c, units);
-                return (
-                  <li key={`c-${c.id}`} className="flex gap-2">
-                    {mark}
-                    <span>
-                      <strong>{w.verb}</strong> {moduleLabel(c.after)}
-                      {w.lines.map((l) => <span key={l} className="block text-xs text-ink-soft">{l}</span>)}
-                    </span>
-                  </li>
-                );
-              })}
-            </ul>
-          )}
-          {diff.bay.length > 0 && (
-            <>
-              <h3 className="mb-1 mt-3 font-medium">Bay</h3>
-              <ul className="space-y-0.5 text-xs">
-                {diff.bay.map((b) => <li key={b.field}>{bayChangeWords(b, units)}</li>)}
-              </ul>
-            </>
-          )}
-        </section>
-        <section className="panel space-y-3 p-4 text-sm" data-testid="finding-changes">
-          <h2 className="font-semibold">Checks that changed</h2>
-          {data.findings.length === 0 ? <p className="text-ink-soft">No finding changed status.</p> : (
-            <ul className="space-y-2">
-              {data.findings.map((f) => (
-                <li key={f.key} className="flex gap-2">
-                  {f.direction === 'worse' ? <ArrowDownRight size={14} className="mt-0.5 text-brick" aria-label="worse" /> : <ArrowUpRight size={14} className="mt-0.5 text-moss" aria-label="better" />}
-                  <span>
-                    <span className="text-xs font-semibold">{ruleName(f.id)}</span>{f.arrangement ? <span className="text-xs text-ink-soft"> · {f.arrangement}</span> : null}:{' '}
-                    <Status s={f.before} side="before" /> → <Status s={f.after} side="after" />
-                    <span className="block text-xs text-ink-soft">{f.message}</span>
-                  </span>
-                </li>
-              ))}
-            </ul>
-          )}
-          {topics.map((t) => <CautionNote key={t} title={TOPIC_CAUTION[t].title} compact testId="compare-caution">{TOPIC_CAUTION[t].text}</CautionNote>)}
-        </section>
-      </div>
+      <ComparisonDetails data={data} markLetter={markLetter} units={units} />
       <RevisionTable revisions={revisions} upTo={to === 'current' ? null : to} current={to === 'current' ? null : to} />
     </>
   );

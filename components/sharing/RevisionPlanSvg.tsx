@@ -4,7 +4,8 @@
  * arrangement. On the later side, what changed is marked the drafting way: a revision cloud
  * round each added, moved, resized or edited module (round where a removed one stood), a delta
  * triangle carrying the revision letter beside each cloud, and the earlier place of a moved or
- * resized module (and a removed one) in phantom lines. The earlier side is drawn as it was
+ * resized module (and a removed one) in phantom lines. Between two variants (no `letter`) the clouds
+ * mark what differs, without triangles. The earlier side is drawn as it was
  * issued, unmarked. Presentation only: no fetching, no editing.
  */
 import type { Arrangement, LayoutDoc, Module } from '@/lib/layout/schema';
@@ -95,8 +96,12 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
           return (
             <g key={`cloud-${k.id}`} data-cloud={k.id} data-mark={k.what}>
               <polygon points={pointsAttr(cloud)} fill="none" stroke={CLOUD} strokeWidth={font / 7} strokeLinejoin="round" />
-              <polygon points={pointsAttr(deltaTriangle(cx, cy, tri))} fill={palette.white} stroke={CLOUD} strokeWidth={font / 8} strokeLinejoin="round" />
-              <text x={cx} y={cy + tri * 0.08} fontSize={tri * (letter.length > 1 ? 0.38 : 0.5)} textAnchor="middle" dominantBaseline="middle" fill={CLOUD} fontFamily="var(--font-mono), monospace">{letter}</text>
+              {letter && (
+                <>
+                  <polygon points={pointsAttr(deltaTriangle(cx, cy, tri))} fill={palette.white} stroke={CLOUD} strokeWidth={font / 8} strokeLinejoin="round" />
+                  <text x={cx} y={cy + tri * 0.08} fontSize={tri * (letter.length > 1 ? 0.38 : 0.5)} textAnchor="middle" dominantBaseline="middle" fill={CLOUD} fontFamily="var(--font-mono), monospace">{letter}</text>
+                </>
+              )}
               {k.what === 'removed' && (
                 <text x={k.area.x0 + (k.area.x1 - k.area.x0) / 2} y={k.area.y0 + (k.area.y1 - k.area.y0) / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill={FAINT} fontFamily="var(--font-text), sans-serif">
                   {k.name} (removed)

@@ -55,14 +55,14 @@ interface Figure {
   draw: (x: number, y: number) => SheetItem[];
 }
 
-function figures(req: Pick<SheetRequest, 'doc' | 'scale' | 'units' | 'changes'>): Figure[] {
+function figures(req: Pick<SheetRequest, 'doc' | 'scale' | 'units' | 'changes' | 'report'>): Figure[] {
   const plan = planSize(req.doc, req.scale);
   const clouds = (a: (typeof ARRANGEMENTS)[number], x: number, y: number): SheetItem[] => {
     if (!req.changes) return [];
     const toPaper = (mx: number, my: number): [number, number] => [x + PLAN_MARGIN.left + onPaper(mx, req.scale), y + PLAN_MARGIN.top + onPaper(my, req.scale)];
     return drawRevisionClouds(cloudAreas(req.changes.diff, a), req.changes.letter, toPaper);
   };
-  const out: Figure[] = ARRANGEMENTS.map((a) => ({ ...plan, draw: (x: number, y: number) => [...drawPlan(req.doc, a, x, y, req.scale, req.units), ...clouds(a, x, y)] }));
+  const out: Figure[] = ARRANGEMENTS.map((a) => ({ ...plan, draw: (x: number, y: number) => [...drawPlan(req.doc, a, x, y, req.scale, req.units, req.report), ...clouds(a, x, y)] }));
   out.push({ ...sectionSize(req.doc, req.scale), draw: (x, y) => drawSection(req.doc, x, y, req.scale, req.units) });
   return out;
 }

@@ -2,7 +2,9 @@
  * The dimensioned plan of one arrangement, drawn to scale for the sheet: bare metal as a heavy
  * line with door openings as gaps, the wall build-up band lightly hatched, wheel arches
  * cross-hatched, each module in its material family's hatching with its schedule number, the
- * overall length and width as dimension strings, and the cab marked at the front. Cab on the
+ * overall length and width as dimension strings, running dimensions from the front along both
+ * walls (lib/sheet/running-dimensions.ts), the key clearances as the checks measured them
+ * (lib/sheet/clearances.ts), and the cab marked at the front. Cab on the
  * left, x rearwards to the right, the left wall at the top (as in the editor).
  * Pure: a document in, sheet items out; must never render or measure the page.
  */
@@ -15,9 +17,16 @@ import type { SheetItem } from './primitives';
 import { fit } from './typography';
 import { symbolItems } from './module-symbol';
 import { archBoxes, buildUpThickness, modulesIn } from '../layout/bay';
+import type { CheckReport } from '../checks/types';
+import { runningDimension, RUN_BAND } from './running-dimensions';
+import { clearanceItems } from './clearances';
 
-/** Paper space around the bay for dimension strings (left, top) and the caption (bottom). */
-export const PLAN_MARGIN = { left: 13, top: 13, right: 7, bottom: 10 } as const;
+/**
+ * Paper space around the bay: the width dimension (left), the left wall's running dimension and
+ * the overall length (top), the right wall's running dimension, the caption and the clearances
+ * line (bottom).
+ */
+export const PLAN_MARGIN = { left: 13, top: RUN_BAND + 5, right: 7, bottom: RUN_BAND + 8.1 } as const;
 
 /**
  * Above this many modules the material hatching is left out: the drawing would be a grey mass,
@@ -61,7 +70,7 @@ export function scheduleNumbers(doc: LayoutDoc): Map<string, number> {
   return new Map(doc.modules.map((m, i) => [m.id, i + 1]));
 }
 
-export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, oy: number, scale: number, units: LengthUnit): SheetItem[] {
+export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, oy: number, scale: number, units: LengthUnit, report: CheckReport | null = null): SheetItem[] {
   const { bay } = doc;
   const s = (mm: number) => onPaper(mm, scale);
   const bx = ox + PLAN_MARGIN.left;
@@ -108,16 +117,30 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
     { type: 'text', x: bx - 6, y: by + W / 2 + 4.5, text: 'cab', size: TYPE.small, align: 'center', ink: 'soft' },
   );
 
-  // Overall dimensions: length above, width at the left.
-  items.push(...dimension({ from: [bx, by], to: [bx + L, by], offset: 7, text: formatLength(bay.length, units), tag: `dimension:bay-length:${arrangement}` }));
+  // Running dimensions from the front along each wall: the left wall above the plan, the right below.
+  const geometry = { bx, bayLength: bay.length, bayWidth: bay.width, toPaper: s, units };
+  const left = runningDimension(present, 'left', { ...geometry, wallY: by, tag: `dimension:running-left:${arrangement}` });
+  const right = runningDimension(present, 'right', { ...geometry, wallY: by + W, tag: `dimension:running-right:${arrangement}` });
+  items.push(...left.items, ...right.items);
+
+  // Key clearances, as the checks measured them.
+  const clearances = clearanceItems(doc, arrangement, report, { bx, by, toPaper: s, units });
+  items.push(...clearances.items);
+
+  // Overall dimensions: length above (beyond the running dimension), width at the left.
+  items.push(...dimension({ from: [bx, by], to: [bx + L, by], offset: RUN_BAND + 1.6, text: formatLength(bay.length, units), tag: `dimension:bay-length:${arrangement}` }));
   items.push(...dimension({ from: [bx, by], to: [bx, by + W], offset: 9, text: formatLength(bay.width, units), tag: `dimension:bay-width:${arrangement}` }));
 
-  // Caption.
+  // Caption, under the right wall's running dimension.
   const count = inArrangement.length;
-  items.push({ type: 'text', x: bx, y: by + W + 6.5, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
+  const cy = by + W + RUN_BAND + 3.2;
+  items.push({ type: 'text', x: bx, y: cy, text: `${ARRANGEMENT_CAPTION[arrangement]}`, size: TYPE.caption, font: 'sans-bold' });
   const note = doc.modules.length > HATCH_MODULE_LIMIT ? ' · hatching left out (many modules)' : '';
-  items.push({ type: 'text', x: bx + L, y: by + W + 6.5, text: `${count} module${count === 1 ? '' : 's'}${note} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
-  if (leftOut > 0) items.push({ type: 'text', x: bx, y: by + W + 9.3, text: leftOutNote(count, leftOut, 'plan'), size: TYPE.small, ink: 'soft' });
+  items.push({ type: 'text', x: bx + L, y: cy, text: `${count} module${count === 1 ? '' : 's'}${note} · plan 1:${scale}`, size: TYPE.small, align: 'right', ink: 'soft' });
+  const notes = [clearances.line, left.leftOff + right.leftOff > 0 ? `${left.leftOff + right.leftOff} running figures left off for room: positions are in the schedule` : '']
+    .filter(Boolean).join(' · ');
+  if (notes) items.push({ type: 'text', x: bx, y: cy + 2.8, text: notes, size: TYPE.small, ink: 'soft' });
+  if (leftOut > 0) items.push({ type: 'text', x: bx, y: cy + 5.6, text: leftOutNote(count, leftOut, 'plan'), size: TYPE.small, ink: 'soft' });
   return items;
 }
 

@@ -1,8 +1,8 @@
 /**
  * The work that runs off the request thread, by name: each job is a pure function of plain,
  * cloneable data (it crosses a worker_threads message), run inside a pool worker
- * (lib/workers/job-worker.ts). To move more work off the request thread — proposal generation,
- * say — add a named job here and call `runJob(name, input)` (lib/workers/pool.ts).
+ * (lib/workers/job-worker.ts). To move more work off the request thread, add a named job here and
+ * call `runJob(name, input)` (lib/workers/pool.ts).
  *
  * Must never import the database, Next, React or `server-only`: a worker has none of them.
  */
@@ -12,6 +12,7 @@ import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
 import type { SheetFonts } from '../sheet/fonts';
 import { composeQuoteDocument, type QuoteDocumentInput } from '../sheet/quote-document';
+import { generateProposals, type Brief, type ProposalResult } from '../proposals';
 
 export interface ChecksInput {
   doc: LayoutDoc;
@@ -63,6 +64,8 @@ export const JOBS = {
     if (!parsed.ok) return { ok: false, issues: parsed.issues };
     return { ok: true, report: runChecks(parsed.value, { studioDefaults: input.studioDefaults }) };
   },
+  /** Proposals for a validated brief: at most MAX_CANDIDATES candidates laid out and checked. */
+  proposals: (input: { brief: Brief }): ProposalResult => generateProposals(input.brief),
 
   /** The plan sheet as a drawing model (the print view draws it as SVG). */
   sheet: (input: SheetInput): SheetResult => checkedSheet(input),

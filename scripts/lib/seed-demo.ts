@@ -4,7 +4,7 @@
  */
 import { eq } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { layouts, memberships, priceLists, studios, users } from '../../db/schema';
+import { layouts, memberships, priceLists, savedVersions, studios, users } from '../../db/schema';
 import { hashPassword } from '../../lib/auth/password';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_STUDIO } from '../../lib/demo-accounts';
 import { bayTemplate, emptyLayout, starterLayout } from '../../lib/layout/templates';
@@ -33,9 +33,12 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       { name: stock.name, doc: stock, clientId: null },
     ];
     for (const r of rows) {
-      await tx.insert(layouts).values({
-        studioId: studio.id, clientId: r.clientId, name: r.name, doc: { ...r.doc, name: r.name }, createdBy: designer, updatedBy: designer,
-      });
+      const doc = { ...r.doc, name: r.name };
+      const [layout] = await tx.insert(layouts).values({
+        studioId: studio.id, clientId: r.clientId, name: r.name, doc, createdBy: designer, updatedBy: designer,
+      }).returning({ id: layouts.id, version: layouts.version });
+      // Its first saved version, as a save through the app would keep it.
+      await tx.insert(savedVersions).values({ layoutId: layout.id, version: layout.version, name: r.name, doc, savedBy: designer });
     }
     await tx.insert(priceLists).values({ studioId: studio.id, ...demoPriceList(), updatedBy: ids['maren@saltmarsh.test'] });
   });

@@ -59,3 +59,21 @@ export function baseVersionFrom(req: Request): number | null {
   const m = /^\s*(?:W\/)?"?(\d{1,9})"?\s*$/.exec(raw);
   return m ? Number(m[1]) : NaN;
 }
+
+/** Duplicating a layout as a variant: `{}` names it "… variant N"; `{ name }` names it so. */
+export const variantBody = z.strictObject({ name: z.optional(name) });
+
+/** Renaming a layout (PATCH /api/layouts/:id). */
+export const renameLayoutBody = z.strictObject({ name });
+
+/** A saved version's number in a path: a whole number from 1. */
+export const savedVersionParam = z.coerce.number({ error: 'a saved version is a whole number' }).int('a saved version is a whole number').min(1).max(999_999_999);
+
+/** Which arrangement and which saved version a plan thumbnail draws. */
+export const thumbnailQuery = z.strictObject({
+  version: z.optional(savedVersionParam),
+  arrangement: z.optional(z.enum(['travel', 'lounge', 'sleep'])),
+});
+
+/** The other layout of a variant comparison (`?with=<layout id>`). */
+export const compareVariantsQuery = z.strictObject({ with: idField('choose the layout to compare with') });

@@ -6,9 +6,11 @@ import type { CallOptions } from '../helpers/http';
 import type { World } from '../helpers/world';
 import type { Db } from '@/db/client';
 import { starterLayout } from '@/lib/layout/templates';
+import { TYPICAL_BRIEF } from '@/lib/proposals/brief';
 import { SHARING_ROWS } from '../sharing/access-rows';
 import { FILE_ROWS } from './file-rows';
 import { PLANNING_ROWS } from '../planning-api/access-rows';
+import { MANAGE_ROWS } from './manage-rows';
 
 export const WHO = ['anonymous', 'viewer', 'foreignClient', 'otherClient', 'client', 'designer', 'owner', 'foreignOwner'] as const;
 export type Who = (typeof WHO)[number];
@@ -86,6 +88,12 @@ const CORE_ROWS: Row[] = [
   },
   { route: '/api/layouts/[id]/checks', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: LAYOUT_READ },
   { route: '/api/checks', method: 'POST', request: () => ({ json: starterLayout('starter-l-lounge') }), expect: MEMBER },
+  // Proposals are the workshop's work: owners and designers of any studio; clients refused.
+  {
+    // A small bay, so the row tests who may ask, not how long a long bay takes on a loaded machine.
+    route: '/api/proposals', method: 'POST', request: () => ({ json: { ...TYPICAL_BRIEF, bay: { source: 'template', template: 'l1h1' }, standing: null } }),
+    expect: { ...NOBODY, foreignClient: 403, otherClient: 403, client: 403, designer: 200, owner: 200, foreignOwner: 200 },
+  },
   {
     route: '/api/sign-up', method: 'POST',
     request: () => ({ json: { name: 'Matrix Person', email: `matrix${memberSeq++}@selfbuild.test`, password: 'matrix-long-password' } }),
@@ -148,4 +156,4 @@ const CORE_ROWS: Row[] = [
   },
 ];
 
-export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS];
+export const ROWS: Row[] = [...CORE_ROWS, ...SHARING_ROWS, ...PLANNING_ROWS, ...FILE_ROWS, ...MANAGE_ROWS];

@@ -60,9 +60,27 @@ describe('A4 at 1:20', () => {
     expect(vertical.length).toBeGreaterThan(0);
   });
 
+  it('runs the right wall from the bulkhead to the grey-water tank at 2650 mm: a line of 132.5 mm = 375.59 pt', () => {
+    // Travel (page 1): the right wall's first module starts 2650 mm from the front; at 1:20 that is
+    // 2650 / 20 = 132.5 mm on paper, × 72 / 25.4 = 375.59 pt.
+    const p = read.pages[0];
+    const runs = horizontalOfLength(p, 375.59, 0.05);
+    expect(runs).toHaveLength(1);
+    const [run] = runs;
+    const end = Math.max(run.x1, run.x2);
+    const start = Math.min(run.x1, run.x2);
+    // Its figure, "2650", is set centred under the tick at its end (IBM Plex Mono: 600/1000 em a figure, 4 × 0.6 × 5.5 pt wide).
+    const figure = p.texts.find((t) => t.str === '2650' && Math.abs(t.x + 6.6 - end) < 1.5);
+    expect(figure).toBeDefined();
+    // The left wall's figures stand at their distance from the same front: 1650 mm → 82.5 mm = 233.86 pt.
+    const at1650 = p.texts.filter((t) => t.str === '1650').map((t) => t.x + 6.6 - start);
+    expect(at1650.some((d) => Math.abs(d - 233.86) < 1.5)).toBe(true);
+  });
+
   it('has a scale bar of 1000 mm at 1:20 = 50 mm = 141.73 pt, in ten 100 mm blocks of 14.17 pt', () => {
     const p = read.pages[0];
-    const blocks = horizontalOfLength(p, mmToPt(5), 0.02);
+    // In the title block (its top is 10 + 24 mm = 96.38 pt above the page's foot), not a 100 mm run of a running dimension.
+    const blocks = horizontalOfLength(p, mmToPt(5), 0.02).filter((b) => Math.max(b.y1, b.y2) < 96.38);
     // Each block is a rectangle: its top and bottom edges are 5 mm segments.
     expect(blocks.length).toBeGreaterThanOrEqual(20);
     const xs = [...new Set(blocks.map((b) => Math.round(Math.min(b.x1, b.x2) * 100) / 100))].sort((a, b) => a - b);

@@ -1,7 +1,7 @@
 import { handle, HttpError, invalid, json, parseWith, readJson, requireActor } from '@/server/api/respond';
-import { baseVersionFrom, saveLayoutBody } from '@/server/api/layout-bodies';
+import { baseVersionFrom, renameLayoutBody, saveLayoutBody } from '@/server/api/layout-bodies';
 import { parseLayoutDoc } from '@/lib/layout/parse';
-import { deleteLayout, getLayoutJson, saveLayout } from '@/db/layouts';
+import { deleteLayout, getLayoutJson, renameLayout, saveLayout } from '@/db/layouts';
 import { loadLayoutFor } from '@/db/access';
 
 export const dynamic = 'force-dynamic';
@@ -29,6 +29,21 @@ export const PUT = handle<Ctx>(async (req, { params }) => {
   const parsed = parseLayoutDoc(body.doc);
   if (!parsed.ok) throw invalid(parsed.issues.map((i) => ({ path: i.path ? `doc.${i.path}` : 'doc', message: i.message })));
   const saved = await saveLayout(actor, layout, base, { doc: parsed.value, name: body.name, clientId: body.clientId });
+  return json({ id: saved.id, version: saved.version, updatedAt: saved.updatedAt, name: saved.name }, { headers: { ETag: `"${saved.version}"` } });
+});
+
+/**
+ * Rename: `{ name }`. A save of the current document under the new name (a new version);
+ * If-Match is optional here: without it the rename applies to whatever was saved last.
+ */
+export const PATCH = handle<Ctx>(async (req, { params }) => {
+  const actor = await requireActor(req);
+  const { id } = await params;
+  await loadLayoutFor(actor, id, { forEdit: 'rename layouts' });
+  const base = baseVersionFrom(req);
+  if (Number.isNaN(base)) throw new HttpError(400, 'If-Match must be the layout version, a whole number.');
+  const body = parseWith(renameLayoutBody, await readJson(req, 4096));
+  const saved = await renameLayout(actor, id, body.name, base);
   return json({ id: saved.id, version: saved.version, updatedAt: saved.updatedAt, name: saved.name }, { headers: { ETag: `"${saved.version}"` } });
 });
 

@@ -1,0 +1,45 @@
+/**
+ * `npm run bench:proposals`: for each bay template with the typical two-sleeper brief
+ * (lib/proposals TYPICAL_BRIEF; nobody stands in a standard-roof bay), the time to the final
+ * proposals and the candidates laid out and checked per second. Goals: the final proposals within
+ * 2 s, at a rate of at least 250 checked candidates a second (500 in 2 s). The generator answers
+ * in one piece, so the time to the first proposals is the time to the final ones. Median of 3
+ * runs after one warm-up. Prints only; `npm run bench` collects the same figures.
+ */
+import { BAY_TEMPLATES } from '../lib/layout/templates';
+import { generateProposals, TYPICAL_BRIEF, type Brief } from '../lib/proposals';
+
+export interface ProposalsBenchRow {
+  template: string;
+  ms: number;
+  checked: number;
+  perSecond: number;
+  proposals: number;
+}
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  return s[s.length >> 1];
+}
+
+export function benchProposals(): ProposalsBenchRow[] {
+  const rows: ProposalsBenchRow[] = [];
+  for (const t of BAY_TEMPLATES) {
+    const brief: Brief = { ...TYPICAL_BRIEF, bay: { source: 'template', template: t.id }, standing: t.bay.height < 1900 ? null : TYPICAL_BRIEF.standing };
+    generateProposals(brief); // warm-up
+    const times: number[] = [];
+    let last = generateProposals(brief);
+    for (let i = 0; i < 3; i++) {
+      const t0 = performance.now();
+      last = generateProposals(brief);
+      times.push(performance.now() - t0);
+    }
+    const ms = median(times);
+    const row = { template: t.sizeClass, ms, checked: last.stats.checked, perSecond: last.stats.checked / (ms / 1000), proposals: last.proposals.length };
+    rows.push(row);
+    console.log(`${row.template}  final proposals in ${ms.toFixed(0)} ms  (${row.checked} candidates checked of ${last.stats.variants} variants, ${row.perSecond.toFixed(0)} a second; ${row.proposals} proposals${last.ok ? '' : ', none fits: ' + last.reasons[0]?.rule})  goal ≤ 2000 ms: ${ms <= 2000 ? 'met' : 'NOT met'}`);
+  }
+  return rows;
+}
+
+if (process.argv[1]?.endsWith('proposals.ts')) benchProposals();
