@@ -13,6 +13,10 @@ export class ForbiddenError extends Error {
 }
 export class ConflictError extends Error {
   readonly status = 409;
+  /** Plain facts the answer carries beside the message (e.g. `{ confirm: 'unapproved-revision' }`). */
+  constructor(message?: string, readonly extra: Record<string, string | number | boolean | null> = {}) {
+    super(message);
+  }
 }
 export class VersionConflictError<T = unknown> extends Error {
   readonly status = 412;

@@ -150,7 +150,7 @@ export async function listLayouts(actor: Actor, options: { archived?: boolean } 
     .orderBy(desc(layouts.updatedAt));
   // Summaries read the bay and module count, which every schema version has: no migration needed for a list.
   const summaries = rows.map((r) => toSummary(r, actor));
-  const sharing = await sharingSummaries(summaries.map((l) => l.id));
+  const sharing = await sharingSummaries(summaries.map((l) => ({ id: l.id, version: l.version })));
   return summaries.map((l) => ({ ...l, sharing: sharing.get(l.id) }));
 }
 

@@ -25,6 +25,9 @@ import type { LayoutDoc } from '../lib/layout/schema';
 import type { CutListOptions } from '../lib/planning/cut-list';
 import type { SendQuoteBody } from '../lib/api/planning-bodies';
 import { formatMoney } from '../lib/format';
+import { ISSUE_STATE_WORD, type RevisionState } from '../lib/layout/drawing-issue';
+import { documentSource, type IssuedRevisionDto, type RevisionChoice } from './sharing/issued';
+import { quoteTermsOf } from './studios';
 
 /** The payment API takes no charge below this many minor units (0.50 in GBP/EUR/USD; from memory of its minimums). */
 export const MIN_DEPOSIT_MINOR = 50;
@@ -45,6 +48,8 @@ export interface QuoteDto {
   layoutId: string;
   layoutName: string;
   layoutVersion: number;
+  /** The issued revision it was priced from and whether it was approved when sent; null: the preliminary layout. */
+  revision: { letter: string; approved: boolean } | null;
   status: QuoteStatus;
   currency: string;
   parts: PartsList;
@@ -61,6 +66,11 @@ export interface QuoteDto {
   receiptTo: string | null;
   clientName: string | null;
   studioName: string;
+  /** The last day the quote holds (ISO time), null for quotes sent before validity was recorded. */
+  validUntil: string | null;
+  /** The studio's terms and its details, as they were when the quote was sent. */
+  terms: string;
+  workshopDetails: string;
   /** The asking actor is the client this quote waits on. */
   canPay: boolean;
 }
@@ -68,7 +78,10 @@ export interface QuoteDto {
 export interface PartsPreviewDto {
   layoutId: string;
   layoutName: string;
+  /** The layout version of the copy priced (a revision's frozen version, or the saved preliminary's). */
   version: number;
+  /** The issued revision priced; null: the preliminary layout as last saved. */
+  revision: IssuedRevisionDto | null;
   priceListExists: boolean;
   parts: PartsList | null;
 }
@@ -84,6 +97,7 @@ async function toDto(row: QuoteRow, layoutName: string, actor: Actor): Promise<Q
     layoutId: row.layoutId,
     layoutName,
     layoutVersion: row.layoutVersion,
+    revision: row.revisionLetter ? { letter: row.revisionLetter, approved: row.revisionApproved } : null,
     status: row.status,
     currency: row.currency,
     parts: row.parts,
@@ -99,6 +113,9 @@ async function toDto(row: QuoteRow, layoutName: string, actor: Actor): Promise<Q
     receiptTo: row.receiptTo,
     clientName: client?.name ?? null,
     studioName: await studioName(row.studioId),
+    validUntil: row.validUntil?.toISOString() ?? null,
+    terms: row.terms,
+    workshopDetails: row.workshopDetails,
     canPay: row.status === 'sent' && actor.role === 'client' && row.clientId === actor.userId,
   };
 }
@@ -125,26 +142,52 @@ function priced(doc: LayoutDoc, list: PriceList, cut: CutListOptions): PartsList
   }
 }
 
-/** The live parts list of the saved layout, priced from the studio's list. Workshop only. */
-export async function previewPartsList(actor: Actor, layoutId: string, cut: CutListOptions = {}): Promise<PartsPreviewDto> {
-  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'see the working parts list' });
+/**
+ * The parts list of one copy of the layout — a chosen issued revision, by default the latest
+ * approved (else the latest issued), the preliminary only when chosen — priced from the studio's
+ * list. Workshop only.
+ */
+export async function previewPartsList(actor: Actor, layoutId: string, cut: CutListOptions = {}, revision?: RevisionChoice): Promise<PartsPreviewDto> {
+  await loadLayoutFor(actor, layoutId, { forEdit: 'see the working parts list' });
+  const source = await documentSource(actor, layoutId, revision);
   const list = await priceListOfStudio(actor.studioId);
   return {
-    layoutId: layout.id,
-    layoutName: layout.name,
-    version: layout.version,
+    layoutId: source.layoutId,
+    layoutName: source.layoutName,
+    version: source.layoutVersion,
+    revision: source.revision,
     priceListExists: list !== null,
-    parts: list ? priced(layout.doc, list, cut) : null,
+    parts: list ? priced(source.doc, list, cut) : null,
   };
 }
 
-export async function sendQuote(actor: Actor, layoutId: string, input: SendQuoteBody): Promise<QuoteDto> {
-  const layout = await loadLayoutFor(actor, layoutId, { withDoc: true, forEdit: 'send a quote' });
-  if (input.layoutVersion !== layout.version) throw new VersionConflictError({ version: layout.version });
+/** What the answer carries when a send needs the designer's confirmation first. */
+export const CONFIRM_UNAPPROVED = 'unapproved-revision';
+
+/** Why a quote's revision is not an approved one, in the words the confirmation and the quote use. */
+export function unapprovedWords(revision: { letter: string; state: string } | null): string {
+  if (!revision) return 'This quote is priced from the preliminary layout: no revision has been issued and approved for it.';
+  return `Revision ${revision.letter} is not approved yet (${ISSUE_STATE_WORD[revision.state as RevisionState] ?? revision.state}).`;
+}
+
+export async function sendQuote(actor: Actor, layoutId: string, input: SendQuoteBody, now = new Date()): Promise<QuoteDto> {
+  const layout = await loadLayoutFor(actor, layoutId, { forEdit: 'send a quote' });
+  const source = await documentSource(actor, layoutId, input.revision);
+  if (input.layoutVersion !== source.layoutVersion) {
+    throw new VersionConflictError({ version: source.layoutVersion, revision: source.revision?.letter ?? null });
+  }
   if (!layout.clientId) throw new BadRequestError('Share this layout with a client before sending a quote.');
+  const approved = source.revision?.state === 'approved';
+  if (!approved && !input.confirmUnapproved) {
+    throw new ConflictError(`${unapprovedWords(source.revision)} Confirm to send the quote anyway; it will say so.`, {
+      confirm: CONFIRM_UNAPPROVED,
+      revision: source.revision?.letter ?? null,
+    });
+  }
   const list = await priceListOfStudio(actor.studioId);
   if (!list) throw new BadRequestError('Set up the studio price list (Settings → Price list) before sending a quote.');
-  const parts = priced(layout.doc, list, input.cut ?? {});
+  const terms = await quoteTermsOf(layout.studioId);
+  const parts = priced(source.doc, list, input.cut ?? {});
   if (parts.unpriced.length) {
     throw new BadRequestError(`Price these items first (Settings → Price list): ${parts.unpriced.join(', ')}.`);
   }
@@ -173,7 +216,13 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
           studioId: layout.studioId,
           number: numbered.number,
           clientId: layout.clientId,
-          layoutVersion: layout.version,
+          layoutVersion: source.layoutVersion,
+          revisionId: source.revision?.id ?? null,
+          revisionLetter: source.revision?.letter ?? null,
+          revisionApproved: approved,
+          validUntil: new Date(now.getTime() + terms.validDays * 86_400_000),
+          terms: terms.terms,
+          workshopDetails: terms.details,
           status: 'sent',
           currency: parts.currency,
           parts,
@@ -183,6 +232,7 @@ export async function sendQuote(actor: Actor, layoutId: string, input: SendQuote
           note: input.note ?? '',
           sentBy: actor.userId,
           sentByName: actor.name,
+          sentAt: now,
         })
         .returning();
       return created;

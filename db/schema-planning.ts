@@ -9,10 +9,10 @@
  * Must never import anything but drizzle and plain types; no card data is ever stored.
  */
 import { sql } from 'drizzle-orm';
-import { pgTable, pgEnum, text, timestamp, integer, doublePrecision, jsonb, uuid, index, uniqueIndex, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import { pgTable, pgEnum, boolean, text, timestamp, integer, doublePrecision, jsonb, uuid, index, uniqueIndex, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { PartsList, PriceEntry } from '../lib/planning/parts-list';
 // Base tables come from db/schema.ts, which re-exports this file: referenced lazily in callbacks only.
-import { layouts, studios, users } from './schema';
+import { layouts, revisions, studios, users } from './schema';
 
 /** One price list per studio: what each part costs, workshop hours per part, labour rate and VAT. */
 export const priceLists = pgTable('price_lists', {
@@ -43,6 +43,17 @@ export const quotes = pgTable(
     clientId: uuid('client_id').references((): AnyPgColumn => users.id, { onDelete: 'set null' }),
     /** The layout version the parts list was priced from. */
     layoutVersion: integer('layout_version').notNull(),
+    /** The issued revision the parts list was priced from; null: the preliminary layout (or a quote sent before revisions were recorded). */
+    revisionId: uuid('revision_id').references((): AnyPgColumn => revisions.id, { onDelete: 'set null' }),
+    /** Its letter, kept with the quote so the record survives the revision. */
+    revisionLetter: text('revision_letter'),
+    /** Whether that revision was approved when the quote was sent (false for the preliminary). */
+    revisionApproved: boolean('revision_approved').notNull().default(false),
+    /** The last day the quote holds (end of that day in the studio's time zone is the printer's business). */
+    validUntil: timestamp('valid_until', { withTimezone: true }),
+    /** The studio's terms and details as they were when the quote was sent (frozen with it). */
+    terms: text('terms').notNull().default(''),
+    workshopDetails: text('workshop_details').notNull().default(''),
     status: quoteStatusEnum('status').notNull().default('sent'),
     currency: text('currency').notNull(),
     /** The parts list as priced when the quote was sent (frozen). */

@@ -32,6 +32,12 @@ export const studios = pgTable('studios', {
   checkDefaults: jsonb('check_defaults').$type<Record<string, unknown>>().notNull().default({}),
   /** The number of the studio's last quote: quotes are numbered Q-0001, Q-0002… per studio. */
   lastQuoteNumber: integer('last_quote_number').notNull().default(0),
+  /** The workshop's details printed on its quotes: address, telephone, mail, company and VAT numbers (lines of text). */
+  quoteDetails: text('quote_details').notNull().default(''),
+  /** The studio's terms printed on every quote it sends (plain text, paragraphs). */
+  quoteTerms: text('quote_terms').notNull().default(''),
+  /** How many days a quote stays valid from the day it is sent. */
+  quoteValidDays: integer('quote_valid_days').notNull().default(30),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });
 

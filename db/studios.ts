@@ -30,6 +30,15 @@ export interface StudioDto {
   units: LengthUnit;
   checkDefaults: LayoutSettings;
   role: StudioRole;
+  /** What every quote the studio sends carries: its details, its terms and how long it holds. */
+  quote: QuoteTerms;
+}
+
+export interface QuoteTerms {
+  /** Address, telephone, mail, company and VAT numbers: lines of plain text. */
+  details: string;
+  terms: string;
+  validDays: number;
 }
 
 export async function getStudio(actor: Actor): Promise<StudioDto> {
@@ -37,7 +46,10 @@ export async function getStudio(actor: Actor): Promise<StudioDto> {
   const [s] = await db.select().from(studios).where(eq(studios.id, actor.studioId)).limit(1);
   if (!s) throw new NotFoundError('No such studio.');
   const defaults = settingsSchema.safeParse(s.checkDefaults);
-  return { id: s.id, name: s.name, units: s.units, checkDefaults: defaults.success ? defaults.data : {}, role: actor.role };
+  return {
+    id: s.id, name: s.name, units: s.units, checkDefaults: defaults.success ? defaults.data : {}, role: actor.role,
+    quote: { details: s.quoteDetails, terms: s.quoteTerms, validDays: s.quoteValidDays },
+  };
 }
 
 /** The designers who made or last changed a layout shared with this client. */
@@ -102,7 +114,7 @@ export async function removeMember(actor: Actor, userId: string): Promise<void> 
   if (!res.length) throw new NotFoundError('No such member.');
 }
 
-export async function updateStudio(actor: Actor, input: { name?: string; units?: LengthUnit; checkDefaults?: LayoutSettings }): Promise<StudioDto> {
+export async function updateStudio(actor: Actor, input: { name?: string; units?: LengthUnit; checkDefaults?: LayoutSettings; quote?: Partial<QuoteTerms> }): Promise<StudioDto> {
   requireOwner(actor);
   const db = await getDb();
   await db
@@ -111,6 +123,9 @@ export async function updateStudio(actor: Actor, input: { name?: string; units?:
       ...(input.name !== undefined ? { name: input.name.trim() } : {}),
       ...(input.units !== undefined ? { units: input.units } : {}),
       ...(input.checkDefaults !== undefined ? { checkDefaults: input.checkDefaults } : {}),
+      ...(input.quote?.details !== undefined ? { quoteDetails: input.quote.details } : {}),
+      ...(input.quote?.terms !== undefined ? { quoteTerms: input.quote.terms } : {}),
+      ...(input.quote?.validDays !== undefined ? { quoteValidDays: input.quote.validDays } : {}),
     })
     .where(eq(studios.id, actor.studioId));
   return getStudio(actor);
@@ -131,4 +146,12 @@ export async function studioName(studioId: string): Promise<string> {
   const db = await getDb();
   const [s] = await db.select({ name: studios.name }).from(studios).where(eq(studios.id, studioId)).limit(1);
   return s?.name ?? 'Your workshop';
+}
+
+/** The studio's quote terms for a quote being sent (system use: the caller has checked the rights). */
+export async function quoteTermsOf(studioId: string): Promise<QuoteTerms> {
+  const db = await getDb();
+  const [s] = await db.select({ details: studios.quoteDetails, terms: studios.quoteTerms, validDays: studios.quoteValidDays })
+    .from(studios).where(eq(studios.id, studioId)).limit(1);
+  return s ?? { details: '', terms: '', validDays: 30 };
 }

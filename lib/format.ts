@@ -94,3 +94,9 @@ export function formatMoney(minor: number | null | undefined, currency: string):
 export function formatAmount(minor: number): string {
   return (minor / 100).toFixed(2);
 }
+
+/** A quantity with its unit as a reader says it: `1 sheet`, `3 sheets`, `12 m`, `190 Ah`; bare for `each`. */
+export function quantityText(qty: number, unit: string): string {
+  if (unit === 'each') return String(qty);
+  return `${qty} ${unit === 'sheet' && qty !== 1 ? 'sheets' : unit}`;
+}

@@ -113,6 +113,7 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
           Read-only on a phone: editing needs a larger screen (a tablet or a computer).
         </p>
       )}
+      {extensions?.banner}
       <div className="relative flex min-h-0 flex-1">
         {canEdit && (
           <Drawer id="shelf" title="Parts shelf" side="left" floating={floating} dockedClassName="flex h-full w-60 shrink-0 border-r border-paper-edge">

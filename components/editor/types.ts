@@ -30,6 +30,8 @@ export interface EditorExtensions {
   toolbarExtra?: ReactNode;
   /** A panel of the page's own beside Details (Mark-ups): docked on a desktop, a drawer on a tablet; its toggle sits in the toolbar. */
   sidePanel?: { title: string; count?: number; countLabel?: string; content: ReactNode };
+  /** A strip under the toolbar (rendered inside the editor's store provider): where the layout stands with its revisions. */
+  banner?: ReactNode;
   /** Where findings come from instead of POST /api/checks (a viewer link has no session). */
   fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>;
   /** A newer stored copy to show while read-only (live viewer links): replaces the document when its version moves on. */

@@ -53,7 +53,10 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
       col.accessor((r) => stateWord(r.sharing?.state ?? 'draft'), {
         id: 'state',
         header: 'State',
-        cell: (c) => <LayoutStateBadge state={c.row.original.sharing?.state ?? 'draft'} letter={c.row.original.sharing?.latestRevision} />,
+        cell: (c) => {
+          const s = c.row.original.sharing;
+          return <LayoutStateBadge state={s?.state ?? 'draft'} letter={s?.latestRevision} changedSince={s?.changedSince ? { layoutId: c.row.original.id } : null} />;
+        },
       }),
       col.accessor((r) => r.sharing?.openComments ?? 0, {
         id: 'markups',

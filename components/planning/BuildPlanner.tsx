@@ -23,6 +23,7 @@ import { SaveIndicator } from '@/components/editor/panels/SaveIndicator';
 import { systemChecks } from '@/lib/checks/systems';
 import type { Finding } from '@/lib/checks/types';
 import type { CutOptions } from './cut/CutListPanel';
+import { RevisionChooser, type DocumentsFrom } from './RevisionChooser';
 import { Tabs } from '@/components/ui/Tabs';
 import type { PanelProps } from './panelProps';
 import { BUILD_TABS, type BuildTab } from './buildTabs';
@@ -64,6 +65,8 @@ export interface BuildPlannerProps {
   units: LengthUnit;
   clientName: string | null;
   initialTab?: BuildTab;
+  /** What the parts list, the cut list and the quote are made from, and that revision's document. */
+  documents: DocumentsFrom & { doc: LayoutDoc | null };
 }
 
 /** The build plan's own commands: the editor's, limited to what a form page does. */
@@ -135,6 +138,11 @@ export function BuildPlanner(props: BuildPlannerProps) {
     store.getState().updateSystems(Object.fromEntries([...keys].map((k) => [k, mine.systems?.[k]])), 'Put my build plan on their version');
   });
 
+  // Issued means frozen: parts, cut list and quote come from the chosen revision; the draft only when chosen.
+  const frozen = props.documents.revision && props.documents.doc ? { doc: props.documents.doc, version: props.documents.revision.layoutVersion } : null;
+  const documentsHref = (choice: string) => `/layouts/${encodeURIComponent(layoutId)}/build?tab=${tab}&revision=${encodeURIComponent(choice)}`;
+  const documentsChooser = <RevisionChooser from={props.documents} href={documentsHref} />;
+
   const panelProps = (t: BuildTab): PanelProps => ({ doc, units, readOnly: !canEdit, onSystems, onValidity: validity[t], findings });
   const panels: Partial<Record<BuildTab, ReactNode>> = {
     weight: <WeightPanel {...panelProps('weight')} />,
@@ -200,10 +208,11 @@ export function BuildPlanner(props: BuildPlannerProps) {
           {(['weight', 'power', 'water', 'gas', 'heat'] as const).filter((t) => visited.has(t)).map((t) => (
             <div key={t} hidden={tab !== t}>{panels[t]}</div>
           ))}
-          {tab === 'parts' && canEdit && <PartsListPanel layoutId={layoutId} doc={doc} cut={cut} dirty={dirty} />}
-          {tab === 'cut' && <CutListPanel doc={doc} options={cut} onOptions={setCut} />}
+          {(tab === 'parts' || tab === 'cut' || (tab === 'quote' && canEdit)) && <div className="mb-3">{documentsChooser}</div>}
+          {tab === 'parts' && canEdit && <PartsListPanel layoutId={layoutId} doc={frozen?.doc ?? doc} cut={cut} dirty={!frozen && dirty} revision={props.documents.revision?.letter ?? null} />}
+          {tab === 'cut' && <CutListPanel doc={frozen?.doc ?? doc} options={cut} onOptions={setCut} />}
           {tab === 'quote' && (canEdit
-            ? <QuotePanel layoutId={layoutId} savedDoc={savedDoc} savedVersion={version} clientName={clientName} dirty={dirty} cut={cut} canSend={canEdit} />
+            ? <QuotePanel layoutId={layoutId} savedDoc={frozen?.doc ?? savedDoc} savedVersion={frozen?.version ?? version} revision={props.documents.revision} clientName={clientName} dirty={!frozen && dirty} cut={cut} canSend={canEdit} />
             : <p className="text-sm">Your workshop&apos;s quote for this layout is on <a className="text-copper underline" href={`/layouts/${layoutId}/quote`}>the quote page</a>.</p>)}
         </div>
       </Tabs>

@@ -21,8 +21,4 @@ export function moneyText(minor: number | undefined): string {
   return minor === undefined ? '' : formatAmount(minor);
 }
 
-/** A quantity with its unit as a reader says it: `1 sheet`, `3 sheets`, `12 m`, `190 Ah`; bare for `each`. */
-export function quantityText(qty: number, unit: string): string {
-  if (unit === 'each') return String(qty);
-  return `${qty} ${unit === 'sheet' && qty !== 1 ? 'sheets' : unit}`;
-}
+export { quantityText } from '@/lib/format';

@@ -19,6 +19,7 @@ import type { Arrangement } from '@/lib/layout/schema';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { MarkupsPanel, type PendingMarkup } from './MarkupsPanel';
+import { RevisionBanner, type RevisionOnShow } from './RevisionBanner';
 
 // The Share dialog's contents load when it is first opened.
 const SharePanel = dynamic(() => import('./SharePanel').then((m) => m.SharePanel), { ssr: false, loading: () => <p className="text-sm text-ink-soft">Loading…</p> });
@@ -35,10 +36,12 @@ const MARKUPS_POLL_MS = 10_000;
 export interface LayoutWorkspaceProps extends Omit<EditorProps, 'extensions'> {
   /** Open this thread at once (from a mail's link). */
   focusMarkup?: string | null;
+  /** The frozen revision on show (read-only), or null for the layout as last saved. */
+  onShow?: RevisionOnShow | null;
 }
 
 export function LayoutWorkspace(props: LayoutWorkspaceProps) {
-  const { layoutId, canEdit, focusMarkup, ...editorProps } = props;
+  const { layoutId, canEdit, focusMarkup, onShow = null, ...editorProps } = props;
   const studioTools = useStudioTools(layoutId, canEdit, props.units); // survey photos and the Sheets & files menu (studio only)
   const threadsQuery = useQuery({
     queryKey: ['markups', layoutId],
@@ -144,6 +147,7 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
             toolbarExtra,
             planUnderlay: studioTools.planUnderlay,
             sidePanel: { title: 'Mark-ups', count: openCount, countLabel: `${openCount} open`, content: markupsPanel },
+            banner: <RevisionBanner layoutId={layoutId} onShow={onShow} canEdit={canEdit} />,
           }}
         />
       </div>

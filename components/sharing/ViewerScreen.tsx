@@ -73,7 +73,13 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
 
   if (gone) return <ViewerGone status={gone.status} at={gone.at} />;
 
-  const badge = live ? (
+  const badge = live && content.revision ? (
+    <span className="inline-flex items-center gap-2 text-xs" data-testid="viewer-kind" data-revision={content.revision.letter}>
+      <span className="inline-flex items-center gap-1"><RevisionMarkIcon letter={content.revision.letter} /> Revision {content.revision.letter}, issued {formatDateTime(content.revision.issuedAt)}</span>
+      <LayoutStateBadge state={content.revision.state} />
+      <span className="text-ink-soft">· follows the workshop’s issued revisions</span>
+    </span>
+  ) : live ? (
     <span className="inline-flex items-center gap-1 rounded-sm border border-moss bg-moss-light px-1.5 py-0.5 text-xs text-moss" data-testid="viewer-kind">
       <Radio size={12} aria-hidden="true" /> {ISSUE_STATE_WORD.draft}: follows the workshop’s saves
     </span>

@@ -1,12 +1,13 @@
 'use client';
 /**
- * The bar above the HTML plan sheet (hidden in print): paper and scale, print, download the PDF,
- * back to the editor. Changing paper or scale reloads the sheet with the new query; it never
- * lays anything out itself.
+ * The bar above the HTML plan sheet (hidden in print): which issued revision (or the preliminary
+ * layout) to print, paper and scale, print, download the PDF, back to the editor. Changing any of
+ * them reloads the sheet with the new query; it never lays anything out itself.
  */
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { ArrowLeft, Download, Printer } from 'lucide-react';
+import { AS_LAST_SAVED, ISSUE_STATE_WORD, PRELIMINARY_CHOICE, type RevisionState } from '@/lib/layout/drawing-issue';
 
 interface Props {
   layoutId: string;
@@ -14,21 +15,38 @@ interface Props {
   scale: 10 | 20 | 25;
   /** The issued revision on show, or null for the layout as it stands (preliminary). */
   revision: string | null;
+  /** The layout's issued revisions, newest first. */
+  revisions: { letter: string; state: RevisionState }[];
+  /** What the sheet shows when nobody chooses (the latest approved, else the latest issued). */
+  defaultRevision: string | null;
   /** False when the bay does not fit: the PDF link would only answer 422. */
   canDownload: boolean;
 }
 
-export function SheetControls({ layoutId, paper, scale, revision, canDownload }: Props) {
+export function SheetControls({ layoutId, paper, scale, revision, revisions, defaultRevision, canDownload }: Props) {
   const router = useRouter();
-  const rev = revision ? `&revision=${revision}` : '';
-  const go = (p: string, s: number) => router.push(`/layouts/${layoutId}/sheet?paper=${p}&scale=${s}${rev}`);
+  const choice = revision ?? PRELIMINARY_CHOICE;
+  const at = (c: string) => `revision=${c}`;
+  const go = (p: string, s: number, c = choice) => router.push(`/layouts/${layoutId}/sheet?paper=${p}&scale=${s}&${at(c)}`);
+  const rev = `&${at(choice)}`;
   const pdf = `/api/layouts/${layoutId}/sheet?paper=${paper}&scale=${scale}${rev}`;
   return (
     <div className="no-print flex flex-wrap items-end gap-4 border-b border-paper-edge bg-paper px-4 py-3">
       <Link href={`/layouts/${layoutId}`} className="btn-quiet px-2 py-1 text-sm">
         <ArrowLeft size={14} aria-hidden="true" /> Back to the editor
       </Link>
-      <h1 className="mr-auto text-lg font-semibold text-ink">Plan sheet{revision ? <span className="ml-2 text-sm font-normal text-ink-soft">revision {revision}</span> : null}</h1>
+      <h1 className="mr-auto text-lg font-semibold text-ink">Plan sheet<span className="ml-2 text-sm font-normal text-ink-soft" data-testid="sheet-on-show">{revision ? `revision ${revision}` : AS_LAST_SAVED.toLowerCase()}</span></h1>
+      <label className="flex flex-col text-sm">
+        <span className="label">Revision</span>
+        <select className="field" value={choice} onChange={(e) => go(paper, scale, e.target.value)} aria-label="Revision" data-testid="sheet-revision">
+          {revisions.map((r) => (
+            <option key={r.letter} value={r.letter}>
+              Revision {r.letter} · {ISSUE_STATE_WORD[r.state]}{r.letter === defaultRevision ? ' (default)' : ''}
+            </option>
+          ))}
+          <option value={PRELIMINARY_CHOICE}>{AS_LAST_SAVED}</option>
+        </select>
+      </label>
       <label className="flex flex-col text-sm">
         <span className="label">Paper</span>
         <select className="field" value={paper} onChange={(e) => go(e.target.value, scale)} aria-label="Paper">

@@ -225,25 +225,25 @@ export async function decideRevision(actor: Actor, layoutId: string, revisionId:
 }
 
 /** Each layout's state from its latest revision: draft (none yet), sent, changes asked, approved. */
-export async function layoutStates(layoutIds: string[]): Promise<Map<string, { state: LayoutState; latest: string | null }>> {
-  const out = new Map<string, { state: LayoutState; latest: string | null }>();
-  for (const id of layoutIds) out.set(id, { state: 'draft', latest: null });
+export async function layoutStates(layoutIds: string[]): Promise<Map<string, { state: LayoutState; latest: string | null; latestVersion: number | null }>> {
+  const out = new Map<string, { state: LayoutState; latest: string | null; latestVersion: number | null }>();
+  for (const id of layoutIds) out.set(id, { state: 'draft', latest: null, latestVersion: null });
   if (!layoutIds.length) return out;
   const db = await getDb();
   const revs = await db
-    .select({ id: revisions.id, layoutId: revisions.layoutId, seq: revisions.seq, letter: revisions.letter })
+    .select({ id: revisions.id, layoutId: revisions.layoutId, seq: revisions.seq, letter: revisions.letter, layoutVersion: revisions.layoutVersion })
     .from(revisions)
     .where(inArray(revisions.layoutId, layoutIds))
     .orderBy(desc(revisions.seq));
-  const latest = new Map<string, { id: string; letter: string }>();
-  for (const r of revs) if (!latest.has(r.layoutId)) latest.set(r.layoutId, { id: r.id, letter: r.letter });
+  const latest = new Map<string, { id: string; letter: string; layoutVersion: number }>();
+  for (const r of revs) if (!latest.has(r.layoutId)) latest.set(r.layoutId, { id: r.id, letter: r.letter, layoutVersion: r.layoutVersion });
   const latestIds = [...latest.values()].map((r) => r.id);
   const decisions = latestIds.length
     ? await db.select({ revisionId: revisionDecisions.revisionId, decision: revisionDecisions.decision })
       .from(revisionDecisions).where(inArray(revisionDecisions.revisionId, latestIds)).orderBy(asc(revisionDecisions.decidedAt))
     : [];
   for (const [layoutId, rev] of latest) {
-    out.set(layoutId, { state: revisionState(decisions.filter((d) => d.revisionId === rev.id)), latest: rev.letter });
+    out.set(layoutId, { state: revisionState(decisions.filter((d) => d.revisionId === rev.id)), latest: rev.letter, latestVersion: rev.layoutVersion });
   }
   return out;
 }

@@ -1,6 +1,8 @@
 /**
- * Viewer links: a read-only address for someone without an account. A live link follows every
- * save of one layout; a revision link shows one frozen revision. The token is handed out once at
+ * Viewer links: a read-only address for someone without an account. A live link follows one
+ * layout: its saves while nothing has been issued, then its latest issued revision (issued means
+ * frozen: the approved revision stays on show until the next one is issued); a revision link
+ * shows one frozen revision. The token is handed out once at
  * creation and stored only as its SHA-256 hash; links may expire and may be revoked, and the list
  * says when each was created and last opened.
  *
@@ -187,14 +189,16 @@ export async function resolveViewerLink(token: string, options: { touch?: boolea
     checkDefaults: settingsSchema.safeParse(row.checkDefaults).data ?? {},
     expiresAt: row.link.expiresAt?.toISOString() ?? null,
   };
-  if (row.link.revisionId) {
-    const [rev] = await db.select().from(revisions).where(eq(revisions.id, row.link.revisionId)).limit(1);
+  // A live link shows the latest issued revision once there is one (the client's default).
+  const revisionId = row.link.revisionId ?? (await latestRevisionOf(row.link.layoutId))?.id ?? null;
+  if (revisionId) {
+    const [rev] = await db.select().from(revisions).where(eq(revisions.id, revisionId)).limit(1);
     if (!rev) return { status: 'unknown' };
     const decisions = await db.select({ decision: revisionDecisions.decision }).from(revisionDecisions)
       .where(eq(revisionDecisions.revisionId, rev.id)).orderBy(asc(revisionDecisions.decidedAt));
     content = {
       ...content,
-      kind: 'revision',
+      kind: row.link.revisionId ? 'revision' : 'live',
       doc: readStoredDoc(rev.doc),
       version: rev.layoutVersion,
       updatedAt: rev.issuedAt.toISOString(),
@@ -217,7 +221,7 @@ export async function viewerLinkVersion(token: string, now = new Date()): Promis
   const db = await getDb();
   const [row] = await db
     .select({
-      revokedAt: viewerLinks.revokedAt, expiresAt: viewerLinks.expiresAt, revisionId: viewerLinks.revisionId,
+      revokedAt: viewerLinks.revokedAt, expiresAt: viewerLinks.expiresAt, revisionId: viewerLinks.revisionId, layoutId: viewerLinks.layoutId,
       version: layouts.version, updatedAt: layouts.updatedAt, revVersion: revisions.layoutVersion, issuedAt: revisions.issuedAt,
     })
     .from(viewerLinks)
@@ -233,5 +237,19 @@ export async function viewerLinkVersion(token: string, now = new Date()): Promis
     if (row.revVersion === null || !row.issuedAt) return { status: 'unknown' };
     return { status: 'active', version: row.revVersion, updatedAt: row.issuedAt.toISOString() };
   }
+  const latest = await latestRevisionOf(row.layoutId);
+  if (latest) return { status: 'active', version: latest.layoutVersion, updatedAt: latest.issuedAt.toISOString() };
   return { status: 'active', version: row.version, updatedAt: row.updatedAt.toISOString() };
+}
+
+/** The layout's latest issued revision (what a live link shows once one exists), without its document. */
+async function latestRevisionOf(layoutId: string): Promise<{ id: string; layoutVersion: number; issuedAt: Date } | null> {
+  const db = await getDb();
+  const [rev] = await db
+    .select({ id: revisions.id, layoutVersion: revisions.layoutVersion, issuedAt: revisions.issuedAt })
+    .from(revisions)
+    .where(eq(revisions.layoutId, layoutId))
+    .orderBy(desc(revisions.seq))
+    .limit(1);
+  return rev ?? null;
 }

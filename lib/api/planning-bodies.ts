@@ -43,6 +43,27 @@ export const cutOptionsSchema = z.strictObject({
 });
 export type CutOptionsBody = z.infer<typeof cutOptionsSchema>;
 
+/**
+ * Which copy a document is made from: an issued revision's letter (A, B … AA), or `preliminary`
+ * for the layout as last saved. Left out: the latest approved revision, else the latest issued.
+ */
+export const revisionChoiceSchema = z.union(
+  [z.string().regex(/^[A-Z]{1,3}$/), z.literal('preliminary')],
+  'a revision letter such as B, or preliminary',
+);
+
+/** Line breaks and tabs are fine in terms; other control characters are not. */
+const plainText = (max: number, what: string) =>
+  z.string().max(max, `${what}: at most ${max} characters`).refine(noControl, `${what}: control characters are not allowed`).transform((t) => t.trim());
+
+/** The studio's quote terms (Settings → Quotes): its details, its terms, and how many days a quote holds. */
+export const quoteTermsBody = z.strictObject({
+  details: plainText(1000, 'workshop details').optional(),
+  terms: plainText(8000, 'terms').optional(),
+  validDays: z.number().int('whole days').min(1, 'at least 1 day').max(365, 'at most 365 days').optional(),
+});
+export type QuoteTermsBody = z.infer<typeof quoteTermsBody>;
+
 /** Cut options from a query string: `?kerf=3&trim=10&grain=0`. */
 export const cutOptionsQuery = z
   .strictObject({
@@ -50,20 +71,29 @@ export const cutOptionsQuery = z
     trim: z.string().regex(/^\d{1,2}(\.\d{1,2})?$/, 'trim in mm, e.g. 10').optional(),
     grain: z.enum(['0', '1']).optional(),
     format: z.enum(['json', 'csv']).optional(),
+    revision: revisionChoiceSchema.optional(),
   })
   .transform((q) => ({
     format: q.format ?? 'json',
+    ...(q.revision !== undefined ? { revision: q.revision } : {}),
     cut: {
       ...(q.kerf !== undefined ? { kerfMm: Number(q.kerf) } : {}),
       ...(q.trim !== undefined ? { trimMm: Number(q.trim) } : {}),
       ...(q.grain !== undefined ? { respectGrain: q.grain === '1' } : {}),
     },
   }))
-  .pipe(z.object({ format: z.enum(['json', 'csv']), cut: cutOptionsSchema }));
+  .pipe(z.object({ format: z.enum(['json', 'csv']), revision: revisionChoiceSchema.optional(), cut: cutOptionsSchema }));
 
 export const sendQuoteBody = z.strictObject({
-  /** The layout version the designer priced; the quote is refused if the layout moved on. */
+  /**
+   * The layout version of the copy the designer priced (a revision's frozen version, or the
+   * saved preliminary's); the quote is refused if that copy is no longer the one chosen.
+   */
   layoutVersion: z.number().int().min(1),
+  /** The revision to price (default: the latest approved, else the latest issued). */
+  revision: revisionChoiceSchema.optional(),
+  /** Send although that revision is not approved (or is the preliminary): said on the quote. */
+  confirmUnapproved: z.boolean().optional(),
   depositPct: z
     .number()
     .finite()

@@ -45,3 +45,38 @@ export function nextRevisionLetter(last: string | null | undefined): string {
   chars[i] = String.fromCharCode(chars[i].charCodeAt(0) + 1);
   return chars.join('');
 }
+
+/** The words after a revision's state when the layout has been saved since it was issued. */
+export const CHANGED_SINCE = 'changed since';
+
+/** "Approved B · changed since": where a layout stands when it has moved on from its latest revision. */
+export function changedSinceWords(letter: string, state: RevisionState): string {
+  return `${ISSUE_STATE_WORD[state]} ${letter} · ${CHANGED_SINCE}`;
+}
+
+/** An issued revision as the choice of documents sees it. */
+export interface IssuedRevisionFacts {
+  letter: string;
+  state: RevisionState;
+}
+
+/**
+ * Which revision the plan sheet, its PDF, the parts list, the cut list and the quote are made
+ * from when nobody chose: the latest approved, else the latest issued; null (the preliminary
+ * layout) only when nothing has been issued. `newestFirst` as the revisions list gives them.
+ */
+export function documentsRevision(newestFirst: readonly IssuedRevisionFacts[]): string | null {
+  return (newestFirst.find((r) => r.state === 'approved') ?? newestFirst[0])?.letter ?? null;
+}
+
+/**
+ * What the client (and a viewer link that follows the layout) is shown by default: the latest
+ * issued revision — the approved one until the next is issued — or the layout as it stands
+ * while nothing has been issued.
+ */
+export function clientRevision(newestFirst: readonly IssuedRevisionFacts[]): string | null {
+  return newestFirst[0]?.letter ?? null;
+}
+
+/** How a chooser names the layout as it stands beside its issued revisions. */
+export const PRELIMINARY_CHOICE = 'preliminary';

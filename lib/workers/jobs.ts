@@ -11,6 +11,7 @@ import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
 import type { SheetFonts } from '../sheet/fonts';
+import { composeQuoteDocument, type QuoteDocumentInput } from '../sheet/quote-document';
 import { generateProposals, type Brief, type ProposalResult } from '../proposals';
 
 export interface ChecksInput {
@@ -75,6 +76,9 @@ export const JOBS = {
     if (!result.ok) return result;
     return { ok: true, pdf: await renderPdf(result.sheet, { author, fonts }) };
   },
+  /** A sent quote as a PDF document (A4 portrait, the sheet's faces). */
+  quotePdf: async (input: { quote: QuoteDocumentInput; author: string; fonts: SheetFonts }): Promise<Uint8Array> =>
+    renderPdf(composeQuoteDocument(input.quote), { author: input.author, fonts: input.fonts }),
 } as const;
 
 export type JobName = keyof typeof JOBS;

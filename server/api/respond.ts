@@ -9,6 +9,7 @@ import type { z } from 'zod';
 import { issuesFromZod, type FieldIssue } from '@/lib/layout/parse';
 import { actorFromRequest } from '@/server/auth/session';
 import type { Actor } from '@/db/actor';
+import { ConflictError } from '@/db/errors';
 import { WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
 import { correlationId, describeError, log, routeOf } from '@/lib/log';
 
@@ -184,7 +185,7 @@ export function errorResponse(err: unknown, req?: Request): Response {
   }
   const status = (err as { status?: unknown })?.status;
   if (typeof status === 'number' && status >= 400 && status < 500) {
-    const extra = status === 412 ? { current: (err as { current?: unknown }).current } : {};
+    const extra = status === 412 ? { current: (err as { current?: unknown }).current } : err instanceof ConflictError ? err.extra : {};
     return problem(status, (err as Error).message, extra);
   }
   const reference = correlationId();

@@ -1,29 +1,33 @@
 /**
  * Gathers what a plan sheet of a stored layout needs — the document, the studio, the client, the
  * studio's units and check defaults — for the PDF route and the HTML print view alike (the checks
- * and the drawing itself run in the work pool, lib/workers: job `sheet` / `sheetPdf`), after the rights checks of `getLayout` (404 for anyone who may not see it). The
- * revisions feature can pass a frozen revision (letter and document) to print that instead of
- * the layout as it stands (`?revision=B`); the sheet then carries its revision table and clouds
- * round what changed since the revision before. Server only; never trusts a query string beyond its schema.
+ * and the drawing itself run in the work pool, lib/workers: job `sheet` / `sheetPdf`), after the rights checks of `getLayout` (404 for anyone who may not see it).
+ * Issued means frozen: the sheet is made from an issued revision — the one chosen (`?revision=B`),
+ * by default the latest approved, else the latest issued (db/sharing/issued) — and carries its
+ * revision table and clouds round what changed since the revision before. The layout as last saved
+ * is printed only when chosen (`?revision=preliminary`) or while nothing has been issued, and its
+ * title block then says "Preliminary". Server only; never trusts a query string beyond its schema.
  */
 import 'server-only';
 import { z } from 'zod';
 import type { Actor } from '@/db/actor';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
-import { getRevision, listRevisions, revisionIdByLetter, type RevisionDto } from '@/db/sharing/revisions';
+import { getRevision, listRevisions, type RevisionDto } from '@/db/sharing/revisions';
 import { diffRevisions } from '@/lib/layout/revision-diff';
 import type { LayoutDoc } from '@/lib/layout';
 import { REVISION_LETTER } from '@/lib/sheet';
 import { formatDate } from '@/lib/format';
 import type { SheetInput } from '@/lib/workers/jobs';
+import { revisionChoiceSchema } from '@/lib/api/planning-bodies';
+import { documentSource, type IssuedRevisionDto } from '@/db/sharing/issued';
 
 /** `?paper=a4|a3&scale=10|20|25`; both optional (A4 at 1:20). */
 export const sheetQuerySchema = z.strictObject({
   paper: z.enum(['a4', 'a3'], 'paper is a4 or a3').default('a4'),
   scale: z.enum(['10', '20', '25'], 'scale is 10, 20 or 25 (for 1:10, 1:20, 1:25)').default('20').transform((s) => Number(s) as 10 | 20 | 25),
-  /** An issued revision's letter: print that frozen copy instead of the layout as it stands. */
-  revision: z.string().regex(REVISION_LETTER, 'a revision letter, e.g. A or B').optional(),
+  /** An issued revision's letter, or `preliminary` for the layout as last saved; left out, the default revision. */
+  revision: revisionChoiceSchema.optional(),
 });
 export type SheetQuery = z.infer<typeof sheetQuerySchema>;
 
@@ -43,28 +47,34 @@ export interface SheetContext {
   request: Omit<SheetInput, 'paper' | 'scale'>;
   layoutId: string;
   layoutName: string;
+  /** The revision printed (null: the preliminary layout), the layout's issued revisions and the default. */
+  printed: IssuedRevisionDto | null;
+  revisions: IssuedRevisionDto[];
+  defaultRevision: string | null;
 }
 
 export function today(now = new Date()): string {
   return formatDate(now);
 }
 
-/** An issued revision of the layout by its letter (404 when there is none), for `sheetRequestFor`. */
-export async function frozenRevision(actor: Actor, layoutId: string, letter: string): Promise<FrozenRevision> {
-  const rev = await getRevision(actor, layoutId, await revisionIdByLetter(actor, layoutId, letter));
-  return { letter: rev.letter, doc: rev.doc, state: rev.state };
-}
-
-export async function sheetRequestFor(actor: Actor, layoutId: string, revision?: FrozenRevision | string): Promise<SheetContext> {
+/**
+ * The sheet of one copy of the layout: `choice` is a revision letter, `preliminary`, or left out
+ * for the default (the latest approved revision, else the latest issued, else the preliminary).
+ */
+export async function sheetRequestFor(actor: Actor, layoutId: string, choice?: string): Promise<SheetContext> {
   const layout = await getLayout(actor, layoutId);
-  if (typeof revision === 'string') revision = await frozenRevision(actor, layoutId, revision);
+  const source = await documentSource(actor, layoutId, choice);
+  const revision: FrozenRevision | null = source.revision ? { letter: source.revision.letter, doc: source.doc, state: source.revision.state } : null;
   if (revision && !REVISION_LETTER.test(revision.letter)) throw new Error(`not a revision letter: ${revision.letter}`);
   const studio = await getStudio(actor);
-  const doc = revision?.doc ?? layout.doc;
-  const { rows, changes } = await revisionMarks(actor, layoutId, revision ?? null);
+  const doc = source.doc;
+  const { rows, changes } = await revisionMarks(actor, layoutId, revision);
   return {
     layoutId: layout.id,
     layoutName: layout.name,
+    printed: source.revision,
+    revisions: source.revisions,
+    defaultRevision: source.defaultRevision,
     request: {
       doc,
       studioDefaults: studio.checkDefaults,

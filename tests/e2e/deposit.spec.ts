@@ -100,7 +100,7 @@ test('designer sends a quote → client pays the deposit on the hosted checkout 
   const csv = await designer.request.get(csvHref!);
   expect(csv.status()).toBe(200);
   expect(csv.headers()['content-type']).toContain('text/csv');
-  expect(csv.headers()['content-disposition']).toMatch(/attachment; filename=".*-v6-parts\.csv"/);
+  expect(csv.headers()['content-disposition']).toMatch(/attachment; filename=".*-preliminary-v6-parts\.csv"/);
   expect(await csv.text()).toMatch(/^Item,Category,Quantity/);
 
   // Quote: 25 % deposit, sent to Priya.
@@ -109,6 +109,9 @@ test('designer sends a quote → client pays the deposit on the hosted checkout 
   await designer.getByLabel('Note to the client').fill('The deposit books your workshop slot.');
   const depositText = (await designer.getByTestId('deposit-preview').textContent())!.trim();
   await designer.getByRole('button', { name: 'Send quote' }).click();
+  // Nothing has been issued and approved: the quote is sent only once the designer confirms.
+  await expect(designer.getByTestId('quote-confirm')).toContainText('preliminary layout');
+  await designer.getByRole('button', { name: 'Send anyway, saying so on the quote' }).click();
   await expect(designer.getByText('Quote sent to Priya Nair')).toBeVisible();
   await expect(designer.getByTestId('quote-panel').getByTestId('quote-status')).toHaveText('Waiting for the deposit');
 

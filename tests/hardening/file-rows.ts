@@ -30,6 +30,8 @@ async function freshUpload(fx: Fixture): Promise<string> {
 
 export const FILE_ROWS: Row[] = [
   { route: '/api/layouts/[id]/sheet', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId }, path: `/api/layouts/${fx.world.clientLayoutId}/sheet?paper=a4&scale=25` }), expect: READ },
+  // The preliminary layout, chosen: the same rights as the default revision.
+  { route: '/api/layouts/[id]/sheet', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId }, path: `/api/layouts/${fx.world.clientLayoutId}/sheet?paper=a4&scale=25&revision=preliminary` }), expect: READ },
   { route: '/api/layouts/[id]/uploads', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: READ },
   {
     route: '/api/layouts/[id]/uploads', method: 'POST',

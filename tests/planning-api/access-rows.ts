@@ -19,6 +19,8 @@ const WEBHOOK_SECRET = 'whsec_matrix_rows';
 
 const designerOf = (fx: Fixture): Actor => ({ userId: fx.world.designer.id, studioId: fx.world.designer.studioId, role: 'designer', email: 'ivo@saltmarsh.test', name: 'Ivo Brandt' });
 
+const clientOf = (fx: Fixture): Actor => ({ userId: fx.world.client.id, studioId: fx.world.client.studioId, role: 'client', email: 'priya@client.test', name: 'Priya Nair' });
+
 async function layoutForClient(fx: Fixture, name: string): Promise<{ id: string; version: number }> {
   const { createLayout } = await import('@/db/layouts');
   const l = await createLayout(designerOf(fx), { name, doc: starterLayout('starter-l-lounge')!, clientId: fx.world.client.id });
@@ -51,18 +53,41 @@ export const PLANNING_ROWS: Row[] = [
     route: '/api/layouts/[id]/quote', method: 'POST',
     request: async (fx) => {
       const l = await layoutForClient(fx, `Matrix quote ${seq++}`);
-      return { params: { id: l.id }, json: { layoutVersion: l.version, depositPct: 25 } };
+      return { params: { id: l.id }, json: { layoutVersion: l.version, depositPct: 25, confirmUnapproved: true } };
+    },
+    expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 201, owner: 201, foreignOwner: 404 },
+  },
+  {
+    // A quote priced from an issued, approved revision (no confirmation needed).
+    route: '/api/layouts/[id]/quote', method: 'POST',
+    request: async (fx) => {
+      const l = await layoutForClient(fx, `Matrix quote of a revision ${seq++}`);
+      const { issueRevision, decideRevision } = await import('@/db/sharing/revisions');
+      const rev = await issueRevision(designerOf(fx), l.id, { note: 'matrix' });
+      await decideRevision(clientOf(fx), l.id, rev.id, { decision: 'approve' });
+      return { params: { id: l.id }, json: { layoutVersion: l.version, depositPct: 25, revision: 'A' } };
     },
     expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 403, designer: 201, owner: 201, foreignOwner: 404 },
   },
   { route: '/api/layouts/[id]/quote/parts', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId } }), expect: WORKSHOP_READ },
+  {
+    route: '/api/layouts/[id]/quote/pdf', method: 'GET',
+    request: async (fx) => {
+      const { sendQuote } = await import('@/db/quotes');
+      const l = await layoutForClient(fx, `Matrix quote file ${seq++}`);
+      await sendQuote(designerOf(fx), l.id, { layoutVersion: l.version, depositPct: 20, confirmUnapproved: true });
+      return { params: { id: l.id } };
+    },
+    expect: READ,
+  },
+  { route: '/api/layouts/[id]/quote/parts', method: 'GET', request: (fx) => ({ params: { id: fx.world.clientLayoutId }, path: '/parts?revision=preliminary' }), expect: WORKSHOP_READ },
   {
     route: '/api/layouts/[id]/quote/checkout', method: 'POST',
     request: async (fx) => {
       await ensureFakePayments();
       const { sendQuote } = await import('@/db/quotes');
       const l = await layoutForClient(fx, `Matrix deposit ${seq++}`);
-      await sendQuote(designerOf(fx), l.id, { layoutVersion: l.version, depositPct: 20 });
+      await sendQuote(designerOf(fx), l.id, { layoutVersion: l.version, depositPct: 20, confirmUnapproved: true });
       return { params: { id: l.id } };
     },
     expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },

@@ -56,7 +56,7 @@ beforeAll(async () => {
   silentFake = await startFakeStripe({ port: 0 }); // delivers no webhooks: the return-visit check must do
   setFakeStripeAddress({ host: '127.0.0.1', port: fake.port });
   const [layout] = await db.select({ version: layouts.version }).from(layouts).where(eq(layouts.id, w.clientLayoutId));
-  const sent = await call(quoteRoute.POST, { method: 'POST', as: w.designer, params: { id: w.clientLayoutId }, json: { layoutVersion: layout.version, depositPct: 25 } });
+  const sent = await call(quoteRoute.POST, { method: 'POST', as: w.designer, params: { id: w.clientLayoutId }, json: { layoutVersion: layout.version, depositPct: 25, confirmUnapproved: true } });
   expect(sent.status).toBe(201);
   quoteId = sent.body.quote.id;
 });
@@ -225,7 +225,7 @@ describe('paying on the hosted checkout', () => {
     const again = await call(checkout.POST, { method: 'POST', as: w.client, params: { id: w.clientLayoutId } });
     expect(again.status).toBe(409);
     const [layout] = await db.select({ version: layouts.version }).from(layouts).where(eq(layouts.id, w.clientLayoutId));
-    const resend = await call(quoteRoute.POST, { method: 'POST', as: w.designer, params: { id: w.clientLayoutId }, json: { layoutVersion: layout.version, depositPct: 30 } });
+    const resend = await call(quoteRoute.POST, { method: 'POST', as: w.designer, params: { id: w.clientLayoutId }, json: { layoutVersion: layout.version, depositPct: 30, confirmUnapproved: true } });
     expect(resend.status).toBe(409);
     expect((await db.select().from(quotes).where(eq(quotes.layoutId, w.clientLayoutId))).filter((q) => q.status === 'paid')).toHaveLength(1);
   });
@@ -234,7 +234,7 @@ describe('paying on the hosted checkout', () => {
 describe('the return-visit check when the webhook never came', () => {
   it('marks the deposit paid from the payment API’s own record of the session, once', async () => {
     const [layout] = await db.select({ version: layouts.version }).from(layouts).where(eq(layouts.id, w.otherLayoutId));
-    const sent = await call(quoteRoute.POST, { method: 'POST', as: w.owner, params: { id: w.otherLayoutId }, json: { layoutVersion: layout.version, depositPct: 10 } });
+    const sent = await call(quoteRoute.POST, { method: 'POST', as: w.owner, params: { id: w.otherLayoutId }, json: { layoutVersion: layout.version, depositPct: 10, confirmUnapproved: true } });
     expect(sent.status).toBe(201);
     setFakeStripeAddress({ host: '127.0.0.1', port: silentFake.port });
     try {

@@ -40,7 +40,7 @@ async function quoteRows(layoutId: string) {
 }
 
 const send = async (who: Who, layoutId: string, body: Record<string, unknown> = {}) =>
-  call(quoteRoute.POST, { method: 'POST', as: as(w, who), params: { id: layoutId }, json: { layoutVersion: await versionOf(layoutId), depositPct: 25, ...body } });
+  call(quoteRoute.POST, { method: 'POST', as: as(w, who), params: { id: layoutId }, json: { layoutVersion: await versionOf(layoutId), depositPct: 25, confirmUnapproved: true, ...body } });
 
 describe('GET /api/layouts/:id/quote before any quote', () => {
   it('refuses anonymous callers with 401', async () => {
@@ -204,7 +204,7 @@ describe('GET /api/layouts/:id/quote/parts', () => {
     const res = await call(partsRoute.GET, { as: w.designer, params: { id: w.clientLayoutId }, path: '/?format=csv' });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toMatch(/^text\/csv/);
-    expect(res.headers.get('content-disposition')).toMatch(/^attachment; filename="nair-l2h2-weekender-v\d+-parts\.csv"$/);
+    expect(res.headers.get('content-disposition')).toMatch(/^attachment; filename="nair-l2h2-weekender-preliminary-v\d+-parts\.csv"$/);
     const text = res.body as string;
     expect(text.split('\r\n')[0]).toBe('Item,Category,Quantity,Unit,"Unit price (GBP, net)",Net (GBP),Labour hours');
     expect(text).toMatch(/\r\nTotal,,,,,\d+\.\d\d,\r\n$/);

@@ -12,6 +12,7 @@ const ROUTES: Record<string, () => Promise<Record<string, unknown>>> = {
   '/api/layouts/[id]/revisions/[revisionId]': () => import('@/app/api/layouts/[id]/revisions/[revisionId]/route'),
   '/api/layouts/[id]/revisions/[revisionId]/decision': () => import('@/app/api/layouts/[id]/revisions/[revisionId]/decision/route'),
   '/api/layouts/[id]/revisions/compare': () => import('@/app/api/layouts/[id]/revisions/compare/route'),
+  '/api/layouts/[id]/revisions/standing': () => import('@/app/api/layouts/[id]/revisions/standing/route'),
   '/api/layouts/[id]/links': () => import('@/app/api/layouts/[id]/links/route'),
   '/api/layouts/[id]/links/[linkId]': () => import('@/app/api/layouts/[id]/links/[linkId]/route'),
   '/api/layouts/[id]/comments': () => import('@/app/api/layouts/[id]/comments/route'),

@@ -61,6 +61,11 @@ export const SHARING_ROWS: Row[] = [
     expect: { ...NOBODY, foreignClient: 404, otherClient: 404, client: 201, designer: 403, owner: 403, foreignOwner: 404 },
   },
   {
+    route: '/api/layouts/[id]/revisions/standing', method: 'GET',
+    request: async (fx) => ({ params: { id: (await withRevision(fx)).id }, path: '/standing' }),
+    expect: READ,
+  },
+  {
     route: '/api/layouts/[id]/revisions/compare', method: 'GET',
     request: async (fx) => ({ params: { id: (await withRevision(fx)).id }, path: '/compare?from=A&to=current' }),
     expect: READ,

@@ -125,7 +125,11 @@ describe('GET /api/layouts/:id/sheet', () => {
     expect(read.pages[0].texts.map((t) => t.str)).toContain(letter);
     const all = read.pages.map((p) => p.text).join(' ');
     expect(all).not.toContain('Relabelled after the issue');
-    const working = await readPdf((await get(w.otherLayoutId, w.designer)).bytes);
+    // Left to choose, the sheet follows the issued revision; the layout as last saved only when chosen.
+    const byDefault = await readPdf((await get(w.otherLayoutId, w.designer)).bytes);
+    expect(byDefault.pages.map((p) => p.text).join(' ')).not.toContain('Relabelled after the issue');
+    expect(byDefault.pages[0].texts.map((t) => t.str)).toContain(letter);
+    const working = await readPdf((await get(w.otherLayoutId, w.designer, '?revision=preliminary')).bytes);
     expect(working.pages.map((p) => p.text).join(' ')).toContain('Relabelled after the issue');
     expect(working.pages[0].texts.map((t) => t.str)).toContain('Preliminary');
   });

@@ -6,6 +6,7 @@ import { MembersPanel } from '@/components/settings/MembersPanel';
 import { StudioPanel } from '@/components/settings/StudioPanel';
 import { PriceListPanel } from '@/components/planning/PriceListPanel';
 import { ChangePasswordPanel } from '@/components/settings/ChangePasswordPanel';
+import { QuoteTermsPanel } from '@/components/settings/QuoteTermsPanel';
 
 export const metadata: Metadata = { title: 'Settings' };
 
@@ -19,6 +20,7 @@ export default async function SettingsPage() {
       <StudioPanel studio={studio} />
       <MembersPanel isOwner={actor.role === 'owner'} selfId={actor.userId} />
       {actor.role !== 'client' && <PriceListPanel canEdit={actor.role === 'owner'} />}
+      {actor.role !== 'client' && <QuoteTermsPanel terms={studio.quote} canEdit={actor.role === 'owner'} />}
       <ChangePasswordPanel email={actor.email} />
     </main>
   );

@@ -1,6 +1,6 @@
 'use client';
 /**
- * The parts list of the draft layout, priced from the studio's price list: one sortable table
+ * The parts list of the chosen revision (or, when chosen, the preliminary layout), priced from the studio's price list: one sortable table
  * (TanStack Table) of modules by kind, sheet goods from the cut list, cable per cross-section,
  * battery, solar and alarms, with labour hours; then materials, labour at the studio rate, VAT
  * and the total. Unpriced lines are flagged, never counted as zero. The CSV download is the
@@ -20,12 +20,12 @@ import type { CutOptions } from '../cut/CutListPanel';
 const col = createColumnHelper<PartsLine>();
 const CATEGORY = { module: 'Module', sheet: 'Sheet goods', cable: 'Cable', electrics: 'Electrics', safety: 'Safety' } as const;
 
-export function csvHref(layoutId: string, cut: CutOptions): string {
-  const q = new URLSearchParams({ format: 'csv', kerf: String(cut.kerfMm), trim: String(cut.trimMm), grain: cut.respectGrain ? '1' : '0' });
+export function csvHref(layoutId: string, cut: CutOptions, revision: string | null): string {
+  const q = new URLSearchParams({ format: 'csv', kerf: String(cut.kerfMm), trim: String(cut.trimMm), grain: cut.respectGrain ? '1' : '0', revision: revision ?? 'preliminary' });
   return `/api/layouts/${encodeURIComponent(layoutId)}/quote/parts?${q}`;
 }
 
-export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string; doc: LayoutDoc; cut: CutOptions; dirty: boolean }) {
+export function PartsListPanel({ layoutId, doc, cut, dirty, revision }: { layoutId: string; doc: LayoutDoc; cut: CutOptions; dirty: boolean; revision: string | null }) {
   const prices = usePriceList();
   const result = useMemo(() => {
     if (!prices.data?.exists) return null;
@@ -60,8 +60,8 @@ export function PartsListPanel({ layoutId, doc, cut, dirty }: { layoutId: string
   return (
     <div className="space-y-3" data-testid="parts-list">
       <div className="flex flex-wrap items-center gap-3">
-        <a className="btn-quiet" href={csvHref(layoutId, cut)} download><Download size={14} aria-hidden="true" /> Download CSV</a>
-        <span className="text-xs text-ink-soft">{dirty ? 'The CSV and the quote use the saved version; your latest entries are being saved.' : 'From the saved version, with the cut-list options shown.'}</span>
+        <a className="btn-quiet" href={csvHref(layoutId, cut, revision)} download><Download size={14} aria-hidden="true" /> Download CSV</a>
+        <span className="text-xs text-ink-soft">{revision ? `From revision ${revision} as issued, with the cut-list options shown.` : dirty ? 'The CSV and the quote use the saved version; your latest entries are being saved.' : 'From the saved version, with the cut-list options shown.'}</span>
       </div>
       {list.unpriced.length > 0 && (
         <p className="rounded-sm border border-brick bg-brick-light p-2 text-sm" role="alert">

@@ -2,17 +2,19 @@
 /**
  * The workshop's side of the quote, on the build-plan page: the layout's current quote and its
  * status, and a form to send a new one — deposit % and a note — priced by the server from the
- * saved layout version and the studio price list. Holds the send while the page has unsaved
+ * chosen issued revision (by default the latest approved; the preliminary only when chosen) and
+ * the studio price list. A revision that is not approved (or the preliminary) is sent only after
+ * the designer confirms, and the quote says so. Holds the send while the page has unsaved
  * entries, while nothing is shared with a client, or once a deposit is paid. Never prices
  * anything itself beyond the preview of the deposit.
  */
 import Link from 'next/link';
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { Send, ExternalLink } from 'lucide-react';
+import { Send, ExternalLink, TriangleAlert } from 'lucide-react';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { computePartsList, quoteDeposit } from '@/lib/planning';
@@ -41,10 +43,12 @@ export function useCurrentQuote(layoutId: string) {
   return useQuery({ queryKey: ['quote', layoutId], queryFn: () => apiFetch<{ quote: QuoteDto | null }>(`/api/layouts/${encodeURIComponent(layoutId)}/quote`) });
 }
 
-export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty, cut, canSend }: {
+export function QuotePanel({ layoutId, savedDoc, savedVersion, revision, clientName, dirty, cut, canSend }: {
   layoutId: string;
   savedDoc: LayoutDoc;
   savedVersion: number;
+  /** The revision priced; null: the preliminary layout as last saved. */
+  revision: { letter: string; state: string } | null;
   clientName: string | null;
   dirty: boolean;
   cut: CutOptions;
@@ -63,18 +67,25 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
       return null;
     }
   }, [savedDoc, prices.data, cut]);
+  /** The server asked for a confirmation: the revision is not approved. Holds the values to send again. */
+  const [confirming, setConfirming] = useState<{ message: string; values: z.output<typeof schema> } | null>(null);
   const send = useMutation({
-    mutationFn: (v: z.output<typeof schema>) =>
+    mutationFn: ({ values: v, confirmed }: { values: z.output<typeof schema>; confirmed: boolean }) =>
       apiFetch<{ quote: QuoteDto; mail: string }>(`/api/layouts/${encodeURIComponent(layoutId)}/quote`, {
         method: 'POST',
-        json: { layoutVersion: savedVersion, depositPct: v.depositPct, ...(v.note ? { note: v.note } : {}), cut },
+        json: {
+          layoutVersion: savedVersion, revision: revision?.letter ?? 'preliminary', depositPct: v.depositPct,
+          ...(v.note ? { note: v.note } : {}), cut, ...(confirmed ? { confirmUnapproved: true } : {}),
+        },
       }),
     onSuccess: (res) => {
+      setConfirming(null);
       toast.success(res.mail === 'sent' ? `Quote sent to ${clientName ?? 'the client'}` : res.mail === 'not-configured' ? 'Quote saved; mail is not set up on this server, so tell the client yourself' : 'Quote saved; the mail to the client could not be sent');
       qc.setQueryData(['quote', layoutId], { quote: res.quote });
     },
-    onError: (err) => {
-      if (err instanceof ApiError && err.status === 412) toast.error('The layout was saved elsewhere since this page loaded: reload to price the latest version.');
+    onError: (err, vars) => {
+      if (err instanceof ApiError && err.status === 409 && err.body.confirm === 'unapproved-revision') setConfirming({ message: err.message, values: vars.values });
+      else if (err instanceof ApiError && err.status === 412) toast.error('The layout was saved elsewhere since this page loaded: reload to price the latest version.');
       else toast.error(err.message);
     },
   });
@@ -105,8 +116,9 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
           <ExternalLink size={14} aria-hidden="true" /> Open the quote page (what the client sees)
         </Link>
       </section>
-      <form className="panel space-y-3 p-4" onSubmit={form.handleSubmit((v) => send.mutate(v))} noValidate aria-label="Send a quote">
+      <form className="panel space-y-3 p-4" onSubmit={form.handleSubmit((v) => send.mutate({ values: v, confirmed: false }))} noValidate aria-label="Send a quote">
         <h3 className="font-semibold">Send a quote{clientName ? ` to ${clientName}` : ''}</h3>
+        <p className="text-sm text-ink-soft">Priced from {revision ? <>revision <span className="font-mono">{revision.letter}</span></> : 'the preliminary layout, as last saved'}.</p>
         <fieldset disabled={!!blocker || send.isPending} className="space-y-3">
           <div>
             <label className="label" htmlFor="q-dep">Deposit</label>
@@ -125,12 +137,22 @@ export function QuotePanel({ layoutId, savedDoc, savedVersion, clientName, dirty
             <p className="text-sm">
               Total <span className="font-mono">{formatMoney(preview.grossMinor, preview.currency)}</span> incl. VAT
               {pct !== null && pct > 0 && pct <= 100 && <> · deposit <span className="font-mono" data-testid="deposit-preview">{formatMoney(quoteDeposit(preview.grossMinor, pct), preview.currency)}</span></>}
-              <span className="text-ink-soft"> (saved version {savedVersion})</span>
+              <span className="text-ink-soft"> ({revision ? `revision ${revision.letter}` : `saved version ${savedVersion}`})</span>
             </p>
           )}
           <button type="submit" className="btn-primary"><Send size={14} aria-hidden="true" />{send.isPending ? 'Sending…' : 'Send quote'}</button>
         </fieldset>
         {blocker && <p className="text-sm text-ink-soft" role="note">{blocker}</p>}
+        {confirming && (
+          <div role="alertdialog" aria-labelledby="quote-confirm-title" className="space-y-2 rounded-sm border border-ochre bg-ochre-light p-3 text-sm" data-testid="quote-confirm">
+            <p id="quote-confirm-title" className="flex gap-2 font-semibold"><TriangleAlert size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />Send a quote for a revision that is not approved?</p>
+            <p>{confirming.message}</p>
+            <div className="flex gap-2">
+              <button type="button" className="btn-primary" disabled={send.isPending} onClick={() => send.mutate({ values: confirming.values, confirmed: true })}>Send anyway, saying so on the quote</button>
+              <button type="button" className="btn-quiet" onClick={() => setConfirming(null)}>Cancel</button>
+            </div>
+          </div>
+        )}
       </form>
     </div>
   );

@@ -1,14 +1,18 @@
 /**
- * A quote as its client and the workshop see it: status (word and icon), the frozen parts
- * lines, materials, labour, VAT, the total, the deposit and what is left to pay, who sent it
- * and when, and — once paid — when, and where the receipt went. Plain markup (server or
+ * A quote as its client and the workshop see it — the same document as its PDF: the workshop's
+ * name and details, status (word and icon), the revision it was priced from (and a line when that
+ * was not an approved revision), the date it holds until, the frozen parts lines, materials,
+ * labour, VAT, the total, the deposit and what is left to pay, who sent it and when, and — once
+ * paid — when, and where the receipt went; then the studio's terms. Plain markup (server or
  * client); the pay button is its own client component. Shows the DTO; computes nothing but
  * formatting.
  */
-import { CircleCheck, Clock, CircleSlash } from 'lucide-react';
+import { CircleCheck, Clock, CircleSlash, TriangleAlert } from 'lucide-react';
 import type { QuoteDto } from '@/db/quotes';
 import { formatMoney, quantityText } from '../money';
-import { formatDateTime } from '@/lib/format';
+import { formatDate, formatDateTime } from '@/lib/format';
+import { quoteRevisionWords } from '@/lib/planning/quote-words';
+import { SHEET_CAUTIONS } from '@/lib/layout/cautions';
 
 
 export function QuoteStatus({ quote }: { quote: QuoteDto }) {
@@ -20,18 +24,28 @@ export function QuoteStatus({ quote }: { quote: QuoteDto }) {
 export function QuoteView({ quote }: { quote: QuoteDto }) {
   const m = (n: number | null) => formatMoney(n, quote.currency);
   const p = quote.parts;
+  const rev = quoteRevisionWords(quote.revision, quote.layoutVersion);
   return (
     <article className="panel space-y-4 p-5" data-testid="quote">
       <header className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <h2 className="text-lg font-semibold">Quote {quote.reference}</h2>
-          <p className="text-sm text-ink-soft">
-            {quote.studioName} · sent by {quote.sentByName} on {formatDateTime(quote.sentAt)} · priced from layout version <span className="font-mono">{quote.layoutVersion}</span>
-            {quote.clientName ? ` · for ${quote.clientName}` : ''}
-          </p>
+          <p className="font-semibold" data-testid="quote-workshop">{quote.studioName}</p>
+          {quote.workshopDetails && <p className="whitespace-pre-line text-xs text-ink-soft">{quote.workshopDetails}</p>}
         </div>
         <QuoteStatus quote={quote} />
       </header>
+      <div>
+        <h2 className="text-lg font-semibold">Quote {quote.reference}</h2>
+        <p className="text-sm text-ink-soft">
+          Sent by {quote.sentByName} on {formatDateTime(quote.sentAt)}{quote.clientName ? ` · for ${quote.clientName}` : ''}
+        </p>
+        <p className="text-sm"><span data-testid="quote-revision">{rev.line}</span>{quote.validUntil ? <> · valid until <span className="font-semibold" data-testid="quote-valid-until">{formatDate(quote.validUntil)}</span></> : null}</p>
+      </div>
+      {rev.unapproved && (
+        <p role="note" className="flex gap-2 rounded-sm border border-ochre bg-ochre-light p-2 text-sm" data-testid="quote-unapproved">
+          <TriangleAlert size={16} className="mt-0.5 shrink-0 text-ochre" aria-hidden="true" />{rev.unapproved}
+        </p>
+      )}
       {quote.note && <blockquote className="border-l-2 border-copper pl-3 text-sm whitespace-pre-wrap">{quote.note}</blockquote>}
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
@@ -64,6 +78,20 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
           </dd>
         </div>
       </dl>
+      {quote.terms && (
+        <section aria-label="Terms" data-testid="quote-terms">
+          <h3 className="mb-1 text-sm font-semibold">Terms</h3>
+          <p className="whitespace-pre-line text-sm">{quote.terms}</p>
+        </section>
+      )}
+      <section aria-label="Safety cautions" data-testid="quote-cautions">
+        <h3 className="mb-1 text-sm font-semibold">Safety cautions</h3>
+        <dl className="space-y-1 text-xs">
+          {SHEET_CAUTIONS.map((c) => (
+            <div key={c.topic}><dt className="inline font-semibold">{c.topic}. </dt><dd className="inline">{c.text}</dd></div>
+          ))}
+        </dl>
+      </section>
     </article>
   );
 }

@@ -5,6 +5,8 @@ import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';
 import { LayoutWorkspace } from '@/components/sharing/LayoutWorkspace';
+import { documentSource } from '@/db/sharing/issued';
+import { revisionChoiceSchema } from '@/lib/api/planning-bodies';
 
 export const metadata: Metadata = { title: 'Layout' };
 
@@ -18,12 +20,31 @@ export default async function LayoutPage({ params, searchParams }: { params: Pro
   });
   const studio = await getStudio(actor);
   // `?markup=` from a mail's link; `?comment=` is what mail sent before the rename said.
-  const { markup, comment } = await searchParams;
+  const { markup, comment, revision } = await searchParams;
   const focus = typeof markup === 'string' ? markup : typeof comment === 'string' ? comment : null;
+  // Issued means frozen: `?revision=B` opens that revision read-only; the client sees the latest
+  // issued revision unless they choose the preliminary (`?revision=preliminary`).
+  const choice = revisionChoiceSchema.safeParse(revision).data;
+  const source = choice !== undefined || !layout.canEdit
+    ? await documentSource(actor, layout.id, choice, { for: 'client' }).catch((err) => {
+      if (err instanceof NotFoundError) notFound();
+      throw err;
+    })
+    : null;
+  const onShow = source?.revision ? { letter: source.revision.letter, state: source.revision.state } : null;
   return (
     <div className="h-[calc(100vh-48px)]">
       {/* The editor with its mark-ups, the Mark-ups list and the sharing entry points (components/sharing). */}
-      <LayoutWorkspace layoutId={layout.id} initialDoc={layout.doc} initialVersion={layout.version} canEdit={layout.canEdit} units={studio.units} focusMarkup={focus} />
+      <LayoutWorkspace
+        key={onShow?.letter ?? 'preliminary'}
+        layoutId={layout.id}
+        initialDoc={source?.doc ?? layout.doc}
+        initialVersion={source?.layoutVersion ?? layout.version}
+        canEdit={layout.canEdit && !onShow}
+        units={studio.units}
+        focusMarkup={focus}
+        onShow={onShow}
+      />
     </div>
   );
 }

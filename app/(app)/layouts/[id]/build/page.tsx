@@ -8,6 +8,8 @@ import { getStudio } from '@/db/studios';
 import { NotFoundError } from '@/db/errors';
 import { BuildPlanner } from '@/components/planning/BuildPlanner';
 import { buildTabFrom } from '@/components/planning/buildTabs';
+import { documentSource } from '@/db/sharing/issued';
+import { revisionChoiceSchema } from '@/lib/api/planning-bodies';
 
 export const metadata: Metadata = { title: 'Build plan' };
 
@@ -21,7 +23,15 @@ export default async function BuildPlanPage({ params, searchParams }: { params: 
     throw err;
   });
   const studio = await getStudio(actor);
-  const tab = buildTabFrom((await searchParams).tab);
+  const sp = await searchParams;
+  const tab = buildTabFrom(sp.tab);
+  // The parts list, the cut list and the quote are made from an issued revision (`?revision=`; default
+  // the latest approved, else the latest issued); the preliminary only when chosen.
+  const choice = revisionChoiceSchema.safeParse(sp.revision).data;
+  const source = await documentSource(actor, layout.id, choice).catch((err) => {
+    if (err instanceof NotFoundError) return documentSource(actor, layout.id, undefined);
+    throw err;
+  });
   return (
     <main className="mx-auto max-w-[1440px] space-y-3 px-4 py-4">
       <nav className="flex flex-wrap items-center gap-4 text-sm" aria-label="Layout">
@@ -37,6 +47,12 @@ export default async function BuildPlanPage({ params, searchParams }: { params: 
         units={studio.units}
         clientName={layout.client?.name ?? null}
         initialTab={tab}
+        documents={{
+          revision: source.revision ? { letter: source.revision.letter, state: source.revision.state, layoutVersion: source.revision.layoutVersion } : null,
+          revisions: source.revisions.map((r) => ({ letter: r.letter, state: r.state })),
+          defaultRevision: source.defaultRevision,
+          doc: source.revision ? source.doc : null,
+        }}
       />
     </main>
   );

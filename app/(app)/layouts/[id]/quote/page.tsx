@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { headers } from 'next/headers';
 import { notFound, redirect } from 'next/navigation';
-import { ArrowLeft, CircleCheck, Info, TriangleAlert } from 'lucide-react';
+import { ArrowLeft, CircleCheck, Download, Info, TriangleAlert } from 'lucide-react';
 import { currentActor } from '@/server/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getCurrentQuote } from '@/db/quotes';
@@ -64,6 +64,11 @@ export default async function QuotePage({ params, searchParams }: { params: Prom
         <p className="panel p-6 text-sm text-ink-soft">{layout.canEdit ? 'No quote has been sent for this layout yet. Send one from the build plan’s Quote tab.' : 'Your workshop has not sent a quote for this layout yet.'}</p>
       ) : (
         <>
+          <p className="flex justify-end">
+            <a className="btn-quiet px-3 py-1.5 text-sm" href={`/api/layouts/${layout.id}/quote/pdf`} download data-testid="quote-pdf">
+              <Download size={14} aria-hidden="true" /> Download the quote (PDF)
+            </a>
+          </p>
           <QuoteView quote={quote} />
           {quote.canPay && !paymentsConfigured() && (
             <p role="status" className="panel flex items-center gap-2 p-4 text-sm">

@@ -62,10 +62,18 @@ export default async function SheetPage({ params, searchParams }: Props) {
           .sheet-page:last-child { break-after: auto; }
         }
       `}</style>
-      <SheetControls layoutId={ctx.layoutId} paper={query.paper} scale={query.scale} revision={query.revision ?? null} canDownload={result.ok} />
+      <SheetControls
+        layoutId={ctx.layoutId}
+        paper={query.paper}
+        scale={query.scale}
+        revision={ctx.printed?.letter ?? null}
+        revisions={ctx.revisions.map((r) => ({ letter: r.letter, state: r.state }))}
+        defaultRevision={ctx.defaultRevision}
+        canDownload={result.ok}
+      />
       {!parsed.success && (
         <p role="alert" className="no-print mx-4 mt-3 rounded-sm border border-ochre bg-ochre-light px-3 py-2 text-sm text-ink">
-          That paper, scale or revision is not one we can print; showing the preliminary layout (as last saved) on A4 at 1:20. Choose from the lists above.
+          That paper, scale or revision is not one we can print; showing {ctx.printed ? `revision ${ctx.printed.letter}` : 'the preliminary layout (as last saved)'} on A4 at 1:20. Choose from the lists above.
         </p>
       )}
       <div className="sheet-body flex flex-col gap-4 p-4 xl:flex-row xl:items-start">
