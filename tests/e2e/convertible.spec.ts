@@ -1,12 +1,13 @@
 // The convertible lounge as a designer builds it in Chromium: two bench seats along the walls and
 // an infill board between them. The benches come off the shelf as seats by day and a bed by night,
 // so the made-up bed passes in sleep while the benches stay seats in travel. Invented figures:
-// the stock L4H3 bay (walls 36 mm), benches 1900 × 600 (cushion top 460 mm), infill 1900 × 528 at
+// the L4H3 bay template (walls 36 mm), benches 1900 × 600 (cushion top 460 mm), infill 1900 × 528 at
 // 380 + 80 = 460 mm; one bed 1900 long and 600 + 528 + 600 = 1728 mm wide.
 import { expect, test, type Page } from '@playwright/test';
 import { signIn, keepScreenshot } from './helpers';
 
-const STOCK = 'Workshop stock — L4H3 empty bay';
+// Its own layout on the L4H3 bay, so the shared stock layout other specs draw on stays empty.
+const LAYOUT = `Convertible lounge ${Date.now()}`;
 const detail = (page: Page, field: string) => page.getByTestId(`details-${field}`);
 
 async function place(page: Page, search: string, kind: string, at: Record<string, string>) {
@@ -24,7 +25,9 @@ async function place(page: Page, search: string, kind: string, at: Record<string
 
 test('a convertible lounge: the bed passes in sleep while the benches stay seats in travel', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
-  await page.getByRole('link', { name: STOCK }).first().click();
+  const created = await page.request.post('/api/layouts', { data: { name: LAYOUT, bayTemplateId: 'l4h3' } });
+  expect(created.status()).toBe(201);
+  await page.goto(`/layouts/${(await created.json()).id}`);
   await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
 
   await place(page, 'bench', 'bench-seat', { x: '1000', y: '36', length: '1900', width: '600' });

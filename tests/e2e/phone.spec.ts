@@ -40,7 +40,7 @@ test('a client on a phone: viewer link, mark-up, approval, deposit', async ({ br
   expect(link.status()).toBe(201);
   const viewerPath: string = (await link.json()).path;
   const version: number = (await (await designer.request.get(`/api/layouts/${id}`)).json()).version;
-  expect((await designer.request.post(`/api/layouts/${id}/quote`, { data: { layoutVersion: version, depositPct: 25 } })).status()).toBe(201);
+  expect((await designer.request.post(`/api/layouts/${id}/quote`, { data: { layoutVersion: version, depositPct: 25, confirmUnapproved: true } })).status()).toBe(201);
 
   const phone = await (await browser.newContext(PHONE)).newPage();
   // The viewer link, without an account.
