@@ -13,7 +13,7 @@
 import * as z from 'zod/mini';
 import { bandRect, clamp01, clampInt, cubic, ellipse, oppositeSide, path, roundRect, type SymbolShape } from '../geometry/shapes';
 import { tankCapacity, type TankSize } from './tank';
-import type { ARRANGEMENTS, FACINGS, SURFACES } from './vocabulary';
+import type { ARRANGEMENTS, FACINGS, MOUNTS, SURFACES } from './vocabulary';
 
 type Arrangement = (typeof ARRANGEMENTS)[number];
 type Facing = (typeof FACINGS)[number];
@@ -127,6 +127,8 @@ interface KindDef<K extends string, F extends Fields> {
   /** What its top is used as in each arrangement (copied onto a new module). */
   surfaces?: Partial<Record<Arrangement, Surface>>;
   arrangements: Arrangement[];
+  /** Where a new one is mounted when not inside the body: under the floor, on the roof or behind the rear doors. */
+  mount?: Exclude<(typeof MOUNTS)[number], 'inside'>;
   /** Worked from its front face, so the walkway must reach it (DESIGN.md). */
   usedFromFront: boolean;
   /** The kind's own values: the module's `props`. */
@@ -354,6 +356,27 @@ export const KINDS = {
       const L = m.length, W = m.width;
       return [path([[0, 0], [L, W]]), path([[L, 0], [0, W]]), { type: 'circle', cx: L / 2, cy: W / 2, r: Math.min(L, W) * 0.06, fill: 'paper' }];
     },
+  }),
+  'spare-wheel': defineKind({
+    kind: 'spare-wheel', title: 'Spare wheel', keywords: ['spare tyre', 'wheel carrier', 'underslung'], family: 'timber',
+    length: 700, width: 700, elevation: 0, height: 220, massKg: 22, arrangements: ALL, mount: 'under-floor', usedFromFront: false,
+    values: {}, facts: () => ({}),
+    symbol: (m) => [
+      { type: 'path', points: ellipse(m.length / 2, m.width / 2, m.length * 0.45, m.width * 0.45), closed: true },
+      { type: 'path', points: ellipse(m.length / 2, m.width / 2, m.length * 0.2, m.width * 0.2), closed: true },
+    ],
+  }),
+  'roof-box': defineKind({
+    kind: 'roof-box', title: 'Roof box', keywords: ['roof pod', 'roof rack', 'roof storage'], family: 'timber',
+    length: 1400, width: 800, elevation: 0, height: 400, massKg: 18, arrangements: ALL, mount: 'roof', usedFromFront: false,
+    values: {}, facts: () => ({}),
+    symbol: (m) => [roundRect(m.length * 0.08, m.width * 0.1, m.length * 0.84, m.width * 0.8, Math.min(m.length, m.width) * 0.2)],
+  }),
+  'rear-carrier': defineKind({
+    kind: 'rear-carrier', title: 'Rear carrier', keywords: ['bike rack', 'bikes', 'bicycle carrier', 'rear rack', 'tow bar carrier'], family: 'timber',
+    length: 600, width: 1200, elevation: 400, height: 1000, massKg: 30, arrangements: ALL, mount: 'rear', usedFromFront: false,
+    values: {}, facts: () => ({}),
+    symbol: (m) => [0.25, 0.5, 0.75].map((t) => path([[0, m.width * t], [m.length, m.width * t]])),
   }),
   step: defineKind({
     kind: 'step', title: 'Step', keywords: ['entry step', 'stair', 'ladder', 'bunk ladder'], family: 'timber',

@@ -38,6 +38,10 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   'toilet-cabinet': { carcass: { pieces: ['sides', 'top', 'back'], shelves: 0 } },
   'shower-tray': {},
   step: { carcass: { pieces: ['sides', 'top', 'front'], shelves: 0 } },
+  // Mounted outside the body: bought, not built, so nothing to cut and no load.
+  'spare-wheel': {},
+  'roof-box': {},
+  'rear-carrier': {},
 };
 
 const placed = (kind: ModuleKind): Module => moduleFromKind(kind, `m-${kind}`);
@@ -111,7 +115,7 @@ describe('kind-specific values', () => {
 
   it('the registry lists every kind once, in shelf order', () => {
     expect(MODULE_KINDS).toEqual(Object.keys(KINDS));
-    expect(new Set(MODULE_KINDS).size).toBe(20);
+    expect(new Set(MODULE_KINDS).size).toBe(23);
   });
 });
 

@@ -57,10 +57,17 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
     height: spec.height,
     facing: 'front',
     arrangements: [...spec.arrangements],
+    ...(spec.mount ? { mount: spec.mount } : {}),
     ...(spec.surfaces ? { surfaces: { ...spec.surfaces } } : {}),
     massKg: spec.massKg,
     ...(spec.props ? { props: { ...spec.props } } : {}),
   } as Module);
+}
+
+/** Where a new module mounted outside the body goes when no point is given: mid-width, behind the rear or mid-bay. */
+function outsideSpot(doc: LayoutDoc, m: Module): { x: number; y: number } {
+  const y = Math.round((doc.bay.width - m.width) / 2);
+  return m.mount === 'rear' ? { x: doc.bay.length, y } : { x: Math.round((doc.bay.length - m.length) / 2), y };
 }
 
 /**
@@ -97,8 +104,10 @@ export function placeModule(doc: LayoutDoc, kind: ModuleKind, centre?: { x: numb
     if (base.width <= lined.y1 - lined.y0) y = Math.min(Math.max(y, lined.y0), lined.y1 - base.width);
     pos = { x, y };
   } else {
-    pos = freeSpot(doc, base);
+    pos = base.mount ? outsideSpot(doc, base) : freeSpot(doc, base);
   }
+  // Behind the rear doors means behind the rear of the bay, whatever point it was dropped at.
+  if (base.mount === 'rear') pos = { ...pos, x: doc.bay.length };
   // Against a wall, it faces the room from that wall.
   const facing = roomFacing(doc, { ...base, ...pos }) ?? base.facing;
   const placed = checkedModule({ ...base, ...pos, facing });

@@ -34,7 +34,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
   const r = form.register;
   const chemistry = form.watch('chemistry');
   const facts = chemistry ? CHEMISTRIES[chemistry] : null;
-  const moduleLoads = useMemo(() => doc.modules.filter((m) => m.kind !== 'heater' && typeof m.props?.watts === 'number'), [doc.modules]);
+  const moduleLoads = useMemo(() => doc.modules.filter((m) => m.kind !== 'heater' && m.props && 'watts' in m.props && typeof m.props.watts === 'number'), [doc.modules]);
 
   const addPreset = () => {
     const p = LOAD_PRESETS.find((x) => x.id === preset)!;

@@ -1,0 +1,38 @@
+// Kinds that live outside the body come off the Parts shelf mounted there: a rear carrier (a bike
+// rack, say) behind the rear of the bay, a spare wheel under the floor, a roof box on the roof.
+// Placed, they pass their own fit rule and stay out of the interior's overlap rule. Invented demo
+// figures: the harness's bay and the kinds' default sizes (600 mm carrier, 1000 mm projection
+// allowed behind the rear — UK Construction and Use Regulations 1986, reg. 82, from memory).
+import { describe, expect, it } from 'vitest';
+import { runChecks } from '@/lib/checks';
+import { harness } from './harness';
+
+describe('outside kinds from the shelf', () => {
+  it('a rear carrier goes behind the rear of the bay, wherever it is dropped, and projects within the limit', () => {
+    const h = harness();
+    const { length, width } = h.get().doc.bay;
+    const dropped = h.get().addModule('rear-carrier', { x: length / 2, y: width / 2 });
+    const m = h.byId(dropped.id!)!;
+    expect(m.mount).toBe('rear');
+    expect(m.x).toBe(length);
+    const fit = runChecks(h.get().doc).findings.find((f) => f.id === 'fit.outside' && f.moduleIds?.includes(m.id))!;
+    expect(fit).toMatchObject({ status: 'pass', measured: 600 });
+    const shelved = h.get().addModule('rear-carrier');
+    expect(h.byId(shelved.id!)!).toMatchObject({ mount: 'rear', x: length, y: Math.round((width - 1200) / 2) });
+  });
+
+  it('a spare wheel hangs under the floor and a roof box sits on the roof, neither clashing with what stands inside', () => {
+    const h = harness();
+    const counter = h.get().addModule('kitchen-counter').id!;
+    const c = h.byId(counter)!;
+    const wheel = h.byId(h.get().addModule('spare-wheel', { x: c.x + c.length / 2, y: c.y + c.width / 2 }).id!)!;
+    const box = h.byId(h.get().addModule('roof-box', { x: c.x + c.length / 2, y: c.y + c.width / 2 }).id!)!;
+    expect(wheel.mount).toBe('under-floor');
+    expect(box.mount).toBe('roof');
+    const findings = runChecks(h.get().doc).findings;
+    const overlaps = findings.filter((f) => f.id === 'fit.overlap' && f.status !== 'pass');
+    expect(overlaps.flatMap((f) => f.moduleIds ?? [])).not.toContain(wheel.id);
+    expect(overlaps.flatMap((f) => f.moduleIds ?? [])).not.toContain(box.id);
+    expect(findings.filter((f) => f.id === 'fit.outside').map((f) => f.moduleIds?.[0]).sort()).toEqual([wheel.id, box.id].sort());
+  });
+});
