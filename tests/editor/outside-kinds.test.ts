@@ -36,3 +36,21 @@ describe('outside kinds from the shelf', () => {
     expect(findings.filter((f) => f.id === 'fit.outside').map((f) => f.moduleIds?.[0]).sort()).toEqual([wheel.id, box.id].sort());
   });
 });
+
+describe('the load floor height, set in the Bay panel', () => {
+  it('moves the under-floor envelope: a 400 mm deep tank fails at the default and passes with the floor 650 mm above the road; undo puts the default back', () => {
+    // Envelope = floor above the road − 200 mm ground clearance kept (both common practice, no source):
+    // 550 − 200 = 350 mm by default, 650 − 200 = 450 mm once set.
+    const h = harness();
+    const id = h.get().addModule('grey-water-tank').id!;
+    h.get().updateModule(id, { mount: 'under-floor', height: 400 }, 'Hang it under the floor');
+    const fit = () => runChecks(h.get().doc).findings.find((f) => f.id === 'fit.outside' && f.moduleIds?.includes(id))!;
+    expect(fit()).toMatchObject({ status: 'fail', measured: 400, required: 350 });
+    expect(h.get().updateSettings({ floorAboveRoad: 650 }).ok).toBe(true);
+    expect(fit()).toMatchObject({ status: 'pass', measured: 400, required: 450 });
+    h.get().undo();
+    expect(h.get().doc.settings?.floorAboveRoad).toBeUndefined();
+    expect(h.get().updateSettings({ floorAboveRoad: -5 }).ok).toBe(false);
+    expect(h.get().doc.settings?.floorAboveRoad).toBeUndefined();
+  });
+});

@@ -13,6 +13,7 @@ import { BAY_LIMITS } from '@/lib/layout/vocabulary';
 import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout/schema';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { LengthField } from './LengthField';
+import { DEFAULT_SETTINGS } from '@/lib/checks/settings';
 import { LAYER_PRESETS } from './buildUpPresets';
 import { clearHeight, layersThickness } from '@/lib/layout/bay';
 import { formatLength } from '@/lib/layout/units';
@@ -52,6 +53,15 @@ export const BayPanel = memo(function BayPanel() {
             </label>
           </div>
           <p className="text-xs text-ink-soft">Clear height after build-up: <span className="font-mono">{formatLength(clearHeight(doc), units)}</span></p>
+          <LengthField
+            label="Load floor above the road (for what hangs under the floor)"
+            unit={units}
+            valueMm={doc.settings?.floorAboveRoad ?? DEFAULT_SETTINGS.floorAboveRoad}
+            min={100}
+            max={2000}
+            onCommit={(v) => say(api.getState().updateSettings({ floorAboveRoad: v }, 'Edit load floor height'))}
+            testId="floor-above-road"
+          />
         </div>
 
         <div className={section}>

@@ -8,7 +8,7 @@ import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Arrangement, Bay, BuildUp, LayoutDoc, Module, ModuleKind, Occupants } from '@/lib/layout/schema';
 import type { Systems } from '@/lib/layout/systems';
 import type { LengthUnit } from '@/lib/layout/units';
-import { baySchema, buildUpSchema, firstProblem, occupantsSchema } from '@/lib/layout/schema';
+import { baySchema, buildUpSchema, firstProblem, occupantsSchema, settingsSchema, type LayoutSettings } from '@/lib/layout/schema';
 import { type Viewport, fitToBay, zoomAt, panBy, actualSize, CSS_PX_PER_MM, screenToMm } from '../geometry/viewport';
 import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
@@ -73,6 +73,8 @@ export interface EditorState {
   updateBay(patch: Partial<Bay>): EditResult;
   updateBuildUp(buildUp: BuildUp): EditResult;
   updateOccupants(occupants: Occupants): EditResult;
+  /** Sets (or, with undefined, clears back to the studio's default) this layout's own check settings. */
+  updateSettings(patch: Partial<LayoutSettings>, label?: string): EditResult;
   renameLayout(name: string): EditResult;
   /**
    * Replaces the named sections of the build plan's inputs (`doc.systems`; undefined removes one).
@@ -237,6 +239,16 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
           const problem = firstProblem(occupantsSchema, occupants);
           if (problem) throw new edits.EditError(problem);
           return { doc: { ...get().doc, occupants } };
+        });
+      },
+      updateSettings(patch, label = 'Edit check settings') {
+        return commit(label, () => {
+          const merged: Record<string, unknown> = { ...get().doc.settings, ...patch };
+          for (const key of Object.keys(merged)) if (merged[key] === undefined) delete merged[key];
+          const problem = firstProblem(settingsSchema, merged);
+          if (problem) throw new edits.EditError(problem);
+          const { settings: _old, ...rest } = get().doc;
+          return { doc: Object.keys(merged).length ? { ...rest, settings: merged as LayoutSettings } : rest };
         });
       },
       renameLayout(name) {
