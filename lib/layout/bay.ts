@@ -194,3 +194,32 @@ export function interiorOf<D extends { modules: Pick<Module, 'mount'>[] }>(doc: 
 export function outsideModules<M extends Pick<Module, 'mount'>>(doc: { modules: M[] }): M[] {
   return doc.modules.filter((m) => !mountedInside(m));
 }
+
+type SectionModule = Pick<Module, 'mount' | 'x' | 'length' | 'elevation' | 'height'>;
+
+/**
+ * Where a module stands in the side section, as heights above the bare floor (z = 0): inside the
+ * body and behind the rear doors from the finished floor up by its elevation; under the floor
+ * hanging below it, its top at the bare floor; on the roof standing on it.
+ */
+export function sectionBand(m: SectionModule, bayHeight: number, floorT: number): { z0: number; z1: number } {
+  const mount = mountOf(m);
+  if (mount === 'under-floor') return { z0: -m.height, z1: 0 };
+  if (mount === 'roof') return { z0: bayHeight, z1: bayHeight + m.height };
+  return { z0: floorT + m.elevation, z1: floorT + m.elevation + m.height };
+}
+
+/** How far the side section reaches past the bare bay for the modules outside it (mm): below the floor, above the roof, behind the rear. One pass. */
+export function sectionReach(doc: Pick<LayoutDoc, 'bay' | 'modules'>, floorT: number): { below: number; above: number; behind: number } {
+  let below = 0;
+  let above = 0;
+  let behind = 0;
+  for (const m of doc.modules) {
+    if (mountedInside(m)) continue;
+    const { z0, z1 } = sectionBand(m, doc.bay.height, floorT);
+    below = Math.max(below, -z0);
+    above = Math.max(above, z1 - doc.bay.height);
+    behind = Math.max(behind, m.x + m.length - doc.bay.length);
+  }
+  return { below, above, behind };
+}

@@ -5,6 +5,7 @@
 // allowed behind the rear — UK Construction and Use Regulations 1986, reg. 82, from memory).
 import { describe, expect, it } from 'vitest';
 import { runChecks } from '@/lib/checks';
+import { sectionBand, sectionReach } from '@/lib/layout/bay';
 import { harness } from './harness';
 
 describe('outside kinds from the shelf', () => {
@@ -52,5 +53,26 @@ describe('the load floor height, set in the Bay panel', () => {
     expect(h.get().doc.settings?.floorAboveRoad).toBeUndefined();
     expect(h.get().updateSettings({ floorAboveRoad: -5 }).ok).toBe(false);
     expect(h.get().doc.settings?.floorAboveRoad).toBeUndefined();
+  });
+});
+
+describe('the side section draws outside modules where they hang', () => {
+  // A 2000 mm high bay with a 30 mm floor build-up (invented): inside, a 400 mm high module at
+  // elevation 100 stands from 30 + 100 = 130 to 530 mm; a 200 mm deep tank under the floor spans
+  // −200…0; a 400 mm roof box 2000…2400; a 600 mm carrier behind a 3100 mm bay reaches 600 past it.
+  const base = { x: 0, length: 500, elevation: 100 };
+  it('places each band by its mount and widens the figure by what reaches outside', () => {
+    expect(sectionBand({ ...base, height: 400 }, 2000, 30)).toEqual({ z0: 130, z1: 530 });
+    expect(sectionBand({ ...base, height: 200, mount: 'under-floor' }, 2000, 30)).toEqual({ z0: -200, z1: 0 });
+    expect(sectionBand({ ...base, height: 400, mount: 'roof' }, 2000, 30)).toEqual({ z0: 2000, z1: 2400 });
+    const doc = {
+      bay: { length: 3100, height: 2000 },
+      modules: [
+        { ...base, height: 200, mount: 'under-floor' as const },
+        { ...base, height: 400, mount: 'roof' as const },
+        { ...base, x: 3100, length: 600, height: 1000, mount: 'rear' as const },
+      ],
+    };
+    expect(sectionReach(doc as never, 30)).toEqual({ below: 200, above: 400, behind: 600 });
   });
 });

@@ -10,7 +10,7 @@ import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
 import { useEditor } from '../store/EditorStoreContext';
-import { buildUpThickness, clearHeight, modulesIn } from '@/lib/layout/bay';
+import { buildUpThickness, clearHeight, modulesIn, mountedInside, sectionBand, sectionReach } from '@/lib/layout/bay';
 import { drawOrder } from '../geometry/hitTest';
 import { theme } from '../theme';
 
@@ -33,9 +33,11 @@ export const SectionView = memo(function SectionView() {
   const { length: L, height: H } = doc.bay;
   const { floorT: fT, roofT: rT } = buildUpThickness(doc);
   const clear = clearHeight(doc);
-  const k = Math.max(0.01, Math.min((size.w - PAD.left - PAD.right) / L, (size.h - PAD.top - PAD.bottom) / H));
+  // Modules outside the body (under the floor, on the roof, behind the rear) widen the figure.
+  const reach = sectionReach(doc, fT);
+  const k = Math.max(0.01, Math.min((size.w - PAD.left - PAD.right) / (L + reach.behind), (size.h - PAD.top - PAD.bottom) / (H + reach.above + reach.below)));
   const X = (x: number) => PAD.left + x * k;
-  const Y = (z: number) => PAD.top + (H - z) * k;
+  const Y = (z: number) => PAD.top + (H + reach.above - z) * k;
   const modules = drawOrder(modulesIn(doc, arrangement));
   const fx = Math.min(L - 150, Math.max(150, figureX ?? Math.round(L * 0.3)));
   const statureOptions = Array.from(new Set([doc.occupants.standingHeight, ...doc.occupants.sleepers])).sort((a, b) => a - b);
@@ -73,12 +75,13 @@ export const SectionView = memo(function SectionView() {
           ))}
           {/* Modules */}
           {modules.map((m) => {
-            const z0 = fT + m.elevation;
+            const { z0 } = sectionBand(m, H, fT);
             const fam = KINDS[m.kind].family;
             const sel = selection.includes(m.id);
+            const outside = !mountedInside(m);
             return (
-              <g key={m.id}>
-                <rect x={X(m.x)} y={Y(z0 + m.height)} width={m.length * k} height={m.height * k} fill={fam === 'timber' ? 'url(#sec-timber)' : theme.paper} fillOpacity={fam === 'timber' ? 1 : 0.85} stroke={sel ? theme.copper : theme.ink} strokeWidth={sel ? 1.75 : 1} strokeDasharray={m.kind === 'overhead-locker' ? '4 3' : undefined} />
+              <g key={m.id} data-mount={outside ? m.mount : undefined}>
+                <rect x={X(m.x)} y={Y(z0 + m.height)} width={m.length * k} height={m.height * k} fill={fam === 'timber' ? 'url(#sec-timber)' : theme.paper} fillOpacity={fam === 'timber' ? 1 : 0.85} stroke={sel ? theme.copper : theme.ink} strokeWidth={sel ? 1.75 : 1} strokeDasharray={outside ? '10 3' : m.kind === 'overhead-locker' ? '4 3' : undefined} />
                 {m.length * k > 40 && m.height * k > 12 && (
                   <text x={X(m.x + m.length / 2)} y={Y(z0 + m.height / 2)} textAnchor="middle" dominantBaseline="middle" fontSize={10} fill={theme.ink} className="font-sans">{m.label || KINDS[m.kind].title}</text>
                 )}
