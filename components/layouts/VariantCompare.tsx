@@ -9,7 +9,7 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api/client-fetch';
-import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
+import { ArrangementChoice } from '@/components/sharing/ArrangementChoice';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { LengthUnit } from '@/lib/layout/units';
 import type { ComparisonDto } from '@/db/sharing/compare';
@@ -17,7 +17,6 @@ import { RevisionPlanSvg } from '@/components/sharing/RevisionPlanSvg';
 import { ComparisonDetails } from '@/components/sharing/ComparisonDetails';
 import { StatusInline } from '@/components/checks/FindingParts';
 
-const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
 
 export interface FamilyMember {
   id: string;
@@ -43,14 +42,7 @@ export function VariantCompare({ layoutId, family, other, units }: { layoutId: s
             {others.map((f) => <option key={f.id} value={f.id}>{f.name}{f.archived ? ' (archived)' : ''}</option>)}
           </select>
         </div>
-        <div role="radiogroup" aria-label="Arrangement" className="flex overflow-hidden rounded border border-ink-faint">
-          {ARRANGEMENTS.map((a) => (
-            <button key={a} type="button" role="radio" aria-checked={arrangement === a} onClick={() => setArrangement(a)}
-              className={`px-3 py-1 text-sm ${arrangement === a ? 'bg-ink text-paper' : 'bg-paper text-ink hover:bg-paper-deep'}`}>
-              {ARRANGEMENT_WORD[a]}
-            </button>
-          ))}
-        </div>
+        <ArrangementChoice value={arrangement} onChange={setArrangement} />
       </div>
       {q.isPending ? <p className="panel p-6 text-sm text-ink-soft" role="status">Comparing the two layouts and checking both…</p>
         : q.isError ? <p className="panel border-brick p-6 text-sm text-brick" role="alert">Could not compare: {q.error.message}</p>

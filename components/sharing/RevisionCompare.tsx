@@ -11,7 +11,7 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api/client-fetch';
-import { ARRANGEMENTS } from '@/lib/layout/vocabulary';
+import { ArrangementChoice } from './ArrangementChoice';
 import type { Arrangement } from '@/lib/layout/schema';
 import { AS_LAST_SAVED, nextRevisionLetter } from '@/lib/layout/drawing-issue';
 import type { LengthUnit } from '@/lib/layout/units';
@@ -22,7 +22,6 @@ import { RevisionMarkIcon } from './RevisionMarkIcon';
 import { RevisionTable } from './RevisionTable';
 import { ComparisonDetails } from './ComparisonDetails';
 
-const ARRANGEMENT_WORD: Record<Arrangement, string> = { travel: 'Travel', lounge: 'Lounge', sleep: 'Sleep' };
 
 interface Props {
   layoutId: string;
@@ -60,14 +59,7 @@ export function RevisionCompare({ layoutId, revisions, from, to, units }: Props)
             </select>
           </div>
         ))}
-        <div role="radiogroup" aria-label="Arrangement" className="flex overflow-hidden rounded border border-ink-faint">
-          {ARRANGEMENTS.map((a) => (
-            <button key={a} type="button" role="radio" aria-checked={arrangement === a} onClick={() => setArrangement(a)}
-              className={`px-3 py-1 text-sm ${arrangement === a ? 'bg-ink text-paper' : 'bg-paper text-ink hover:bg-paper-deep'}`}>
-              {ARRANGEMENT_WORD[a]}
-            </button>
-          ))}
-        </div>
+        <ArrangementChoice value={arrangement} onChange={setArrangement} />
       </div>
 
       {q.isPending ? <p className="panel p-6 text-sm text-ink-soft" role="status">Comparing…</p>
