@@ -47,16 +47,17 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
         </p>
       )}
       {quote.note && <blockquote className="border-l-2 border-copper pl-3 text-sm whitespace-pre-wrap">{quote.note}</blockquote>}
-      <div className="overflow-x-auto">
+      {/* Focusable, so a keyboard can scroll the lines sideways on a narrow phone. */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines">
         <table className="w-full text-left text-sm">
           <thead className="border-b border-paper-edge text-xs text-ink-soft"><tr><th className="py-1.5">Item</th><th className="pl-3 text-right">Qty</th><th className="pl-3 text-right">Unit price</th><th className="pl-3 text-right">Net</th></tr></thead>
           <tbody>
             {p.lines.map((l) => (
               <tr key={l.key} className="border-t border-paper-edge">
                 <td className="py-1">{l.description}</td>
-                <td className="pl-3 text-right font-mono whitespace-nowrap">{quantityText(l.qty, l.unit)}</td>
-                <td className="pl-3 text-right font-mono whitespace-nowrap">{m(l.unitPriceMinor)}</td>
-                <td className="pl-3 text-right font-mono whitespace-nowrap">{m(l.netMinor)}</td>
+                <td className="pl-3 text-right font-mono">{quantityText(l.qty, l.unit)}</td>
+                <td className="pl-3 text-right font-mono">{m(l.unitPriceMinor)}</td>
+                <td className="pl-3 text-right font-mono">{m(l.netMinor)}</td>
               </tr>
             ))}
           </tbody>
