@@ -119,7 +119,7 @@ describe('duplicating a layout as a variant', () => {
       const res = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, ...bad });
       expect(res.status, JSON.stringify(bad)).toBeGreaterThanOrEqual(400);
       expect(res.status).toBeLessThan(500);
-      expect(res.body.error).toBeTruthy();
+      expect(res.body.error).toMatch(/^[A-Z][^\n]{9,}$/); // a sentence a person can act on, not a code
     }
     expect((await db.select({ id: layouts.id }).from(layouts)).length).toBe(before);
   });
@@ -190,7 +190,7 @@ describe('saved versions', () => {
     for (const [a, who, status] of attempts) {
       const res = await call(restore.POST, { method: 'POST', params: { id, version: a.version }, as: who, headers: { ...a.headers } });
       expect(res.status, `version ${a.version}`).toBe(status);
-      expect(res.body.error).toBeTruthy();
+      expect(res.body.error).toMatch(/^[A-Z][^\n]{9,}$/); // a sentence a person can act on, not a code
     }
     const after = await read(id);
     expect(after.version).toBe(v2);

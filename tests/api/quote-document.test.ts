@@ -72,7 +72,7 @@ describe('quote terms in settings', () => {
   ])('refuses %s with 400 and a message, changing nothing', async (_name, quote) => {
     const res = await patch(w.owner, { quote });
     expect(res.status).toBe(400);
-    expect(res.body.error).toBeTruthy();
+    expect(res.body.error).toMatch(/^[A-Z][^\n]{9,}$/); // a sentence a person can act on, not a code
     expect(await storedTerms()).toEqual({ d: DETAILS, t: TERMS, v: 14 });
   });
 });

@@ -70,6 +70,6 @@ describe('plan thumbnails', () => {
   ])('answers %s with %i', async (query, status) => {
     const res = await call(thumbnail.GET, { params: { id: w.clientLayoutId }, path: `/x${query}`, as: w.designer });
     expect(res.status).toBe(status);
-    expect(res.body.error).toBeTruthy();
+    expect(res.body.error).toMatch(/^[A-Z][^\n]{9,}$/); // a sentence a person can act on, not a code
   });
 });
