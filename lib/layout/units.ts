@@ -19,6 +19,12 @@ export function formatLength(mm: number, unit: LengthUnit = 'mm'): string {
   }
 }
 
+/** A plan size, length by width, the unit said once: "600 × 300 mm". */
+export function formatSize(lengthMm: number, widthMm: number, unit: LengthUnit = 'mm'): string {
+  const bare = formatLength(lengthMm, unit).slice(0, -(unit.length + 1));
+  return `${bare} × ${formatLength(widthMm, unit)}`;
+}
+
 /** A bare number in the given unit, for form fields. */
 export function toUnit(mm: number, unit: LengthUnit): number {
   if (unit === 'mm') return Math.round(mm);

@@ -89,7 +89,7 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
         <>
           <Group ref={group}>
             {modules.map((m) => (
-              <ModuleShape key={m.id} module={m} fonts={fonts} />
+              <ModuleShape key={m.id} module={m} fonts={fonts} units={units} />
             ))}
             {kind === 'move' && modules.map((m) => <Rect key={`sel-${m.id}`} x={m.x} y={m.y} width={m.length} height={m.width} stroke={theme.copper} strokeWidth={1.5 * px} listening={false} />)}
           </Group>

@@ -6,7 +6,7 @@
  */
 import { memo, useMemo } from 'react';
 import { Group } from './konva';
-import type { Arrangement, Module } from '@/lib/layout';
+import type { Arrangement, LengthUnit, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
 import { ModuleShape } from './ModuleShape';
@@ -22,9 +22,11 @@ interface Props {
   viewport: Viewport;
   fonts: CanvasFonts;
   fontsReady: number;
+  /** The person's units, for the size written in each module. */
+  units: LengthUnit;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, fonts, fontsReady }: Props) {
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, fonts, fontsReady, units }: Props) {
   const { shown, phantoms } = useMemo(() => {
     const hide = new Set(hidden);
     return {
@@ -35,7 +37,7 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (
-        <ModuleShape key={m.id} module={m} fonts={fonts} fontsReady={fontsReady} />
+        <ModuleShape key={m.id} module={m} fonts={fonts} units={units} fontsReady={fontsReady} />
       ))}
       {phantoms.map((m) => (
         <ModuleShape key={`phantom-${m.id}`} module={m} fonts={fonts} phantom fontsReady={fontsReady} />

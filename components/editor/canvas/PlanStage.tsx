@@ -74,7 +74,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
           {/* The sheet and the modules share one layer: Konva advises at most 3–5 layers per stage. */}
           <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">
             <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
-            <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} />
+            <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} />
           </Layer>
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
           {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}

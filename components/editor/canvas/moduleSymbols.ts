@@ -10,6 +10,9 @@ import type { Facing, Module } from '@/lib/layout/schema';
 import { theme, canvasFonts } from '../theme';
 import { fillHatch } from './hatching';
 import { moduleSymbol } from '@/lib/symbols/module-symbols';
+import { KIND_SHORT_NAMES } from '@/lib/symbols/kind-short-names';
+import { formatSize, type LengthUnit } from '@/lib/layout/units';
+import { LABEL_LOOK, placeModuleLabel, type LabelFace, type TextBox } from '../geometry/labels';
 
 export interface ModuleLook {
   kind: Module['kind'];
@@ -30,6 +33,8 @@ export interface DrawOptions {
   scale: number;
   phantom?: boolean;
   fonts?: { text: string; mono: string };
+  /** The person's units for the size written in the module; without it no size is written. */
+  units?: LengthUnit;
 }
 
 type Ctx = CanvasRenderingContext2D;
@@ -82,8 +87,7 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   if (!o.phantom && screenMin >= 10) {
     drawSymbol(ctx, m, px);
   }
-  const label = m.label || spec.title;
-  if (screenMin >= 18 && L * o.scale >= 36) drawLabel(ctx, outside ? `${label} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` : label, L, W, o, px);
+  if (!o.phantom) drawLabel(ctx, m, outside, o, px);
   ctx.restore();
 }
 
@@ -111,19 +115,47 @@ function drawSymbol(ctx: Ctx, m: ModuleLook, px: number) {
   ctx.setLineDash([]);
 }
 
-function drawLabel(ctx: Ctx, text: string, L: number, W: number, o: DrawOptions, px: number) {
-  const size = 11 * px;
-  ctx.font = `500 ${size}px ${o.fonts?.text ?? canvasFonts.text}`;
+/**
+ * The module's name and size, placed by `placeModuleLabel` in screen pixels: the longest form of
+ * the name that fits, and the size below it, along it or outside on a leader, never over it.
+ */
+function drawLabel(ctx: Ctx, m: ModuleLook, outside: boolean, o: DrawOptions, px: number) {
+  const full = m.label || KINDS[m.kind].title;
+  const short = KIND_SHORT_NAMES[m.kind];
+  const fonts = o.fonts ?? canvasFonts;
+  const font = (face: LabelFace, size: number) => (face === 'text' ? `500 ${size}px ${fonts.text}` : `${size}px ${fonts.mono}`);
+  const placed = placeModuleLabel(
+    {
+      width: m.length * o.scale,
+      height: m.width * o.scale,
+      names: { full: outside ? `${full} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` : full, short: short.short, abbreviation: short.abbreviation },
+      dimension: o.units ? formatSize(m.length, m.width, o.units) : '',
+    },
+    (text, face, size) => { ctx.font = font(face, size); return ctx.measureText(text).width; },
+  );
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
-  const maxW = L - 8 * px;
-  let t = text;
-  while (t.length > 1 && ctx.measureText(t).width > maxW) t = t.slice(0, -2) + '…';
-  const w = ctx.measureText(t).width;
-  const y = W / 2 + (W * o.scale > 44 ? Math.min(W * 0.3, 14 * px) : 0);
-  ctx.fillStyle = 'rgba(245,242,234,0.85)';
-  ctx.fillRect(L / 2 - w / 2 - 2 * px, y - size * 0.65, w + 4 * px, size * 1.3);
-  ctx.fillStyle = theme.ink;
-  ctx.fillText(t, L / 2, y);
+  const put = (b: TextBox, face: LabelFace, size: number, ink: string) => {
+    ctx.save();
+    ctx.scale(px, px); // draw in screen px from the module's corner
+    ctx.fillStyle = 'rgba(245,242,234,0.85)';
+    ctx.fillRect(b.cx - b.width / 2 - 2, b.cy - b.height / 2, b.width + 4, b.height);
+    ctx.translate(b.cx, b.cy);
+    if (b.rotation) ctx.rotate(-Math.PI / 2);
+    ctx.font = font(face, size);
+    ctx.fillStyle = ink;
+    ctx.fillText(b.text, 0, 0);
+    ctx.restore();
+  };
+  if (placed.leader) {
+    const l = placed.leader;
+    ctx.beginPath();
+    ctx.moveTo(l.x0 * px, l.y0 * px);
+    ctx.lineTo(l.x1 * px, l.y1 * px);
+    ctx.strokeStyle = theme.inkSoft;
+    ctx.lineWidth = 0.8 * px;
+    ctx.stroke();
+  }
+  if (placed.name) put(placed.name, 'text', LABEL_LOOK.nameSize, theme.ink);
+  if (placed.dimension) put(placed.dimension, 'mono', LABEL_LOOK.dimensionSize, theme.inkSoft);
 }
-

@@ -1,0 +1,101 @@
+/**
+ * Where a module's plan label goes: which form of its name fits the module as drawn (the full
+ * name, then its short name, then its abbreviation, then none — never a cut word with an ellipsis),
+ * and where its dimension text goes so that it never covers the name: below the name, turned to
+ * run along a tall narrow module (still below the name), or outside the module on a leader. Works in screen pixels
+ * relative to the module's drawn rectangle; text is measured by the caller's `measure`. Pure
+ * math; never draws, never reads the store.
+ */
+
+export type LabelFace = 'text' | 'mono';
+/** Width in px of `text` set in `face` at `sizePx`. */
+export type MeasureText = (text: string, face: LabelFace, sizePx: number) => number;
+
+/** Type sizes and spacing of a plan label, in screen px. */
+export const LABEL_LOOK = { nameSize: 11, dimensionSize: 10, inset: 4, gap: 2, leader: 10, leading: 1.3, smallestWithSize: 12 } as const;
+
+export interface TextBox {
+  text: string;
+  /** Centre of the text, px from the module rectangle's min corner. */
+  cx: number;
+  cy: number;
+  /** The box the text covers (after rotation), px. */
+  width: number;
+  height: number;
+  /** 0, or -90 for text read from below along a tall module. */
+  rotation: 0 | -90;
+}
+
+export type NameForm = 'full' | 'short' | 'abbreviation' | 'none';
+export type DimensionPlace = 'below' | 'along' | 'outside' | 'none';
+
+export interface LabelPlacement {
+  nameForm: NameForm;
+  name: TextBox | null;
+  dimensionPlace: DimensionPlace;
+  dimension: TextBox | null;
+  /** For a dimension outside the module: the leader from the module's edge to the text, px. */
+  leader: { x0: number; y0: number; x1: number; y1: number } | null;
+}
+
+export interface LabelRequest {
+  /** The module's drawn size, px. */
+  width: number;
+  height: number;
+  names: { full: string; short: string; abbreviation: string };
+  /** The size as it reads on the plan ("600 × 300 mm"); empty for none. */
+  dimension: string;
+}
+
+interface Sized { text: string; w: number; h: number }
+
+/** Whether two boxes share any area (touching edges do not count). */
+export function boxesOverlap(a: TextBox, b: TextBox): boolean {
+  return Math.abs(a.cx - b.cx) * 2 < a.width + b.width && Math.abs(a.cy - b.cy) * 2 < a.height + b.height;
+}
+
+export function placeModuleLabel(req: LabelRequest, measure: MeasureText): LabelPlacement {
+  const { nameSize, dimensionSize, inset, gap, leader, leading } = LABEL_LOOK;
+  const W = req.width, H = req.height;
+  const innerW = W - 2 * inset, innerH = H - 2 * inset;
+  const forms: [NameForm, string][] = [['full', req.names.full], ['short', req.names.short], ['abbreviation', req.names.abbreviation]];
+  const sized = (text: string, face: LabelFace, size: number): Sized => ({ text, w: measure(text, face, size), h: size * leading });
+
+  // The first form of the name that fits inside on its own.
+  let nameForm: NameForm = 'none';
+  let name: Sized | null = null;
+  for (const [form, text] of forms) {
+    if (!text) continue;
+    const s = sized(text, 'text', nameSize);
+    if (s.w <= innerW && s.h <= innerH) { nameForm = form; name = s; break; }
+  }
+  const dim = req.dimension ? sized(req.dimension, 'mono', dimensionSize) : null;
+  const box = (s: Sized, cx: number, cy: number, rotation: 0 | -90 = 0): TextBox =>
+    rotation === 0 ? { text: s.text, cx, cy, width: s.w, height: s.h, rotation } : { text: s.text, cx, cy, width: s.h, height: s.w, rotation };
+  const result = (nameBox: TextBox | null, place: DimensionPlace, dimBox: TextBox | null, lead: LabelPlacement['leader'] = null): LabelPlacement =>
+    ({ nameForm, name: nameBox, dimensionPlace: place, dimension: dimBox, leader: lead });
+
+  if (!dim) return result(name ? box(name, W / 2, H / 2) : null, 'none', null);
+
+  // Below the name (or alone in the middle when no name fits).
+  const stackH = (name ? name.h + gap : 0) + dim.h;
+  if (dim.w <= innerW && (!name || name.w <= innerW) && stackH <= innerH) {
+    const top = H / 2 - stackH / 2;
+    const nameBox = name ? box(name, W / 2, top + name.h / 2) : null;
+    return result(nameBox, 'below', box(dim, W / 2, top + stackH - dim.h / 2));
+  }
+  // Turned to run along a tall narrow module, under the name.
+  if (H > W && dim.h <= innerW) {
+    const stack = (name ? name.h + gap : 0) + dim.w;
+    if (stack <= innerH) {
+      const top = H / 2 - stack / 2;
+      const nameBox = name ? box(name, W / 2, top + name.h / 2) : null;
+      return result(nameBox, 'along', box(dim, W / 2, top + stack - dim.w / 2, -90));
+    }
+  }
+  // Outside, past the module's right-hand edge, on a short leader — unless the module is a sliver
+  // on screen, where a string of sizes hanging off every one would only bury the plan.
+  if (Math.min(W, H) < LABEL_LOOK.smallestWithSize) return result(name ? box(name, W / 2, H / 2) : null, 'none', null);
+  const x0 = W, x1 = W + leader;
+  return result(name ? box(name, W / 2, H / 2) : null, 'outside', box(dim, x1 + gap + dim.w / 2, H / 2), { x0, y0: H / 2, x1, y1: H / 2 });
+}

@@ -1,0 +1,90 @@
+// Module labels on the plan: the longest form of the name that fits (full, short, abbreviation,
+// none — never a word cut with an ellipsis), and the size written where it never covers the name.
+// Text is measured with the product's own face metrics (lib/sheet/font-metrics, generated from
+// fonts/*.woff), the faces the canvas draws with.
+import { describe, expect, it } from 'vitest';
+import { boxesOverlap, LABEL_LOOK, placeModuleLabel, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
+import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbols/kind-short-names';
+import { MODULE_KINDS } from '@/lib/layout/kinds';
+import { textWidth } from '@/lib/sheet/typography';
+
+// textWidth answers mm for a size in pt; the same em widths at a size in px give px: × 72 / 25.4.
+const measure: MeasureText = (text, face, size) => (textWidth(text, size, face === 'mono' ? 'mono' : 'sans') * 72) / 25.4;
+
+// The fitted zoom worked by hand: a 3400 × 1780 mm bay in a 900 × 620 px plan box with the 72 px
+// fit margin on each side: min((900 − 144) / 3400, (620 − 144) / 1780) = min(0.2224, 0.2674) px/mm.
+const FITTED = 756 / 3400;
+
+const counter = { full: 'Kitchen counter', short: KIND_SHORT_NAMES['kitchen-counter'].short, abbreviation: KIND_SHORT_NAMES['kitchen-counter'].abbreviation };
+const bed = { full: 'Bed platform', short: KIND_SHORT_NAMES['bed-platform'].short, abbreviation: KIND_SHORT_NAMES['bed-platform'].abbreviation };
+
+function inside(b: TextBox, w: number, h: number) {
+  return b.cx - b.width / 2 >= 0 && b.cx + b.width / 2 <= w && b.cy - b.height / 2 >= 0 && b.cy + b.height / 2 <= h;
+}
+
+describe('module labels on the plan', () => {
+  it('a 300 mm worktop at the fitted zoom reads its short name, its size clear of it', () => {
+    // 300 × 600 mm → 66.7 × 133.4 px: "Kitchen counter" at 11 px is wider than 66.7 − 2 × 4 px.
+    const w = 300 * FITTED, h = 600 * FITTED;
+    const p = placeModuleLabel({ width: w, height: h, names: counter, dimension: '300 × 600 mm' }, measure);
+    expect(p.nameForm).toBe('short');
+    expect(p.name?.text).toBe('Counter');
+    expect(p.name && inside(p.name, w, h)).toBe(true);
+    expect(p.dimension).not.toBeNull();
+    expect(boxesOverlap(p.name!, p.dimension!)).toBe(false);
+    expect(p.name!.text).not.toContain('…');
+  });
+
+  it('a 2000 mm bed at the fitted zoom reads its full name with its size below', () => {
+    // 2000 × 1400 mm → 444.7 × 311.3 px: room for everything.
+    const w = 2000 * FITTED, h = 1400 * FITTED;
+    const p = placeModuleLabel({ width: w, height: h, names: bed, dimension: '2000 × 1400 mm' }, measure);
+    expect(p.nameForm).toBe('full');
+    expect(p.name?.text).toBe('Bed platform');
+    expect(p.dimensionPlace).toBe('below');
+    expect(p.dimension!.cy).toBeGreaterThan(p.name!.cy);
+  });
+
+  it('turns the size along a tall narrow module, and puts it outside on a leader when even that fails', () => {
+    // 40 px wide, 200 px tall: the 10 px size (13 px line) fits turned, not across.
+    const tall = placeModuleLabel({ width: 40, height: 200, names: counter, dimension: '300 × 1500 mm' }, measure);
+    expect(tall.dimensionPlace).toBe('along');
+    expect(tall.dimension!.rotation).toBe(-90);
+    // 30 × 30 px: nothing but perhaps the abbreviation inside; the size hangs off the right edge.
+    const small = placeModuleLabel({ width: 30, height: 30, names: counter, dimension: '300 × 300 mm' }, measure);
+    expect(small.dimensionPlace).toBe('outside');
+    expect(small.dimension!.cx - small.dimension!.width / 2).toBeGreaterThan(30);
+    expect(small.leader).toEqual({ x0: 30, y0: 15, x1: 30 + LABEL_LOOK.leader, y1: 15 });
+  });
+
+  it('never lets the name and the size overlap, nor the name leave the module, across a grid of sizes', () => {
+    let checked = 0;
+    for (let w = 4; w <= 420; w += 7) {
+      for (let h = 4; h <= 420; h += 11) {
+        for (const names of [counter, bed, { full: 'Fresh water tank', short: 'Fresh', abbreviation: 'FW' }]) {
+          const p = placeModuleLabel({ width: w, height: h, names, dimension: `${Math.round(w / FITTED)} × ${Math.round(h / FITTED)} mm` }, measure);
+          if (p.name) {
+            expect(inside(p.name, w, h), `name inside at ${w}×${h}`).toBe(true);
+            expect([names.full, names.short, names.abbreviation]).toContain(p.name.text);
+          }
+          if (p.name && p.dimension) expect(boxesOverlap(p.name, p.dimension), `overlap at ${w}×${h}`).toBe(false);
+          if (p.dimension && p.dimensionPlace !== 'outside') expect(inside(p.dimension, w, h)).toBe(true);
+          checked++;
+        }
+      }
+    }
+    // Widths 4, 11, …, 417 (60 of them) × heights 4, 15, …, 411 (38) × 3 names.
+    expect(checked).toBe(60 * 38 * 3);
+  });
+
+  it('gives every kind a short name and an abbreviation within their lengths', () => {
+    for (const kind of MODULE_KINDS) {
+      const s = KIND_SHORT_NAMES[kind];
+      expect(s.short.length, kind).toBeGreaterThan(0);
+      expect(s.short.length, kind).toBeLessThanOrEqual(SHORT_NAME_MAX);
+      expect(s.abbreviation.length, kind).toBeGreaterThan(0);
+      expect(s.abbreviation.length, kind).toBeLessThanOrEqual(ABBREVIATION_MAX);
+    }
+    expect(Object.keys(KIND_SHORT_NAMES).sort()).toEqual([...MODULE_KINDS].sort());
+  });
+});
