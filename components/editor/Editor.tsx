@@ -34,6 +34,8 @@ import { countByStatus, failingModuleIds } from './panels/findingGroups';
 
 // Behind tabs: loaded when first opened, so the editor's first load stays small.
 const BayPanel = lazy(() => import('./panels/BayPanel').then((m) => ({ default: m.BayPanel })));
+/** The docked bottom panel grows while the side section is on show, so the drawing has room to be read. */
+const SECTION_PANEL_HEIGHT = 'h-[42vh] min-h-64';
 const SectionView = lazy(() => import('./section/SectionView').then((m) => ({ default: m.SectionView })));
 // Opened by a right-click, a long press or the menu key: loaded then.
 const ContextMenu = lazy(() => import('./panels/ContextMenu').then((m) => ({ default: m.ContextMenu })));
@@ -128,7 +130,7 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
           </div>
           <Drawer id="checks" title="Checks and section" side="bottom" floating={floating} dockedClassName="contents">
             <Tabs
-              className={`flex min-h-0 shrink-0 flex-col ${floating ? 'h-full' : 'h-64 border-t border-paper-edge'}`}
+              className={`flex min-h-0 shrink-0 flex-col ${floating ? 'h-full' : `${bottom === 'section' ? SECTION_PANEL_HEIGHT : 'h-64'} border-t border-paper-edge`}`}
               panelClassName="min-h-0 flex-1 overflow-auto"
               label="Checks and section"
               active={bottom}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { matchKinds } from '@/components/editor/panels/partsSearch';
-import { formValuesOf, moduleFormSchema, patchFrom } from '@/components/editor/panels/moduleForm';
+import { formValuesOf, moduleFormSchema, patchFrom, readModuleForm } from '@/components/editor/panels/moduleForm';
 import { countByStatus, failingModuleIds, groupFindings } from '@/components/editor/panels/findingGroups';
 import { KIND_LIST } from '@/lib/layout';
 import type { Finding } from '@/lib/checks/types';
@@ -56,6 +56,39 @@ describe('Details form model', () => {
     const v = formValuesOf(fridge, 'mm');
     const out = moduleFormSchema('mm').parse({ ...v, props: { ...v.props, litres: '40' }, massKg: '' });
     expect(patchFrom(fridge, out)).toEqual({ props: { litres: 40, watts: 45, dutyCycle: 0.33 }, massKg: undefined });
+  });
+});
+
+describe('Details form read as a field is left', () => {
+  const m = mod('a', { x: 1000, y: 36, length: 1100, width: 550, massKg: 22 });
+
+  it('a length that does not read goes back to the last valid value, says why, and lets the good fields apply', () => {
+    const v = formValuesOf(m, 'mm');
+    const r = readModuleForm(m, { ...v, length: '11000000', x: '1010' }, 'mm');
+    // x 1000 → 1010 applies; the length is past the schema's limit and is put back to 1100.
+    expect(r.patch).toEqual({ x: 1010 });
+    expect(r.reverted).toHaveLength(1);
+    expect(r.reverted[0].field).toBe('length');
+    expect(r.reverted[0].restored).toBe('1100');
+    expect(r.reverted[0].message).toMatch(/^Length must be between \d+ and \d+ mm$/);
+    expect(r.values.length).toBe('1100');
+    expect(r.values.x).toBe('1010');
+  });
+
+  it('text that is not a length, in cm, is put back in cm', () => {
+    const v = formValuesOf(m, 'cm');
+    const r = readModuleForm(m, { ...v, width: '55abc' }, 'cm');
+    expect(r.patch).toEqual({});
+    // 550 mm shown in cm is 55.
+    expect(r.reverted).toEqual([{ field: 'width', message: 'Width: type a length, e.g. 1200, 120 cm or 47 in', restored: '55' }]);
+  });
+
+  it('several bad fields are each put back; a clean form gives no reverts', () => {
+    const v = formValuesOf(m, 'mm');
+    const r = readModuleForm(m, { ...v, height: '0', massKg: '-3', arrangements: [] }, 'mm');
+    expect(r.reverted.map((f) => f.field).sort()).toEqual(['arrangements', 'height', 'massKg']);
+    expect(r.patch).toEqual({});
+    expect(readModuleForm(m, v, 'mm')).toEqual({ patch: {}, reverted: [], values: v });
   });
 });
 

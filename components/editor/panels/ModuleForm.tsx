@@ -1,12 +1,15 @@
 'use client';
 /**
  * The Details panel's form for one module, with react-hook-form and zod: lengths typed in any
- * unit, a change applied when the field is left or Enter is pressed, as one undo entry. Loaded
+ * unit, a change applied when the field is left or Enter is pressed, as one undo entry. A value
+ * that does not read is named beside its field as it is typed, never holds the focus (WCAG 2.1
+ * SC 2.1.2): Escape puts the last valid value back, and leaving the field does too, with a note
+ * saying the edit was not applied and why. Loaded
  * on first selection (it carries the form libraries), so the editor's first load stays small.
  * Never writes the document except through store actions.
  */
-import { useEffect, useMemo } from 'react';
-import { useForm, type FieldErrors } from 'react-hook-form';
+import { useEffect, useId, useMemo, type KeyboardEvent } from 'react';
+import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
@@ -15,43 +18,47 @@ import type { Module } from '@/lib/layout/schema';
 import { KIND_LIST, kindFacts, kindSpec, shownFields } from '@/lib/layout/kinds';
 import { FACING_WORDS, MOUNT_WORDS, SURFACE_WORDS } from '@/lib/layout/field-words';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
-import { formValuesOf, moduleFormSchema, patchFrom, type ModuleFormValues, type ModuleFormOutput } from './moduleForm';
+import { formValuesOf, moduleFormSchema, readModuleForm, type ModuleFormValues, type ModuleFormOutput, type ModuleFormField } from './moduleForm';
 import { CommandButton } from './CommandButton';
 
-
-function firstError(errors: FieldErrors<ModuleFormValues>): string | undefined {
-  for (const v of Object.values(errors)) {
-    if (v && typeof v === 'object' && 'message' in v && typeof v.message === 'string') return v.message;
-  }
-  return undefined;
-}
 
 export default function ModuleForm({ module }: { module: Module }) {
   const api = useEditorApi();
   const { units, readOnly } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly })));
   const schema = useMemo(() => moduleFormSchema(units), [units]);
-  const form = useForm<ModuleFormValues, unknown, ModuleFormOutput>({ resolver: zodResolver(schema), defaultValues: formValuesOf(module, units), mode: 'onSubmit' });
-  const { register, handleSubmit, reset, formState } = form;
+  const formId = useId();
+  // Checked as typed (the message shows beside the field); never moves the focus to a bad field.
+  const form = useForm<ModuleFormValues, unknown, ModuleFormOutput>({ resolver: zodResolver(schema), defaultValues: formValuesOf(module, units), mode: 'onChange', shouldFocusError: false });
+  const { register, reset, formState, getValues, setValue, clearErrors } = form;
 
   // The store is the truth: when the module changes (drag, undo), the fields follow.
   useEffect(() => {
     reset(formValuesOf(module, units));
   }, [module, units, reset]);
 
-  const apply = handleSubmit(
-    (v) => {
-      const patch = patchFrom(module, v);
-      if (Object.keys(patch).length === 0) return;
-      const label = `Edit ${Object.keys(patch).join(', ')}`;
-      const r = api.getState().updateModule(module.id, patch, label);
-      if (!r.ok) toast.error(r.error);
-    },
-    (errors) => {
-      const msg = firstError(errors);
-      if (msg) toast.error(msg);
-    },
-  );
-  const onBlurApply = { onBlur: () => void apply() };
+  // Leaving a field (or Enter, or a choice): what reads applies as one undo entry; what does not
+  // goes back to the last valid value with a note saying why.
+  const apply = () => {
+    const r = readModuleForm(module, getValues(), units);
+    if (r.reverted.length > 0) {
+      for (const f of r.reverted) setValue(f.field, f.restored as never, { shouldValidate: false, shouldDirty: false });
+      clearErrors();
+      toast.warning(`Not applied: ${r.reverted.map((f) => f.message).join('; ')}. The last valid value is kept.`);
+    }
+    if (Object.keys(r.patch).length === 0) return;
+    const res = api.getState().updateModule(module.id, r.patch, `Edit ${Object.keys(r.patch).join(', ')}`);
+    if (!res.ok) {
+      toast.error(`Not applied: ${res.error}`);
+      reset(formValuesOf(module, units));
+    }
+  };
+  const onBlurApply = { onBlur: () => apply() };
+  /** Escape in a field puts its last valid value back and keeps the focus there. */
+  const revertOnEscape = (name: ModuleFormField) => (e: KeyboardEvent) => {
+    if (e.key !== 'Escape') return;
+    setValue(name, formValuesOf(module, units)[name] as never, { shouldDirty: false });
+    clearErrors(name);
+  };
   const spec = kindSpec(module.kind);
   const valueFields = shownFields(module);
   const drawnLitres = kindFacts(module).water?.drawnLitres;
@@ -64,10 +71,10 @@ export default function ModuleForm({ module }: { module: Module }) {
     <label className="block">
       <span className="text-xs text-ink-soft">{label}{hint ? <span className="text-ink-soft"> · {hint}</span> : null}</span>
       <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
-        <input {...register(name, onBlurApply)} inputMode="decimal" aria-invalid={!!err(name)} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+        <input {...register(name, onBlurApply)} onKeyDown={revertOnEscape(name)} inputMode="decimal" aria-invalid={!!err(name)} aria-describedby={err(name) ? `${formId}-${name}-error` : undefined} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
         <span className="pr-2 font-mono text-xs text-ink-soft">{units}</span>
       </span>
-      {err(name) && <span className="mt-0.5 block text-xs text-brick" role="alert">{err(name)}</span>}
+      {err(name) && <span id={`${formId}-${name}-error`} className="mt-0.5 block text-xs text-brick" data-testid={`details-${name}-error`}>{err(name)}</span>}
     </label>
   );
 
@@ -75,7 +82,7 @@ export default function ModuleForm({ module }: { module: Module }) {
     <form
       onSubmit={(e) => {
         e.preventDefault();
-        void apply();
+        apply();
       }}
       className="space-y-4 p-4 text-sm"
       aria-label={`Details of ${module.label || spec.title}`}
@@ -84,11 +91,12 @@ export default function ModuleForm({ module }: { module: Module }) {
         <div className="grid grid-cols-2 gap-3">
           <label className="col-span-2 block">
             <span className="text-xs text-ink-soft">Label</span>
-            <input {...register('label', onBlurApply)} placeholder={spec.title} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 outline-none focus:ring-2 focus:ring-copper" />
+            <input {...register('label', onBlurApply)} onKeyDown={revertOnEscape('label')} aria-invalid={!!err('label')} aria-describedby={err('label') ? `${formId}-label-error` : undefined} placeholder={spec.title} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 outline-none focus:ring-2 focus:ring-copper" />
+            {err('label') && <span id={`${formId}-label-error`} className="mt-0.5 block text-xs text-brick">{err('label')}</span>}
           </label>
           <label className="col-span-2 block">
             <span className="text-xs text-ink-soft">Kind</span>
-            <select {...register('kind', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+            <select {...register('kind', { onChange: () => apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
               {KIND_LIST.map((k) => <option key={k.kind} value={k.kind}>{k.title}</option>)}
             </select>
           </label>
@@ -104,13 +112,13 @@ export default function ModuleForm({ module }: { module: Module }) {
         <div className="grid grid-cols-2 gap-3">
           <label className="block">
             <span className="text-xs text-ink-soft">Facing</span>
-            <select {...register('facing', { onChange: () => void apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+            <select {...register('facing', { onChange: () => apply() })} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
               {FACINGS.map((f) => <option key={f} value={f}>{FACING_WORDS[f]}</option>)}
             </select>
           </label>
           <label className="block">
             <span className="text-xs text-ink-soft">Mounted</span>
-            <select {...register('mount', { onChange: () => void apply() })} data-testid="details-mount" className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
+            <select {...register('mount', { onChange: () => apply() })} data-testid="details-mount" className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1">
               {MOUNTS.map((m) => <option key={m} value={m}>{MOUNT_WORDS[m]}</option>)}
             </select>
           </label>
@@ -121,11 +129,11 @@ export default function ModuleForm({ module }: { module: Module }) {
             {ARRANGEMENTS.map((a) => (
               <div key={a} className="contents">
                 <label className="flex items-center gap-1.5">
-                  <input type="checkbox" value={a} {...register('arrangements', { onChange: () => void apply() })} className="accent-copper" data-testid={`details-in-${a}`} />
+                  <input type="checkbox" value={a} {...register('arrangements', { onChange: () => apply() })} className="accent-copper" data-testid={`details-in-${a}`} />
                   {a}
                 </label>
                 <select
-                  {...register(`surfaces.${a}`, { onChange: () => void apply() })}
+                  {...register(`surfaces.${a}`, { onChange: () => apply() })}
                   aria-label={`Top used as in ${a}`}
                   data-testid={`details-top-${a}`}
                   className="w-full rounded border border-paper-edge bg-paper px-2 py-0.5 text-xs"
@@ -141,10 +149,10 @@ export default function ModuleForm({ module }: { module: Module }) {
         <label className="block">
           <span className="text-xs text-ink-soft">Mass</span>
           <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
-            <input {...register('massKg', onBlurApply)} inputMode="decimal" className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+            <input {...register('massKg', onBlurApply)} onKeyDown={revertOnEscape('massKg')} inputMode="decimal" aria-invalid={!!err('massKg')} aria-describedby={err('massKg') ? `${formId}-massKg-error` : undefined} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
             <span className="pr-2 font-mono text-xs text-ink-soft">kg</span>
           </span>
-          {err('massKg') && <span className="mt-0.5 block text-xs text-brick" role="alert">{err('massKg')}</span>}
+          {err('massKg') && <span id={`${formId}-massKg-error`} className="mt-0.5 block text-xs text-brick">{err('massKg')}</span>}
         </label>
         {valueFields.length > 0 && (
           <fieldset className="space-y-2">
@@ -152,7 +160,7 @@ export default function ModuleForm({ module }: { module: Module }) {
             {valueFields.map(({ key: k, field }) => {
               return field.input === 'boolean' ? (
                 <label key={k} className="flex items-center gap-2">
-                  <input type="checkbox" {...register(`props.${k}`, { onChange: () => void apply() })} className="accent-copper" />
+                  <input type="checkbox" {...register(`props.${k}`, { onChange: () => apply() })} className="accent-copper" />
                   {field.label}
                 </label>
               ) : (

@@ -142,3 +142,39 @@ export function patchFrom(m: Module, v: ModuleFormOutput): Partial<Omit<Module, 
   }
   return patch;
 }
+
+/** A top-level field of the form, as the schema's issues name it. */
+export type ModuleFormField = keyof ModuleFormValues;
+
+export interface FormReading {
+  /** What the form's readable fields change (empty when nothing does). */
+  patch: Partial<Omit<Module, 'id'>>;
+  /** Fields whose text could not be read: put back to the module's last valid value, with why. */
+  reverted: { field: ModuleFormField; message: string; restored: ModuleFormValues[ModuleFormField] }[];
+  /** The form's values after the reverts: what the fields show from here on. */
+  values: ModuleFormValues;
+}
+
+/**
+ * Reads the form as a person leaves a field: the fields that read apply, any field that does not
+ * goes back to the module's last valid value and says why — never holding the focus, never
+ * dropping the good fields with the bad.
+ */
+export function readModuleForm(m: Module, values: ModuleFormValues, unit: LengthUnit): FormReading {
+  const schema = moduleFormSchema(unit);
+  const lastValid = formValuesOf(m, unit);
+  let current: ModuleFormValues = { ...values };
+  const reverted: FormReading['reverted'] = [];
+  // Two passes at most: the first puts back every field an issue names; the module's own values always read.
+  for (let pass = 0; pass < 2; pass++) {
+    const parsed = schema.safeParse(current);
+    if (parsed.success) return { patch: patchFrom(m, parsed.data), reverted, values: current };
+    for (const issue of parsed.error.issues) {
+      const field = issue.path[0] as ModuleFormField | undefined;
+      if (field === undefined || !(field in lastValid) || reverted.some((r) => r.field === field)) continue;
+      reverted.push({ field, message: issue.message, restored: lastValid[field] });
+      current = { ...current, [field]: lastValid[field] };
+    }
+  }
+  return { patch: {}, reverted, values: lastValid };
+}

@@ -15,6 +15,12 @@ import { drawOrder } from '../geometry/hitTest';
 import { theme } from '../theme';
 
 const PAD = { left: 40, right: 16, top: 12, bottom: 18 };
+/**
+ * Screen px per mm, at most: a short bay in a tall panel is drawn no larger than this (1 m to
+ * 400 px), at least: never below this however small the panel (the panel then scrolls).
+ */
+const MAX_SCALE = 0.4;
+const MIN_SCALE = 0.03;
 
 export const SectionView = memo(function SectionView() {
   const { doc, arrangement, units, selection } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement, units: s.units, selection: s.selection })));
@@ -35,8 +41,13 @@ export const SectionView = memo(function SectionView() {
   const clear = clearHeight(doc);
   // Modules outside the body (under the floor, on the roof, behind the rear) widen the figure.
   const reach = sectionReach(doc, fT);
-  const k = Math.max(0.01, Math.min((size.w - PAD.left - PAD.right) / (L + reach.behind), (size.h - PAD.top - PAD.bottom) / (H + reach.above + reach.below)));
-  const X = (x: number) => PAD.left + x * k;
+  // One scale for both directions (true to scale), the largest that fits the panel as measured.
+  const spanX = L + reach.behind, spanZ = H + reach.above + reach.below;
+  const k = Math.min(MAX_SCALE, Math.max(MIN_SCALE, Math.min((size.w - PAD.left - PAD.right) / spanX, (size.h - PAD.top - PAD.bottom) / spanZ)));
+  // Centred across the room left over when the height sets the scale.
+  const left = PAD.left + Math.max(0, (size.w - PAD.left - PAD.right - spanX * k) / 2);
+  const X = (x: number) => left + x * k;
+  const svgW = Math.max(size.w, left + spanX * k + PAD.right), svgH = Math.max(size.h, PAD.top + spanZ * k + PAD.bottom);
   const Y = (z: number) => PAD.top + (H + reach.above - z) * k;
   const modules = drawOrder(modulesIn(doc, arrangement));
   const fx = Math.min(L - 150, Math.max(150, figureX ?? Math.round(L * 0.3)));
@@ -59,8 +70,8 @@ export const SectionView = memo(function SectionView() {
         </label>
         <span className="truncate font-mono">headroom {headroom >= 0 ? formatLength(headroom, units) : `−${formatLength(-headroom, units)}`}</span>
       </div>
-      <div ref={box} className="relative min-h-0 flex-1">
-        <svg width={size.w} height={size.h} role="img" aria-label={`Side section: clear height ${formatLength(clear, units)}, ${modules.length} modules in ${arrangement}`} className="absolute inset-0">
+      <div ref={box} className="relative min-h-0 flex-1 overflow-auto" data-testid="section-box">
+        <svg width={svgW} height={svgH} role="img" aria-label={`Side section: clear height ${formatLength(clear, units)}, ${modules.length} modules in ${arrangement}`} className="absolute inset-0">
           <defs>
             <pattern id="sec-band" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)"><line x1="0" y1="0" x2="0" y2="6" stroke={theme.inkFaint} strokeWidth="0.7" /></pattern>
             <pattern id="sec-cross" width="6" height="6" patternUnits="userSpaceOnUse"><path d="M0 0L6 6M6 0L0 6" stroke={theme.ink} strokeWidth="0.5" opacity="0.6" /></pattern>
@@ -89,7 +100,7 @@ export const SectionView = memo(function SectionView() {
             );
           })}
           {/* Bare metal: floor, roof, bulkhead and rear */}
-          <path d={`M${X(0)} ${Y(0)}H${X(L)}M${X(0)} ${Y(H)}H${X(L)}`} stroke={theme.ink} strokeWidth={2.5} />
+          <path data-testid="section-bay" d={`M${X(0)} ${Y(0)}H${X(L)}M${X(0)} ${Y(H)}H${X(L)}`} stroke={theme.ink} strokeWidth={2.5} />
           <path d={`M${X(0)} ${Y(0)}V${Y(H)}`} stroke={theme.ink} strokeWidth={doc.bay.bulkhead ? 2.5 : 1} strokeDasharray={doc.bay.bulkhead ? undefined : '6 4'} />
           <path d={`M${X(L)} ${Y(0)}V${Y(H)}`} stroke={theme.ink} strokeWidth={1} strokeDasharray="3 3" />
           {/* Clear height */}
@@ -99,9 +110,9 @@ export const SectionView = memo(function SectionView() {
           <Figure x={X(fx)} feet={Y(fT)} stature={who * k} over={headroom < 0} />
           <text x={X(fx) + 10} y={Y(fT + who) - 4} fontSize={10} fill={headroom < 0 ? theme.brick : theme.inkSoft} className="font-mono">{formatLength(who, units)}{headroom < 0 ? ' (head above lining)' : ''}</text>
           {/* Height scale */}
-          <path d={`M${PAD.left - 14} ${Y(0)}V${Y(H)}M${PAD.left - 18} ${Y(0) + 4}l8 -8M${PAD.left - 18} ${Y(H) + 4}l8 -8`} stroke={theme.ink} strokeWidth={0.8} />
-          <text transform={`translate(${PAD.left - 20} ${Y(H / 2)}) rotate(-90)`} textAnchor="middle" fontSize={10} fill={theme.ink} className="font-mono">{formatLength(H, units)}</text>
-          <text x={X(0)} y={size.h - 8} fontSize={10} fill={theme.inkSoft} className="font-sans">◀ cab</text>
+          <path d={`M${left - 14} ${Y(0)}V${Y(H)}M${left - 18} ${Y(0) + 4}l8 -8M${left - 18} ${Y(H) + 4}l8 -8`} stroke={theme.ink} strokeWidth={0.8} />
+          <text transform={`translate(${left - 20} ${Y(H / 2)}) rotate(-90)`} textAnchor="middle" fontSize={10} fill={theme.ink} className="font-mono">{formatLength(H, units)}</text>
+          <text x={X(0)} y={svgH - 8} fontSize={10} fill={theme.inkSoft} className="font-sans">◀ cab</text>
         </svg>
       </div>
     </div>
