@@ -109,7 +109,7 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
 
   return (
     <div className={`flex h-full min-h-0 flex-col bg-paper text-ink ${floating ? 'touch-targets' : ''}`} data-testid="editor" data-read-only={!canEdit} data-screen={floating ? 'compact' : 'desktop'}>
-      <Toolbar saveStatus={save.status} saveDetail={save.lastError} extra={extensions?.toolbarExtra} panels={panelToggles} compact={floating} />
+      <Toolbar saveStatus={save.status} saveDetail={save.lastError} saveLeavingFor={save.leavingFor} extra={extensions?.toolbarExtra} panels={panelToggles} compact={floating} />
       {editingNeedsLargerScreen && (
         <p className="border-b border-paper-edge bg-paper-deep px-3 py-2 text-sm" data-testid="larger-screen-note">
           Read-only on a phone: editing needs a larger screen (a tablet or a computer).

@@ -4,7 +4,10 @@
  * plan): a changed document is saved a moment after the last edit (or at once on "Save now"),
  * with its version in If-Match. One save at a time; edits made while saving go in the next one.
  * A 412 stops saving and hands the conflict to the dialog; a lost connection retries with
- * back-off. Also guards against leaving the page with unsaved changes. Never saves read-only.
+ * back-off. Also guards against leaving the page with unsaved changes: a click on an in-app link
+ * while an edit waits or saves is held, the save flushed, and the link followed once saved
+ * (`leavingFor` names where to, for the indicator); only when saving is stopped does it ask.
+ * Never saves read-only.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { toast } from 'sonner';
@@ -33,6 +36,22 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
   /** Why saving stopped: a conflict (until resolved), no rights (for good), a refused document (until the next edit). */
   const blocked = useRef<null | 'conflict' | 'forbidden' | 'invalid'>(null);
   const saveRef = useRef<() => Promise<void>>(async () => undefined);
+  /** A link clicked while a save was due or under way: followed once the layout is saved. */
+  const leaving = useRef<HTMLAnchorElement | null>(null);
+  const [leavingFor, setLeavingFor] = useState<string | null>(null);
+
+  const stopLeaving = useCallback(() => {
+    leaving.current = null;
+    setLeavingFor(null);
+  }, []);
+  /** Follows the held link: a second click, now with nothing unsaved, so the link does what it does. */
+  const followHeldLink = useCallback(() => {
+    const a = leaving.current;
+    stopLeaving();
+    if (!a) return;
+    if (a.isConnected) a.click();
+    else window.location.assign(a.href);
+  }, [stopLeaving]);
 
   const schedule = useCallback((ms: number) => {
     if (timer.current) clearTimeout(timer.current);
@@ -62,27 +81,35 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
         api.getState().markSaved(doc, result.version);
         const still = isDirty(api.getState());
         setStatus(still ? 'unsaved' : 'saved');
-        if (still) schedule(AUTOSAVE_DELAY_MS);
+        if (still) schedule(leaving.current ? 0 : AUTOSAVE_DELAY_MS);
+        else if (leaving.current) followHeldLink();
         return;
       }
       case 'conflict':
+        stopLeaving();
         blocked.current = 'conflict';
         setStatus('conflict');
         setConflict({ mine: api.getState().doc, theirs: result.current });
         return;
       case 'invalid':
+        stopLeaving();
         blocked.current = 'invalid';
         setStatus('error');
         setLastError(result.issues.length ? `${result.message}: ${result.issues.slice(0, 3).map((i) => `${fieldName(i.path)}: ${i.message}`).join('; ')}` : result.message);
         toast.error(`Not saved: ${result.message}`);
         return;
       case 'forbidden':
+        stopLeaving();
         blocked.current = 'forbidden';
         setStatus('error');
         setLastError(result.message);
         toast.error(result.message);
         return;
       case 'error':
+        if (leaving.current) {
+          stopLeaving();
+          toast.error(`Stayed on this page: the changes could not be saved (${result.message}).`);
+        }
         setStatus('error');
         setLastError(result.message);
         if (result.retry) {
@@ -94,7 +121,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
         }
         return;
     }
-  }, [api, canEdit, fetchFn, layoutId, schedule]);
+  }, [api, canEdit, fetchFn, layoutId, schedule, stopLeaving, followHeldLink]);
 
   useEffect(() => {
     saveRef.current = saveNow;
@@ -133,6 +160,15 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
       if (!unsaved() || e.defaultPrevented || e.button !== 0 || e.metaKey || e.ctrlKey) return;
       const a = (e.target as HTMLElement | null)?.closest?.('a[href]') as HTMLAnchorElement | null;
       if (!a || a.target === '_blank' || a.origin !== window.location.origin) return;
+      if (!blocked.current) {
+        // Saving can go on: hold the click, save now, then follow the link (a second click is held the same way).
+        e.preventDefault();
+        e.stopPropagation();
+        leaving.current = a;
+        setLeavingFor(a.textContent?.trim() || 'the page');
+        if (!inFlight.current) schedule(0);
+        return;
+      }
       if (!window.confirm('This layout has changes that are not saved yet. Leave anyway?')) {
         e.preventDefault();
         e.stopPropagation();
@@ -144,7 +180,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
       window.removeEventListener('beforeunload', onBeforeUnload);
       document.removeEventListener('click', onClick, true);
     };
-  }, [api, canEdit]);
+  }, [api, canEdit, schedule]);
 
   useEffect(() => () => {
     if (timer.current) clearTimeout(timer.current);
@@ -166,5 +202,5 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
 
   const closeConflict = useCallback(() => setConflict(null), []);
 
-  return { status, conflict, lastError, takeTheirs, closeConflict, saveNow };
+  return { status, conflict, lastError, takeTheirs, closeConflict, saveNow, leavingFor };
 }

@@ -12,12 +12,13 @@ const LOOK: Record<SaveStatus, { text: string; Icon: typeof CircleCheck; cls: st
   'read-only': { text: 'View only', Icon: Eye, cls: 'text-ink-soft' },
 };
 
-export function SaveIndicator({ status, version, detail }: { status: SaveStatus; version: number; detail?: string | null }) {
-  const l = LOOK[status];
+/** `leavingFor`: a link clicked while saving, followed once saved ("Saving, then opening Build plan…"). */
+export function SaveIndicator({ status, version, detail, leavingFor }: { status: SaveStatus; version: number; detail?: string | null; leavingFor?: string | null }) {
+  const l = leavingFor ? LOOK.saving : LOOK[status];
   return (
-    <span role="status" aria-live="polite" data-testid="save-status" data-status={status} title={detail ?? undefined} className={`inline-flex w-44 items-center gap-1.5 truncate text-sm ${l.cls}`}>
+    <span role="status" aria-live="polite" data-testid="save-status" data-status={status} data-leaving-for={leavingFor ?? undefined} title={detail ?? undefined} className={`inline-flex ${leavingFor ? 'max-w-xs' : 'w-44'} items-center gap-1.5 truncate text-sm ${l.cls}`}>
       <l.Icon size={15} aria-hidden className={l.spin ? 'animate-spin' : undefined} />
-      {l.text}
+      {leavingFor ? `Saving, then opening ${leavingFor}…` : l.text}
       <span className="font-mono text-xs text-ink-soft">v{version}</span>
     </span>
   );

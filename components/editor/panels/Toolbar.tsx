@@ -19,13 +19,15 @@ import type { SaveStatus } from '../api/useAutosave';
 interface ToolbarProps {
   saveStatus: SaveStatus;
   saveDetail?: string | null;
+  /** Where a held link goes once the save lands (see useAutosave). */
+  saveLeavingFor?: string | null;
   extra?: ReactNode;
   /** The buttons that open the panels (drawers on a tablet, Mark-ups on a desktop). */
   panels?: ReactNode;
   compact?: boolean;
 }
 
-export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra, panels, compact = false }: ToolbarProps) {
+export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, saveLeavingFor, extra, panels, compact = false }: ToolbarProps) {
   const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, version: st.version })));
   if (compact) {
     return (
@@ -40,7 +42,7 @@ export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra, pa
           </div>
         )}
         <div className="ml-auto flex items-center gap-2">
-          <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} />
+          <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
           <ToolbarMore>
             <p className="truncate text-sm font-semibold" title={s.name}>{s.name}</p>
             {!s.readOnly && (
@@ -82,7 +84,7 @@ export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, extra, pa
       <div className="ml-auto flex items-center gap-3">
         {extra}
         {panels}
-        <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} />
+        <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
         <CommandButton id="help.shortcuts" />
       </div>
     </div>
