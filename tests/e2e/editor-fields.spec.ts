@@ -1,0 +1,87 @@
+// A Details-panel field holding a value that does not read never holds the focus (WCAG 2.1
+// SC 2.1.2, No Keyboard Trap): the message shows beside the field as it is typed, Tab leaves,
+// leaving puts the last valid value back with a note saying the edit was not applied and why,
+// and Escape puts it back too. Also: a click on "Build plan" straight after an edit is held until
+// the edit is saved, then followed — the edit is there after a reload.
+import { expect, test, type Page } from '@playwright/test';
+import { keepScreenshot, signIn } from './helpers';
+
+/** A layout of this test's own (from the rear-bed starter), so no other test's layout changes. */
+async function newLayout(page: Page, name: string): Promise<string> {
+  const id = await page.evaluate(async (layoutName) => {
+    const res = await fetch('/api/layouts', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: layoutName, starterId: 'starter-rear-bed' }) });
+    if (res.status !== 201) throw new Error(`create answered ${res.status}: ${await res.text()}`);
+    return ((await res.json()) as { id: string }).id;
+  }, name);
+  await page.goto(`/layouts/${id}`);
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  return id;
+}
+
+async function selectFirstModule(page: Page) {
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press(']');
+  await expect(page.getByTestId('details-length')).toBeVisible();
+}
+
+test('an unreadable length shows why beside its field, lets the focus go, and goes back to the last valid value', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await newLayout(page, 'Fields — invalid values');
+  await selectFirstModule(page);
+  const length = page.getByTestId('details-length');
+  const before = await length.inputValue();
+
+  // Past the schema's limit (100 000 mm): the message is beside the field and tied to it.
+  await length.fill('99999999');
+  const error = page.getByTestId('details-length-error');
+  await expect(error).toContainText('Length must be between');
+  await expect(length).toHaveAttribute('aria-invalid', 'true');
+  await expect(length).toHaveAttribute('aria-describedby', (await error.getAttribute('id'))!);
+  await keepScreenshot(page, 'details-invalid-length');
+
+  // Tab leaves the field: the focus moves on, the last valid value is back, a note says why.
+  await page.keyboard.press('Tab');
+  expect(await length.evaluate((el) => el === document.activeElement)).toBe(false);
+  await expect(length).toHaveValue(before);
+  await expect(length).toHaveAttribute('aria-invalid', 'false');
+  await expect(page.getByText(/Not applied: Length must be between \d+ and \d+ mm/)).toBeVisible();
+
+  // Escape puts the last valid value back, the message goes, the focus stays to try again.
+  await length.fill('twelve');
+  await expect(error).toContainText('type a length');
+  await page.keyboard.press('Escape');
+  await expect(length).toHaveValue(before);
+  await expect(error).toHaveCount(0);
+  await expect(length).toBeFocused();
+
+  // A click on the plan with a bad value in the field: the note says the edit was not applied.
+  await length.fill('abc');
+  const plan = (await page.getByTestId('plan').boundingBox())!;
+  await page.mouse.click(plan.x + 8, plan.y + 8);
+  await expect(page.getByText(/Not applied: Length: type a length/)).toBeVisible();
+  expect(await length.evaluate((el) => el === document.activeElement).catch(() => false)).toBe(false);
+});
+
+test('a click on Build plan straight after an edit waits for the save, then opens the build plan with the edit kept', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  const id = await newLayout(page, 'Fields — leave while saving');
+  await selectFirstModule(page);
+  const length = page.getByTestId('details-length');
+  const before = Number(await length.inputValue());
+  const after = before - 10; // 10 mm shorter: within every limit of a placed module
+  await length.fill(String(after));
+  // Straight away (the autosave waits 1.2 s after an edit): leaving the field applies it, the click is held.
+  await page.getByTestId('build-plan-link').click();
+  await expect(page).toHaveURL(new RegExp(`/layouts/${id}/build`), { timeout: 20_000 });
+
+  // The edit was saved before the page changed: the stored layout has a module of the new length.
+  const lengths = await page.evaluate(async (layoutId) => {
+    const res = await fetch(`/api/layouts/${layoutId}`);
+    return ((await res.json()) as { doc: { modules: { length: number }[] } }).doc.modules.map((m) => m.length);
+  }, id);
+  expect(lengths).toContain(after);
+  await page.goto(`/layouts/${id}`);
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await selectFirstModule(page);
+  await expect(page.getByTestId('details-length')).toHaveValue(String(after));
+});
