@@ -3,7 +3,7 @@
 // Text is measured with the product's own face metrics (lib/sheet/font-metrics, generated from
 // fonts/*.woff), the faces the canvas draws with.
 import { describe, expect, it } from 'vitest';
-import { boxesOverlap, LABEL_LOOK, placeModuleLabel, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
+import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
 import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbols/kind-short-names';
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
@@ -33,6 +33,16 @@ describe('module labels on the plan', () => {
     expect(p.dimension).not.toBeNull();
     expect(boxesOverlap(p.name!, p.dimension!)).toBe(false);
     expect(p.name!.text).not.toContain('…');
+  });
+
+  it('a worktop labelled by the designer shortens to the label’s first word, never to a cut word', () => {
+    const names = labelNames('Worktop over fridge', 'Kitchen counter', KIND_SHORT_NAMES['kitchen-counter']);
+    expect(names).toEqual({ full: 'Worktop over fridge', short: 'Worktop', abbreviation: 'CTR' });
+    // 300 × 500 mm at the fitted zoom: 66.7 × 111.2 px; the full label is far wider than 58.7 px.
+    const p = placeModuleLabel({ width: 300 * FITTED, height: 500 * FITTED, names, dimension: '300 × 500 mm' }, measure);
+    expect(p.name?.text).toBe('Worktop');
+    expect(boxesOverlap(p.name!, p.dimension!)).toBe(false);
+    expect(labelNames('  ', 'Kitchen counter', KIND_SHORT_NAMES['kitchen-counter']).full).toBe('Kitchen counter');
   });
 
   it('a 2000 mm bed at the fitted zoom reads its full name with its size below', () => {

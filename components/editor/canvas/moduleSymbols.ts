@@ -12,7 +12,7 @@ import { fillHatch } from './hatching';
 import { moduleSymbol } from '@/lib/symbols/module-symbols';
 import { KIND_SHORT_NAMES } from '@/lib/symbols/kind-short-names';
 import { formatSize, type LengthUnit } from '@/lib/layout/units';
-import { LABEL_LOOK, placeModuleLabel, type LabelFace, type TextBox } from '../geometry/labels';
+import { LABEL_LOOK, labelNames, placeModuleLabel, type LabelFace, type TextBox } from '../geometry/labels';
 
 export interface ModuleLook {
   kind: Module['kind'];
@@ -120,15 +120,14 @@ function drawSymbol(ctx: Ctx, m: ModuleLook, px: number) {
  * the name that fits, and the size below it, along it or outside on a leader, never over it.
  */
 function drawLabel(ctx: Ctx, m: ModuleLook, outside: boolean, o: DrawOptions, px: number) {
-  const full = m.label || KINDS[m.kind].title;
-  const short = KIND_SHORT_NAMES[m.kind];
+  const names = labelNames(m.label, KINDS[m.kind].title, KIND_SHORT_NAMES[m.kind]);
   const fonts = o.fonts ?? canvasFonts;
   const font = (face: LabelFace, size: number) => (face === 'text' ? `500 ${size}px ${fonts.text}` : `${size}px ${fonts.mono}`);
   const placed = placeModuleLabel(
     {
       width: m.length * o.scale,
       height: m.width * o.scale,
-      names: { full: outside ? `${full} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` : full, short: short.short, abbreviation: short.abbreviation },
+      names: outside ? { ...names, full: `${names.full} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` } : names,
       dimension: o.units ? formatSize(m.length, m.width, o.units) : '',
     },
     (text, face, size) => { ctx.font = font(face, size); return ctx.measureText(text).width; },

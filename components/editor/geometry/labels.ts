@@ -47,6 +47,16 @@ export interface LabelRequest {
   dimension: string;
 }
 
+/**
+ * The three forms of a module's name: its own label (else its kind's title), then a short name —
+ * the first word of its own label ("Worktop over fridge" → "Worktop"), else the kind's short name —
+ * then the kind's abbreviation.
+ */
+export function labelNames(ownLabel: string | undefined, title: string, kindShort: { short: string; abbreviation: string }): LabelRequest['names'] {
+  const own = ownLabel?.trim();
+  return { full: own || title, short: own ? own.split(/\s+/)[0] : kindShort.short, abbreviation: kindShort.abbreviation };
+}
+
 interface Sized { text: string; w: number; h: number }
 
 /** Whether two boxes share any area (touching edges do not count). */
