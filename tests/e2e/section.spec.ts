@@ -8,6 +8,7 @@ test('the side section fills its panel, to scale', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
   await page.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true }).first().click();
   await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await keepScreenshot(page, 'plan-labels-1440');
   await page.getByRole('tab', { name: 'Side section' }).click();
   const panel = page.getByRole('tabpanel', { name: 'Side section' });
   const bay = panel.getByTestId('section-bay');

@@ -3,7 +3,7 @@
 // Text is measured with the product's own face metrics (lib/sheet/font-metrics, generated from
 // fonts/*.woff), the faces the canvas draws with.
 import { describe, expect, it } from 'vitest';
-import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
+import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, placePlanLabels, type PlanLabelItem, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
 import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbols/kind-short-names';
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
@@ -96,5 +96,41 @@ describe('module labels on the plan', () => {
       expect(s.abbreviation.length, kind).toBeLessThanOrEqual(ABBREVIATION_MAX);
     }
     expect(Object.keys(KIND_SHORT_NAMES).sort()).toEqual([...MODULE_KINDS].sort());
+  });
+
+  it('across the plan, a module’s label never covers another’s: the one on top keeps its label, the one below gives way', () => {
+    // A 1200 × 600 mm counter with a 500 × 350 mm hob on it and a 1100 × 350 mm locker above
+    // both, at 0.3 px/mm: 360 × 180 px, 150 × 105 px, 330 × 105 px. Draw order: counter, hob, locker.
+    const k = 0.3;
+    const item = (id: string, kind: 'kitchen-counter' | 'hob' | 'overhead-locker', title: string, x: number, y: number, l: number, w: number): PlanLabelItem =>
+      ({ id, x: x * k, y: y * k, width: l * k, height: w * k, names: labelNames(undefined, title, KIND_SHORT_NAMES[kind]), dimension: `${l} × ${w} mm` });
+    const items = [item('counter', 'kitchen-counter', 'Kitchen counter', 0, 0, 1200, 600), item('hob', 'hob', 'Hob', 100, 50, 500, 350), item('locker', 'overhead-locker', 'Overhead locker', 50, 0, 1100, 350)];
+    const placed = placePlanLabels(items, measure);
+    // The locker is drawn last (on top): it keeps its full name and its size.
+    expect(placed.get('locker')!.nameForm).toBe('full');
+    expect(placed.get('locker')!.dimensionPlace).not.toBe('none');
+    const boxes = items.flatMap((it) => {
+      const p = placed.get(it.id)!;
+      return [p.name, p.dimension].filter((b) => b !== null).map((b) => ({ ...b, cx: b.cx + it.x, cy: b.cy + it.y }));
+    });
+    for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j]), `${boxes[i].text} / ${boxes[j].text}`).toBe(false);
+  });
+
+  it('a crowded plan of random modules has no two labels overlapping', () => {
+    // A fixed pseudo-random sequence (a linear congruential generator), so a failure repeats.
+    let seed = 12345;
+    const next = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+    const items: PlanLabelItem[] = Array.from({ length: 200 }, (_, i) => {
+      const kind = MODULE_KINDS[i % MODULE_KINDS.length];
+      return { id: `m${i}`, x: next() * 900, y: next() * 500, width: 10 + next() * 300, height: 10 + next() * 200, names: labelNames(undefined, kind, KIND_SHORT_NAMES[kind]), dimension: '600 × 300 mm' };
+    });
+    const placed = placePlanLabels(items, measure);
+    expect(placed.size).toBe(200);
+    const boxes = items.flatMap((it) => {
+      const p = placed.get(it.id)!;
+      return [p.name, p.dimension].filter((b) => b !== null).map((b) => ({ ...b, cx: b.cx + it.x, cy: b.cy + it.y }));
+    });
+    expect(boxes.length).toBeGreaterThan(20);
+    for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j])).toBe(false);
   });
 });

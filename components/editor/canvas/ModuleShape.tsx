@@ -10,23 +10,25 @@ import type Konva from 'konva';
 import type { LengthUnit, Module } from '@/lib/layout';
 import { drawModule } from './moduleSymbols';
 import type { CanvasFonts } from './useCanvasFonts';
+import type { LabelPlacement } from '../geometry/labels';
 
 export function moduleSceneFunc(phantom: boolean) {
   return (context: Konva.Context, shape: Konva.Shape) => {
     const m = shape.getAttr('module') as Module;
     const fonts = shape.getAttr('fonts') as CanvasFonts | undefined;
     const units = shape.getAttr('units') as LengthUnit | undefined;
+    const placement = shape.getAttr('placement') as LabelPlacement | undefined;
     // World layers carry the viewport scale (px per mm); width/height attrs may differ from the
     // module's own during a live resize.
     const scale = shape.getLayer()?.scaleX() || 1;
-    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props, mount: m.mount }, { scale, phantom, fonts, units });
+    drawModule(context._context, { kind: m.kind, label: m.label, length: shape.width(), width: shape.height(), facing: m.facing, props: m.props, mount: m.mount }, { scale, phantom, fonts, units, placement });
   };
 }
 
 const solid = moduleSceneFunc(false);
 const phantomDrawn = moduleSceneFunc(true);
 
-export const ModuleShape = memo(function ModuleShape({ module, fonts, units, phantom = false, fontsReady = 0 }: { module: Module; fonts: CanvasFonts; units?: LengthUnit; phantom?: boolean; fontsReady?: number }) {
+export const ModuleShape = memo(function ModuleShape({ module, fonts, units, placement, phantom = false, fontsReady = 0 }: { module: Module; fonts: CanvasFonts; units?: LengthUnit; placement?: LabelPlacement; phantom?: boolean; fontsReady?: number }) {
   return (
     <Shape
       id={phantom ? undefined : `module-${module.id}`}
@@ -37,6 +39,7 @@ export const ModuleShape = memo(function ModuleShape({ module, fonts, units, pha
       module={module}
       fonts={fonts}
       units={units}
+      placement={placement}
       fontsReady={fontsReady}
       sceneFunc={phantom ? phantomDrawn : solid}
       listening={false}

@@ -10,6 +10,8 @@ import type { Arrangement, LengthUnit, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
 import { ModuleShape } from './ModuleShape';
+import { canvasMeasure, labelRequestOf } from './moduleSymbols';
+import { placePlanLabels } from '../geometry/labels';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -26,7 +28,14 @@ interface Props {
   units: LengthUnit;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, fonts, fontsReady, units }: Props) {
+/** A 2D context of its own for measuring label text (never drawn on). */
+let measuring: CanvasRenderingContext2D | null = null;
+function measuringContext(): CanvasRenderingContext2D | null {
+  if (!measuring && typeof document !== 'undefined') measuring = document.createElement('canvas').getContext('2d');
+  return measuring;
+}
+
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, viewport, fonts, fontsReady, units }: Props) {
   const { shown, phantoms } = useMemo(() => {
     const hide = new Set(hidden);
     return {
@@ -34,10 +43,19 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
       phantoms: phantom ? modules.filter((m) => inArrangement(m, phantom) && !inArrangement(m, arrangement)) : [],
     };
   }, [modules, arrangement, phantom, hidden]);
+  // Labels for the whole plan at this scale, clear of each other (the pan plays no part).
+  const scale = viewport.scale;
+  const placements = useMemo(() => {
+    const ctx = measuringContext();
+    if (!ctx) return undefined;
+    void fontsReady; // measured again once the faces have loaded
+    const items = shown.map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units }) }));
+    return placePlanLabels(items, canvasMeasure(ctx, fonts));
+  }, [shown, scale, units, fonts, fontsReady]);
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (
-        <ModuleShape key={m.id} module={m} fonts={fonts} units={units} fontsReady={fontsReady} />
+        <ModuleShape key={m.id} module={m} fonts={fonts} units={units} placement={placements?.get(m.id)} fontsReady={fontsReady} />
       ))}
       {phantoms.map((m) => (
         <ModuleShape key={`phantom-${m.id}`} module={m} fonts={fonts} phantom fontsReady={fontsReady} />

@@ -12,7 +12,7 @@ import { fillHatch } from './hatching';
 import { moduleSymbol } from '@/lib/symbols/module-symbols';
 import { KIND_SHORT_NAMES } from '@/lib/symbols/kind-short-names';
 import { formatSize, type LengthUnit } from '@/lib/layout/units';
-import { LABEL_LOOK, labelNames, placeModuleLabel, type LabelFace, type TextBox } from '../geometry/labels';
+import { LABEL_LOOK, labelNames, placeModuleLabel, type LabelFace, type LabelPlacement, type LabelRequest, type MeasureText, type TextBox } from '../geometry/labels';
 
 export interface ModuleLook {
   kind: Module['kind'];
@@ -35,6 +35,8 @@ export interface DrawOptions {
   fonts?: { text: string; mono: string };
   /** The person's units for the size written in the module; without it no size is written. */
   units?: LengthUnit;
+  /** The label's place worked out for the whole plan (`placePlanLabels`); without it, for this module alone. */
+  placement?: LabelPlacement;
 }
 
 type Ctx = CanvasRenderingContext2D;
@@ -87,7 +89,7 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   if (!o.phantom && screenMin >= 10) {
     drawSymbol(ctx, m, px);
   }
-  if (!o.phantom) drawLabel(ctx, m, outside, o, px);
+  if (!o.phantom) drawLabel(ctx, m, o, px);
   ctx.restore();
 }
 
@@ -115,23 +117,39 @@ function drawSymbol(ctx: Ctx, m: ModuleLook, px: number) {
   ctx.setLineDash([]);
 }
 
-/**
- * The module's name and size, placed by `placeModuleLabel` in screen pixels: the longest form of
- * the name that fits, and the size below it, along it or outside on a leader, never over it.
- */
-function drawLabel(ctx: Ctx, m: ModuleLook, outside: boolean, o: DrawOptions, px: number) {
+/** What a module's label says: its names (with where it is mounted, if outside) and its size. */
+export function labelRequestOf(m: ModuleLook, o: Pick<DrawOptions, 'scale' | 'units'>): LabelRequest {
   const names = labelNames(m.label, KINDS[m.kind].title, KIND_SHORT_NAMES[m.kind]);
-  const fonts = o.fonts ?? canvasFonts;
-  const font = (face: LabelFace, size: number) => (face === 'text' ? `500 ${size}px ${fonts.text}` : `${size}px ${fonts.mono}`);
-  const placed = placeModuleLabel(
-    {
-      width: m.length * o.scale,
-      height: m.width * o.scale,
-      names: outside ? { ...names, full: `${names.full} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` } : names,
-      dimension: o.units ? formatSize(m.length, m.width, o.units) : '',
-    },
-    (text, face, size) => { ctx.font = font(face, size); return ctx.measureText(text).width; },
-  );
+  const outside = m.mount !== undefined && m.mount !== 'inside';
+  return {
+    width: m.length * o.scale,
+    height: m.width * o.scale,
+    names: outside ? { ...names, full: `${names.full} (${MOUNT_TAG[m.mount as keyof typeof MOUNT_TAG]})` } : names,
+    dimension: o.units ? formatSize(m.length, m.width, o.units) : '',
+  };
+}
+
+/** The canvas font of a label's face and size. */
+export function labelFont(fonts: { text: string; mono: string } | undefined, face: LabelFace, size: number): string {
+  const f = fonts ?? canvasFonts;
+  return face === 'text' ? `500 ${size}px ${f.text}` : `${size}px ${f.mono}`;
+}
+
+/** Text measured on a 2D context, for `placeModuleLabel`. */
+export function canvasMeasure(ctx: Ctx, fonts: DrawOptions['fonts']): MeasureText {
+  return (text, face, size) => {
+    ctx.font = labelFont(fonts, face, size);
+    return ctx.measureText(text).width;
+  };
+}
+
+/**
+ * The module's name and size: the plan's placement when given (clear of every other module's label),
+ * else placed for this module alone — the longest form of the name that fits, and the size below
+ * it, along it or outside on a leader, never over it.
+ */
+function drawLabel(ctx: Ctx, m: ModuleLook, o: DrawOptions, px: number) {
+  const placed = o.placement ?? placeModuleLabel(labelRequestOf(m, o), canvasMeasure(ctx, o.fonts));
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
   const put = (b: TextBox, face: LabelFace, size: number, ink: string) => {
@@ -141,7 +159,7 @@ function drawLabel(ctx: Ctx, m: ModuleLook, outside: boolean, o: DrawOptions, px
     ctx.fillRect(b.cx - b.width / 2 - 2, b.cy - b.height / 2, b.width + 4, b.height);
     ctx.translate(b.cx, b.cy);
     if (b.rotation) ctx.rotate(-Math.PI / 2);
-    ctx.font = font(face, size);
+    ctx.font = labelFont(o.fonts, face, size);
     ctx.fillStyle = ink;
     ctx.fillText(b.text, 0, 0);
     ctx.restore();

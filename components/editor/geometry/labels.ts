@@ -109,3 +109,61 @@ export function placeModuleLabel(req: LabelRequest, measure: MeasureText): Label
   const x0 = W, x1 = W + leader;
   return result(name ? box(name, W / 2, H / 2) : null, 'outside', box(dim, x1 + gap + dim.w / 2, H / 2), { x0, y0: H / 2, x1, y1: H / 2 });
 }
+
+export interface PlanLabelItem extends LabelRequest {
+  id: string;
+  /** The module's min corner on the plan, px (mm × scale; the viewport's pan plays no part). */
+  x: number;
+  y: number;
+}
+
+const NO_LABEL: LabelPlacement = { nameForm: 'none', name: null, dimensionPlace: 'none', dimension: null, leader: null };
+
+/** Side of the cells the placed boxes are filed under, px. */
+const CELL = 64;
+
+/**
+ * Labels for a whole plan, so that no two modules' labels cover each other (a hob on a counter,
+ * a locker above them): modules are taken from the top of the draw order down, each gets the first
+ * of these that is clear of the labels already placed — name and size, name alone, the next
+ * shorter name alone — else none. Placed boxes are filed in a grid of cells; placed boxes never
+ * overlap, so a cell holds a bounded number and each module costs a bounded number of tests.
+ */
+export function placePlanLabels(items: readonly PlanLabelItem[], measure: MeasureText): Map<string, LabelPlacement> {
+  const grid = new Map<string, TextBox[]>();
+  const cellsOf = (b: TextBox, f: (key: string) => boolean | void): boolean => {
+    const i0 = Math.floor((b.cx - b.width / 2) / CELL), i1 = Math.floor((b.cx + b.width / 2) / CELL);
+    const j0 = Math.floor((b.cy - b.height / 2) / CELL), j1 = Math.floor((b.cy + b.height / 2) / CELL);
+    for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) if (f(`${i},${j}`)) return true;
+    return false;
+  };
+  // On the plan, with the 2 px of paper drawn either side of the text.
+  const onPlan = (b: TextBox, it: PlanLabelItem): TextBox => ({ ...b, cx: b.cx + it.x, cy: b.cy + it.y, width: b.width + 4 });
+  const clashes = (b: TextBox) => cellsOf(b, (key) => grid.get(key)?.some((o) => boxesOverlap(o, b)));
+  const file = (b: TextBox) => void cellsOf(b, (key) => { const list = grid.get(key); if (list) list.push(b); else grid.set(key, [b]); });
+
+  const out = new Map<string, LabelPlacement>();
+  for (let k = items.length - 1; k >= 0; k--) {
+    const it = items[k];
+    const { names } = it;
+    // Each try, and what its name forms stand for in the module's own names.
+    const tries: [LabelRequest, NameForm[]][] = [
+      [it, ['full', 'short', 'abbreviation']],
+      [{ ...it, dimension: '' }, ['full', 'short', 'abbreviation']],
+      [{ ...it, names: { full: names.short, short: names.abbreviation, abbreviation: '' }, dimension: '' }, ['short', 'abbreviation', 'none']],
+      [{ ...it, names: { full: names.abbreviation, short: '', abbreviation: '' }, dimension: '' }, ['abbreviation', 'none', 'none']],
+    ];
+    let placed: LabelPlacement = NO_LABEL;
+    for (const [req, forms] of tries) {
+      const p = placeModuleLabel(req, measure);
+      const boxes = [p.name, p.dimension].filter((b): b is TextBox => b !== null).map((b) => onPlan(b, it));
+      if (boxes.length === 0 || boxes.some(clashes)) continue;
+      boxes.forEach(file);
+      const at = (['full', 'short', 'abbreviation'] as const).indexOf(p.nameForm as 'full');
+      placed = { ...p, nameForm: at < 0 ? 'none' : forms[at] };
+      break;
+    }
+    out.set(it.id, placed);
+  }
+  return out;
+}
