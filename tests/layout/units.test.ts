@@ -1,8 +1,14 @@
 // Display units: 25.4 mm to the inch exactly (international yard and pound agreement, 1959).
 import { describe, expect, it } from 'vitest';
-import { formatLength, parseLength, toUnit } from '@/lib/layout/units';
+import { formatLength, formatSize, parseLength, toUnit } from '@/lib/layout/units';
 
 describe('lengths', () => {
+  it('writes a plan size with its unit once: 600 × 300 mm; 60 × 30 cm; 254 × 127 mm is 10 × 5 in', () => {
+    expect(formatSize(600, 300)).toBe('600 × 300 mm');
+    expect(formatSize(600, 300, 'cm')).toBe('60 × 30 cm');
+    expect(formatSize(254, 127, 'in')).toBe('10 × 5 in');
+  });
+
   it('reads what people type', () => {
     expect(parseLength('2400')).toBe(2400);
     expect(parseLength('240 cm')).toBe(2400);
