@@ -34,6 +34,8 @@ export interface RectItem {
   fill?: Ink;
   width?: number;
   dash?: [number, number];
+  /** A marker for tests and tooling: e.g. `section:mounted:under-floor:<module id>`. */
+  tag?: string;
 }
 
 export interface PolygonItem {
