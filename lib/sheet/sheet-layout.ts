@@ -3,7 +3,8 @@
  * pages it fills): blocks of measured width and height on pages of one drawing area.
  *
  *   drawings  shelf-packed in order, left-aligned: side by side in a row while the row fits the
- *             drawing area's width at the chosen scale, else a new row, else a new page;
+ *             drawing area's width at the chosen scale, else a new row; rows below each other
+ *             while they fit the area's height, else a new page;
  *   free      what the drawings leave is kept as free regions — beside each row (the row's
  *             height) and below the last row (the area's width) — in page order;
  *   text      flows (the schedule, the mass table, the notes and cautions) take the first free
@@ -53,44 +54,47 @@ export class SheetSpace {
     return this.pages.length - 1;
   }
 
-  /** Shelf-packs the drawings (each must fit the area on its own: the caller checks). */
+  /**
+   * Shelf-packs the drawings (each must fit the area on its own: the caller checks): rows first,
+   * in order, as many side by side as the area's width takes; then rows onto pages, as many as
+   * its height takes. A row is never split, so drawings that fit side by side stay side by side.
+   */
   placeDrawings(drawings: Drawing[]): void {
     const { area } = this;
     if (!drawings.length) return;
-    let page = this.addPage();
-    let rowY = 0;
-    let rowH = 0;
+    const rows: Drawing[][] = [];
     let x = 0;
-    const closeRow = () => {
-      const used = x - BLOCK_GAP;
-      if (area.width - used - BLOCK_GAP > 0) this.offer({ page, x: area.x + used + BLOCK_GAP, y: area.y + rowY, width: area.width - used - BLOCK_GAP, height: rowH });
-    };
-    const closePage = () => {
-      closeRow();
-      const below = rowY + rowH + BLOCK_GAP;
-      if (area.height - below > 0) this.offer({ page, x: area.x, y: area.y + below, width: area.width, height: area.height - below });
-    };
     for (const d of drawings) {
-      const fitsRow = x + d.width <= area.width && rowY + d.height <= area.height;
-      if (x > 0 && !fitsRow) {
-        // A new row, on this page if it fits below; else a new page.
-        if (rowY + rowH + BLOCK_GAP + d.height <= area.height) {
-          closeRow();
-          rowY += rowH + BLOCK_GAP;
-        } else {
-          closePage();
-          page = this.addPage();
-          rowY = 0;
-        }
+      if (rows.length && x + d.width <= area.width) rows[rows.length - 1].push(d);
+      else {
+        rows.push([d]);
         x = 0;
-        rowH = 0;
       }
-      const bx = area.x + x;
-      const by = area.y + rowY;
-      this.pages[page].push(...d.draw(bx, by));
-      this.blocks.push({ page, x: bx, y: by, width: d.width, height: d.height, what: d.what });
       x += d.width + BLOCK_GAP;
-      rowH = Math.max(rowH, d.height);
+    }
+    let page = this.addPage();
+    let y = 0;
+    const closePage = () => {
+      if (area.height - y > 0) this.offer({ page, x: area.x, y: area.y + y, width: area.width, height: area.height - y });
+    };
+    for (const row of rows) {
+      const height = Math.max(...row.map((d) => d.height));
+      if (y > 0 && y + height > area.height) {
+        closePage();
+        page = this.addPage();
+        y = 0;
+      }
+      let at = 0;
+      for (const d of row) {
+        const bx = area.x + at;
+        const by = area.y + y;
+        this.pages[page].push(...d.draw(bx, by));
+        this.blocks.push({ page, x: bx, y: by, width: d.width, height: d.height, what: d.what });
+        at += d.width + BLOCK_GAP;
+      }
+      // Beside the row, as high as the row.
+      if (area.width - at > 0) this.offer({ page, x: area.x + at, y: area.y + y, width: area.width - at, height });
+      y += height + BLOCK_GAP;
     }
     closePage();
   }
