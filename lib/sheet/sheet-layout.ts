@@ -99,11 +99,6 @@ export class SheetSpace {
     closePage();
   }
 
-  /** The number of pages so far. */
-  get pageCount(): number {
-    return this.pages.length;
-  }
-
   /**
    * Columns for one text flow: free regions at least `minWidth` wide, used whole (`split` absent)
    * or cut into columns at least `split` wide; then fresh pages. `what` names the blocks it fills.
