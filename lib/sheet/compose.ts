@@ -17,10 +17,10 @@ import { flowChecks } from './checks-summary';
 import { flowMassBalance } from './mass-balance';
 import { ColumnFlow } from './flow';
 import { LINE } from './drafting';
-import { PAPER_MM, SCALES, sheetFrame, type DrawingScale, type Paper, PAPERS } from './paper';
+import { PAPER_MM, SCALES, sheetFrame, type DrawingScale, type Paper, PAPERS, type SheetFrame } from './paper';
 import { drawPlan, planSize, PLAN_MARGIN } from './plan-figure';
 import { resolveSettings } from '../checks/settings';
-import { SheetSpace, type Drawing, type PlacedBlock } from './sheet-layout';
+import { BLOCK_GAP, SheetSpace, type Balance, type Drawing, type PlacedBlock } from './sheet-layout';
 import { MASS_TABLE_MIN_WIDTH } from './mass-balance';
 import { cloudAreas, drawRevisionClouds, flowRevisionTable, type RevisionChanges, type RevisionRow } from './revision-block';
 import { onPaper } from './paper';
@@ -62,6 +62,8 @@ export type SheetResult =
 export const TEXT_COLUMN_MIN = 78;
 /** The revision table's narrowest width: its fixed columns (59 mm) and 61 mm of description, mm. */
 const REVISION_TABLE_MIN_WIDTH = 120;
+/** Balanced columns are capped this much over the even share, mm (two or three rows of text). */
+const BALANCE_SLACK = 10;
 
 /** The load floor's height above the road this sheet draws: the request's, else the document's setting. */
 export function floorHeightOf(req: Pick<SheetRequest, 'doc' | 'floorAboveRoad'>): number {
@@ -118,8 +120,25 @@ export function composeSheet(req: SheetRequest): SheetResult {
   }
 
   const frame = sheetFrame(paper);
+  let laid = layOut(req, frame, floorAboveRoad);
+  // Text alone on the last page, in one column while others stand empty: lay out again with the
+  // columns of that page balanced (the first ones capped, the last one full height, so the page
+  // count cannot grow). Pure, so twice is only twice the work.
+  const cap = balancedHeight(laid.blocks, laid.pages.length - 1, frame.area.width);
+  if (cap !== null) laid = layOut(req, frame, floorAboveRoad, { fromPage: laid.pages.length - 1, height: cap });
+  const { pages, figurePages, blocks } = laid;
+
+  pages.forEach((page, i) => {
+    page.items.push(...drawTitleBlock(frame.titleBlock, { ...req.details, units: unitWords(req.units) }, { paper, scale, page: i + 1, pages: pages.length }));
+  });
+  return { ok: true, sheet: { title: `${req.details.layout} — plan sheet`, pages }, figurePages, blocks };
+}
+
+/** One pass of the layout model: drawings, then the text flows, on as many pages as they take. */
+function layOut(req: SheetRequest, frame: SheetFrame, floorAboveRoad: number, balance?: Balance): { pages: SheetPage[]; figurePages: number; blocks: PlacedBlock[] } {
+  const { doc } = req;
   const pages: SheetPage[] = [];
-  const space = new SheetSpace(frame.area, () => {
+  const space = new SheetSpace(frame.area, balance, () => {
     const page: SheetPage = { width: frame.page.width, height: frame.page.height, items: [{ type: 'rect', x: frame.frame.x, y: frame.frame.y, w: frame.frame.width, h: frame.frame.height, stroke: 'ink', width: LINE.medium }] };
     pages.push(page);
     return page.items;
@@ -150,10 +169,21 @@ export function composeSheet(req: SheetRequest): SheetResult {
   flowCautions(text);
   text.finish();
 
-  pages.forEach((page, i) => {
-    page.items.push(...drawTitleBlock(frame.titleBlock, { ...req.details, units: unitWords(req.units) }, { paper, scale, page: i + 1, pages: pages.length }));
-  });
-  return { ok: true, sheet: { title: `${req.details.layout} — plan sheet`, pages }, figurePages, blocks: space.blocks };
+  return { pages, figurePages, blocks: space.blocks };
+}
+
+/**
+ * The column height that balances the notes on the last page, or null when there is nothing to
+ * balance (other blocks on that page, fewer than two columns' room, or already several columns).
+ */
+function balancedHeight(blocks: PlacedBlock[], lastPage: number, areaWidth: number): number | null {
+  const onLast = blocks.filter((b) => b.page === lastPage);
+  if (!onLast.length || onLast.some((b) => b.what !== 'text:notes')) return null;
+  const columns = Math.floor((areaWidth + BLOCK_GAP) / (TEXT_COLUMN_MIN + BLOCK_GAP));
+  if (columns < 2 || onLast.length > 1) return null;
+  const total = onLast.reduce((sum, b) => sum + b.height, 0);
+  // A little over the even share: rows do not break exactly at the cap.
+  return total / columns + BALANCE_SLACK;
 }
 
 function unitWords(units: LengthUnit): string {

@@ -34,6 +34,12 @@ export interface PlacedBlock extends Region {
   what: string;
 }
 
+/** Columns of fresh pages from `fromPage` on are capped at `height` but the last, which is full height. */
+export interface Balance {
+  fromPage: number;
+  height: number;
+}
+
 export interface Drawing {
   what: string;
   width: number;
@@ -47,7 +53,7 @@ export class SheetSpace {
   /** Free regions, ordered by page, then top, then left. */
   private free: Region[] = [];
 
-  constructor(readonly area: Area, private readonly newPageItems: () => SheetItem[]) {}
+  constructor(readonly area: Area, private readonly balance: Balance | undefined, private readonly newPageItems: () => SheetItem[]) {}
 
   private addPage(): number {
     this.pages.push(this.newPageItems());
@@ -115,8 +121,11 @@ export class SheetSpace {
           const k = Math.floor((region.width + BLOCK_GAP) / (split + BLOCK_GAP));
           const w = (region.width - (k - 1) * BLOCK_GAP) / k;
           const first = region;
-          for (let j = 1; j < k; j += 1) this.offer({ ...first, x: first.x + j * (w + BLOCK_GAP), width: w });
-          region = { ...first, width: w };
+          // Balancing: on a fresh page, all columns but the last end at the cap (and so are not "whole pages").
+          const capped = first.fresh === true && this.balance !== undefined && first.page >= this.balance.fromPage && this.balance.height < first.height;
+          const cap = (j: number): Partial<Region> => (capped && j < k - 1 ? { height: this.balance!.height, fresh: false } : {});
+          for (let j = 1; j < k; j += 1) this.offer({ ...first, x: first.x + j * (w + BLOCK_GAP), width: w, ...cap(j) });
+          region = { ...first, width: w, ...cap(0) };
         }
         const column: Column = { x: region.x, y: region.y, width: region.width, height: region.height, items: this.pages[region.page], fresh: region.fresh === true };
         pageOf.set(column, region);

@@ -94,6 +94,16 @@ describe('A3 at 1:20', () => {
     // than the 30 and 21 mm strips left beside the rows: a third page.
     expect(r.sheet.pages).toHaveLength(3);
   });
+
+  it('balances the notes over the last page’s columns: (392 + 6)/(78 + 6) = 4.7, so 4 columns of (392 − 3 × 6)/4 = 93.5 mm', () => {
+    const last = r.blocks.filter((b) => b.page === 2);
+    expect(last.every((b) => b.what === 'text:notes')).toBe(true);
+    expect(last).toHaveLength(4);
+    for (const b of last) expect(b.width).toBeCloseTo(93.5, 6);
+    expect(last.map((b) => b.x)).toEqual([14, 14 + 99.5, 14 + 2 * 99.5, 14 + 3 * 99.5].map((x) => expect.closeTo(x, 6)));
+    // No column holds much more than the others: the tallest is under half the drawing area's 245 mm.
+    expect(Math.max(...last.map((b) => b.height))).toBeLessThan(245 / 2);
+  });
 });
 
 describe('A4 at 1:20', () => {
