@@ -13,6 +13,8 @@ import { formatWhole } from '../format';
 
 const ROW = lineHeight(TYPE.label) + 1.2;
 const NUMBER_COL = 26;
+/** The narrowest width the mass table is printed at: three number columns and 50 mm for the row's name, mm. */
+export const MASS_TABLE_MIN_WIDTH = 3 * NUMBER_COL + 50;
 
 const kg = (n: number | null) => (n === null ? '—' : formatWhole(n));
 

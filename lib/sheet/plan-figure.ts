@@ -16,7 +16,7 @@ import { onPaper } from './paper';
 import type { SheetItem } from './primitives';
 import { fit } from './typography';
 import { symbolItems } from './module-symbol';
-import { archBoxes, buildUpThickness, modulesIn } from '../layout/bay';
+import { archBoxes, buildUpThickness, modulesIn, mountedInside, sectionReach } from '../layout/bay';
 import type { CheckReport } from '../checks/types';
 import { runningDimension, RUN_BAND } from './running-dimensions';
 import { clearanceItems } from './clearances';
@@ -33,6 +33,10 @@ export const PLAN_MARGIN = { left: 13, top: RUN_BAND + 5, right: 7, bottom: RUN_
  * and the PDF slow to make (measured: ~75 strokes per hatched module). Outlines and numbers stay.
  */
 export const HATCH_MODULE_LIMIT = 300;
+
+/** The dash of an outside module's outline (long dashes), mm on paper: the section draws it alike. */
+/** Outside the body: a chain line (long dash, short dash), as the editor draws it. */
+export const OUTSIDE_DASH: readonly number[] = [2.4, 0.5, 0.4, 0.5];
 
 /**
  * Modules one figure (a plan or the section) draws, the first by schedule number (common practice,
@@ -58,9 +62,14 @@ export const ARRANGEMENT_CAPTION: Record<Arrangement, string> = {
   sleep: 'Sleep: beds made up',
 };
 
+/** How far modules behind the rear doors reach past the bay's rear, mm (0 when none). */
+export function rearReach(doc: LayoutDoc): number {
+  return Math.max(0, sectionReach(doc, 0).behind);
+}
+
 export function planSize(doc: LayoutDoc, scale: number): { width: number; height: number } {
   return {
-    width: PLAN_MARGIN.left + onPaper(doc.bay.length, scale) + PLAN_MARGIN.right,
+    width: PLAN_MARGIN.left + onPaper(doc.bay.length + rearReach(doc), scale) + PLAN_MARGIN.right,
     height: PLAN_MARGIN.top + onPaper(doc.bay.width, scale) + PLAN_MARGIN.bottom,
   };
 }
@@ -100,10 +109,11 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
 
   // Modules present in this arrangement.
   const numbers = scheduleNumbers(doc);
-  // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top.
+  // Floor-standing modules first, highest last: what hangs overhead is drawn dashed on top; those
+  // outside the body (chain-lined) over all of them.
   const inArrangement = modulesIn(doc, arrangement);
   const { drawn, leftOut } = drawnModules(inArrangement);
-  const present = drawn.sort((a, b) => a.elevation - b.elevation);
+  const present = drawn.sort((a, b) => Number(!mountedInside(a)) - Number(!mountedInside(b)) || a.elevation - b.elevation);
   for (const m of present) {
     items.push(...drawModule(m, bx + s(m.x), by + s(m.y), s(m.length), s(m.width), numbers.get(m.id) ?? 0, doc.modules.length <= HATCH_MODULE_LIMIT));
   }
@@ -184,16 +194,17 @@ function bareMetal(doc: LayoutDoc, bx: number, by: number, L: number, W: number,
 
 function drawModule(m: Module, x: number, y: number, w: number, h: number, number: number, hatched: boolean): SheetItem[] {
   const family = kindSpec(m.kind).family;
+  if (!mountedInside(m)) {
+    // Outside the body (under the floor, on the roof, behind the rear doors): a chain-lined medium
+    // outline, as in the section, whatever its elevation.
+    return [{ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: OUTSIDE_DASH, tag: `plan:mounted:${m.mount}:${m.id}` }, ...numberTag(m, x, y, w, h, number)];
+  }
   if (m.elevation >= 1000) {
     // Hangs overhead: outline only, dashed, so what stands below stays readable.
     return [
       { type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.thin, dash: [1.2, 0.8] },
       { type: 'text', x: x + 0.8, y: y + 2.6, text: String(number), size: TYPE.small, font: 'sans-bold', ink: 'soft' },
     ];
-  }
-  if (m.mount !== undefined && m.mount !== 'inside') {
-    // Outside the body (under the floor, on the roof, behind the rear doors): a long-dashed medium outline.
-    return [{ type: 'rect', x, y, w, h, stroke: 'ink', width: LINE.medium, dash: [2.4, 0.6] }, ...numberTag(m, x, y, w, h, number)];
   }
   const outline = family === 'electrics' ? { stroke: 'ink' as const, width: LINE.medium, dash: [0.4, 0.6] as [number, number] } : { stroke: 'ink' as const, width: LINE.medium };
   if (!hatched) {

@@ -18,8 +18,8 @@ export interface LineItem {
   /** Stroke width in mm. */
   width: number;
   ink?: Ink;
-  /** Dash and gap lengths in mm. */
-  dash?: [number, number];
+  /** Dash and gap lengths in mm, repeating (two for a dashed line, four for a chain line). */
+  dash?: readonly number[];
   /** A marker for tests and tooling: e.g. `dimension:bay-length:travel`. */
   tag?: string;
 }
@@ -33,7 +33,9 @@ export interface RectItem {
   stroke?: Ink;
   fill?: Ink;
   width?: number;
-  dash?: [number, number];
+  dash?: readonly number[];
+  /** A marker for tests and tooling: e.g. `section:mounted:under-floor:<module id>`. */
+  tag?: string;
 }
 
 export interface PolygonItem {

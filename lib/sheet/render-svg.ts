@@ -27,7 +27,7 @@ function escapeAttr(text: string): string {
 }
 
 const hex = (ink: Ink | undefined) => INK_HEX[ink ?? 'ink'];
-const dashOf = (dash: [number, number] | undefined) => (dash ? `;stroke-dasharray:${dash.map((d) => `${n(d)}px`).join(' ')}` : '');
+const dashOf = (dash: readonly number[] | undefined) => (dash ? `;stroke-dasharray:${dash.map((d) => `${n(d)}px`).join(' ')}` : '');
 
 /** The CSS declarations an item is drawn with (its geometry aside). */
 function styleOf(item: SheetItem): string {
@@ -52,7 +52,7 @@ function styleOf(item: SheetItem): string {
 function shape(item: Exclude<SheetItem, LineItem>, cls: string): string {
   switch (item.type) {
     case 'rect':
-      return `<rect class="${cls}" x="${n(item.x)}" y="${n(item.y)}" width="${n(item.w)}" height="${n(item.h)}"/>`;
+      return `<rect class="${cls}" x="${n(item.x)}" y="${n(item.y)}" width="${n(item.w)}" height="${n(item.h)}"${item.tag ? ` data-tag="${escapeAttr(item.tag)}"` : ''}/>`;
     case 'polygon':
       return `<polygon class="${cls}" points="${item.points.map(([x, y]) => `${n(x)},${n(y)}`).join(' ')}"/>`;
     case 'text': {

@@ -1,11 +1,13 @@
 /**
  * The module schedule: one row per module, numbered as on the plans — kind, label, size
- * (length × width × height), position, elevation above the finished floor, mass and the
+ * (length × width × height), position, elevation above the finished floor, where it is mounted
+ * (inside the body, under the floor, on the roof, behind the rear doors), mass and the
  * arrangements it exists in — flowed across pages with the header repeated, at most
  * SCHEDULE_MAX_ROWS rows. Pure.
  */
 import { kindSpec } from '../layout/kinds';
 import { formatLength } from '../layout/units';
+import { mountOf } from '../layout/bay';
 import type { LayoutDoc, LengthUnit, Module } from '../layout';
 import type { ColumnFlow } from './flow';
 import { LINE, TYPE } from './drafting';
@@ -31,10 +33,17 @@ export function scheduleColumns(units: LengthUnit): Column[] {
     { title: `Size L × W × H (${units})`, width: 48, cell: (m) => `${bare(m.length)} × ${bare(m.width)} × ${bare(m.height)}`, font: 'mono' },
     { title: `Position x, y (${units})`, width: 36, cell: (m) => `${bare(m.x)}, ${bare(m.y)}`, font: 'mono' },
     { title: 'Elevation', width: 22, cell: (m) => len(m.elevation), font: 'mono', align: 'right' },
+    { title: 'Mounted', width: 20, cell: (m) => MOUNTED_CELL[mountOf(m)] },
     { title: 'Mass', width: 18, cell: (m) => `${kgOf(m)} kg`, font: 'mono', align: 'right' },
     { title: 'Arrangements', width: 40, cell: (m) => m.arrangements.join(', ') },
   ];
 }
+
+/** The Mounted column's words: the glossary's "mounted" places, short enough for the column. */
+export const MOUNTED_CELL = { inside: 'inside', 'under-floor': 'under floor', roof: 'on roof', rear: 'behind' } as const;
+
+/** The narrowest width the schedule is printed at: its fixed columns and 40 mm for the label, mm. */
+export const SCHEDULE_MIN_WIDTH = scheduleColumns('mm').reduce((sum, c) => sum + c.width, 0) + 40;
 
 /** The module's own mass, or its kind's typical mass (marked with ~). */
 function kgOf(m: Module): string {

@@ -7,6 +7,7 @@
  * Must never import the database, Next, React or `server-only`: a worker has none of them.
  */
 import { runChecks, type CheckReport } from '../checks';
+import { resolveSettings } from '../checks/settings';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import { composeSheet, fitOf, renderPdf, type SheetRequest, type SheetResult } from '../sheet';
@@ -32,9 +33,18 @@ export type SheetInput = Omit<SheetRequest, 'report' | 'checksUnavailable'> & { 
 
 export type SheetPdfOutput = Exclude<SheetResult, { ok: true }> | { ok: true; pdf: Uint8Array };
 
-function checkedSheet({ studioDefaults, ...request }: SheetInput): SheetResult {
+function checkedSheet({ studioDefaults, ...given }: SheetInput): SheetResult {
+  // The load floor's height above the road: the request's, else the layout's, else the studio's default.
+  let request = given;
+  if (request.floorAboveRoad === undefined) {
+    try {
+      request = { ...request, floorAboveRoad: resolveSettings(request.doc, studioDefaults).floorAboveRoad };
+    } catch {
+      // Studio defaults that are not valid settings: the layout's own setting, else the built-in default (composeSheet's).
+    }
+  }
   // A bay that fits no paper at this scale is refused with the reason before any check runs.
-  if (!fitOf(request.doc, request.paper, request.scale).fits) return composeSheet({ ...request, report: null });
+  if (!fitOf(request.doc, request.paper, request.scale, request.floorAboveRoad).fits) return composeSheet({ ...request, report: null });
   let report: CheckReport | null = null;
   let checksUnavailable: string | undefined;
   try {

@@ -63,11 +63,17 @@ describe('fitting the bay to the paper', () => {
     }
   });
 
-  it('puts all three plans and the section on one A3 page at 1:20, one per page on A4', () => {
-    const a3 = composeSheet(request({ paper: 'a3' }));
+  it('puts all three plans and the section on one A3 page at 1:20 when nothing hangs under the floor, one per page on A4', () => {
+    // Rows at 1:20: [travel, lounge] 118.9 mm high and [sleep, section] max(118.9, 116) mm: 118.9 + 6 + 118.9 = 243.8 ≤ 245 mm.
+    const interior = { ...lounge, modules: lounge.modules.filter((m) => m.mount !== 'under-floor') };
+    const a3 = composeSheet(request({ doc: interior, paper: 'a3' }));
     const a4 = composeSheet(request());
     expect(a3.ok && a3.figurePages).toBe(1);
     expect(a4.ok && a4.figurePages).toBe(4);
+    // The demo lounge's underslung tank brings the road line 550 mm under the floor into the section:
+    // 6 + (2000 + 550)/20 + 10 = 143.5 mm, and 118.9 + 6 + 143.5 = 268.4 > 245 mm: two pages.
+    const withTank = composeSheet(request({ paper: 'a3' }));
+    expect(withTank.ok && withTank.figurePages).toBe(2);
   });
 
   it('fits a long L4H3 bay at 1:20 on A4', () => {
@@ -83,7 +89,7 @@ describe('what the sheet holds', () => {
 
   it('has a plan per arrangement and the side section', () => {
     for (const caption of ['Travel: driving, belted seats in use', 'Lounge: parked, daytime', 'Sleep: beds made up', 'Side section along the length']) expect(all).toContain(caption);
-    const tags = r.sheet.pages[0].items.filter((i) => i.type === 'line' && i.tag).map((i) => (i as { tag: string }).tag);
+    const tags = r.sheet.pages.slice(0, r.figurePages).flatMap((p) => p.items).filter((i) => i.type === 'line' && i.tag).map((i) => (i as { tag: string }).tag);
     expect(tags).toEqual(expect.arrayContaining(['dimension:bay-length:travel', 'dimension:bay-length:lounge', 'dimension:bay-length:sleep', 'dimension:clear-height']));
   });
 

@@ -14,7 +14,8 @@ const details = { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: '
 function sheet(report: CheckReport | null, over: Partial<SheetRequest> = {}) {
   const r = composeSheet({ doc, report, paper: 'a3', scale: 20, units: 'mm', details, ...over });
   if (!r.ok) throw new Error(r.message);
-  return r.sheet.pages[0].items;
+  // The drawing pages (on A3 the demo lounge's plans and section take two: its section reaches down to the road).
+  return r.sheet.pages.slice(0, r.figurePages).flatMap((p) => p.items);
 }
 const lines = (items: SheetItem[], prefix: string) => items.filter((i): i is LineItem => i.type === 'line' && (i.tag ?? '').startsWith(prefix));
 const texts = (items: SheetItem[]) => items.filter((i): i is TextItem => i.type === 'text').map((t) => t.text);
