@@ -22,7 +22,7 @@ import { bayTemplate, DEFAULT_BUILD_UP } from '../layout/templates';
 import { BED_PREFERENCE_WORDS, mattressOfClass, type Brief } from './brief';
 import { frameOf, unmirror, type Frame } from './frame';
 import { toModule, type Part } from './parts';
-import { layOut, PATTERNS, patternsFor, type LayoutMiss, type PatternId, type Variant } from './patterns';
+import { isLounge, layOut, PATTERNS, patternsFor, type LayoutMiss, type PatternId, type Variant } from './patterns';
 import { figuresOf, scoreAll, type Figures, type Score } from './score';
 import { explainFinding, explainMiss, type Reason } from './reasons';
 
@@ -108,9 +108,9 @@ export function variantsFor(brief: Brief): Variant[] {
   const out: Variant[] = [];
   const walls = ['left', 'right'] as const;
   const hasWet = brief.toilet || brief.shower;
-  for (const pattern of patternsFor(brief.bed)) {
+  for (const pattern of patternsFor(brief.bed, brief.sleepers.length)) {
     for (const bedStep of [0, 1, 2]) {
-      for (const raised of pattern === 'rear-lounge' || brief.garageHeight !== null ? [false] : [false, true]) {
+      for (const raised of isLounge(pattern) || brief.garageHeight !== null ? [false] : [false, true]) {
         for (const kitchenWall of walls) {
           for (const wetWall of hasWet ? walls : (['left'] as const)) {
             for (const wetFirst of hasWet && kitchenWall === wetWall ? [false, true] : [false]) {
@@ -132,7 +132,7 @@ export function variantsFor(brief: Brief): Variant[] {
 
 function zoningOf(v: Variant, hasWet: boolean, bedAcross: boolean): { key: string; words: string } {
   const wall = (w: 'left' | 'right') => (w === 'left' ? 'left-hand wall' : 'door side');
-  const bed = v.pattern === 'rear-lounge' ? `made up ${bedAcross ? 'across' : 'lengthways'}` : PATTERNS[v.pattern].bed;
+  const bed = `${isLounge(v.pattern) ? `made up ${bedAcross ? 'across' : 'lengthways'}` : PATTERNS[v.pattern].bed}${PATTERNS[v.pattern].levels === 2 ? (isLounge(v.pattern) ? ' with a drop-down bed over it' : ' with a bunk over it') : ''}`;
   return {
     key: `${v.pattern}|${bedAcross}|${v.kitchenWall}|${hasWet ? v.wetWall : '-'}|${v.appliances === 'apart'}`,
     words: `Bed ${bed}; kitchen on the ${wall(v.kitchenWall)}${v.appliances === 'apart' ? ', fridge and gas locker across from it' : ''}${hasWet ? `; wet room on the ${wall(v.wetWall)}` : ''}`,
