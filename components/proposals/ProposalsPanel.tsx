@@ -9,6 +9,8 @@ import { useForm, type Resolver } from 'react-hook-form';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
+import { NDJSON, readProgressStream } from '@/lib/api/progress-stream';
+import { formatNumber } from '@/lib/format';
 import type { LayoutDto } from '@/db/layouts';
 import {
   BED_PREFERENCE_WORDS, BED_PREFERENCES, briefSchema, FRIDGE_SIZES, MATTRESS_CLASSES, PRIORITIES, PRIORITY_WORDS, TYPICAL_BRIEF, type Brief,
@@ -106,13 +108,15 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
   const queryClient = useQueryClient();
   const abort = useRef<AbortController | null>(null);
   const [startedAt, setStartedAt] = useState(0);
+  const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
   const { register, handleSubmit, formState } = useForm<Values>({ resolver, defaultValues: DEFAULTS });
 
   const run = useMutation({
     mutationFn: (v: Values) => {
       abort.current = new AbortController();
       setStartedAt(Date.now());
-      return apiFetch<ProposalResult>('/api/proposals', { method: 'POST', json: toBrief(v), signal: abort.current.signal });
+      setProgress(null);
+      return fetchProposals(toBrief(v), abort.current.signal, (done, total) => setProgress({ done, total }));
     },
     onError: (err) => {
       if (err instanceof DOMException && err.name === 'AbortError') toast('Proposals cancelled.');
@@ -233,7 +237,7 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
           <button type="submit" className="btn-primary" disabled={run.isPending}>{run.isPending ? 'Proposing…' : 'Propose layouts'}</button>
           {run.isPending && <button type="button" className="btn-quiet" onClick={() => abort.current?.abort()}>Cancel</button>}
         </div>
-        {run.isPending && <Progress startedAt={startedAt} />}
+        {run.isPending && <Progress startedAt={startedAt} progress={progress} />}
       </form>
 
       {result && result.ok && (
@@ -295,7 +299,25 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
   );
 }
 
-function Progress({ startedAt }: { startedAt: number }) {
+/**
+ * Asks for the proposals as a progress stream (lib/api/progress-stream.ts): the bar follows the
+ * server's count of candidates; aborting the signal closes the request, and the server stops.
+ */
+async function fetchProposals(brief: unknown, signal: AbortSignal, onProgress: (done: number, total: number) => void): Promise<ProposalResult> {
+  const res = await fetch('/api/proposals', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', accept: NDJSON },
+    body: JSON.stringify(brief),
+    signal,
+  });
+  if (!res.ok) {
+    const body = await res.json().catch(() => ({}));
+    throw new ApiError(res.status, body.error ?? `Request failed (${res.status})`, body);
+  }
+  return readProgressStream<ProposalResult>(res, onProgress);
+}
+
+function Progress({ startedAt, progress }: { startedAt: number; progress: { done: number; total: number } | null }) {
   const [now, setNow] = useState(startedAt);
   useEffect(() => {
     const timer = setInterval(() => setNow(Date.now()), 250);
@@ -304,8 +326,10 @@ function Progress({ startedAt }: { startedAt: number }) {
   const seconds = Math.max(0, (now - startedAt) / 1000);
   return (
     <div role="status" className="space-y-1 text-sm text-ink-soft">
-      <progress className="w-full" aria-label="Laying out and checking candidates" />
-      <p>Laying out and checking candidate arrangements… {seconds.toFixed(1)} s</p>
+      {progress && progress.total > 0
+        ? <progress className="w-full" aria-label="Laying out and checking candidates" max={progress.total} value={progress.done} />
+        : <progress className="w-full" aria-label="Laying out and checking candidates" />}
+      <p>Laying out and checking candidate arrangements{progress ? `: ${formatNumber(progress.done)} of ${formatNumber(progress.total)}` : '…'} {seconds.toFixed(1)} s</p>
     </div>
   );
 }

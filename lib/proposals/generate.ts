@@ -82,6 +82,16 @@ export interface GenerateOptions {
   maxCandidates?: number;
   /** Told how far the search is, every 50 candidates (the worker passes it on). */
   onProgress?: (done: number, total: number) => void;
+  /** Read before each candidate: true stops the search with `ProposalsCancelledError`. */
+  cancelled?: () => boolean;
+}
+
+/** The search was stopped because the caller cancelled it. */
+export class ProposalsCancelledError extends Error {
+  constructor() {
+    super('The proposals were cancelled.');
+    this.name = 'JobCancelled';
+  }
 }
 
 /** The bay a brief names: a template by id, or the measured bay. Throws a RangeError for an unknown template. */
@@ -193,6 +203,7 @@ export function generateProposals(brief: Brief, options: GenerateOptions = {}): 
   let checked = 0;
   let notLaidOut = 0;
   for (let n = 0; n < order.length && checked < limit; n++) {
+    if (options.cancelled?.()) throw new ProposalsCancelledError();
     if (n % 50 === 0) options.onProgress?.(Math.min(n, limit), Math.min(order.length, limit));
     const v = all[order[n]];
     const laid = layOut(f, brief, v);
