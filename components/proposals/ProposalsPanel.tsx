@@ -1,7 +1,8 @@
 'use client';
 // Proposals from a client's brief: the brief form, progress while the server lays out and checks
 // the candidates (cancellable), the proposals side by side as small plans with their figures and
-// explained scores, "Open as a new layout" through the ordinary create route — or, when nothing
+// explained scores, "Open as a new layout" through the ordinary create route (on an existing
+// layout's Proposals page: "Open as a variant of this layout", its variants route) — or, when nothing
 // fits, the reasons and the nearest candidates with what they miss.
 import { useEffect, useRef, useState } from 'react';
 import { useRouter } from 'next/navigation';
@@ -12,6 +13,7 @@ import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { NDJSON, readProgressStream } from '@/lib/api/progress-stream';
 import { formatNumber } from '@/lib/format';
 import type { LayoutDto } from '@/db/layouts';
+import type { Bay } from '@/lib/layout/schema';
 import {
   BED_PREFERENCE_WORDS, BED_PREFERENCES, briefSchema, FRIDGE_SIZES, MATTRESS_CLASSES, PRIORITIES, PRIORITY_WORDS, TYPICAL_BRIEF, type Brief,
 } from '@/lib/proposals/brief';
@@ -51,9 +53,20 @@ const FIELD_OF: Record<string, keyof Values> = {
 
 const num = (s: string): number => (s.trim() === '' ? Number.NaN : Number(s.trim()));
 
-function toBrief(v: Values): unknown {
+/** The Bay choice that stands for the existing layout's own (measured) bay. */
+const THIS_LAYOUT = 'this-layout';
+
+/** The layout a proposal is made for (its Proposals page): its bay, and the brief read from it. */
+export interface ProposalsFor {
+  id: string;
+  name: string;
+  bay: Bay;
+  brief: Brief;
+}
+
+function toBrief(v: Values, forLayout?: ProposalsFor): unknown {
   return {
-    bay: { source: 'template', template: v.template },
+    bay: forLayout && v.template === THIS_LAYOUT ? { source: 'measured', bay: forLayout.bay } : { source: 'template', template: v.template },
     sleepers: v.sleepers.split(/[,;\s]+/).filter(Boolean).map(num),
     standing: v.standing.trim() === '' ? null : num(v.standing),
     beltedSeats: num(v.beltedSeats),
@@ -71,8 +84,8 @@ function toBrief(v: Values): unknown {
 }
 
 /** The brief's own schema decides; its messages land beside the field they concern. */
-const resolver: Resolver<Values> = async (values) => {
-  const parsed = briefSchema.safeParse(toBrief(values));
+const resolverFor = (forLayout?: ProposalsFor): Resolver<Values> => async (values) => {
+  const parsed = briefSchema.safeParse(toBrief(values, forLayout));
   if (parsed.success) return { values, errors: {} };
   const errors: Record<string, { type: string; message: string }> = {};
   for (const issue of parsed.error.issues) {
@@ -103,20 +116,43 @@ const DEFAULTS: Values = {
   priority: 'floor',
 };
 
-export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }) {
+/** The form's values for a brief read from a layout. */
+function valuesOf(b: Brief): Values {
+  return {
+    template: THIS_LAYOUT,
+    sleepers: b.sleepers.join(', '),
+    standing: b.standing === null ? '' : String(b.standing),
+    beltedSeats: String(b.beltedSeats),
+    bed: b.bed,
+    mattress: b.mattress,
+    counterMin: String(b.kitchen.counterMin),
+    sink: b.kitchen.sink,
+    hob: b.kitchen.hob,
+    fridge: b.kitchen.fridge,
+    days: String(b.water.days),
+    people: String(b.water.people),
+    toilet: b.toilet,
+    shower: b.shower,
+    fuel: b.fuel,
+    garage: b.garageHeight === null ? '' : String(b.garageHeight),
+    priority: b.priority,
+  };
+}
+
+export function ProposalsPanel({ templates, forLayout }: { templates: BayTemplateChoice[]; forLayout?: ProposalsFor }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const abort = useRef<AbortController | null>(null);
   const [startedAt, setStartedAt] = useState(0);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
-  const { register, handleSubmit, formState } = useForm<Values>({ resolver, defaultValues: DEFAULTS });
+  const { register, handleSubmit, formState } = useForm<Values>({ resolver: resolverFor(forLayout), defaultValues: forLayout ? valuesOf(forLayout.brief) : DEFAULTS });
 
   const run = useMutation({
     mutationFn: (v: Values) => {
       abort.current = new AbortController();
       setStartedAt(Date.now());
       setProgress(null);
-      return fetchProposals(toBrief(v), abort.current.signal, (done, total) => setProgress({ done, total }));
+      return fetchProposals(toBrief(v, forLayout), abort.current.signal, (done, total) => setProgress({ done, total }));
     },
     onError: (err) => {
       if (err instanceof DOMException && err.name === 'AbortError') toast('Proposals cancelled.');
@@ -125,7 +161,9 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
   });
 
   const open = useMutation({
-    mutationFn: (p: Proposal) => apiFetch<LayoutDto>('/api/layouts', { method: 'POST', json: { name: p.title, doc: p.doc } }),
+    mutationFn: (p: Proposal) => forLayout
+      ? apiFetch<LayoutDto>(`/api/layouts/${forLayout.id}/variants`, { method: 'POST', json: { doc: p.doc } })
+      : apiFetch<LayoutDto>('/api/layouts', { method: 'POST', json: { name: p.title, doc: p.doc } }),
     onSuccess: (layout) => {
       queryClient.invalidateQueries({ queryKey: ['layouts'] });
       toast.success(`Created “${layout.name}”`);
@@ -151,6 +189,7 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
           <div className="col-span-2">
             <label className="label" htmlFor="p-template">Bay</label>
             <select id="p-template" className="field" {...register('template')}>
+              {forLayout && <option value={THIS_LAYOUT}>This layout’s bay — {forLayout.bay.length} × {forLayout.bay.width} × {forLayout.bay.height} mm</option>}
               {templates.map((t) => <option key={t.id} value={t.id}>{t.name} — {t.bay.length} × {t.bay.width} × {t.bay.height} mm</option>)}
             </select>
           </div>
@@ -265,7 +304,7 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
                     {p.scores.map((s) => <li key={s.metric}><span className="font-semibold">{METRIC_WORDS[s.metric]}</span> {s.points}/100{s.weight > 1 ? ' (counts three times: what matters most)' : ''}: {s.words}</li>)}
                   </ul>
                 </details>
-                <button type="button" className="btn-primary mt-3" disabled={open.isPending} onClick={() => open.mutate(p)}>Open as a new layout</button>
+                <button type="button" className="btn-primary mt-3" disabled={open.isPending} onClick={() => open.mutate(p)}>{forLayout ? 'Open as a variant of this layout' : 'Open as a new layout'}</button>
               </li>
             ))}
           </ul>
