@@ -23,7 +23,17 @@ import { PlanThumbnail } from './PlanThumbnail';
 import type { BayTemplateChoice } from '@/components/layouts/NewLayoutForm';
 
 interface Values {
+  /** A bay template's id, THIS_LAYOUT, or MEASURED (the fields below). */
   template: string;
+  bayLength: string;
+  bayWidth: string;
+  bayHeight: string;
+  archX: string;
+  archLength: string;
+  archWidth: string;
+  archHeight: string;
+  doorOffset: string;
+  doorWidth: string;
   sleepers: string;
   standing: string;
   beltedSeats: string;
@@ -47,7 +57,9 @@ const FRIDGE_WORDS: Record<Brief['kitchen']['fridge'], string> = { none: 'None',
 
 /** Which form field a brief path belongs to. */
 const FIELD_OF: Record<string, keyof Values> = {
-  'bay.template': 'template', sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
+  'bay.template': 'template', 'bay.bay.length': 'bayLength', 'bay.bay.width': 'bayWidth', 'bay.bay.height': 'bayHeight',
+  ...Object.fromEntries([0, 1].flatMap((i) => [[`bay.bay.wheelArches.${i}.x`, 'archX'], [`bay.bay.wheelArches.${i}.length`, 'archLength'], [`bay.bay.wheelArches.${i}.width`, 'archWidth'], [`bay.bay.wheelArches.${i}.height`, 'archHeight']])),
+  'bay.bay.doors.0.offset': 'doorOffset', 'bay.bay.doors.0.width': 'doorWidth', 'bay.bay.doors.1.width': 'bayWidth', sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
   'kitchen.counterMin': 'counterMin', 'kitchen.fridge': 'fridge', 'water.days': 'days', 'water.people': 'people', garageHeight: 'garage', priority: 'priority',
 };
 
@@ -55,6 +67,22 @@ const num = (s: string): number => (s.trim() === '' ? Number.NaN : Number(s.trim
 
 /** The Bay choice that stands for the existing layout's own (measured) bay. */
 const THIS_LAYOUT = 'this-layout';
+/** The Bay choice for a bay measured by hand: the fields the Bay panel uses, validated by the same bay schema. */
+const MEASURED = 'measured';
+
+/**
+ * A measured bay from the form: its length, width and height, a pair of wheel arches alike on both
+ * sides, the side door on the right-hand wall and rear doors across the full width.
+ */
+function measuredBay(v: Values): unknown {
+  const arch = (side: 'left' | 'right') => ({ side, x: num(v.archX), length: num(v.archLength), width: num(v.archWidth), height: num(v.archHeight) });
+  return {
+    length: num(v.bayLength), width: num(v.bayWidth), height: num(v.bayHeight),
+    wheelArches: [arch('left'), arch('right')],
+    doors: [{ id: 'side', wall: 'right', offset: num(v.doorOffset), width: num(v.doorWidth) }, { id: 'rear', wall: 'rear', offset: 0, width: num(v.bayWidth) }],
+    bulkhead: true, cabSeats: 2,
+  };
+}
 
 /** The layout a proposal is made for (its Proposals page): its bay, and the brief read from it. */
 export interface ProposalsFor {
@@ -66,7 +94,9 @@ export interface ProposalsFor {
 
 function toBrief(v: Values, forLayout?: ProposalsFor): unknown {
   return {
-    bay: forLayout && v.template === THIS_LAYOUT ? { source: 'measured', bay: forLayout.bay } : { source: 'template', template: v.template },
+    bay: forLayout && v.template === THIS_LAYOUT ? { source: 'measured', bay: forLayout.bay }
+      : v.template === MEASURED ? { source: 'measured', bay: measuredBay(v) }
+        : { source: 'template', template: v.template },
     sleepers: v.sleepers.split(/[,;\s]+/).filter(Boolean).map(num),
     standing: v.standing.trim() === '' ? null : num(v.standing),
     beltedSeats: num(v.beltedSeats),
@@ -96,8 +126,12 @@ const resolverFor = (forLayout?: ProposalsFor): Resolver<Values> => async (value
   return { values: {}, errors: errors as never };
 };
 
+/** A measured bay's fields start at a common long high-roof van's figures (the designer types their own). */
+const MEASURED_DEFAULTS = { bayLength: '3800', bayWidth: '1800', bayHeight: '2000', archX: '2050', archLength: '950', archWidth: '210', archHeight: '320', doorOffset: '150', doorWidth: '1200' };
+
 const DEFAULTS: Values = {
   template: 'l3h2',
+  ...MEASURED_DEFAULTS,
   sleepers: TYPICAL_BRIEF.sleepers.join(', '),
   standing: String(TYPICAL_BRIEF.standing ?? ''),
   beltedSeats: '0',
@@ -120,6 +154,7 @@ const DEFAULTS: Values = {
 function valuesOf(b: Brief): Values {
   return {
     template: THIS_LAYOUT,
+    ...MEASURED_DEFAULTS,
     sleepers: b.sleepers.join(', '),
     standing: b.standing === null ? '' : String(b.standing),
     beltedSeats: String(b.beltedSeats),
@@ -145,7 +180,7 @@ export function ProposalsPanel({ templates, forLayout }: { templates: BayTemplat
   const abort = useRef<AbortController | null>(null);
   const [startedAt, setStartedAt] = useState(0);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
-  const { register, handleSubmit, formState } = useForm<Values>({ resolver: resolverFor(forLayout), defaultValues: forLayout ? valuesOf(forLayout.brief) : DEFAULTS });
+  const { register, handleSubmit, formState, watch } = useForm<Values>({ resolver: resolverFor(forLayout), defaultValues: forLayout ? valuesOf(forLayout.brief) : DEFAULTS });
 
   const run = useMutation({
     mutationFn: (v: Values) => {
@@ -191,8 +226,25 @@ export function ProposalsPanel({ templates, forLayout }: { templates: BayTemplat
             <select id="p-template" className="field" {...register('template')}>
               {forLayout && <option value={THIS_LAYOUT}>This layout’s bay — {forLayout.bay.length} × {forLayout.bay.width} × {forLayout.bay.height} mm</option>}
               {templates.map((t) => <option key={t.id} value={t.id}>{t.name} — {t.bay.length} × {t.bay.width} × {t.bay.height} mm</option>)}
+              <option value={MEASURED}>My own measurements</option>
             </select>
           </div>
+          {watch('template') === MEASURED && (
+            <fieldset className="col-span-2 grid grid-cols-3 gap-3">
+              <legend className="label">Bare-metal load space, wheel arches (both sides) and side door, mm</legend>
+              {([
+                ['bayLength', 'Length (bulkhead to rear door)'], ['bayWidth', 'Width (wall to wall)'], ['bayHeight', 'Height (floor to roof)'],
+                ['archX', 'Arch from bulkhead'], ['archLength', 'Arch length'], ['archWidth', 'Arch stands in from wall'], ['archHeight', 'Arch height'],
+                ['doorOffset', 'Side door from bulkhead'], ['doorWidth', 'Side door opening'],
+              ] as const).map(([key, label]) => (
+                <div key={key}>
+                  <label className="text-xs text-ink-soft" htmlFor={`p-${key}`}>{label}</label>
+                  <input id={`p-${key}`} className="field font-mono" inputMode="numeric" {...register(key)} />
+                  {error(key)}
+                </div>
+              ))}
+            </fieldset>
+          )}
           <div>
             <label className="label" htmlFor="p-sleepers">Sleepers’ statures (mm)</label>
             <input id="p-sleepers" className="field font-mono" placeholder="1800, 1650" {...register('sleepers')} />
