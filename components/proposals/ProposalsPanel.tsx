@@ -58,10 +58,19 @@ const FRIDGE_WORDS: Record<Brief['kitchen']['fridge'], string> = { none: 'None',
 /** Which form field a brief path belongs to. */
 const FIELD_OF: Record<string, keyof Values> = {
   'bay.template': 'template', 'bay.bay.length': 'bayLength', 'bay.bay.width': 'bayWidth', 'bay.bay.height': 'bayHeight',
-  ...Object.fromEntries([0, 1].flatMap((i) => [[`bay.bay.wheelArches.${i}.x`, 'archX'], [`bay.bay.wheelArches.${i}.length`, 'archLength'], [`bay.bay.wheelArches.${i}.width`, 'archWidth'], [`bay.bay.wheelArches.${i}.height`, 'archHeight']])),
-  'bay.bay.doors.0.offset': 'doorOffset', 'bay.bay.doors.0.width': 'doorWidth', 'bay.bay.doors.1.width': 'bayWidth', sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
+ sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
   'kitchen.counterMin': 'counterMin', 'kitchen.fridge': 'fridge', 'water.days': 'days', 'water.people': 'people', garageHeight: 'garage', priority: 'priority',
 };
+
+/** A measured bay's arch and door fields, by the last step of an issue's path (both arches share their fields). */
+const ARCH_FIELD: Record<string, keyof Values> = { x: 'archX', length: 'archLength', width: 'archWidth', height: 'archHeight' };
+const DOOR_FIELD: Record<string, keyof Values> = { offset: 'doorOffset', width: 'doorWidth' };
+function measuredField(path: string[]): keyof Values | undefined {
+  if (path[0] !== 'bay' || path[1] !== 'bay') return undefined;
+  if (path[2] === 'wheelArches') return ARCH_FIELD[path[4]];
+  if (path[2] === 'doors') return path[3] === '0' ? DOOR_FIELD[path[4]] : 'bayWidth';
+  return undefined;
+}
 
 const num = (s: string): number => (s.trim() === '' ? Number.NaN : Number(s.trim()));
 
@@ -120,7 +129,7 @@ const resolverFor = (forLayout?: ProposalsFor): Resolver<Values> => async (value
   const errors: Record<string, { type: string; message: string }> = {};
   for (const issue of parsed.error.issues) {
     const path = issue.path.map(String);
-    const key = FIELD_OF[path.join('.')] ?? FIELD_OF[path[0]] ?? (path[0] === 'sleepers' ? 'sleepers' : undefined);
+    const key = FIELD_OF[path.join('.')] ?? measuredField(path) ?? FIELD_OF[path[0]] ?? (path[0] === 'sleepers' ? 'sleepers' : undefined);
     if (key && !errors[key]) errors[key] = { type: 'brief', message: issue.message };
   }
   return { values: {}, errors: errors as never };
