@@ -370,14 +370,15 @@ async function nextVariantName(studioId: string, base: string): Promise<string> 
 /**
  * Duplicates a layout as a variant: its current document under "… variant N", for the same client,
  * linked to its original (a variant of a variant links to the same original). Revisions, mark-ups,
- * files and quotes stay with the layout they belong to.
+ * files and quotes stay with the layout they belong to. With `doc` (already validated: a proposal
+ * for this layout) the variant holds that document instead of a copy.
  */
-export async function duplicateAsVariant(actor: Actor, id: string, name?: string): Promise<LayoutDto> {
+export async function duplicateAsVariant(actor: Actor, id: string, name?: string, doc?: LayoutDoc): Promise<LayoutDto> {
   const source = await loadLayoutFor(actor, id, { withDoc: true, forEdit: 'duplicate layouts' });
   const db = await getDb();
   const [meta] = await db.select({ variantOf: layouts.variantOf }).from(layouts).where(eq(layouts.id, source.id)).limit(1);
   const variantName = name ?? (await nextVariantName(actor.studioId, source.name));
-  return createLayout(actor, { name: variantName, doc: source.doc, clientId: source.clientId, variantOf: meta?.variantOf ?? source.id });
+  return createLayout(actor, { name: variantName, doc: doc ? { ...doc, name: variantName } : source.doc, clientId: source.clientId, variantOf: meta?.variantOf ?? source.id });
 }
 
 /**

@@ -1,6 +1,6 @@
 'use client';
 /**
- * The row action menu of the layouts table: open, rename, duplicate as a variant, compare
+ * The row action menu of the layouts table: open, rename, duplicate as a variant, proposals from a brief (as variants), compare
  * variants, saved versions, archive or restore, delete. A menu button with arrow keys, Home/End,
  * Escape (focus goes back to the button) and Tab to leave. A layout whose quote has a deposit
  * payment cannot be deleted (the server answers 409); the confirmation then says so and offers to
@@ -11,7 +11,7 @@ import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import Link from 'next/link';
 import { toast } from 'sonner';
 import { useQueryClient } from '@tanstack/react-query';
-import { Archive, ArchiveRestore, Columns2, Copy, FolderOpen, History, MoreHorizontal, PencilLine, Trash2 } from 'lucide-react';
+import { Archive, ArchiveRestore, Columns2, Copy, FolderOpen, History, Lightbulb, MoreHorizontal, PencilLine, Trash2 } from 'lucide-react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { LayoutSummaryDto } from '@/db/layouts';
@@ -96,6 +96,11 @@ export function LayoutRowActions({ layout, canEdit }: { layout: LayoutSummaryDto
             <button role="menuitem" type="button" className={item} onClick={() => { setOpen(false); void duplicate(); }}>
               <Copy size={14} aria-hidden="true" /> Duplicate as variant
             </button>
+          )}
+          {canEdit && !archived && (
+            <Link role="menuitem" href={`/layouts/${layout.id}/proposals`} className={item} onClick={() => setOpen(false)}>
+              <Lightbulb size={14} aria-hidden="true" /> Proposals from a brief
+            </Link>
           )}
           <Link role="menuitem" href={`/layouts/${layout.id}/compare`} className={item} onClick={() => setOpen(false)}>
             <Columns2 size={14} aria-hidden="true" /> Compare variants

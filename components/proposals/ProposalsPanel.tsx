@@ -1,7 +1,8 @@
 'use client';
 // Proposals from a client's brief: the brief form, progress while the server lays out and checks
 // the candidates (cancellable), the proposals side by side as small plans with their figures and
-// explained scores, "Open as a new layout" through the ordinary create route — or, when nothing
+// explained scores, "Open as a new layout" through the ordinary create route (on an existing
+// layout's Proposals page: "Open as a variant of this layout", its variants route) — or, when nothing
 // fits, the reasons and the nearest candidates with what they miss.
 import { useEffect, useRef, useState } from 'react';
 import { useRouter } from 'next/navigation';
@@ -9,7 +10,10 @@ import { useForm, type Resolver } from 'react-hook-form';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
+import { NDJSON, readProgressStream } from '@/lib/api/progress-stream';
+import { formatNumber } from '@/lib/format';
 import type { LayoutDto } from '@/db/layouts';
+import type { Bay } from '@/lib/layout/schema';
 import {
   BED_PREFERENCE_WORDS, BED_PREFERENCES, briefSchema, FRIDGE_SIZES, MATTRESS_CLASSES, PRIORITIES, PRIORITY_WORDS, TYPICAL_BRIEF, type Brief,
 } from '@/lib/proposals/brief';
@@ -19,7 +23,17 @@ import { PlanThumbnail } from './PlanThumbnail';
 import type { BayTemplateChoice } from '@/components/layouts/NewLayoutForm';
 
 interface Values {
+  /** A bay template's id, THIS_LAYOUT, or MEASURED (the fields below). */
   template: string;
+  bayLength: string;
+  bayWidth: string;
+  bayHeight: string;
+  archX: string;
+  archLength: string;
+  archWidth: string;
+  archHeight: string;
+  doorOffset: string;
+  doorWidth: string;
   sleepers: string;
   standing: string;
   beltedSeats: string;
@@ -43,15 +57,55 @@ const FRIDGE_WORDS: Record<Brief['kitchen']['fridge'], string> = { none: 'None',
 
 /** Which form field a brief path belongs to. */
 const FIELD_OF: Record<string, keyof Values> = {
-  'bay.template': 'template', sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
+  'bay.template': 'template', 'bay.bay.length': 'bayLength', 'bay.bay.width': 'bayWidth', 'bay.bay.height': 'bayHeight',
+ sleepers: 'sleepers', standing: 'standing', beltedSeats: 'beltedSeats', bed: 'bed', mattress: 'mattress',
   'kitchen.counterMin': 'counterMin', 'kitchen.fridge': 'fridge', 'water.days': 'days', 'water.people': 'people', garageHeight: 'garage', priority: 'priority',
 };
 
+/** A measured bay's arch and door fields, by the last step of an issue's path (both arches share their fields). */
+const ARCH_FIELD: Record<string, keyof Values> = { x: 'archX', length: 'archLength', width: 'archWidth', height: 'archHeight' };
+const DOOR_FIELD: Record<string, keyof Values> = { offset: 'doorOffset', width: 'doorWidth' };
+function measuredField(path: string[]): keyof Values | undefined {
+  if (path[0] !== 'bay' || path[1] !== 'bay') return undefined;
+  if (path[2] === 'wheelArches') return ARCH_FIELD[path[4]];
+  if (path[2] === 'doors') return path[3] === '0' ? DOOR_FIELD[path[4]] : 'bayWidth';
+  return undefined;
+}
+
 const num = (s: string): number => (s.trim() === '' ? Number.NaN : Number(s.trim()));
 
-function toBrief(v: Values): unknown {
+/** The Bay choice that stands for the existing layout's own (measured) bay. */
+const THIS_LAYOUT = 'this-layout';
+/** The Bay choice for a bay measured by hand: the fields the Bay panel uses, validated by the same bay schema. */
+const MEASURED = 'measured';
+
+/**
+ * A measured bay from the form: its length, width and height, a pair of wheel arches alike on both
+ * sides, the side door on the right-hand wall and rear doors across the full width.
+ */
+function measuredBay(v: Values): unknown {
+  const arch = (side: 'left' | 'right') => ({ side, x: num(v.archX), length: num(v.archLength), width: num(v.archWidth), height: num(v.archHeight) });
   return {
-    bay: { source: 'template', template: v.template },
+    length: num(v.bayLength), width: num(v.bayWidth), height: num(v.bayHeight),
+    wheelArches: [arch('left'), arch('right')],
+    doors: [{ id: 'side', wall: 'right', offset: num(v.doorOffset), width: num(v.doorWidth) }, { id: 'rear', wall: 'rear', offset: 0, width: num(v.bayWidth) }],
+    bulkhead: true, cabSeats: 2,
+  };
+}
+
+/** The layout a proposal is made for (its Proposals page): its bay, and the brief read from it. */
+export interface ProposalsFor {
+  id: string;
+  name: string;
+  bay: Bay;
+  brief: Brief;
+}
+
+function toBrief(v: Values, forLayout?: ProposalsFor): unknown {
+  return {
+    bay: forLayout && v.template === THIS_LAYOUT ? { source: 'measured', bay: forLayout.bay }
+      : v.template === MEASURED ? { source: 'measured', bay: measuredBay(v) }
+        : { source: 'template', template: v.template },
     sleepers: v.sleepers.split(/[,;\s]+/).filter(Boolean).map(num),
     standing: v.standing.trim() === '' ? null : num(v.standing),
     beltedSeats: num(v.beltedSeats),
@@ -69,20 +123,24 @@ function toBrief(v: Values): unknown {
 }
 
 /** The brief's own schema decides; its messages land beside the field they concern. */
-const resolver: Resolver<Values> = async (values) => {
-  const parsed = briefSchema.safeParse(toBrief(values));
+const resolverFor = (forLayout?: ProposalsFor): Resolver<Values> => async (values) => {
+  const parsed = briefSchema.safeParse(toBrief(values, forLayout));
   if (parsed.success) return { values, errors: {} };
   const errors: Record<string, { type: string; message: string }> = {};
   for (const issue of parsed.error.issues) {
     const path = issue.path.map(String);
-    const key = FIELD_OF[path.join('.')] ?? FIELD_OF[path[0]] ?? (path[0] === 'sleepers' ? 'sleepers' : undefined);
+    const key = FIELD_OF[path.join('.')] ?? measuredField(path) ?? FIELD_OF[path[0]] ?? (path[0] === 'sleepers' ? 'sleepers' : undefined);
     if (key && !errors[key]) errors[key] = { type: 'brief', message: issue.message };
   }
   return { values: {}, errors: errors as never };
 };
 
+/** A measured bay's fields start at a common long high-roof van's figures (the designer types their own). */
+const MEASURED_DEFAULTS = { bayLength: '3800', bayWidth: '1800', bayHeight: '2000', archX: '2050', archLength: '950', archWidth: '210', archHeight: '320', doorOffset: '150', doorWidth: '1200' };
+
 const DEFAULTS: Values = {
   template: 'l3h2',
+  ...MEASURED_DEFAULTS,
   sleepers: TYPICAL_BRIEF.sleepers.join(', '),
   standing: String(TYPICAL_BRIEF.standing ?? ''),
   beltedSeats: '0',
@@ -101,18 +159,44 @@ const DEFAULTS: Values = {
   priority: 'floor',
 };
 
-export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }) {
+/** The form's values for a brief read from a layout. */
+function valuesOf(b: Brief): Values {
+  return {
+    template: THIS_LAYOUT,
+    ...MEASURED_DEFAULTS,
+    sleepers: b.sleepers.join(', '),
+    standing: b.standing === null ? '' : String(b.standing),
+    beltedSeats: String(b.beltedSeats),
+    bed: b.bed,
+    mattress: b.mattress,
+    counterMin: String(b.kitchen.counterMin),
+    sink: b.kitchen.sink,
+    hob: b.kitchen.hob,
+    fridge: b.kitchen.fridge,
+    days: String(b.water.days),
+    people: String(b.water.people),
+    toilet: b.toilet,
+    shower: b.shower,
+    fuel: b.fuel,
+    garage: b.garageHeight === null ? '' : String(b.garageHeight),
+    priority: b.priority,
+  };
+}
+
+export function ProposalsPanel({ templates, forLayout }: { templates: BayTemplateChoice[]; forLayout?: ProposalsFor }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const abort = useRef<AbortController | null>(null);
   const [startedAt, setStartedAt] = useState(0);
-  const { register, handleSubmit, formState } = useForm<Values>({ resolver, defaultValues: DEFAULTS });
+  const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
+  const { register, handleSubmit, formState, watch } = useForm<Values>({ resolver: resolverFor(forLayout), defaultValues: forLayout ? valuesOf(forLayout.brief) : DEFAULTS });
 
   const run = useMutation({
     mutationFn: (v: Values) => {
       abort.current = new AbortController();
       setStartedAt(Date.now());
-      return apiFetch<ProposalResult>('/api/proposals', { method: 'POST', json: toBrief(v), signal: abort.current.signal });
+      setProgress(null);
+      return fetchProposals(toBrief(v, forLayout), abort.current.signal, (done, total) => setProgress({ done, total }));
     },
     onError: (err) => {
       if (err instanceof DOMException && err.name === 'AbortError') toast('Proposals cancelled.');
@@ -121,7 +205,9 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
   });
 
   const open = useMutation({
-    mutationFn: (p: Proposal) => apiFetch<LayoutDto>('/api/layouts', { method: 'POST', json: { name: p.title, doc: p.doc } }),
+    mutationFn: (p: Proposal) => forLayout
+      ? apiFetch<LayoutDto>(`/api/layouts/${forLayout.id}/variants`, { method: 'POST', json: { doc: p.doc } })
+      : apiFetch<LayoutDto>('/api/layouts', { method: 'POST', json: { name: p.title, doc: p.doc } }),
     onSuccess: (layout) => {
       queryClient.invalidateQueries({ queryKey: ['layouts'] });
       toast.success(`Created “${layout.name}”`);
@@ -147,9 +233,27 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
           <div className="col-span-2">
             <label className="label" htmlFor="p-template">Bay</label>
             <select id="p-template" className="field" {...register('template')}>
+              {forLayout && <option value={THIS_LAYOUT}>This layout’s bay — {forLayout.bay.length} × {forLayout.bay.width} × {forLayout.bay.height} mm</option>}
               {templates.map((t) => <option key={t.id} value={t.id}>{t.name} — {t.bay.length} × {t.bay.width} × {t.bay.height} mm</option>)}
+              <option value={MEASURED}>My own measurements</option>
             </select>
           </div>
+          {watch('template') === MEASURED && (
+            <fieldset className="col-span-2 grid grid-cols-3 gap-3">
+              <legend className="label">Bare-metal load space, wheel arches (both sides) and side door, mm</legend>
+              {([
+                ['bayLength', 'Length (bulkhead to rear door)'], ['bayWidth', 'Width (wall to wall)'], ['bayHeight', 'Height (floor to roof)'],
+                ['archX', 'Arch from bulkhead'], ['archLength', 'Arch length'], ['archWidth', 'Arch stands in from wall'], ['archHeight', 'Arch height'],
+                ['doorOffset', 'Side door from bulkhead'], ['doorWidth', 'Side door opening'],
+              ] as const).map(([key, label]) => (
+                <div key={key}>
+                  <label className="text-xs text-ink-soft" htmlFor={`p-${key}`}>{label}</label>
+                  <input id={`p-${key}`} className="field font-mono" inputMode="numeric" {...register(key)} />
+                  {error(key)}
+                </div>
+              ))}
+            </fieldset>
+          )}
           <div>
             <label className="label" htmlFor="p-sleepers">Sleepers’ statures (mm)</label>
             <input id="p-sleepers" className="field font-mono" placeholder="1800, 1650" {...register('sleepers')} />
@@ -233,7 +337,7 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
           <button type="submit" className="btn-primary" disabled={run.isPending}>{run.isPending ? 'Proposing…' : 'Propose layouts'}</button>
           {run.isPending && <button type="button" className="btn-quiet" onClick={() => abort.current?.abort()}>Cancel</button>}
         </div>
-        {run.isPending && <Progress startedAt={startedAt} />}
+        {run.isPending && <Progress startedAt={startedAt} progress={progress} />}
       </form>
 
       {result && result.ok && (
@@ -261,7 +365,7 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
                     {p.scores.map((s) => <li key={s.metric}><span className="font-semibold">{METRIC_WORDS[s.metric]}</span> {s.points}/100{s.weight > 1 ? ' (counts three times: what matters most)' : ''}: {s.words}</li>)}
                   </ul>
                 </details>
-                <button type="button" className="btn-primary mt-3" disabled={open.isPending} onClick={() => open.mutate(p)}>Open as a new layout</button>
+                <button type="button" className="btn-primary mt-3" disabled={open.isPending} onClick={() => open.mutate(p)}>{forLayout ? 'Open as a variant of this layout' : 'Open as a new layout'}</button>
               </li>
             ))}
           </ul>
@@ -295,7 +399,25 @@ export function ProposalsPanel({ templates }: { templates: BayTemplateChoice[] }
   );
 }
 
-function Progress({ startedAt }: { startedAt: number }) {
+/**
+ * Asks for the proposals as a progress stream (lib/api/progress-stream.ts): the bar follows the
+ * server's count of candidates; aborting the signal closes the request, and the server stops.
+ */
+async function fetchProposals(brief: unknown, signal: AbortSignal, onProgress: (done: number, total: number) => void): Promise<ProposalResult> {
+  const res = await fetch('/api/proposals', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', accept: NDJSON },
+    body: JSON.stringify(brief),
+    signal,
+  });
+  if (!res.ok) {
+    const body = await res.json().catch(() => ({}));
+    throw new ApiError(res.status, body.error ?? `Request failed (${res.status})`, body);
+  }
+  return readProgressStream<ProposalResult>(res, onProgress);
+}
+
+function Progress({ startedAt, progress }: { startedAt: number; progress: { done: number; total: number } | null }) {
   const [now, setNow] = useState(startedAt);
   useEffect(() => {
     const timer = setInterval(() => setNow(Date.now()), 250);
@@ -304,8 +426,10 @@ function Progress({ startedAt }: { startedAt: number }) {
   const seconds = Math.max(0, (now - startedAt) / 1000);
   return (
     <div role="status" className="space-y-1 text-sm text-ink-soft">
-      <progress className="w-full" aria-label="Laying out and checking candidates" />
-      <p>Laying out and checking candidate arrangements… {seconds.toFixed(1)} s</p>
+      {progress && progress.total > 0
+        ? <progress className="w-full" aria-label="Laying out and checking candidates" max={progress.total} value={progress.done} />
+        : <progress className="w-full" aria-label="Laying out and checking candidates" />}
+      <p>Laying out and checking candidate arrangements{progress ? `: ${formatNumber(progress.done)} of ${formatNumber(progress.total)}` : '…'} {seconds.toFixed(1)} s</p>
     </div>
   );
 }

@@ -4,11 +4,17 @@
 import { useState } from 'react';
 import dynamic from 'next/dynamic';
 import type { BayTemplateChoice } from '@/components/layouts/NewLayoutForm';
+import type { ProposalsFor } from './ProposalsPanel';
 
 const ProposalsPanel = dynamic(() => import('./ProposalsPanel').then((m) => m.ProposalsPanel), {
   ssr: false,
   loading: () => <p role="status" className="text-sm text-ink-soft">Opening the brief…</p>,
 });
+
+/** The brief form on an existing layout's Proposals page, open at once and filled in from the layout. */
+export function LayoutProposals({ templates, forLayout }: { templates: BayTemplateChoice[]; forLayout: ProposalsFor }) {
+  return <ProposalsPanel templates={templates} forLayout={forLayout} />;
+}
 
 export function ProposalsSection({ templates }: { templates: BayTemplateChoice[] }) {
   const [open, setOpen] = useState(false);

@@ -24,6 +24,8 @@ export class CheckContext {
   /** Shared by every rule family of this run. */
   readonly budget: WorkBudget;
   private readonly floors = new Map<Arrangement, FloorAnalysis>();
+  /** Which modules each analysed arrangement holds (document indices): equal sets give equal floors. */
+  private readonly presence = new Map<string, FloorAnalysis>();
   private bedsCache?: Bed[];
 
   constructor(readonly doc: LayoutDoc, readonly settings: CheckSettings) {
@@ -37,12 +39,23 @@ export class CheckContext {
     return this.doc.modules.filter((m) => inArrangement(m, arrangement) && m.elevation >= RULE_CONSTANTS.floorBlockBelow && m.elevation < standing);
   }
 
-  /** The walkway person's free floor in one arrangement (disk of diameter walkwayMin). */
+  /**
+   * The walkway person's free floor in one arrangement (disk of diameter walkwayMin). The analysis
+   * depends only on which modules the arrangement holds (its obstacles, the fronts to reach, what
+   * hangs at head height), so two arrangements holding the same modules — travel and lounge in most
+   * layouts — share one: its model, its sweeps, and what walkway.width measures on it.
+   */
   floor(arrangement: Arrangement): FloorAnalysis {
     let a = this.floors.get(arrangement);
     if (!a) {
-      const queried: Rect[] = this.headHeightModules(arrangement).map(moduleRect);
-      a = analyseFloor(this.doc, this.t, arrangement, { radius: this.settings.walkwayMin / 2, queried, budget: this.budget });
+      const key = this.doc.modules.map((m, i) => (inArrangement(m, arrangement) ? i : -1)).filter((i) => i >= 0).join(',');
+      const twin = this.presence.get(key);
+      if (twin) a = { ...twin, arrangement };
+      else {
+        const queried: Rect[] = this.headHeightModules(arrangement).map(moduleRect);
+        a = analyseFloor(this.doc, this.t, arrangement, { radius: this.settings.walkwayMin / 2, queried, budget: this.budget });
+        this.presence.set(key, a);
+      }
       this.floors.set(arrangement, a);
     }
     return a;

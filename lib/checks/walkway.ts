@@ -80,7 +80,21 @@ interface Probe {
  * in a narrower span — only where a diagonal squeeze hides between sweep columns could a wider
  * one pass, and there the engine errs on the safe side anyway. Otherwise bisection in whole mm.
  */
+/** Widest passages already measured on a model (arrangements holding the same modules share one: CheckContext.floor). */
+const measuredPassages = new WeakMap<FloorAnalysis['model'], Map<string, { diameter: number; cutOff: string[] }>>();
+
 function widestPassage(a: FloorAnalysis, lo: number, hi: number): { diameter: number; cutOff: string[] } {
+  let known = measuredPassages.get(a.model);
+  if (!known) measuredPassages.set(a.model, (known = new Map()));
+  const key = `${lo},${hi}`;
+  const found = known.get(key);
+  if (found) return found;
+  const result = measurePassage(a, lo, hi);
+  known.set(key, result);
+  return result;
+}
+
+function measurePassage(a: FloorAnalysis, lo: number, hi: number): { diameter: number; cutOff: string[] } {
   const wanted = a.targets.filter((t) => t.reached);
   const cache = new Map<number, Probe>();
   const probe = (d: number): Probe => {

@@ -22,7 +22,7 @@ import { bayTemplate, DEFAULT_BUILD_UP } from '../layout/templates';
 import { BED_PREFERENCE_WORDS, mattressOfClass, type Brief } from './brief';
 import { frameOf, unmirror, type Frame } from './frame';
 import { toModule, type Part } from './parts';
-import { layOut, PATTERNS, patternsFor, type LayoutMiss, type PatternId, type Variant } from './patterns';
+import { isLounge, layOut, PATTERNS, patternsFor, type LayoutMiss, type PatternId, type Variant } from './patterns';
 import { figuresOf, scoreAll, type Figures, type Score } from './score';
 import { explainFinding, explainMiss, type Reason } from './reasons';
 
@@ -82,6 +82,16 @@ export interface GenerateOptions {
   maxCandidates?: number;
   /** Told how far the search is, every 50 candidates (the worker passes it on). */
   onProgress?: (done: number, total: number) => void;
+  /** Read before each candidate: true stops the search with `ProposalsCancelledError`. */
+  cancelled?: () => boolean;
+}
+
+/** The search was stopped because the caller cancelled it. */
+export class ProposalsCancelledError extends Error {
+  constructor() {
+    super('The proposals were cancelled.');
+    this.name = 'JobCancelled';
+  }
 }
 
 /** The bay a brief names: a template by id, or the measured bay. Throws a RangeError for an unknown template. */
@@ -108,9 +118,9 @@ export function variantsFor(brief: Brief): Variant[] {
   const out: Variant[] = [];
   const walls = ['left', 'right'] as const;
   const hasWet = brief.toilet || brief.shower;
-  for (const pattern of patternsFor(brief.bed)) {
+  for (const pattern of patternsFor(brief.bed, brief.sleepers.length)) {
     for (const bedStep of [0, 1, 2]) {
-      for (const raised of pattern === 'rear-lounge' || brief.garageHeight !== null ? [false] : [false, true]) {
+      for (const raised of isLounge(pattern) || brief.garageHeight !== null ? [false] : [false, true]) {
         for (const kitchenWall of walls) {
           for (const wetWall of hasWet ? walls : (['left'] as const)) {
             for (const wetFirst of hasWet && kitchenWall === wetWall ? [false, true] : [false]) {
@@ -132,7 +142,7 @@ export function variantsFor(brief: Brief): Variant[] {
 
 function zoningOf(v: Variant, hasWet: boolean, bedAcross: boolean): { key: string; words: string } {
   const wall = (w: 'left' | 'right') => (w === 'left' ? 'left-hand wall' : 'door side');
-  const bed = v.pattern === 'rear-lounge' ? `made up ${bedAcross ? 'across' : 'lengthways'}` : PATTERNS[v.pattern].bed;
+  const bed = `${isLounge(v.pattern) ? `made up ${bedAcross ? 'across' : 'lengthways'}` : PATTERNS[v.pattern].bed}${PATTERNS[v.pattern].levels === 2 ? (isLounge(v.pattern) ? ' with a drop-down bed over it' : ' with a bunk over it') : ''}`;
   return {
     key: `${v.pattern}|${bedAcross}|${v.kitchenWall}|${hasWet ? v.wetWall : '-'}|${v.appliances === 'apart'}`,
     words: `Bed ${bed}; kitchen on the ${wall(v.kitchenWall)}${v.appliances === 'apart' ? ', fridge and gas locker across from it' : ''}${hasWet ? `; wet room on the ${wall(v.wetWall)}` : ''}`,
@@ -193,6 +203,7 @@ export function generateProposals(brief: Brief, options: GenerateOptions = {}): 
   let checked = 0;
   let notLaidOut = 0;
   for (let n = 0; n < order.length && checked < limit; n++) {
+    if (options.cancelled?.()) throw new ProposalsCancelledError();
     if (n % 50 === 0) options.onProgress?.(Math.min(n, limit), Math.min(order.length, limit));
     const v = all[order[n]];
     const laid = layOut(f, brief, v);

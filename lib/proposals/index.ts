@@ -5,6 +5,7 @@
  */
 export * from './brief';
 export { generateProposals, briefBay, variantsFor, MAX_CANDIDATES, MAX_PROPOSALS, type Proposal, type NearMiss, type ProposalResult, type ProposalStats } from './generate';
+export { briefFromLayout } from './brief-from-layout';
 export { PATTERNS, patternsFor, freshLitres, type PatternId } from './patterns';
 export { METRIC_WORDS, type Figures, type Score, type Metric } from './score';
 export type { Reason } from './reasons';

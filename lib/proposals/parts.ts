@@ -14,7 +14,7 @@ type ModuleInput = LayoutDocInput['modules'][number];
 export type Role =
   | 'bed' | 'bench-bed' | 'infill' | 'bench' | 'table' | 'seat'
   | 'counter' | 'sink' | 'hob' | 'fridge' | 'gas' | 'wardrobe' | 'locker'
-  | 'fresh' | 'grey' | 'electrics' | 'heater' | 'toilet' | 'shower';
+  | 'fresh' | 'grey' | 'electrics' | 'heater' | 'toilet' | 'shower' | 'ladder';
 
 /**
  * The one place a proposal decides what a module's top is used as, per arrangement it is in: what a

@@ -6,6 +6,11 @@
  * (electrics, heater, tanks) packed under the bed or the benches. A candidate that cannot be laid
  * out comes back with the reason in numbers; one that can is a list of parts for the checks.
  *
+ * Two-level patterns (for three or four sleepers) put a second bed over the rear zone's bed: a
+ * drop-down bed over the lounge (made up in sleep only, raised to the roof by day) or a fixed bunk
+ * over a bed across, each with a ladder in front of it at night, and check first that the roof
+ * leaves room to sit up on both levels.
+ *
  * To add a pattern: add its id to PATTERNS with its words, and a `rear*` function returning the
  * rear zone's parts, where the front zone ends and the slots under it. Sizes are common practice,
  * no source, unless named. Pure: must never import React, Next, the database or the services.
@@ -15,17 +20,31 @@ import { FRIDGE_UNITS, mattressOfClass, type BedPreference, type Brief } from '.
 import { betweenArches, wallSpans, type Frame } from './frame';
 import { ALL, ceil10, inDoorEntry, type Part } from './parts';
 
+/**
+ * `levels`: beds one over the other. A two-level pattern is tried only for three sleepers or more
+ * (`minSleepers`), who would not fit side by side in one bed across a van's width.
+ */
 export const PATTERNS = {
-  'rear-across': { words: 'Fixed bed across the rear', bed: 'across' },
-  'rear-lengthways': { words: 'Fixed bed lengthways at the rear', bed: 'lengthways' },
-  'rear-twin': { words: 'Two single beds lengthways at the rear', bed: 'lengthways' },
-  'rear-lounge': { words: 'Rear lounge that makes up into the bed', bed: 'lounge' },
-} as const satisfies Record<string, { words: string; bed: Exclude<BedPreference, 'any'> }>;
+  'rear-across': { words: 'Fixed bed across the rear', bed: 'across', levels: 1, minSleepers: 1 },
+  'rear-lengthways': { words: 'Fixed bed lengthways at the rear', bed: 'lengthways', levels: 1, minSleepers: 1 },
+  'rear-twin': { words: 'Two single beds lengthways at the rear', bed: 'lengthways', levels: 1, minSleepers: 1 },
+  'rear-lounge': { words: 'Rear lounge that makes up into the bed', bed: 'lounge', levels: 1, minSleepers: 1 },
+  'lounge-drop-down': { words: 'Rear lounge with a drop-down bed over it', bed: 'lounge', levels: 2, minSleepers: 3 },
+  'across-bunk': { words: 'Fixed bed across with a bunk over it', bed: 'across', levels: 2, minSleepers: 3 },
+} as const satisfies Record<string, { words: string; bed: Exclude<BedPreference, 'any'>; levels: 1 | 2; minSleepers: number }>;
 export type PatternId = keyof typeof PATTERNS;
 
-export function patternsFor(pref: BedPreference): PatternId[] {
-  const all = Object.keys(PATTERNS) as PatternId[];
+export function patternsFor(pref: BedPreference, sleepers = 1): PatternId[] {
+  const all = (Object.keys(PATTERNS) as PatternId[]).filter((p) => sleepers >= PATTERNS[p].minSleepers);
   return pref === 'any' ? all : all.filter((p) => PATTERNS[p].bed === pref);
+}
+
+/** The rear zone makes up from the lounge benches (with or without a bed over it). */
+export const isLounge = (p: PatternId): boolean => PATTERNS[p].bed === 'lounge';
+
+/** Sleepers on the lower bed of a two-level pattern: the larger half; the rest sleep above. */
+export function lowerSleepers(brief: Brief, p: PatternId): number {
+  return PATTERNS[p].levels === 2 ? Math.ceil(brief.sleepers.length / 2) : brief.sleepers.length;
 }
 
 export interface Variant {
@@ -74,6 +93,16 @@ export const SIZES = {
   tankHeight: 300,
   perSleeperWidth: 600,
   bedAllowance: 100,
+  /** A drop-down bed or bunk: a thin platform and mattress. */
+  upperBedThickness: 150,
+  /**
+   * Clear room over each level of a two-level bed: sitting up with the head bowed, as bunks are
+   * built (common practice, no source). The check engine warns below the 965 mm sitting height
+   * (sleep.headroom, Bodyspace Table 10.1, from memory), so these proposals say "lying down only".
+   */
+  levelHeadroom: 750,
+  /** A hook-on ladder in front of the upper bed, at night. */
+  ladder: { along: 300, across: 400 },
 } as const;
 
 /** Why a candidate could not be laid out: the rule in words and both numbers. */
@@ -112,7 +141,7 @@ function bedElevation(f: Frame, brief: Brief, v: Variant): number {
 
 function rearAcross(f: Frame, brief: Brief, v: Variant, E: number): Rear {
   const mattress = mattressOfClass(brief.mattress);
-  const depth = ceil10(Math.max(SIZES.perSleeperWidth * brief.sleepers.length, mattress?.width ?? 0, 700)) + v.bedStep * 100;
+  const depth = ceil10(Math.max(SIZES.perSleeperWidth * lowerSleepers(brief, v.pattern), mattress?.width ?? 0, 700)) + v.bedStep * 100;
   const x0 = f.L - depth;
   const bed: Part = { role: 'bed', kind: 'bed-platform', label: 'Bed across', x: x0, y: f.Y0, length: depth, width: f.Y1 - f.Y0, elevation: E, height: SIZES.bedThickness, facing: 'front', arrangements: ALL };
   const [y0, y1] = betweenArches(f, x0, f.L);
@@ -161,11 +190,11 @@ function rearLounge(f: Frame, brief: Brief, v: Variant): Rear {
   // Benches long enough to sleep along when the lined width is too short to sleep across.
   const across = tallest + SIZES.bedAllowance <= lined && (mattress ? mattress.length <= lined : true);
   const base = across
-    ? Math.max(1200, SIZES.perSleeperWidth * brief.sleepers.length, mattress?.width ?? 0)
+    ? Math.max(1200, SIZES.perSleeperWidth * lowerSleepers(brief, v.pattern), mattress?.width ?? 0)
     : Math.max(tallest + SIZES.bedAllowance, mattress?.length ?? 0);
   const length = ceil10(base) + v.bedStep * 100;
   const x0 = f.L - length;
-  const E = Math.max(f.archClearElevation, 300);
+  const E = loungeElevation(f);
   const d = SIZES.benchDepth;
   const bench = (side: 'left' | 'right'): Part => ({
     role: 'bench-bed', kind: 'bench-seat', label: side === 'left' ? 'Lounge bench, left' : 'Lounge bench, right',
@@ -186,6 +215,36 @@ function rearLounge(f: Frame, brief: Brief, v: Variant): Rear {
     bedAcross: lined >= length,
   };
 }
+
+/**
+ * The second level over a rear zone: the upper bed over the lower one's outline, its underside
+ * levelHeadroom above the lower mattress, and a ladder in front of it at night (its top is above
+ * the 800 mm climb height, egress.sleep), centred across the van so the walkway passes beside it;
+ * the wall runs stop short of the ladder.
+ */
+function secondLevel(f: Frame, rear: Rear, lowerTop: number, dropDown: boolean): Rear {
+  const lower = rear.parts.filter((p) => p.role === 'bed' || p.role === 'bench-bed' || p.role === 'infill');
+  const x0 = Math.min(...lower.map((p) => p.x)), x1 = Math.max(...lower.map((p) => p.x + p.length));
+  const y0 = Math.min(...lower.map((p) => p.y)), y1 = Math.max(...lower.map((p) => p.y + p.width));
+  const U = lowerTop + SIZES.levelHeadroom;
+  const upper: Part = {
+    role: 'bed', kind: 'bed-platform', label: dropDown ? 'Drop-down bed' : 'Upper bunk', x: x0, y: y0, length: x1 - x0, width: y1 - y0,
+    elevation: U, height: SIZES.upperBedThickness, facing: 'front', arrangements: dropDown ? ['sleep'] : ALL,
+  };
+  const { along, across } = SIZES.ladder;
+  const ladder: Part = {
+    role: 'ladder', kind: 'step', label: 'Ladder', x: x0 - along, y: (f.Y0 + f.Y1) / 2 - across / 2, length: along, width: across,
+    elevation: 0, height: U + SIZES.upperBedThickness, facing: 'front', arrangements: ['sleep'],
+  };
+  return { ...rear, parts: [...rear.parts, upper, ladder], frontEnd: x0 - along };
+}
+
+/** The top of the lower mattress of a pattern's rear zone, mm above the finished floor. */
+function lowerTopOf(f: Frame, brief: Brief, v: Variant): number {
+  return isLounge(v.pattern) ? loungeElevation(f) + SIZES.benchBoard : bedElevation(f, brief, v) + SIZES.bedThickness;
+}
+
+const loungeElevation = (f: Frame) => Math.max(f.archClearElevation, 300);
 
 interface RunItem {
   what: string;
@@ -426,13 +485,22 @@ function packServices(f: Frame, brief: Brief, slots: Slot[]): { parts: Part[]; m
 /** Lays out one candidate: the rear zone of its pattern, then the walls, then the services. */
 export function layOut(f: Frame, brief: Brief, v: Variant): Laid {
   const E = bedElevation(f, brief, v);
-  if (v.pattern !== 'rear-lounge') {
+  const twoLevels = PATTERNS[v.pattern].levels === 2;
+  if (twoLevels) {
+    const lowerTop = lowerTopOf(f, brief, v);
+    const need = lowerTop + SIZES.levelHeadroom + SIZES.upperBedThickness + SIZES.levelHeadroom;
+    if (f.clear < need) {
+      const lower = isLounge(v.pattern) ? 'the lounge made up' : `the fixed bed${brief.garageHeight !== null ? ` over the ${brief.garageHeight} mm garage` : ''}`;
+      return miss('sitting headroom on two levels', f.clear, need, 'mm', `Two beds one over the other need ${need} mm of clear height: ${lower} with its mattress top ${lowerTop} mm up, ${SIZES.levelHeadroom} mm over it to sit up with the head bowed, the ${SIZES.upperBedThickness} mm upper bed and ${SIZES.levelHeadroom} mm over that (common practice, no source); the clear height here is ${f.clear} mm after the floor and roof build-up.`);
+    }
+  } else if (!isLounge(v.pattern)) {
     const top = E + SIZES.bedThickness;
     if (f.clear - top < SIZES.sitUpHeadroom) {
       return miss('sitting headroom over the bed', f.clear - top, SIZES.sitUpHeadroom, 'mm', `A fixed bed ${E} mm up${brief.garageHeight !== null ? ` (the ${brief.garageHeight} mm garage under it)` : ''} with a ${SIZES.bedThickness} mm platform and mattress leaves ${f.clear - top} mm to sit up in under the ${f.clear} mm clear height; sitting up needs ${SIZES.sitUpHeadroom} mm (common practice, no source).`);
     }
   }
-  const rear = v.pattern === 'rear-across' ? rearAcross(f, brief, v, E) : v.pattern === 'rear-lengthways' ? rearLengthways(f, brief, v, E) : v.pattern === 'rear-twin' ? rearTwin(f, brief, v, E) : rearLounge(f, brief, v);
+  const single = v.pattern === 'rear-across' || v.pattern === 'across-bunk' ? rearAcross(f, brief, v, E) : v.pattern === 'rear-lengthways' ? rearLengthways(f, brief, v, E) : v.pattern === 'rear-twin' ? rearTwin(f, brief, v, E) : rearLounge(f, brief, v);
+  const rear = single && twoLevels ? secondLevel(f, single, lowerTopOf(f, brief, v), v.pattern === 'lounge-drop-down') : single;
   if (!rear) return miss('two single beds', brief.sleepers.length, 2, 'sleepers', 'Two single beds with a walkway between them are laid out for exactly two sleepers, each bed 600 mm wide with at least 450 mm between.');
   if (rear.frontEnd < 0) {
     return miss('bay length', f.L, f.L - rear.frontEnd, 'mm', `The ${PATTERNS[v.pattern].words.toLowerCase()} needs ${f.L - rear.frontEnd} mm of the bay's length; the bay is ${f.L} mm long.`);

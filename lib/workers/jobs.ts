@@ -15,6 +15,15 @@ import type { SheetFonts } from '../sheet/fonts';
 import { composeQuoteDocument, type QuoteDocumentInput } from '../sheet/quote-document';
 import { generateProposals, type Brief, type ProposalResult } from '../proposals';
 
+/**
+ * What the worker hands a job besides its input: where to report progress, and whether the caller
+ * has cancelled (a job that runs long reads it between steps and stops with JobCancelled).
+ */
+export interface JobContext {
+  onProgress?: (done: number, total: number) => void;
+  cancelled?: () => boolean;
+}
+
 export interface ChecksInput {
   doc: LayoutDoc;
   studioDefaults?: LayoutSettings;
@@ -75,7 +84,8 @@ export const JOBS = {
     return { ok: true, report: runChecks(parsed.value, { studioDefaults: input.studioDefaults }) };
   },
   /** Proposals for a validated brief: at most MAX_CANDIDATES candidates laid out and checked. */
-  proposals: (input: { brief: Brief }): ProposalResult => generateProposals(input.brief),
+  proposals: (input: { brief: Brief }, context: JobContext = {}): ProposalResult =>
+    generateProposals(input.brief, { onProgress: context.onProgress, cancelled: context.cancelled }),
 
   /** The plan sheet as a drawing model (the print view draws it as SVG). */
   sheet: (input: SheetInput): SheetResult => checkedSheet(input),

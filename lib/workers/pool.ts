@@ -9,6 +9,12 @@
  * BAYWRIGHT_WORK_QUEUE (waiting jobs, default 16), BAYWRIGHT_JOB_TIMEOUT_MS (default 15000),
  * BAYWRIGHT_WORKER_HEAP_MB (each worker's heap cap, default 512).
  * Workers start with the first job and stop with `closeWorkPool()` (SIGTERM/SIGINT do it too).
+ *
+ * A job can be cancelled (`{ signal }`): waiting, it leaves the queue; running, it is told through
+ * a shared flag the job reads between steps (proposals do, per candidate), and a worker that has
+ * not let go within CANCEL_GRACE_MS is replaced, so a cancelled job never keeps a worker busy.
+ * Either way the caller gets `JobCancelledError` at once. A job that reports progress
+ * (`{ onProgress }`) has it passed on from the worker.
  * Server only.
  */
 import 'server-only';
@@ -39,6 +45,24 @@ export class JobError extends Error {
   }
 }
 
+/** The caller gave up on the job (its signal aborted): it was taken off the queue or stopped. */
+export class JobCancelledError extends Error {
+  /** Answered as 499 (the client closed the request) when a route lets it through. */
+  readonly status = 499;
+  constructor() {
+    super('The work was cancelled.');
+    this.name = 'JobCancelledError';
+  }
+}
+
+/** How long a running job has to notice its cancel flag before its worker is replaced (common practice, no source). */
+export const CANCEL_GRACE_MS = 300;
+
+export interface RunOptions {
+  signal?: AbortSignal;
+  onProgress?: (done: number, total: number) => void;
+}
+
 export interface WorkPoolOptions {
   size: number;
   queueLimit: number;
@@ -51,6 +75,13 @@ interface Pending {
   input: unknown;
   resolve: (v: unknown) => void;
   reject: (e: Error) => void;
+  onProgress?: (done: number, total: number) => void;
+  /** Set to 1 to tell the running job to stop (read with Atomics in the worker). */
+  cancel: Int32Array;
+  /** Cancelled and already answered: its worker's late reply is dropped. */
+  cancelled: boolean;
+  signal?: AbortSignal;
+  onAbort?: () => void;
 }
 
 interface Slot {
@@ -61,7 +92,10 @@ interface Slot {
   started: number;
 }
 
-type Reply = { id: number; ok: true; output: unknown } | { id: number; ok: false; error: { name: string; message: string } };
+type Reply =
+  | { id: number; ok: true; output: unknown }
+  | { id: number; ok: false; error: { name: string; message: string } }
+  | { id: number; progress: { done: number; total: number } };
 
 function envInt(name: string, fallback: number, min: number, max: number): number {
   const raw = process.env[name];
@@ -114,18 +148,52 @@ export class WorkPool {
     return { running: this.slots.filter((s) => s.job).length, waiting: this.queue.length };
   }
 
-  run<K extends JobName>(name: K, input: JobInput<K>): Promise<JobOutput<K>> {
+  run<K extends JobName>(name: K, input: JobInput<K>, options: RunOptions = {}): Promise<JobOutput<K>> {
     if (this.closed) return Promise.reject(new WorkPoolClosedError());
+    if (options.signal?.aborted) return Promise.reject(new JobCancelledError());
     const idle = this.slots.find((s) => !s.job);
     if (!idle && this.queue.length >= this.options.queueLimit) {
       const waitMs = ((this.queue.length + this.slots.length) * this.averageMs) / this.slots.length;
       return Promise.reject(new WorkPoolBusyError(Math.max(1, Math.ceil(waitMs / 1000))));
     }
     return new Promise<JobOutput<K>>((resolve, reject) => {
-      const job: Pending = { id: this.nextId++, name, input, resolve: resolve as (v: unknown) => void, reject };
+      const job: Pending = {
+        id: this.nextId++, name, input, resolve: resolve as (v: unknown) => void, reject, onProgress: options.onProgress,
+        cancel: new Int32Array(new SharedArrayBuffer(4)), cancelled: false, signal: options.signal,
+      };
+      if (options.signal) {
+        job.onAbort = () => this.cancel(job);
+        options.signal.addEventListener('abort', job.onAbort, { once: true });
+      }
       if (idle) this.dispatch(idle, job);
       else this.queue.push(job);
     });
+  }
+
+  /** Takes a job off the queue, or tells its worker to stop and frees the worker if it does not. */
+  private cancel(job: Pending): void {
+    const queued = this.queue.indexOf(job);
+    if (queued >= 0) {
+      this.queue.splice(queued, 1);
+      job.reject(new JobCancelledError());
+      return;
+    }
+    const slot = this.slots.find((s) => s.job === job);
+    if (!slot || job.cancelled) return;
+    job.cancelled = true;
+    Atomics.store(job.cancel, 0, 1);
+    job.reject(new JobCancelledError());
+    // The slot stays taken until the worker answers (it drops the job's result); past the grace its worker is replaced.
+    if (slot.timer) clearTimeout(slot.timer);
+    slot.timer = setTimeout(() => {
+      if (slot.job !== job) return;
+      this.finish(slot, () => undefined);
+      const stuck = slot.worker;
+      slot.worker = null;
+      void stuck?.terminate();
+      this.next(slot);
+    }, CANCEL_GRACE_MS);
+    slot.timer.unref();
   }
 
   private dispatch(slot: Slot, job: Pending): void {
@@ -141,7 +209,7 @@ export class WorkPool {
       this.next(slot);
     }, this.options.timeoutMs);
     slot.timer.unref();
-    worker.postMessage({ id: job.id, name: job.name, input: job.input });
+    worker.postMessage({ id: job.id, name: job.name, input: job.input, cancel: job.cancel });
   }
 
   private attach(slot: Slot): Worker {
@@ -151,6 +219,15 @@ export class WorkPool {
     worker.on('message', (reply: Reply) => {
       const job = slot.job;
       if (!job || job.id !== reply.id) return;
+      if ('progress' in reply) {
+        if (!job.cancelled) job.onProgress?.(reply.progress.done, reply.progress.total);
+        return;
+      }
+      if (job.cancelled) {
+        this.finish(slot, () => undefined);
+        this.next(slot);
+        return;
+      }
       this.averageMs = 0.8 * this.averageMs + 0.2 * (performance.now() - slot.started);
       this.finish(slot, () => (reply.ok ? job.resolve(reply.output) : job.reject(new JobError(reply.error.name, reply.error.message))));
       this.next(slot);
@@ -172,7 +249,10 @@ export class WorkPool {
   private finish(slot: Slot, settle: () => void): void {
     if (slot.timer) clearTimeout(slot.timer);
     slot.timer = null;
+    const job = slot.job;
+    if (job?.onAbort) job.signal?.removeEventListener('abort', job.onAbort);
     slot.job = null;
+    if (job?.cancelled) return;
     settle();
   }
 
@@ -213,9 +293,9 @@ export function workPool(): WorkPool {
   return holder[KEY];
 }
 
-/** Runs a named job of lib/workers/jobs.ts on the pool. */
-export function runJob<K extends JobName>(name: K, input: JobInput<K>): Promise<JobOutput<K>> {
-  return workPool().run(name, input);
+/** Runs a named job of lib/workers/jobs.ts on the pool; `signal` cancels it, `onProgress` hears how far it is. */
+export function runJob<K extends JobName>(name: K, input: JobInput<K>, options: RunOptions = {}): Promise<JobOutput<K>> {
+  return workPool().run(name, input, options);
 }
 
 export async function closeWorkPool(): Promise<void> {

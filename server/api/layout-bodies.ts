@@ -60,8 +60,23 @@ export function baseVersionFrom(req: Request): number | null {
   return m ? Number(m[1]) : NaN;
 }
 
-/** Duplicating a layout as a variant: `{}` names it "… variant N"; `{ name }` names it so. */
-export const variantBody = z.strictObject({ name: z.optional(name) });
+/**
+ * Duplicating a layout as a variant: `{}` names it "… variant N"; `{ name }` names it so; `{ doc }`
+ * makes the variant from that document (a proposal for this layout) instead of a copy, validated as
+ * every incoming document is (`variantDoc`).
+ */
+export const variantBody = z.strictObject({ name: z.optional(name), doc: z.unknown().optional() });
+
+/** A variant's body may carry a whole document: 2 MB holds a very large layout; more is refused with 413. */
+export const MAX_VARIANT_BODY_BYTES = 2 * 1024 * 1024;
+
+/** The posted document of a variant, parsed and migrated, or undefined for a copy; field issues → 400. */
+export function variantDoc(body: z.infer<typeof variantBody>): LayoutDoc | undefined {
+  if (body.doc === undefined) return undefined;
+  const parsed = parseLayoutDoc(body.doc);
+  if (!parsed.ok) throw invalid(parsed.issues.map((i) => ({ path: i.path ? `doc.${i.path}` : 'doc', message: i.message })));
+  return parsed.value;
+}
 
 /** Renaming a layout (PATCH /api/layouts/:id). */
 export const renameLayoutBody = z.strictObject({ name });

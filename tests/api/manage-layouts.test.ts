@@ -12,6 +12,7 @@ import * as restore from '@/app/api/layouts/[id]/versions/[version]/restore/rout
 import * as compare from '@/app/api/layouts/[id]/compare/route';
 import { layouts, revisions, savedVersions } from '@/db/schema';
 import { starterLayout } from '@/lib/layout/templates';
+import { briefFromLayout, generateProposals } from '@/lib/proposals';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
 import { call } from '../helpers/http';
@@ -123,6 +124,31 @@ describe('duplicating a layout as a variant', () => {
     }
     expect((await db.select({ id: layouts.id }).from(layouts)).length).toBe(before);
   });
+
+  it('takes a document of its own (a proposal for this layout): same client, linked, the document validated', async () => {
+    // The rear-bed starter (an L3H2 bay) reads back as a brief its bay can meet.
+    const res = await call(list.POST, { method: 'POST', as: w.designer, json: { name: 'Proposal variant source', starterId: 'starter-rear-bed', clientId: w.client.id } });
+    const id = res.body.id as string;
+    const source = await read(id);
+    const proposal = generateProposals(briefFromLayout(source.doc)).proposals[0];
+    expect(proposal).toBeDefined();
+    const made = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: { doc: proposal.doc } });
+    expect(made.status).toBe(201);
+    expect(made.body).toMatchObject({ name: 'Proposal variant source variant 2', client: { id: w.client.id }, variantOf: { id, name: 'Proposal variant source' } });
+    expect(made.body.doc.modules.map((m: { id: string }) => m.id)).toEqual(proposal.doc.modules.map((m) => m.id));
+    expect(made.body.doc.name).toBe('Proposal variant source variant 2');
+
+    const before = (await db.select({ id: layouts.id }).from(layouts)).length;
+    const bad = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: { doc: { ...proposal.doc, bay: { ...proposal.doc.bay, length: -5 } } } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues.some((i: { path: string }) => i.path.startsWith('doc.bay'))).toBe(true);
+    // 2 MB is the cap: 2 × 1024 × 1024 bytes; a body over it is refused before it is parsed.
+    const huge = await call(variants.POST, { method: 'POST', params: { id }, as: w.designer, json: { doc: { ...proposal.doc, name: 'x'.repeat(2 * 1024 * 1024 + 1) } } });
+    expect(huge.status).toBe(413);
+    // The client may not make one, with or without a document.
+    expect((await call(variants.POST, { method: 'POST', params: { id }, as: w.client, json: { doc: proposal.doc } })).status).toBe(403);
+    expect((await db.select({ id: layouts.id }).from(layouts)).length).toBe(before);
+  }, 60_000);
 
   it('refuses the client (403) and a stranger (404), and a malformed id is 404; nothing is made', async () => {
     const { id } = await newLayout('Variant rights');

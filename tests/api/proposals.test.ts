@@ -6,7 +6,9 @@ import * as layoutChecks from '@/app/api/layouts/[id]/checks/route';
 import { TYPICAL_BRIEF } from '@/lib/proposals/brief';
 import type { Db } from '@/db/client';
 import { useFreshDb } from '../helpers/db';
-import { call } from '../helpers/http';
+import { call, sessionCookie } from '../helpers/http';
+import { NDJSON } from '@/lib/api/progress-stream';
+import { workPool } from '@/lib/workers/pool';
 import { buildWorld, type World } from '../helpers/world';
 
 // A long bay's search is about 2 s alone, but several times that while the whole suite shares two
@@ -72,4 +74,62 @@ describe('POST /api/proposals', () => {
     expect(statuses).toContain(429);
     expect(Number(retry)).toBeGreaterThan(0);
   });
+});
+
+describe('POST /api/proposals as a progress stream', () => {
+  const streamed = async (signal?: AbortSignal) => {
+    const cookie = await sessionCookie(w.designer);
+    const req = new Request('http://localhost:3000/api/proposals', {
+      method: 'POST',
+      headers: { host: 'localhost:3000', cookie, 'content-type': 'application/json', accept: NDJSON },
+      body: JSON.stringify({ ...brief, bay: { source: 'template', template: 'l4h3' }, toilet: true, shower: true }),
+      signal,
+    });
+    return proposals.POST(req, undefined as never);
+  };
+
+  it('sends lines of progress, then the result', async () => {
+    const res = await streamed();
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe(NDJSON);
+    const lines = (await res.text()).trim().split('\n').map((l) => JSON.parse(l));
+    const steps = lines.slice(0, -1);
+    expect(steps.length).toBeGreaterThan(1);
+    for (const s of steps) expect(s).toEqual({ done: expect.any(Number), total: expect.any(Number) });
+    expect(steps[steps.length - 1].done).toBe(steps[steps.length - 1].total);
+    expect(lines[lines.length - 1].result.ok).toBe(true);
+  }, 120_000);
+
+  it('stops the work when the caller goes away, and the pool is free again', async () => {
+    const abort = new AbortController();
+    const res = await streamed(abort.signal);
+    const reader = res.body!.getReader();
+    await reader.read(); // the first progress line: the search is under way
+    abort.abort();
+    await reader.cancel();
+    // The search stops at its next candidate; the worker is free within the cancel grace.
+    const t0 = Date.now();
+    while (workPool().load.running > 0 && Date.now() - t0 < 5000) await new Promise((r) => setTimeout(r, 20));
+    expect(workPool().load).toEqual({ running: 0, waiting: 0 });
+  }, 120_000);
+
+  it('a plain request whose caller went away answers 499', async () => {
+    const abort = new AbortController();
+    // Another studio's owner: this file's other tests have used up the burst of its own owner.
+    const cookie = await sessionCookie(w.foreignOwner);
+    const req = new Request('http://localhost:3000/api/proposals', {
+      method: 'POST',
+      headers: { host: 'localhost:3000', cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ ...brief, bay: { source: 'template', template: 'l4h3' }, toilet: true, shower: true }),
+      signal: abort.signal,
+    });
+    const answer = proposals.POST(req, undefined as never);
+    setTimeout(() => abort.abort(), 200);
+    const res = await answer;
+    expect(res.status).toBe(499);
+    expect((await res.json()).error).toMatch(/cancelled/);
+    const t0 = Date.now();
+    while (workPool().load.running > 0 && Date.now() - t0 < 5000) await new Promise((r) => setTimeout(r, 20));
+    expect(workPool().load).toEqual({ running: 0, waiting: 0 });
+  }, 120_000);
 });

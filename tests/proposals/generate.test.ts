@@ -178,3 +178,62 @@ describe('determinism', () => {
     expect(r.stats.checked).toBeLessThanOrEqual(50);
   });
 });
+
+describe('a second bed level for three or four sleepers', () => {
+  const four = { sleepers: [1800, 1700, 1400, 1300], water: { days: 2, people: 4 } };
+  // Clear height = bay height − floor build-up (10 + 12 + 2 = 24 mm) − roof build-up (20 + 6 = 26 mm).
+  // Two levels over the lounge: bench top 300 mm (clears the arches) + 160 mm board = 460 mm,
+  // + 750 mm to sit up head bowed + 150 mm drop-down bed + 750 mm over it = 2110 mm (common practice, no source).
+  const TWO_LEVELS = 460 + 750 + 150 + 750;
+  for (const t of BAY_TEMPLATES) {
+    const clear = t.bay.height - 24 - 26;
+    it(`${t.id}: four sleepers ${clear >= TWO_LEVELS ? 'sleep on two levels' : 'fail on the headroom for two levels'}`, () => {
+      const b = on(t.id, four);
+      const r = generateProposals(b);
+      assertSound(b, r);
+      if (clear >= TWO_LEVELS) {
+        expect(r.ok).toBe(true);
+        for (const p of r.proposals) {
+          const report = runChecks(p.doc);
+          // Two sleeping places, one over the other, each with its way out (and the upper its ladder).
+          const places = report.findings.filter((f) => f.id === 'sleep.place');
+          expect(places.length).toBe(2);
+          const tops = places.map((f) => f.measured!).sort((x, y) => x - y);
+          expect(tops[1] - tops[0]).toBeGreaterThan(150);
+          expect(report.findings.filter((f) => f.id === 'egress.sleep').map((f) => f.status)).toEqual(['pass', 'pass']);
+          expect(p.doc.modules.some((m) => m.kind === 'step' && m.arrangements.includes('sleep'))).toBe(true);
+        }
+      } else {
+        expect(r.ok).toBe(false);
+        const head = r.reasons.find((x) => x.rule === 'sitting headroom on two levels');
+        expect(head).toBeDefined();
+        expect(head!.measured).toBe(clear);
+        expect(head!.required).toBe(TWO_LEVELS);
+        expect(head!.message).toContain(`${clear} mm`);
+        expect(head!.message).toContain(`${TWO_LEVELS} mm`);
+      }
+    });
+  }
+
+  it('a bunk over a bed across, for four sleepers short enough to sleep across', () => {
+    // Across the 1728 mm lined width: 1600 + 100 mm allowance = 1700 mm ≤ 1728 mm.
+    const b = on('l4h3', { ...four, bed: 'across', sleepers: [1600, 1550, 1400, 1300] });
+    const r = generateProposals(b);
+    expect(r.ok).toBe(true);
+    assertSound(b, r);
+    for (const p of r.proposals) {
+      const beds = p.doc.modules.filter((m) => m.kind === 'bed-platform');
+      expect(beds.length).toBe(2);
+      const [low, high] = [...beds].sort((x, y) => x.elevation - y.elevation);
+      // Upper underside 750 mm over the lower mattress top (bed 300 mm up + 200 mm platform and mattress = 500 mm).
+      expect(high.elevation - (low.elevation + low.height)).toBe(750);
+      // 2200 mm clear − (1250 + 150) mm upper top = 800 mm over the bunk.
+      expect(2200 - (high.elevation + high.height)).toBeGreaterThanOrEqual(750);
+    }
+  });
+
+  it('two sleepers are never given a second level', () => {
+    const r = generateProposals(on('l4h3'));
+    expect(r.proposals.every((p) => p.doc.modules.every((m) => m.kind !== 'step'))).toBe(true);
+  });
+});

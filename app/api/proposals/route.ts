@@ -5,7 +5,9 @@ import { requireWorkshop } from '@/db/access';
 import { issuesFromZod } from '@/lib/layout/parse';
 import { bayTemplate } from '@/lib/layout/templates';
 import { briefSchema } from '@/lib/proposals/brief';
-import { runJob } from '@/lib/workers/pool';
+import { JobCancelledError, runJob, WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
+import { NDJSON, progressStream, wantsProgress } from '@/lib/api/progress-stream';
+import { log } from '@/lib/log';
 import * as z from 'zod/mini';
 
 export const dynamic = 'force-dynamic';
@@ -28,6 +30,11 @@ const MAX_BRIEF_BYTES = 16 * 1024;
  * Proposals from a client's brief (lib/proposals): the workshop's work (owners and designers;
  * clients are refused), run in the work pool (503 + Retry-After when it is full). Nothing is
  * stored: the designer opens a proposal through the layouts route.
+ *
+ * Asked with `Accept: application/x-ndjson` the answer streams the search's progress, then the
+ * result (lib/api/progress-stream.ts); otherwise it is one JSON body. Either way, when the caller
+ * goes away (the request aborts, or the stream's reader cancels) the job is cancelled in the pool
+ * and its worker freed; a plain request that was cancelled answers 499.
  */
 export const POST = handle(async (req) => {
   const actor = await requireActor(req);
@@ -41,5 +48,25 @@ export const POST = handle(async (req) => {
   }
   const parsed = knownBayBrief.safeParse(await readJson(req, MAX_BRIEF_BYTES));
   if (!parsed.success) throw invalid(issuesFromZod(parsed.error));
-  return json(await runJob('proposals', { brief: parsed.data }));
+  const abort = new AbortController();
+  req.signal?.addEventListener('abort', () => abort.abort(), { once: true });
+  if (!wantsProgress(req)) return json(await runJob('proposals', { brief: parsed.data }, { signal: abort.signal }));
+
+  let report: (done: number, total: number) => void = () => undefined;
+  const job = runJob('proposals', { brief: parsed.data }, { signal: abort.signal, onProgress: (done, total) => report(done, total) });
+  // A full pool refuses at once (an already rejected promise wins the race): answer 503 before streaming.
+  await Promise.race([job, Promise.resolve()]);
+  const body = progressStream((progress) => {
+    report = progress;
+    return job;
+  }, {
+    onCancel: () => abort.abort(),
+    errorLine: (err) => {
+      if (err instanceof JobCancelledError) return undefined;
+      if (err instanceof WorkPoolBusyError || err instanceof WorkPoolClosedError) return { error: err.message, status: 503 };
+      log.error('proposals stream failed', { route: '/api/proposals', name: err instanceof Error ? err.name : typeof err });
+      return { error: 'The proposals could not be made on our side; nothing was changed. Try again.', status: 500 };
+    },
+  });
+  return new Response(body, { status: 200, headers: { 'content-type': NDJSON, 'cache-control': 'no-store' } });
 });
