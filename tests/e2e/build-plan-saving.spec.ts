@@ -1,14 +1,10 @@
 // The build plan saves as the editor does: a figure typed in is autosaved, the header names the
 // version actually saved (also when the browser's back button brings the page from its cache), and
 // an edit not yet saved when the page is left goes to the server all the same (save on leave).
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { signIn } from './helpers';
 
 const stamp = Date.now().toString(36);
-
-async function savedVersion(page: Page): Promise<number> {
-  return Number(await page.getByTestId('saved-version').innerText());
-}
 
 test('build plan: autosaved figure, header version as saved, nothing lost by leaving at once', async ({ page }, info) => {
   test.setTimeout(120_000);
