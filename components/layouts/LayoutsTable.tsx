@@ -94,7 +94,7 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
   return (
     <div>
       <div className="mb-4 flex flex-wrap items-center gap-3">
-        <label className="relative flex-1 sm:max-w-xs">
+        <label className="relative min-w-48 flex-1 sm:max-w-xs">
           <span className="sr-only">Filter layouts</span>
           <Search size={14} className="absolute left-2 top-2.5 text-ink-faint" aria-hidden="true" />
           <input className="field pl-7" placeholder="Filter by name, client or bay…" value={filter} onChange={(e) => setFilter(e.target.value)} />
