@@ -12,16 +12,19 @@ const SIZES = [{ width: 360, height: 740 }, { width: 390, height: 844 }];
 
 /** The page is no wider than the phone, and each table's own box does not scroll sideways either. */
 async function fits(page: Page, info: TestInfo, width: number, name: string) {
-  const wide = await page.evaluate(() => ({
+  const wide = await page.evaluate((limit) => ({
+    // The innermost elements that stick out past the phone's width, named for the failure message.
+    over: [...document.querySelectorAll('body *')].filter((e) => e.getBoundingClientRect().right > limit + 0.5 && ![...e.children].some((c) => c.getBoundingClientRect().right > limit + 0.5))
+      .slice(0, 6).map((e) => `${e.tagName.toLowerCase()}${e.getAttribute('data-testid') ? `[${e.getAttribute('data-testid')}]` : ''}.${String(e.className).slice(0, 60)} "${(e.textContent ?? '').trim().slice(0, 30)}"`),
     page: document.documentElement.scrollWidth,
     inner: window.innerWidth,
     tables: [...document.querySelectorAll('table')].filter((t) => t.offsetParent !== null).map((t) => {
       const box = t.parentElement!;
       return { id: t.getAttribute('data-testid') ?? 'table', scroll: box.scrollWidth, client: box.clientWidth };
     }),
-  }));
+  }), width);
   expect.soft(wide.page, `${name} at ${width} px: the page scrolls sideways`).toBeLessThanOrEqual(wide.inner);
-  expect.soft(wide.page, `${name} at ${width} px: wider than the phone`).toBeLessThanOrEqual(width);
+  expect.soft(wide.page, `${name} at ${width} px: wider than the phone; sticking out: ${wide.over.join(' | ')}`).toBeLessThanOrEqual(width);
   for (const t of wide.tables) expect.soft(t.scroll, `${name} at ${width} px: table ${t.id} scrolls sideways`).toBeLessThanOrEqual(t.client);
   await page.screenshot({ path: info.outputPath(`phone-${width}-${name}.png`), fullPage: true });
 }
