@@ -29,6 +29,7 @@ import { ConflictDialog } from './panels/ConflictDialog';
 import { SelectionAnnouncer } from './panels/SelectionAnnouncer';
 import { useLiveChecks } from './api/useLiveChecks';
 import { useAutosave } from './api/useAutosave';
+import { useLatestSaved } from './api/useLatestSaved';
 import { useEditorKeyboard } from './commands/useEditorKeyboard';
 import { countByStatus, failingModuleIds } from './panels/findingGroups';
 
@@ -66,6 +67,8 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
     if (incoming && !canEdit && incoming.version !== api.getState().version) api.getState().replaceDoc(incoming.doc, incoming.version);
   }, [incoming, canEdit, api]);
   const save = useAutosave(api, layoutId, canEdit);
+  // Opened from the browser's cache (the back button) or left open while someone saved: catch up with the saved copy.
+  useLatestSaved(api, layoutId, { enabled: canEdit });
   useEditorKeyboard(api);
   const floating = useScreenClass() !== 'desktop';
   const openDrawer = useOpenDrawer();

@@ -28,6 +28,8 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
     () => [
       col.display({
         id: 'plan',
+        // On a phone the plan is the layout's own page.
+        meta: { phone: 'hide' },
         header: () => <span className="sr-only">Plan</span>,
         cell: (c) => <LayoutThumbnail layout={c.row.original} />,
       }),
@@ -40,9 +42,10 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
           </>
         ),
       }),
-      col.accessor((r) => r.client?.name ?? '', { id: 'client', header: 'Client', cell: (c) => c.getValue() || <span className="text-ink-faint">—</span> }),
+      col.accessor((r) => r.client?.name ?? '', { id: 'client', header: 'Client', meta: { phone: 'fold' }, cell: (c) => c.getValue() || <span className="text-ink-faint">—</span> }),
       col.accessor('sizeClass', {
         header: 'Bay',
+        meta: { phone: 'fold' },
         cell: (c) => (
           <span className="font-mono text-xs">
             {c.getValue()} <span className="text-ink-soft">{c.row.original.bay.length} × {c.row.original.bay.width} × {c.row.original.bay.height} mm</span>
@@ -61,15 +64,19 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
       col.accessor((r) => r.sharing?.openComments ?? 0, {
         id: 'markups',
         header: 'Open mark-ups',
+        // On a phone: counted on the layout's own page (Mark-ups).
+        meta: { phone: 'hide' },
         cell: (c) => c.getValue() ? (
           <Link href={`/layouts/${c.row.original.id}`} className="inline-flex items-center gap-1 font-mono" aria-label={`${c.getValue()} open mark-ups`}>
             <Hexagon size={12} aria-hidden="true" />{c.getValue()}
           </Link>
         ) : <span className="font-mono text-ink-faint">0</span>,
       }),
-      col.accessor('moduleCount', { header: 'Modules', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      col.accessor('moduleCount', { header: 'Modules', meta: { phone: 'hide' }, cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
       col.accessor('updatedAt', {
         header: 'Last change',
+        // On a phone: the build plan's header and Saved versions say when it was last saved.
+        meta: { phone: 'hide' },
         cell: (c) => (
           <span className="text-ink-soft">{formatDateTime(c.getValue())}{c.row.original.updatedBy ? ` · ${c.row.original.updatedBy}` : ''}</span>
         ),
@@ -86,8 +93,8 @@ export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
 
   return (
     <div>
-      <div className="mb-4 flex items-center gap-3">
-        <label className="relative flex-1 sm:max-w-xs">
+      <div className="mb-4 flex flex-wrap items-center gap-3">
+        <label className="relative min-w-48 flex-1 sm:max-w-xs">
           <span className="sr-only">Filter layouts</span>
           <Search size={14} className="absolute left-2 top-2.5 text-ink-faint" aria-hidden="true" />
           <input className="field pl-7" placeholder="Filter by name, client or bay…" value={filter} onChange={(e) => setFilter(e.target.value)} />

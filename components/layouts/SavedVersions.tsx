@@ -56,6 +56,7 @@ export function SavedVersions({ layoutId, layoutName, canEdit }: { layoutId: str
       col.display({
         id: 'plan',
         header: 'Plan',
+        meta: { phone: 'fold' },
         cell: (c) => (
           // eslint-disable-next-line @next/next/no-img-element -- a small SVG drawn by the server per save; nothing to optimise
           <img src={`/api/layouts/${layoutId}/thumbnail?version=${c.row.original.version}`} alt={`Plan as saved in version ${c.row.original.version}`}
@@ -73,13 +74,15 @@ export function SavedVersions({ layoutId, layoutName, canEdit }: { layoutId: str
       }),
       col.accessor('savedAt', {
         header: 'Saved',
+        meta: { phone: 'fold' },
         cell: (c) => <span className="text-ink-soft">{formatDateTime(c.getValue())}{c.row.original.savedBy ? ` · ${c.row.original.savedBy}` : ''}</span>,
       }),
       col.accessor('name', { header: 'Name' }),
-      col.accessor('moduleCount', { header: 'Modules', meta: { align: 'right' }, cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      col.accessor('moduleCount', { header: 'Modules', meta: { align: 'right', phone: 'fold' }, cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
       col.display({
         id: 'notes',
         header: 'Notes',
+        meta: { phone: 'fold' },
         cell: (c) => (
           <span className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
             {c.row.original.revisions.map((l) => (

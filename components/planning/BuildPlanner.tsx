@@ -17,6 +17,8 @@ import { BUILD_PLAN_CAUTION } from '@/lib/layout/cautions';
 import { createEditorStore, isDirty } from '@/components/editor/store/editorStore';
 import { EditorStoreProvider } from '@/components/editor/store/EditorStoreContext';
 import { useAutosave } from '@/components/editor/api/useAutosave';
+import { useLatestSaved } from '@/components/editor/api/useLatestSaved';
+import { formatDateTime } from '@/lib/format';
 import { useEditorKeyboard } from '@/components/editor/commands/useEditorKeyboard';
 import { CommandButton } from '@/components/editor/panels/CommandButton';
 import { SaveIndicator } from '@/components/editor/panels/SaveIndicator';
@@ -61,6 +63,8 @@ export interface BuildPlannerProps {
   layoutName: string;
   initialDoc: LayoutDoc;
   initialVersion: number;
+  /** When that version was saved (ISO). */
+  initialSavedAt?: string | null;
   canEdit: boolean;
   units: LengthUnit;
   clientName: string | null;
@@ -84,9 +88,11 @@ export function BuildPlanner(props: BuildPlannerProps) {
   const [store] = useState(() => createEditorStore({ doc: props.initialDoc, version: props.initialVersion, readOnly: !canEdit, units }));
   const doc = useStore(store, (s) => s.doc);
   const savedDoc = useStore(store, (s) => s.savedDoc);
-  const version = useStore(store, (s) => s.version);
   const unsaved = useStore(store, isDirty);
   const save = useAutosave(store, layoutId, canEdit);
+  // The version as saved, the same the save indicator shows, checked against the server on opening
+  // (a page the back button brings from the browser's cache is otherwise a copy from before).
+  const { version, savedAt } = useLatestSaved(store, layoutId, { initialSavedAt: props.initialSavedAt });
   useEditorKeyboard(store, PLAN_COMMANDS);
 
   const [formKey, setFormKey] = useState(0);
@@ -174,6 +180,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
       <h1 className="text-xl font-semibold">Build plan · {props.layoutName}</h1>
       <p className="text-sm text-ink-soft" data-testid="build-plan-facts">
         Bay <span className="font-mono">{doc.bay.length} × {doc.bay.width} × {doc.bay.height} mm</span> · version <span className="font-mono" data-testid="saved-version">{version}</span>
+        {savedAt ? <>, saved <span data-testid="saved-at">{formatDateTime(savedAt)}</span></> : ''}
         {clientName ? ` · for ${clientName}` : ''}
         {canEdit ? '' : ' · view only'}
       </p>

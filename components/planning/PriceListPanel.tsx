@@ -106,18 +106,22 @@ function PriceListForm({ list, canEdit }: { list: PriceListDto; canEdit: boolean
           <details key={g} className="rounded-sm border border-paper-edge" open={g === 'module' || rows.some((r, i) => r.category === g && !!e.rows?.[i])}>
             <summary className="cursor-pointer px-3 py-2 text-sm font-semibold">{CATEGORY_TITLE[g]}</summary>
             <table className="w-full text-left text-sm">
-              <thead className="text-xs text-ink-soft"><tr><th className="px-3 py-1">Item</th><th>Per</th><th>Price ({currency}, net)</th><th>Workshop hours</th></tr></thead>
+              <thead className="text-xs text-ink-soft"><tr><th className="px-3 py-1">Item</th><th className="max-[480px]:hidden">Per</th><th>Price ({currency}, net)</th><th>Workshop hours</th></tr></thead>
               <tbody>
                 {rows.map((r, i) => r.category !== g ? null : (
                   <tr key={r.key} className="border-t border-paper-edge">
-                    <td className="px-3 py-1">{r.description}</td>
-                    <td className="font-mono text-xs text-ink-soft">{r.unit}</td>
+                    <td className="px-3 py-1">
+                      {r.description}
+                      {/* On a phone the unit goes under the item rather than in a column of its own. */}
+                      <span className="block font-mono text-xs text-ink-soft min-[480px]:hidden">per {r.unit}</span>
+                    </td>
+                    <td className="font-mono text-xs text-ink-soft max-[480px]:hidden">{r.unit}</td>
                     <td className="py-1 pr-2">
-                      <input aria-label={`Price of ${r.description}`} className="field w-28 font-mono" inputMode="decimal" placeholder="not priced" {...form.register(`rows.${i}.price`)} />
+                      <input aria-label={`Price of ${r.description}`} className="field w-20 font-mono sm:w-28" inputMode="decimal" placeholder="not priced" {...form.register(`rows.${i}.price`)} />
                       {e.rows?.[i]?.price && <p className="field-error">{e.rows[i]?.price?.message}</p>}
                     </td>
                     <td className="py-1 pr-3">
-                      <input aria-label={`Workshop hours for ${r.description}`} className="field w-24 font-mono" inputMode="decimal" {...form.register(`rows.${i}.hours`)} />
+                      <input aria-label={`Workshop hours for ${r.description}`} className="field w-16 font-mono sm:w-24" inputMode="decimal" {...form.register(`rows.${i}.hours`)} />
                       {e.rows?.[i]?.hours && <p className="field-error">{e.rows[i]?.hours?.message}</p>}
                     </td>
                   </tr>

@@ -56,7 +56,7 @@ export function MembersPanel({ isOwner, selfId }: { isOwner: boolean; selfId: st
               {members.data.members.map((m) => (
                 <tr key={m.userId} className="border-t border-paper-edge">
                   <td className="py-2">{m.name}</td>
-                  <td className="text-ink-soft">{m.email ?? '—'}</td>
+                  <td className="break-all text-ink-soft">{m.email ?? '—'}</td>
                   <td>
                     {isOwner && m.userId !== selfId ? (
                       <select aria-label={`Role of ${m.name}`} className="field w-auto py-0.5" value={m.role}

@@ -17,8 +17,8 @@ const col = createColumnHelper<ClientDto>();
 export function ClientsTable({ clients }: { clients: ClientDto[] }) {
   const columns = useMemo(() => [
     col.accessor('name', { header: 'Client', cell: (c) => <span className="font-medium">{c.getValue()}</span> }),
-    col.accessor('email', { header: 'E-mail', cell: (c) => <span className="text-ink-soft">{c.getValue()}</span> }),
-    col.accessor('joinedAt', { header: 'Joined', cell: (c) => <span className="text-ink-soft">{formatDate(c.getValue())}</span> }),
+    col.accessor('email', { header: 'E-mail', meta: { phone: 'fold' }, cell: (c) => <span className="text-ink-soft">{c.getValue()}</span> }),
+    col.accessor('joinedAt', { header: 'Joined', meta: { phone: 'fold' }, cell: (c) => <span className="text-ink-soft">{formatDate(c.getValue())}</span> }),
     col.accessor((r) => r.layouts.length, {
       id: 'layouts',
       header: 'Layouts',

@@ -1,7 +1,8 @@
 // Baywright's mark: a bay in plan, bare-metal outline with a copper dimension tick above it.
 import { palette } from '@/lib/look';
 
-export function Wordmark({ className = '' }: { className?: string }) {
+/** `wordClassName`: the name's own classes (the app bar hides it on a phone, keeping the mark). */
+export function Wordmark({ className = '', wordClassName = '' }: { className?: string; wordClassName?: string }) {
   return (
     <span className={`inline-flex items-center gap-2 font-semibold tracking-tight ${className}`}>
       <svg width="26" height="18" viewBox="0 0 26 18" aria-hidden="true">
@@ -10,7 +11,7 @@ export function Wordmark({ className = '' }: { className?: string }) {
         <rect x="4" y="10" width="7" height="5" fill="none" stroke={palette.ink} strokeWidth="0.8" />
         <path d="M14 10l4 5M17 10l4 5" stroke={palette.ink} strokeWidth="0.6" />
       </svg>
-      Baywright
+      <span className={wordClassName}>Baywright</span>
     </span>
   );
 }

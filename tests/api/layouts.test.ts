@@ -143,6 +143,56 @@ describe('GET /api/layouts/:id', () => {
   });
 });
 
+describe('GET /api/layouts/:id with If-None-Match (revalidating the saved version)', () => {
+  const get = (who: World['owner'] | null, tag?: string, id = w.clientLayoutId) =>
+    call(one.GET, { as: who, params: { id }, headers: tag === undefined ? {} : { 'if-none-match': tag } });
+
+  it('answers 200 with the version as a strong ETag, and tells browsers to revalidate', async () => {
+    const res = await get(w.owner);
+    expect(res.status).toBe(200);
+    expect(res.headers.get('etag')).toBe(`"${res.body.version}"`);
+    expect(res.headers.get('cache-control')).toBe('private, no-cache');
+  });
+
+  it('answers 304 with no body when the tag names the current version, for everyone who may read', async () => {
+    const { version } = (await get(w.owner)).body;
+    for (const who of [w.owner, w.designer, w.client]) {
+      const res = await get(who, `"${version}"`);
+      expect(res.status).toBe(304);
+      expect(res.body).toBeNull();
+      expect(res.headers.get('etag')).toBe(`"${version}"`);
+    }
+    // A list of tags, a weak tag and the wildcard match too (RFC 9110 §13.1.2, weak comparison).
+    expect((await get(w.owner, `"1", "${version}"`)).status).toBe(304);
+    expect((await get(w.owner, `W/"${version}"`)).status).toBe(304);
+    expect((await get(w.owner, '*')).status).toBe(304);
+  });
+
+  it('answers 200 with the new copy when the tag is stale (after a save)', async () => {
+    const before = (await get(w.owner)).body;
+    const doc = { ...before.doc, occupants: { ...before.doc.occupants, standingHeight: before.doc.occupants.standingHeight + 1 } };
+    expect((await call(one.PUT, { method: 'PUT', as: w.designer, params: { id: w.clientLayoutId }, headers: { 'if-match': `"${before.version}"` }, json: { doc } })).status).toBe(200);
+    const res = await get(w.owner, `"${before.version}"`);
+    expect(res.status).toBe(200);
+    // One save later: version + 1, and the height saved (worked by hand: before + 1 mm).
+    expect(res.body.version).toBe(before.version + 1);
+    expect(res.body.doc.occupants.standingHeight).toBe(before.doc.occupants.standingHeight + 1);
+    expect(res.headers.get('etag')).toBe(`"${before.version + 1}"`);
+    expect((await get(w.owner, 'garbage')).status).toBe(200);
+  });
+
+  it('checks the session and the rights before a 304: strangers get 401 and 404 whatever tag they send', async () => {
+    const { version } = (await get(w.owner)).body;
+    const tag = `"${version}"`;
+    expect((await get(null, tag)).status).toBe(401);
+    expect((await get(w.otherClient, tag)).status).toBe(404);
+    expect((await get(w.foreignOwner, tag)).status).toBe(404);
+    expect((await get(w.foreignOwner, '*')).status).toBe(404);
+    expect((await get(w.owner, '*', 'not-a-uuid')).status).toBe(404);
+    expect((await get(w.owner, '*', w.foreignLayoutId)).status).toBe(404);
+  });
+});
+
 describe('GET /api/layouts/:id from the document cache', () => {
   it('answers the same DTO as the data layer, read cold and read again', async () => {
     clearDocCache();

@@ -2,7 +2,10 @@ import { describe, expect, it, vi } from 'vitest';
 import { saveLayout, saveCopy, postChecks, ChecksUnavailable, ChecksRateLimited, ChecksRefused } from '@/components/editor/api/layoutApi';
 import { contentKey } from '@/components/editor/api/docKey';
 import { createThrottle } from '@/components/editor/api/throttle';
-import { testDoc, mod } from './harness';
+import { flushOnLeave, keepaliveFetch, pendingFlush, KEEPALIVE_BODY_LIMIT } from '@/components/editor/api/leaveFlush';
+import { revalidateSaved } from '@/components/editor/api/useLatestSaved';
+import { isDirty } from '@/components/editor/store/editorStore';
+import { testDoc, mod, harness } from './harness';
 
 const reply = (status: number, body: unknown, headers: Record<string, string> = {}) => async () => new Response(typeof body === 'string' ? body : JSON.stringify(body), { status, headers });
 
@@ -47,6 +50,114 @@ describe('saving', () => {
     expect(body.name).toBe('Mine (my copy)');
     expect(body.doc.name).toBe('Mine (my copy)');
     expect(await saveCopy(reply(400, { error: 'name taken' }), 'x', testDoc())).toEqual({ ok: false, message: 'name taken' });
+  });
+});
+
+describe('save on leave', () => {
+  it('sends an unsaved edit at once, with keepalive, and marks the store saved at the new version', async () => {
+    const h = harness([mod('a')]);
+    h.get().updateSystems({ note: 'Weighbridge booked' });
+    expect(isDirty(h.get())).toBe(true);
+    const fetchFn = vi.fn(reply(200, { id: 'L1', version: 2 }));
+    const flushed = flushOnLeave(h.store, 'L1', fetchFn);
+    expect(flushed).not.toBeNull();
+    // The next screen can wait for it.
+    expect(pendingFlush('L1')).toBe(flushed);
+    expect(await flushed).toEqual({ kind: 'saved', version: 2, updatedAt: undefined });
+    const [url, init] = fetchFn.mock.calls[0] as unknown as [string, RequestInit];
+    expect(url).toBe('/api/layouts/L1');
+    expect(init.method).toBe('PUT');
+    expect(init.keepalive).toBe(true);
+    expect((init.headers as Record<string, string>)['if-match']).toBe('1');
+    expect(JSON.parse(init.body as string).doc.systems.note).toBe('Weighbridge booked');
+    expect(isDirty(h.get())).toBe(false);
+    expect(h.get().version).toBe(2);
+    await Promise.resolve();
+    expect(pendingFlush('L1')).toBeUndefined();
+  });
+
+  it('sends nothing when nothing is unsaved, or the screen is view only', () => {
+    const fetchFn = vi.fn(reply(200, { id: 'L1', version: 2 }));
+    expect(flushOnLeave(harness().store, 'L1', fetchFn)).toBeNull();
+    const h = harness();
+    h.get().updateSystems({ note: 'x' });
+    h.store.setState({ readOnly: true });
+    expect(flushOnLeave(h.store, 'L1', fetchFn)).toBeNull();
+    expect(fetchFn).not.toHaveBeenCalled();
+  });
+
+  it('uses keepalive only for bodies within the 64 KiB allowance (Fetch standard), an ordinary request above it', async () => {
+    const fetchFn = vi.fn(reply(200, {}));
+    const send = keepaliveFetch(fetchFn);
+    await send('/x', { method: 'PUT', body: 'a'.repeat(KEEPALIVE_BODY_LIMIT) });
+    await send('/x', { method: 'PUT', body: 'a'.repeat(KEEPALIVE_BODY_LIMIT + 1) });
+    // "é" is two bytes in UTF-8: 32 769 of them are 65 538 bytes, over the 65 536 allowance.
+    await send('/x', { method: 'PUT', body: 'é'.repeat(32_769) });
+    expect(fetchFn.mock.calls.map((c) => (c as unknown as [string, RequestInit])[1].keepalive)).toEqual([true, false, false]);
+  });
+
+  it('leaves the store unsaved when the server refuses, so the edit is not marked saved', async () => {
+    const h = harness();
+    h.get().updateSystems({ note: 'x' });
+    expect((await flushOnLeave(h.store, 'L1', reply(412, { error: 'stale', current: { version: 5, doc: testDoc() } }))!).kind).toBe('conflict');
+    expect(isDirty(h.get())).toBe(true);
+    expect(h.get().version).toBe(1);
+  });
+});
+
+describe('the latest saved version (revalidation)', () => {
+  it('asks with If-None-Match the store version; 304 changes nothing', async () => {
+    const h = harness();
+    const fetchFn = vi.fn(async () => new Response(null, { status: 304 }));
+    expect(await revalidateSaved(h.store, 'L1', fetchFn)).toEqual({ kind: 'unchanged' });
+    const [url, init] = fetchFn.mock.calls[0] as unknown as [string, RequestInit];
+    expect(url).toBe('/api/layouts/L1');
+    expect((init.headers as Record<string, string>)['if-none-match']).toBe('"1"');
+    expect(h.get().version).toBe(1);
+  });
+
+  it('takes a newer saved copy when nothing here is unsaved (a page brought back from the browser cache)', async () => {
+    const h = harness();
+    const theirs = testDoc([mod('z')]);
+    const r = await revalidateSaved(h.store, 'L1', reply(200, { version: 4, doc: theirs, updatedAt: '2026-12-04T12:00:00.000Z' }));
+    expect(r).toEqual({ kind: 'replaced', version: 4, savedAt: '2026-12-04T12:00:00.000Z' });
+    expect(h.get().version).toBe(4);
+    expect(h.get().doc.modules.map((m) => m.id)).toEqual(['z']);
+    expect(isDirty(h.get())).toBe(false);
+  });
+
+  it('keeps unsaved edits here (the next save meets theirs as a conflict), and ignores an older answer', async () => {
+    const h = harness();
+    h.get().updateSystems({ note: 'mine' });
+    expect(await revalidateSaved(h.store, 'L1', reply(200, { version: 4, doc: testDoc() }))).toEqual({ kind: 'newer-elsewhere', version: 4 });
+    expect(h.get().doc.systems?.note).toBe('mine');
+    expect(h.get().version).toBe(1);
+    const clean = harness();
+    clean.store.getState().markSaved(clean.get().doc, 6);
+    expect(await revalidateSaved(clean.store, 'L1', reply(200, { version: 5, doc: testDoc() }))).toEqual({ kind: 'unchanged' });
+    expect(clean.get().version).toBe(6);
+  });
+
+  it('waits for a save on leave of the same layout before it reads', async () => {
+    const left = harness();
+    left.get().updateSystems({ note: 'left behind' });
+    let release!: () => void;
+    const gate = new Promise<void>((r) => { release = r; });
+    const order: string[] = [];
+    void flushOnLeave(left.store, 'L9', async () => { await gate; order.push('put'); return new Response(JSON.stringify({ version: 2 }), { status: 200 }); });
+    const next = harness();
+    const reading = revalidateSaved(next.store, 'L9', async () => { order.push('get'); return new Response(null, { status: 304 }); });
+    release();
+    await reading;
+    expect(order).toEqual(['put', 'get']);
+  });
+
+  it('a failed or unreadable answer changes nothing', async () => {
+    const h = harness();
+    expect((await revalidateSaved(h.store, 'L1', async () => { throw new TypeError('offline'); })).kind).toBe('failed');
+    expect((await revalidateSaved(h.store, 'L1', reply(404, { error: 'No such layout' }))).kind).toBe('failed');
+    expect((await revalidateSaved(h.store, 'L1', reply(200, { version: 'x' }))).kind).toBe('failed');
+    expect(h.get().version).toBe(1);
   });
 });
 

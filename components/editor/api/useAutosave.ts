@@ -15,6 +15,7 @@ import type { LayoutDoc } from '@/lib/layout';
 import type { EditorStore } from '../store/editorStore';
 import { isDirty } from '../store/editorStore';
 import { saveLayout, type FetchLike, type SavedCopy } from './layoutApi';
+import { flushOnLeave } from './leaveFlush';
 import { fieldName } from '@/lib/layout/field-names';
 
 export const AUTOSAVE_DELAY_MS = 1200;
@@ -184,7 +185,9 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
 
   useEffect(() => () => {
     if (timer.current) clearTimeout(timer.current);
-  }, []);
+    // Leaving with an edit not yet saved (and saving not stopped): send it now, with keepalive (leaveFlush.ts).
+    if (canEdit && !inFlight.current && !blocked.current) void flushOnLeave(api, layoutId, fetchFn);
+  }, [api, canEdit, fetchFn, layoutId]);
 
   /**
    * After the conflict dialog: their version replaces ours (history cleared), saving resumes.

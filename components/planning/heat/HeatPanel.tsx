@@ -55,7 +55,7 @@ export function HeatPanel({ doc, readOnly, onSystems, onValidity, findings }: Pa
             {h.unknownMaterials.length > 0 && <p className="mb-2 text-xs text-brick">No λ known for: {h.unknownMaterials.join(', ')}. Add the maker&apos;s declared value (same name as in the build-up).</p>}
             <div className="space-y-2">
               {lambdas.fields.map((fl, i) => (
-                <div key={fl.id} className="grid grid-cols-[1fr_9rem_auto] items-end gap-2">
+                <div key={fl.id} className="grid grid-cols-2 sm:grid-cols-[1fr_9rem_auto] items-end gap-2">
                   <div>
                     <label className="label" htmlFor={`${uid}-lam-${i}`}>Material</label>
                     <input id={`${uid}-lam-${i}`} className="field" list="buildup-materials" {...r(`conductivities.${i}.material`)} />
@@ -73,7 +73,7 @@ export function HeatPanel({ doc, readOnly, onSystems, onValidity, findings }: Pa
             <legend className="px-1 text-sm font-semibold">Windows and roof lights</legend>
             <div className="space-y-2">
               {windows.fields.map((fw, i) => (
-                <div key={fw.id} className="grid grid-cols-[7rem_1fr_1fr_auto] items-end gap-2">
+                <div key={fw.id} className="grid grid-cols-2 sm:grid-cols-[7rem_1fr_1fr_auto] items-end gap-2">
                   <div>
                     <label className="label" htmlFor={`${uid}-win-${i}`}>In</label>
                     <select id={`${uid}-win-${i}`} className="field" {...r(`windows.${i}.face`)}><option value="walls">a wall</option><option value="roof">the roof</option></select>

@@ -73,7 +73,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             />
             <div className="mt-3 space-y-2">
               {loads.fields.map((f, i) => (
-                <div key={f.id} className="grid grid-cols-[1fr_6rem_6rem_6rem_5rem_auto] items-end gap-2">
+                <div key={f.id} className="grid grid-cols-2 sm:grid-cols-[1fr_6rem_6rem_6rem_5rem_auto] items-end gap-2">
                   <div>
                     <label className="label" htmlFor={`${uid}-load-${i}`}>Load</label>
                     <input id={`${uid}-load-${i}`} className="field" {...r(`loads.${i}.label`)} />
@@ -126,7 +126,7 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
             <legend className="px-1 text-sm font-semibold">Circuits (cable sizing)</legend>
             <div className="space-y-2">
               {circuits.fields.map((f, i) => (
-                <div key={f.id} className="grid grid-cols-[1fr_5rem_6rem_5rem_6rem_auto] items-end gap-2">
+                <div key={f.id} className="grid grid-cols-2 sm:grid-cols-[1fr_5rem_6rem_5rem_6rem_auto] items-end gap-2">
                   <div>
                     <label className="label" htmlFor={`${uid}-circ-${i}`}>Circuit</label>
                     <input id={`${uid}-circ-${i}`} className="field" {...r(`circuits.${i}.label`)} />

@@ -50,22 +50,26 @@ export function QuoteView({ quote }: { quote: QuoteDto }) {
       {/* Focusable, so a keyboard can scroll the lines sideways on a narrow phone. */}
       <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines">
         <table className="w-full text-left text-sm">
-          <thead className="border-b border-paper-edge text-xs text-ink-soft"><tr><th className="py-1.5">Item</th><th className="pl-3 text-right">Qty</th><th className="pl-3 text-right">Unit price</th><th className="pl-3 text-right">Net</th></tr></thead>
+          <thead className="border-b border-paper-edge text-xs text-ink-soft"><tr><th className="py-1.5">Item</th><th className="pl-3 text-right">Qty</th><th className="pl-3 text-right max-[480px]:hidden">Unit price</th><th className="pl-3 text-right">Net</th></tr></thead>
           <tbody>
             {p.lines.map((l) => (
               <tr key={l.key} className="border-t border-paper-edge">
                 <td className="py-1">{l.description}</td>
-                <td className="pl-3 text-right font-mono">{quantityText(l.qty, l.unit)}</td>
-                <td className="pl-3 text-right font-mono">{m(l.unitPriceMinor)}</td>
+                <td className="pl-3 text-right font-mono">
+                  {quantityText(l.qty, l.unit)}
+                  {/* On a phone the unit price stands under the quantity rather than in a column of its own. */}
+                  <span className="block text-xs text-ink-soft min-[480px]:hidden">at {m(l.unitPriceMinor)}</span>
+                </td>
+                <td className="pl-3 text-right font-mono max-[480px]:hidden">{m(l.unitPriceMinor)}</td>
                 <td className="pl-3 text-right font-mono">{m(l.netMinor)}</td>
               </tr>
             ))}
           </tbody>
           <tfoot className="border-t-2 border-ink">
-            <tr><td className="py-1" colSpan={3}>Materials</td><td className="text-right font-mono">{m(p.materialsMinor)}</td></tr>
-            <tr><td className="py-1" colSpan={3}>Workshop labour, <span className="font-mono">{Math.round(p.labourHours * 100) / 100} h</span></td><td className="text-right font-mono">{m(p.labourMinor)}</td></tr>
-            <tr><td className="py-1" colSpan={3}>VAT <span className="font-mono">{p.vatPct} %</span></td><td className="text-right font-mono">{m(p.vatMinor)}</td></tr>
-            <tr className="font-semibold"><td className="py-1.5" colSpan={3}>Total</td><td className="text-right font-mono" data-testid="quote-total">{m(quote.grossMinor)}</td></tr>
+            <tr><td className="py-1" colSpan={2}>Materials</td><td className="max-[480px]:hidden" /><td className="text-right font-mono">{m(p.materialsMinor)}</td></tr>
+            <tr><td className="py-1" colSpan={2}>Workshop labour, <span className="font-mono">{Math.round(p.labourHours * 100) / 100} h</span></td><td className="max-[480px]:hidden" /><td className="text-right font-mono">{m(p.labourMinor)}</td></tr>
+            <tr><td className="py-1" colSpan={2}>VAT <span className="font-mono">{p.vatPct} %</span></td><td className="max-[480px]:hidden" /><td className="text-right font-mono">{m(p.vatMinor)}</td></tr>
+            <tr className="font-semibold"><td className="py-1.5" colSpan={2}>Total</td><td className="max-[480px]:hidden" /><td className="text-right font-mono" data-testid="quote-total">{m(quote.grossMinor)}</td></tr>
           </tfoot>
         </table>
       </div>

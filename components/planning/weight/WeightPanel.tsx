@@ -71,7 +71,7 @@ export function WeightPanel({ doc, units, readOnly, onSystems, onValidity, findi
             <legend className="px-1 text-sm font-semibold">Other payload (bikes, roof box, tools)</legend>
             <div className="space-y-2">
               {items.fields.map((f, i) => (
-                <div key={f.id} className="grid grid-cols-[1fr_8rem_8rem_auto] items-end gap-2">
+                <div key={f.id} className="grid grid-cols-2 sm:grid-cols-[1fr_8rem_8rem_auto] items-end gap-2">
                   <div>
                     <label className="label" htmlFor={`${uid}-item-${i}`}>Item</label>
                     <input id={`${uid}-item-${i}`} className="field" {...r(`items.${i}.label`)} />

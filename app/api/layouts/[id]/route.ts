@@ -3,17 +3,30 @@ import { baseVersionFrom, renameLayoutBody, saveLayoutBody } from '@/server/api/
 import { parseLayoutDoc } from '@/lib/layout/parse';
 import { deleteLayout, getLayoutJson, renameLayout, saveLayout } from '@/db/layouts';
 import { loadLayoutFor } from '@/db/access';
+import { noneMatchHits } from '@/server/api/etag';
 
 export const dynamic = 'force-dynamic';
 
 type Ctx = { params: Promise<{ id: string }> };
 
+/**
+ * Read. The ETag is the layout version; If-None-Match with the current one answers 304 with no
+ * body (screens revalidate the saved version cheaply: useLatestSaved). The 304 speaks for the
+ * document and its version, which only a save moves; the session and the caller's rights are
+ * checked first, so strangers get 401/404 whatever tag they send. Browsers revalidate every time.
+ */
 export const GET = handle<Ctx>(async (req, { params }) => {
   const actor = await requireActor(req);
+  const { id } = await params;
+  const cache = { 'cache-control': 'private, no-cache' };
+  if (req.headers.has('if-none-match')) {
+    const { version } = await loadLayoutFor(actor, id);
+    if (noneMatchHits(req, `"${version}"`)) return new Response(null, { status: 304, headers: { ...cache, ETag: `"${version}"` } });
+  }
   // The text as the data layer made it (a LayoutDto): parsing it only to serialise it again
   // would be most of the work of a read.
-  const layout = await getLayoutJson(actor, (await params).id);
-  return new Response(layout.json, { headers: { 'content-type': 'application/json', ETag: `"${layout.version}"` } });
+  const layout = await getLayoutJson(actor, id);
+  return new Response(layout.json, { headers: { ...cache, 'content-type': 'application/json', ETag: `"${layout.version}"` } });
 });
 
 /** Save: the body carries the document, If-Match the version it was based on. */

@@ -43,6 +43,7 @@ export default async function BuildPlanPage({ params, searchParams }: { params: 
         layoutName={layout.name}
         initialDoc={layout.doc}
         initialVersion={layout.version}
+        initialSavedAt={layout.updatedAt}
         canEdit={layout.canEdit}
         units={studio.units}
         clientName={layout.client?.name ?? null}
