@@ -192,7 +192,7 @@ export function BuildPlanner(props: BuildPlannerProps) {
         <div className="sticky top-0 z-10 flex flex-wrap items-center gap-3 border-b border-paper-edge bg-paper py-2">
           <CommandButton id="edit.undo" withLabel />
           <CommandButton id="edit.redo" withLabel />
-          <SaveIndicator status={save.status} version={version} detail={save.lastError} />
+          <SaveIndicator status={save.status} version={version} detail={save.lastError} leavingFor={save.leavingFor} />
           {invalid.size > 0 && (
             <span className="text-sm text-brick" role="status" data-testid="fields-to-correct">
               Correct the marked fields in {[...invalid].map((t) => TOPIC[t as BuildTab].title).join(', ')}: until then their last good values are the ones saved.
