@@ -5,8 +5,14 @@ import type { LayoutDoc } from '@/lib/layout/schema';
 import { palette } from '@/lib/look';
 import { kindSpec } from '@/lib/layout/kinds';
 import { surfaceIn } from '@/lib/layout/bay';
+import { KIND_SHORT_NAMES } from '@/lib/symbols/kind-short-names';
+import { LABEL_LOOK, labelNames, placePlanLabels, type MeasureText } from '@/components/editor/geometry/labels';
 
 const MARGIN = 60;
+/** The width the card draws the plan at, about, in CSS px: labels are chosen for that size. */
+const DRAWN_PX = 360;
+/** Text width from its length: about 0.6 em a character in the product's sans face, on the generous side. */
+const roughMeasure: MeasureText = (text, _face, size) => text.length * size * 0.6;
 
 export function PlanThumbnail({ doc, title }: { doc: LayoutDoc; title: string }) {
   const { length: L, width: W } = doc.bay;
@@ -15,7 +21,13 @@ export function PlanThumbnail({ doc, title }: { doc: LayoutDoc; title: string })
   const high = doc.modules.filter((m) => m.arrangements.includes('travel') && m.elevation >= 1000);
   const sleepOnly = doc.modules.filter((m) => !m.arrangements.includes('travel'));
   const fill = (m: LayoutDoc['modules'][number]) => (surfaceIn(m, 'sleep') === 'sleep' ? palette.copperLight : m.kind.includes('water') ? palette.paperDeep : palette.paperLight);
-  const label = (m: LayoutDoc['modules'][number]) => m.label ?? kindSpec(m.kind).title;
+  // Names placed as the editor places them (full, short, abbreviation or none; never a cut word),
+  // clear of each other, at the size the card draws the plan.
+  const px = DRAWN_PX / (L + 2 * MARGIN);
+  const placed = placePlanLabels(
+    standing.map((m) => ({ id: m.id, x: m.x * px, y: m.y * px, width: m.length * px, height: m.width * px, names: labelNames(m.label, kindSpec(m.kind).title, KIND_SHORT_NAMES[m.kind]), dimension: '' })),
+    roughMeasure,
+  );
   return (
     <svg viewBox={`${-MARGIN} ${-MARGIN} ${L + 2 * MARGIN} ${W + 2 * MARGIN}`} role="img" aria-label={`Plan of ${title}`} className="h-auto w-full">
       <title>{title}</title>
@@ -37,11 +49,15 @@ export function PlanThumbnail({ doc, title }: { doc: LayoutDoc; title: string })
       {sleepOnly.map((m) => (
         <rect key={m.id} x={m.x} y={m.y} width={m.length} height={m.width} fill="none" stroke={palette.copper} strokeWidth={8} strokeDasharray="50 30" />
       ))}
-      {standing.filter((m) => m.length >= 350 && m.width >= 200).map((m) => (
-        <text key={`t-${m.id}`} x={m.x + m.length / 2} y={m.y + m.width / 2} fontSize={Math.min(90, m.width / 2.5)} textAnchor="middle" dominantBaseline="middle" fill={palette.inkSoft}>
-          {label(m).length > 16 ? `${label(m).slice(0, 15)}…` : label(m)}
-        </text>
-      ))}
+      {standing.map((m) => {
+        const name = placed.get(m.id)?.name;
+        if (!name) return null;
+        return (
+          <text key={`t-${m.id}`} x={m.x + name.cx / px} y={m.y + name.cy / px} fontSize={LABEL_LOOK.nameSize / px} textAnchor="middle" dominantBaseline="middle" fill={palette.inkSoft}>
+            {name.text}
+          </text>
+        );
+      })}
     </svg>
   );
 }
