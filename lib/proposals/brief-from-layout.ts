@@ -13,6 +13,7 @@ import type { LayoutDoc } from '../layout/schema';
 import { findBeds } from '../checks/beds';
 import { resolveSettings } from '../checks/settings';
 import { DEFAULT_L_PER_PERSON_DAY } from '../planning/water-plan';
+import { gasInventory } from '../planning/gas-ventilation';
 import { briefSchema, FRIDGE_UNITS, TYPICAL_BRIEF, type Brief, type FridgeSize } from './brief';
 import { SIZES } from './patterns';
 
@@ -41,10 +42,8 @@ export function briefFromLayout(doc: LayoutDoc): Brief {
     return w?.use === 'fresh' ? s + w.litres : s;
   }, 0);
   const people = clamp(doc.systems?.water?.persons ?? sleepers.length, 1, 8);
-  const gas = doc.modules.some((m) => {
-    const f = kindFacts(m);
-    return f.gasCylinders !== undefined || /LPG|gas|propane|butane/i.test(f.fuel ?? '');
-  });
+  // Gas aboard exactly when the gas checks say so (a hob burns gas unless its fuel says otherwise).
+  const gas = gasInventory(doc).present;
   const seats = doc.modules.filter((m) => kindFacts(m).seat?.belted).length;
   const brief = {
     ...TYPICAL_BRIEF,

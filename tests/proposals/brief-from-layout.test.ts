@@ -47,4 +47,10 @@ describe('briefFromLayout', () => {
     expect(b.fuel).toBe('electric');
     expect(b.toilet || b.shower).toBe(false);
   });
+
+  it('reads gas as the gas checks do: a hob with no fuel given burns gas, an induction hob does not', () => {
+    const hob = (props: Record<string, unknown>) => l2h2Doc({ modules: [mod({ id: 'hob', kind: 'hob', x: 700, y: 111, length: 500, width: 350, elevation: 900, height: 60, props })] });
+    expect(briefFromLayout(hob({ burners: 2 })).fuel).toBe('gas');
+    expect(briefFromLayout(hob({ burners: 2, fuel: 'electric' })).fuel).toBe('electric');
+  });
 });
