@@ -8,6 +8,7 @@
  */
 import type { LayoutDoc } from '../../layout';
 import { AIR_HEAT_CAPACITY, heatLoss, INPUTS, layerResistance, U_VALUE_SOURCE } from '../../planning';
+import { measuredOutlets } from '../clearance';
 import type { Finding } from '../types';
 import { caution, num, round } from './wording';
 
@@ -54,17 +55,29 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
       source: `Steady-state heat balance (EN 12831 method, simplified); ${U_SOURCE}`,
     });
     const heating = doc.systems?.heating ?? {};
+    // Drawn outlets are measured (clearance.exhaust, clearance.intake); the declared ticks stand in only where none is drawn.
+    const drawn = measuredOutlets(doc);
+    const exhaustText = 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies';
+    const intakeText = 'combustion intake apart from the exhaust and out of spray';
+    const onDrawing = (text: string, ok: boolean) => (ok ? `${text} (measured on the drawing)` : `${text} (measured on the drawing: see the heater exhaust and intake clearances)`);
     if (heating.fuel !== 'electric') out.push(caution(
       'heat.heater-caution',
       [
-        { done: heating.exhaustClearOfOpenings, text: 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies', field: { label: 'Exhaust away from doors, opening windows and the fuel filler, as the maker specifies', where: 'heat' } },
-        { done: heating.intakeClearOfExhaust, text: 'combustion intake apart from the exhaust and out of spray', field: { label: 'Combustion intake apart from the exhaust and out of spray', where: 'heat' } },
+        drawn.exhaust
+          ? { done: drawn.exhaust.ok, text: onDrawing(exhaustText, drawn.exhaust.ok), field: { label: 'Heater exhaust drawn on the body', where: 'editor' }, measured: true }
+          : { done: heating.exhaustClearOfOpenings, text: exhaustText, field: { label: 'Exhaust away from doors, opening windows and the fuel filler, as the maker specifies', where: 'heat' } },
+        drawn.intake
+          ? { done: drawn.intake.ok, text: onDrawing(intakeText, drawn.intake.ok), field: { label: 'Heater intake drawn on the body', where: 'editor' }, measured: true }
+          : { done: heating.intakeClearOfExhaust, text: intakeText, field: { label: 'Combustion intake apart from the exhaust and out of spray', where: 'heat' } },
         { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: { label: 'Carbon-monoxide alarm fitted', where: 'gas' } },
       ],
       'A fuel-burning heater makes carbon monoxide: follow the maker\'s installation manual and local codes for the exhaust and combustion intake (away from doors, opening windows and the fuel filler), use the maker\'s seals and exhaust parts, and fit a CO alarm.',
       'Heater maker\'s installation manual; UN ECE Regulation No. 122 (heating systems; from memory)',
       h.heaterIds,
     ));
+    const measuredIds = [...new Set([...(drawn.exhaust?.openingIds ?? []), ...(drawn.intake?.openingIds ?? [])])];
+    const last = out[out.length - 1];
+    if (last?.id === 'heat.heater-caution' && measuredIds.length) last.openingIds = measuredIds;
   }
   return out;
 }
