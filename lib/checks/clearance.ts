@@ -54,8 +54,8 @@ export const CLEARANCE = Object.freeze({
   intakeFromExhaust: 300,
 });
 
-/** At most this many modules under one roof opening are sorted out for standing floor; more count as standing floor (errs towards a head strike). */
-const COVER_LIMIT = 256;
+/** At most this many pieces under one roof opening are sorted out for standing floor; more count as standing floor (errs towards a head strike). */
+const COVER_LIMIT = 64;
 
 const DAY = ['travel', 'lounge'] as const;
 
