@@ -26,10 +26,10 @@ import type { Rect } from '../geometry/rect';
 import { archBoxes, buildUpThickness, inArrangement, linedInterior, moduleRect } from '../layout/bay';
 import { OUTLET_CAUTION } from '../layout/cautions';
 import {
-  bodyPoints, distanceToBox, doorBox, openingBox, roofOpeningRect, roofOpenings, windowDoor, windowOnWall, windows,
+  bodyPoints, distanceToBox, doorBox, doorName, openingBox, openingName, roofOpeningRect, roofOpenings, windowOnWall, windows,
   bodyPointAt, type Box3,
 } from '../layout/openings';
-import type { Bay, BodyPoint, Door, LayoutDoc, Module, Opening, RoofOpening, WindowOpening } from '../layout/schema';
+import type { BodyPoint, Door, LayoutDoc, Module, Opening, RoofOpening, WindowOpening } from '../layout/schema';
 import type { CheckContext } from './context';
 import { blocksFloor } from './moduleRoles';
 import { listNames, mm, moduleName } from './naming';
@@ -62,25 +62,6 @@ const DAY = ['travel', 'lounge'] as const;
 export function clearanceChecks(ctx: CheckContext): Finding[] {
   if (ctx.doc.bay.openings.length === 0) return [];
   return [...windowClearance(ctx), ...roofOpeningClearance(ctx), ...outletClearance(ctx.doc)];
-}
-
-// ---- names --------------------------------------------------------------------------------------
-
-function doorName(door: Door): string {
-  return door.wall === 'rear' ? 'the rear door' : `the ${door.wall}-hand door`;
-}
-
-/** An opening in words: its label, else what and where it is — never its id. */
-export function openingName(bay: Pick<Bay, 'doors'>, o: Opening): string {
-  if (o.label?.trim()) return o.label.trim();
-  if (o.type === 'window') {
-    const door = windowDoor(bay, o);
-    if (door) return `the window in ${doorName(door)} (${o.position} mm along it)`;
-    return `the ${o.wall}-wall window at ${o.position} mm`;
-  }
-  if (o.type === 'roof-opening') return `the roof ${o.kind === 'skylight' ? 'skylight' : o.kind === 'fan' ? 'fan' : 'vent'} at ${o.x} mm from the front`;
-  const what = { 'fuel-filler': 'fuel filler', 'heater-exhaust': 'heater exhaust', 'heater-intake': 'heater intake', 'gas-drop-vent': 'gas locker drop vent' }[o.kind];
-  return o.wall === 'underside' ? `the ${what} under the floor at ${o.position} mm from the front` : `the ${what} on the ${o.wall} wall at ${o.position} mm`;
 }
 
 const pct = (share: number) => Math.round(share * 1000) / 10;

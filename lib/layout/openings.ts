@@ -164,3 +164,37 @@ export function pointToOpening(bay: Pick<Bay, 'length' | 'width' | 'height' | 'd
   const b = openingBox(bay, floorT, o);
   return b ? distanceToBox(bodyPointAt(bay, p), b) : Infinity;
 }
+
+// ---- names --------------------------------------------------------------------------------------
+
+/** Each roof opening and body point kind in words (sentence case). */
+export const ROOF_OPENING_WORDS: Record<RoofOpening['kind'], string> = { vent: 'Roof vent', fan: 'Roof fan', skylight: 'Skylight' };
+export const BODY_POINT_WORDS: Record<BodyPoint['kind'], string> = { 'fuel-filler': 'Fuel filler', 'heater-exhaust': 'Heater exhaust', 'heater-intake': 'Heater intake', 'gas-drop-vent': 'Gas locker drop vent' };
+
+/** What an opening is, without where (its label, else its kind in words): "Window in the rear door", "Roof vent". */
+export function openingTitle(bay: Pick<Bay, 'doors'>, o: Opening): string {
+  if (o.label?.trim()) return o.label.trim();
+  if (o.type === 'window') {
+    const door = windowDoor(bay, o);
+    return door ? `Window in ${doorName(door)}` : `Window in the ${o.wall} wall`;
+  }
+  return o.type === 'roof-opening' ? ROOF_OPENING_WORDS[o.kind] : BODY_POINT_WORDS[o.kind];
+}
+
+/** A door in words, by its wall — never its id. */
+export function doorName(door: Door): string {
+  return door.wall === 'rear' ? 'the rear door' : `the ${door.wall}-hand door`;
+}
+
+/** An opening in words: its label, else what and where it is — never its id. */
+export function openingName(bay: Pick<Bay, 'doors'>, o: Opening): string {
+  if (o.label?.trim()) return o.label.trim();
+  if (o.type === 'window') {
+    const door = windowDoor(bay, o);
+    if (door) return `the window in ${doorName(door)} (${o.position} mm along it)`;
+    return `the ${o.wall}-wall window at ${o.position} mm`;
+  }
+  if (o.type === 'roof-opening') return `the ${ROOF_OPENING_WORDS[o.kind].toLowerCase()} at ${o.x} mm from the front`;
+  const what = BODY_POINT_WORDS[o.kind].toLowerCase();
+  return o.wall === 'underside' ? `the ${what} under the floor at ${o.position} mm from the front` : `the ${what} on the ${o.wall} wall at ${o.position} mm`;
+}
