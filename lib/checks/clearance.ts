@@ -11,7 +11,7 @@
  *                           standing on the floor or the wheel arches), pass when only modules are under it
  *   clearance.exhaust       per heater exhaust and each opening window, door, roof opening and
  *                           fuel filler: the straight-line distance to its nearest edge
- *   clearance.gas-vent      per gas locker drop vent and each of the same and every heater exhaust
+ *   clearance.gas-vent      per gas locker drop-out vent and each of the same and every heater exhaust
  *   clearance.intake        per heater intake and each heater exhaust
  * A distance finding fails when the whole millimetres measured (rounded down, so it errs short)
  * are under the figure. Every figure is common practice with no source (SOURCES.windowCover,

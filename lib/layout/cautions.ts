@@ -75,7 +75,7 @@ export const PLANNING_CAUTION = {
 } as const;
 
 /**
- * Beside a measured clearance of an outlet (heater exhaust, heater intake, gas locker drop vent)
+ * Beside a measured clearance of an outlet (heater exhaust, heater intake, gas locker drop-out vent)
  * that does not meet or needs attention: the distance is a planning figure, the appliance's
  * instructions and the installer decide.
  */

@@ -169,7 +169,7 @@ export function pointToOpening(bay: Pick<Bay, 'length' | 'width' | 'height' | 'd
 
 /** Each roof opening and body point kind in words (sentence case). */
 export const ROOF_OPENING_WORDS: Record<RoofOpening['kind'], string> = { vent: 'Roof vent', fan: 'Roof fan', skylight: 'Skylight' };
-export const BODY_POINT_WORDS: Record<BodyPoint['kind'], string> = { 'fuel-filler': 'Fuel filler', 'heater-exhaust': 'Heater exhaust', 'heater-intake': 'Heater intake', 'gas-drop-vent': 'Gas locker drop vent' };
+export const BODY_POINT_WORDS: Record<BodyPoint['kind'], string> = { 'fuel-filler': 'Fuel filler', 'heater-exhaust': 'Heater exhaust', 'heater-intake': 'Heater intake', 'gas-drop-vent': 'Gas locker drop-out vent' };
 
 /** What an opening is, without where (its label, else its kind in words): "Window in the rear door", "Roof vent". */
 export function openingTitle(bay: Pick<Bay, 'doors'>, o: Opening): string {

@@ -58,6 +58,6 @@ describe('openings in the revision diff', () => {
     }));
     const changed = diffRevisions(before, after).openings.changed;
     expect(openingChangeWords(after.bay, changed.find((c) => c.id === 'slide-window')!)).toEqual({ name: 'Window in the right-hand door', verb: 'Changed', lines: ['Opens: yes → no', 'Frame: none → 40 mm'] });
-    expect(openingChangeWords(after.bay, changed.find((c) => c.id === 'gas-vent')!)).toMatchObject({ name: 'Gas locker drop vent', verb: 'Moved', lines: ['100 mm towards the left wall'] });
+    expect(openingChangeWords(after.bay, changed.find((c) => c.id === 'gas-vent')!)).toMatchObject({ name: 'Gas locker drop-out vent', verb: 'Moved', lines: ['100 mm towards the left wall'] });
   });
 });
