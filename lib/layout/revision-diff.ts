@@ -208,11 +208,13 @@ export interface FindingLike {
   status: 'pass' | 'warn' | 'fail';
   arrangement?: Arrangement;
   moduleIds?: string[];
+  /** The openings it is about (clearance rules): part of what makes it "the same finding". */
+  openingIds?: string[];
   message: string;
 }
 
 export interface FindingChange {
-  /** Rule id, arrangement and modules: what identifies "the same finding" in both reports. */
+  /** Rule id, arrangement, modules and openings: what identifies "the same finding" in both reports. */
   key: string;
   id: string;
   arrangement?: Arrangement;
@@ -229,7 +231,8 @@ const RANK = { pass: 0, warn: 1, fail: 2 } as const;
 function keyed(findings: FindingLike[]): Map<string, FindingLike> {
   const out = new Map<string, FindingLike>();
   for (const f of findings) {
-    const base = `${f.id}|${f.arrangement ?? ''}|${[...(f.moduleIds ?? [])].sort().join(',')}`;
+    const openings = f.openingIds?.length ? `|${[...f.openingIds].sort().join(',')}` : '';
+    const base = `${f.id}|${f.arrangement ?? ''}|${[...(f.moduleIds ?? [])].sort().join(',')}${openings}`;
     let key = base;
     // The same rule may say two things about the same place: number the repeats.
     for (let n = 2; out.has(key); n++) key = `${base}#${n}`;

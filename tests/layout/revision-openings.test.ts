@@ -61,3 +61,13 @@ describe('openings in the revision diff', () => {
     expect(openingChangeWords(after.bay, changed.find((c) => c.id === 'gas-vent')!)).toMatchObject({ name: 'Gas locker drop-out vent', verb: 'Moved', lines: ['100 mm towards the left wall'] });
   });
 });
+
+describe('findings about openings in the comparison', () => {
+  it('pairs the same outlet finding by its openings, whatever the order of the reports', async () => {
+    const { diffFindings } = await import('@/lib/layout/revision-diff');
+    const f = (to: string, status: 'pass' | 'fail') => ({ id: 'clearance.exhaust', status, openingIds: ['ex', to], message: `to ${to}` });
+    // Before: both pairs meet. After, listed the other way round: only the pair with the filler fails.
+    const changes = diffFindings([f('win', 'pass'), f('fill', 'pass')], [f('fill', 'fail'), f('win', 'pass')]);
+    expect(changes).toEqual([expect.objectContaining({ id: 'clearance.exhaust', before: 'pass', after: 'fail', direction: 'worse', message: 'to fill' })]);
+  });
+});
