@@ -1,6 +1,6 @@
 /**
  * The check engine: `runChecks(doc)` turns a layout document into a CheckReport (DESIGN.md) —
- * fit, walkway, headroom, sleep, egress and travel rules from this folder, then the build-planning
+ * fit, walkway, headroom, sleep, egress, travel and clearance rules from this folder, then the build-planning
  * findings of `systemChecks(doc)`. `ok` is true when no finding fails.
  *
  * A pure function of its input: no clock, no randomness, no I/O; it must never import UI,
@@ -11,6 +11,7 @@
 import { parseLayoutDoc, type FieldIssue } from '../layout/parse';
 import type { LayoutDoc, LayoutSettings } from '../layout/schema';
 import { interiorOf } from '../layout/bay';
+import { clearanceChecks } from './clearance';
 import { CheckContext } from './context';
 import { egressSleep } from './egress';
 import { fitInside, fitOverlap, fitWheelArch } from './fit';
@@ -26,6 +27,7 @@ import { WALKWAY_ARRANGEMENTS, walkwayReach, walkwayWidth } from './walkway';
 
 export { resolveSettings, DEFAULT_SETTINGS, RULE_CONSTANTS, type CheckSettings } from './settings';
 export { SOURCES } from './sources';
+export { CLEARANCE } from './clearance';
 export { MATTRESSES, largestFittingMattress, type Mattress } from './mattress';
 export type { CheckReport, Finding, FindingStatus } from './types';
 
@@ -105,6 +107,7 @@ export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): Check
     ...guarded('sleep', () => [...sleepChecks(ctx), ...sleepPlaces(ctx)]),
     ...guarded('egress', () => egressSleep(ctx)),
     ...guarded('travel', () => [travelSeats(ctx)]),
+    ...guarded('clearance', () => clearanceChecks(ctx)),
     ...guarded('systems', () => systemChecks(doc)),
   ]);
   options.onWork?.({ used: ctx.budget.used, limit: ctx.budget.limit });

@@ -12,6 +12,8 @@ export interface Finding {
   status: FindingStatus;
   arrangement?: Arrangement;
   moduleIds?: string[];
+  /** The bay's openings (windows, roof openings, body points) the finding is about, by id. */
+  openingIds?: string[];
   measured?: number;
   required?: number;
   unit?: string;

@@ -52,6 +52,7 @@ export const RULE_NAMES: Record<string, string> = {
   'clearance.roof-opening': 'Clear of the roof openings',
   'clearance.exhaust': 'Clear of the heater exhaust',
   'clearance.gas-vent': 'Clear of the gas vent',
+  'clearance.intake': 'Heater intake apart from the exhaust',
   'mass.input': 'Vehicle masses',
   'mass.total': 'Maximum authorised mass',
   'mass.front-axle': 'Front axle load',

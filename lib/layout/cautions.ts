@@ -74,6 +74,16 @@ export const PLANNING_CAUTION = {
   gasHeater: 'A gas heater is part of the gas installation: a qualified gas engineer installs and tests it.',
 } as const;
 
+/**
+ * Beside a measured clearance of an outlet (heater exhaust, heater intake, gas locker drop-out vent)
+ * that does not meet or needs attention: the distance is a planning figure, the appliance's
+ * instructions and the installer decide.
+ */
+export const OUTLET_CAUTION: Record<'heating' | 'gas', string> = {
+  heating: 'Place the outlet as the heater’s installation manual says; a qualified installer fits it and checks the distances on the van itself.',
+  gas: 'A qualified gas engineer places and tests the locker vent to local codes (EN 1949 in Europe, from memory); the distance here is a planning figure.',
+};
+
 /** The longer cautions every plan sheet carries, whatever the layout holds. */
 export const SHEET_CAUTIONS: { topic: string; text: string }[] = [
   {
@@ -128,7 +138,7 @@ export function findingTopic(findingId: string): HazardTopic | null {
   const family = findingId.split('.')[0];
   if (family === 'gas' || findingId === 'clearance.gas-vent') return 'gas';
   if (family === 'power') return 'power';
-  if (findingId === 'heat.heater-size' || findingId === 'clearance.exhaust') return 'heating';
+  if (findingId === 'heat.heater-size' || findingId === 'clearance.exhaust' || findingId === 'clearance.intake') return 'heating';
   if (family === 'mass') return 'weight';
   if (findingId === 'travel.seats') return 'seats';
   return null;

@@ -11,7 +11,7 @@ import { baySchema, buildUpSchema, layoutNameSchema, moduleSchema, occupantsSche
 import { systemsSchema } from './systems';
 
 /** The version this code writes; `parse.ts` steps older documents up to it. */
-export const CURRENT_SCHEMA_VERSION = 3;
+export const CURRENT_SCHEMA_VERSION = 4;
 
 export const layoutDocSchema = z
   .strictObject({

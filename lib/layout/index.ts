@@ -9,3 +9,4 @@ export * from './systems';
 export * from './drawing-issue';
 export * from './cautions';
 export * from './field-words';
+export * from './openings';

@@ -29,7 +29,16 @@ const migrations: Record<number, (doc: Record<string, unknown>) => Record<string
   // (`surfaces`). The old value becomes the value in every arrangement the module is present in,
   // so the checks read exactly what they read before. `mount` is new and defaults to inside.
   2: (doc) => ({ ...doc, schemaVersion: 3, modules: Array.isArray(doc.modules) ? doc.modules.map(surfacesPerArrangement) : doc.modules }),
+  // 3: the bay had doors only; now it also holds its windows, roof openings and body points
+  // (`bay.openings`). A version-3 document has none drawn, so it gets an empty list and is
+  // otherwise unchanged. A bay that is not an object is left for validation to report.
+  3: (doc) => ({ ...doc, schemaVersion: 4, bay: withOpenings(doc.bay) }),
 };
+
+function withOpenings(bay: unknown): unknown {
+  if (typeof bay !== 'object' || bay === null || Array.isArray(bay) || Object.hasOwn(bay, 'openings')) return bay;
+  return { ...bay, openings: [] };
+}
 
 function surfacesPerArrangement(m: unknown): unknown {
   if (typeof m !== 'object' || m === null || Array.isArray(m) || !Object.hasOwn(m, 'surface')) return m;

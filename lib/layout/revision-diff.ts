@@ -2,13 +2,14 @@
  * What changed between two revisions of a layout, for the side-by-side comparison: modules
  * added, removed, moved (x, y or elevation) or resized (length, width, height; a 90° turn shows
  * as a swap), other edits to a module (label, facing, arrangements, surfaces, mount, mass, props), the
- * bay's own measurements, and which check findings changed status.
+ * bay's own measurements, its openings (windows, roof openings, body points: added, removed, moved
+ * along their wall or in plan, resized, or otherwise changed), and which check findings changed status.
  *
  * Pure data in, data out. Findings are taken structurally (id, status, arrangement, moduleIds),
  * so this file needs nothing from lib/checks. Must never import React, Next, the database or the
  * check engine.
  */
-import type { Arrangement, LayoutDoc, Module } from './schema';
+import type { Arrangement, LayoutDoc, Module, Opening } from './schema';
 import { layersThickness } from './bay';
 
 export interface Moved {
@@ -43,6 +44,33 @@ export interface BayChange {
   after: string;
 }
 
+/** How an opening moved: along its wall (windows, body points on a wall), up, or in plan (roof openings, the underside). */
+export interface OpeningMoved {
+  /** Along its wall from the wall's start, or rearwards (x) for a roof opening or a point underneath. */
+  dAlong: number;
+  /** Across the van (y): a roof opening or a point underneath. */
+  dAcross: number;
+  /** Up: a window's sill, a body point's height. */
+  dUp: number;
+}
+
+export interface OpeningChange {
+  id: string;
+  before: Opening;
+  after: Opening;
+  moved: OpeningMoved | null;
+  /** Change of size: width and height of a window, length and width of a roof opening. */
+  resized: { dA: number; dB: number } | null;
+  /** Other fields changed: its wall or door, kind, label, opens, frame. */
+  other: string[];
+}
+
+export interface OpeningsDiff {
+  added: Opening[];
+  removed: Opening[];
+  changed: OpeningChange[];
+}
+
 export interface RevisionDiff {
   added: Module[];
   removed: Module[];
@@ -53,6 +81,8 @@ export interface RevisionDiff {
   resized: string[];
   unchanged: number;
   bay: BayChange[];
+  /** The bay's openings, matched by id like modules. */
+  openings: OpeningsDiff;
 }
 
 function same(a: unknown, b: unknown): boolean {
@@ -103,6 +133,48 @@ function bayChanges(before: LayoutDoc, after: LayoutDoc): BayChange[] {
   return out;
 }
 
+function openingChange(b: Opening, a: Opening): OpeningChange | null {
+  const other: string[] = [];
+  let moved: OpeningMoved | null = null;
+  let resized: OpeningChange['resized'] = null;
+  if (b.type !== a.type) other.push('type');
+  else if (a.type === 'window' && b.type === 'window') {
+    if (a.wall !== b.wall || a.door !== b.door) other.push('wall');
+    const m = { dAlong: a.position - b.position, dAcross: 0, dUp: a.sillHeight - b.sillHeight };
+    if (m.dAlong || m.dUp) moved = m;
+    if (a.width !== b.width || a.height !== b.height) resized = { dA: a.width - b.width, dB: a.height - b.height };
+    if (a.opens !== b.opens) other.push('opens');
+    if (a.frameDepth !== b.frameDepth) other.push('frame');
+  } else if (a.type === 'roof-opening' && b.type === 'roof-opening') {
+    if (a.kind !== b.kind) other.push('kind');
+    const m = { dAlong: a.x - b.x, dAcross: a.y - b.y, dUp: 0 };
+    if (m.dAlong || m.dAcross) moved = m;
+    if (a.length !== b.length || a.width !== b.width) resized = { dA: a.length - b.length, dB: a.width - b.width };
+    if (a.frameHeight !== b.frameHeight) other.push('frame');
+  } else if (a.type === 'body-point' && b.type === 'body-point') {
+    if (a.kind !== b.kind) other.push('kind');
+    if (a.wall !== b.wall) other.push('wall');
+    const m = { dAlong: a.position - b.position, dAcross: (a.across ?? 0) - (b.across ?? 0), dUp: a.height - b.height };
+    if (m.dAlong || m.dAcross || m.dUp) moved = m;
+  }
+  if ((a.label ?? '') !== (b.label ?? '')) other.push('label');
+  if (!moved && !resized && !other.length) return null;
+  return { id: a.id, before: b, after: a, moved, resized, other };
+}
+
+/** Openings are matched by id, like modules. */
+export function diffOpenings(before: Opening[], after: Opening[]): OpeningsDiff {
+  const beforeById = new Map(before.map((o) => [o.id, o]));
+  const afterIds = new Set(after.map((o) => o.id));
+  const changed: OpeningChange[] = [];
+  for (const a of after) {
+    const b = beforeById.get(a.id);
+    const c = b ? openingChange(b, a) : null;
+    if (c) changed.push(c);
+  }
+  return { added: after.filter((o) => !beforeById.has(o.id)), removed: before.filter((o) => !afterIds.has(o.id)), changed };
+}
+
 /** Modules are matched by id: an id in both documents is the same module, whatever else changed. */
 export function diffRevisions(before: LayoutDoc, after: LayoutDoc): RevisionDiff {
   const beforeById = new Map(before.modules.map((m) => [m.id, m]));
@@ -126,6 +198,7 @@ export function diffRevisions(before: LayoutDoc, after: LayoutDoc): RevisionDiff
     resized: changed.filter((c) => c.resized).map((c) => c.id),
     unchanged,
     bay: bayChanges(before, after),
+    openings: diffOpenings(before.bay.openings ?? [], after.bay.openings ?? []),
   };
 }
 
@@ -135,11 +208,13 @@ export interface FindingLike {
   status: 'pass' | 'warn' | 'fail';
   arrangement?: Arrangement;
   moduleIds?: string[];
+  /** The openings it is about (clearance rules): part of what makes it "the same finding". */
+  openingIds?: string[];
   message: string;
 }
 
 export interface FindingChange {
-  /** Rule id, arrangement and modules: what identifies "the same finding" in both reports. */
+  /** Rule id, arrangement, modules and openings: what identifies "the same finding" in both reports. */
   key: string;
   id: string;
   arrangement?: Arrangement;
@@ -156,7 +231,8 @@ const RANK = { pass: 0, warn: 1, fail: 2 } as const;
 function keyed(findings: FindingLike[]): Map<string, FindingLike> {
   const out = new Map<string, FindingLike>();
   for (const f of findings) {
-    const base = `${f.id}|${f.arrangement ?? ''}|${[...(f.moduleIds ?? [])].sort().join(',')}`;
+    const openings = f.openingIds?.length ? `|${[...f.openingIds].sort().join(',')}` : '';
+    const base = `${f.id}|${f.arrangement ?? ''}|${[...(f.moduleIds ?? [])].sort().join(',')}${openings}`;
     let key = base;
     // The same rule may say two things about the same place: number the repeats.
     for (let n = 2; out.has(key); n++) key = `${base}#${n}`;

@@ -6,8 +6,9 @@
  */
 import { KINDS, moduleLabel } from './kinds';
 import { BAY_FIELD_WORDS, FACING_WORDS, MODULE_FIELD_WORDS, MOUNT_WORDS, propWord, surfacesWords } from './field-words';
-import type { BayChange, ModuleChange } from './revision-diff';
-import type { Module } from './schema';
+import { openingTitle } from './openings';
+import type { BayChange, ModuleChange, OpeningChange } from './revision-diff';
+import type { Bay, Module, Opening } from './schema';
 import { formatLength, type LengthUnit } from './units';
 
 /** A module's name in a change list: the one naming rule of lib/layout/kinds (`moduleLabel`). */
@@ -86,4 +87,57 @@ export function bayChangeWords(b: BayChange, units: LengthUnit = 'mm'): string {
     return b.before === b.after ? `${name}: changed (${n(b.after)})` : `${name}: ${n(b.before)} → ${n(b.after)}`;
   }
   return `${name}: ${b.before} → ${b.after}`;
+}
+
+function openingSize(o: Opening, units: LengthUnit): string {
+  if (o.type === 'window') return `${formatLength(o.width, units)} × ${formatLength(o.height, units)}`;
+  if (o.type === 'roof-opening') return `${formatLength(o.length, units)} × ${formatLength(o.width, units)}`;
+  return '';
+}
+
+/** An opening added or removed, in words: "Window in the left wall, 600 mm × 400 mm". */
+export function openingWords(bay: Pick<Bay, 'doors'>, o: Opening, units: LengthUnit = 'mm'): string {
+  const size = openingSize(o, units);
+  return size ? `${openingTitle(bay, o)}, ${size}` : openingTitle(bay, o);
+}
+
+/**
+ * What happened to one opening, like a module: a verb ("Moved", "Resized"…) and short lines. Along
+ * a side wall forwards or rearwards, along the rear wall towards the left or right wall; a roof
+ * opening or a point underneath rearwards and across.
+ */
+export function openingChangeWords(bay: Pick<Bay, 'doors'>, c: OpeningChange, units: LengthUnit = 'mm'): { name: string; verb: string; lines: string[] } {
+  const lines: string[] = [];
+  const verbs: string[] = [];
+  const a = c.after;
+  if (c.moved) {
+    verbs.push('moved');
+    const onRear = (a.type === 'window' && (a.wall === 'rear' || bay.doors.find((d) => d.id === a.door)?.wall === 'rear')) || (a.type === 'body-point' && a.wall === 'rear');
+    const parts = [
+      onRear ? along(c.moved.dAlong, 'towards the right wall', 'towards the left wall', units) : along(c.moved.dAlong, 'rearwards', 'forwards', units),
+      along(c.moved.dAcross, 'towards the right wall', 'towards the left wall', units),
+      along(c.moved.dUp, 'up', 'down', units),
+    ].filter(Boolean);
+    lines.push(parts.join(', '));
+  }
+  if (c.resized) {
+    verbs.push('resized');
+    lines.push(`${openingSize(c.before, units)} → ${openingSize(a, units)}`);
+  }
+  const b = c.before;
+  for (const field of c.other) {
+    if (field === 'label') lines.push(`Label: ${value(b.label)} → ${value(a.label)}`);
+    else if (field === 'opens' && a.type === 'window' && b.type === 'window') lines.push(`Opens: ${value(b.opens)} → ${value(a.opens)}`);
+    else if (field === 'frame') lines.push(`Frame: ${frameWords(b, units)} → ${frameWords(a, units)}`);
+    else lines.push(`${openingTitle(bay, b)} → ${openingTitle(bay, a)}`);
+  }
+  if (!verbs.length) verbs.push('changed');
+  const verb = verbs.join(' and ');
+  return { name: openingTitle(bay, a), verb: verb.charAt(0).toUpperCase() + verb.slice(1), lines: [...new Set(lines.filter(Boolean))] };
+}
+
+function frameWords(o: Opening, units: LengthUnit): string {
+  if (o.type === 'window') return o.frameDepth === undefined ? 'none' : formatLength(o.frameDepth, units);
+  if (o.type === 'roof-opening') return formatLength(o.frameHeight, units);
+  return 'none';
 }

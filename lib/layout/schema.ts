@@ -11,9 +11,15 @@
  */
 import * as z from 'zod/mini';
 import { KINDS, kindValuesSchema, MODULE_KINDS, type KindValues, type ModuleKind } from './kinds';
-import { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_LIMITS, MOUNTS, SURFACE_CHOICES, SURFACES } from './vocabulary';
+import {
+  ARRANGEMENTS, BAY_LIMITS, BODY_POINT_KINDS, BODY_POINT_WALLS, FACINGS, MATTRESS_REGIONS, MODULE_LIMITS, MOUNTS, OPENING_LIMITS,
+  OPENING_TYPES, ROOF_OPENING_KINDS, SURFACE_CHOICES, SURFACES, WINDOW_WALLS,
+} from './vocabulary';
 
-export { ARRANGEMENTS, BAY_LIMITS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, MOUNTS, SURFACE_CHOICES, SURFACES };
+export {
+  ARRANGEMENTS, BAY_LIMITS, BODY_POINT_KINDS, BODY_POINT_WALLS, FACINGS, MATTRESS_REGIONS, MODULE_KINDS, MODULE_LIMITS, MOUNTS, OPENING_LIMITS,
+  OPENING_TYPES, ROOF_OPENING_KINDS, SURFACE_CHOICES, SURFACES, WINDOW_WALLS,
+};
 export type { ModuleKind };
 export type { LayoutDoc, LayoutDocInput } from './document';
 
@@ -71,6 +77,77 @@ export const doorSchema = z.strictObject({
 });
 export type Door = z.infer<typeof doorSchema>;
 
+/** A length that must be more than nothing: an opening's width, height, length. */
+const sizeMm = (max = 100_000) => mmBetween(1, max);
+
+/**
+ * A window in a wall or a door (schema version 4). Along its wall the way doors are measured:
+ * `position` runs from the wall's start — the FRONT end of a side wall, the LEFT end of the rear
+ * wall (facing the direction of travel) — to the window's near edge; in a door it runs from the
+ * door's own start edge (the door's `offset` on its wall) the same way. `sillHeight` is the bottom
+ * of the glass above the FINISHED floor, like a module's elevation.
+ */
+export const wallWindowSchema = z.strictObject({
+  id,
+  type: z.literal('window'),
+  label: z.optional(text(80)),
+  wall: z.enum(WINDOW_WALLS),
+  /** The door the window is in, by its id, when `wall` is 'door'. */
+  door: z.optional(id),
+  position: mm(),
+  sillHeight: mm(),
+  width: sizeMm(),
+  height: sizeMm(),
+  /** Whether it opens (a fixed pane does not). */
+  opens: z.boolean(),
+  /** How far a blind or fly-screen frame stands into the room from the lining, when there is one. */
+  frameDepth: z.optional(mm(OPENING_LIMITS.frame)),
+});
+export type WindowOpening = z.infer<typeof wallWindowSchema>;
+
+/**
+ * A roof opening (vent, fan, skylight), placed in plan the way modules are: `x`, `y` its min
+ * corner (front-left), `length` along x, `width` along y. `frameHeight` is how far its inside
+ * frame (trim, blind, fan housing) hangs below the roof lining.
+ */
+export const roofOpeningSchema = z.strictObject({
+  id,
+  type: z.literal('roof-opening'),
+  label: z.optional(text(80)),
+  kind: z.enum(ROOF_OPENING_KINDS),
+  x: mm(),
+  y: mm(),
+  length: sizeMm(),
+  width: sizeMm(),
+  frameHeight: z._default(mm(OPENING_LIMITS.frame), 0),
+});
+export type RoofOpening = z.infer<typeof roofOpeningSchema>;
+
+/**
+ * A point on the outside of the body: the fuel filler, the heater's exhaust outlet and combustion
+ * intake, the gas locker's drop-out vent. On a wall: `position` along it from its start (as a
+ * window) and `height` above the BARE load floor — the outside skin does not move with the floor's
+ * build-up; negative below it (a sill, a skirt). On the underside: `position` from the front (x),
+ * `across` from the left side (y), and `height` how far it hangs below the load floor, as a
+ * negative number (0 at the floor's underside).
+ */
+export const bodyPointSchema = z.strictObject({
+  id,
+  type: z.literal('body-point'),
+  label: z.optional(text(80)),
+  kind: z.enum(BODY_POINT_KINDS),
+  wall: z.enum(BODY_POINT_WALLS),
+  position: mm(),
+  /** Only on the underside: from the left side of the bay. */
+  across: z.optional(mm()),
+  height: mmBetween(-OPENING_LIMITS.belowFloor, 100_000),
+});
+export type BodyPoint = z.infer<typeof bodyPointSchema>;
+
+export const openingSchema = z.discriminatedUnion('type', [wallWindowSchema, roofOpeningSchema, bodyPointSchema], 'unknown type of opening');
+export type Opening = z.infer<typeof openingSchema>;
+export type OpeningType = (typeof OPENING_TYPES)[number];
+
 const bayMm = (limit: { min: number; max: number }, what: string) =>
   mm(limit.max).check(z.refine((v) => v >= limit.min, `a bay is at least ${limit.min} mm ${what}`));
 
@@ -81,6 +158,8 @@ export const baySchema = z
     height: bayMm(BAY_LIMITS.height, 'high'),
     wheelArches: z._default(z.array(wheelArchSchema).check(atMost(8, 'wheel arches')), []),
     doors: z._default(z.array(doorSchema).check(atMost(12, 'doors')), []),
+    /** Windows, roof openings and body points (schema version 4). */
+    openings: z._default(z.array(openingSchema).check(atMost(OPENING_LIMITS.count, 'openings')), []),
     bulkhead: z._default(z.boolean(), true),
     cabSeats: z._default(z.int('a whole number from 0 to 9').check(z.refine((v) => v >= 0 && v <= 9, 'a whole number from 0 to 9')), 2),
   })
@@ -91,6 +170,13 @@ export const baySchema = z
         ctx.addIssue({ code: 'custom', path: ['doors', i, 'width'], message: `door runs past the end of the ${door.wall} wall (${wallLength} mm)`, input: door });
       }
     });
+    const openingIds = new Set<string>();
+    bay.openings.forEach((o, i) => {
+      const problem = openingProblem(bay, o);
+      if (problem) ctx.addIssue({ code: 'custom', path: ['openings', i, problem.field], message: problem.message, input: o });
+      if (openingIds.has(o.id)) ctx.addIssue({ code: 'custom', path: ['openings', i, 'id'], message: `opening id "${o.id}" is used twice`, input: o.id });
+      openingIds.add(o.id);
+    });
     bay.wheelArches.forEach((arch, i) => {
       if (arch.x + arch.length > bay.length) {
         ctx.addIssue({ code: 'custom', path: ['wheelArches', i, 'length'], message: `wheel arch runs past the rear of the bay (${bay.length} mm)`, input: arch });
@@ -98,6 +184,48 @@ export const baySchema = z
     });
   }));
 export type Bay = z.infer<typeof baySchema>;
+/** A bay as a caller may write it, before defaults (no openings, no doors…) are filled in. */
+export type BayInput = z.input<typeof baySchema>;
+
+type BayFrame = Pick<z.output<typeof doorSchema>, 'id' | 'wall' | 'offset' | 'width'>;
+
+/** Whether an opening lies inside the bay it belongs to; the first field at fault and why, or null. */
+function openingProblem(bay: { length: number; width: number; height: number; doors: BayFrame[] }, o: Opening): { field: string; message: string } | null {
+  const wallLength = (wall: 'left' | 'right' | 'rear') => (wall === 'rear' ? bay.width : bay.length);
+  if (o.type === 'window') {
+    let along: number;
+    let where: string;
+    if (o.wall === 'door') {
+      const door = bay.doors.find((d) => d.id === o.door);
+      if (!door) return { field: 'door', message: o.door === undefined ? 'name the door the window is in' : `there is no door "${o.door}"` };
+      along = door.width;
+      where = `door "${door.id}" (${along} mm)`;
+    } else {
+      if (o.door !== undefined) return { field: 'door', message: 'a window in a wall names no door' };
+      along = wallLength(o.wall);
+      where = `the ${o.wall} wall (${along} mm)`;
+    }
+    if (o.position + o.width > along) return { field: 'width', message: `window runs past the end of ${where}` };
+    if (o.sillHeight + o.height > bay.height) return { field: 'height', message: `window runs above the roof (${bay.height} mm)` };
+    return null;
+  }
+  if (o.type === 'roof-opening') {
+    if (o.x + o.length > bay.length) return { field: 'length', message: `roof opening runs past the rear of the bay (${bay.length} mm)` };
+    if (o.y + o.width > bay.width) return { field: 'width', message: `roof opening runs past the right wall (${bay.width} mm)` };
+    return null;
+  }
+  if (o.wall === 'underside') {
+    if (o.across === undefined) return { field: 'across', message: 'a point on the underside needs its distance from the left side' };
+    if (o.position > bay.length) return { field: 'position', message: `point lies behind the rear of the bay (${bay.length} mm)` };
+    if (o.across > bay.width) return { field: 'across', message: `point lies past the right side (${bay.width} mm)` };
+    if (o.height > 0) return { field: 'height', message: 'a point on the underside is at or below the floor (0 or less)' };
+    return null;
+  }
+  if (o.across !== undefined) return { field: 'across', message: 'only a point on the underside takes a distance across' };
+  if (o.position > wallLength(o.wall)) return { field: 'position', message: `point lies past the end of the ${o.wall} wall (${wallLength(o.wall)} mm)` };
+  if (o.height > bay.height) return { field: 'height', message: `point lies above the roof (${bay.height} mm)` };
+  return null;
+}
 
 export const layerSchema = z.strictObject({
   material: text(80).check(z.minLength(1, 'name the material')),

@@ -4,7 +4,7 @@
  * Values are typical for the class — measure your own van.
  */
 import { z } from 'zod';
-import { baySchema, type Bay, buildUpSchema, type BuildUp } from './schema';
+import { baySchema, type Bay, type BayInput, buildUpSchema, type BuildUp } from './schema';
 import { CURRENT_SCHEMA_VERSION, layoutDocSchema, type LayoutDoc } from './document';
 import l1h1 from '../../public/templates/bay-l1h1.json';
 import l2h1 from '../../public/templates/bay-l2h1.json';
@@ -51,7 +51,7 @@ export const DEFAULT_BUILD_UP: BuildUp = buildUpSchema.parse({
 });
 
 /** A new, empty layout in the given bay. */
-export function emptyLayout(name: string, bay: Bay): LayoutDoc {
+export function emptyLayout(name: string, bay: BayInput): LayoutDoc {
   return layoutDocSchema.parse({
     schemaVersion: CURRENT_SCHEMA_VERSION,
     name,

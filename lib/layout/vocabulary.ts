@@ -23,6 +23,28 @@ export const MOUNTS = ['inside', 'under-floor', 'roof', 'rear'] as const;
 
 export const MATTRESS_REGIONS = ['uk', 'eu', 'us'] as const;
 
+/**
+ * Openings in the bay's walls and roof (schema version 4). `type` says where it is: a window in a
+ * wall or a door, a roof opening, or a point on the body (an outlet or filler on the outside).
+ */
+export const OPENING_TYPES = ['window', 'roof-opening', 'body-point'] as const;
+/** Where a window sits: a wall of the bay, or a door (then `door` names it). */
+export const WINDOW_WALLS = ['left', 'right', 'rear', 'door'] as const;
+export const ROOF_OPENING_KINDS = ['vent', 'fan', 'skylight'] as const;
+export const BODY_POINT_KINDS = ['fuel-filler', 'heater-exhaust', 'heater-intake', 'gas-drop-vent'] as const;
+/** Where a body point sits: a wall of the bay (outside face), or the underside of the floor. */
+export const BODY_POINT_WALLS = ['left', 'right', 'rear', 'underside'] as const;
+
+/** The one set of limits for openings, used by the schema and (later) the Details panel. */
+export const OPENING_LIMITS = {
+  /** At most this many openings per bay, so every rule over openings stays bounded (common practice, no source). */
+  count: 64,
+  /** A body point may sit this far below the load floor (on a sill, under the floor). */
+  belowFloor: 2000,
+  /** Deepest inside frame of a window (blind, fly screen) or roof opening. */
+  frame: 500,
+} as const;
+
 export const BATTERY_CHEMISTRIES = ['lead-acid', 'agm', 'lifepo4'] as const;
 
 /**

@@ -6,7 +6,10 @@
  * Rse 0.04 in all directions. The steel skin adds next to nothing (1 mm at λ 50) and is left out;
  * steel ribs and pillars bridge the insulation and are NOT counted — keep a margin on the heater.
  * Areas are the bare-metal faces of the bay (floor, roof, both side walls, front and rear), less
- * any windows, which are counted with their own U. Ventilation loss 0.34 W/(m³·K) × n × V
+ * any windows, which are counted with their own U. The windows are the bay's drawn openings
+ * (windows in walls and doors on the walls, roof vents, fans and skylights on the roof) when any
+ * is drawn, else the list typed on the heat tab; a drawn opening takes the area-weighted U of the
+ * typed entries on its face, or DRAWN_OPENING_U when none is typed. Ventilation loss 0.34 W/(m³·K) × n × V
  * (volumetric heat capacity of air, EN 12831, from memory). Default design ΔT 20 K and 1 air change
  * an hour: common practice, no source.
  *
@@ -14,6 +17,7 @@
  * on a valid LayoutDoc. Must never import UI, framework or database code.
  */
 import type { Layer, LayoutDoc } from '../layout';
+import { roofOpeningAreaM2, roofOpenings, windowAreaM2, windows as drawnWindows } from '../layout/openings';
 import { conductivityOf } from './conductivity';
 import { moduleFacts } from './module-facts';
 
@@ -26,6 +30,12 @@ export const RSE = 0.04;
 export const AIR_HEAT_CAPACITY = 0.34;
 export const DEFAULT_DELTA_K = 20; // common practice, no source
 export const DEFAULT_AIR_CHANGES = 1; // common practice, no source
+/**
+ * U of a drawn window or roof opening when no U is typed for its face, W/m²K: single glazing,
+ * about 5.7 — from memory (no table consulted); errs high for double-glazed or acrylic units.
+ */
+export const DRAWN_OPENING_U = 5.7;
+export const DRAWN_OPENING_U_SOURCE = 'single glazing about 5.7 W/m²K (from memory)';
 export const U_VALUE_SOURCE = 'EN ISO 6946 (U = 1 ÷ (Rsi + Σ d/λ + Rse); surface resistances Table 7, from memory); λ from EN ISO 10456 Table 3 or typical declared values (from memory)';
 
 /** The build-up's own resistance, without the two surface resistances, m²K/W. */
@@ -68,9 +78,20 @@ export interface FaceLoss {
   wPerK: number;
 }
 
+/** One glazed area counted in the heat loss. */
+export interface GlazedArea {
+  face: Face;
+  areaM2: number;
+  uValue: number;
+}
+
 export interface HeatLossReport {
   uValues: UValueResult[];
   faces: FaceLoss[];
+  /** Where the windows came from: the drawn openings, the list typed on the heat tab, or none at all. */
+  windowsFrom: 'drawn' | 'typed' | 'none';
+  /** The glazed areas counted (drawn or typed). */
+  windows: GlazedArea[];
   windowsWPerK: number;
   ventilationWPerK: number;
   totalWPerK: number;
@@ -89,7 +110,7 @@ export function heatLoss(doc: LayoutDoc): HeatLossReport {
   const L = doc.bay.length / 1000;
   const W = doc.bay.width / 1000;
   const H = doc.bay.height / 1000;
-  const windows = ins.windows ?? [];
+  const { windows, windowsFrom } = glazedAreas(doc);
   const windowArea = (face: Face) => windows.filter((w) => w.face === face).reduce((a, w) => a + w.areaM2, 0);
   const gross: Record<Face, number> = { floor: L * W, roof: L * W, walls: 2 * L * H + 2 * W * H };
   const uValues = (['floor', 'walls', 'roof'] as Face[]).map((f) => uValue(doc.buildUp[f], f, overrides));
@@ -106,6 +127,8 @@ export function heatLoss(doc: LayoutDoc): HeatLossReport {
   return {
     uValues,
     faces,
+    windowsFrom,
+    windows,
     windowsWPerK,
     ventilationWPerK,
     totalWPerK,
@@ -115,4 +138,24 @@ export function heatLoss(doc: LayoutDoc): HeatLossReport {
     heaterIds: heaters.map((m) => m.id),
     unknownMaterials: [...new Set(uValues.flatMap((u) => u.unknown))],
   };
+}
+
+/**
+ * The glazed areas of the bay: the drawn windows (walls) and roof openings (roof) when any is
+ * drawn, else the typed list. A drawn opening's U is the area-weighted U of the typed entries on
+ * its face, or DRAWN_OPENING_U when none is typed there.
+ */
+export function glazedAreas(doc: Pick<LayoutDoc, 'bay' | 'systems'>): { windows: GlazedArea[]; windowsFrom: HeatLossReport['windowsFrom'] } {
+  const typed = (doc.systems?.insulation?.windows ?? []).map((w) => ({ face: w.face as Face, areaM2: w.areaM2, uValue: w.uValue }));
+  const glass = drawnWindows(doc.bay).map((w) => ({ face: 'walls' as Face, areaM2: windowAreaM2(w) }));
+  const roof = roofOpenings(doc.bay).map((o) => ({ face: 'roof' as Face, areaM2: roofOpeningAreaM2(o) }));
+  const drawn = [...glass, ...roof];
+  if (drawn.length === 0) return { windows: typed, windowsFrom: typed.length ? 'typed' : 'none' };
+  const typedU = (face: Face) => {
+    const on = typed.filter((w) => w.face === face);
+    const area = on.reduce((a, w) => a + w.areaM2, 0);
+    return area > 0 ? on.reduce((a, w) => a + w.uValue * w.areaM2, 0) / area : DRAWN_OPENING_U;
+  };
+  const u = { walls: typedU('walls'), roof: typedU('roof'), floor: DRAWN_OPENING_U };
+  return { windows: drawn.map((w) => ({ ...w, uValue: u[w.face] })), windowsFrom: 'drawn' };
 }

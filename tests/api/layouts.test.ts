@@ -124,7 +124,7 @@ describe('GET /api/layouts/:id', () => {
     for (const who of [w.owner, w.designer, w.client]) {
       const res = await call(one.GET, { as: who, params: { id: w.clientLayoutId } });
       expect(res.status).toBe(200);
-      expect(res.body.doc.schemaVersion).toBe(3);
+      expect(res.body.doc.schemaVersion).toBe(4);
       expect(res.headers.get('etag')).toBe(`"${res.body.version}"`);
     }
   });

@@ -49,7 +49,7 @@ describe('a version-1 document with free-bag props, read back', () => {
     const res = await call(one.GET, { params: { id: layoutId }, as: w.designer });
     expect(res.status).toBe(200);
     const doc = res.body.doc;
-    expect(doc.schemaVersion).toBe(3);
+    expect(doc.schemaVersion).toBe(4);
     const props = (id: string) => doc.modules.find((m: { id: string }) => m.id === id).props;
     expect(props('fridge')).toEqual({ litres: 55, watts: 40, dutyCycle: 0.33 }); // "55" read as 55; colour is no fridge value
     expect(props('hob')).toEqual({ burners: 3, fuel: 'induction' });

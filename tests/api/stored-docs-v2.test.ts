@@ -42,7 +42,7 @@ describe('a version-2 document with one surface per module, read back', () => {
   it('answers the current version with the surface in every arrangement the module is in', async () => {
     const res = await call(one.GET, { params: { id: layoutId }, as: w.designer });
     expect(res.status).toBe(200);
-    expect(res.body.doc.schemaVersion).toBe(3);
+    expect(res.body.doc.schemaVersion).toBe(4);
     const [bench, table] = res.body.doc.modules;
     expect(bench.surfaces).toEqual({ lounge: 'sleep', sleep: 'sleep' });
     expect(bench.surface).toBeUndefined();

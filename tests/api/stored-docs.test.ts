@@ -1,6 +1,6 @@
 // Stored documents are migrated on read: a layout and a revision stored in the previous schema
 // shape (version 0: no `schemaVersion`, and none of the fields the current schema fills in — the
-// bay's doors, wheel arches, bulkhead and cab seats, the sleepers, the wall build-up) are written
+// bay's doors, openings, wheel arches, bulkhead and cab seats, the sleepers, the wall build-up) are written
 // straight into the database, then read back through every route that returns or uses a
 // document. Each answers as if the document were current, and nothing rewrites the stored row.
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -34,6 +34,7 @@ function versionZeroDoc(name: string): Record<string, unknown> {
   delete doc.schemaVersion;
   doc.name = name;
   delete doc.bay.doors;
+  delete doc.bay.openings;
   delete doc.bay.wheelArches;
   delete doc.bay.bulkhead;
   delete doc.bay.cabSeats;
@@ -43,8 +44,9 @@ function versionZeroDoc(name: string): Record<string, unknown> {
 }
 
 function expectCurrent(doc: any) {
-  expect(doc.schemaVersion).toBe(3);
+  expect(doc.schemaVersion).toBe(4);
   expect(doc.bay.doors).toEqual([]);
+  expect(doc.bay.openings).toEqual([]);
   expect(doc.bay.wheelArches).toEqual([]);
   expect(doc.bay.bulkhead).toBe(true);
   expect(doc.bay.cabSeats).toBe(2);

@@ -53,7 +53,7 @@ describe('facts of the trade (common practice, stated by a practising builder), 
   const cushions = { elevation: 300, height: 160, surfaces: { travel: 'sleep', lounge: 'sleep', sleep: 'sleep' } as const };
   const lounge = (sleepers: number[]) =>
     layoutDocSchema.parse({
-      schemaVersion: 3,
+      schemaVersion: 4,
       name: 'L-lounge from the L2H2 template',
       bay,
       buildUp: DEFAULT_BUILD_UP,
@@ -183,7 +183,7 @@ describe('properties (fast-check)', () => {
     fc.assert(
       fc.property(docArb, (g) => {
         const input = {
-          schemaVersion: 3,
+          schemaVersion: 4,
           name: 'random',
           bay: { length: 3100, width: 1800, height: 2000, wheelArches: bayTemplate('l2h2')!.bay.wheelArches, doors: g.doors.map((d, i) => ({ ...d, id: `d${i}` })).filter((d) => d.offset + d.width <= (d.wall === 'rear' ? 1800 : 3100)) },
           buildUp: { floor: [], roof: [], walls: [{ material: 'foam', thickness: g.walls }] },

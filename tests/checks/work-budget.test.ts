@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { runChecks } from '@/lib/checks';
 import { WorkBudget, WorkLimitError } from '@/lib/geometry';
-import { maximumDoorsAndArches, sleepPileUp, stackedOnOneSpot } from '../hardening/fixtures/adversarial-layouts';
+import { maximumDoorsAndArches, maximumOpenings, sleepPileUp, stackedOnOneSpot } from '../hardening/fixtures/adversarial-layouts';
 
 const nLogN = (n: number) => n * Math.log2(n);
 
@@ -25,6 +25,7 @@ describe.each([
   ['all modules on one spot', stackedOnOneSpot],
   ['sleeping surfaces piled up', sleepPileUp],
   ['doors and arches with modules among them', maximumDoorsAndArches],
+  ['the most openings (64) with modules under and before them', maximumOpenings],
 ] as const)('%s', (_name, make) => {
   it('spends work within base + k · n log n and answers bytes that grow at most n log n, 625 to 5,000 modules', () => {
     const sizes = [625, 1250, 2500, 5000];
@@ -43,6 +44,21 @@ describe.each([
       expect(b.bytes / a.bytes).toBeLessThanOrEqual((nLogN(b.n) / nLogN(a.n)) * 1.05);
     }
   }, 60_000);
+});
+
+describe('the most openings the schema takes', () => {
+  it('measures every outlet pair once and reports at most 40 findings per clearance rule plus one summing up', () => {
+    const report = runChecks(maximumOpenings());
+    // 8 exhausts × (16 opening windows + 16 roof openings + 2 doors + 8 fillers) = 336 pairs, so the
+    // exhaust rule is capped: 39 listed + 1 summing up the other 297 (REPORT_LIMITS, common practice).
+    for (const id of ['clearance.window', 'clearance.roof-opening', 'clearance.exhaust', 'clearance.gas-vent', 'clearance.intake']) {
+      const n = report.findings.filter((f) => f.id === id).length;
+      expect(n, id).toBeGreaterThan(0);
+      expect(n, id).toBeLessThanOrEqual(40);
+    }
+    const summary = report.findings.filter((f) => f.id === 'clearance.exhaust').at(-1)!;
+    expect(summary).toMatchObject({ measured: 336 - 39, unit: 'findings' });
+  }, 30_000);
 });
 
 describe('a rule family that runs out of work', () => {

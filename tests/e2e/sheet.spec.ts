@@ -136,7 +136,7 @@ test('in the editor: Sheets & files gives a picture with its title strip and the
   await page.getByRole('button', { name: /^Sheets & files/ }).click();
   const [json] = await Promise.all([page.waitForEvent('download'), page.getByRole('menuitem', { name: /Layout file/ }).click()]);
   const doc = JSON.parse(fs.readFileSync(await json.path(), 'utf8'));
-  expect(doc.schemaVersion).toBe(3);
+  expect(doc.schemaVersion).toBe(4);
   expect(doc.name).toBe('Adeyemi — L3H2 touring');
 
   const bad = { ...doc, bay: { ...doc.bay, length: 3000.5 } };

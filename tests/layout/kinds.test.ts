@@ -130,7 +130,7 @@ describe('migration of version-1 props', () => {
     const r = parseLayoutDoc(doc);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.value.schemaVersion).toBe(3);
+    expect(r.value.schemaVersion).toBe(4);
     expect(r.value.modules.find((m) => m.kind === 'fridge')!.props).toEqual({ litres: 38.5, dutyCycle: 0.5 });
     expect(r.value.modules.find((m) => m.kind === 'fresh-water-tank')!.props).toBeUndefined();
   });

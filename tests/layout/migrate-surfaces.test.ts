@@ -33,7 +33,7 @@ describe('a version-2 document opens in version 3 unchanged in meaning', () => {
     expect(parsed.ok).toBe(true);
     if (!parsed.ok) return;
     const doc = parsed.value;
-    expect(doc.schemaVersion).toBe(3);
+    expect(doc.schemaVersion).toBe(4);
     const byId = (id: string) => doc.modules.find((m) => m.id === id)!;
     expect(byId('bench-l').surfaces).toEqual({ lounge: 'seat', sleep: 'seat' });
     expect(byId('bench-r').surfaces).toEqual({ lounge: 'seat', sleep: 'seat' });
@@ -53,7 +53,7 @@ describe('a version-2 document opens in version 3 unchanged in meaning', () => {
       return rest;
     };
     expect(parsed.value.modules.map((m) => strip(m as never))).toEqual(stored.modules.map(strip));
-    expect(parsed.value.bay).toEqual(stored.bay);
+    expect(parsed.value.bay).toEqual({ ...stored.bay, openings: [] }); // version 4 adds the (empty) openings
     expect(parsed.value.occupants).toEqual(stored.occupants);
   });
 
@@ -85,7 +85,7 @@ describe('a version-1 document steps through both migrations', () => {
     const r = parseLayoutDoc(v1);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.value.schemaVersion).toBe(3);
+    expect(r.value.schemaVersion).toBe(4);
     expect(r.value.modules[4].props).toEqual({ litres: 45 });
     expect(r.value.modules[0].surfaces).toEqual({ lounge: 'seat', sleep: 'seat' });
     expect(r.value.modules[2].surfaces).toEqual({ sleep: 'sleep' });

@@ -20,11 +20,11 @@ describe('parseLayoutDoc', () => {
     const doc = good();
     delete doc.schemaVersion;
     const r = parseLayoutDoc(doc);
-    expect(r.ok && r.value.schemaVersion).toBe(3);
+    expect(r.ok && r.value.schemaVersion).toBe(4);
   });
 
   it('refuses a document from a newer version of the app', () => {
-    const r = parseLayoutDoc({ ...good(), schemaVersion: 4 });
+    const r = parseLayoutDoc({ ...good(), schemaVersion: 5 });
     expect(r).toEqual({ ok: false, issues: [{ path: 'schemaVersion', message: expect.stringMatching(/newer/) }] });
   });
 

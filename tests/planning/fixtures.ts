@@ -2,8 +2,13 @@
 // values stay easy to follow. Not a test file (no .test.ts): imported by the tests here.
 import { bayTemplate, emptyLayout, layoutDocSchema, type LayoutDoc, type LayoutDocInput, type Module } from '@/lib/layout';
 
+/** The L2H2 template's bay without its drawn openings (tests that want openings add their own, `withOpenings`). */
 export function baseDoc(): LayoutDoc {
-  return emptyLayout('Test van', bayTemplate('l2h2')!.bay);
+  return emptyLayout('Test van', { ...bayTemplate('l2h2')!.bay, openings: [] });
+}
+
+export function withOpenings(doc: LayoutDoc, openings: NonNullable<LayoutDocInput['bay']['openings']>): LayoutDoc {
+  return layoutDocSchema.parse({ ...doc, bay: { ...doc.bay, openings } });
 }
 
 type ModuleInput = Partial<Module> & Pick<Module, 'id' | 'kind'>;

@@ -136,7 +136,7 @@ describe('honest impossibility', () => {
 
   it('standing upright in a standard-roof bay', () => {
     // Clear height 1500 − (10 + 12 + 2) floor − (20 + 6) roof = 1450 mm; needs 1800 + 20 mm margin = 1820 mm.
-    const r = generateProposals(on('l4h2', { standing: 1800, bay: { source: 'measured', bay: { ...BAY_TEMPLATES.find((t) => t.id === 'l4h2')!.bay, height: 1500 } } }));
+    const r = generateProposals(on('l4h2', { standing: 1800, bay: { source: 'measured', bay: { ...BAY_TEMPLATES.find((t) => t.id === 'l4h2')!.bay, height: 1500, openings: [] } } })); // the high roof's door windows would stand above a 1500 mm roof
     expect(r.ok).toBe(false);
     const head = r.reasons.find((x) => x.rule === 'Standing headroom' || /Standing upright/.test(x.message));
     expect(head).toBeDefined();

@@ -19,7 +19,7 @@ describe('layout files', () => {
   it('migrates a document written before schemaVersion existed', () => {
     const { schemaVersion: _v, ...old } = doc;
     const back = readLayoutFile(JSON.stringify(old));
-    expect(back.ok && back.doc.schemaVersion).toBe(3);
+    expect(back.ok && back.doc.schemaVersion).toBe(4);
   });
 
   it('lists field paths for a bad document', () => {

@@ -7,7 +7,8 @@
  * Must never import React, Konva, Next or the database; never throws on a valid LayoutDoc.
  */
 import type { LayoutDoc } from '../../layout';
-import { AIR_HEAT_CAPACITY, heatLoss, INPUTS, layerResistance, U_VALUE_SOURCE } from '../../planning';
+import { AIR_HEAT_CAPACITY, DRAWN_OPENING_U_SOURCE, heatLoss, INPUTS, layerResistance, U_VALUE_SOURCE } from '../../planning';
+import { measuredOutlets } from '../clearance';
 import type { Finding } from '../types';
 import { caution, num, round } from './wording';
 
@@ -16,6 +17,17 @@ const FACE_NAMES = { floor: 'Floor', walls: 'Walls', roof: 'Roof' } as const;
 
 /** A face whose insulation gives less than this R is treated as uninsulated (common practice, no source). */
 const MIN_USEFUL_R = 0.25;
+
+/** Which windows the heat loss counted, in words. */
+function windowsWords(h: ReturnType<typeof heatLoss>): string {
+  const area = h.windows.reduce((a, w) => a + w.areaM2, 0);
+  if (h.windowsFrom === 'none') return 'No windows drawn or typed.';
+  if (h.windowsFrom === 'typed') return `Windows from the list on the heat tab (${num(area, 2)} m²); none drawn.`;
+  const walls = h.windows.filter((w) => w.face === 'walls').length;
+  const roof = h.windows.length - walls;
+  const uWords = [...new Set(h.windows.map((w) => `${num(w.uValue, 2)}`))].join(' and ');
+  return `Windows as drawn: ${walls} in the walls and doors, ${roof} roof ${roof === 1 ? 'opening' : 'openings'}, ${num(area, 2)} m² at U ${uWords} W/m²K (the list on the heat tab is used only when none is drawn).`;
+}
 
 export function heatChecks(doc: LayoutDoc): Finding[] {
   const h = heatLoss(doc);
@@ -39,8 +51,8 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
     status: 'pass',
     measured: round(h.totalWPerK, 1),
     unit: 'W/K',
-    message: `Heat loss ${num(h.totalWPerK, 1)} W/K (${h.faces.map((f) => `${f.face} ${num(f.wPerK, 1)}`).join(', ')}, windows ${num(h.windowsWPerK, 1)}, air change ${num(h.ventilationWPerK, 1)} W/K): ${num(h.requiredW)} W at a ${num(h.deltaK)} K difference inside to outside (Inside minus outside, on the heat tab).`,
-    source: `${U_SOURCE}; air ${AIR_HEAT_CAPACITY} W/(m³K) per air change an hour (EN 12831, from memory); design difference 20 K and 1 air change an hour when none is entered (common practice, no source)`,
+    message: `Heat loss ${num(h.totalWPerK, 1)} W/K (${h.faces.map((f) => `${f.face} ${num(f.wPerK, 1)}`).join(', ')}, windows ${num(h.windowsWPerK, 1)}, air change ${num(h.ventilationWPerK, 1)} W/K): ${num(h.requiredW)} W at a ${num(h.deltaK)} K difference inside to outside (Inside minus outside, on the heat tab). ${windowsWords(h)}`,
+    source: `${U_SOURCE}; drawn windows without a typed U: ${DRAWN_OPENING_U_SOURCE}; air ${AIR_HEAT_CAPACITY} W/(m³K) per air change an hour (EN 12831, from memory); design difference 20 K and 1 air change an hour when none is entered (common practice, no source)`,
   });
   if (h.heaterIds.length) {
     out.push({
@@ -54,17 +66,29 @@ export function heatChecks(doc: LayoutDoc): Finding[] {
       source: `Steady-state heat balance (EN 12831 method, simplified); ${U_SOURCE}`,
     });
     const heating = doc.systems?.heating ?? {};
+    // Drawn outlets are measured (clearance.exhaust, clearance.intake); the declared ticks stand in only where none is drawn.
+    const drawn = measuredOutlets(doc);
+    const exhaustText = 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies';
+    const intakeText = 'combustion intake apart from the exhaust and out of spray';
+    const onDrawing = (text: string, ok: boolean) => (ok ? `${text} (measured on the drawing)` : `${text} (measured on the drawing: see the heater exhaust and intake clearances)`);
     if (heating.fuel !== 'electric') out.push(caution(
       'heat.heater-caution',
       [
-        { done: heating.exhaustClearOfOpenings, text: 'exhaust outlet away from doors, opening windows and the fuel filler, as the maker specifies', field: { label: 'Exhaust away from doors, opening windows and the fuel filler, as the maker specifies', where: 'heat' } },
-        { done: heating.intakeClearOfExhaust, text: 'combustion intake apart from the exhaust and out of spray', field: { label: 'Combustion intake apart from the exhaust and out of spray', where: 'heat' } },
+        drawn.exhaust
+          ? { done: drawn.exhaust.ok, text: onDrawing(exhaustText, drawn.exhaust.ok), field: { label: 'Heater exhaust drawn on the body', where: 'editor' }, measured: true }
+          : { done: heating.exhaustClearOfOpenings, text: exhaustText, field: { label: 'Exhaust away from doors, opening windows and the fuel filler, as the maker specifies', where: 'heat' } },
+        drawn.intake
+          ? { done: drawn.intake.ok, text: onDrawing(intakeText, drawn.intake.ok), field: { label: 'Heater intake drawn on the body', where: 'editor' }, measured: true }
+          : { done: heating.intakeClearOfExhaust, text: intakeText, field: { label: 'Combustion intake apart from the exhaust and out of spray', where: 'heat' } },
         { done: doc.systems?.alarms?.co, text: 'carbon-monoxide alarm in the living space', field: { label: 'Carbon-monoxide alarm fitted', where: 'gas' } },
       ],
       'A fuel-burning heater makes carbon monoxide: follow the maker\'s installation manual and local codes for the exhaust and combustion intake (away from doors, opening windows and the fuel filler), use the maker\'s seals and exhaust parts, and fit a CO alarm.',
       'Heater maker\'s installation manual; UN ECE Regulation No. 122 (heating systems; from memory)',
       h.heaterIds,
     ));
+    const measuredIds = [...new Set([...(drawn.exhaust?.openingIds ?? []), ...(drawn.intake?.openingIds ?? [])])];
+    const last = out[out.length - 1];
+    if (last?.id === 'heat.heater-caution' && measuredIds.length) last.openingIds = measuredIds;
   }
   return out;
 }

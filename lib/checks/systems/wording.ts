@@ -42,6 +42,8 @@ export interface Precaution {
   text: string;
   /** The confirming field's on-screen label and tab. */
   field: InputNeed;
+  /** Decided by a measurement on the drawing, not by a tick (its text says where to look). */
+  measured?: boolean;
 }
 
 /**
@@ -53,7 +55,7 @@ export function caution(id: string, precautions: Precaution[], message: string, 
   const done = precautions.filter((p) => p.done === true).length;
   const open = precautions.filter((p) => p.done !== true);
   const tail = open.length
-    ? ` Not yet confirmed: ${open.map((p) => `${p.text} (tick “${p.field.label}” on the ${p.field.where === 'editor' ? 'module' : `${p.field.where} tab`})`).join('; ')}.`
+    ? ` Not yet confirmed: ${open.map((p) => (p.measured ? p.text : `${p.text} (tick “${p.field.label}” on the ${p.field.where === 'editor' ? 'module' : `${p.field.where} tab`})`)).join('; ')}.`
     : ' Every precaution is confirmed.';
   return {
     id,
