@@ -39,9 +39,10 @@ function Choice({ label, value, options, onChange, disabled, testId }: { label: 
 export function OpeningForm({ opening }: { opening: Opening }) {
   const api = useEditorApi();
   const { units, readOnly, bay } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly, bay: s.doc.bay })));
-  const update = (patch: Record<string, unknown>, what: string) => {
+  /** Apply a change as one undo step; a refusal is said in a toast, or beside a length field (`quiet`). */
+  const update = (patch: Record<string, unknown>, what: string, quiet = false) => {
     const r = api.getState().updateOpening(opening.id, patch, `Edit ${what}`);
-    if (!r.ok) toast.error(`Not applied: ${r.error}`);
+    if (!r.ok && !quiet) toast.error(`Not applied: ${r.error}`);
     return r;
   };
   const length = (label: string, key: string, value: number, opts: { min?: number; max?: number; hint?: string } = {}) => (
@@ -54,7 +55,7 @@ export function OpeningForm({ opening }: { opening: Opening }) {
       min={opts.min ?? 0}
       max={opts.max}
       testId={`opening-${key}`}
-      onCommit={(mm) => update({ [key]: mm }, label.toLowerCase())}
+      onCommit={(mm) => update({ [key]: key === 'frameDepth' && mm === 0 ? undefined : mm }, label.toLowerCase(), true)}
     />
   );
   const title = opening.type === 'window' ? 'Window' : OPENING_PRESET_WORDS[opening.kind];
