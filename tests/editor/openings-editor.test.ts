@@ -235,6 +235,29 @@ describe('moving openings', () => {
   });
 });
 
+describe('moving openings: in a door and overhead', () => {
+  it('a window in a door drags along the door’s wall and stops at the door’s end, not the wall’s', () => {
+    const h = atScale1();
+    const id = h.get().addOpening('window').id!;
+    h.get().updateOpening(id, { wall: 'door', door: 'slide', position: 100, width: 600 });
+    h.get().beginOpeningMove(id);
+    h.get().dragTo(1000, 0);
+    // The sliding door is 1200 mm wide: a 600 mm window goes no further than 1200 − 600 = 600 into it.
+    h.get().commitGesture();
+    expect(openingOf(h, id)).toMatchObject({ wall: 'door', door: 'slide', position: 600 });
+  });
+
+  it('a roof opening drags in plan and snaps its edge to a module’s edge', () => {
+    const h = atScale1([mod('a', { x: 1000, y: 500, length: 400, width: 400 })]);
+    const id = h.get().addOpening('vent').id!; // 200…600 × 700…1100
+    h.get().beginOpeningMove(id);
+    // x: 595…995, its rear edge 5 mm from the module's front edge at 1000 → x = 600; y: 700 is on the 10 mm step.
+    h.get().dragTo(395, 0);
+    h.get().commitGesture();
+    expect(openingOf(h, id)).toMatchObject({ x: 600, y: 700 });
+  });
+});
+
 describe('arrangement independence', () => {
   it('switching the arrangement never changes the openings nor drops the selected one', () => {
     const h = harness([mod('bed', { arrangements: ['sleep'] })]);
