@@ -372,7 +372,9 @@ describe('hit testing openings', () => {
     expect(openingAt(marks, 1700, 40, 1, 5)?.id).toBe(w); // 4 mm inside the lining, within the 5 mm slop
     expect(openingAt(marks, 1700, 50, 1, 5)).toBeUndefined();
     expect(openingAt(marks, 302, -10, 1, 5)?.id).toBe(ff); // 2.8 mm from the marker's centre, radius 4
-    expect(openingAt(marks, 203, 900, 1, 5)?.id).toBe(v); // 3 mm inside its front edge
+    expect(openingAt(marks, 202, 900, 1, 5)?.id).toBe(v); // 2 mm inside its front edge (the outline reaches 3 px = 3 mm)
+    // A roof opening's outline reaches 3 px whatever the slop: 5 mm off its rear edge (x = 600) at 1 mm/px misses even with 14 mm of slop.
+    expect(openingAt(marks, 605, 900, 1, 14)).toBeUndefined();
     expect(openingAt(marks, 400, 900, 1, 5)).toBeUndefined(); // its middle: left to the modules first
     expect(roofOpeningInside(marks, 400, 900)?.id).toBe(v);
     // Each mark's click point hits its own mark.

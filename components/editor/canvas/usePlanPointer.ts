@@ -29,10 +29,11 @@ function openingUnder(s: EditorState, x: number, y: number, touch: boolean): Ope
   if (s.doc.bay.openings.length === 0) return undefined;
   const px = 1 / s.viewport.scale;
   const marks = openingMarks(s.doc, px);
-  const hit = openingAt(marks, x, y, px, (touch ? TOUCH_OPENING_SLOP_PX : OPENING_SLOP_PX) * px);
+  // Over a module a finger gets no more reach than the mouse: the module under it wins.
+  const onModule = !!moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), x, y);
+  const hit = openingAt(marks, x, y, px, (touch && !onModule ? TOUCH_OPENING_SLOP_PX : OPENING_SLOP_PX) * px);
   if (hit) return hit;
-  if (moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), x, y)) return undefined;
-  return roofOpeningInside(marks, x, y);
+  return onModule ? undefined : roofOpeningInside(marks, x, y);
 }
 
 export const KIND_DRAG_TYPE = 'application/x-baywright-kind';

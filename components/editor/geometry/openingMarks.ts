@@ -59,6 +59,8 @@ export const WINDOW_MIN_PX = 8;
 /** A body point's marker: its radius and how far outside the wall line its centre sits, in screen px. */
 export const POINT_RADIUS_PX = 4;
 export const POINT_OFFSET_PX = 12;
+/** A roof opening's outline takes the pointer only this close (screen px), whatever the slop: it lies over modules. */
+export const ROOF_EDGE_PX = 3;
 /** The roof opening's line: long dashes (screen px), unlike the chain line of modules mounted outside. */
 export const ROOF_OPENING_DASH_PX = [14, 4] as const;
 
@@ -127,8 +129,9 @@ const inRect = (r: Rect, x: number, y: number, slop: number) => x >= r.x0 - slop
 
 /**
  * The opening whose mark is under (x, y) in mm, with `slop` mm to spare: body points first (the
- * smallest), then windows, then a roof opening's outline. A roof opening's inside is left to the
- * modules under it (`roofOpeningInside` asks after them), so a vent over the counter does not hide it.
+ * smallest), then windows, then a roof opening's outline within `ROOF_EDGE_PX`. A roof opening's
+ * inside is left to the modules under it (`roofOpeningInside` asks after them), so a vent over the
+ * counter does not hide it.
  */
 export function openingAt(marks: OpeningMark[], x: number, y: number, px: number, slop: number): OpeningMark | undefined {
   for (const m of marks) {
@@ -139,7 +142,8 @@ export function openingAt(marks: OpeningMark[], x: number, y: number, px: number
   for (const m of marks) if (m.type === 'window' && inRect(m.rect, x, y, slop)) return m;
   for (const m of marks) {
     if (m.type !== 'roof-opening') continue;
-    if (inRect(m.rect, x, y, slop) && !inRect(m.rect, x, y, -slop)) return m;
+    const edge = Math.min(slop, ROOF_EDGE_PX * px);
+    if (inRect(m.rect, x, y, edge) && !inRect(m.rect, x, y, -edge)) return m;
   }
   return undefined;
 }
