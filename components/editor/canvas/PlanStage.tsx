@@ -66,7 +66,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       ref={box}
       tabIndex={0}
       role="application"
-      aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts."
+      aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts. Tab reaches the list of openings; a selected window or body point moves along its wall."
       aria-describedby={describedBy}
       data-testid="plan"
       data-scale={s.viewport.scale}
