@@ -70,7 +70,7 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
         outline.current?.setAttrs({ x: r.x, y: r.y, width: r.length, height: r.width });
         guides.current?.setAttr('guides', g.preview.guides);
         readout.current?.setAttrs({ text: `${formatLength(r.length, units)} × ${formatLength(r.width, units)}`, x: r.x, y: r.y - 20 * px, fontSize: 11 * px, padding: 2 * px });
-      } else {
+      } else if (g.kind === 'marquee') {
         const r = g.preview.rect;
         marquee.current?.setAttrs({ x: Math.min(r.x, r.x + r.length), y: Math.min(r.y, r.y + r.width), width: Math.abs(r.length), height: Math.abs(r.width), visible: true });
       }

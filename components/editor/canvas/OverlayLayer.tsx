@@ -18,6 +18,10 @@ import { theme } from '../theme';
 import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
 import { modulesIn } from '@/lib/layout/bay';
+import type { Opening } from '@/lib/layout/schema';
+import type { SnapGuide } from '../geometry/snapping';
+import { openingMarks } from '../geometry/openingMarks';
+import { drawOpeningMarks, drawOpeningSelection } from './openingsDrawing';
 
 export const HANDLE_PX = 8;
 
@@ -32,6 +36,10 @@ interface Props {
   fonts: CanvasFonts;
   showHandles: boolean;
   hidden: boolean;
+  /** The selected opening, the openings a clicked finding names, and an opening being dragged. */
+  openingSelection?: string | null;
+  openingHighlight?: string[];
+  openingPreview?: { opening: Opening; guides: SnapGuide[] } | null;
 }
 
 export const OverlayLayer = memo(function OverlayLayer(p: Props) {
@@ -77,6 +85,28 @@ export const OverlayLayer = memo(function OverlayLayer(p: Props) {
       }
     }
     ctx.restore();
+    // Openings: the finding halo, the dragged one where it is going (with its snap guide), the selection.
+    if (p.openingSelection || p.openingHighlight?.length || p.openingPreview) {
+      const preview = p.openingPreview?.opening;
+      const doc = preview ? { ...p.doc, bay: { ...p.doc.bay, openings: p.doc.bay.openings.map((o) => (o.id === preview.id ? preview : o)) } } : p.doc;
+      const marks = openingMarks(doc, px);
+      for (const m of marks) if (p.openingHighlight?.includes(m.id)) drawOpeningSelection(ctx, m, px, 'halo');
+      if (preview) {
+        drawOpeningMarks(ctx, marks.filter((m) => m.id === preview.id), px, p.fonts);
+        ctx.save();
+        ctx.strokeStyle = theme.copper;
+        ctx.lineWidth = 1 * px;
+        ctx.setLineDash([4 * px, 3 * px]);
+        ctx.beginPath();
+        for (const g of p.openingPreview!.guides) {
+          if (g.axis === 'x') { ctx.moveTo(g.at, g.from); ctx.lineTo(g.at, g.to); } else { ctx.moveTo(g.from, g.at); ctx.lineTo(g.to, g.at); }
+        }
+        ctx.stroke();
+        ctx.restore();
+      }
+      const sel = marks.find((m) => m.id === (preview?.id ?? p.openingSelection));
+      if (sel) drawOpeningSelection(ctx, sel, px, 'selected');
+    }
     if (single) {
       for (const d of moduleDimensions(p.doc, single, p.arrangement)) {
         const offset = d.role === 'size' ? -14 : 0;

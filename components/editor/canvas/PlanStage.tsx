@@ -14,6 +14,8 @@ import { ModulesLayer } from './ModulesLayer';
 import { OverlayLayer } from './OverlayLayer';
 import { DragLayer } from './DragLayer';
 import { RulerLayer } from './RulerLayer';
+import { OpeningsShape } from './OpeningsShape';
+import { OpeningsList } from './OpeningsList';
 import { usePlanPointer } from './usePlanPointer';
 import { useCanvasFonts } from './useCanvasFonts';
 import type { EditorExtensions } from '../types';
@@ -36,6 +38,9 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       units: st.units,
       readOnly: st.readOnly,
       gestureKind: st.gesture?.kind ?? null,
+      openingSelection: st.openingSelection,
+      openingHighlight: st.openingHighlight,
+      openingPreview: st.gesture?.kind === 'opening' ? st.gesture.preview : null,
     })),
   );
 
@@ -61,7 +66,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       ref={box}
       tabIndex={0}
       role="application"
-      aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts."
+      aria-label="Plan of the bay, cab on the left. Press ] or [ to select a module, arrow keys to move it (Shift for 10 mm), R to rotate, ? for all shortcuts. Tab reaches the list of openings; a selected window or body point moves along its wall."
       aria-describedby={describedBy}
       data-testid="plan"
       data-scale={s.viewport.scale}
@@ -75,13 +80,15 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
           <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">
             <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
             <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} hidden={NONE} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} />
+            <OpeningsShape bay={s.doc.bay} buildUp={s.doc.buildUp} scale={s.viewport.scale} fonts={fonts} dragging={s.openingPreview?.opening.id ?? null} />
           </Layer>
-          <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} />
+          <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} openingSelection={s.openingSelection} openingHighlight={s.openingHighlight} openingPreview={s.openingPreview} />
           {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />
           <RulerLayer viewport={s.viewport} units={s.units} fonts={fonts} />
         </Stage>
       )}
+      <OpeningsList doc={s.doc} viewport={s.viewport} selected={s.openingSelection} />
     </div>
   );
 }

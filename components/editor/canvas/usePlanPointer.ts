@@ -17,6 +17,24 @@ import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitT
 import { HANDLE_PX } from './OverlayLayer';
 import { isTypingTarget } from '../commands/keyboard';
 import { inArrangement, modulesIn } from '@/lib/layout/bay';
+import { openingAt, openingMarks, roofOpeningInside, type OpeningMark } from '../geometry/openingMarks';
+import type { EditorState } from '../store/editorStore';
+
+/** How near (screen px) a pointer must come to an opening's mark to take it; more for a finger. */
+const OPENING_SLOP_PX = 5;
+const TOUCH_OPENING_SLOP_PX = 14;
+
+/** The opening under a plan point: a mark's edge first, a roof opening's inside only where no module is. */
+function openingUnder(s: EditorState, x: number, y: number, touch: boolean): OpeningMark | undefined {
+  if (s.doc.bay.openings.length === 0) return undefined;
+  const px = 1 / s.viewport.scale;
+  const marks = openingMarks(s.doc, px);
+  // Over a module a finger gets no more reach than the mouse: the module under it wins.
+  const onModule = !!moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), x, y);
+  const hit = openingAt(marks, x, y, px, (touch && !onModule ? TOUCH_OPENING_SLOP_PX : OPENING_SLOP_PX) * px);
+  if (hit) return hit;
+  return onModule ? undefined : roofOpeningInside(marks, x, y);
+}
 
 export const KIND_DRAG_TYPE = 'application/x-baywright-kind';
 /** Pointer travel (px) before a press on a module becomes a drag rather than a click; a finger wobbles more than a mouse. */
@@ -31,6 +49,7 @@ type Stroke =
   | { mode: 'pan'; lastX: number; lastY: number }
   | { mode: 'press'; startX: number; startY: number; ids: string[]; hitId: string; shift: boolean; touch: boolean }
   | { mode: 'gesture'; startX: number; startY: number }
+  | { mode: 'opening-press'; startX: number; startY: number; id: string; touch: boolean }
   | { mode: 'ignored' };
 
 export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api: EditorStore, onContextMenu: (x: number, y: number) => void) {
@@ -70,7 +89,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
         const h = m && handleAt(m, w.x, w.y, screenToMm(s.viewport, HANDLE_PX));
         if (h) return (el!.style.cursor = cursorForHandle(h));
       }
-      const hit = moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
+      const hit = openingUnder(s, w.x, w.y, false) ?? moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
       el!.style.cursor = hit && !s.readOnly ? 'move' : hit ? 'pointer' : 'default';
     }
 
@@ -116,6 +135,12 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
           setStroke({ mode: 'gesture', startX: w.x, startY: w.y });
           return;
         }
+      }
+      const opening = openingUnder(s, w.x, w.y, touch);
+      if (opening) {
+        s.selectOpening(opening.id);
+        setStroke(s.readOnly ? { mode: 'ignored' } : { mode: 'opening-press', startX: w.x, startY: w.y, id: opening.id, touch });
+        return;
       }
       const hit = moduleAt(drawOrder(modulesIn(s.doc, s.arrangement)), w.x, w.y);
       if (hit) {
@@ -170,11 +195,12 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       }
       if (st.mode === 'ignored') return;
       const w = world(p);
-      if (st.mode === 'press') {
+      if (st.mode === 'press' || st.mode === 'opening-press') {
         const moved = Math.hypot(w.x - st.startX, w.y - st.startY) * s.viewport.scale;
         if (moved < (st.touch ? TOUCH_DRAG_START_PX : DRAG_START_PX)) return;
         stopLongPress();
-        s.beginMove(st.ids);
+        if (st.mode === 'press') s.beginMove(st.ids);
+        else s.beginOpeningMove(st.id);
         setStroke({ mode: 'gesture', startX: st.startX, startY: st.startY });
       } else if (!s.gesture) {
         // Escape dropped the gesture: ignore the rest of this stroke.

@@ -22,9 +22,11 @@ export interface Command {
 
 const editable = (s: EditorState) => !s.readOnly;
 const hasSelection = (s: EditorState) => !s.readOnly && s.selection.length > 0;
+/** Modules or an opening selected: what arrow keys move and Delete removes. */
+const hasAnySelection = (s: EditorState) => hasSelection(s) || (!s.readOnly && s.openingSelection !== null);
 
 function nudge(id: string, label: string, keys: string[], dx: number, dy: number): Command {
-  return { id, label, group: 'edit', shortcut: keys, enabled: hasSelection, run: (s) => s.nudgeSelection(dx, dy) };
+  return { id, label, group: 'edit', shortcut: keys, enabled: hasAnySelection, run: (s) => s.nudgeSelection(dx, dy) };
 }
 
 function showArrangement(a: Arrangement, key: string): Command {
@@ -49,7 +51,7 @@ export const COMMANDS: Command[] = [
   { id: 'edit.redo', label: 'Redo', group: 'edit', shortcut: ['Mod+Shift+Z', 'Mod+Y'], enabled: (s) => editable(s) && canRedo(s), run: (s) => s.redo() },
   { id: 'edit.rotate', label: 'Rotate 90°', group: 'edit', shortcut: ['R'], enabled: hasSelection, run: (s) => s.rotateSelection() },
   { id: 'edit.duplicate', label: 'Duplicate', group: 'edit', shortcut: ['Mod+D'], enabled: hasSelection, run: (s) => s.duplicateSelection() },
-  { id: 'edit.delete', label: 'Delete', group: 'edit', shortcut: ['Delete', 'Backspace'], enabled: hasSelection, run: (s) => s.deleteSelection() },
+  { id: 'edit.delete', label: 'Delete', group: 'edit', shortcut: ['Delete', 'Backspace'], enabled: hasAnySelection, run: (s) => s.deleteSelection() },
   nudge('edit.nudge-left', 'Nudge towards the cab 1 mm', ['ArrowLeft'], -1, 0),
   nudge('edit.nudge-right', 'Nudge rearwards 1 mm', ['ArrowRight'], 1, 0),
   nudge('edit.nudge-up', 'Nudge towards the left wall 1 mm', ['ArrowUp'], 0, -1),
@@ -65,7 +67,7 @@ export const COMMANDS: Command[] = [
   { id: 'select.previous', label: 'Select previous module', group: 'select', shortcut: ['['], enabled: (s) => s.doc.modules.length > 0, run: (s) => stepSelection(s, -1) },
   {
     id: 'select.escape', label: 'Cancel gesture / clear selection', group: 'select', shortcut: ['Escape'],
-    enabled: (s) => s.gesture !== null || s.placing !== null || s.selection.length > 0 || s.shortcutSheetOpen,
+    enabled: (s) => s.gesture !== null || s.placing !== null || s.selection.length > 0 || s.openingSelection !== null || s.shortcutSheetOpen,
     run: (s) => (s.gesture ? s.cancelGesture() : s.placing ? s.setPlacing(null) : s.shortcutSheetOpen ? s.setShortcutSheet(false) : s.select([])),
   },
 

@@ -147,3 +147,51 @@ function snapEdge(raw: number, targets: { at: number }[], opts: SnapOptions): { 
   if (hit) return { value: hit.at, snapped: true };
   return { value: snapToStep(raw, opts.step), snapped: false };
 }
+
+// ---- openings -----------------------------------------------------------------------------------
+
+/** A module edge this close to a wall's inner face (mm) is a target for that wall's openings (common practice, no source). */
+export const WALL_TARGET_REACH = 300;
+
+/**
+ * Targets along one wall, in the wall's own coordinate (from its start: the front end of a side
+ * wall, the left end of the rear wall): the wall's two ends, the door edges on it, and the edges
+ * of modules standing within `WALL_TARGET_REACH` of it in the arrangement on show.
+ */
+export function wallTargets(doc: LayoutDoc, arrangement: Arrangement, wall: 'left' | 'right' | 'rear'): number[] {
+  const { length, width } = doc.bay;
+  const lined = linedInterior(doc);
+  const end = wall === 'rear' ? width : length;
+  const at = new Set<number>([0, end]);
+  for (const d of doc.bay.doors) if (d.wall === wall) { at.add(d.offset); at.add(d.offset + d.width); }
+  for (const m of doc.modules) {
+    if (!inArrangement(m, arrangement)) continue;
+    const r = footprintRect(m);
+    const near = wall === 'left' ? r.y0 - lined.y0 : wall === 'right' ? lined.y1 - r.y1 : lined.x1 - r.x1;
+    if (near > WALL_TARGET_REACH) continue;
+    if (wall === 'rear') { at.add(r.y0); at.add(r.y1); } else { at.add(r.x0); at.add(r.x1); }
+  }
+  return [...at].sort((a, b) => a - b);
+}
+
+/**
+ * Snap a span along a wall (`start`..`start + size`, wall coordinates) moved by `delta`: either end
+ * within `threshold` of a target sticks to it, else the start lands on the step; the result is held
+ * in `min`..`max` (the wall's or the door's ends). `snapped` is the target stuck to, if any.
+ */
+export function snapAlong(start: number, size: number, delta: number, targets: number[], opts: SnapOptions, min: number, max: number): { start: number; snapped: number | null } {
+  const raw = start + delta;
+  let next: number;
+  let snapped: number | null = null;
+  if (!opts.enabled) next = Math.round(raw);
+  else {
+    const hit = nearest(size > 0 ? [raw, raw + size] : [raw], targets.map((t) => ({ at: t })), opts.threshold);
+    if (hit) {
+      next = Math.round(raw + hit.delta);
+      snapped = hit.at;
+    } else next = snapToStep(raw, opts.step);
+  }
+  const held = Math.max(min, Math.min(max, next));
+  if (held !== next) snapped = held === min ? min : max + size;
+  return { start: held, snapped };
+}

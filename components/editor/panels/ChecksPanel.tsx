@@ -28,6 +28,7 @@ export function ChecksPanel({ checks, layoutId }: { checks: LiveChecks; layoutId
   const api = useEditorApi();
   const units = useEditor((s) => s.units);
   const highlight = useEditor((s) => s.highlight);
+  const openingHighlight = useEditor((s) => s.openingHighlight);
   const [showPass, setShowPass] = useState(false);
   const { report, status, stale, message } = checks;
   const folded = report ? foldWaiting(report.findings) : null;
@@ -35,7 +36,7 @@ export function ChecksPanel({ checks, layoutId }: { checks: LiveChecks; layoutId
   const focus = (f: Finding) => {
     const s = api.getState();
     if (f.arrangement && f.arrangement !== s.arrangement) s.setArrangement(f.arrangement);
-    api.getState().setHighlight(f.moduleIds ?? []);
+    api.getState().setHighlight(f.moduleIds ?? [], f.openingIds ?? []);
   };
 
   return (
@@ -64,7 +65,8 @@ export function ChecksPanel({ checks, layoutId }: { checks: LiveChecks; layoutId
                 {b.findings.map((f, i) => {
                   const measured = amount(f.measured, f.unit, units);
                   const required = amount(f.required, f.unit, units);
-                  const active = !!f.moduleIds?.length && f.moduleIds.every((id) => highlight.includes(id));
+                  const named = !!f.moduleIds?.length || !!f.openingIds?.length;
+                  const active = named && (f.moduleIds ?? []).every((id) => highlight.includes(id)) && (f.openingIds ?? []).every((id) => openingHighlight.includes(id));
                   return (
                     <li key={`${f.id}-${i}`} data-finding={f.id} data-status={f.status} data-arrangement={f.arrangement ?? 'all'}
                       className={`flex items-start gap-2 rounded border px-2 py-1.5 ${active ? 'border-copper bg-copper-light' : 'border-transparent hover:border-paper-edge hover:bg-paper-deep'}`}>

@@ -13,6 +13,7 @@ import { kindCaution } from '@/lib/layout/cautions';
 import { CautionNote } from '@/components/ui/CautionNote';
 import { useEditor } from '../store/EditorStoreContext';
 import { CommandButton } from './CommandButton';
+import { OpeningForm } from './OpeningForm';
 
 const ModuleForm = lazy(() => import('./ModuleForm'));
 
@@ -22,11 +23,13 @@ export const DetailsPanel = memo(function DetailsPanel() {
   // The form follows the selection at low priority, so selecting and starting a drag stays smooth.
   const { selection, modules } = useDeferredValue(live);
   const selected = useMemo(() => modules.filter((m) => selection.includes(m.id)), [modules, selection]);
+  const opening = useEditor((s) => (s.openingSelection ? s.doc.bay.openings.find((o) => o.id === s.openingSelection) : undefined));
+  if (selected.length === 0 && opening) return <OpeningForm key={opening.id} opening={opening} />;
   if (selected.length === 0) {
     return (
       <div className="p-4 text-sm text-ink-soft">
         <p>Nothing selected.</p>
-        <p className="mt-2">Click a module on the plan, or press <kbd className="font-mono">]</kbd> to select one with the keyboard.</p>
+        <p className="mt-2">Click a module or an opening on the plan, or press <kbd className="font-mono">]</kbd> to select a module with the keyboard.</p>
       </div>
     );
   }

@@ -7,8 +7,10 @@
 import { useId, useState } from 'react';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
 
-export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0, max, testId, compact = false }: {
+export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, min = 0, max, testId, compact = false }: {
   label: string;
+  /** A few words after the label saying where it is measured from (read as the field's description). */
+  hint?: string;
   valueMm: number;
   unit: LengthUnit;
   onCommit: (mm: number) => { ok: boolean; error?: string };
@@ -42,6 +44,7 @@ export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0,
   return (
     <div className={compact ? '' : 'block'}>
       <label htmlFor={id} className={compact ? 'sr-only' : 'text-xs text-ink-soft'}>{label}</label>
+      {hint && <span id={`${id}-hint`} className={compact ? 'sr-only' : 'text-xs text-ink-soft'}> · {hint}</span>}
       <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
         <input
           id={id}
@@ -49,6 +52,7 @@ export function LengthField({ label, valueMm, unit, onCommit, disabled, min = 0,
           disabled={disabled}
           inputMode="decimal"
           aria-invalid={!!error}
+          aria-describedby={hint ? `${id}-hint` : undefined}
           data-testid={testId}
           onChange={(e) => setDraft(e.target.value)}
           onBlur={commit}

@@ -16,6 +16,7 @@ import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
 import { setDrawer } from '@/components/ui/drawers';
 import { theme } from '../theme';
+import { OPENING_PRESETS, OPENING_PRESET_WORDS, type OpeningPreset } from '../store/openingEdits';
 
 const FAMILY_SWATCH: Record<MaterialFamily, string> = {
   timber: `repeating-linear-gradient(135deg, ${theme.inkFaint} 0 1px, transparent 1px 5px)`,
@@ -42,6 +43,12 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan, pickToPlace = fa
     const r = api.getState().addModule(k.kind);
     if (!r.ok) return void toast.error(r.error);
     toast.success(`${k.title} placed. Arrow keys move it; R rotates.`, { duration: 2500 });
+    focusPlan();
+  };
+  const addOpening = (preset: OpeningPreset) => {
+    const r = api.getState().addOpening(preset);
+    if (!r.ok) return void toast.error(r.error);
+    toast.success(`${OPENING_PRESET_WORDS[preset]} added. Drag it or use the arrow keys to move it; Details has its sizes.`, { duration: 2500 });
     focusPlan();
   };
   /** A tap (not a key press: `detail` 0) on a tablet picks the part; the drawer gets out of the way of the plan. */
@@ -103,6 +110,24 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan, pickToPlace = fa
         ))}
         {kinds.length === 0 && <li className="px-2 py-4 text-sm text-ink-soft">No part matches “{query}”.</li>}
       </ul>
+      <section aria-labelledby="shelf-openings" className="border-t border-paper-edge p-2" data-testid="shelf-openings">
+        <h3 id="shelf-openings" className="mb-1 px-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">Openings</h3>
+        <ul className="grid grid-cols-2 gap-1" aria-labelledby="shelf-openings">
+          {OPENING_PRESETS.map((p) => (
+            <li key={p}>
+              <button
+                type="button"
+                onClick={() => addOpening(p)}
+                data-opening-preset={p}
+                aria-label={`Add ${OPENING_PRESET_WORDS[p].toLowerCase()}`}
+                className="w-full truncate rounded border border-paper-edge bg-paper px-2 py-1 text-left text-xs text-ink hover:bg-paper-light focus-visible:outline-2 focus-visible:outline-copper"
+              >
+                {OPENING_PRESET_WORDS[p]}
+              </button>
+            </li>
+          ))}
+        </ul>
+      </section>
     </nav>
   );
 });

@@ -14,7 +14,10 @@ import type { GridStep, HandleId } from '../geometry/snapping';
 import { emptyHistory, pushEntry, type History } from './history';
 import * as edits from './moduleEdits';
 import { withSystems } from './systemsEdits';
-import { dragGesture, startMarquee, startMove, startResize, type Gesture } from './gestures';
+import { dragGesture, startMarquee, startMove, startOpeningMove, startResize, type Gesture } from './gestures';
+import * as openingEdits from './openingEdits';
+import type { OpeningPreset } from './openingEdits';
+import type { Opening } from '@/lib/layout/schema';
 import { px } from '../types';
 import { readableProblem } from '@/lib/layout/field-names';
 import { inArrangement, modulesIn } from '@/lib/layout/bay';
@@ -44,6 +47,13 @@ export interface EditorState {
   selection: string[];
   /** Modules a clicked finding names: drawn highlighted until the selection changes. */
   highlight: string[];
+  /**
+   * The selected opening (window, roof opening, body point), or null. Openings are selected on
+   * their own: selecting one clears the module selection and selecting modules clears it.
+   */
+  openingSelection: string | null;
+  /** Openings a clicked finding names: drawn highlighted until the selection changes. */
+  openingHighlight: string[];
   arrangement: Arrangement;
   /** Another arrangement drawn in phantom lines over the current one, or null. */
   phantom: Arrangement | null;
@@ -69,6 +79,11 @@ export interface EditorState {
   duplicateSelection(): EditResult;
   deleteSelection(): EditResult;
   updateModule(id: string, patch: Partial<Omit<Module, 'id'>>, label?: string): EditResult;
+  /** Adds a window, roof opening or body point at a free spot and selects it. */
+  addOpening(preset: OpeningPreset): EditResult & { id?: string };
+  /** Changes one opening's fields (undefined removes an optional one), checked against the bay schema. */
+  updateOpening(id: string, patch: Record<string, unknown>, label?: string): EditResult;
+  deleteOpening(id: string): EditResult;
   toggleMembership(id: string, arrangement: Arrangement): EditResult;
   updateBay(patch: Partial<Bay>): EditResult;
   updateBuildUp(buildUp: BuildUp): EditResult;
@@ -88,6 +103,8 @@ export interface EditorState {
   beginMove(ids: string[]): void;
   beginResize(id: string, handle: HandleId): void;
   beginMarquee(x: number, y: number, additive: boolean): void;
+  /** A drag of one opening: along its wall, or in plan for a roof opening or an underside point. */
+  beginOpeningMove(id: string): void;
   dragTo(dx: number, dy: number): void;
   commitGesture(): EditResult;
   cancelGesture(): void;
@@ -95,7 +112,9 @@ export interface EditorState {
   // View state: not part of the document, never in undo.
   select(ids: string[], mode?: 'replace' | 'toggle' | 'add'): void;
   selectAll(): void;
-  setHighlight(ids: string[]): void;
+  setHighlight(ids: string[], openingIds?: string[]): void;
+  /** Select one opening (null: none); clears the module selection. Not in undo. */
+  selectOpening(id: string | null): void;
   setArrangement(a: Arrangement): void;
   setPhantom(a: Arrangement | null): void;
   /** Pick a kind to place with the next tap on the plan (null: stop). Not in undo. */
@@ -127,17 +146,19 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
 
   return createStore<EditorState>()((set, get) => {
     /** Write a new document as one undo entry; refuse (and say why) on any schema error. */
-    function commit(label: string, change: () => { doc: LayoutDoc; selection?: string[] }, mergeKey?: string): EditResult {
+    function commit(label: string, change: () => { doc: LayoutDoc; selection?: string[]; opening?: string | null }, mergeKey?: string): EditResult {
       const s = get();
       if (s.readOnly) return { ok: false, error: 'This layout is view only.' };
       try {
-        const { doc, selection } = change();
+        const { doc, selection, opening } = change();
         if (doc === s.doc) return { ok: true };
         const sel = selection ?? s.selection;
+        const openingAfter = opening === undefined ? s.openingSelection : opening;
         set({
           doc,
           selection: sel,
-          history: pushEntry(s.history, { label, before: s.doc, after: doc, selectionBefore: s.selection, selectionAfter: sel, mergeKey, at: now() }),
+          openingSelection: openingAfter,
+          history: pushEntry(s.history, { label, before: s.doc, after: doc, selectionBefore: s.selection, selectionAfter: sel, openingBefore: s.openingSelection, openingAfter, mergeKey, at: now() }),
         });
         return { ok: true };
       } catch (e) {
@@ -159,6 +180,8 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       units: opts.units ?? 'mm',
       selection: [],
       highlight: [],
+      openingSelection: null,
+      openingHighlight: [],
       arrangement: 'lounge',
       phantom: null,
       placing: null,
@@ -191,6 +214,12 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         return commit(`Move ${plural(ids.length, 'module')}`, () => ({ doc: edits.moveModules(get().doc, ids, dx, dy) }));
       },
       nudgeSelection(dx, dy) {
+        const oid = get().openingSelection;
+        if (oid && get().selection.length === 0) {
+          const o = get().doc.bay.openings.find((p) => p.id === oid);
+          if (!o) return { ok: true };
+          return commit(`Nudge ${openingWord(o)}`, () => ({ doc: openingEdits.moveOpening(get().doc, oid, dx, dy) }), `nudge-opening:${oid}`);
+        }
         const ids = selected();
         if (ids.length === 0) return { ok: true };
         return commit(`Nudge ${plural(ids.length, 'module')}`, () => ({ doc: edits.moveModules(get().doc, ids, dx, dy) }), `nudge:${ids.join(',')}`);
@@ -209,12 +238,33 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         });
       },
       deleteSelection() {
+        const oid = get().openingSelection;
+        if (oid && get().selection.length === 0) return get().deleteOpening(oid);
         const ids = selected();
         if (ids.length === 0) return { ok: true };
         return commit(`Delete ${plural(ids.length, 'module')}`, () => ({ doc: edits.deleteModules(get().doc, ids), selection: [] }));
       },
       updateModule(id, patch, label = 'Edit module') {
         return commit(label, () => ({ doc: edits.patchModule(get().doc, id, patch) }));
+      },
+      addOpening(preset) {
+        let id: string | undefined;
+        const r = commit(`Add ${openingEdits.OPENING_PRESET_WORDS[preset].toLowerCase()}`, () => {
+          const placed = openingEdits.placeOpening(get().doc, preset);
+          id = placed.opening.id;
+          return { doc: placed.doc, selection: [], opening: placed.opening.id };
+        });
+        if (r.ok) set({ highlight: [], openingHighlight: [] });
+        return { ...r, id };
+      },
+      updateOpening(id, patch, label) {
+        const o = get().doc.bay.openings.find((p) => p.id === id);
+        return commit(label ?? `Edit ${o ? openingWord(o) : 'opening'}`, () => ({ doc: openingEdits.patchOpening(get().doc, id, patch) }));
+      },
+      deleteOpening(id) {
+        const o = get().doc.bay.openings.find((p) => p.id === id);
+        if (!o) return { ok: true };
+        return commit(`Delete ${openingWord(o)}`, () => ({ doc: openingEdits.deleteOpening(get().doc, id), opening: null }));
       },
       toggleMembership(id, arrangement) {
         return commit(`Change arrangements`, () => ({ doc: edits.toggleMembership(get().doc, id, arrangement) }));
@@ -266,14 +316,14 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         const entry = s.history.past[s.history.past.length - 1];
         if (!entry) return;
         const ids = new Set(entry.before.modules.map((m) => m.id));
-        set({ doc: entry.before, selection: entry.selectionBefore.filter((id) => ids.has(id)), history: { past: s.history.past.slice(0, -1), future: [entry, ...s.history.future] } });
+        set({ doc: entry.before, selection: entry.selectionBefore.filter((id) => ids.has(id)), openingSelection: openingIn(entry.before, entry.openingBefore), history: { past: s.history.past.slice(0, -1), future: [entry, ...s.history.future] } });
       },
       redo() {
         const s = get();
         const entry = s.history.future[0];
         if (!entry || s.gesture) return;
         const ids = new Set(entry.after.modules.map((m) => m.id));
-        set({ doc: entry.after, selection: entry.selectionAfter.filter((id) => ids.has(id)), history: { past: [...s.history.past, { ...entry, mergeKey: undefined }], future: s.history.future.slice(1) } });
+        set({ doc: entry.after, selection: entry.selectionAfter.filter((id) => ids.has(id)), openingSelection: openingIn(entry.after, entry.openingAfter), history: { past: [...s.history.past, { ...entry, mergeKey: undefined }], future: s.history.future.slice(1) } });
       },
 
       beginMove(ids) {
@@ -289,6 +339,11 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       beginMarquee(x, y, additive) {
         set({ gesture: startMarquee(x, y, additive, additive ? get().selection : []) });
       },
+      beginOpeningMove(id) {
+        const s = get();
+        if (s.readOnly) return;
+        set({ gesture: startOpeningMove(s.doc, s.arrangement, id) });
+      },
       dragTo(dx, dy) {
         const s = get();
         if (!s.gesture) return;
@@ -300,8 +355,13 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         set({ gesture: null });
         if (g.kind === 'marquee') {
           const ids = g.additive ? Array.from(new Set([...g.base, ...g.preview.hits])) : g.preview.hits;
-          set({ selection: ids, highlight: [] });
+          set({ selection: ids, highlight: [], openingSelection: null, openingHighlight: [] });
           return { ok: true };
+        }
+        if (g.kind === 'opening') {
+          const moved = g.preview.opening;
+          if (JSON.stringify(moved) === JSON.stringify(g.start)) return { ok: true };
+          return commit(`Move ${openingWord(g.start)}`, () => ({ doc: openingEdits.replaceOpening(get().doc, moved), opening: moved.id }));
         }
         if (g.kind === 'move') {
           const { dx, dy } = g.preview;
@@ -322,14 +382,22 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (mode === 'replace') next = ids;
         else if (mode === 'add') next = Array.from(new Set([...cur, ...ids]));
         else next = [...cur.filter((id) => !ids.includes(id)), ...ids.filter((id) => !cur.includes(id))];
-        set({ selection: next, highlight: [] });
+        set({ selection: next, highlight: [], openingSelection: null, openingHighlight: [] });
+      },
+      selectOpening(id) {
+        const known = id !== null && get().doc.bay.openings.some((o) => o.id === id);
+        set({ openingSelection: known ? id : null, selection: known ? [] : get().selection, highlight: [], openingHighlight: [] });
       },
       selectAll() {
         const s = get();
-        set({ selection: modulesIn(s.doc, s.arrangement).map((m) => m.id) });
+        set({ selection: modulesIn(s.doc, s.arrangement).map((m) => m.id), openingSelection: null });
       },
-      setHighlight(ids) {
-        set({ highlight: ids, selection: ids.filter((id) => get().doc.modules.some((m) => m.id === id)) });
+      setHighlight(ids, openingIds = []) {
+        const doc = get().doc;
+        const modules = ids.filter((id) => doc.modules.some((m) => m.id === id));
+        const openings = openingIds.filter((id) => doc.bay.openings.some((o) => o.id === id));
+        // A finding about openings only selects its first opening, so Details shows it.
+        set({ highlight: ids, openingHighlight: openings, selection: modules, openingSelection: modules.length === 0 && openings.length > 0 ? openings[0] : null });
       },
       setArrangement(a) {
         const s = get();
@@ -390,10 +458,22 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         set({ savedDoc: doc, version });
       },
       replaceDoc(doc, version) {
-        set({ doc, savedDoc: doc, version, selection: [], highlight: [], gesture: null, history: emptyHistory() });
+        set({ doc, savedDoc: doc, version, selection: [], highlight: [], openingSelection: null, openingHighlight: [], gesture: null, history: emptyHistory() });
       },
     };
   });
+}
+
+/** An opening in words for undo labels: "window", "roof vent", "heater exhaust". */
+function openingWord(o: Opening): string {
+  if (o.type === 'window') return 'window';
+  if (o.type === 'roof-opening') return openingEdits.OPENING_PRESET_WORDS[o.kind].toLowerCase();
+  return openingEdits.OPENING_PRESET_WORDS[o.kind].toLowerCase();
+}
+
+/** The opening id if that opening is in the document, else null. */
+function openingIn(doc: LayoutDoc, id: string | null | undefined): string | null {
+  return id && doc.bay.openings.some((o) => o.id === id) ? id : null;
 }
 
 export const isDirty = (s: Pick<EditorState, 'doc' | 'savedDoc'>) => s.doc !== s.savedDoc;

@@ -11,6 +11,9 @@ export interface HistoryEntry {
   after: LayoutDoc;
   selectionBefore: string[];
   selectionAfter: string[];
+  /** The opening selected before and after (windows, roof openings and body points are selected on their own). */
+  openingBefore?: string | null;
+  openingAfter?: string | null;
   /** Entries with the same key within the burst window merge (arrow-key nudges). */
   mergeKey?: string;
   at: number;
@@ -30,7 +33,7 @@ export const emptyHistory = (): History => ({ past: [], future: [] });
 export function pushEntry(h: History, entry: HistoryEntry): History {
   const last = h.past[h.past.length - 1];
   if (entry.mergeKey && last && last.mergeKey === entry.mergeKey && entry.at - last.at <= BURST_MS) {
-    const merged: HistoryEntry = { ...last, after: entry.after, selectionAfter: entry.selectionAfter, at: entry.at };
+    const merged: HistoryEntry = { ...last, after: entry.after, selectionAfter: entry.selectionAfter, openingAfter: entry.openingAfter, at: entry.at };
     return { past: [...h.past.slice(0, -1), merged], future: [] };
   }
   const past = [...h.past, entry];
