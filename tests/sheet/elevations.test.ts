@@ -216,3 +216,34 @@ describe('the demo lounge’s sheet PDF on A3 at 1:20', () => {
     expect(tall.length).toBeGreaterThanOrEqual(4);
   });
 });
+
+/** The dimension line under a text label (as tests/sheet/pdf.test.ts finds one): a horizontal segment a little below the text, spanning it. */
+function dimensionLineUnder(page: PdfPageRead, label: string) {
+  return page.texts.filter((t) => t.str === label).flatMap((t) =>
+    page.segments.filter((s) => Math.abs(s.y1 - s.y2) < 0.01 && s.y1 < t.y && t.y - s.y1 < 6 && Math.min(s.x1, s.x2) < t.x && Math.max(s.x1, s.x2) > t.x),
+  );
+}
+
+describe('the demo lounge’s sheet PDF on A4 at 1:20 (the editor’s default sheet)', () => {
+  const demo = starterLayout('starter-l-lounge')!;
+  let all: PdfPageRead[];
+  beforeAll(async () => {
+    const r = composeSheet({ doc: demo, report: { ok: true, findings: [] }, paper: 'a4', scale: 20, units: 'mm', details: { studio: 'Saltmarsh Van Works', client: 'Priya Nair', layout: 'Nair — L2H2 weekender', date: '2025-12-02' } });
+    if (!r.ok) throw new Error(r.message);
+    all = (await readPdf(await renderPdf(r.sheet, { created: new Date('2025-12-02T09:00:00Z'), fonts: await fontsReady }))).pages;
+  });
+
+  it('sets each wall’s length under its elevation: the left wall’s 3100 mm as 155 mm = 439.37 pt, the rear’s 1800 mm as 90 mm = 255.12 pt', () => {
+    const left = all.findIndex((p) => p.texts.some((t) => t.str === 'Left wall elevation'));
+    const rear = all.findIndex((p) => p.texts.some((t) => t.str === 'Rear wall elevation'));
+    // Plans on pages 1–3, the section on 4, then the left wall on 5 and the rear with the bulkhead on 7 (tests/sheet/layout.test.ts).
+    expect([left, rear]).toEqual([4, 6]);
+    const [l] = dimensionLineUnder(all[left], '3100 mm');
+    expect(Math.abs(l.x2 - l.x1)).toBeCloseTo(439.37, 1);
+    // The reader may split a label into its figure and its unit ("1800", "mm"): either form counts.
+    const r = [...dimensionLineUnder(all[rear], '1800 mm'), ...dimensionLineUnder(all[rear], '1800')];
+    expect(r).toHaveLength(2); // the rear wall and the bulkhead, side by side
+    for (const line of r) expect(Math.abs(line.x2 - line.x1)).toBeCloseTo(255.12, 1);
+  });
+});
+
