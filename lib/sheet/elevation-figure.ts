@@ -28,7 +28,7 @@ import { formatLength } from '../layout/units';
 import type { Arrangement, LayoutDoc, LengthUnit, Module } from '../layout';
 import { archBoxes, buildUpThickness, inArrangement, modulesIn, mountedInside } from '../layout/bay';
 import { bodyPoints, windowOnWall, windows, type BayWall } from '../layout/openings';
-import { kindSpec } from '../layout/kinds';
+import { kindTitle } from './roof-figure';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
 import { scheduleNumbers } from './plan-figure';
@@ -220,7 +220,7 @@ export function drawElevation(doc: LayoutDoc, wall: ElevationWall, ox: number, o
       : { type: 'rect', x, y, w, h, fill: 'white', stroke: 'soft', width: LINE.thin, dash: [1, 0.7], tag: `${tag}:module:${m.id}` });
     if (w >= 4 && h >= 3) {
       items.push({ type: 'text', x: x + w / 2, y: y + Math.min(h - 0.6, 2.8), text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold', align: 'center' });
-      const label = h >= 6 ? fit(m.label ?? kindSpec(m.kind).title, TYPE.small, w - 1.2) : '';
+      const label = h >= 6 ? fit(m.label ?? kindTitle(m), TYPE.small, w - 1.2) : '';
       if (label) items.push({ type: 'text', x: x + w / 2, y: y + 5.2, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
     }
   }

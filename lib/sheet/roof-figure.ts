@@ -46,7 +46,7 @@ export function roofModules(doc: Pick<LayoutDoc, 'modules'>): Module[] {
 const isSolar = (m: Pick<Module, 'kind'>) => (m.kind as string) === 'solar-panel';
 const isRail = (m: Pick<Module, 'kind'>) => /rail/.test(m.kind as string);
 /** The kind's title; the kind's own name for one this build does not know yet. */
-const titleOf = (m: Pick<Module, 'kind'>) => (KINDS as Record<string, { title: string } | undefined>)[m.kind]?.title ?? String(m.kind);
+export const kindTitle = (m: Pick<Module, 'kind'>): string => (KINDS as Record<string, { title: string } | undefined>)[m.kind]?.title ?? String(m.kind);
 
 export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, units: LengthUnit): SheetItem[] {
   const { bay } = doc;
@@ -91,7 +91,7 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
     if (w >= 4 && h >= 3.5) {
       items.push({ type: 'rect', x: x + w / 2 - 2.4, y: y + h / 2 - 2.2, w: 4.8, h: 3.2, fill: 'white', stroke: 'ink', width: LINE.hair });
       items.push({ type: 'text', x: x + w / 2, y: y + h / 2 + 0.2, text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold', align: 'center' });
-      const label = h >= 9 ? fit(m.label ?? titleOf(m), TYPE.small, w - 1.5) : '';
+      const label = h >= 9 ? fit(m.label ?? kindTitle(m), TYPE.small, w - 1.5) : '';
       if (label) items.push({ type: 'text', x: x + w / 2, y: y + h / 2 + 3.8, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
     } else {
       items.push({ type: 'text', x: x + w + 0.6, y: y + 2, text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold' });

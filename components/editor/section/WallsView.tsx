@@ -16,11 +16,15 @@ import { sheetPageSvg } from '@/lib/sheet/render-svg';
 import { roofOpenings } from '@/lib/layout/openings';
 import type { SheetItem } from '@/lib/sheet/primitives';
 
-/** The figures are drawn at 1:20 in paper mm, then scaled to the panel (the scale is only the model's unit here). */
-const MODEL_SCALE = 20;
+/**
+ * The figures are drawn as at 1:50 in paper mm, then scaled to fit the panel: still true to scale
+ * within each drawing and between them, but with the type (set in points for print) large beside
+ * the walls, so it reads at the panel's size (at 1:20 a panel 300 px high would set it at ~5 px).
+ */
+const MODEL_SCALE = 50;
 /** Screen px per paper mm: never so small it cannot be read (the row then scrolls), never larger than this. */
-const MIN_PX_PER_MM = 1.2;
-const MAX_PX_PER_MM = 4;
+const MIN_PX_PER_MM = 3;
+const MAX_PX_PER_MM = 8;
 
 interface Figure {
   key: string;
