@@ -73,6 +73,8 @@ export const ELEVATION_MARGIN = { left: Math.ceil(VERTICAL_ORDINATE_BAND) + 1, t
 export interface ElevationOptions {
   /** Only the modules of this arrangement, all drawn solid (the editor's view); absent: all, sleep-only dashed (the sheet). */
   arrangement?: Arrangement;
+  /** Leave the scale out of the caption (on screen the drawing is scaled to its panel, not to a paper scale). */
+  noScale?: boolean;
 }
 
 /** The wall's length seen from the room (mm): the side walls the bay's length, the ends its width. */
@@ -281,7 +283,7 @@ export function drawElevation(doc: LayoutDoc, wall: ElevationWall, ox: number, o
   const what = options.arrangement ? `${options.arrangement}` : 'lounge solid, sleep-only dashed';
   const against = modulesAgainst(doc, wall, options.arrangement).length;
   const leftOut = against > shown.length ? `only the first ${shown.length} of ${against} modules against it drawn` : '';
-  const notes = [openFront ? 'no bulkhead: open to the cab' : '', 'seen from inside', what, ordinate.leftOff ? `${ordinate.leftOff} levels left off for room` : '', leftOut, `1:${scale}`].filter(Boolean).join(' · ');
+  const notes = [openFront ? 'no bulkhead: open to the cab' : '', 'seen from inside', what, ordinate.leftOff ? `${ordinate.leftOff} levels left off for room` : '', leftOut, options.noScale ? '' : `1:${scale}`].filter(Boolean).join(' · ');
   items.push({ type: 'text', x: bx + W, y: cy + 2.6, text: notes, size: TYPE.small, align: 'right', ink: 'soft' });
   return items;
 }

@@ -48,7 +48,8 @@ const isRail = (m: Pick<Module, 'kind'>) => /rail/.test(m.kind as string);
 /** The kind's title; the kind's own name for one this build does not know yet. */
 export const kindTitle = (m: Pick<Module, 'kind'>): string => (KINDS as Record<string, { title: string } | undefined>)[m.kind]?.title ?? String(m.kind);
 
-export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, units: LengthUnit): SheetItem[] {
+/** `noScale`: leave the scale out of the caption (on screen the drawing is scaled to its panel). */
+export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, units: LengthUnit, noScale = false): SheetItem[] {
   const { bay } = doc;
   const s = (mm: number) => onPaper(mm, scale);
   const bx = ox + ROOF_MARGIN.left;
@@ -117,7 +118,7 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
   items.push({ type: 'text', x: bx, y: cy, text: ROOF_TITLE, size: TYPE.caption, font: 'sans-bold' });
   const counts = `${roofOpenings(bay).length} roof opening${roofOpenings(bay).length === 1 ? '' : 's'}, ${roofModules(doc).length} on the roof`;
   const leftOff = along.leftOff + acrossRun.leftOff;
-  const notes = ['from above, front to the left', counts, leftOff ? `${leftOff} figures left off for room` : '', `${formatLength(bay.length, units)} × ${formatLength(bay.width, units)}`, `1:${scale}`].filter(Boolean).join(' · ');
+  const notes = ['from above, front to the left', counts, leftOff ? `${leftOff} figures left off for room` : '', `${formatLength(bay.length, units)} × ${formatLength(bay.width, units)}`, noScale ? '' : `1:${scale}`].filter(Boolean).join(' · ');
   items.push({ type: 'text', x: bx + L, y: cy + 2.6, text: notes, size: TYPE.small, align: 'right', ink: 'soft' });
   return items;
 }

@@ -48,12 +48,12 @@ export const WallsView = memo(function WallsView({ view }: { view: 'walls' | 'ro
   }, []);
 
   const figures = useMemo<Figure[]>(() => {
-    if (view === 'roof') return [{ key: 'roof', title: ROOF_TITLE, ...roofSize(doc, MODEL_SCALE), items: drawRoof(doc, 0, 0, MODEL_SCALE, units) }];
+    if (view === 'roof') return [{ key: 'roof', title: ROOF_TITLE, ...roofSize(doc, MODEL_SCALE), items: drawRoof(doc, 0, 0, MODEL_SCALE, units, true) }];
     return ELEVATION_WALLS.map((wall: ElevationWall) => ({
       key: wall,
       title: ELEVATION_TITLE[wall],
       ...elevationSize(doc, wall, MODEL_SCALE),
-      items: drawElevation(doc, wall, 0, 0, MODEL_SCALE, units, { arrangement }),
+      items: drawElevation(doc, wall, 0, 0, MODEL_SCALE, units, { arrangement, noScale: true }),
     }));
   }, [doc, arrangement, units, view]);
 
