@@ -35,9 +35,10 @@ import { countByStatus, failingModuleIds } from './panels/findingGroups';
 
 // Behind tabs: loaded when first opened, so the editor's first load stays small.
 const BayPanel = lazy(() => import('./panels/BayPanel').then((m) => ({ default: m.BayPanel })));
-/** The docked bottom panel grows while the side section is on show, so the drawing has room to be read. */
+/** The docked bottom panel grows while a drawing (the side section, the walls, the roof) is on show, so it has room to be read. */
 const SECTION_PANEL_HEIGHT = 'h-[42vh] min-h-64';
 const SectionView = lazy(() => import('./section/SectionView').then((m) => ({ default: m.SectionView })));
+const WallsView = lazy(() => import('./section/WallsView').then((m) => ({ default: m.WallsView })));
 // Opened by a right-click, a long press or the menu key: loaded then.
 const ContextMenu = lazy(() => import('./panels/ContextMenu').then((m) => ({ default: m.ContextMenu })));
 const loading = <p className="p-4 text-sm text-ink-soft">Loading…</p>;
@@ -133,7 +134,7 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
           </div>
           <Drawer id="checks" title="Checks and section" side="bottom" floating={floating} dockedClassName="contents">
             <Tabs
-              className={`flex min-h-0 shrink-0 flex-col ${floating ? 'h-full' : `${bottom === 'section' ? SECTION_PANEL_HEIGHT : 'h-64'} border-t border-paper-edge`}`}
+              className={`flex min-h-0 shrink-0 flex-col ${floating ? 'h-full' : `${bottom !== 'checks' ? SECTION_PANEL_HEIGHT : 'h-64'} border-t border-paper-edge`}`}
               panelClassName="min-h-0 flex-1 overflow-auto"
               label="Checks and section"
               active={bottom}
@@ -141,9 +142,13 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen 
               tabs={[
                 { id: 'checks', title: checksTitle, label: <span className="flex items-center gap-2">Checks{countsBadge}</span> },
                 { id: 'section', title: 'Side section', label: 'Side section' },
+                { id: 'walls', title: 'Wall elevations', label: 'Walls' },
+                { id: 'roof', title: 'Roof plan', label: 'Roof' },
               ]}
             >
-              {bottom === 'checks' ? <ChecksPanel checks={checks} layoutId={canEdit ? layoutId : undefined} /> : <Suspense fallback={loading}><SectionView /></Suspense>}
+              {bottom === 'checks' ? <ChecksPanel checks={checks} layoutId={canEdit ? layoutId : undefined} />
+                : bottom === 'walls' || bottom === 'roof' ? <Suspense fallback={loading}><WallsView view={bottom} /></Suspense>
+                : <Suspense fallback={loading}><SectionView /></Suspense>}
             </Tabs>
           </Drawer>
         </main>

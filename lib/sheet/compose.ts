@@ -1,6 +1,6 @@
 /**
  * Lays out the whole plan sheet through its one layout model (sheet-layout.ts): the three
- * arrangement plans and the side section at the chosen scale, side by side in rows where they fit
+ * arrangement plans, the side section, the four wall elevations and the roof plan at the chosen scale, side by side in rows where they fit
  * the drawing area, else further rows or pages; then the module schedule, the mass table, the
  * revisions, build plan, check summary and safety cautions fill the space the drawings leave
  * (beside and below them) in columns, flowing onto further pages as needed; the title block on
@@ -27,6 +27,8 @@ import { onPaper } from './paper';
 import type { SheetDocument, SheetItem, SheetPage } from './primitives';
 import { flowSchedule, SCHEDULE_MIN_WIDTH } from './schedule';
 import { drawSection, sectionSize } from './section-figure';
+import { drawElevation, elevationSize, ELEVATION_WALLS } from './elevation-figure';
+import { drawRoof, roofSize } from './roof-figure';
 import { drawTitleBlock, type TitleDetails } from './title-block';
 
 export interface SheetRequest {
@@ -79,6 +81,9 @@ function drawings(req: Pick<SheetRequest, 'doc' | 'scale' | 'units' | 'changes' 
   };
   const out: Drawing[] = ARRANGEMENTS.map((a) => ({ what: `plan:${a}`, ...plan, draw: (x: number, y: number) => [...drawPlan(req.doc, a, x, y, req.scale, req.units, req.report), ...clouds(a, x, y)] }));
   out.push({ what: 'section', ...sectionSize(req.doc, req.scale, floorAboveRoad), draw: (x, y) => drawSection(req.doc, x, y, req.scale, req.units, floorAboveRoad) });
+  // The walls unrolled, seen from the room, and the roof from above: at the same scale, after the section.
+  for (const wall of ELEVATION_WALLS) out.push({ what: `elevation:${wall}`, ...elevationSize(req.doc, wall, req.scale), draw: (x, y) => drawElevation(req.doc, wall, x, y, req.scale, req.units) });
+  out.push({ what: 'roof-plan', ...roofSize(req.doc, req.scale), draw: (x, y) => drawRoof(req.doc, x, y, req.scale, req.units) });
   return out;
 }
 
@@ -86,7 +91,8 @@ function drawings(req: Pick<SheetRequest, 'doc' | 'scale' | 'units' | 'changes' 
 export function fitOf(doc: LayoutDoc, paper: Paper, scale: number, floorAboveRoad = floorHeightOf({ doc })): { fits: boolean; needed: { width: number; height: number }; available: { width: number; height: number } } {
   const plan = planSize(doc, scale);
   const section = sectionSize(doc, scale, floorAboveRoad);
-  const needed = { width: Math.max(plan.width, section.width), height: Math.max(plan.height, section.height) };
+  const others = [...ELEVATION_WALLS.map((wall) => elevationSize(doc, wall, scale)), roofSize(doc, scale)];
+  const needed = { width: Math.max(plan.width, section.width, ...others.map((o) => o.width)), height: Math.max(plan.height, section.height, ...others.map((o) => o.height)) };
   const { area } = sheetFrame(paper);
   const available = { width: area.width, height: area.height };
   return { fits: needed.width <= available.width && needed.height <= available.height, needed, available };
@@ -144,7 +150,7 @@ function layOut(req: SheetRequest, frame: SheetFrame, floorAboveRoad: number, ba
     return page.items;
   });
 
-  // Drawings: travel, lounge, sleep, section, side by side in rows where they fit.
+  // Drawings: travel, lounge, sleep, section, the elevations, the roof plan, side by side in rows where they fit.
   space.placeDrawings(drawings(req, floorAboveRoad));
   const figurePages = pages.length;
 

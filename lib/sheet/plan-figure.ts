@@ -4,7 +4,7 @@
  * cross-hatched, each module in its material family's hatching with its schedule number, the
  * overall length and width as dimension strings, running dimensions from the front along both
  * walls (lib/sheet/running-dimensions.ts), the key clearances as the checks measured them
- * (lib/sheet/clearances.ts), and the cab marked at the front. Cab on the
+ * (lib/sheet/clearances.ts), the bay's openings (lib/sheet/plan-openings.ts), and the cab marked at the front. Cab on the
  * left, x rearwards to the right, the left wall at the top (as in the editor).
  * Pure: a document in, sheet items out; must never render or measure the page.
  */
@@ -20,6 +20,7 @@ import { archBoxes, buildUpThickness, modulesIn, mountedInside, sectionReach } f
 import type { CheckReport } from '../checks/types';
 import { runningDimension, RUN_BAND } from './running-dimensions';
 import { clearanceItems } from './clearances';
+import { planOpeningItems } from './plan-openings';
 
 /**
  * Paper space around the bay: the width dimension (left), the left wall's running dimension and
@@ -120,6 +121,8 @@ export function drawPlan(doc: LayoutDoc, arrangement: Arrangement, ox: number, o
 
   // Bare metal: heavy outline with the door openings left as gaps.
   items.push(...bareMetal(doc, bx, by, L, W, s));
+  // Windows on the wall lines, roof openings dashed overhead, body points as marks.
+  items.push(...planOpeningItems(doc, bx, by, s));
 
   // Cab arrow at the front.
   items.push(

@@ -37,9 +37,16 @@ const TITLE_TOP = { a3: 263, a4: 176 };
 //   plan     13 + 3100/20 + 7 = 175 mm wide
 //   section  13 + 3100/20 + 16 = 184 mm wide; 6 + (2000 + 550)/20 + 10 = 143.5 mm high
 //            (the road line 550 mm below the load floor: the tank hangs under it)
+//   left wall elevation  17 + 3100/20 + 7 = 179 mm wide (the level figures' band, 3 + 1.2 + 2 × 5.6 = 15.4 → 16, and 1 mm);
+//            4 + (2000 + 250)/20 + 12 = 128.5 mm high (the fuel filler sits 250 mm below the bare floor on that wall)
+//   right wall elevation 179 mm wide, 4 + 2000/20 + 12 = 116 mm high
+//   rear wall and bulkhead elevations 17 + 1800/20 + 7 = 114 mm wide, 116 mm high
+//   roof plan 17 + 3100/20 + 7 = 179 mm wide, 10 + 1800/20 + 8 = 108 mm high (the ordinate band above, 3 + 0.7 + 2 × 2.3 = 8.3 → 9, and 1 mm)
 const PLAN_W = 175;
 const SECTION_W = 184;
 const SECTION_H = 143.5;
+const ELEVATION_SIDE_W = 179;
+const ELEVATION_END_W = 114;
 const GAP = 6;
 
 function overlaps(a: PlacedBlock, b: PlacedBlock): boolean {
@@ -84,19 +91,32 @@ describe('A3 at 1:20', () => {
     expect(at('plan:lounge').x).toBeCloseTo(14 + PLAN_W + GAP, 6);
   });
 
-  it('takes two pages of drawings and three in all, the schedule under the first row of plans', () => {
-    // Rows: [travel, lounge] 118.9 mm high, [sleep, section] 143.5 mm: 118.9 + 6 + 143.5 = 268.4 > 245, so two pages.
-    expect(r.figurePages).toBe(2);
+  it('takes four pages of drawings and four in all, the schedule under the first row of plans', () => {
+    // Rows: [travel, lounge] 118.9 mm high, [sleep, section] 143.5 mm: 118.9 + 6 + 143.5 = 268.4 > 245, so two pages;
+    // then [left, right wall] 179 + 6 + 179 = 364 ≤ 392 wide, 128.5 high (page 3); [rear, bulkhead] 114 + 6 + 114 = 234
+    // (a roof plan more would need 234 + 6 + 179 = 419 > 392), 116 high: 128.5 + 6 + 116 = 250.5 > 245, page 4;
+    // [roof] 108 high under it: 116 + 6 + 108 = 230 ≤ 245.
+    expect(r.figurePages).toBe(4);
+    expect(['elevation:left', 'elevation:right'].map((w) => at(w).page)).toEqual([2, 2]);
+    expect(at('elevation:right').x).toBeCloseTo(14 + ELEVATION_SIDE_W + GAP, 6);
+    expect(['elevation:rear', 'elevation:bulkhead', 'roof-plan'].map((w) => at(w).page)).toEqual([3, 3, 3]);
+    expect(at('elevation:bulkhead').x).toBeCloseTo(14 + ELEVATION_END_W + GAP, 6);
+    expect(at('roof-plan').y).toBeCloseTo(14 + 116 + GAP, 6);
     const schedule = r.blocks.filter((b) => b.what === 'text:schedule');
     expect(schedule[0].page).toBe(0);
     expect(schedule[0].width).toBeCloseTo(AREA.a3.width, 6);
-    // The notes (build plan, checks, cautions) need about a column's height of 245 mm, more
-    // than the 30 and 21 mm strips left beside the rows: a third page.
-    expect(r.sheet.pages).toHaveLength(3);
+    // The notes (build plan, checks, cautions) fit the 245 − 128.5 − 6 = 110.5 mm under the wall
+    // elevations on the third page, in columns: no page of text alone.
+    expect(r.blocks.filter((b) => b.what === 'text:notes').every((b) => b.page === 2)).toBe(true);
+    expect(r.sheet.pages).toHaveLength(4);
   });
 
   it('balances the notes over the last page’s columns: (392 + 6)/(78 + 6) = 4.7, so 4 columns of (392 − 3 × 6)/4 = 93.5 mm', () => {
-    const last = r.blocks.filter((b) => b.page === 2);
+    // Sixty findings make the notes run past the drawings onto a page of their own (the fifth).
+    const findings = Array.from({ length: 60 }, (_, i) => ({ id: `rule.${i}`, status: 'warn' as const, message: `Finding number ${i} about something measured in the van that needs attention.`, source: 'Common practice, no source' }));
+    const long = compose({ paper: 'a3', report: { ok: false, findings } });
+    expect(long.sheet.pages).toHaveLength(5);
+    const last = long.blocks.filter((b) => b.page === 4);
     expect(last.every((b) => b.what === 'text:notes')).toBe(true);
     expect(last).toHaveLength(4);
     for (const b of last) expect(b.width).toBeCloseTo(93.5, 6);
@@ -115,7 +135,9 @@ describe('A4 at 1:20', () => {
 
   it('keeps the plan and the section on pages of their own (175 + 6 + 184 = 365 mm > 269 mm), with text beside and below them', () => {
     expect(PLAN_W + GAP + SECTION_W).toBeGreaterThan(AREA.a4.width);
-    expect(r.figurePages).toBe(4);
+    // Then the left and the right wall elevations a page each (179 + 6 + 179 = 364 > 269), the rear and the
+    // bulkhead side by side (114 + 6 + 114 = 234 ≤ 269; 116 high), and the roof plan (116 + 6 + 108 = 230 > 158): 4 + 4 pages.
+    expect(r.figurePages).toBe(8);
     // Beside a plan: 269 − 175 − 6 = 88 mm, room for one 78 mm column of notes on the first page.
     const beside = r.blocks.find((b) => b.what === 'text:notes' && b.page === 0)!;
     expect(beside.x).toBeCloseTo(14 + PLAN_W + GAP, 6);
@@ -124,8 +146,8 @@ describe('A4 at 1:20', () => {
     const below = r.blocks.find((b) => b.what === 'text:schedule')!;
     expect(below.page).toBe(0);
     expect(below.width).toBeCloseTo(269, 6);
-    // Four drawing pages and one more for the rest (the old layout took seven).
-    expect(r.sheet.pages).toHaveLength(5);
+    // Eight drawing pages; the schedule, the mass table and the notes all fit beside and below the drawings.
+    expect(r.sheet.pages).toHaveLength(8);
   });
 
   it('the print view draws the same pages as the PDF model: one SVG per page, the notes beside the first plan', () => {
