@@ -12,7 +12,8 @@
  */
 import type { Arrangement, Bay, LayoutDoc, Opening } from '@/lib/layout/schema';
 import { moduleName } from '@/lib/layout/revision-words';
-import { bodyPointAt, openingTitle, roofOpeningRect, wallRectInPlan, windowOnWall } from '@/lib/layout/openings';
+import { openingTitle } from '@/lib/layout/openings';
+import { BODY_POINT_HALF as POINT_HALF, openingPlanRect, PANE_DEPTH_MIN } from '@/lib/layout/nearest';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
 import { boundingRect, deltaTriangle, revisionCloud, type Rect } from '@/lib/geometry';
 import { archBoxes, buildUpThickness, inArrangement, linedInterior, modulesIn, moduleRect as rectOf } from '@/lib/layout/bay';
@@ -33,22 +34,6 @@ export interface RevisionMark {
   area: Rect;
   /** Where a moved, resized or removed module (or opening) stood, drawn in phantom lines. */
   was: Rect | null;
-}
-
-/** How far into the room a window's pane is drawn from the bare wall line (mm), so it reads at compare scale. */
-const PANE_DEPTH_MIN = 40;
-/** Half the side of the square a body point is marked by (mm). */
-const POINT_HALF = 60;
-
-/** Where an opening lies in plan: a window's pane on its wall line, a roof opening's outline, a small square round a body point; null for a window in a door that is gone. */
-export function openingPlanRect(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening, paneDepth: number): Rect | null {
-  if (o.type === 'window') {
-    const r = windowOnWall(bay, 0, o);
-    return r ? wallRectInPlan(bay, r, paneDepth) : null;
-  }
-  if (o.type === 'roof-opening') return roofOpeningRect(o);
-  const p = bodyPointAt(bay, o);
-  return { x0: p.x - POINT_HALF, y0: p.y - POINT_HALF, x1: p.x + POINT_HALF, y1: p.y + POINT_HALF };
 }
 
 /** The clouds one arrangement needs on the later side; openings are in every arrangement. */
