@@ -3,7 +3,10 @@
 // common practice, no source (lib/planning/lining-panels.ts): cut-outs are the glass size of a
 // window and the size of a roof opening — our simplification; the real cut follows the frame
 // maker's template.
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
+import { CutListPanel } from '@/components/planning/cut/CutListPanel';
 import { cutListFromDoc, cutOutWords, partAreaM2, planCutList, type CutPart } from '@/lib/planning';
 import { emptyLayout, layoutDocSchema, type LayoutDoc, type LayoutDocInput } from '@/lib/layout';
 
@@ -103,5 +106,18 @@ describe('lining panels', () => {
   it('no lining panels where the inner layer is not a sheet material', () => {
     const doc = layoutDocSchema.parse({ ...bay([]), buildUp: { floor: [], roof: [{ material: 'Closed-cell foam', thickness: 20 }], walls: [{ material: 'Carpet lining', thickness: 3 }] } });
     expect(cutListFromDoc(doc, OPTIONS).parts.filter((p) => p.id.startsWith('lining:'))).toEqual([]);
+  });
+});
+
+describe('the Cut list tab', () => {
+  it('shows a Cut-outs column with each cut-out in words, and the lining area less the cut-outs', () => {
+    const doc = bay([{ id: 'w1', type: 'window', wall: 'left', position: 300, sillHeight: 850, width: 800, height: 400, opens: true }]);
+    const html = renderToStaticMarkup(createElement(CutListPanel, { doc, options: { kerfMm: 3, trimMm: 10, respectGrain: true }, onOptions: () => {} }));
+    const text = html.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ');
+    expect(text).toContain('Cut-outs');
+    expect(text).toContain('Window in the left wall: 800 × 400 mm, 300 mm from the front edge, 850 mm from the bottom edge');
+    // The panel left: 2.88 − 0.32 = 2.56 m².
+    expect(text).toContain('2.56 m² left');
+    expect(html).toContain('data-testid="net-area-lining-plywood-lining-12"');
   });
 });
