@@ -119,5 +119,10 @@ describe('the Cut list tab', () => {
     // The panel left: 2.88 − 0.32 = 2.56 m².
     expect(text).toContain('2.56 m² left');
     expect(html).toContain('data-testid="net-area-lining-plywood-lining-12"');
+    // Drawn dashed on its nested sheet: the panel's rise runs along the sheet, so the cut-out is 400 long
+    // (its height) and 800 across (its width), 850 along and 300 across from the panel's corner.
+    const drawn = /<rect data-cut-out="w1" x="([\d.]+)" y="([\d.]+)" width="([\d.]+)" height="([\d.]+)"/.exec(html);
+    expect(drawn).not.toBeNull();
+    expect([Number(drawn![3]), Number(drawn![4])]).toEqual([400, 800]);
   });
 });

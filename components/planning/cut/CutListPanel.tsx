@@ -81,7 +81,7 @@ export function CutListPanel({ doc, options, onOptions }: { doc: LayoutDoc; opti
                 <div className="grid gap-3 lg:grid-cols-2">
                   {nest.sheets.map((s) => (
                     <figure key={s.index} className="rounded-sm border border-paper-edge bg-paper p-2">
-                      <CutSheetDrawing sheet={nest.sheet} nested={s} trimMm={nest.trimMm} numbers={numbers} title={material.title} />
+                      <CutSheetDrawing sheet={nest.sheet} nested={s} trimMm={nest.trimMm} numbers={numbers} title={material.title} cutOutsOf={cutOuts} />
                       <figcaption className="mt-1 text-xs text-ink-soft">Sheet {s.index + 1} of {nest.sheetsNeeded}</figcaption>
                     </figure>
                   ))}
