@@ -58,6 +58,8 @@ export function partAreaM2(p: Pick<CutPart, 'length' | 'width' | 'cutOuts'>): nu
 
 export interface CutListOptions extends NestOptions {
   sheet?: SheetSize;
+  /** List the wall and roof lining panels too; default true (the parts list leaves them out: no price key yet). */
+  lining?: boolean;
 }
 
 export interface CutList {
@@ -121,7 +123,7 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
   }
   const { L, W } = usable(sheet, trim);
   const liningMaterials = new Map<string, SheetMaterial>();
-  const panels = liningPanels(doc, L, W);
+  const panels = options.lining === false ? [] : liningPanels(doc, L, W);
   const count = new Map<string, number>();
   for (const p of panels) count.set(p.surface, (count.get(p.surface) ?? 0) + 1);
   const seen = new Map<string, number>();

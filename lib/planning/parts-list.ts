@@ -15,7 +15,7 @@ import { kindSpec } from '../layout/kinds';
 import type { LayoutDoc, ModuleKind } from '../layout';
 import { CHEMISTRIES } from './battery-sizing';
 import { cableSize, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, nominalSystemVolts } from './cable-size';
-import { planCutList, SHEET_MATERIALS, type CutListOptions } from './cut-list';
+import { planCutList, type CutListOptions } from './cut-list';
 import type { InsulationRating } from './conductors';
 
 export type PriceUnit = 'each' | 'm' | 'sheet' | 'Ah' | 'W';
@@ -99,9 +99,9 @@ export function computePartsList(doc: LayoutDoc, priceList: PriceList, cutOption
   for (const m of doc.modules) byKind.set(m.kind, (byKind.get(m.kind) ?? 0) + 1);
   for (const [kind, n] of byKind) push(`module:${kind}`, 'module', kindSpec(kind).title, n, 'each');
 
-  const cut = planCutList(doc, cutOptions);
-  // Lining boards (cut-list materials outside SHEET_MATERIALS) have no price key yet: not priced here.
-  for (const g of cut.byMaterial) if (Object.hasOwn(SHEET_MATERIALS, g.material.id)) push(`sheet:${g.material.id}`, 'sheet', `${g.material.title}, 2440 × 1220 mm sheet`, g.nest.sheetsNeeded, 'sheet');
+  const cut = planCutList(doc, { ...cutOptions, lining: false });
+  // Lining boards have no price key yet: left out of the parts list (and so not nested here).
+  for (const g of cut.byMaterial) push(`sheet:${g.material.id}`, 'sheet', `${g.material.title}, 2440 × 1220 mm sheet`, g.nest.sheetsNeeded, 'sheet');
 
   const power = doc.systems?.power;
   const volts = nominalSystemVolts(power?.battery?.volts ?? 12);
