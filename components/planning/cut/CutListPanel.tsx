@@ -60,7 +60,7 @@ export function CutListPanel({ doc, options, onOptions }: { doc: LayoutDoc; opti
       {!plan.ok ? (
         <p className="panel border-brick p-3 text-sm" role="alert">The cut list cannot be nested: {plan.error}</p>
       ) : plan.value.byMaterial.length === 0 ? (
-        <p className="panel p-3 text-sm text-ink-soft">No cabinet-type modules on the plan yet: nothing to cut.</p>
+        <p className="panel p-3 text-sm text-ink-soft">No cabinet-type modules on the plan and no sheet lining in the build-up yet: nothing to cut.</p>
       ) : (
         <>
           <p className="text-sm" data-testid="cut-summary">
