@@ -1,11 +1,12 @@
 /**
  * The words under a comparison's two plans: what changed, module by module (by label, fields by
- * their on-screen names) and in the bay, and the check findings whose status changed — with the
+ * their on-screen names), opening by opening (windows, roof openings, body points: added, removed,
+ * moved, resized) and in the bay, and the check findings whose status changed — with the
  * safety caution when a gas, power, heating, seat or weight finding is among them. Shared by the
  * revision compare and the variant compare. Presentation only.
  */
 import { ArrowDownRight, ArrowUpRight } from 'lucide-react';
-import { bayChangeWords, moduleChangeWords } from '@/lib/layout/revision-words';
+import { bayChangeWords, moduleChangeWords, openingChangeWords, openingWords } from '@/lib/layout/revision-words';
 import { moduleLabel } from '@/lib/layout/kinds';
 import { findingTopic, TOPIC_CAUTION, type HazardTopic } from '@/lib/layout/cautions';
 import { formatLength, type LengthUnit } from '@/lib/layout/units';
@@ -29,6 +30,11 @@ export function ComparisonDetails({ data, markLetter, units, titles = { modules:
 }) {
   const { diff } = data;
   const nothing = !diff.added.length && !diff.removed.length && !diff.changed.length;
+  const openings = diff.openings ?? { added: [], removed: [], changed: [] };
+  const openingsChanged = openings.added.length + openings.removed.length + openings.changed.length > 0;
+  // Openings named in the later layout's terms (a window in a door by its door); a removed one by the earlier's.
+  const afterBay = data.to.doc.bay;
+  const beforeBay = data.from.doc.bay;
   const topics = [...new Set(data.findings.map((f) => findingTopic(f.id)).filter((t): t is HazardTopic => t !== null))];
   // Between two variants there is no revision letter: a plain copper mark instead of an empty triangle.
   const mark = markLetter
@@ -39,7 +45,7 @@ export function ComparisonDetails({ data, markLetter, units, titles = { modules:
       <section className="panel p-4 text-sm" data-testid="module-changes">
         <h2 className="mb-2 font-semibold">{titles.modules}</h2>
         {nothing ? (
-          <p className="text-ink-soft">No module changed ({diff.unchanged} the same).</p>
+          <p className="text-ink-soft">No module changed ({diff.unchanged} the same){openingsChanged ? '.' : ', and no opening.'}</p>
         ) : (
           <ul className="space-y-1.5">
             {diff.added.map((m) => (
@@ -59,6 +65,27 @@ export function ComparisonDetails({ data, markLetter, units, titles = { modules:
               );
             })}
           </ul>
+        )}
+        {openingsChanged && (
+          <div data-testid="opening-changes">
+            <h3 className="mb-1 mt-3 font-medium">Openings</h3>
+            <ul className="space-y-1.5">
+              {openings.added.map((o) => <li key={`oa-${o.id}`} className="flex gap-2">{mark}<span><strong>Added</strong> {openingWords(afterBay, o, units)}</span></li>)}
+              {openings.removed.map((o) => <li key={`or-${o.id}`} className="flex gap-2">{mark}<span><strong>Removed</strong> {openingWords(beforeBay, o, units)}</span></li>)}
+              {openings.changed.map((c) => {
+                const w = openingChangeWords(afterBay, c, units);
+                return (
+                  <li key={`oc-${c.id}`} className="flex gap-2">
+                    {mark}
+                    <span>
+                      <strong>{w.verb}</strong> {w.name}
+                      {w.lines.map((l) => <span key={l} className="block text-xs text-ink-soft">{l}</span>)}
+                    </span>
+                  </li>
+                );
+              })}
+            </ul>
+          </div>
         )}
         {diff.bay.length > 0 && (
           <>

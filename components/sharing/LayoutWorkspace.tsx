@@ -16,6 +16,8 @@ import { Dialog } from '@/components/editor/panels/Dialog';
 import type { EditorProps } from '@/components/editor/types';
 import type { Viewport } from '@/components/editor/geometry/viewport';
 import type { Arrangement } from '@/lib/layout/schema';
+import { openingTitle } from '@/lib/layout/openings';
+import { openingPlanPoint } from '@/lib/layout/nearest';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { MarkupsPanel, type PendingMarkup } from './MarkupsPanel';
@@ -69,6 +71,16 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
     import('./MarkupLayer').then((m) => { if (live) setMarkups(() => m.MarkupLayer); });
     return () => { live = false; };
   }, []);
+
+  // The openings a mark-up can be placed at, from the document as the page opened (the server checks the id against the saved one).
+  const bay = editorProps.initialDoc.bay;
+  const openingChoices = useMemo(
+    () => (bay.openings ?? []).flatMap((o) => {
+      const at = openingPlanPoint(bay, o);
+      return at ? [{ id: o.id, name: openingTitle(bay, o), ...at }] : [];
+    }),
+    [bay],
+  );
 
   const markups: MarkupView[] = useMemo(
     () => threads.map((t, i) => ({ id: t.id, number: i + 1, arrangement: t.arrangement, x: t.x, y: t.y, settled: !!t.settled })),
@@ -129,6 +141,12 @@ export function LayoutWorkspace(props: LayoutWorkspaceProps) {
             if (floating) setDrawer(null);
           }}
           onCancelPlacing={() => setPlacing(false)}
+          openings={openingChoices}
+          onPlaceAtOpening={(o) => {
+            setPending({ arrangement: view.current?.arrangement ?? 'travel', x: o.x, y: o.y, openingId: o.id, openingName: o.name });
+            setPlacing(false);
+            setOpen(true);
+          }}
           pending={pending}
           onPendingChange={setPending}
           onClose={() => setOpen(false)}

@@ -2,8 +2,9 @@
 /**
  * The Mark-ups list beside the plan: every mark-up thread of the layout, numbered as its keyed
  * note on the plan, with replies, settling (and opening again), changing or removing one's own
- * notes, and the form for a new mark-up (its point placed by clicking the plan, or typed as x and
- * y in millimetres for keyboard use). Talks to /api/layouts/[id]/comments through TanStack Query.
+ * notes, and the form for a new mark-up (its point placed by clicking the plan, typed as x and
+ * y in millimetres, or chosen as one of the bay's openings — both for keyboard use). Each thread
+ * names the module or opening its point is near. Talks to /api/layouts/[id]/comments through TanStack Query.
  * Must never draw on the canvas (MarkupLayer does) nor hold the document.
  */
 import { useState } from 'react';
@@ -22,6 +23,17 @@ export interface PendingMarkup {
   arrangement: Arrangement;
   x: number;
   y: number;
+  /** Placed at this opening (the server puts the point at its middle). */
+  openingId?: string;
+  openingName?: string;
+}
+
+/** An opening a mark-up can be placed at: its name and the middle of it in plan. */
+export interface OpeningChoice {
+  id: string;
+  name: string;
+  x: number;
+  y: number;
 }
 
 interface Props {
@@ -34,6 +46,8 @@ interface Props {
   placing: boolean;
   onStartPlacing: () => void;
   onCancelPlacing: () => void;
+  openings: OpeningChoice[];
+  onPlaceAtOpening: (o: OpeningChoice) => void;
   pending: PendingMarkup | null;
   onPendingChange: (p: PendingMarkup | null) => void;
   onClose: () => void;
@@ -77,12 +91,17 @@ export function MarkupsPanel(p: Props) {
             onSubmit={(e) => {
               e.preventDefault();
               if (!p.pending) return;
-              create.mutate({ arrangement: p.pending.arrangement, x: p.pending.x, y: p.pending.y, body: draft });
+              create.mutate(p.pending.openingId
+                ? { arrangement: p.pending.arrangement, openingId: p.pending.openingId, body: draft }
+                : { arrangement: p.pending.arrangement, x: p.pending.x, y: p.pending.y, body: draft });
             }}
           >
             <p className="text-xs text-ink-soft">
               New mark-up in the <strong>{ARRANGEMENT_WORD[p.pending.arrangement]}</strong> arrangement
             </p>
+            {p.pending.openingId ? (
+              <p className="text-xs" data-testid="markup-at-opening">At <strong>{p.pending.openingName}</strong></p>
+            ) : (
             <div className="grid grid-cols-2 gap-2">
               {(['x', 'y'] as const).map((axis) => (
                 <label key={axis} className="text-xs text-ink-soft">
@@ -97,6 +116,7 @@ export function MarkupsPanel(p: Props) {
                 </label>
               ))}
             </div>
+            )}
             <label className="label" htmlFor="new-markup">Note</label>
             <textarea id="new-markup" className="field min-h-20" value={draft} onChange={(e) => setDraft(e.target.value)} maxLength={2000} required autoFocus />
             <div className="flex gap-2">
@@ -107,6 +127,15 @@ export function MarkupsPanel(p: Props) {
         ) : p.placing ? (
           <div className="space-y-2 text-sm" role="status">
             <p>Click the point of the plan the note is about.</p>
+            {p.openings.length > 0 && (
+              <label className="block text-xs text-ink-soft">
+                Or place it at an opening
+                <select className="field mt-1" value="" onChange={(e) => { const o = p.openings.find((c) => c.id === e.target.value); if (o) p.onPlaceAtOpening(o); }}>
+                  <option value="">Choose an opening…</option>
+                  {p.openings.map((o) => <option key={o.id} value={o.id}>{o.name}</option>)}
+                </select>
+              </label>
+            )}
             <button type="button" className="btn-quiet" onClick={p.onCancelPlacing}>Cancel</button>
           </div>
         ) : (
@@ -161,6 +190,7 @@ function ThreadItem({ layoutId, thread, number, active, onActivate, onChanged }:
           <span className="block whitespace-pre-wrap break-words">{thread.body}</span>
           <span className="mt-1 block text-xs text-ink-soft">
             {thread.author.name} ({ROLE_WORD[thread.author.role]}) · {formatDateTime(thread.createdAt)}{thread.editedAt ? ' · edited' : ''} · {ARRANGEMENT_WORD[thread.arrangement]},{' '}
+            {thread.near ? <span data-testid="markup-near">near {thread.near}, </span> : null}
             <span className="font-mono">x {thread.x} mm, y {thread.y} mm</span>
           </span>
           {thread.settled ? (

@@ -80,7 +80,8 @@ function Comparison({ data, arrangement, markLetter, units, revisions, to }: { d
       <p className="flex flex-wrap items-center gap-x-4 gap-y-1 text-xs text-ink-soft">
         <span className="inline-flex items-center gap-1 text-copper"><RevisionMarkIcon letter={markLetter} /></span>
         <span>Revision clouds mark what changed in {to === 'current' ? 'the layout as last saved' : `revision ${markLetter}`}; the triangle carries its letter.</span>
-        <span>Dashed outlines with two short dashes (phantom lines) show where a module stood before.</span>
+        <span>Dashed outlines with two short dashes (phantom lines) show where a module or opening stood before.</span>
+        <span>Windows are drawn on the wall line, roof openings dashed overhead.</span>
       </p>
       <ComparisonDetails data={data} markLetter={markLetter} units={units} />
       <RevisionTable revisions={revisions} upTo={to === 'current' ? null : to} current={to === 'current' ? null : to} />

@@ -4,15 +4,19 @@
  * arrangement. On the later side, what changed is marked the drafting way: a revision cloud
  * round each added, moved, resized or edited module (round where a removed one stood), a delta
  * triangle carrying the revision letter beside each cloud, and the earlier place of a moved or
- * resized module (and a removed one) in phantom lines. Between two variants (no `letter`) the clouds
- * mark what differs, without triangles. The earlier side is drawn as it was
+ * resized module (and a removed one) in phantom lines. The bay's openings are drawn too — windows
+ * as a pane on the wall line, roof openings dashed overhead, body points as a small ring — and are
+ * marked like modules when added, removed, moved or resized. Between two variants (no `letter`) the
+ * clouds mark what differs, without triangles. The earlier side is drawn as it was
  * issued, unmarked. Presentation only: no fetching, no editing.
  */
-import type { Arrangement, LayoutDoc, Module } from '@/lib/layout/schema';
+import type { Arrangement, Bay, LayoutDoc, Opening } from '@/lib/layout/schema';
 import { moduleName } from '@/lib/layout/revision-words';
+import { openingTitle } from '@/lib/layout/openings';
+import { BODY_POINT_HALF as POINT_HALF, openingPlanRect, PANE_DEPTH_MIN } from '@/lib/layout/nearest';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
 import { boundingRect, deltaTriangle, revisionCloud, type Rect } from '@/lib/geometry';
-import { archBoxes, inArrangement, linedInterior, modulesIn, moduleRect as rectOf } from '@/lib/layout/bay';
+import { archBoxes, buildUpThickness, inArrangement, linedInterior, modulesIn, moduleRect as rectOf } from '@/lib/layout/bay';
 import { palette } from '@/lib/look';
 
 export type PlanSide = 'from' | 'to';
@@ -28,22 +32,41 @@ export interface RevisionMark {
   name: string;
   what: 'added' | 'removed' | 'changed';
   area: Rect;
-  /** Where a moved, resized or removed module stood, drawn in phantom lines. */
-  was: Module | null;
+  /** Where a moved, resized or removed module (or opening) stood, drawn in phantom lines. */
+  was: Rect | null;
 }
 
-/** The clouds one arrangement needs on the later side. */
-export function revisionMarks(diff: RevisionDiff, arrangement: Arrangement): RevisionMark[] {
+/** The clouds one arrangement needs on the later side; openings are in every arrangement. */
+export function revisionMarks(diff: RevisionDiff, arrangement: Arrangement, bay?: Pick<Bay, 'length' | 'width' | 'doors'>, paneDepth = PANE_DEPTH_MIN): RevisionMark[] {
   const marks: RevisionMark[] = [];
   for (const m of diff.added) if (inArrangement(m, arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'added', area: rectOf(m), was: null });
-  for (const m of diff.removed) if (inArrangement(m, arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'removed', area: rectOf(m), was: m });
+  for (const m of diff.removed) if (inArrangement(m, arrangement)) marks.push({ id: m.id, name: moduleName(m), what: 'removed', area: rectOf(m), was: rectOf(m) });
   for (const c of diff.changed) {
     const here = inArrangement(c.after, arrangement);
     const there = inArrangement(c.before, arrangement);
     if (!here && !there) continue;
     const placed = c.moved || c.resized;
     const area = here && there && placed ? boundingRect([rectOf(c.before), rectOf(c.after)])! : rectOf(here ? c.after : c.before);
-    marks.push({ id: c.id, name: moduleName(c.after), what: 'changed', area, was: placed && there ? c.before : !here ? c.before : null });
+    marks.push({ id: c.id, name: moduleName(c.after), what: 'changed', area, was: placed && there ? rectOf(c.before) : !here ? rectOf(c.before) : null });
+  }
+  if (!bay || !diff.openings) return marks;
+  const at = (o: Opening) => openingPlanRect(bay, o, paneDepth);
+  const key = (id: string) => `opening:${id}`;
+  for (const o of diff.openings.added) {
+    const r = at(o);
+    if (r) marks.push({ id: key(o.id), name: openingTitle(bay, o), what: 'added', area: r, was: null });
+  }
+  for (const o of diff.openings.removed) {
+    const r = at(o);
+    if (r) marks.push({ id: key(o.id), name: openingTitle(bay, o), what: 'removed', area: r, was: r });
+  }
+  for (const c of diff.openings.changed) {
+    const now = at(c.after);
+    const then = at(c.before);
+    if (!now && !then) continue;
+    const placed = Boolean(c.moved || c.resized);
+    const area = now && then && placed ? boundingRect([now, then])! : (now ?? then)!;
+    marks.push({ id: key(c.id), name: openingTitle(bay, c.after), what: 'changed', area, was: placed && then ? then : null });
   }
   return marks;
 }
@@ -54,7 +77,9 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
   const font = Math.max(40, width / 28);
   const lined = linedInterior(doc);
   const modules = modulesIn(doc, arrangement);
-  const marks = side === 'to' ? revisionMarks(diff, arrangement) : [];
+  const paneDepth = Math.max(PANE_DEPTH_MIN, buildUpThickness(doc).wallT);
+  const marks = side === 'to' ? revisionMarks(diff, arrangement, doc.bay, paneDepth) : [];
+  const openings = doc.bay.openings ?? [];
   const tri = font * 2;
 
   return (
@@ -64,7 +89,7 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
         viewBox={`${-pad} ${-pad} ${length + 2 * pad} ${width + 2 * pad}`}
         className="block h-auto w-full bg-paper"
         role="img"
-        aria-label={`${title}: plan of the ${arrangement} arrangement, ${modules.length} modules, bay ${length} by ${width} mm${marks.length ? `, ${marks.length} revision clouds` : ''}`}
+        aria-label={`${title}: plan of the ${arrangement} arrangement, ${modules.length} modules, ${openings.length} openings, bay ${length} by ${width} mm${marks.length ? `, ${marks.length} revision clouds` : ''}`}
       >
         {/* bare metal */}
         <rect x={0} y={0} width={length} height={width} fill="none" stroke={INK} strokeWidth={font / 4} />
@@ -77,7 +102,7 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
         <path d={`M ${-pad * 0.2} ${width / 2 - font} L ${-pad * 0.7} ${width / 2} L ${-pad * 0.2} ${width / 2 + font} Z`} fill={INK} />
         {/* where changed modules were, in phantom lines (long dash, two short) */}
         {marks.filter((k) => k.was).map((k) => (
-          <rect key={`was-${k.id}`} data-phantom={k.id} x={k.was!.x} y={k.was!.y} width={k.was!.length} height={k.was!.width} fill="none" stroke={INK} strokeWidth={font / 14}
+          <rect key={`was-${k.id}`} data-phantom={k.id} x={k.was!.x0} y={k.was!.y0} width={k.was!.x1 - k.was!.x0} height={k.was!.y1 - k.was!.y0} fill="none" stroke={INK} strokeWidth={font / 14}
             strokeDasharray={`${font * 0.9} ${font / 5} ${font / 5} ${font / 5} ${font / 5} ${font / 5}`} opacity={0.6} />
         ))}
         {modules.map((m) => (
@@ -88,6 +113,19 @@ export function RevisionPlanSvg({ doc, diff, side, arrangement, title, letter }:
             </text>
           </g>
         ))}
+        {openings.map((o) => {
+          const r = openingPlanRect(doc.bay, o, paneDepth);
+          if (!r) return null;
+          if (o.type === 'body-point') {
+            return <circle key={o.id} data-opening-id={o.id} cx={(r.x0 + r.x1) / 2} cy={(r.y0 + r.y1) / 2} r={POINT_HALF * 0.6} fill={palette.white} stroke={INK} strokeWidth={font / 14} />;
+          }
+          return (
+            // A window: a pane on the wall line (two thin lines, the glass); a roof opening: dashed, it is overhead.
+            <rect key={o.id} data-opening-id={o.id} x={r.x0} y={r.y0} width={r.x1 - r.x0} height={r.y1 - r.y0}
+              fill={o.type === 'window' ? palette.white : 'none'} stroke={INK} strokeWidth={o.type === 'window' ? font / 8 : font / 12}
+              strokeDasharray={o.type === 'roof-opening' ? `${font / 2} ${font / 4}` : undefined} />
+          );
+        })}
         {marks.map((k) => {
           const cloud = revisionCloud(k.area, { margin: font * 0.6, arc: font * 2.4, bulge: 0.28 });
           const right = Math.max(...cloud.map((p) => p[0]));

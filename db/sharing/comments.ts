@@ -4,7 +4,10 @@
  * it settled (or open again); `resolved_at` / `resolved_by` record the settling. Authors may change
  * or remove their own comments (an edit is marked as such); the studio's owner may remove any. The workshop's
  * owners and designers and the layout's client take part; nobody else even learns the layout
- * exists. Authors' names are kept with the note; their addresses are never returned.
+ * exists. Authors' names are kept with the note; their addresses are never returned. A mark-up may be
+ * placed at one of the bay's openings (by its id, which must be on the layout): its point goes to
+ * the opening's middle in plan. Each thread is listed with what its point is near — the nearest
+ * module of its arrangement or opening (lib/layout/nearest) — in the layout as it is now.
  * Must never let a viewer link (no account) read or write mark-ups.
  */
 import 'server-only';
@@ -13,7 +16,8 @@ import { getDb } from '../client';
 import { comments } from '../schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../errors';
 import type { Actor, StudioRole } from '../actor';
-import { ARRANGEMENTS, type Arrangement } from '../../lib/layout/schema';
+import { ARRANGEMENTS, type Arrangement, type LayoutDoc } from '../../lib/layout/schema';
+import { nearestThing, openingPlanPoint } from '../../lib/layout/nearest';
 import { loadLayoutFor, type LayoutAccessWithDoc } from '../access';
 import { isId } from '../ids';
 
@@ -39,6 +43,8 @@ export interface ThreadDto extends CommentDto {
   y: number;
   /** When the thread was marked settled; null while it is open. */
   settled: { at: string } | null;
+  /** The module or opening its point is nearest (by name), or null when nothing is near. */
+  near: string | null;
   replies: CommentDto[];
 }
 
@@ -60,27 +66,34 @@ function commentDto(r: Row, actor: Actor): CommentDto {
   };
 }
 
-function threads(rows: Row[], actor: Actor): ThreadDto[] {
+function threads(rows: Row[], actor: Actor, doc: LayoutDoc): ThreadDto[] {
   const roots = rows.filter((r) => !r.parentId);
-  return roots.map((root) => ({
-    ...commentDto(root, actor),
-    arrangement: (ARRANGEMENTS as readonly string[]).includes(root.arrangement ?? '') ? (root.arrangement as Arrangement) : 'travel',
-    x: root.x ?? 0,
-    y: root.y ?? 0,
-    settled: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
-    replies: rows.filter((r) => r.parentId === root.id).map((r) => commentDto(r, actor)),
-  }));
+  return roots.map((root) => {
+    const arrangement = (ARRANGEMENTS as readonly string[]).includes(root.arrangement ?? '') ? (root.arrangement as Arrangement) : 'travel';
+    const x = root.x ?? 0;
+    const y = root.y ?? 0;
+    return {
+      ...commentDto(root, actor),
+      arrangement,
+      x,
+      y,
+      settled: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
+      near: nearestThing(doc, arrangement, x, y)?.name ?? null,
+      replies: rows.filter((r) => r.parentId === root.id).map((r) => commentDto(r, actor)),
+    };
+  });
 }
 
 export async function listThreads(actor: Actor, layoutId: string): Promise<ThreadDto[]> {
-  await loadLayoutFor(actor, layoutId);
+  const { doc } = await loadLayoutFor(actor, layoutId, { withDoc: true });
   const db = await getDb();
   const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
-  return threads(rows, actor);
+  return threads(rows, actor, doc);
 }
 
 export type NewComment =
   | { kind: 'pin'; arrangement: Arrangement; x: number; y: number; body: string }
+  | { kind: 'opening'; arrangement: Arrangement; openingId: string; body: string }
   | { kind: 'reply'; parentId: string; body: string };
 
 function checkBody(body: string): string {
@@ -106,11 +119,17 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
   let threadAuthorId: string | null = actor.userId;
   let commentId: string;
   const author = { authorId: actor.userId, authorName: actor.name, authorRole: actor.role };
-  if (input.kind === 'pin') {
-    checkPin(layout, input.x, input.y);
+  if (input.kind === 'pin' || input.kind === 'opening') {
+    let at = input.kind === 'pin' ? { x: input.x, y: input.y } : null;
+    if (input.kind === 'opening') {
+      const opening = (layout.doc.bay.openings ?? []).find((o) => o.id === input.openingId);
+      at = opening ? openingPlanPoint(layout.doc.bay, opening) : null;
+      if (!at) throw new BadRequestError('That opening is not on this layout: choose one of its windows, roof openings or body points.');
+    }
+    checkPin(layout, at!.x, at!.y);
     const [row] = await db
       .insert(comments)
-      .values({ layoutId, arrangement: input.arrangement, x: Math.round(input.x), y: Math.round(input.y), body, ...author })
+      .values({ layoutId, arrangement: input.arrangement, x: Math.round(at!.x), y: Math.round(at!.y), body, ...author })
       .returning({ id: comments.id });
     rootId = row.id;
     commentId = row.id;
@@ -126,13 +145,13 @@ export async function addComment(actor: Actor, layoutId: string, input: NewComme
     commentId = row.id;
   }
   const rows = await db.select().from(comments).where(and(eq(comments.layoutId, layoutId))).orderBy(asc(comments.createdAt));
-  const thread = threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor)[0];
+  const thread = threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor, layout.doc)[0];
   return { thread, layout, commentId, threadAuthorId };
 }
 
 /** Marks a thread settled (or open again); the workshop and the layout's client may both. */
 export async function setSettled(actor: Actor, layoutId: string, commentId: string, settled: boolean): Promise<ThreadDto> {
-  await loadLayoutFor(actor, layoutId);
+  const { doc } = await loadLayoutFor(actor, layoutId, { withDoc: true });
   const row = await commentOf(layoutId, commentId);
   if (row.parentId) throw new BadRequestError('Settle the thread from its first note.');
   const db = await getDb();
@@ -140,7 +159,7 @@ export async function setSettled(actor: Actor, layoutId: string, commentId: stri
     .update(comments)
     .set(settled ? { resolvedAt: new Date(), resolvedBy: actor.userId } : { resolvedAt: null, resolvedBy: null })
     .where(eq(comments.id, commentId));
-  return threadOf(actor, layoutId, commentId);
+  return threadOf(actor, layoutId, commentId, doc);
 }
 
 async function commentOf(layoutId: string, commentId: string): Promise<Row> {
@@ -151,21 +170,21 @@ async function commentOf(layoutId: string, commentId: string): Promise<Row> {
   return row;
 }
 
-async function threadOf(actor: Actor, layoutId: string, rootId: string): Promise<ThreadDto> {
+async function threadOf(actor: Actor, layoutId: string, rootId: string, doc: LayoutDoc): Promise<ThreadDto> {
   const db = await getDb();
   const rows = await db.select().from(comments).where(eq(comments.layoutId, layoutId)).orderBy(asc(comments.createdAt));
-  return threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor)[0];
+  return threads(rows.filter((r) => r.id === rootId || r.parentId === rootId), actor, doc)[0];
 }
 
 /** The author changes their own words; the note keeps its place, point and replies. */
 export async function editComment(actor: Actor, layoutId: string, commentId: string, body: string): Promise<ThreadDto> {
-  await loadLayoutFor(actor, layoutId);
+  const { doc } = await loadLayoutFor(actor, layoutId, { withDoc: true });
   const row = await commentOf(layoutId, commentId);
   if (row.authorId !== actor.userId) throw new ForbiddenError('Only its author can change a mark-up.');
   const text = checkBody(body);
   const db = await getDb();
   if (text !== row.body) await db.update(comments).set({ body: text, editedAt: new Date() }).where(eq(comments.id, row.id));
-  return threadOf(actor, layoutId, row.parentId ?? row.id);
+  return threadOf(actor, layoutId, row.parentId ?? row.id, doc);
 }
 
 /**

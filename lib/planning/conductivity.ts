@@ -63,6 +63,13 @@ export function conductivityOf(material: string, overrides: Record<string, numbe
   return null;
 }
 
+/** The family a layer's material belongs to (`plywood`, `mdf`, `pir`…), by the same matching and no overrides; null when not recognised. */
+export function materialFamily(material: string): string | null {
+  const name = material.trim().toLowerCase();
+  for (const [c, patterns] of MATCHERS) if (patterns.some((re) => re.test(name))) return c.id;
+  return null;
+}
+
 /** Whole-word patterns, built once. */
 const MATCHERS: [MaterialConductivity, RegExp[]][] = CONDUCTIVITIES.map((c) => [c, c.match.map((w) => new RegExp(`(^|[^a-z])${escapeRe(w)}([^a-z]|$)`))]);
 

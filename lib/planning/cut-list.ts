@@ -11,12 +11,16 @@
  * a sheet are split into equal pieces (joined over a batten). Sheets are the common 2440 × 1220 mm
  * board (common practice).
  *
+ * The wall and roof lining panels follow (lining-panels.ts), each with the cut-outs the windows and
+ * roof openings make in it; a panel's area (`partAreaM2`) and its material's net area leave them out.
+ *
  * `cutListFromDoc(doc, options)` → parts; `planCutList(doc, options)` → parts nested per material.
  * Pure; never throws on a valid LayoutDoc. Must never import UI, framework or database code.
  */
 import { kindSpec } from '../layout/kinds';
 import type { LayoutDoc, Module } from '../layout';
 import { moduleFacts, moduleName } from './module-facts';
+import { liningPanels, liningSurfaceName, netAreaM2, type CutOut } from './lining-panels';
 import { nestCutList, STANDARD_SHEET, type NestOptions, type NestResult, type SheetSize } from './sheet-nesting';
 
 export interface SheetMaterial {
@@ -35,22 +39,42 @@ export const SHEET_MATERIALS: Record<string, SheetMaterial> = {
 export interface CutPart {
   id: string;
   label: string;
-  moduleId: string;
-  material: keyof typeof SHEET_MATERIALS;
+  /** The module it is cut for; null for a lining panel. */
+  moduleId: string | null;
+  /** A key of SHEET_MATERIALS, or of the cut list's `liningMaterials`. */
+  material: string;
   /** Along the grain, mm. */
   length: number;
   width: number;
   grain: boolean;
+  /** What the openings take out of a lining panel; empty for a carcass piece. */
+  cutOuts: CutOut[];
+}
+
+/** A part's area less its cut-outs, m². */
+export function partAreaM2(p: Pick<CutPart, 'length' | 'width' | 'cutOuts'>): number {
+  return netAreaM2(p.length, p.width, p.cutOuts);
 }
 
 export interface CutListOptions extends NestOptions {
   sheet?: SheetSize;
+  /** List the wall and roof lining panels too; default true (the parts list leaves them out: no price key yet). */
+  lining?: boolean;
 }
 
 export interface CutList {
   parts: CutPart[];
   /** Modules with no sheet parts, and why. */
   skipped: { moduleId: string; reason: string }[];
+  /** The sheet materials the linings are cut from (by the build-up layer's name and thickness). */
+  liningMaterials: SheetMaterial[];
+}
+
+/** The sheet material a lining layer is cut from: one per layer name and thickness. */
+function liningMaterial(layer: { material: string; thickness: number }): SheetMaterial {
+  const slug = layer.material.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'sheet';
+  const name = layer.material.trim();
+  return { id: `lining-${slug}-${layer.thickness}`, title: `${name} ${layer.thickness} mm${/lining/i.test(name) ? '' : ' (lining)'}`, thicknessMm: layer.thickness };
 }
 
 /** Front width along the working face, depth into the module. */
@@ -81,7 +105,7 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
         for (const [j, part] of splitToSheet(length, width, grain, sheet, trim).entries()) {
           const n = splitCount(length, width, grain, sheet, trim);
           const label = `${moduleName(m)} — ${piece}${qty > 1 ? ` ${i}` : ''}${n > 1 ? ` (piece ${j + 1} of ${n})` : ''}`;
-          parts.push({ id: `${m.id}:${piece}${qty > 1 ? `-${i}` : ''}${n > 1 ? `-p${j + 1}` : ''}`, label, moduleId: m.id, material, length: part.length, width: part.width, grain });
+          parts.push({ id: `${m.id}:${piece}${qty > 1 ? `-${i}` : ''}${n > 1 ? `-p${j + 1}` : ''}`, label, moduleId: m.id, material, length: part.length, width: part.width, grain, cutOuts: [] });
         }
       }
     };
@@ -97,7 +121,21 @@ export function cutListFromDoc(doc: LayoutDoc, options: CutListOptions = {}): Cu
       }
     }
   }
-  return { parts, skipped };
+  const { L, W } = usable(sheet, trim);
+  const liningMaterials = new Map<string, SheetMaterial>();
+  const panels = options.lining === false ? [] : liningPanels(doc, L, W);
+  const count = new Map<string, number>();
+  for (const p of panels) count.set(p.surface, (count.get(p.surface) ?? 0) + 1);
+  const seen = new Map<string, number>();
+  for (const p of panels) {
+    const material = liningMaterial(p.layer);
+    liningMaterials.set(material.id, material);
+    const i = (seen.get(p.surface) ?? 0) + 1;
+    seen.set(p.surface, i);
+    // Boards keep their grain up the wall (across the van on the roof): `length` is the rise.
+    parts.push({ id: `lining:${p.surface}-${i}`, label: `${liningSurfaceName(p.surface)} — panel ${i} of ${count.get(p.surface)}`, moduleId: null, material: material.id, length: p.rise, width: p.span, grain: true, cutOuts: p.cutOuts });
+  }
+  return { parts, skipped, liningMaterials: [...liningMaterials.values()] };
 }
 
 function usable(sheet: SheetSize, trim: number) {
@@ -127,15 +165,16 @@ export function splitToSheet(length: number, width: number, grain: boolean, shee
 export interface CutPlan {
   parts: CutPart[];
   skipped: CutList['skipped'];
-  byMaterial: { material: SheetMaterial; nest: NestResult }[];
+  /** Per material: the nesting, and the parts' area less their cut-outs (m²). */
+  byMaterial: { material: SheetMaterial; nest: NestResult; netAreaM2: number }[];
   sheetsNeeded: number;
 }
 
 export function planCutList(doc: LayoutDoc, options: CutListOptions = {}): CutPlan {
-  const { parts, skipped } = cutListFromDoc(doc, options);
-  const byMaterial = Object.values(SHEET_MATERIALS)
+  const { parts, skipped, liningMaterials } = cutListFromDoc(doc, options);
+  const byMaterial = [...Object.values(SHEET_MATERIALS), ...liningMaterials]
     .map((material) => ({ material, parts: parts.filter((p) => p.material === material.id) }))
     .filter((g) => g.parts.length > 0)
-    .map((g) => ({ material: g.material, nest: nestCutList(g.parts, options.sheet ?? STANDARD_SHEET, options) }));
+    .map((g) => ({ material: g.material, nest: nestCutList(g.parts, options.sheet ?? STANDARD_SHEET, options), netAreaM2: g.parts.reduce((a, p) => a + partAreaM2(p), 0) }));
   return { parts, skipped, byMaterial, sheetsNeeded: byMaterial.reduce((a, g) => a + g.nest.sheetsNeeded, 0) };
 }

@@ -23,3 +23,4 @@ export * from './parts-list';
 export * from './parts-csv';
 export * from './inputs';
 export * from './mass-balance';
+export * from './lining-panels';

@@ -99,7 +99,8 @@ export function computePartsList(doc: LayoutDoc, priceList: PriceList, cutOption
   for (const m of doc.modules) byKind.set(m.kind, (byKind.get(m.kind) ?? 0) + 1);
   for (const [kind, n] of byKind) push(`module:${kind}`, 'module', kindSpec(kind).title, n, 'each');
 
-  const cut = planCutList(doc, cutOptions);
+  const cut = planCutList(doc, { ...cutOptions, lining: false });
+  // Lining boards have no price key yet: left out of the parts list (and so not nested here).
   for (const g of cut.byMaterial) push(`sheet:${g.material.id}`, 'sheet', `${g.material.title}, 2440 × 1220 mm sheet`, g.nest.sheetsNeeded, 'sheet');
 
   const power = doc.systems?.power;

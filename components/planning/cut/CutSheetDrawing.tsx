@@ -3,9 +3,10 @@
  * One nested sheet drawn to scale in SVG: the board outline with its overall dimensions (tick
  * marks, mono face), the grain direction, the edge trim, and every part placed on it — a fine
  * diagonal timber hatch, its number, its piece name and its size where they fit (the legend
- * beside the drawing names every part in full). Draws the placements it is given; never moves one.
+ * beside the drawing names every part in full), and a lining panel's cut-outs dashed (its rise runs
+ * along the part's length from its start, its span across). Draws the placements it is given; never moves one.
  */
-import type { NestedSheet, SheetSize } from '@/lib/planning';
+import type { CutOut, NestedSheet, SheetSize } from '@/lib/planning';
 import { palette } from '@/lib/look';
 
 const INK = palette.ink;
@@ -16,7 +17,9 @@ function pieceName(label: string): string {
   return i >= 0 ? label.slice(i + 3) : label;
 }
 
-export function CutSheetDrawing({ sheet, nested, trimMm, numbers, title }: { sheet: SheetSize; nested: NestedSheet; trimMm: number; numbers: Map<string, number>; title: string }) {
+const NO_CUT_OUTS: CutOut[] = [];
+
+export function CutSheetDrawing({ sheet, nested, trimMm, numbers, title, cutOutsOf = () => NO_CUT_OUTS }: { sheet: SheetSize; nested: NestedSheet; trimMm: number; numbers: Map<string, number>; title: string; cutOutsOf?: (partId: string) => CutOut[] }) {
   const margin = 160;
   const vb = `${-margin} ${-margin} ${sheet.length + margin * 1.4} ${sheet.width + margin * 2.1}`;
   const tick = (x: number, y: number) => <line x1={x - 18} y1={y + 18} x2={x + 18} y2={y - 18} stroke={INK} strokeWidth={5} />;
@@ -46,6 +49,13 @@ export function CutSheetDrawing({ sheet, nested, trimMm, numbers, title }: { she
         return (
           <g key={p.partId} data-part={p.partId}>
             <rect x={p.x} y={p.y} width={p.length} height={p.width} fill={`url(#${hatchId})`} stroke={INK} strokeWidth={4} />
+            {cutOutsOf(p.partId).map((c) => (
+              // Unturned, the part's length is its rise (up the wall, across the roof) and its width its span.
+              <rect key={c.openingId} data-cut-out={c.openingId}
+                x={p.x + (p.rotated ? c.fromStart : c.fromSecond)} y={p.y + (p.rotated ? c.fromSecond : c.fromStart)}
+                width={p.rotated ? c.width : c.height} height={p.rotated ? c.height : c.width}
+                fill={palette.paperLight} stroke={INK} strokeWidth={3} strokeDasharray="18 12" />
+            ))}
             <rect x={p.x + p.length / 2 - size * 1.2} y={p.y + p.width / 2 - size * (showText ? 2.1 : 0.8)} width={size * 2.4} height={size * 1.3} fill={palette.paperLight} opacity={0.9} />
             <text x={p.x + p.length / 2} y={p.y + p.width / 2 - size * (showText ? 1.1 : -0.1)} fontSize={Math.max(size, 18)} textAnchor="middle" fill={INK} fontWeight={600}>{n}</text>
             {showText && (

@@ -1,0 +1,76 @@
+/**
+ * What a point of the plan is about: the bay's openings and modules in plan, and the nearest of
+ * them to a point — how a mark-up (a free point on the plan) is named in its list ("near the galley
+ * window"), and where a mark-up placed at an opening goes. An opening in plan is a window's pane on
+ * its wall line (`paneDepth` into the room), a roof opening's outline, a small square round a body
+ * point. Pure: plain numbers in, names out; must never import UI, framework or database code.
+ */
+import type { Rect } from '../geometry/rect';
+import { inArrangement, moduleRect } from './bay';
+import { moduleLabel } from './kinds';
+import { bodyPointAt, openingTitle, roofOpeningRect, wallRectInPlan, windowOnWall } from './openings';
+import type { Arrangement, Bay, Module, Opening } from './schema';
+
+/** Half the side of the square a body point stands for in plan (mm). */
+export const BODY_POINT_HALF = 60;
+/** How far into the room a window's pane is drawn from the bare wall line when the walls are thinner (mm). */
+export const PANE_DEPTH_MIN = 40;
+/** A mark-up further than this from every module and opening is named by its point only (common practice, no source). */
+export const NEAR_LIMIT_MM = 600;
+
+/** Where an opening lies in plan, or null for a window in a door that is gone. */
+export function openingPlanRect(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening, paneDepth = PANE_DEPTH_MIN): Rect | null {
+  if (o.type === 'window') {
+    const r = windowOnWall(bay, 0, o);
+    return r ? wallRectInPlan(bay, r, paneDepth) : null;
+  }
+  if (o.type === 'roof-opening') return roofOpeningRect(o);
+  const p = bodyPointAt(bay, o);
+  return { x0: p.x - BODY_POINT_HALF, y0: p.y - BODY_POINT_HALF, x1: p.x + BODY_POINT_HALF, y1: p.y + BODY_POINT_HALF };
+}
+
+/** The middle of an opening in plan: where a mark-up placed at it goes (whole millimetres). */
+export function openingPlanPoint(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening): { x: number; y: number } | null {
+  const r = openingPlanRect(bay, o);
+  return r ? { x: Math.round((r.x0 + r.x1) / 2), y: Math.round((r.y0 + r.y1) / 2) } : null;
+}
+
+function distanceToRect(x: number, y: number, r: Rect): number {
+  return Math.hypot(Math.max(r.x0 - x, 0, x - r.x1), Math.max(r.y0 - y, 0, y - r.y1));
+}
+
+export interface NearestThing {
+  kind: 'module' | 'opening';
+  id: string;
+  /** Its name in words: a module's label or kind, an opening's label or kind (never an id). */
+  name: string;
+  /** Plan distance from the point to its outline, mm (0 inside). */
+  distance: number;
+}
+
+/**
+ * The module (of the arrangement) or opening nearest a point of the plan, within `limit` mm; null
+ * when nothing is that close. At the same distance an opening wins (a roof vent over a bed is what
+ * a point on the vent is about). Linear in modules and openings.
+ */
+export function nearestThing(
+  doc: { bay: Pick<Bay, 'length' | 'width' | 'doors' | 'openings'>; modules: Pick<Module, 'id' | 'kind' | 'label' | 'x' | 'y' | 'length' | 'width' | 'arrangements'>[] },
+  arrangement: Arrangement,
+  x: number,
+  y: number,
+  limit = NEAR_LIMIT_MM,
+): NearestThing | null {
+  let best: NearestThing | null = null;
+  for (const o of doc.bay.openings ?? []) {
+    const r = openingPlanRect(doc.bay, o);
+    if (!r) continue;
+    const d = distanceToRect(x, y, r);
+    if (d <= limit && (!best || d < best.distance)) best = { kind: 'opening', id: o.id, name: openingTitle(doc.bay, o), distance: d };
+  }
+  for (const m of doc.modules) {
+    if (!inArrangement(m, arrangement)) continue;
+    const d = distanceToRect(x, y, moduleRect(m));
+    if (d <= limit && (!best || d < best.distance)) best = { kind: 'module', id: m.id, name: moduleLabel(m), distance: d };
+  }
+  return best;
+}
