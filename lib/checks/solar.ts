@@ -102,7 +102,7 @@ function openingFindings(doc: LayoutDoc, panels: Module[]): Finding[] {
     const near = measuredTo.filter((x) => !x.covers && x.d < need);
     const nearest = measuredTo.reduce((a, b) => (b.d < a.d ? b : a));
     const name = capital(panelName(p));
-    const base = { id: 'fit.solar', moduleIds: [p.id], required: need, unit: 'mm', source: SOURCES.solarOpening.cite } as const;
+    const base = { id: 'fit.solar', moduleIds: [p.id], required: need, unit: 'mm', source: SOURCES.solarOpening.cite };
     if (covered.length || near.length) {
       const problems = [
         ...(covered.length ? [`it covers ${listNames(covered.map((x) => openingName(doc.bay, x.o)))}, which then can neither open nor let light and air in`] : []),

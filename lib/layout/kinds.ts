@@ -379,9 +379,10 @@ export const KINDS = {
     // defaults; the maker's data sheet gives the real size, mass and rating). Bought in, not cut.
     kind: 'solar-panel', title: 'Solar panel', keywords: ['solar', 'photovoltaic', 'pv module', 'roof panel'], family: 'electrics',
     length: 1480, width: 670, elevation: 0, height: 35, massKg: 9, arrangements: ALL, mount: 'roof', usedFromFront: false,
-    values: { ratedWatts: amount('Rated power (W)', 5, 1000) },
+    // `ratedWatts` is what it gives; a load it may carry as any kind may (LOAD).
+    values: { ratedWatts: amount('Rated power (W)', 5, 1000), ...LOAD },
     props: { ratedWatts: 175 },
-    facts: (v) => (v.ratedWatts === undefined ? {} : { solarPanel: { ratedWatts: v.ratedWatts } }),
+    facts: (v) => ({ ...loadFacts(v), ...(v.ratedWatts === undefined ? {} : { solarPanel: { ratedWatts: v.ratedWatts } }) }),
     symbol: (m) => {
       // The cells: a grid of two rows across the short side and six along the long one.
       const L = m.length, W = m.width, alongX = L >= W;

@@ -19,6 +19,7 @@ import {
   powerBudget,
   SIZING_CONDUCTOR_C,
   SOLAR_LOSS_SOURCE,
+  solarArrayWords,
   type InsulationRating,
 } from '../../planning';
 import type { Finding } from '../types';
@@ -41,7 +42,9 @@ export function powerChecks(doc: LayoutDoc): Finding[] {
   const useText = b.loads.length
     ? b.loads.map((l) => `${l.label} ${num(l.whPerDay)} Wh`).join(', ')
     : 'no loads entered yet (add them under Loads on the power tab)';
-  if (b.battery && (power?.solar || power?.alternator || power?.hookup)) {
+  // The balance waits while an array has no peak sun hours typed (power.input names them).
+  if (b.battery && (b.solar || power?.alternator || power?.hookup) && !b.sunHoursMissing) {
+    const solarFrom = b.solar ? ` from ${solarArrayWords(b.solar)},` : '';
     for (const s of b.seasons) {
       const ok = s.netWh >= 0;
       out.push({
@@ -50,7 +53,7 @@ export function powerChecks(doc: LayoutDoc): Finding[] {
         measured: round(s.chargeWh, 1),
         required: round(s.useWh, 1),
         unit: 'Wh/day',
-        message: `${SEASON_NAMES[s.season]}: charging gives ${num(s.chargeWh)} Wh a day into the battery (solar ${num(s.solarWh)} Wh after ${num(b.solarLossesPct, 2)} % system losses, alternator ${num(b.alternatorWh)} Wh, hook-up ${num(b.hookupWh)} Wh, at ${b.battery.chargeEfficiencyPct} % charge efficiency) against ${num(s.useWh)} Wh used (${useText}). ${ok ? `Surplus ${num(s.netWh)} Wh a day.` : `Deficit ${num(-s.netWh)} Wh a day: the usable ${num(b.battery.usableWh)} Wh lasts about ${num(s.daysToEmpty ?? 0, 1)} days.`}`,
+        message: `${SEASON_NAMES[s.season]}: charging gives ${num(s.chargeWh)} Wh a day into the battery (solar ${num(s.solarWh)} Wh${solarFrom} after ${num(b.solarLossesPct, 2)} % system losses, alternator ${num(b.alternatorWh)} Wh, hook-up ${num(b.hookupWh)} Wh, at ${b.battery.chargeEfficiencyPct} % charge efficiency) against ${num(s.useWh)} Wh used (${useText}). ${ok ? `Surplus ${num(s.netWh)} Wh a day.` : `Deficit ${num(-s.netWh)} Wh a day: the usable ${num(b.battery.usableWh)} Wh lasts about ${num(s.daysToEmpty ?? 0, 1)} days.`}`,
         source: `Energy balance: common practice, no source; charge efficiency by battery type: common practice, no source; ${SOLAR_LOSS_SOURCE}`,
       });
     }
