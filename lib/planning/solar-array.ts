@@ -34,11 +34,3 @@ export function solarArray(doc: LayoutDoc): SolarArray | null {
   const typed = doc.systems?.power?.solar?.watts;
   return typed === undefined ? null : { basis: 'typed', watts: typed, panels: 0, moduleIds: [] };
 }
-
-/** "2 solar panels drawn on the roof, 350 W rated" or "350 W of solar panels, as typed on the power tab". */
-export function solarArrayWords(a: SolarArray): string {
-  const w = Math.round(a.watts * 10) / 10;
-  return a.basis === 'drawn'
-    ? `${a.panels} solar ${a.panels === 1 ? 'panel' : 'panels'} drawn on the roof, ${w} W rated`
-    : `${w} W of solar panels, as typed on the power tab`;
-}

@@ -19,8 +19,8 @@ import {
   powerBudget,
   SIZING_CONDUCTOR_C,
   SOLAR_LOSS_SOURCE,
-  solarArrayWords,
   type InsulationRating,
+  type SolarArray,
 } from '../../planning';
 import type { Finding } from '../types';
 import { caution, missingInputs, num, round } from './wording';
@@ -28,6 +28,13 @@ import { caution, missingInputs, num, round } from './wording';
 const SEASON_NAMES = { summer: 'Summer', shoulder: 'Spring/autumn', winter: 'Winter' } as const;
 const CABLE_SOURCE = 'Voltage drop allowances: ABYC E-11, 3 % critical / 10 % other circuits (secondary: as reproduced in cable makers’ published tables); ampacity: 33 CFR 183.425 Table 5 (regulation text; engine-space and bundling factors from memory); copper 1/58 Ω·mm²/m at 20 °C, 0.00393 per K (IEC 60028, from memory)';
 const BATTERY_SOURCE = 'EN 1648-2 cl. 4.3.2: auxiliary battery at least 60 Ah at the 20-hour rate (secondary: as quoted in trade literature; standard text not consulted)';
+
+/** Where the array's rated power came from: "2 solar panels drawn on the roof, 350 W rated" or "300 W of solar panels, as typed on the power tab". */
+function solarArrayWords(a: SolarArray): string {
+  return a.basis === 'drawn'
+    ? `${a.panels} solar ${a.panels === 1 ? 'panel' : 'panels'} drawn on the roof, ${num(a.watts)} W rated`
+    : `${num(a.watts)} W of solar panels, as typed on the power tab`;
+}
 
 export function powerChecks(doc: LayoutDoc): Finding[] {
   const power = doc.systems?.power;
