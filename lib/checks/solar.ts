@@ -9,7 +9,7 @@
  *             roof vent, fan or skylight, at least SOLAR_FIT.openingClearance (100 mm) so the
  *             opening can open and is not shaded by it, nor shades it; closer needs attention,
  *             covering the opening does not meet
- *   overlap   per pair of a panel and another roof-mounted module (another panel, a roof box)
+ *   overlap   per pair of a panel and another roof-mounted module (another panel, a roof box, a rail)
  *             that share area in plan: does not meet (touching edges are fine)
  * Both figures are common practice, no source (SOURCES.solarEdge, solarOpening). Distances are
  * straight lines in plan, whole millimetres rounded down (so they err short). Arrangements do not

@@ -398,6 +398,22 @@ export const KINDS = {
       return out;
     },
   }),
+  'roof-rail': defineKind({
+    // One rail (fit two, one along each side): 2000 × 40 mm, 60 mm high, 3 kg (typical, invented
+    // for defaults). What stands on the roof must fit around it; the roof load is the vehicle maker's.
+    kind: 'roof-rail', title: 'Roof rail', keywords: ['rail', 'roof bar', 'cross bar', 'roof rack rail'], family: 'timber',
+    length: 2000, width: 40, elevation: 0, height: 60, massKg: 3, arrangements: ALL, mount: 'roof', usedFromFront: false,
+    values: {}, facts: () => ({}),
+    symbol: (m) => {
+      // The bar along its long side, with a foot at each end.
+      const L = m.length, W = m.width, alongX = L >= W;
+      const foot = Math.min(L, W) * 0.8, inset = (Math.min(L, W) - foot) / 2;
+      const end = Math.min(Math.max(L, W) * 0.04, 60);
+      return alongX
+        ? [path([[0, W / 2], [L, W / 2]]), { type: 'path', points: [[0, inset], [end, inset], [end, W - inset], [0, W - inset]], closed: true, fill: 'shade' }, { type: 'path', points: [[L - end, inset], [L, inset], [L, W - inset], [L - end, W - inset]], closed: true, fill: 'shade' }]
+        : [path([[L / 2, 0], [L / 2, W]]), { type: 'path', points: [[inset, 0], [L - inset, 0], [L - inset, end], [inset, end]], closed: true, fill: 'shade' }, { type: 'path', points: [[inset, W - end], [L - inset, W - end], [L - inset, W], [inset, W]], closed: true, fill: 'shade' }];
+    },
+  }),
   'rear-carrier': defineKind({
     kind: 'rear-carrier', title: 'Rear carrier', keywords: ['bike rack', 'bikes', 'bicycle carrier', 'rear rack', 'tow bar carrier'], family: 'timber',
     length: 600, width: 1200, elevation: 400, height: 1000, massKg: 30, arrangements: ALL, mount: 'rear', usedFromFront: false,

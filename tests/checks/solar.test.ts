@@ -104,6 +104,15 @@ describe('fit.solar: no overlaps on the roof (layout geometry, no outside source
     expect(overlaps(solar(docWith([panel('p', 100, 100), counter])))).toEqual([]);
   });
 
+  it('panels fit between the roof rails: clear of both meets; over a rail by 20 mm does not meet, naming the rail', () => {
+    const rail = (id: string, y: number) => mod({ id, kind: 'roof-rail', x: 500, y, length: 2000, width: 40, height: 60, facing: 'front', mount: 'roof' } as ModuleInput);
+    const rails = [rail('rail-l', 100), rail('rail-r', 1660)]; // y 100–140 and 1660–1700
+    expect(overlaps(solar(docWith([...rails, panel('p', 600, 600)])))).toEqual([]);
+    const [f] = overlaps(solar(docWith([...rails, panel('p', 600, 120)]))); // panel y 120–790 over rail 100–140: 20 mm
+    expect(f).toMatchObject({ status: 'fail', measured: 20 });
+    expect(f.message).toMatch(/Roof rail/);
+  });
+
   it('two default panels dropped on a vent and on each other: each covers the vent and the pair overlaps (what the editor shows)', () => {
     // A x 1000–2480, y 600–1270; B x 1200–2680, y 650–1320: overlap 1280 × 620; both cover the vent (2000–2400 × 700–1100).
     const fs = solar(docWith([panel('a', 1000, 600), panel('b', 1200, 650)], [vent]));

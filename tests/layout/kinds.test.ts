@@ -44,6 +44,7 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   'rear-carrier': {},
   // A solar panel gives the power budget its rated power (175 W, the kind's invented default).
   'solar-panel': { solarPanel: { ratedWatts: 175 } },
+  'roof-rail': {},
 };
 
 const placed = (kind: ModuleKind): Module => moduleFromKind(kind, `m-${kind}`);
@@ -128,7 +129,7 @@ describe('kind-specific values', () => {
 
   it('the registry lists every kind once, in shelf order', () => {
     expect(MODULE_KINDS).toEqual(Object.keys(KINDS));
-    expect(new Set(MODULE_KINDS).size).toBe(24);
+    expect(new Set(MODULE_KINDS).size).toBe(25);
   });
 });
 
