@@ -6,7 +6,7 @@
 // invented default, 1480 × 670 mm.
 import { describe, expect, it } from 'vitest';
 import { runChecks, type Finding } from '@/lib/checks';
-import { layoutDocSchema, type LayoutDoc, type LayoutDocInput } from '@/lib/layout';
+import { layoutDocSchema, starterLayout, type LayoutDoc, type LayoutDocInput } from '@/lib/layout';
 import { fitSolar } from '@/lib/checks/solar';
 import { boxDoc, mod } from './helpers';
 
@@ -135,5 +135,18 @@ describe('fit.solar: no overlaps on the roof (layout geometry, no outside source
     expect(own.filter((f) => (f.moduleIds?.length ?? 0) === 2)).toHaveLength(40); // the pairs worded one by one
     expect(own.find((f) => f.unit === 'pairs')).toMatchObject({ status: 'fail' }); // the rest counted in one
     expect(solar(doc).length).toBeLessThanOrEqual(40); // the report lists at most 40 a rule, the last summing up the rest
+  });
+});
+
+describe('fit.solar on the rear-bed starter (invented demo: two 175 W panels between the kitchen fan and the bed vent)', () => {
+  it('both panels meet every part of the rule', () => {
+    // Bay 3800 × 1800; panels x 1000–2480, y 230–900 and 900–1570 (touching). Kitchen fan x 450–850,
+    // y 450–850: 1000 − 850 = 150 mm from the left panel (≥ 100); bed vent from x 2800: 2800 − 2480 = 320 mm.
+    // Nearest roof edge: 230 mm (left of one, right of the other: 1800 − 1570), ≥ 50.
+    const fs = solar(starterLayout('starter-rear-bed')!);
+    expect(fs.length).toBe(4); // an edge and an opening finding per panel, no overlap
+    expect(fs.every((f) => f.status === 'pass')).toBe(true);
+    expect(edgeOf(fs, 'solar-left')[0].measured).toBe(230);
+    expect(openingOf(fs, 'solar-left')[0]).toMatchObject({ measured: 150, openingIds: ['roof-fan'] });
   });
 });
