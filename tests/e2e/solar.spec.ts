@@ -19,6 +19,7 @@ test('panels drawn on the roof give the Power tab its array; a third one placed 
   await expect(page.getByTestId('solar-from-roof')).toHaveText('From the roof plan: 2 panels, 350 W', { timeout: 30_000 });
   await expect(page.getByRole('textbox', { name: /^Solar panels/ })).toHaveCount(0);
   await expect(page.getByRole('textbox', { name: /^Sun, summer/ })).toHaveValue('5.2');
+  await expect(page.getByText(/Solar from the 2 panels drawn on the roof \(350 W rated\) after 14\.08 % system losses/)).toBeVisible();
   await keepScreenshot(page, 'solar-power-tab');
 
   // The editor: a panel from the shelf goes mid-roof, over the two already there.
