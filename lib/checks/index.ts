@@ -16,6 +16,7 @@ import { CheckContext } from './context';
 import { egressSleep } from './egress';
 import { fitInside, fitOverlap, fitWheelArch } from './fit';
 import { fitOutside } from './outside';
+import { fitSolar } from './solar';
 import { headroomOverhead, headroomStanding } from './headroom';
 import { resolveSettings } from './settings';
 import { sleepChecks } from './sleep';
@@ -28,6 +29,7 @@ import { WALKWAY_ARRANGEMENTS, walkwayReach, walkwayWidth } from './walkway';
 export { resolveSettings, DEFAULT_SETTINGS, RULE_CONSTANTS, type CheckSettings } from './settings';
 export { SOURCES } from './sources';
 export { CLEARANCE } from './clearance';
+export { SOLAR_FIT } from './solar';
 export { MATTRESSES, largestFittingMattress, type Mattress } from './mattress';
 export type { CheckReport, Finding, FindingStatus } from './types';
 
@@ -101,7 +103,7 @@ export function runChecks(doc: LayoutDoc, options: RunChecksOptions = {}): Check
   // body only; outside-mounted ones have their own fit rule and count in the build-planning figures.
   const ctx = new CheckContext(interiorOf(doc), settings);
   const findings: Finding[] = boundReport([
-    ...guarded('fit', () => [...fitInside(ctx.doc, ctx.t), ...fitWheelArch(ctx.doc, ctx.t), ...fitOverlap(ctx.doc), ...fitOutside(doc, settings)]),
+    ...guarded('fit', () => [...fitInside(ctx.doc, ctx.t), ...fitWheelArch(ctx.doc, ctx.t), ...fitOverlap(ctx.doc), ...fitOutside(doc, settings), ...fitSolar(doc)]),
     ...guarded('walkway', () => WALKWAY_ARRANGEMENTS.flatMap((a) => [walkwayReach(ctx, a), walkwayWidth(ctx, a)])),
     ...guarded('headroom', () => [headroomStanding(ctx), ...WALKWAY_ARRANGEMENTS.flatMap((a) => headroomOverhead(ctx, a))]),
     ...guarded('sleep', () => [...sleepChecks(ctx), ...sleepPlaces(ctx)]),

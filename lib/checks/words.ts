@@ -37,6 +37,7 @@ export const RULE_NAMES: Record<string, string> = {
   'fit.wheel-arch': 'Clear of the wheel arches',
   'fit.overlap': 'Modules do not overlap',
   'fit.outside': 'Outside-mounted module',
+  'fit.solar': 'Solar panels on the roof',
   'walkway.width': 'Walkway width',
   'walkway.reach': 'Reach from the walkway',
   'headroom.standing': 'Standing headroom',

@@ -74,6 +74,8 @@ export interface KindFacts {
    * capacity, else the drawn inside volume (`basis` says which; `drawnLitres` is always the drawn one).
    */
   water?: { use: 'fresh' | 'grey'; litres: number; basis: 'typed' | 'drawn'; drawnLitres: number };
+  /** A solar panel: its rated (nameplate) power, W, which the power budget sums over the drawn panels. */
+  solarPanel?: { ratedWatts: number };
   /** Gas cylinders held (gas locker). */
   gasCylinders?: { count: number; kgEach: number };
   /** What it burns, as typed (hob, heater); undefined when not given. */
@@ -371,6 +373,46 @@ export const KINDS = {
     length: 1400, width: 800, elevation: 0, height: 400, massKg: 18, arrangements: ALL, mount: 'roof', usedFromFront: false,
     values: {}, facts: () => ({}),
     symbol: (m) => [roundRect(m.length * 0.08, m.width * 0.1, m.length * 0.84, m.width * 0.8, Math.min(m.length, m.width) * 0.2)],
+  }),
+  'solar-panel': defineKind({
+    // A typical rigid 12 V panel of about 175 W: 1480 × 670 × 35 mm, 9 kg (typical, invented for
+    // defaults; the maker's data sheet gives the real size, mass and rating). Bought in, not cut.
+    kind: 'solar-panel', title: 'Solar panel', keywords: ['solar', 'photovoltaic', 'pv module', 'roof panel'], family: 'electrics',
+    length: 1480, width: 670, elevation: 0, height: 35, massKg: 9, arrangements: ALL, mount: 'roof', usedFromFront: false,
+    // `ratedWatts` is what it gives; a load it may carry as any kind may (LOAD).
+    values: { ratedWatts: amount('Rated power (W)', 5, 1000), ...LOAD },
+    props: { ratedWatts: 175 },
+    facts: (v) => ({ ...loadFacts(v), ...(v.ratedWatts === undefined ? {} : { solarPanel: { ratedWatts: v.ratedWatts } }) }),
+    symbol: (m) => {
+      // The cells: a grid of two rows across the short side and six along the long one.
+      const L = m.length, W = m.width, alongX = L >= W;
+      const inset = Math.min(L, W) * 0.06;
+      const out: SymbolShape[] = [{ type: 'path', points: [[inset, inset], [L - inset, inset], [L - inset, W - inset], [inset, W - inset]], closed: true }];
+      const [long, short] = alongX ? [L, W] : [W, L];
+      for (let i = 1; i < 6; i++) {
+        const t = inset + ((long - 2 * inset) * i) / 6;
+        out.push(path(alongX ? [[t, inset], [t, W - inset]] : [[inset, t], [L - inset, t]]));
+      }
+      const mid = short / 2;
+      out.push(path(alongX ? [[inset, mid], [L - inset, mid]] : [[mid, inset], [mid, W - inset]]));
+      return out;
+    },
+  }),
+  'roof-rail': defineKind({
+    // One rail (fit two, one along each side): 2000 × 40 mm, 60 mm high, 3 kg (typical, invented
+    // for defaults). What stands on the roof must fit around it; the roof load is the vehicle maker's.
+    kind: 'roof-rail', title: 'Roof rail', keywords: ['rail', 'roof bar', 'cross bar', 'roof rack rail'], family: 'timber',
+    length: 2000, width: 40, elevation: 0, height: 60, massKg: 3, arrangements: ALL, mount: 'roof', usedFromFront: false,
+    values: {}, facts: () => ({}),
+    symbol: (m) => {
+      // The bar along its long side, with a foot at each end.
+      const L = m.length, W = m.width, alongX = L >= W;
+      const foot = Math.min(L, W) * 0.8, inset = (Math.min(L, W) - foot) / 2;
+      const end = Math.min(Math.max(L, W) * 0.04, 60);
+      return alongX
+        ? [path([[0, W / 2], [L, W / 2]]), { type: 'path', points: [[0, inset], [end, inset], [end, W - inset], [0, W - inset]], closed: true, fill: 'shade' }, { type: 'path', points: [[L - end, inset], [L, inset], [L, W - inset], [L - end, W - inset]], closed: true, fill: 'shade' }]
+        : [path([[L / 2, 0], [L / 2, W]]), { type: 'path', points: [[inset, 0], [L - inset, 0], [L - inset, end], [inset, end]], closed: true, fill: 'shade' }, { type: 'path', points: [[inset, W - end], [L - inset, W - end], [L - inset, W], [inset, W]], closed: true, fill: 'shade' }];
+    },
   }),
   'rear-carrier': defineKind({
     kind: 'rear-carrier', title: 'Rear carrier', keywords: ['bike rack', 'bikes', 'bicycle carrier', 'rear rack', 'tow bar carrier'], family: 'timber',

@@ -101,7 +101,8 @@ export const powerLoadSchema = z
 export type PowerLoad = z.infer<typeof powerLoadSchema>;
 
 export const solarSchema = z.strictObject({
-  watts: z.number().finite().min(0).max(10_000),
+  /** The array's rated power as typed; panels drawn on the roof replace it (lib/planning/solar-array.ts), so it may be left out. */
+  watts: z.number().finite().min(0).max(10_000).optional(),
   /** Peak sun hours (kWh/m²/day on the panel) by season; for your region (e.g. from PVGIS). */
   peakSunHours: z.strictObject({
     summer: z.number().finite().min(0).max(12),

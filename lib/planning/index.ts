@@ -8,6 +8,7 @@ export * from './payload';
 export * from './module-facts';
 export * from './axle-loads';
 export * from './solar-yield';
+export * from './solar-array';
 export * from './battery-sizing';
 export * from './load-presets';
 export * from './power-budget';

@@ -16,6 +16,7 @@ import type { LayoutDoc, ModuleKind } from '../layout';
 import { CHEMISTRIES } from './battery-sizing';
 import { cableSize, DROP_CRITICAL_PCT, DROP_NON_CRITICAL_PCT, nominalSystemVolts } from './cable-size';
 import { planCutList, type CutListOptions } from './cut-list';
+import { solarArray } from './solar-array';
 import type { InsulationRating } from './conductors';
 
 export type PriceUnit = 'each' | 'm' | 'sheet' | 'Ah' | 'W';
@@ -124,7 +125,9 @@ export function computePartsList(doc: LayoutDoc, priceList: PriceList, cutOption
     push(`cable:${size}`, 'cable', `Tinned copper cable ${size} mm² (out and return)`, Math.ceil(metres * 10) / 10, 'm');
   }
   if (power?.battery) push(`battery:${power.battery.chemistry}`, 'electrics', `${CHEMISTRIES[power.battery.chemistry].title} battery, ${power.battery.volts} V`, power.battery.capacityAh, 'Ah');
-  if (power?.solar) push('solar', 'electrics', 'Solar panels', power.solar.watts, 'W');
+  // Panels drawn on the roof are priced as modules (above); the typed array only where none is drawn.
+  const array = solarArray(doc);
+  if (array?.basis === 'typed') push('solar', 'electrics', 'Solar panels', array.watts, 'W');
   if (doc.systems?.alarms?.co) push('alarm:co', 'safety', 'Carbon-monoxide alarm', 1, 'each');
   if (doc.systems?.alarms?.lpg) push('alarm:lpg', 'safety', 'LPG alarm', 1, 'each');
 

@@ -1,7 +1,7 @@
 /**
  * The daily 12 V energy budget: loads (the loads table plus modules that draw power, such as a
- * compressor fridge with `watts` and `dutyCycle`), charging by season (solar, alternator,
- * hook-up), the battery's usable energy, the daily balance and the days of autonomy without sun.
+ * compressor fridge with `watts` and `dutyCycle`), charging by season (solar — the panels drawn
+ * on the roof, else the typed array, `solar-array.ts` —, alternator, hook-up), the battery's usable energy, the daily balance and the days of autonomy without sun.
  *
  * `powerBudget(doc)` returns the `PowerBudget` DTO for the Power panel and the plan sheet.
  * Charging energy into the battery is discounted by the chemistry's charge efficiency; AC loads by
@@ -15,6 +15,7 @@ import type { LayoutDoc } from '../layout';
 import { autonomyDays, batteryAhFor, CHEMISTRIES, usableWh } from './battery-sizing';
 import { INPUTS, type InputNeed } from './inputs';
 import { moduleFacts, moduleName } from './module-facts';
+import { solarArray, type SolarArray } from './solar-array';
 import { PVWATTS_DEFAULT_LOSSES_PCT, solarDailyWh } from './solar-yield';
 
 export const DEFAULT_INVERTER_EFFICIENCY_PCT = 90; // common practice, no source
@@ -57,6 +58,10 @@ export interface PowerBudget {
     chargeEfficiencyPct: number;
     usableWh: number;
   };
+  /** The array counted: the panels drawn on the roof, else the typed watts; null when neither. */
+  solar: SolarArray | null;
+  /** An array is there but the peak sun hours by season are not typed: the balance waits for them. */
+  sunHoursMissing: boolean;
   solarLossesPct: number;
   alternatorWh: number;
   hookupWh: number;
@@ -119,10 +124,15 @@ export function powerBudget(doc: LayoutDoc): PowerBudget {
   const solarLossesPct = power.solar?.lossesPct ?? PVWATTS_DEFAULT_LOSSES_PCT;
   const alternatorWh = power.alternator ? power.alternator.amps * power.alternator.drivingHoursPerDay * volts : 0;
   const hookupWh = power.hookup ? power.hookup.chargerAmps * power.hookup.hoursPerDay * volts : 0;
-  if (!power.solar && !power.alternator && !power.hookup) missing.push(INPUTS.charging);
+  // Panels drawn on the roof give the array's rated power; the typed figure stands in where none is drawn.
+  const solar = solarArray(doc);
+  const sun = power.solar?.peakSunHours;
+  const sunHoursMissing = solar !== null && sun === undefined;
+  if (!solar && !power.alternator && !power.hookup) missing.push(INPUTS.charging);
+  if (sunHoursMissing) missing.push(INPUTS.sunSummer, INPUTS.sunShoulder, INPUTS.sunWinter);
 
   const seasons = SEASONS.map((season): SeasonBalance => {
-    const solarWh = power.solar ? solarDailyWh(power.solar.watts, power.solar.peakSunHours[season], solarLossesPct) : 0;
+    const solarWh = solar && sun ? solarDailyWh(solar.watts, sun[season], solarLossesPct) : 0;
     const chargeWh = (solarWh + alternatorWh + hookupWh) * chargeEff;
     const netWh = chargeWh - dailyUseWh;
     const daysToEmpty = battery && netWh < 0 ? battery.usableWh / -netWh : null;
@@ -134,6 +144,8 @@ export function powerBudget(doc: LayoutDoc): PowerBudget {
     loads,
     dailyUseWh,
     battery,
+    solar,
+    sunHoursMissing,
     solarLossesPct,
     alternatorWh,
     hookupWh,

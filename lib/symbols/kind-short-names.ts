@@ -38,6 +38,8 @@ export const KIND_SHORT_NAMES: { readonly [K in ModuleKind]: KindShortName } = {
   'shower-tray': { short: 'Shower', abbreviation: 'SH' },
   'spare-wheel': { short: 'Spare', abbreviation: 'SW' },
   'roof-box': { short: 'Roof box', abbreviation: 'RB' },
+  'solar-panel': { short: 'Solar', abbreviation: 'PV' },
+  'roof-rail': { short: 'Rail', abbreviation: 'RR' },
   'rear-carrier': { short: 'Carrier', abbreviation: 'RC' },
   step: { short: 'Step', abbreviation: 'STP' },
 };

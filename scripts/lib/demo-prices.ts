@@ -14,7 +14,7 @@ const MODULES: Record<string, [number, number]> = {
   'kitchen-counter': [240, 8], 'sink-unit': [150, 3], hob: [140, 2], fridge: [520, 2], wardrobe: [200, 6],
   'drawer-unit': [160, 5], 'overhead-locker': [110, 3], 'fresh-water-tank': [120, 3], 'grey-water-tank': [95, 3],
   'gas-locker': [210, 4], 'electrics-bay': [350, 10], heater: [780, 6], 'toilet-cabinet': [260, 3], 'shower-tray': [180, 4], step: [60, 1],
-  'spare-wheel': [140, 2], 'roof-box': [380, 2], 'rear-carrier': [420, 3],
+  'spare-wheel': [140, 2], 'roof-box': [380, 2], 'solar-panel': [190, 2], 'roof-rail': [60, 1], 'rear-carrier': [420, 3],
 };
 const SHEETS: Record<string, number> = { 'ply-18': 72, 'ply-15': 62, 'ply-6': 34 };
 

@@ -42,6 +42,9 @@ const FACTS_OF_DEFAULTS: Record<ModuleKind, KindFacts> = {
   'spare-wheel': {},
   'roof-box': {},
   'rear-carrier': {},
+  // A solar panel gives the power budget its rated power (175 W, the kind's invented default).
+  'solar-panel': { solarPanel: { ratedWatts: 175 } },
+  'roof-rail': {},
 };
 
 const placed = (kind: ModuleKind): Module => moduleFromKind(kind, `m-${kind}`);
@@ -113,9 +116,20 @@ describe('kind-specific values', () => {
     expect(kindFacts(seat).seat).toEqual({ belted: false, approvedType: false, anchorageTested: false });
   });
 
+  it('a solar panel round-trips with its rated power, mounted on the roof; its rating is bounded 5–1000 W (the kind’s own limits)', () => {
+    const p = placed('solar-panel');
+    expect(p).toMatchObject({ mount: 'roof', length: 1480, width: 670, height: 35, massKg: 9, props: { ratedWatts: 175 } });
+    const doc = { ...starterLayout('starter-rear-bed')!, modules: [{ ...p, props: { ratedWatts: 410 } }] };
+    const back = parseLayoutDoc(JSON.parse(JSON.stringify(doc)));
+    expect(back.ok && back.value.modules[0]).toMatchObject({ kind: 'solar-panel', mount: 'roof', props: { ratedWatts: 410 } });
+    for (const bad of [4, 1001, Number.NaN]) expect(moduleSchema.safeParse({ ...p, props: { ratedWatts: bad } }).success, String(bad)).toBe(false);
+    for (const ok of [5, 1000]) expect(moduleSchema.safeParse({ ...p, props: { ratedWatts: ok } }).success, String(ok)).toBe(true);
+    expect(shownFields(p).map((f) => f.field.label)).toEqual(['Rated power (W)']);
+  });
+
   it('the registry lists every kind once, in shelf order', () => {
     expect(MODULE_KINDS).toEqual(Object.keys(KINDS));
-    expect(new Set(MODULE_KINDS).size).toBe(23);
+    expect(new Set(MODULE_KINDS).size).toBe(25);
   });
 });
 

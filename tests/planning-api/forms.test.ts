@@ -99,3 +99,33 @@ describe('edits through the forms', () => {
     expect(r.error?.issues[0].message).toBe('already listed');
   });
 });
+
+describe('the power form with solar panels drawn on the roof', () => {
+  // The rear-bed starter draws two 175 W panels on the roof (invented), and keeps a typed 350 W.
+  const drawn = starterLayout('starter-rear-bed')!;
+  const typedOnly: LayoutDoc = { ...drawn, modules: drawn.modules.filter((m) => m.kind !== 'solar-panel') };
+
+  it('knows the panels are drawn, and then asks for the sun hours without the typed watts', () => {
+    const base = powerDefaults(drawn);
+    expect(base.arrayDrawn).toBe(true);
+    const parsed = powerSchema.safeParse({ ...base, solarWatts: '' });
+    expect(parsed.success).toBe(true);
+    const out = powerSystems(parsed.data!, drawn.systems?.power);
+    expect(out?.solar).toEqual({ peakSunHours: { summer: 5.2, shoulder: 3, winter: 1 } });
+    expect(systemsSchema.safeParse({ power: out }).success).toBe(true);
+  });
+
+  it('with panels drawn, a season’s sun left out is still asked for; with no sun at all the array waits, no error', () => {
+    const base = powerDefaults(drawn);
+    expect(powerSchema.safeParse({ ...base, pshWinter: '' }).error?.issues.map((i) => i.path.join('.'))).toContain('pshWinter');
+    const none = powerSchema.safeParse({ ...base, solarWatts: '', pshSummer: '', pshShoulder: '', pshWinter: '' });
+    expect(none.success).toBe(true);
+    expect(powerSystems(none.data!, drawn.systems?.power)?.solar).toBeUndefined();
+  });
+
+  it('with no panel drawn, sun hours without watts still ask for the watts', () => {
+    const base = powerDefaults(typedOnly);
+    expect(base.arrayDrawn).toBe(false);
+    expect(powerSchema.safeParse({ ...base, solarWatts: '' }).error?.issues.map((i) => i.path.join('.'))).toContain('solarWatts');
+  });
+});

@@ -9,7 +9,8 @@ import { useId, useMemo, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Plus, Trash2 } from 'lucide-react';
 import { BATTERY_CHEMISTRIES } from '@/lib/layout/vocabulary';
-import { CHEMISTRIES, LOAD_PRESETS, PVWATTS_DEFAULT_LOSSES_PCT } from '@/lib/planning';
+import { CHEMISTRIES, LOAD_PRESETS, PVWATTS_DEFAULT_LOSSES_PCT, solarArray } from '@/lib/planning';
+import { formatNumber } from '@/lib/format';
 import { CheckField, FieldGroup, QuantityField } from '../fields';
 import { newRowId } from '../ids';
 import type { PanelProps } from '../panelProps';
@@ -34,6 +35,8 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
   const r = form.register;
   const chemistry = form.watch('chemistry');
   const facts = chemistry ? CHEMISTRIES[chemistry] : null;
+  // Panels drawn on the roof give the array's rated power; the typed field stands in where none is.
+  const array = useMemo(() => solarArray(doc), [doc]);
   const moduleLoads = useMemo(() => doc.modules.filter((m) => m.kind !== 'heater' && m.props && 'watts' in m.props && typeof m.props.watts === 'number'), [doc.modules]);
 
   const addPreset = () => {
@@ -104,7 +107,17 @@ export function PowerPanel({ doc, readOnly, onSystems, onValidity, findings }: P
           </fieldset>
 
           <FieldGroup title="Charging" note={`Solar losses default to ${PVWATTS_DEFAULT_LOSSES_PCT.toFixed(2)} %, the ten default system losses of a national laboratory's published technical report (NREL/TP-6A20-62641, 2014) taken together. Peak sun hours: the daily irradiation on the panel for your region and season, from a published solar irradiation map or dataset.`}>
-            <QuantityField label="Solar panels" unit="W" reg={r('solarWatts')} error={e.solarWatts} />
+            {array?.basis === 'drawn' ? (
+              <div>
+                <p className="label">Solar panels</p>
+                <p className="py-1.5 font-mono text-sm" data-testid="solar-from-roof">
+                  From the roof plan: {array.panels} {array.panels === 1 ? 'panel' : 'panels'}, {formatNumber(array.watts)} W
+                </p>
+                <p className="text-xs text-ink-soft">The rated power of the panels drawn on the roof, added up; change a panel&apos;s in the editor&apos;s Details panel. Peak sun hours below still count.</p>
+              </div>
+            ) : (
+              <QuantityField label="Solar panels" unit="W" reg={r('solarWatts')} error={e.solarWatts} />
+            )}
             <QuantityField label="Sun, summer" unit="h/day" reg={r('pshSummer')} error={e.pshSummer} />
             <QuantityField label="Sun, spring/autumn" unit="h/day" reg={r('pshShoulder')} error={e.pshShoulder} />
             <QuantityField label="Sun, winter" unit="h/day" reg={r('pshWinter')} error={e.pshWinter} />

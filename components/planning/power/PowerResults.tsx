@@ -76,7 +76,7 @@ export function PowerResults({ doc, findings }: { doc: LayoutDoc; findings: Find
             ))}
           </tbody>
         </table>
-        <p className="mt-1 text-xs text-ink-soft">Solar after {b.solarLossesPct.toFixed(2)} % system losses; alternator {n0(b.alternatorWh)} Wh and hook-up {n0(b.hookupWh)} Wh a day; charging counted at the battery&apos;s charge efficiency.</p>
+        <p className="mt-1 text-xs text-ink-soft">Solar{b.solar ? (b.solar.basis === 'drawn' ? ` from the ${b.solar.panels} ${b.solar.panels === 1 ? 'panel' : 'panels'} drawn on the roof (${n0(b.solar.watts)} W rated)` : ` from the ${n0(b.solar.watts)} W typed`) : ''} after {b.solarLossesPct.toFixed(2)} % system losses; alternator {n0(b.alternatorWh)} Wh and hook-up {n0(b.hookupWh)} Wh a day; charging counted at the battery&apos;s charge efficiency.</p>
       </div>
       <div className="panel grid gap-2 p-3 text-sm sm:grid-cols-2">
         <p>Usable energy: <span className="font-mono">{b.battery ? `${n0(b.battery.usableWh)} Wh` : '—'}</span>{b.battery && <span className="text-ink-soft"> ({b.battery.capacityAh} Ah × {b.battery.volts} V × {b.battery.usableDodPct} %)</span>}</p>

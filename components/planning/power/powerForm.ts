@@ -2,12 +2,15 @@
  * The Power panel's form: battery, loads (with presets), solar, alternator and hook-up
  * charging, 230 V, and the circuits to size cable for — text fields that read into
  * `systems.power`. Circuit details this form does not show (insulation rating, bundling, engine
- * space, a drop allowance of its own) are kept from the document by circuit id. Pure
- * TypeScript; must never invent a value for an empty field.
+ * space, a drop allowance of its own) are kept from the document by circuit id. Where solar
+ * panels are drawn on the roof their rated power replaces the typed watts (`arrayDrawn`, read
+ * once with the defaults): the sun hours are then asked for without it, and a typed figure is
+ * kept for when the panels go. Pure TypeScript; must never invent a value for an empty field.
  */
 import * as z from 'zod/mini';
 import { BATTERY_CHEMISTRIES } from '@/lib/layout/vocabulary';
 import type { CircuitData, LayoutDoc, PowerData, PowerLoad } from '@/lib/layout';
+import { solarArray } from '@/lib/planning/solar-array';
 import { compact, field, shown } from '../quantities';
 
 const watts = field.plain(['W'], 'watts, e.g. 45 W', { min: 0, max: 10_000 });
@@ -34,6 +37,8 @@ export const powerSchema = z
     }).check(z.superRefine((l, ctx) => {
       if (l.hoursPerDay === undefined && l.dutyPct === undefined) ctx.addIssue({ code: 'custom', path: ['hoursPerDay'], message: 'hours a day or a duty cycle' });
     }))).check(z.maxLength(60)),
+    /** Solar panels are drawn on the roof: their rated power stands in for the typed watts. */
+    arrayDrawn: z.boolean(),
     solarWatts: watts(false),
     pshSummer: psh(false),
     pshShoulder: psh(false),
@@ -62,8 +67,9 @@ export const powerSchema = z
     const some = (...xs: unknown[]) => xs.some((x) => x !== undefined);
     if ((v.chemistry === '') !== (v.capacityAh === undefined)) ctx.addIssue({ code: 'custom', path: [v.chemistry === '' ? 'chemistry' : 'capacityAh'], message: 'choose the chemistry and give the capacity' });
     if (v.chemistry !== '' && v.volts === undefined) ctx.addIssue({ code: 'custom', path: ['volts'], message: 'give the nominal volts' });
-    if (some(v.pshSummer, v.pshShoulder, v.pshWinter, v.solarLossesPct) && v.solarWatts === undefined) ctx.addIssue({ code: 'custom', path: ['solarWatts'], message: 'give the panels’ watts' });
-    if (v.solarWatts !== undefined) for (const k of ['pshSummer', 'pshShoulder', 'pshWinter'] as const) if (v[k] === undefined) ctx.addIssue({ code: 'custom', path: [k], message: 'peak sun hours for each season' });
+    const sunTyped = some(v.pshSummer, v.pshShoulder, v.pshWinter, v.solarLossesPct);
+    if (sunTyped && v.solarWatts === undefined && !v.arrayDrawn) ctx.addIssue({ code: 'custom', path: ['solarWatts'], message: 'give the panels’ watts' });
+    if (v.arrayDrawn ? sunTyped : v.solarWatts !== undefined) for (const k of ['pshSummer', 'pshShoulder', 'pshWinter'] as const) if (v[k] === undefined) ctx.addIssue({ code: 'custom', path: [k], message: 'peak sun hours for each season' });
     if ((v.alternatorAmps === undefined) !== (v.drivingHours === undefined)) ctx.addIssue({ code: 'custom', path: [v.alternatorAmps === undefined ? 'alternatorAmps' : 'drivingHours'], message: 'give both amps and hours' });
     if ((v.chargerAmps === undefined) !== (v.hookupHours === undefined)) ctx.addIssue({ code: 'custom', path: [v.chargerAmps === undefined ? 'chargerAmps' : 'hookupHours'], message: 'give both amps and hours' });
   }));
@@ -83,6 +89,7 @@ export function powerDefaults(doc: LayoutDoc): PowerInput {
       id: l.id, label: l.label, watts: shown(l.watts), hoursPerDay: shown(l.hoursPerDay),
       dutyPct: l.dutyCycle === undefined ? '' : shown(l.dutyCycle * 100), supply: l.supply ?? 'dc',
     })),
+    arrayDrawn: solarArray(doc)?.basis === 'drawn',
     solarWatts: shown(p.solar?.watts),
     pshSummer: shown(p.solar?.peakSunHours.summer),
     pshShoulder: shown(p.solar?.peakSunHours.shoulder),
@@ -125,8 +132,10 @@ export function powerSystems(v: PowerOutput, previous: PowerData | undefined): P
       : undefined,
     loads: loads.length ? loads : undefined,
     includeModuleLoads: v.includeModuleLoads ? undefined : false,
-    solar: v.solarWatts !== undefined
-      ? { watts: v.solarWatts, peakSunHours: { summer: v.pshSummer!, shoulder: v.pshShoulder!, winter: v.pshWinter! }, ...(v.solarLossesPct !== undefined ? { lossesPct: v.solarLossesPct } : {}) }
+    // With panels drawn the sun hours may come alone (the typed watts, if any, kept for later);
+    // without, the typed watts bring them. Either way all three seasons are there (the schema asks).
+    solar: v.pshSummer !== undefined && v.pshShoulder !== undefined && v.pshWinter !== undefined && (v.solarWatts !== undefined || v.arrayDrawn)
+      ? { ...(v.solarWatts !== undefined ? { watts: v.solarWatts } : {}), peakSunHours: { summer: v.pshSummer, shoulder: v.pshShoulder, winter: v.pshWinter }, ...(v.solarLossesPct !== undefined ? { lossesPct: v.solarLossesPct } : {}) }
       : undefined,
     alternator: v.alternatorAmps !== undefined ? { amps: v.alternatorAmps, drivingHoursPerDay: v.drivingHours! } : undefined,
     hookup: v.chargerAmps !== undefined ? { chargerAmps: v.chargerAmps, hoursPerDay: v.hookupHours! } : undefined,

@@ -20,6 +20,7 @@ import {
   SIZING_CONDUCTOR_C,
   SOLAR_LOSS_SOURCE,
   type InsulationRating,
+  type SolarArray,
 } from '../../planning';
 import type { Finding } from '../types';
 import { caution, missingInputs, num, round } from './wording';
@@ -27,6 +28,13 @@ import { caution, missingInputs, num, round } from './wording';
 const SEASON_NAMES = { summer: 'Summer', shoulder: 'Spring/autumn', winter: 'Winter' } as const;
 const CABLE_SOURCE = 'Voltage drop allowances: ABYC E-11, 3 % critical / 10 % other circuits (secondary: as reproduced in cable makers’ published tables); ampacity: 33 CFR 183.425 Table 5 (regulation text; engine-space and bundling factors from memory); copper 1/58 Ω·mm²/m at 20 °C, 0.00393 per K (IEC 60028, from memory)';
 const BATTERY_SOURCE = 'EN 1648-2 cl. 4.3.2: auxiliary battery at least 60 Ah at the 20-hour rate (secondary: as quoted in trade literature; standard text not consulted)';
+
+/** Where the array's rated power came from: "2 solar panels drawn on the roof, 350 W rated" or "300 W of solar panels, as typed on the power tab". */
+function solarArrayWords(a: SolarArray): string {
+  return a.basis === 'drawn'
+    ? `${a.panels} solar ${a.panels === 1 ? 'panel' : 'panels'} drawn on the roof, ${num(a.watts)} W rated`
+    : `${num(a.watts)} W of solar panels, as typed on the power tab`;
+}
 
 export function powerChecks(doc: LayoutDoc): Finding[] {
   const power = doc.systems?.power;
@@ -41,7 +49,9 @@ export function powerChecks(doc: LayoutDoc): Finding[] {
   const useText = b.loads.length
     ? b.loads.map((l) => `${l.label} ${num(l.whPerDay)} Wh`).join(', ')
     : 'no loads entered yet (add them under Loads on the power tab)';
-  if (b.battery && (power?.solar || power?.alternator || power?.hookup)) {
+  // The balance waits while an array has no peak sun hours typed (power.input names them).
+  if (b.battery && (b.solar || power?.alternator || power?.hookup) && !b.sunHoursMissing) {
+    const solarFrom = b.solar ? ` from ${solarArrayWords(b.solar)},` : '';
     for (const s of b.seasons) {
       const ok = s.netWh >= 0;
       out.push({
@@ -50,7 +60,7 @@ export function powerChecks(doc: LayoutDoc): Finding[] {
         measured: round(s.chargeWh, 1),
         required: round(s.useWh, 1),
         unit: 'Wh/day',
-        message: `${SEASON_NAMES[s.season]}: charging gives ${num(s.chargeWh)} Wh a day into the battery (solar ${num(s.solarWh)} Wh after ${num(b.solarLossesPct, 2)} % system losses, alternator ${num(b.alternatorWh)} Wh, hook-up ${num(b.hookupWh)} Wh, at ${b.battery.chargeEfficiencyPct} % charge efficiency) against ${num(s.useWh)} Wh used (${useText}). ${ok ? `Surplus ${num(s.netWh)} Wh a day.` : `Deficit ${num(-s.netWh)} Wh a day: the usable ${num(b.battery.usableWh)} Wh lasts about ${num(s.daysToEmpty ?? 0, 1)} days.`}`,
+        message: `${SEASON_NAMES[s.season]}: charging gives ${num(s.chargeWh)} Wh a day into the battery (solar ${num(s.solarWh)} Wh${solarFrom} after ${num(b.solarLossesPct, 2)} % system losses, alternator ${num(b.alternatorWh)} Wh, hook-up ${num(b.hookupWh)} Wh, at ${b.battery.chargeEfficiencyPct} % charge efficiency) against ${num(s.useWh)} Wh used (${useText}). ${ok ? `Surplus ${num(s.netWh)} Wh a day.` : `Deficit ${num(-s.netWh)} Wh a day: the usable ${num(b.battery.usableWh)} Wh lasts about ${num(s.daysToEmpty ?? 0, 1)} days.`}`,
         source: `Energy balance: common practice, no source; charge efficiency by battery type: common practice, no source; ${SOLAR_LOSS_SOURCE}`,
       });
     }
