@@ -14,6 +14,7 @@ const PURE_FOLDERS = ['geometry', 'checks', 'layout', 'planning', 'proposals', '
 const PURE_FILES = [
   'sheet/bounded',
   'sheet/compose',
+  'sheet/drawing-labels',
   'sheet/layout-file',
   'sheet/paper',
   'sheet/pdf',

@@ -28,12 +28,11 @@ import { formatLength } from '../layout/units';
 import type { Arrangement, LayoutDoc, LengthUnit, Module } from '../layout';
 import { archBoxes, buildUpThickness, inArrangement, modulesIn, mountedInside } from '../layout/bay';
 import { bodyPoints, windowOnWall, windows, type BayWall } from '../layout/openings';
-import { kindTitle } from './roof-figure';
 import { dimension, hatch, LINE, TYPE } from './drafting';
 import { onPaper } from './paper';
-import { scheduleNumbers } from './plan-figure';
+import { moduleNames, scheduleNumbers } from './plan-figure';
 import type { SheetItem } from './primitives';
-import { fit } from './typography';
+import { firstThatFits, notesThatFit } from './typography';
 import { VERTICAL_ORDINATE_BAND, verticalOrdinate } from './ordinates';
 
 export const ELEVATION_WALLS = ['left', 'right', 'rear', 'bulkhead'] as const;
@@ -222,7 +221,7 @@ export function drawElevation(doc: LayoutDoc, wall: ElevationWall, ox: number, o
       : { type: 'rect', x, y, w, h, fill: 'white', stroke: 'soft', width: LINE.thin, dash: [1, 0.7], tag: `${tag}:module:${m.id}` });
     if (w >= 4 && h >= 3) {
       items.push({ type: 'text', x: x + w / 2, y: y + Math.min(h - 0.6, 2.8), text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold', align: 'center' });
-      const label = h >= 6 ? fit(m.label ?? kindTitle(m), TYPE.small, w - 1.2) : '';
+      const label = h >= 6 ? firstThatFits(moduleNames(m), TYPE.small, w - 1.2) : '';
       if (label) items.push({ type: 'text', x: x + w / 2, y: y + 5.2, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
     }
   }
@@ -283,7 +282,14 @@ export function drawElevation(doc: LayoutDoc, wall: ElevationWall, ox: number, o
   const what = options.arrangement ? `${options.arrangement}` : 'lounge solid, sleep-only dashed';
   const against = modulesAgainst(doc, wall, options.arrangement).length;
   const leftOut = against > shown.length ? `only the first ${shown.length} of ${against} modules against it drawn` : '';
-  const notes = [openFront ? 'no bulkhead: open to the cab' : '', 'seen from inside', what, ordinate.leftOff ? `${ordinate.leftOff} levels left off for room` : '', leftOut, options.noScale ? '' : `1:${scale}`].filter(Boolean).join(' · ');
+  const notes = notesThatFit([
+    { text: openFront ? 'no bulkhead: open to the cab' : '', need: 3 },
+    { text: 'seen from inside', need: 1 },
+    { text: what, need: 2 },
+    { text: ordinate.leftOff ? `${ordinate.leftOff} level${ordinate.leftOff === 1 ? '' : 's'} left off for room` : '', need: Infinity },
+    { text: leftOut, need: Infinity },
+    { text: options.noScale ? '' : `1:${scale}`, need: Infinity },
+  ], TYPE.small, bx + W - ox);
   items.push({ type: 'text', x: bx + W, y: cy + 2.6, text: notes, size: TYPE.small, align: 'right', ink: 'soft' });
   return items;
 }

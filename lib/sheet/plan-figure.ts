@@ -8,13 +8,14 @@
  * left, x rearwards to the right, the left wall at the top (as in the editor).
  * Pure: a document in, sheet items out; must never render or measure the page.
  */
-import { kindSpec } from '../layout/kinds';
+import { KINDS, kindSpec } from '../layout/kinds';
 import { formatLength } from '../layout/units';
 import type { Arrangement, LayoutDoc, LengthUnit, Module } from '../layout';
 import { dimension, hatch, LINE, stipple, TYPE } from './drafting';
 import { onPaper } from './paper';
 import type { SheetItem } from './primitives';
-import { fit } from './typography';
+import { firstThatFits } from './typography';
+import { KIND_SHORT_NAMES } from '../symbols/kind-short-names';
 import { symbolItems } from './module-symbol';
 import { archBoxes, buildUpThickness, modulesIn, mountedInside, sectionReach } from '../layout/bay';
 import type { CheckReport } from '../checks/types';
@@ -27,6 +28,17 @@ import { planOpeningItems } from './plan-openings';
  * the overall length (top), the right wall's running dimension, the caption and the clearances
  * line (bottom).
  */
+
+/**
+ * A module's names for a drawing's label, longest first: its label, its kind's title, the kind's
+ * short name and abbreviation (lib/symbols/kind-short-names.ts); a kind this build does not know is
+ * named by its id. The label shown is the first that fits (`firstThatFits`), never one cut short.
+ */
+export function moduleNames(m: Pick<Module, 'kind' | 'label'>): string[] {
+  const known = (KIND_SHORT_NAMES as Record<string, { short: string; abbreviation: string } | undefined>)[m.kind];
+  const title = (KINDS as Record<string, { title: string } | undefined>)[m.kind]?.title ?? String(m.kind);
+  return [m.label, title, known?.short, known?.abbreviation].filter((n): n is string => Boolean(n && n.trim()));
+}
 export const PLAN_MARGIN = { left: 13, top: RUN_BAND + 5, right: 7, bottom: RUN_BAND + 8.1 } as const;
 
 /**
@@ -245,7 +257,7 @@ function numberTag(m: Module, x: number, y: number, w: number, h: number, number
   if (w >= 4 && h >= 3.5) {
     items.push({ type: 'rect', x: cx - 2.4, y: cy - 2.2, w: 4.8, h: 3.2, fill: 'white', stroke: 'ink', width: LINE.hair });
     items.push({ type: 'text', x: cx, y: cy + 0.2, text: tag, size: TYPE.small, font: 'sans-bold', align: 'center' });
-    const label = fit(m.label ?? kindSpec(m.kind).title, TYPE.small, w - 1.5);
+    const label = firstThatFits(moduleNames(m), TYPE.small, w - 1.5);
     if (h >= 9 && label) items.push({ type: 'text', x: cx, y: cy + 3.8, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
   } else {
     items.push({ type: 'text', x: x + w + 0.6, y: y + 2, text: tag, size: TYPE.small, font: 'sans-bold' });

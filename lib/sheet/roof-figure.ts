@@ -10,14 +10,13 @@
 import { formatLength } from '../layout/units';
 import type { LayoutDoc, LengthUnit, Module } from '../layout';
 import { mountOf } from '../layout/bay';
-import { KINDS } from '../layout/kinds';
 import { roofOpenings, ROOF_OPENING_WORDS } from '../layout/openings';
 import { hatch, LINE, TYPE } from './drafting';
 import { HORIZONTAL_ORDINATE_BAND, horizontalOrdinate, VERTICAL_ORDINATE_BAND, verticalOrdinate } from './ordinates';
 import { onPaper } from './paper';
-import { drawnModules, scheduleNumbers } from './plan-figure';
+import { drawnModules, moduleNames, scheduleNumbers } from './plan-figure';
 import type { SheetItem } from './primitives';
-import { fit } from './typography';
+import { firstThatFits, notesThatFit } from './typography';
 
 export const ROOF_TITLE = 'Roof plan';
 
@@ -45,8 +44,6 @@ export function roofModules(doc: Pick<LayoutDoc, 'modules'>): Module[] {
 /** Kinds compared by name, so kinds added later (a solar panel, a roof rail) draw their own way without a change here. */
 const isSolar = (m: Pick<Module, 'kind'>) => (m.kind as string) === 'solar-panel';
 const isRail = (m: Pick<Module, 'kind'>) => /rail/.test(m.kind as string);
-/** The kind's title; the kind's own name for one this build does not know yet. */
-export const kindTitle = (m: Pick<Module, 'kind'>): string => (KINDS as Record<string, { title: string } | undefined>)[m.kind]?.title ?? String(m.kind);
 
 /** `noScale`: leave the scale out of the caption (on screen the drawing is scaled to its panel). */
 export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, units: LengthUnit, noScale = false): SheetItem[] {
@@ -68,7 +65,7 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
       { type: 'line', x1: x, y1: y, x2: x + w, y2: y + h, width: LINE.hair, ink: 'soft' },
       { type: 'line', x1: x + w, y1: y, x2: x, y2: y + h, width: LINE.hair, ink: 'soft' },
     );
-    const word = fit(o.label?.trim() || ROOF_OPENING_WORDS[o.kind], TYPE.small, w - 1);
+    const word = firstThatFits([o.label, ROOF_OPENING_WORDS[o.kind], o.kind], TYPE.small, w - 1);
     if (word && h >= 4) items.push({ type: 'text', x: x + w / 2, y: y + h - 1, text: word, size: TYPE.small, align: 'center', ink: 'soft' });
     xs.push(o.x, o.x + o.length);
     ys.push(o.y, o.y + o.width);
@@ -92,7 +89,7 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
     if (w >= 4 && h >= 3.5) {
       items.push({ type: 'rect', x: x + w / 2 - 2.4, y: y + h / 2 - 2.2, w: 4.8, h: 3.2, fill: 'white', stroke: 'ink', width: LINE.hair });
       items.push({ type: 'text', x: x + w / 2, y: y + h / 2 + 0.2, text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold', align: 'center' });
-      const label = h >= 9 ? fit(m.label ?? kindTitle(m), TYPE.small, w - 1.5) : '';
+      const label = h >= 9 ? firstThatFits(moduleNames(m), TYPE.small, w - 1.5) : '';
       if (label) items.push({ type: 'text', x: x + w / 2, y: y + h / 2 + 3.8, text: label, size: TYPE.small, align: 'center', ink: 'soft' });
     } else {
       items.push({ type: 'text', x: x + w + 0.6, y: y + 2, text: String(numbers.get(m.id)), size: TYPE.small, font: 'sans-bold' });
@@ -118,7 +115,13 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
   items.push({ type: 'text', x: bx, y: cy, text: ROOF_TITLE, size: TYPE.caption, font: 'sans-bold' });
   const counts = `${roofOpenings(bay).length} roof opening${roofOpenings(bay).length === 1 ? '' : 's'}, ${roofModules(doc).length} on the roof`;
   const leftOff = along.leftOff + acrossRun.leftOff;
-  const notes = ['from above, front to the left', counts, leftOff ? `${leftOff} figures left off for room` : '', `${formatLength(bay.length, units)} × ${formatLength(bay.width, units)}`, noScale ? '' : `1:${scale}`].filter(Boolean).join(' · ');
+  const notes = notesThatFit([
+    { text: 'from above, front to the left', need: 1 },
+    { text: counts, need: 2 },
+    { text: leftOff ? `${leftOff} figure${leftOff === 1 ? '' : 's'} left off for room` : '', need: Infinity },
+    { text: `${formatLength(bay.length, units)} × ${formatLength(bay.width, units)}`, need: 3 },
+    { text: noScale ? '' : `1:${scale}`, need: Infinity },
+  ], TYPE.small, bx + L - ox);
   items.push({ type: 'text', x: bx + L, y: cy + 2.6, text: notes, size: TYPE.small, align: 'right', ink: 'soft' });
   return items;
 }

@@ -104,6 +104,35 @@ export function wrap(text: string, size: number, widthMm: number, face: FontFace
   return lines.length ? lines : [''];
 }
 
+/**
+ * The first of `names` (longest first: a label, the kind's title, its short name, its abbreviation)
+ * that fits `widthMm` whole, or '' when none does: a drawing's label is never cut short, it falls
+ * back to a shorter name or to none (the schedule number still names the thing).
+ */
+export function firstThatFits(names: readonly (string | undefined)[], size: number, widthMm: number, face: FontFace = 'sans'): string {
+  for (const name of names) {
+    const t = name === undefined ? '' : printable(name).trim();
+    if (t && textWidth(t, size, face) <= widthMm) return t;
+  }
+  return '';
+}
+
+/**
+ * A caption's notes joined with " · " in the order given, leaving out the least needed ones (lowest
+ * `need` first) until the line fits `widthMm`; the ones marked `need: Infinity` are always kept.
+ */
+export function notesThatFit(notes: readonly { text: string; need: number }[], size: number, widthMm: number, face: FontFace = 'sans'): string {
+  let kept = notes.filter((n) => n.text);
+  const line = () => kept.map((n) => n.text).join(' · ');
+  while (textWidth(line(), size, face) > widthMm) {
+    const droppable = kept.filter((n) => n.need !== Infinity);
+    if (!droppable.length) break;
+    const least = droppable.reduce((a, b) => (b.need < a.need ? b : a));
+    kept = kept.filter((n) => n !== least);
+  }
+  return line();
+}
+
 /** Shortens a text with "…" to fit `widthMm` (for table cells). */
 export function fit(text: string, size: number, widthMm: number, face: FontFace = 'sans'): string {
   const t = printable(text);
