@@ -4,19 +4,8 @@
 // and Escape puts it back too. Also: a click on "Build plan" straight after an edit is held until
 // the edit is saved, then followed — the edit is there after a reload.
 import { expect, test, type Page } from '@playwright/test';
-import { keepScreenshot, signIn } from './helpers';
+import { keepScreenshot, openNewLayout, signIn } from './helpers';
 
-/** A layout of this test's own (from the rear-bed starter), so no other test's layout changes. */
-async function newLayout(page: Page, name: string): Promise<string> {
-  const id = await page.evaluate(async (layoutName) => {
-    const res = await fetch('/api/layouts', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: layoutName, starterId: 'starter-rear-bed' }) });
-    if (res.status !== 201) throw new Error(`create answered ${res.status}: ${await res.text()}`);
-    return ((await res.json()) as { id: string }).id;
-  }, name);
-  await page.goto(`/layouts/${id}`);
-  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
-  return id;
-}
 
 async function selectFirstModule(page: Page) {
   await page.getByTestId('plan').focus();
@@ -26,7 +15,7 @@ async function selectFirstModule(page: Page) {
 
 test('an unreadable length shows why beside its field, lets the focus go, and goes back to the last valid value', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
-  await newLayout(page, 'Fields — invalid values');
+  await openNewLayout(page, 'Fields — invalid values');
   await selectFirstModule(page);
   const length = page.getByTestId('details-length');
   const before = await length.inputValue();
@@ -65,7 +54,7 @@ test('an unreadable length shows why beside its field, lets the focus go, and go
 
 test('a click on Build plan straight after an edit waits for the save, then opens the build plan with the edit kept', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
-  const id = await newLayout(page, 'Fields — leave while saving');
+  const id = await openNewLayout(page, 'Fields — leave while saving');
   await selectFirstModule(page);
   const length = page.getByTestId('details-length');
   const before = Number(await length.inputValue());

@@ -13,3 +13,16 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
 export async function keepScreenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: `artifacts/screenshots/${name}.png`, fullPage: false });
 }
+
+/**
+ * A layout of the test's own, made through the API from a starter layout or a bay template, then
+ * opened in the editor: so no other test's layout changes. Returns its id.
+ */
+export async function openNewLayout(page: Page, name: string, from: { starterId: string } | { bayTemplateId: string } = { starterId: 'starter-rear-bed' }): Promise<string> {
+  const created = await page.request.post('/api/layouts', { data: { name, ...from } });
+  expect(created.status(), `creating "${name}"`).toBe(201);
+  const { id } = (await created.json()) as { id: string };
+  await page.goto(`/layouts/${id}`);
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  return id;
+}

@@ -1,24 +1,13 @@
 // Openings in the layout editor, as a designer uses them: add a window from the Parts shelf's
 // Openings group, find it drawn on the plan and select it by clicking its mark, type its Position
 // in Details, and undo the edit to see the window go back where it was.
-import { expect, test, type Page } from '@playwright/test';
-import { keepScreenshot, signIn } from './helpers';
+import { expect, test } from '@playwright/test';
+import { keepScreenshot, openNewLayout, signIn } from './helpers';
 
-/** A layout of this test's own (from the rear-bed starter), so no other test's layout changes. */
-async function newLayout(page: Page, name: string): Promise<string> {
-  const id = await page.evaluate(async (layoutName) => {
-    const res = await fetch('/api/layouts', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: layoutName, starterId: 'starter-rear-bed' }) });
-    if (res.status !== 201) throw new Error(`create answered ${res.status}: ${await res.text()}`);
-    return ((await res.json()) as { id: string }).id;
-  }, name);
-  await page.goto(`/layouts/${id}`);
-  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
-  return id;
-}
 
 test('a window added from the shelf is drawn, selected by a click on its mark, moved in Details, and undo puts it back', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
-  await newLayout(page, 'Openings — window');
+  await openNewLayout(page, 'Openings — window');
   const listed = page.getByTestId('plan-openings').locator('li[data-opening-type="window"]');
   const before = await listed.count();
 
@@ -70,7 +59,7 @@ test('a window added from the shelf is drawn, selected by a click on its mark, m
 test('a heater exhaust by the sliding door fails its clearance; the finding selects it, and moving it in Details clears it', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
   // The rear-bed starter: 3800 mm long, a sliding door on the right wall from 150 to 1350 mm.
-  await newLayout(page, 'Openings — exhaust');
+  await openNewLayout(page, 'Openings — exhaust');
   await page.getByRole('button', { name: 'Add heater exhaust' }).click();
   const form = page.getByTestId('opening-form');
   await expect(form.getByRole('heading', { name: 'Heater exhaust' })).toBeVisible();

@@ -5,7 +5,7 @@
 // plan sheet whose PDF draws the left wall's elevation true to scale.
 import fs from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { keepScreenshot, signIn } from './helpers';
+import { keepScreenshot, openNewLayout, signIn } from './helpers';
 import { readPdf } from '../sheet/read-pdf';
 
 const PT = 72 / 25.4; // PDF points per mm (ISO 32000-1 §8.3.2.3: 1/72 inch; 25.4 mm per inch)
@@ -32,11 +32,7 @@ test('a window, a roof vent, two panels and the exhaust: elevations, roof plan, 
   await signIn(page, 'ivo@saltmarsh.test');
   // The L2H2 template (public/templates/bay-l2h2.json, invented): 3100 × 1800 × 2000 mm, a sliding door
   // on the right wall from 150 to 1350 mm, a roof vent 400 × 400 at 450/450, no modules.
-  const created = await page.request.post('/api/layouts', { data: { name: `Walls and roof ${Date.now().toString(36)}`, bayTemplateId: 'l2h2' } });
-  expect(created.status()).toBe(201);
-  const { id } = (await created.json()) as { id: string };
-  await page.goto(`/layouts/${id}`);
-  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  const id = await openNewLayout(page, `Walls and roof ${Date.now().toString(36)}`, { bayTemplateId: 'l2h2' });
   const opening = page.getByTestId('opening-form');
 
   // 1. A window in the left wall: 1200 mm from its front end, sill 900 mm, 800 × 450 mm.
