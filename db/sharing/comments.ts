@@ -17,7 +17,7 @@ import { comments } from '../schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../errors';
 import type { Actor, StudioRole } from '../actor';
 import { ARRANGEMENTS, type Arrangement, type LayoutDoc } from '../../lib/layout/schema';
-import { nearestThing, openingPlanPoint } from '../../lib/layout/nearest';
+import { nearestFinder, openingPlanPoint } from '../../lib/layout/nearest';
 import { loadLayoutFor, type LayoutAccessWithDoc } from '../access';
 import { isId } from '../ids';
 
@@ -68,6 +68,16 @@ function commentDto(r: Row, actor: Actor): CommentDto {
 
 function threads(rows: Row[], actor: Actor, doc: LayoutDoc): ThreadDto[] {
   const roots = rows.filter((r) => !r.parentId);
+  // Replies by thread, and one nearest-thing finder per arrangement: linear in the rows, not rows × threads.
+  const replies = new Map<string, Row[]>();
+  for (const r of rows) {
+    if (!r.parentId) continue;
+    const list = replies.get(r.parentId);
+    if (list) list.push(r);
+    else replies.set(r.parentId, [r]);
+  }
+  const finders = new Map<Arrangement, ReturnType<typeof nearestFinder>>();
+  const finder = (a: Arrangement) => finders.get(a) ?? finders.set(a, nearestFinder(doc, a)).get(a)!;
   return roots.map((root) => {
     const arrangement = (ARRANGEMENTS as readonly string[]).includes(root.arrangement ?? '') ? (root.arrangement as Arrangement) : 'travel';
     const x = root.x ?? 0;
@@ -78,8 +88,8 @@ function threads(rows: Row[], actor: Actor, doc: LayoutDoc): ThreadDto[] {
       x,
       y,
       settled: root.resolvedAt ? { at: root.resolvedAt.toISOString() } : null,
-      near: nearestThing(doc, arrangement, x, y)?.name ?? null,
-      replies: rows.filter((r) => r.parentId === root.id).map((r) => commentDto(r, actor)),
+      near: finder(arrangement)(x, y)?.name ?? null,
+      replies: (replies.get(root.id) ?? []).map((r) => commentDto(r, actor)),
     };
   });
 }

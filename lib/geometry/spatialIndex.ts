@@ -163,3 +163,34 @@ export class RectIndex {
     return out.sort((a, b) => a - b);
   }
 }
+
+/** Distance from a point to a rectangle's edge, 0 inside it. */
+export function distanceToRect(x: number, y: number, r: Rect): number {
+  return Math.hypot(Math.max(r.x0 - x, 0, x - r.x1), Math.max(r.y0 - y, 0, y - r.y1));
+}
+
+/**
+ * Asks, point after point, which rectangle is nearest (flatbush's nearest-neighbour search), so n
+ * points over m rectangles cost about (n + m) log m rather than n × m. Identical rectangles are
+ * indexed once (the first of them answers), so a pile of them on one spot cannot slow a search.
+ * Returns the rectangle's index and its distance, or null when none lies within `limit`.
+ */
+export function nearestRectFinder(rects: readonly Rect[]): (x: number, y: number, limit?: number) => { index: number; distance: number } | null {
+  const firstOf = new Map<string, number>();
+  const kept: number[] = [];
+  rects.forEach((r, i) => {
+    const key = `${r.x0},${r.y0},${r.x1},${r.y1}`;
+    if (!firstOf.has(key)) {
+      firstOf.set(key, i);
+      kept.push(i);
+    }
+  });
+  const index = buildIndex(kept.map((i) => rects[i]));
+  return (x, y, limit = Infinity) => {
+    if (!index) return null;
+    const [found] = index.neighbors(x, y, 1, limit);
+    if (found === undefined) return null;
+    const i = kept[found];
+    return { index: i, distance: distanceToRect(x, y, rects[i]) };
+  };
+}

@@ -1,7 +1,7 @@
 // Pairing and clustering through flatbush, checked against brute force on random sets.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { clusterByGap, overlappingPairs, rectGap, rectsOverlap } from '@/lib/geometry';
+import { clusterByGap, distanceToRect, nearestRectFinder, overlappingPairs, rectGap, rectsOverlap } from '@/lib/geometry';
 import { rectsArb } from './arbitraries';
 
 describe('overlappingPairs', () => {
@@ -48,5 +48,34 @@ describe('clusterByGap', () => {
         expect(seen.size).toBe(g.length);
       }
     }), { numRuns: 150 });
+  });
+});
+
+describe('nearestRectFinder', () => {
+  it('finds the nearest rectangle and its distance, within the limit, by hand', () => {
+    const rects = [{ x0: 0, y0: 0, x1: 10, y1: 10 }, { x0: 40, y0: 0, x1: 50, y1: 10 }];
+    const nearest = nearestRectFinder(rects);
+    expect(nearest(5, 5)).toEqual({ index: 0, distance: 0 }); // inside
+    expect(nearest(34, 5)).toEqual({ index: 1, distance: 6 }); // 40 − 34
+    // Between them, above: 25 − 10 = 15 across to the first, 14 − 10 = 4 up; the second is 40 − 25 = 15 across too.
+    expect(nearest(25, 14)!.distance).toBeCloseTo(Math.hypot(15, 4), 9);
+    expect(nearest(34, 5, 5)).toBeNull(); // 6 mm away, 5 allowed
+    expect(nearest(34, 5, 6)).toEqual({ index: 1, distance: 6 }); // the limit counts as within
+    expect(nearestRectFinder([])(0, 0)).toBeNull();
+  });
+  it('gives the brute-force nearest distance for any set and point (fast-check)', () => {
+    fc.assert(fc.property(rectsArb(1, 40, 3000, 600), fc.integer({ min: -500, max: 3500 }), fc.integer({ min: -500, max: 3500 }), (rects, x, y) => {
+      const best = Math.min(...rects.map((r) => distanceToRect(x, y, r)));
+      const found = nearestRectFinder(rects)(x, y)!;
+      expect(found.distance).toBeCloseTo(best, 9);
+      expect(distanceToRect(x, y, rects[found.index])).toBeCloseTo(best, 9);
+    }), { numRuns: 200 });
+  });
+  it('answers a pile of 5000 identical rectangles (the worst input) by the first of them', () => {
+    const pile = Array.from({ length: 5000 }, () => ({ x0: 100, y0: 100, x1: 700, y1: 500 }));
+    pile.push({ x0: 900, y0: 100, x1: 1000, y1: 200 });
+    const nearest = nearestRectFinder(pile);
+    expect(nearest(0, 0)).toEqual({ index: 0, distance: Math.hypot(100, 100) });
+    expect(nearest(1100, 150)).toEqual({ index: 5000, distance: 100 });
   });
 });
