@@ -14,7 +14,7 @@ import { roofOpenings, ROOF_OPENING_WORDS } from '../layout/openings';
 import { hatch, LINE, TYPE } from './drafting';
 import { HORIZONTAL_ORDINATE_BAND, horizontalOrdinate, VERTICAL_ORDINATE_BAND, verticalOrdinate } from './ordinates';
 import { onPaper } from './paper';
-import { drawnModules, moduleNames, scheduleNumbers } from './plan-figure';
+import { moduleNames, scheduleNumbers } from './plan-figure';
 import type { SheetItem } from './primitives';
 import { firstThatFits, notesThatFit } from './typography';
 
@@ -36,9 +36,21 @@ export function roofSize(doc: Pick<LayoutDoc, 'bay'>, scale: number): { width: n
   };
 }
 
-/** The modules mounted on the roof, in schedule order. */
+/**
+ * At most this many roof-mounted modules are drawn on the roof plan, each with its cell grid and
+ * ordinates (a real roof carries a dozen or so things); the caption says how many are left out.
+ * Our own drawing choice, as the elevations' ELEVATION_MODULE_LIMIT: it keeps the sheet bounded.
+ */
+export const ROOF_MODULE_LIMIT = 100;
+
+/** Every module mounted on the roof, in schedule order. */
+export function allRoofModules(doc: Pick<LayoutDoc, 'modules'>): Module[] {
+  return doc.modules.filter((m) => mountOf(m) === 'roof');
+}
+
+/** The modules the roof plan draws: the first ROOF_MODULE_LIMIT mounted on the roof. */
 export function roofModules(doc: Pick<LayoutDoc, 'modules'>): Module[] {
-  return drawnModules(doc.modules.filter((m) => mountOf(m) === 'roof')).drawn;
+  return allRoofModules(doc).slice(0, ROOF_MODULE_LIMIT);
 }
 
 /** Kinds compared by name, so kinds added later (a solar panel, a roof rail) draw their own way without a change here. */
@@ -113,12 +125,16 @@ export function drawRoof(doc: LayoutDoc, ox: number, oy: number, scale: number, 
 
   const cy = by + W + 4.5;
   items.push({ type: 'text', x: bx, y: cy, text: ROOF_TITLE, size: TYPE.caption, font: 'sans-bold' });
-  const counts = `${roofOpenings(bay).length} roof opening${roofOpenings(bay).length === 1 ? '' : 's'}, ${roofModules(doc).length} on the roof`;
+  const onRoof = allRoofModules(doc).length;
+  const drawn = roofModules(doc).length;
+  const counts = `${roofOpenings(bay).length} roof opening${roofOpenings(bay).length === 1 ? '' : 's'}, ${onRoof} on the roof`;
+  const leftOut = onRoof > drawn ? `only the first ${drawn} of ${onRoof} on the roof drawn` : '';
   const leftOff = along.leftOff + acrossRun.leftOff;
   const notes = notesThatFit([
     { text: 'from above, front to the left', need: 1 },
     { text: counts, need: 2 },
     { text: leftOff ? `${leftOff} figure${leftOff === 1 ? '' : 's'} left off for room` : '', need: Infinity },
+    { text: leftOut, need: Infinity },
     { text: `${formatLength(bay.length, units)} × ${formatLength(bay.width, units)}`, need: 3 },
     { text: noScale ? '' : `1:${scale}`, need: Infinity },
   ], TYPE.small, bx + L - ox);

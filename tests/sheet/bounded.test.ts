@@ -56,6 +56,27 @@ describe('a sheet of 1,000 modules', () => {
   });
 });
 
+describe('a sheet of 5,000 solar panels on the roof, each a different size (the roof plan\'s worst input)', () => {
+  const base = stackedOnOneSpot(5000);
+  const doc: LayoutDoc = {
+    ...base,
+    modules: base.modules.map((m, i) => ({ ...m, kind: 'solar-panel', mount: 'roof', x: (i * 7) % 2000, y: (i * 13) % 1000, length: 1480 + (i % 50), width: 670 + (i % 30), height: 35 }) as LayoutDoc['modules'][number]),
+  };
+  const sheet = sheetOf(doc);
+
+  it('draws the first 100 on the roof plan and says how many are left out', () => {
+    const said = texts(sheet.pages);
+    expect(said.some((t) => t.includes('only the first 100 of 5000 on the roof drawn'))).toBe(true);
+    const roofMarks = sheet.pages.flatMap((p) => p.items).filter((i) => i.type === 'rect' && i.tag?.startsWith('roof:module:'));
+    expect(roofMarks).toHaveLength(100);
+  });
+
+  it('keeps its print view under 2 MB', () => {
+    const svg = sheet.pages.map((p, i) => sheetPageSvg(p, `s${i + 1}-`)).join('');
+    expect(svg.length).toBeLessThan(2 * MB);
+  });
+});
+
 describe('the SVG writer', () => {
   const page: SheetPage = {
     width: 297,
