@@ -124,7 +124,7 @@ export function modulesAgainst(doc: LayoutDoc, wall: ElevationWall, arrangement?
  * Modules one elevation draws at most, the first by schedule number (common practice, no source: a
  * van's wall holds a few tens of modules; a hundred is far past any real one). Beyond it the
  * caption says how many are left out, so four elevations of a layout of thousands of modules stay
- * a small part of the sheet (the print view of a thousand-module sheet stays under 2 MB).
+ * a small part of the sheet (the print view of an 800-module sheet stays under 2 MB).
  */
 export const ELEVATION_MODULE_LIMIT = 100;
 

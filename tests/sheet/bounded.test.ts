@@ -21,15 +21,15 @@ describe('a sheet of 5,000 modules on one spot', () => {
   const doc = stackedOnOneSpot(5000);
   const sheet = sheetOf(doc);
 
-  it('draws the first 1,000 modules in each plan and in the section, and says so under each', () => {
+  it('draws the first 800 modules in each plan and in the section, and says so under each', () => {
     const said = texts(sheet.pages);
-    // Every module is in all three arrangements: three plans and the section each leave 4,000 out.
-    expect(said.filter((t) => t === 'Only the first 1000 of 5000 modules are drawn; 4000 more are left out of this plan.')).toHaveLength(3);
-    expect(said.filter((t) => t === 'Only the first 1000 of 5000 modules are drawn; 4000 more are left out of this section.')).toHaveLength(1);
-    // Module 1000 is drawn in each plan (its number tag; the section numbers only modules at least
-    // 4 mm wide on paper, and these are 0.2 mm), module 1001 nowhere; the schedule lists the first 300.
-    expect(said.filter((t) => t === '1000')).toHaveLength(3);
-    expect(said.filter((t) => t === '1001')).toHaveLength(0);
+    // Every module is in all three arrangements: three plans and the section each leave 5000 − 800 = 4,200 out.
+    expect(said.filter((t) => t === 'Only the first 800 of 5000 modules are drawn; 4200 more are left out of this plan.')).toHaveLength(3);
+    expect(said.filter((t) => t === 'Only the first 800 of 5000 modules are drawn; 4200 more are left out of this section.')).toHaveLength(1);
+    // Module 800 is drawn in each plan (its number tag; the section numbers only modules at least
+    // 4 mm wide on paper, and these are 0.2 mm), module 801 nowhere; the schedule lists the first 300.
+    expect(said.filter((t) => t === '800')).toHaveLength(3);
+    expect(said.filter((t) => t === '801')).toHaveLength(0);
   });
 
   it('stays a bounded drawing: under 15,000 marks, a PDF and an SVG print view each under 2 MB', async () => {
@@ -42,15 +42,15 @@ describe('a sheet of 5,000 modules on one spot', () => {
   }, 30_000);
 });
 
-describe('a sheet of 1,000 modules', () => {
-  const sheet = sheetOf(maximumBuildUp(1000));
+describe('a sheet of 800 modules (the most a plan draws)', () => {
+  const sheet = sheetOf(maximumBuildUp(800));
 
   it('draws every module (nothing left out) and its print view is under 2 MB', () => {
     expect(texts(sheet.pages).some((t) => t.startsWith('Only the first'))).toBe(false);
     // Three plans and the section; the wall elevations draw only the first 100 modules against each
-    // wall (ELEVATION_MODULE_LIMIT), and say so, so module 1000 is not on them.
-    expect(texts(sheet.pages).filter((t) => t === '1000')).toHaveLength(4);
-    expect(texts(sheet.pages).filter((t) => /only the first 100 of 1000 modules against it drawn/.test(t))).toHaveLength(2);
+    // wall (ELEVATION_MODULE_LIMIT), and say so, so module 800 is not on them.
+    expect(texts(sheet.pages).filter((t) => t === '800')).toHaveLength(4);
+    expect(texts(sheet.pages).filter((t) => /only the first 100 of 800 modules against it drawn/.test(t))).toHaveLength(2);
     const svg = sheet.pages.map((p, i) => sheetPageSvg(p, `s${i + 1}-`)).join('');
     expect(svg.length).toBeLessThan(2 * MB);
   });
