@@ -25,10 +25,13 @@ export function LayoutStateBadge({ state, letter, changedSince }: { state: Layou
   const { className, Icon } = LOOK[state];
   if (changedSince && letter && state !== 'draft') {
     return (
-      <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded-sm border px-1.5 py-0.5 text-xs font-medium ${className}`} data-state={state} data-changed-since={letter}>
-        <Icon size={12} aria-hidden="true" />
-        {ISSUE_STATE_WORD[state]} <span className="font-mono">{letter}</span>{' · '}
-        <Link className="underline underline-offset-2 hover:text-copper" href={changedSinceHref(changedSince.layoutId, letter)} title={`What changed since revision ${letter}`}>
+      // Wraps between its words where the column is narrow (a phone); "changed since" stays whole.
+      <span className={`inline-flex flex-wrap items-center gap-x-1 rounded-sm border px-1.5 py-0.5 text-xs font-medium ${className}`} data-state={state} data-changed-since={letter}>
+        <span className="inline-flex items-center gap-1">
+          <Icon size={12} aria-hidden="true" />
+          {ISSUE_STATE_WORD[state]} <span className="font-mono">{letter}</span>{' ·'}
+        </span>{' '}
+        <Link className="whitespace-nowrap underline underline-offset-2 hover:text-copper" href={changedSinceHref(changedSince.layoutId, letter)} title={`What changed since revision ${letter}`}>
           {CHANGED_SINCE}
         </Link>
       </span>

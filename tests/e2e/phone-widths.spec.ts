@@ -40,6 +40,10 @@ async function workshopLayout(browser: Browser): Promise<{ id: string; name: str
   const { id, version } = await created.json();
   expect((await owner.request.post(`/api/layouts/${id}/revisions`, { data: { note: 'First full layout' } })).status()).toBe(201);
   expect((await owner.request.post(`/api/layouts/${id}/quote`, { data: { layoutVersion: version, depositPct: 25, confirmUnapproved: true } })).status()).toBe(201);
+  // Changed after revision A: its state reads "Issued for approval A · changed since", the longest the table shows.
+  const cur = await (await owner.request.get(`/api/layouts/${id}`)).json();
+  const doc = { ...cur.doc, modules: cur.doc.modules.map((m: { x: number }, i: number) => (i === 0 ? { ...m, x: m.x + 10 } : m)) };
+  expect((await owner.request.put(`/api/layouts/${id}`, { data: { doc }, headers: { 'if-match': String(cur.version) } })).status()).toBe(200);
   await owner.context().close();
   return { id, name };
 }
@@ -55,6 +59,7 @@ test('the workshop screens fit a phone, and what a hidden column says is found o
     // The full layouts table: the layout's row, its client folded under the name, no Last change column.
     const row = page.getByRole('row').filter({ has: page.getByRole('link', { name: layout.name, exact: true }) });
     await expect(row).toBeVisible({ timeout: 30_000 });
+    await expect(row.locator('[data-changed-since="A"]')).toContainText('Issued for approval A · changed since');
     await expect(row.getByTestId('phone-folded')).toContainText('Client:');
     await expect(row.getByTestId('phone-folded')).toContainText('Priya Nair');
     await expect(page.getByRole('columnheader', { name: 'Last change' })).toBeHidden();
