@@ -98,7 +98,8 @@ export function SavedVersions({ layoutId, layoutName, canEdit }: { layoutId: str
         cell: (c) => canEdit && !c.row.original.current ? (
           <button type="button" className="btn-quiet whitespace-nowrap text-sm" onClick={() => setAsked(c.row.original)}
             aria-label={`Restore version ${c.row.original.version} as the newest save`}>
-            <History size={14} aria-hidden="true" /> Restore…
+            {/* On a phone the icon alone (its name is the aria-label), so the table fits 360 px. */}
+            <History size={14} aria-hidden="true" /> <span className="max-[480px]:hidden">Restore…</span>
           </button>
         ) : null,
       }),
