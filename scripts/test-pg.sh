@@ -10,4 +10,7 @@ start_output="$(scripts/pg-test-server.sh start)" || { echo "Could not start Pos
 eval "$start_output"
 trap 'scripts/pg-test-server.sh stop; rm -rf "$PG_TEST_DIR"' EXIT
 echo "Running the API and data-layer tests on PostgreSQL at $TEST_DATABASE_URL (the fuzz at 100 runs a route here; npm test runs it at 1000)"
-FUZZ_RUNS="${FUZZ_RUNS:-100}" TEST_DATABASE_URL="$TEST_DATABASE_URL" npx vitest run tests/api tests/sharing tests/uploads tests/planning-api tests/hardening --passWithNoTests
+# `npm run test:pg -- tests/api/sign-in-throttle.test.ts` runs only the files named.
+suites=(tests/api tests/sharing tests/uploads tests/planning-api tests/hardening)
+[ "$#" -gt 0 ] && suites=("$@")
+FUZZ_RUNS="${FUZZ_RUNS:-100}" TEST_DATABASE_URL="$TEST_DATABASE_URL" npx vitest run "${suites[@]}" --passWithNoTests

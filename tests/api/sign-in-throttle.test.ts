@@ -2,7 +2,7 @@
 // against lockout attacks ("ever increasing delays between attempts", "IP address
 // restrictions", no more than 100 failed attempts per hour on one account). Every attempt is
 // reserved in the database before the password is compared.
-import { beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { PEER_HEADER } from '@/server/auth/address';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authenticate, SIGN_IN_FAILURE_LIMIT, SIGN_IN_RULES } from '@/db/accounts';
@@ -21,6 +21,13 @@ beforeAll(async () => {
 beforeEach(async () => {
   await clearAllThrottles();
   vi.restoreAllMocks();
+  // The clock stands still during each test, so the 1 s wait the tenth failure earns has not
+  // run out when the eleventh attempt is counted, however slowly a loaded machine (or a pool
+  // of real PostgreSQL connections) gets to it. The tests that move time pass their own dates.
+  vi.useFakeTimers({ toFake: ['Date'] });
+});
+afterEach(() => {
+  vi.useRealTimers();
 });
 
 describe('sign-in throttling (OWASP ASVS 4.0.3 V2.2.1)', () => {
