@@ -19,12 +19,14 @@ import { OpeningsList } from './OpeningsList';
 import { usePlanPointer } from './usePlanPointer';
 import { useCanvasFonts } from './useCanvasFonts';
 import type { EditorExtensions } from '../types';
+import type Konva from 'konva';
 
 const NONE: string[] = [];
 
 export function PlanStage({ failing, onContextMenu, describedBy, overlay, underlay }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string; overlay?: EditorExtensions['planOverlay']; underlay?: EditorExtensions['planUnderlay'] }) {
   const api = useEditorApi();
   const box = useRef<HTMLDivElement>(null);
+  const stage = useRef<Konva.Stage>(null);
   const [size, setSize] = useState<{ w: number; h: number } | null>(null);
   const { fonts, ready } = useCanvasFonts();
   const s = useEditor(
@@ -58,7 +60,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
   }, [api]);
 
   const menu = useCallback((x: number, y: number) => onContextMenu(x, y), [onContextMenu]);
-  usePlanPointer(box, api, menu);
+  usePlanPointer(box, api, menu, stage);
 
   const moving = s.gestureKind === 'move' || s.gestureKind === 'resize';
   return (
@@ -74,7 +76,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       className="relative h-full w-full overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-copper focus-visible:ring-inset touch-none select-none"
     >
       {size && (
-        <Stage width={size.w} height={size.h}>
+        <Stage ref={stage} width={size.w} height={size.h}>
           {underlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           {/* The sheet and the modules share one layer: Konva advises at most 3–5 layers per stage. */}
           <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">

@@ -3,6 +3,8 @@
  * Pointer input on the plan: click / shift-click / marquee selection, move by drag, resize by
  * handles, zoom by wheel and pinch, pan by space-drag or the middle button, drops from the Parts
  * shelf, and the context menu. Hit testing is done in mm against the store (no Konva hit graph).
+ * Pan and zoom are shown by moving the stage as one picture and reach the store when the gesture
+ * ends (viewPreview.ts), so a tablet keeps its frame rate while two fingers zoom.
  * Each gesture is begun, dragged and committed through store actions; Escape (a command)
  * cancels it, and the rest of that pointer stroke is ignored. Must never write the document
  * directly.
@@ -12,7 +14,8 @@ import { toast } from 'sonner';
 import { KINDS } from '@/lib/layout/kinds';
 import type { ModuleKind } from '@/lib/layout/schema';
 import type { EditorStore } from '../store/editorStore';
-import { toWorld, screenToMm } from '../geometry/viewport';
+import { toWorld, screenToMm, panBy, zoomAt } from '../geometry/viewport';
+import { createViewPreview, type PreviewStage } from './viewPreview';
 import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitTest';
 import { HANDLE_PX } from './OverlayLayer';
 import { isTypingTarget } from '../commands/keyboard';
@@ -37,6 +40,8 @@ function openingUnder(s: EditorState, x: number, y: number, touch: boolean): Ope
 }
 
 export const KIND_DRAG_TYPE = 'application/x-baywright-kind';
+/** The wheel's zoom reaches the store this long after its last step (common practice, no source). */
+const WHEEL_SETTLE_MS = 150;
 /** Pointer travel (px) before a press on a module becomes a drag rather than a click; a finger wobbles more than a mouse. */
 const DRAG_START_PX = 3;
 const TOUCH_DRAG_START_PX = 8;
@@ -52,7 +57,7 @@ type Stroke =
   | { mode: 'opening-press'; startX: number; startY: number; id: string; touch: boolean }
   | { mode: 'ignored' };
 
-export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api: EditorStore, onContextMenu: (x: number, y: number) => void) {
+export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api: EditorStore, onContextMenu: (x: number, y: number) => void, stage?: RefObject<PreviewStage | null>) {
   const stroke = useRef<Stroke | null>(null);
   const space = useRef(false);
   const touches = useRef(new Map<number, { x: number; y: number }>());
@@ -67,11 +72,42 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el.setAttribute('data-stroke', next?.mode ?? 'none');
     };
     el.setAttribute('data-stroke', 'none');
+    let committing = false;
+    const view = createViewPreview({
+      committed: () => api.getState().viewport,
+      commitTo: (v) => {
+        committing = true;
+        try {
+          api.getState().setViewport(v);
+        } finally {
+          committing = false;
+        }
+      },
+      stage: () => stage?.current ?? null,
+      announce: (v) => {
+        el.setAttribute('data-scale', String(v.scale));
+        el.setAttribute('data-origin', `${Math.round(v.originX)},${Math.round(v.originY)}`);
+      },
+    });
+    let wheelSettle: ReturnType<typeof setTimeout> | null = null;
+    const commitView = () => {
+      if (wheelSettle) clearTimeout(wheelSettle);
+      wheelSettle = null;
+      view.commit();
+    };
+    // Fit, actual size or a resize while a wheel zoom settles: the store's new view wins.
+    const unsubscribe = api.subscribe((st, prev) => {
+      if (!committing && st.viewport !== prev.viewport && view.pending()) {
+        if (wheelSettle) clearTimeout(wheelSettle);
+        wheelSettle = null;
+        view.discard();
+      }
+    });
     const local = (e: { clientX: number; clientY: number }) => {
       const r = el.getBoundingClientRect();
       return { x: e.clientX - r.left, y: e.clientY - r.top };
     };
-    const world = (p: { x: number; y: number }) => toWorld(api.getState().viewport, p.x, p.y);
+    const world = (p: { x: number; y: number }) => toWorld(view.current(), p.x, p.y);
     const report = (r: { ok: boolean; error?: string }) => {
       if (!r.ok && r.error) toast.error(r.error);
     };
@@ -94,6 +130,8 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     }
 
     function onPointerDown(e: PointerEvent) {
+      // A new stroke starts from the view on show; a second finger carries on the first one's pan.
+      if (view.pending() && !(e.pointerType === 'touch' && touches.current.size === 1)) commitView();
       if (e.pointerType === 'touch') {
         touches.current.set(e.pointerId, local(e));
         if (touches.current.size === 2) {
@@ -177,9 +215,8 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
           const [a, b] = [...touches.current.values()];
           const dist = Math.hypot(a.x - b.x, a.y - b.y);
           const midX = (a.x + b.x) / 2, midY = (a.y + b.y) / 2;
-          const s = api.getState();
-          s.panBy(midX - pinch.current.midX, midY - pinch.current.midY);
-          if (pinch.current.dist > 0) s.zoomBy(dist / pinch.current.dist, midX, midY);
+          const panned = panBy(view.current(), midX - pinch.current.midX, midY - pinch.current.midY);
+          view.show(pinch.current.dist > 0 ? zoomAt(panned, dist / pinch.current.dist, midX, midY) : panned);
           pinch.current = { dist, midX, midY };
           return;
         }
@@ -189,7 +226,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       if (!st) return hoverCursor(p);
       const s = api.getState();
       if (st.mode === 'pan') {
-        s.panBy(p.x - st.lastX, p.y - st.lastY);
+        view.show(panBy(view.current(), p.x - st.lastX, p.y - st.lastY));
         setStroke({ ...st, lastX: p.x, lastY: p.y });
         return;
       }
@@ -218,6 +255,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       }
       const st = stroke.current;
       setStroke(null);
+      if (view.pending() && touches.current.size < 2) commitView();
       if (el!.hasPointerCapture(e.pointerId)) el!.releasePointerCapture(e.pointerId);
       if (st?.mode === 'gesture') report(api.getState().commitGesture());
       // A plain click (no drag) on one of several selected modules selects just that one.
@@ -230,6 +268,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       touches.current.delete(e.pointerId);
       pinch.current = null;
       setStroke(null);
+      if (touches.current.size < 2) commitView();
       api.getState().cancelGesture();
     }
 
@@ -239,7 +278,9 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       // Pinch on a trackpad arrives as ctrl+wheel with small deltas.
       const k = e.ctrlKey ? 0.01 : 0.0015;
       const delta = e.deltaMode === 1 ? e.deltaY * 16 : e.deltaY;
-      api.getState().zoomBy(Math.exp(-delta * k), p.x, p.y);
+      view.show(zoomAt(view.current(), Math.exp(-delta * k), p.x, p.y));
+      if (wheelSettle) clearTimeout(wheelSettle);
+      wheelSettle = setTimeout(commitView, WHEEL_SETTLE_MS);
     }
 
     function onContext(e: MouseEvent) {
@@ -270,6 +311,11 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el!.focus({ preventScroll: true });
     }
 
+    // Keyboard commands (zoom, fit, nudges) work on the store's view: give it the one on show
+    // first (capturing, so before any command's listener).
+    function commitBeforeKey() {
+      if (view.pending()) commitView();
+    }
     function onKeyDown(e: KeyboardEvent) {
       if (e.key === ' ' && !isTypingTarget(e.target as HTMLElement)) {
         if (!space.current) {
@@ -294,6 +340,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     el.addEventListener('contextmenu', onContext);
     el.addEventListener('dragover', onDragOver);
     el.addEventListener('drop', onDrop);
+    window.addEventListener('keydown', commitBeforeKey, true);
     window.addEventListener('keydown', onKeyDown);
     window.addEventListener('keyup', onKeyUp);
     return () => {
@@ -305,9 +352,13 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el.removeEventListener('contextmenu', onContext);
       el.removeEventListener('dragover', onDragOver);
       el.removeEventListener('drop', onDrop);
+      window.removeEventListener('keydown', commitBeforeKey, true);
       window.removeEventListener('keydown', onKeyDown);
       window.removeEventListener('keyup', onKeyUp);
       stopLongPress();
+      if (wheelSettle) clearTimeout(wheelSettle);
+      unsubscribe();
+      view.dispose();
     };
-  }, [container, api, onContextMenu]);
+  }, [container, api, onContextMenu, stage]);
 }
