@@ -6,8 +6,11 @@
  * - it is a real answer: 200 (a sheet whose bay fits no paper: 422 with the reason), never the
  *   503 the work pool gives when a job runs past its time limit or a worker dies at its 512 MB
  *   heap cap (BAYWRIGHT_WORKER_HEAP_MB) — so a strict status is also the workers' heap check;
- * - JSON answers, PDFs and the print view's SVG markup are under 2 MB, and this process's heap
- *   stays under 512 MB (hard limits);
+ * - JSON answers and PDFs are under 2 MB, and this process's heap stays under 512 MB (hard
+ *   limits). The print view's page carries its SVG markup about 2.35 times (the HTML, then the
+ *   server components' payload that hydrates it, its quotes escaped): measured on 2026-12-04 by
+ *   `npm run bench:hostile` as 3,990 KB of page for 1,733 KB of markup, 2,623 for 1,126 and
+ *   1,977 for 833. So the markup must stay under 2 MB ÷ 2.4 for the page to stay under 2 MB;
  * - it comes within 12 s. The goal is 2 s (`npm run bench:hostile` measures it against the
  *   production server); the limit here is six times that because this shared two-core machine
  *   runs other suites beside this one, and it is still far below the minutes an unbounded rule
@@ -78,12 +81,15 @@ beforeEach(() => {
   sheetRoute.sheetAddressLimiter.clear();
 });
 
-async function timed(what: string, run: () => Promise<{ status: number; bytes: number }>, statuses: number[] = [200]) {
+/** The print view's markup: the page that carries it about 2.35 times must stay under 2 MB. */
+const LIMIT_PRINT_MARKUP = LIMIT_BYTES / 2.4;
+
+async function timed(what: string, run: () => Promise<{ status: number; bytes: number }>, statuses: number[] = [200], limitBytes = LIMIT_BYTES) {
   const t0 = performance.now();
   const { status, bytes } = await run();
   const ms = performance.now() - t0;
   expect(statuses, `${what}: status ${status}`).toContain(status);
-  expect(bytes, `${what}: ${bytes} bytes`).toBeLessThan(LIMIT_BYTES);
+  expect(bytes, `${what}: ${bytes} bytes`).toBeLessThan(limitBytes);
   expect(process.memoryUsage().heapUsed, `${what}: heap`).toBeLessThan(LIMIT_HEAP);
   expect(ms, `${what}: ${ms.toFixed(0)} ms`).toBeLessThan(LIMIT_MS);
 }
@@ -147,6 +153,7 @@ describe.each(ADVERSARIAL_LAYOUTS.map((l, i) => [l.name, i] as const))('%s', (na
         return { status: 200, bytes: Buffer.byteLength(markup) };
       },
       sheetStatus(name),
+      LIMIT_PRINT_MARKUP,
     );
   });
 });
