@@ -128,6 +128,7 @@ async function dragBench(page: Page, base: string, id: string, doc: LayoutDoc, r
   if (gesture !== 'mouse') await cdp.send('Emulation.setTouchEmulationEnabled', { enabled: true, maxTouchPoints: 5 });
   await cdp.send('Emulation.setCPUThrottlingRate', { rate });
   try {
+    console.log(`measuring: ${gestureWords(gesture)}, CPU ${rate}× slower, ${doc.modules.length} modules…`);
     await openEditor(page, base, id);
     await instrument(page);
     // Grab a module near the front-left, in the arrangement on show (lounge), and drag it rearwards.

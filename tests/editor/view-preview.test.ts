@@ -1,7 +1,7 @@
 // Pan and zoom shown as one moved picture until the gesture ends (components/editor/canvas/
 // viewPreview.ts). Plain geometry worked by hand; no outside source is involved.
 import { describe, expect, it, vi } from 'vitest';
-import { createViewPreview, previewTransform } from '@/components/editor/canvas/viewPreview';
+import { createViewPreview, cssTransform, previewTransform } from '@/components/editor/canvas/viewPreview';
 import type { Viewport } from '@/components/editor/geometry/viewport';
 import { px } from '@/components/editor/types';
 
@@ -36,7 +36,8 @@ describe('createViewPreview', () => {
   function harness() {
     let store = committed;
     const frames: (() => void)[] = [];
-    const stage = { setAttrs: vi.fn(), batchDraw: vi.fn() };
+    const style = { transform: '', transformOrigin: '' };
+    const stage = { container: () => ({ style }), draw: vi.fn() };
     const announce = vi.fn();
     const commitTo = vi.fn((v: Viewport) => void (store = v));
     const view = createViewPreview({
@@ -47,7 +48,8 @@ describe('createViewPreview', () => {
       frame: (cb) => frames.push(cb),
       cancelFrame: (id) => void (frames[id - 1] = () => undefined),
     });
-    return { view, frames, stage, announce, commitTo, store: () => store };
+    const runFrames = () => frames.splice(0).forEach((f) => f());
+    return { view, frames, runFrames, stage, style, announce, commitTo, store: () => store };
   }
 
   it('paints once a frame however many steps come, and leaves the store alone', () => {
@@ -56,42 +58,62 @@ describe('createViewPreview', () => {
     h.view.show({ ...committed, originX: px(120) });
     expect(h.frames).toHaveLength(1);
     expect(h.announce).toHaveBeenCalledTimes(2);
-    h.frames[0]();
-    expect(h.stage.setAttrs).toHaveBeenCalledWith({ x: 20, y: 0, scaleX: 1, scaleY: 1 });
-    expect(h.stage.batchDraw).toHaveBeenCalledTimes(1);
+    h.runFrames();
+    // Moved 20 px right as a picture: nothing redrawn.
+    expect(h.style.transform).toBe('matrix(1, 0, 0, 1, 20, 0)');
+    expect(h.style.transformOrigin).toBe('0 0');
+    expect(h.stage.draw).not.toHaveBeenCalled();
     expect(h.commitTo).not.toHaveBeenCalled();
     expect(h.view.current().originX).toBe(120);
     expect(h.store()).toBe(committed);
   });
 
-  it('commits the view on show once and puts the stage back', () => {
+  it('commits the view on show once, then draws it and puts the picture back in one frame', () => {
     const h = harness();
-    const live: Viewport = { ...committed, scale: 0.3 };
+    const live: Viewport = { ...committed, scale: 0.4 };
     h.view.show(live);
+    h.runFrames();
+    // Twice the scale with the origin kept: the picture grows 2× about its own (100, 50).
+    expect(h.style.transform).toBe(cssTransform({ x: 100 - 100 * 2, y: 50 - 50 * 2, scale: 2 }));
     h.view.commit();
     expect(h.commitTo).toHaveBeenCalledExactlyOnceWith(live);
-    expect(h.stage.setAttrs).toHaveBeenLastCalledWith({ x: 0, y: 0, scaleX: 1, scaleY: 1 });
+    // Until the next frame the moved picture stays: the store's view is drawn in that frame.
+    expect(h.style.transform).not.toBe('');
+    h.runFrames();
+    expect(h.stage.draw).toHaveBeenCalledTimes(1);
+    expect(h.style.transform).toBe('');
     expect(h.view.pending()).toBe(false);
     expect(h.view.current()).toBe(live);
     h.view.commit(); // nothing pending: nothing more
     expect(h.commitTo).toHaveBeenCalledTimes(1);
   });
 
-  it('a frame that comes after the commit paints nothing', () => {
+  it('a paint that was due when the gesture ended moves nothing', () => {
     const h = harness();
     h.view.show({ ...committed, originY: px(70) });
     h.view.commit();
-    h.stage.setAttrs.mockClear();
-    h.frames[0]();
-    expect(h.stage.setAttrs).not.toHaveBeenCalled();
+    h.runFrames();
+    expect(h.style.transform).toBe('');
+  });
+
+  it('a new gesture before the settling frame keeps its own picture', () => {
+    const h = harness();
+    h.view.show({ ...committed, originY: px(70) });
+    h.view.commit();
+    h.view.show({ ...h.store(), originY: px(90) });
+    h.runFrames();
+    expect(h.stage.draw).not.toHaveBeenCalled();
+    expect(h.style.transform).toBe('matrix(1, 0, 0, 1, 0, 20)');
   });
 
   it('discarding puts the stage back, keeps the store and announces its view again', () => {
     const h = harness();
     h.view.show({ ...committed, scale: 0.5 });
+    h.runFrames();
     h.view.discard();
+    h.runFrames();
     expect(h.commitTo).not.toHaveBeenCalled();
-    expect(h.stage.setAttrs).toHaveBeenLastCalledWith({ x: 0, y: 0, scaleX: 1, scaleY: 1 });
+    expect(h.style.transform).toBe('');
     expect(h.announce).toHaveBeenLastCalledWith(committed);
     expect(h.view.current()).toBe(committed);
   });

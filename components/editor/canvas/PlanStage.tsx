@@ -22,6 +22,7 @@ import type { EditorExtensions } from '../types';
 import type Konva from 'konva';
 
 const NONE: string[] = [];
+const WILL_MOVE = { willChange: 'transform' } as const;
 
 export function PlanStage({ failing, onContextMenu, describedBy, overlay, underlay }: { failing: string[]; onContextMenu: (x: number, y: number) => void; describedBy?: string; overlay?: EditorExtensions['planOverlay']; underlay?: EditorExtensions['planUnderlay'] }) {
   const api = useEditorApi();
@@ -76,7 +77,9 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
       className="relative h-full w-full overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-copper focus-visible:ring-inset touch-none select-none"
     >
       {size && (
-        <Stage ref={stage} width={size.w} height={size.h}>
+        // Its own compositing layer from the start, so the first pan or zoom step (a CSS transform,
+        // viewPreview.ts) moves a picture the browser already holds.
+        <Stage ref={stage} width={size.w} height={size.h} style={WILL_MOVE}>
           {underlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
           {/* The sheet and the modules share one layer: Konva advises at most 3–5 layers per stage. */}
           <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">

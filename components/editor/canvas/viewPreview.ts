@@ -1,9 +1,10 @@
 /**
  * Pan and zoom gestures (a finger or the middle button dragging the plan, two fingers pinching,
- * the wheel) move the whole picture many times a second. Redrawing every module through React
- * for each step costs a frame on a tablet's slower processor, so a gesture is shown by moving the
- * Konva stage as one picture, and the store's viewport changes once, when the gesture ends; the
- * plan is then redrawn at its new scale (labels and line weights fitted again).
+ * the wheel) move the whole picture many times a second. Redrawing every module for each step
+ * costs a frame on a tablet's slower processor, so a gesture is shown by moving the drawn canvas as
+ * one picture (a CSS transform, which the browser composites without redrawing), and the store's
+ * viewport changes once, when the gesture ends; the plan is then redrawn at its new scale (labels
+ * and line weights fitted again) and the picture put back in the same frame.
  *
  * `previewTransform` is pure: the stage position and scale that turn the picture drawn for the
  * committed viewport into the one the live viewport would draw. `createViewPreview` holds the live
@@ -26,9 +27,15 @@ export function previewTransform(committed: Viewport, live: Viewport): StageTran
   return { x: live.originX - committed.originX * scale, y: live.originY - committed.originY * scale, scale };
 }
 
+/** What the preview needs of a Konva stage. */
 export interface PreviewStage {
-  setAttrs(attrs: { x: number; y: number; scaleX: number; scaleY: number }): unknown;
-  batchDraw(): unknown;
+  container(): { style: { transform: string; transformOrigin: string } };
+  /** Draws every layer now. */
+  draw(): unknown;
+}
+
+export function cssTransform(t: StageTransform): string {
+  return `matrix(${t.scale}, 0, 0, ${t.scale}, ${t.x}, ${t.y})`;
 }
 
 export interface ViewPreview {
@@ -63,9 +70,23 @@ export function createViewPreview(opts: {
     scheduled = null;
     const stage = opts.stage();
     if (!live || !stage) return;
-    const t = previewTransform(opts.committed(), live);
-    stage.setAttrs({ x: t.x, y: t.y, scaleX: t.scale, scaleY: t.scale });
-    stage.batchDraw();
+    const style = stage.container().style;
+    style.transformOrigin = '0 0';
+    style.transform = cssTransform(previewTransform(opts.committed(), live));
+  }
+
+  /**
+   * The store has its new view; React hands it to the layers before the next frame (a store
+   * update from an event is rendered in a microtask). In that frame the stage draws it and the
+   * picture goes back where it belongs, so no frame shows the old drawing unmoved.
+   */
+  function settle() {
+    frame(() => {
+      const stage = opts.stage();
+      if (!stage || live) return; // gone, or a new gesture is on show
+      stage.draw();
+      stage.container().style.transform = '';
+    });
   }
 
   return {
@@ -81,20 +102,16 @@ export function createViewPreview(opts: {
       if (!live) return;
       const next = live;
       live = null;
-      const stage = opts.stage();
-      stage?.setAttrs({ x: 0, y: 0, scaleX: 1, scaleY: 1 });
       opts.commitTo(next);
-      stage?.batchDraw();
+      settle();
     },
     discard() {
       if (scheduled !== null) cancelFrame(scheduled);
       scheduled = null;
       if (!live) return;
       live = null;
-      const stage = opts.stage();
-      stage?.setAttrs({ x: 0, y: 0, scaleX: 1, scaleY: 1 });
-      stage?.batchDraw();
       opts.announce?.(opts.committed());
+      settle();
     },
     pending: () => live !== null,
     dispose() {
