@@ -4,7 +4,9 @@
  * handles, zoom by wheel and pinch, pan by space-drag or the middle button, drops from the Parts
  * shelf, and the context menu. Hit testing is done in mm against the store (no Konva hit graph).
  * Pan and zoom are shown by moving the stage as one picture and reach the store when the gesture
- * ends (viewPreview.ts), so a tablet keeps its frame rate while two fingers zoom.
+ * ends (viewPreview.ts), so a tablet keeps its frame rate while two fingers zoom. A drag or resize
+ * is committed just after the frame that shows where it was let go (the drag layer still draws
+ * it there), so the release paints at once and the document, plan and findings follow.
  * Each gesture is begun, dragged and committed through store actions; Escape (a command)
  * cancels it, and the rest of that pointer stroke is ignored. Must never write the document
  * directly.
@@ -95,6 +97,17 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       wheelSettle = null;
       view.commit();
     };
+    // A released drag: committed after the next paint, or before anything else the person does.
+    let releasedGesture = false;
+    const commitReleased = () => {
+      if (!releasedGesture) return;
+      releasedGesture = false;
+      report(api.getState().commitGesture());
+    };
+    const commitAfterPaint = () => {
+      releasedGesture = true;
+      requestAnimationFrame(() => setTimeout(commitReleased, 0));
+    };
     // Fit, actual size or a resize while a wheel zoom settles: the store's new view wins.
     const unsubscribe = api.subscribe((st, prev) => {
       if (!committing && st.viewport !== prev.viewport && view.pending()) {
@@ -130,6 +143,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     }
 
     function onPointerDown(e: PointerEvent) {
+      commitReleased();
       // A new stroke starts from the view on show; a second finger carries on the first one's pan.
       if (view.pending() && !(e.pointerType === 'touch' && touches.current.size === 1)) commitView();
       if (e.pointerType === 'touch') {
@@ -257,7 +271,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       setStroke(null);
       if (view.pending() && touches.current.size < 2) commitView();
       if (el!.hasPointerCapture(e.pointerId)) el!.releasePointerCapture(e.pointerId);
-      if (st?.mode === 'gesture') report(api.getState().commitGesture());
+      if (st?.mode === 'gesture') commitAfterPaint();
       // A plain click (no drag) on one of several selected modules selects just that one.
       if (st?.mode === 'press' && !st.shift && st.ids.length > 1) api.getState().select([st.hitId]);
       hoverCursor(local(e));
@@ -314,6 +328,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     // Keyboard commands (zoom, fit, nudges) work on the store's view: give it the one on show
     // first (capturing, so before any command's listener).
     function commitBeforeKey() {
+      commitReleased();
       if (view.pending()) commitView();
     }
     function onKeyDown(e: KeyboardEvent) {
@@ -341,6 +356,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     el.addEventListener('dragover', onDragOver);
     el.addEventListener('drop', onDrop);
     window.addEventListener('keydown', commitBeforeKey, true);
+    window.addEventListener('pointerdown', commitReleased, true); // a toolbar button (Undo) sees the drag committed
     window.addEventListener('keydown', onKeyDown);
     window.addEventListener('keyup', onKeyUp);
     return () => {
@@ -353,10 +369,12 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el.removeEventListener('dragover', onDragOver);
       el.removeEventListener('drop', onDrop);
       window.removeEventListener('keydown', commitBeforeKey, true);
+      window.removeEventListener('pointerdown', commitReleased, true);
       window.removeEventListener('keydown', onKeyDown);
       window.removeEventListener('keyup', onKeyUp);
       stopLongPress();
       if (wheelSettle) clearTimeout(wheelSettle);
+      commitReleased();
       unsubscribe();
       view.dispose();
     };
