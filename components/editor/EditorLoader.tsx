@@ -7,7 +7,13 @@
 import dynamic from 'next/dynamic';
 import type { EditorProps } from './types';
 
-const Editor = dynamic(() => import('./Editor'), {
+const loadEditor = () => import('./Editor');
+// Fetch the editor's chunks as soon as this file runs in the browser, while the page is still
+// hydrating, rather than when hydration reaches the editor: the bay is drawn a few hundred
+// milliseconds sooner. The bundler hands both calls the same module.
+if (typeof window !== 'undefined') void loadEditor();
+
+const Editor = dynamic(loadEditor, {
   ssr: false,
   loading: () => (
     <div className="flex h-full items-center justify-center bg-paper text-ink-soft" role="status" aria-live="polite">
