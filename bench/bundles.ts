@@ -30,8 +30,9 @@ export const LAUNCH = {
 };
 
 /**
- * Budgets in gzipped KB (the issue's table). The revisions list is not in that table: it gets the
- * budget of its neighbour, the revision comparison.
+ * Budgets in gzipped KB (the issue's table). Pages not in that table get the budget of their
+ * neighbour: the revisions list, the saved versions and the variants comparison that of the
+ * revision comparison; the proposals for a layout that of a new layout (which also proposes).
  */
 export const BUDGETS: Record<string, number> = {
   '/': 130,
@@ -48,6 +49,9 @@ export const BUDGETS: Record<string, number> = {
   '/layouts/[id]/quote': 130,
   '/layouts/[id]/revisions': 150,
   '/layouts/[id]/revisions/compare': 150,
+  '/layouts/[id]/versions': 150,
+  '/layouts/[id]/compare': 150,
+  '/layouts/[id]/proposals': 150,
   '/layouts/[id]/sheet': 130,
   '/clients': 150,
   '/settings': 150,
@@ -162,6 +166,9 @@ function visits(p: Awaited<ReturnType<typeof prepare>>): Visit[] {
     { route: '/layouts/[id]/quote', path: `/layouts/${id}/quote`, signedIn: true, ready: heading },
     { route: '/layouts/[id]/revisions', path: `/layouts/${id}/revisions`, signedIn: true, ready: heading },
     { route: '/layouts/[id]/revisions/compare', path: `/layouts/${id}/revisions/compare`, signedIn: true, ready: heading },
+    { route: '/layouts/[id]/versions', path: `/layouts/${id}/versions`, signedIn: true, ready: heading },
+    { route: '/layouts/[id]/compare', path: `/layouts/${id}/compare`, signedIn: true, ready: heading },
+    { route: '/layouts/[id]/proposals', path: `/layouts/${id}/proposals`, signedIn: true, ready: heading },
     { route: '/layouts/[id]/sheet', path: `/layouts/${id}/sheet`, signedIn: true, ready: (page) => page.locator('svg').first().waitFor() },
     { route: '/clients', path: '/clients', signedIn: true, ready: heading },
     { route: '/settings', path: '/settings', signedIn: true, ready: (page) => page.getByRole('heading', { name: 'Members' }).waitFor() },
