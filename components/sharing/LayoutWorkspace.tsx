@@ -17,7 +17,7 @@ import type { EditorProps } from '@/components/editor/types';
 import type { Viewport } from '@/components/editor/geometry/viewport';
 import type { Arrangement } from '@/lib/layout/schema';
 import { openingTitle } from '@/lib/layout/openings';
-import { openingPlanPoint } from '@/lib/layout/nearest';
+import { openingPlanPoint } from '@/lib/layout/openings';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ThreadDto } from '@/db/sharing/comments';
 import { MarkupsPanel, type PendingMarkup } from './MarkupsPanel';

@@ -13,7 +13,7 @@
 import type { Arrangement, Bay, LayoutDoc, Opening } from '@/lib/layout/schema';
 import { moduleName } from '@/lib/layout/revision-words';
 import { openingTitle } from '@/lib/layout/openings';
-import { BODY_POINT_HALF as POINT_HALF, openingPlanRect, PANE_DEPTH_MIN } from '@/lib/layout/nearest';
+import { BODY_POINT_HALF as POINT_HALF, openingPlanRect, PANE_DEPTH_MIN } from '@/lib/layout/openings';
 import type { RevisionDiff } from '@/lib/layout/revision-diff';
 import { boundingRect, deltaTriangle, revisionCloud, type Rect } from '@/lib/geometry';
 import { archBoxes, buildUpThickness, inArrangement, linedInterior, modulesIn, moduleRect as rectOf } from '@/lib/layout/bay';

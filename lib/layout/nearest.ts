@@ -5,37 +5,17 @@
  * its wall line (`paneDepth` into the room), a roof opening's outline, a small square round a body
  * point. Pure: plain numbers in, names out; must never import UI, framework or database code.
  */
-import type { Rect } from '../geometry/rect';
 import { distanceToRect, nearestRectFinder } from '../geometry/spatialIndex';
 import { inArrangement, moduleRect } from './bay';
 import { moduleLabel } from './kinds';
-import { bodyPointAt, openingTitle, roofOpeningRect, wallRectInPlan, windowOnWall } from './openings';
-import type { Arrangement, Bay, Module, Opening } from './schema';
+import { openingPlanRect, openingTitle } from './openings';
+// Where an opening lies in plan lives with the openings (no spatial index, no kinds), so a page
+// that only places mark-ups at openings does not load them; re-exported for the server's callers.
+export { BODY_POINT_HALF, openingPlanPoint, openingPlanRect, PANE_DEPTH_MIN } from './openings';
+import type { Arrangement, Bay, Module } from './schema';
 
-/** Half the side of the square a body point stands for in plan (mm). */
-export const BODY_POINT_HALF = 60;
-/** How far into the room a window's pane is drawn from the bare wall line when the walls are thinner (mm). */
-export const PANE_DEPTH_MIN = 40;
 /** A mark-up further than this from every module and opening is named by its point only (common practice, no source). */
 export const NEAR_LIMIT_MM = 600;
-
-/** Where an opening lies in plan, or null for a window in a door that is gone. */
-export function openingPlanRect(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening, paneDepth = PANE_DEPTH_MIN): Rect | null {
-  if (o.type === 'window') {
-    const r = windowOnWall(bay, 0, o);
-    return r ? wallRectInPlan(bay, r, paneDepth) : null;
-  }
-  if (o.type === 'roof-opening') return roofOpeningRect(o);
-  const p = bodyPointAt(bay, o);
-  return { x0: p.x - BODY_POINT_HALF, y0: p.y - BODY_POINT_HALF, x1: p.x + BODY_POINT_HALF, y1: p.y + BODY_POINT_HALF };
-}
-
-/** The middle of an opening in plan: where a mark-up placed at it goes (whole millimetres). */
-export function openingPlanPoint(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening): { x: number; y: number } | null {
-  const r = openingPlanRect(bay, o);
-  return r ? { x: Math.round((r.x0 + r.x1) / 2), y: Math.round((r.y0 + r.y1) / 2) } : null;
-}
-
 
 export interface NearestThing {
   kind: 'module' | 'opening';

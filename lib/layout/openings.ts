@@ -198,3 +198,25 @@ export function openingName(bay: Pick<Bay, 'doors'>, o: Opening): string {
   const what = BODY_POINT_WORDS[o.kind].toLowerCase();
   return o.wall === 'underside' ? `the ${what} under the floor at ${o.position} mm from the front` : `the ${what} on the ${o.wall} wall at ${o.position} mm`;
 }
+
+/** Half the side of the square a body point stands for in plan (mm). */
+export const BODY_POINT_HALF = 60;
+/** How far into the room a window's pane is drawn from the bare wall line when the walls are thinner (mm). */
+export const PANE_DEPTH_MIN = 40;
+
+/** Where an opening lies in plan, or null for a window in a door that is gone. */
+export function openingPlanRect(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening, paneDepth = PANE_DEPTH_MIN): Rect | null {
+  if (o.type === 'window') {
+    const r = windowOnWall(bay, 0, o);
+    return r ? wallRectInPlan(bay, r, paneDepth) : null;
+  }
+  if (o.type === 'roof-opening') return roofOpeningRect(o);
+  const p = bodyPointAt(bay, o);
+  return { x0: p.x - BODY_POINT_HALF, y0: p.y - BODY_POINT_HALF, x1: p.x + BODY_POINT_HALF, y1: p.y + BODY_POINT_HALF };
+}
+
+/** The middle of an opening in plan: where a mark-up placed at it goes (whole millimetres). */
+export function openingPlanPoint(bay: Pick<Bay, 'length' | 'width' | 'doors'>, o: Opening): { x: number; y: number } | null {
+  const r = openingPlanRect(bay, o);
+  return r ? { x: Math.round((r.x0 + r.x1) / 2), y: Math.round((r.y0 + r.y1) / 2) } : null;
+}
