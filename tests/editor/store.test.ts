@@ -67,6 +67,26 @@ describe('editor store: moving with snapping', () => {
     expect(h.byId('a')).toMatchObject({ x: 1000, y: 800 });
   });
 
+  it('a drag let go counts as unsaved until it is committed, and a cancelled one no longer does', () => {
+    const h = harness([mod('a', { x: 1000, y: 800 })]);
+    h.get().beginMove(['a']);
+    h.get().dragTo(200, 0);
+    expect(isDirty(h.get())).toBe(false);
+    h.get().releaseGesture();
+    expect(h.get().gestureReleased).toBe(true);
+    expect(isDirty(h.get())).toBe(true); // nothing written yet, but a leave guard must hold
+    h.get().commitGesture();
+    expect(h.get().gestureReleased).toBe(false);
+    expect(h.byId('a')!.x).toBe(1200);
+    expect(isDirty(h.get())).toBe(true); // now the document itself differs from the saved one
+    h.get().beginMove(['a']);
+    h.get().releaseGesture();
+    h.get().cancelGesture();
+    expect(h.get().gestureReleased).toBe(false);
+    h.get().releaseGesture(); // no gesture: nothing to release
+    expect(h.get().gestureReleased).toBe(false);
+  });
+
   it('sticks to the wall lining and to a neighbour edge within the threshold, with guides', () => {
     const h = harness([mod('a', { x: 1000, y: 800 }), mod('b', { x: 2000, y: 300, length: 300 })]);
     // Threshold is 8 px at the fitted zoom; find it in mm.

@@ -106,6 +106,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     };
     const commitAfterPaint = () => {
       releasedGesture = true;
+      api.getState().releaseGesture(); // the save indicator says "Unsaved changes" until then
       requestAnimationFrame(() => setTimeout(commitReleased, 0));
     };
     // Fit, actual size or a resize while a wheel zoom settles: the store's new view wins.

@@ -28,7 +28,9 @@ interface ToolbarProps {
 }
 
 export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, saveLeavingFor, extra, panels, compact = false }: ToolbarProps) {
-  const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, version: st.version })));
+  const s = useEditor(useShallow((st) => ({ name: st.doc.name, readOnly: st.readOnly, version: st.version, released: st.gestureReleased })));
+  // A drag let go is committed a frame later: until then its change is not saved.
+  const status = s.released && saveStatus === 'saved' ? 'unsaved' : saveStatus;
   if (compact) {
     return (
       <div className="flex flex-wrap items-center gap-2 border-b border-paper-edge bg-paper px-2 py-1" data-testid="toolbar" data-compact="">
@@ -42,7 +44,7 @@ export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, saveLeavi
           </div>
         )}
         <div className="ml-auto flex items-center gap-2">
-          <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
+          <SaveIndicator status={status} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
           <ToolbarMore>
             <p className="truncate text-sm font-semibold" title={s.name}>{s.name}</p>
             {!s.readOnly && (
@@ -84,7 +86,7 @@ export const Toolbar = memo(function Toolbar({ saveStatus, saveDetail, saveLeavi
       <div className="ml-auto flex items-center gap-3">
         {extra}
         {panels}
-        <SaveIndicator status={saveStatus} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
+        <SaveIndicator status={status} version={s.version} detail={saveDetail} leavingFor={saveLeavingFor} />
         <CommandButton id="help.shortcuts" />
       </div>
     </div>

@@ -66,6 +66,8 @@ export interface EditorState {
   actualPxPerMm: number;
   steps: { enabled: boolean; step: GridStep };
   gesture: Gesture | null;
+  /** The pointer let go of the gesture; it is committed just after the frame that shows it (usePlanPointer). */
+  gestureReleased: boolean;
   history: History;
   shortcutSheetOpen: boolean;
   /** Bumped by "Save now"; the autosave hook watches it. */
@@ -106,6 +108,8 @@ export interface EditorState {
   /** A drag of one opening: along its wall, or in plan for a roof opening or an underside point. */
   beginOpeningMove(id: string): void;
   dragTo(dx: number, dy: number): void;
+  /** The pointer let go: the gesture's change counts as unsaved until it is committed. */
+  releaseGesture(): void;
   commitGesture(): EditResult;
   cancelGesture(): void;
 
@@ -190,6 +194,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       actualPxPerMm: CSS_PX_PER_MM,
       steps: { enabled: true, step: 10 },
       gesture: null,
+      gestureReleased: false,
       history: emptyHistory(),
       shortcutSheetOpen: false,
       saveRequest: 0,
@@ -349,10 +354,13 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         if (!s.gesture) return;
         set({ gesture: dragGesture(s.gesture, dx, dy, snapOpts(), s.doc, s.arrangement) });
       },
+      releaseGesture() {
+        if (get().gesture) set({ gestureReleased: true });
+      },
       commitGesture() {
         const g = get().gesture;
         if (!g) return { ok: true };
-        set({ gesture: null });
+        set({ gesture: null, gestureReleased: false });
         if (g.kind === 'marquee') {
           const ids = g.additive ? Array.from(new Set([...g.base, ...g.preview.hits])) : g.preview.hits;
           set({ selection: ids, highlight: [], openingSelection: null, openingHighlight: [] });
@@ -373,7 +381,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         return commit('Resize module', () => ({ doc: edits.resizeModule(get().doc, g.ids[0], r) }));
       },
       cancelGesture() {
-        if (get().gesture) set({ gesture: null });
+        if (get().gesture) set({ gesture: null, gestureReleased: false });
       },
 
       select(ids, mode = 'replace') {
@@ -401,7 +409,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
       },
       setArrangement(a) {
         const s = get();
-        if (s.gesture) set({ gesture: null });
+        if (s.gesture) set({ gesture: null, gestureReleased: false });
         // Keep only selected modules that exist in the arrangement now shown.
         const inA = new Set(modulesIn(s.doc, a).map((m) => m.id));
         set({ arrangement: a, selection: s.selection.filter((id) => inA.has(id)), phantom: s.phantom === a ? null : s.phantom });
@@ -458,7 +466,7 @@ export function createEditorStore(opts: EditorOptions): EditorStore {
         set({ savedDoc: doc, version });
       },
       replaceDoc(doc, version) {
-        set({ doc, savedDoc: doc, version, selection: [], highlight: [], openingSelection: null, openingHighlight: [], gesture: null, history: emptyHistory() });
+        set({ doc, savedDoc: doc, version, selection: [], highlight: [], openingSelection: null, openingHighlight: [], gesture: null, gestureReleased: false, history: emptyHistory() });
       },
     };
   });
@@ -476,6 +484,7 @@ function openingIn(doc: LayoutDoc, id: string | null | undefined): string | null
   return id && doc.bay.openings.some((o) => o.id === id) ? id : null;
 }
 
-export const isDirty = (s: Pick<EditorState, 'doc' | 'savedDoc'>) => s.doc !== s.savedDoc;
+/** Something not yet saved: an edit, or a drag let go whose commit is a frame away. */
+export const isDirty = (s: Pick<EditorState, 'doc' | 'savedDoc'> & Partial<Pick<EditorState, 'gestureReleased'>>) => s.doc !== s.savedDoc || s.gestureReleased === true;
 export const canUndo = (s: EditorState) => s.history.past.length > 0 || s.gesture !== null;
 export const canRedo = (s: EditorState) => s.history.future.length > 0;
