@@ -1,5 +1,6 @@
 'use client';
-// The studio's layouts: sortable, filterable, fetched in the browser, each with a small plan and a
+// The studio's layouts: sortable, filterable, drawn with the page from the rows the server read
+// (later refreshed through the query cache; the archived ones fetched in the browser), each with a small plan and a
 // link to the original it is a variant of; a switch shows the archived ones.
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
@@ -16,11 +17,18 @@ import { LayoutThumbnail, VariantLink } from './LayoutThumbnail';
 
 const col = createColumnHelper<LayoutSummaryDto>();
 
-export function LayoutsTable({ canCreate }: { canCreate: boolean }) {
+export interface LayoutsTableProps {
+  canCreate: boolean;
+  /** The layouts in use as the server read them for the page, and when (ms since the epoch). */
+  initial?: { layouts: LayoutSummaryDto[]; at: number };
+}
+
+export function LayoutsTable({ canCreate, initial }: LayoutsTableProps) {
   const [showArchived, setShowArchived] = useState(false);
   const query = useQuery({
     queryKey: ['layouts', { archived: showArchived }],
     queryFn: () => apiFetch<{ layouts: LayoutSummaryDto[] }>(showArchived ? '/api/layouts?archived=1' : '/api/layouts'),
+    ...(initial && !showArchived ? { initialData: { layouts: initial.layouts }, initialDataUpdatedAt: initial.at } : {}),
   });
   const [filter, setFilter] = useState('');
 

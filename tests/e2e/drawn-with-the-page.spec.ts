@@ -1,0 +1,50 @@
+// What the server draws before any script runs: the layouts table comes with its rows, and the
+// editor and a viewer link show the plan (the server-drawn preview) while the drawing loads. Read
+// with scripts switched off, so nothing here can come from the browser's own fetches.
+import { expect, test } from '@playwright/test';
+import { signIn } from './helpers';
+
+const stamp = Date.now().toString(36);
+
+test('the layouts table, the editor and a viewer link are drawn with the page', async ({ browser }) => {
+  const designerContext = await browser.newContext();
+  const designer = await designerContext.newPage();
+  await signIn(designer, 'ivo@saltmarsh.test');
+  const name = `Drawn with the page ${stamp}`;
+  const created = await designer.request.post('/api/layouts', { data: { name, starterId: 'starter-rear-bed' } });
+  expect(created.status()).toBe(201);
+  const id: string = (await created.json()).id;
+  const link = await designer.request.post(`/api/layouts/${id}/links`, { data: {} });
+  expect(link.status()).toBe(201);
+  const viewerPath: string = (await link.json()).path;
+  const storageState = await designerContext.storageState();
+  await designerContext.close();
+
+  const noScripts = await browser.newContext({ javaScriptEnabled: false, storageState });
+  const page = await noScripts.newPage();
+
+  // The table's rows are in the page as served.
+  await page.goto('/layouts');
+  await expect(page.getByRole('link', { name })).toBeVisible();
+  await expect(page.getByText('Loading layouts…')).toHaveCount(0);
+
+  // The editor and the viewer link: the plan as an SVG picture, to the bay's proportions, while
+  // the drawing's scripts load (here: never).
+  for (const path of [`/layouts/${id}`, viewerPath]) {
+    await page.goto(path);
+    const preview = page.getByTestId('plan-preview');
+    await expect(preview).toContainText('Unrolling the drawing…');
+    const img = preview.locator('img');
+    await expect(img).toBeVisible();
+    const src = (await img.getAttribute('src')) ?? '';
+    expect(src.startsWith('data:image/svg+xml;charset=utf-8,')).toBe(true);
+    const svg = decodeURIComponent(src.slice(src.indexOf(',') + 1));
+    // The rear-bed starter's bay is 3800 × 1800 mm (public/templates/starter-rear-bed.json): the
+    // viewBox adds the same margin on every side, so its width less its height is 2000 mm.
+    const [, , w, h] = svg.match(/viewBox="([-\d.]+) ([-\d.]+) ([\d.]+) ([\d.]+)"/)!.slice(1).map(Number);
+    expect(w - h).toBe(2000);
+    const shown = await img.evaluate((el: HTMLImageElement) => ({ natural: el.naturalWidth, complete: el.complete }));
+    expect(shown).toEqual({ natural: 960, complete: true });
+  }
+  await noScripts.close();
+});
