@@ -40,6 +40,8 @@ export interface LayoutWorkspaceProps extends Omit<EditorProps, 'extensions'> {
   focusMarkup?: string | null;
   /** The frozen revision on show (read-only), or null for the layout as last saved. */
   onShow?: RevisionOnShow | null;
+  /** The plan drawn by the server, shown until the editor runs (see EditorLoader). */
+  preview?: string | null;
 }
 
 export function LayoutWorkspace(props: LayoutWorkspaceProps) {

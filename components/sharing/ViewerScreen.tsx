@@ -39,7 +39,8 @@ function goneFrom(err: unknown): Gone | null {
   return { status: status === 'revoked' || status === 'expired' ? status : 'unknown', at: null };
 }
 
-export function ViewerScreen({ token, initial }: { token: string; initial: ViewerContentDto }) {
+/** `preview`: the plan drawn by the server, shown until the drawing runs (see EditorLoader). */
+export function ViewerScreen({ token, initial, preview = null }: { token: string; initial: ViewerContentDto; preview?: string | null }) {
   const [content, setContent] = useState(initial);
   const [fetchGone, setFetchGone] = useState<Gone | null>(null);
   const base = `/api/v/${encodeURIComponent(token)}`;
@@ -109,6 +110,7 @@ export function ViewerScreen({ token, initial }: { token: string; initial: Viewe
           canEdit={false}
           units={content.units}
           extensions={extensions}
+          preview={preview}
         />
       </div>
     </div>

@@ -67,3 +67,14 @@ export function planThumbnailSvg(doc: LayoutDoc, options: ThumbnailOptions = {})
   ];
   return parts.join('');
 }
+
+/** Drawn width of the editor's placeholder plan, CSS pixels: about the plan's width on a laptop. */
+export const EDITOR_PREVIEW_WIDTH_PX = 960;
+
+/**
+ * The plan the editor and the viewer link show while their drawing loads: the thumbnail of the
+ * arrangement the editor opens in (lounge), at about the size the editor will draw it.
+ */
+export function editorPreviewSvg(doc: LayoutDoc): string {
+  return planThumbnailSvg(doc, { arrangement: 'lounge', widthPx: EDITOR_PREVIEW_WIDTH_PX });
+}

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import { ViewerScreen } from '@/components/sharing/ViewerScreen';
 import { ViewerGone } from '@/components/sharing/ViewerGone';
+import { editorPreviewSvg } from '@/lib/sheet/thumbnail';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,5 +19,5 @@ export default async function ViewerPage({ params }: { params: Promise<{ token: 
     return <ViewerGone status={resolved.status} at={resolved.status === 'revoked' ? resolved.revokedAt : resolved.status === 'expired' ? resolved.expiresAt : null} />;
   }
   const { checkDefaults: _defaults, ...content } = resolved.content;
-  return <ViewerScreen token={token} initial={content} />;
+  return <ViewerScreen token={token} initial={content} preview={editorPreviewSvg(content.doc)} />;
 }

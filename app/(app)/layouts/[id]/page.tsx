@@ -7,6 +7,7 @@ import { NotFoundError } from '@/db/errors';
 import { LayoutWorkspace } from '@/components/sharing/LayoutWorkspace';
 import { documentSource } from '@/db/sharing/issued';
 import { revisionChoiceSchema } from '@/lib/api/planning-bodies';
+import { editorPreviewSvg } from '@/lib/sheet/thumbnail';
 
 export const metadata: Metadata = { title: 'Layout' };
 
@@ -31,6 +32,7 @@ export default async function LayoutPage({ params, searchParams }: { params: Pro
       throw err;
     })
     : null;
+  const doc = source?.doc ?? layout.doc;
   const onShow = source?.revision ? { letter: source.revision.letter, state: source.revision.state } : null;
   return (
     <div className="h-[calc(100vh-48px)]">
@@ -38,7 +40,8 @@ export default async function LayoutPage({ params, searchParams }: { params: Pro
       <LayoutWorkspace
         key={onShow?.letter ?? 'preliminary'}
         layoutId={layout.id}
-        initialDoc={source?.doc ?? layout.doc}
+        initialDoc={doc}
+        preview={editorPreviewSvg(doc)}
         initialVersion={source?.layoutVersion ?? layout.version}
         canEdit={layout.canEdit && !onShow}
         units={studio.units}
