@@ -44,7 +44,10 @@ export async function startTestServer(options: TestServerOptions): Promise<TestS
     fs.rmSync(`${dir}.pid`, { force: true });
   }
   if (options.seed) seedDatabase(options.db, root);
-  const child = spawn('npx', ['next', 'start', '-p', String(options.port), '-H', '127.0.0.1'], {
+  // Idle connections stay open for 65 s rather than Node's 5 s: a test's request context that sat
+  // idle for about 5 s while a browser worked could send on a socket the server was closing at that
+  // moment, and got "socket hang up" (seen once in sharing.spec.ts).
+  const child = spawn('npx', ['next', 'start', '-p', String(options.port), '-H', '127.0.0.1', '--keepAliveTimeout', '65000'], {
     cwd: root,
     env: { ...process.env, BAYWRIGHT_DB: options.db, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', BAYWRIGHT_LOCAL_FAKES: '1', ...options.env },
     stdio: options.quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
