@@ -5,8 +5,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { spawnSync } from 'node:child_process';
 
-const SOURCE_DIRS = ['app', 'components', 'lib', 'db', 'drizzle', 'public', 'fonts'];
-const SOURCE_FILES = ['next.config.ts', 'tailwind.config.ts', 'package-lock.json', 'auth.ts', 'auth.config.ts', 'proxy.ts', 'instrumentation.ts'];
+/** Everything the production bundle is built from (the server's services and the local fakes too). */
+const SOURCE_DIRS = ['app', 'components', 'lib', 'db', 'server', 'dev', 'drizzle', 'public', 'fonts', 'types'];
+const SOURCE_FILES = [
+  'next.config.ts', 'tailwind.config.ts', 'postcss.config.mjs', 'tsconfig.json', 'package-lock.json',
+  'auth.ts', 'auth.config.ts', 'proxy.ts', 'instrumentation.ts', 'instrumentation-node.ts',
+];
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;
