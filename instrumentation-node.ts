@@ -1,9 +1,12 @@
 /**
  * Server start (Node runtime only, never during `next build`): installs the connection policy
- * (server/auth/address.ts: client addresses, HTTPS, HSTS), opens the database at once, so a
- * second process on the same embedded-database folder stops with a clear message instead of
- * failing on its first request; then starts the local fakes of hosted services (mail, payments)
- * where this environment wants them.
+ * (server/auth/address.ts: client addresses, HTTPS, HSTS), starts opening the database, then
+ * starts the local fakes of hosted services (mail, payments) where this environment wants them.
+ *
+ * The embedded database takes about a second to open (PGlite starting on its own thread), so it
+ * opens in the background: pages that read no data (sign-in, the start page) answer meanwhile,
+ * and every query waits for that same opening (db/client.ts `getHandle`). A folder a second
+ * process holds, or any other failure to open, still stops the server with a clear message.
  */
 import { installConnectionPolicy } from './server/auth/address';
 import { DatabaseLockedError, dataDir, getHandle } from './db/client';
@@ -24,22 +27,23 @@ export async function startServer(): Promise<void> {
     }
     throw err;
   }
-  try {
-    await getHandle();
-  } catch (err) {
-    if (err instanceof DatabaseLockedError) {
-      log.error('database locked', { message: err.message });
-      process.exit(1);
-    }
-    throw err;
-  }
-  await startBackupSocket();
+  const opening = getHandle();
+  const opened = opening.then(() => true, stopOnDatabaseError);
+  void opened.then(startBackupSocket).catch((err) => log.error('backups cannot be taken while the app runs', { error: err }));
   await startLocalStandIns();
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
-  void import('./db/uploads')
+  void opened
+    .then(() => import('./db/uploads'))
     .then((m) => m.sweepOrphanUploads())
     .then((r) => r.removed && log.info('removed stored upload files no layout uses any more', { removed: r.removed }))
     .catch((err) => log.error('the upload sweep failed', { error: err }));
+}
+
+/** The database did not open: say why and stop the server (fail closed). */
+function stopOnDatabaseError(err: unknown): never {
+  if (err instanceof DatabaseLockedError) log.error('database locked', { message: err.message });
+  else log.error('cannot open the database', { error: err });
+  process.exit(1);
 }
 
 /** The embedded database answers `npm run db:backup` on a socket beside its folder (lib/backup/archive.ts). */
