@@ -1,7 +1,8 @@
 /**
  * Server start (Node runtime only, never during `next build`): installs the connection policy
  * (server/auth/address.ts: client addresses, HTTPS, HSTS), starts opening the database, then
- * starts the local fakes of hosted services (mail, payments) where this environment wants them.
+ * starts the local fakes of hosted services (mail, payments) where this environment wants them,
+ * and the work pool's threads once the database is open.
  *
  * The embedded database takes about a second to open (PGlite starting on its own thread), so it
  * opens in the background: pages that read no data (sign-in, the start page) answer meanwhile,
@@ -30,6 +31,11 @@ export async function startServer(): Promise<void> {
   const opening = getHandle();
   const opened = opening.then(() => true, stopOnDatabaseError);
   void opened.then(startBackupSocket).catch((err) => log.error('backups cannot be taken while the app runs', { error: err }));
+  // The work pool's threads start once the database is open (not competing with it for the cores).
+  void opened
+    .then(() => import('./lib/workers/pool'))
+    .then((m) => m.workPool().warm())
+    .catch((err) => log.error('the work pool did not start', { error: err }));
   await startLocalStandIns();
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.
   void opened

@@ -143,6 +143,15 @@ export class WorkPool {
     this.slots = Array.from({ length: options.size }, () => ({ worker: null, job: null, timer: null, started: 0 }));
   }
 
+  /**
+   * Starts every worker now rather than at its first job: each loads the jobs' code as it starts,
+   * which the first checks after a server start would otherwise wait for (about 0.5 s here).
+   */
+  warm(): void {
+    if (this.closed) return;
+    for (const slot of this.slots) if (!slot.worker) this.attach(slot);
+  }
+
   /** Jobs running and waiting. */
   get load(): { running: number; waiting: number } {
     return { running: this.slots.filter((s) => s.job).length, waiting: this.queue.length };

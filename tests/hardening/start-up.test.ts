@@ -9,6 +9,7 @@ afterEach(() => {
   vi.doUnmock('@/db/client');
   vi.doUnmock('@/server/local-mode');
   vi.doUnmock('@/db/uploads');
+  vi.doUnmock('@/lib/workers/pool');
   vi.restoreAllMocks();
   vi.unstubAllEnvs();
   vi.resetModules();
@@ -25,34 +26,39 @@ async function startServerWith(getHandle: (client: typeof import('@/db/client'))
   vi.doMock('@/server/local-mode', () => ({ startLocalStandIns: async () => {} }));
   const sweep = vi.fn(async () => ({ removed: 0 }));
   vi.doMock('@/db/uploads', () => ({ sweepOrphanUploads: sweep }));
+  const warm = vi.fn();
+  vi.doMock('@/lib/workers/pool', () => ({ workPool: () => ({ warm }) }));
   const { setLogSink } = await import('@/lib/log');
   const lines: string[] = [];
   setLogSink((l) => lines.push(l));
   const exit: Exit = vi.spyOn(process, 'exit').mockImplementation((() => undefined) as never);
   const { startServer } = await import('@/instrumentation-node');
-  return { startServer, lines, exit, sweep };
+  return { startServer, lines, exit, sweep, warm };
 }
 
 describe('server start-up', () => {
-  it('does not wait for the database to open; the upload sweep runs once it has', async () => {
+  it('does not wait for the database to open; the upload sweep and the work pool start once it has', async () => {
     let open!: (h: unknown) => void;
     const opening = new Promise((resolve) => (open = resolve));
-    const { startServer, exit, sweep } = await startServerWith(() => opening);
+    const { startServer, exit, sweep, warm } = await startServerWith(() => opening);
     await startServer(); // resolves while the database is still opening
     expect(sweep).not.toHaveBeenCalled();
+    expect(warm).not.toHaveBeenCalled();
     open({ kind: 'postgres', db: {}, close: async () => {} });
     await vi.waitFor(() => expect(sweep).toHaveBeenCalledTimes(1));
+    await vi.waitFor(() => expect(warm).toHaveBeenCalledTimes(1));
     expect(exit).not.toHaveBeenCalled();
   });
 
   it('stops with "database locked" and the holder when another process has the folder', async () => {
-    const { startServer, lines, exit, sweep } = await startServerWith((client) => Promise.reject(new client.DatabaseLockedError('data/dev', 4242)));
+    const { startServer, lines, exit, sweep, warm } = await startServerWith((client) => Promise.reject(new client.DatabaseLockedError('data/dev', 4242)));
     await startServer();
     await vi.waitFor(() => expect(exit).toHaveBeenCalledWith(1));
     const entry = JSON.parse(lines.find((l) => l.includes('database locked'))!);
     expect(entry).toMatchObject({ level: 'error', event: 'database locked' });
     expect(entry.message).toMatch(/already open in process 4242/);
     expect(sweep).not.toHaveBeenCalled();
+    expect(warm).not.toHaveBeenCalled();
   });
 
   it('stops, saying it cannot open the database, on any other failure to open', async () => {

@@ -1,5 +1,7 @@
 // The work pool on real worker threads: jobs run off this thread, a full queue is refused at once
-// with a retry time, a runaway job is stopped, and closing refuses what waits.
+// with a retry time, a runaway job is stopped, and closing refuses what waits; warming starts the
+// workers ahead of their first job (on stand-in workers).
+import { EventEmitter } from 'node:events';
 import { afterEach, describe, expect, it } from 'vitest';
 import { WorkPool, WorkPoolBusyError, WorkPoolClosedError } from '@/lib/workers/pool';
 import { stackedOnOneSpot } from './fixtures/adversarial-layouts';
@@ -67,4 +69,42 @@ describe('work pool', () => {
     expect(await first).toBeInstanceOf(WorkPoolClosedError);
     await expect(p.run('checks', { doc })).rejects.toBeInstanceOf(WorkPoolClosedError);
   }, 60_000);
+});
+
+describe('warming the work pool', () => {
+  /** A stand-in worker thread that answers every job at once with its name. */
+  function fakeWorker() {
+    const w = new EventEmitter() as EventEmitter & { unref(): void; terminate(): Promise<number>; postMessage(m: { id: number; name: string }): void };
+    w.unref = () => undefined;
+    w.terminate = async () => 0;
+    w.postMessage = (m) => queueMicrotask(() => w.emit('message', { id: m.id, ok: true, output: m.name }));
+    return w;
+  }
+
+  it('starts every worker at once, and jobs then run on them without starting more', async () => {
+    let started = 0;
+    const p = new WorkPool({ size: 2, queueLimit: 4, timeoutMs: 60_000 }, () => {
+      started++;
+      return fakeWorker() as never;
+    });
+    pools.push(p);
+    expect(started).toBe(0);
+    p.warm();
+    expect(started).toBe(2);
+    p.warm(); // already running: nothing more
+    expect(started).toBe(2);
+    await expect(Promise.all([p.run('checks', { doc: l2h2Doc() }), p.run('checks', { doc: l2h2Doc() })])).resolves.toEqual(['checks', 'checks']);
+    expect(started).toBe(2);
+  });
+
+  it('starts nothing once closed', async () => {
+    let started = 0;
+    const p = new WorkPool({ size: 2, queueLimit: 4, timeoutMs: 60_000 }, () => {
+      started++;
+      return fakeWorker() as never;
+    });
+    await p.close();
+    p.warm();
+    expect(started).toBe(0);
+  });
 });
