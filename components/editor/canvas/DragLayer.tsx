@@ -42,10 +42,14 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
     const modulesLayer = layer.current?.getStage()?.findOne<Konva.Layer>('.modules');
     if (!modulesLayer) return;
     const nodes = ids.map((id) => modulesLayer.findOne(`#module-${id}`)).filter((n): n is Konva.Node => !!n);
+    // Their labels too: the plan writes every label in one shape after the bodies (ModuleLabels).
+    const labels = modulesLayer.findOne<Konva.Shape>('.module-labels');
     nodes.forEach((n) => n.visible(false));
+    labels?.setAttr('skip', new Set(ids));
     modulesLayer.batchDraw();
     return () => {
       nodes.forEach((n) => n.visible(true));
+      labels?.setAttr('skip', null);
       modulesLayer.batchDraw();
     };
   }, [kind, ids]);

@@ -1,7 +1,7 @@
 'use client';
 /**
  * The modules of the arrangement on show, in draw order, with the phantom arrangement under
- * them. Modules being dragged are hidden by the drag layer, by hand, for the gesture. Never listens for
+ * them, and then all their labels. Modules being dragged are hidden by the drag layer, by hand, for the gesture. Never listens for
  * events; redrawn only when the document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
@@ -9,7 +9,7 @@ import { Group } from './konva';
 import type { Arrangement, LengthUnit, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
-import { ModuleShape } from './ModuleShape';
+import { ModuleLabels, ModuleShape } from './ModuleShape';
 import { canvasMeasure, labelRequestOf } from './moduleSymbols';
 import { placePlanLabels } from '../geometry/labels';
 import type { CanvasFonts } from './useCanvasFonts';
@@ -55,11 +55,13 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (
-        <ModuleShape key={m.id} module={m} fonts={fonts} units={units} placement={placements?.get(m.id)} fontsReady={fontsReady} />
+        <ModuleShape key={m.id} module={m} fonts={fonts} labelled={false} fontsReady={fontsReady} />
       ))}
       {phantoms.map((m) => (
         <ModuleShape key={`phantom-${m.id}`} module={m} fonts={fonts} phantom fontsReady={fontsReady} />
       ))}
+      {/* Every name after every body: a module drawn later never covers an earlier one's label. */}
+      <ModuleLabels modules={shown} fonts={fonts} units={units} placements={placements} fontsReady={fontsReady} />
     </Group>
   );
 });

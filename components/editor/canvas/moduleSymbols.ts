@@ -37,6 +37,8 @@ export interface DrawOptions {
   units?: LengthUnit;
   /** The label's place worked out for the whole plan (`placePlanLabels`); without it, for this module alone. */
   placement?: LabelPlacement;
+  /** False: the body only; the plan writes every label afterwards (`drawModuleLabel`), over all bodies. */
+  label?: boolean;
 }
 
 type Ctx = CanvasRenderingContext2D;
@@ -89,7 +91,17 @@ export function drawModule(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
   if (!o.phantom && screenMin >= 10) {
     drawSymbol(ctx, m, px);
   }
-  if (!o.phantom) drawLabel(ctx, m, o, px);
+  if (!o.phantom && o.label !== false) drawLabel(ctx, m, o, px);
+  ctx.restore();
+}
+
+/**
+ * A module's label alone, from the module's corner (the caller translates there). The plan draws
+ * the labels after every module's body, so a module drawn later never covers an earlier one's name.
+ */
+export function drawModuleLabel(ctx: Ctx, m: ModuleLook, o: DrawOptions): void {
+  ctx.save();
+  drawLabel(ctx, m, o, 1 / o.scale);
   ctx.restore();
 }
 
