@@ -59,10 +59,10 @@ function EditorWithStore(props: EditorProps & { editingNeedsLargerScreen: boolea
   );
 }
 
-function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen }: EditorProps & { editingNeedsLargerScreen: boolean }) {
+function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen, initialChecks }: EditorProps & { editingNeedsLargerScreen: boolean }) {
   const api = useEditorApi();
   const { doc, arrangement } = useEditor(useShallow((s) => ({ doc: s.doc, arrangement: s.arrangement })));
-  const checks = useLiveChecks(doc, extensions?.fetchChecks);
+  const checks = useLiveChecks(doc, extensions?.fetchChecks, initialChecks);
   const incoming = extensions?.incoming;
   useEffect(() => {
     if (incoming && !canEdit && incoming.version !== api.getState().version) api.getState().replaceDoc(incoming.doc, incoming.version);

@@ -18,6 +18,8 @@ export interface EditorProps {
   units: LengthUnit;
   /** Optional additions from other features (sharing: comment pins, viewer links); none by default. */
   extensions?: EditorExtensions;
+  /** The check report of `initialDoc`, begun by the server as the page rendered (null: ask as usual). */
+  initialChecks?: Promise<CheckReport | null> | null;
 }
 
 /** Hooks other features plug into the editor without the editor knowing what they are. */

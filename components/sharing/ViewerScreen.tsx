@@ -39,8 +39,11 @@ function goneFrom(err: unknown): Gone | null {
   return { status: status === 'revoked' || status === 'expired' ? status : 'unknown', at: null };
 }
 
-/** `preview`: the plan drawn by the server, shown until the drawing runs (see EditorLoader). */
-export function ViewerScreen({ token, initial, preview = null }: { token: string; initial: ViewerContentDto; preview?: string | null }) {
+/**
+ * `preview`: the plan drawn by the server, shown until the drawing runs (see EditorLoader);
+ * `initialChecks`: the report of the document shown, begun by the server as the page rendered.
+ */
+export function ViewerScreen({ token, initial, preview = null, initialChecks = null }: { token: string; initial: ViewerContentDto; preview?: string | null; initialChecks?: Promise<CheckReport | null> | null }) {
   const [content, setContent] = useState(initial);
   const [fetchGone, setFetchGone] = useState<Gone | null>(null);
   const base = `/api/v/${encodeURIComponent(token)}`;
@@ -111,6 +114,7 @@ export function ViewerScreen({ token, initial, preview = null }: { token: string
           units={content.units}
           extensions={extensions}
           preview={preview}
+          initialChecks={initialChecks}
         />
       </div>
     </div>

@@ -1,8 +1,10 @@
 // What the server draws before any script runs: the layouts table comes with its rows, and the
 // editor and a viewer link show the plan (the server-drawn preview) while the drawing loads. Read
-// with scripts switched off, so nothing here can come from the browser's own fetches.
+// with scripts switched off, so nothing here can come from the browser's own fetches. Then, with
+// scripts: the editor and a viewer link open with the findings the server began as the page
+// rendered, so opening asks the browser for no checks; an edit still does.
 import { expect, test } from '@playwright/test';
-import { signIn } from './helpers';
+import { openNewLayout, signIn } from './helpers';
 
 const stamp = Date.now().toString(36);
 
@@ -47,4 +49,35 @@ test('the layouts table, the editor and a viewer link are drawn with the page', 
     expect(shown).toEqual({ natural: 960, complete: true });
   }
   await noScripts.close();
+});
+
+test('the editor and a viewer link open with their findings, asking the browser for no checks', async ({ browser }) => {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, 'ivo@saltmarsh.test');
+  const asked: string[] = [];
+  page.on('request', (r) => { if (/\/api\/(checks|v\/[^/]+\/checks)/.test(new URL(r.url()).pathname)) asked.push(`${r.method()} ${new URL(r.url()).pathname}`); });
+
+  const id = await openNewLayout(page, `Findings with the page ${stamp}`);
+  await expect(page.getByTestId('checks-status')).toContainText('up to date', { timeout: 20_000 });
+  await expect(page.getByTestId('checks-counts')).toBeVisible();
+  expect(asked).toEqual([]);
+
+  // An edit is checked through the API as before.
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press(']');
+  await page.keyboard.press('ArrowDown');
+  await expect.poll(() => asked.filter((a) => a === 'POST /api/checks').length, { timeout: 10_000 }).toBeGreaterThanOrEqual(1);
+
+  // The viewer link of the same layout: no account, and no checks request either.
+  const link = await page.request.post(`/api/layouts/${id}/links`, { data: {} });
+  expect(link.status()).toBe(201);
+  const viewer = await (await browser.newContext()).newPage();
+  const viewerAsked: string[] = [];
+  viewer.on('request', (r) => { if (/\/checks$/.test(new URL(r.url()).pathname)) viewerAsked.push(new URL(r.url()).pathname); });
+  await viewer.goto((await link.json()).path);
+  await expect(viewer.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await expect(viewer.getByTestId('checks-counts')).toBeVisible({ timeout: 20_000 });
+  expect(viewerAsked).toEqual([]);
+  await context.close();
 });

@@ -3,7 +3,7 @@
 // opens on demand (not on every load), and the survey-photos popover closes on Escape and on a
 // click elsewhere. (Overhead modules drawn dashed and unfilled: tests/editor/overhead-drawing.test.ts.)
 import { expect, test } from '@playwright/test';
-import { signIn } from './helpers';
+import { openNewLayout, signIn } from './helpers';
 
 const STOCK = 'Workshop stock — L4H3 empty bay';
 
@@ -48,11 +48,15 @@ test('the editor opens with no layer-count warning, the Mark-ups list closed, an
 
 test('the Checks panel recovers by itself when the check service comes back', async ({ page }) => {
   await signIn(page, 'ivo@saltmarsh.test');
+  await openNewLayout(page, `Checks outage ${Date.now().toString(36)}`);
+  const status = page.getByTestId('checks-status');
+  // The layout as opened comes with its findings from the page; an edit asks the service.
+  await expect(status).toContainText('up to date', { timeout: 20_000 });
   let down = true;
   await page.route('**/api/checks', (route) => (down ? route.abort('connectionrefused') : route.fallback()));
-  await page.getByRole('link', { name: STOCK }).first().click();
-  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
-  const status = page.getByTestId('checks-status');
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press(']');
+  await page.keyboard.press('ArrowDown');
   await expect(status).toContainText('checks unavailable', { timeout: 20_000 });
   down = false; // no edit from here on
   await expect(status).toContainText('up to date', { timeout: 20_000 });

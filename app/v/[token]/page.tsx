@@ -3,6 +3,7 @@ import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import { ViewerScreen } from '@/components/sharing/ViewerScreen';
 import { ViewerGone } from '@/components/sharing/ViewerGone';
 import { editorPreviewSvg } from '@/lib/sheet/thumbnail';
+import { checksOnOpen } from '@/server/api/checks-on-open';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,6 +19,6 @@ export default async function ViewerPage({ params }: { params: Promise<{ token: 
   if (resolved.status !== 'active') {
     return <ViewerGone status={resolved.status} at={resolved.status === 'revoked' ? resolved.revokedAt : resolved.status === 'expired' ? resolved.expiresAt : null} />;
   }
-  const { checkDefaults: _defaults, ...content } = resolved.content;
-  return <ViewerScreen token={token} initial={content} preview={editorPreviewSvg(content.doc)} />;
+  const { checkDefaults, ...content } = resolved.content;
+  return <ViewerScreen token={token} initial={content} preview={editorPreviewSvg(content.doc)} initialChecks={checksOnOpen(`viewer:${token}`, content.doc, checkDefaults)} />;
 }

@@ -4,7 +4,9 @@
  * throttled (~150 ms window) and keyed by its content, so an undo back to a checked state is
  * answered from the cache. While a newer document is being checked, the last findings stay on
  * show marked stale. When the service does not answer, the state is "unavailable": findings are
- * never invented here.
+ * never invented here. The document the editor opened with may come with its report already on
+ * the way from the server (`initialReport`, begun as the page rendered); it is used for that
+ * document instead of asking again, and when it is null (refused or failed) the editor asks.
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
@@ -36,8 +38,13 @@ declare global {
 }
 
 /** `fetchChecks` replaces POST /api/checks (a viewer link reads its own checks route). */
-export function useLiveChecks(doc: LayoutDoc, fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>): LiveChecks {
-  const [sent, setSent] = useState<{ doc: LayoutDoc; key: string }>(() => ({ doc, key: contentKey(doc) }));
+export function useLiveChecks(
+  doc: LayoutDoc,
+  fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>,
+  initialReport?: Promise<CheckReport | null> | null,
+): LiveChecks {
+  const [opened] = useState<{ doc: LayoutDoc; key: string }>(() => ({ doc, key: contentKey(doc) }));
+  const [sent, setSent] = useState(opened);
   const changedAt = useRef(new Map<string, number>());
   const throttle = useMemo(() => createThrottle<LayoutDoc>(CHECKS_WINDOW_MS, (d) => setSent({ doc: d, key: contentKey(d) })), []);
   const currentKey = useMemo(() => contentKey(doc), [doc]);
@@ -51,7 +58,13 @@ export function useLiveChecks(doc: LayoutDoc, fetchChecks?: (doc: LayoutDoc, sig
 
   const q = useQuery<CheckReport, Error>({
     queryKey: ['checks', fetchChecks ? 'own-source' : 'post', sent.key],
-    queryFn: ({ signal }) => (fetchChecks ? fetchChecks(sent.doc, signal) : postChecks(fetch, sent.doc, signal)),
+    queryFn: ({ signal }) => {
+      const ask = () => (fetchChecks ? fetchChecks(sent.doc, signal) : postChecks(fetch, sent.doc, signal));
+      // The document as opened: the server's report, when it made one. What React hands over for a
+      // streamed promise is a thenable whose `then` returns nothing: Promise.resolve makes it a promise.
+      if (initialReport && sent.key === opened.key) return Promise.resolve(initialReport).then((report) => report ?? ask(), ask);
+      return ask();
+    },
     placeholderData: keepPreviousData,
     staleTime: Infinity,
     gcTime: 60_000,
