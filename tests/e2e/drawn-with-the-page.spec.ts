@@ -68,6 +68,8 @@ test('the editor and a viewer link open with their findings, asking the browser 
   await page.keyboard.press(']');
   await page.keyboard.press('ArrowDown');
   await expect.poll(() => asked.filter((a) => a === 'POST /api/checks').length, { timeout: 10_000 }).toBeGreaterThanOrEqual(1);
+  // Saved before the link opens: a live link that met the save later would (rightly) check the new version.
+  await expect(page.getByTestId('save-status')).toHaveAttribute('data-status', 'saved', { timeout: 15_000 });
 
   // The viewer link of the same layout: no account, and no checks request either.
   const link = await page.request.post(`/api/layouts/${id}/links`, { data: {} });
