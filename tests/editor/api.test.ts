@@ -194,6 +194,9 @@ describe('live checks client', () => {
       const emitted: number[] = [];
       const t = createThrottle<number>(30, (v) => emitted.push(v));
       t.push(1);
+      expect(emitted).toEqual([]); // not inside the edit's own task
+      await new Promise((r) => original(r, 5));
+      expect(emitted).toEqual([1]);
       t.push(2);
       t.push(3);
       expect(emitted).toEqual([1]);
@@ -231,5 +234,29 @@ describe('live checks client', () => {
       for (const tm of timers.splice(0)) if (tm.at <= now) tm.fn(); else timers.push(tm);
     }
     expect(emitted.length - 2).toBeLessThanOrEqual(8);
+  });
+
+  it('throttle: the first change after a quiet spell waits for the paint, takes the newest value, and can be called off', () => {
+    let now = 0;
+    const frames: (() => void)[] = [];
+    let calledOff = 0;
+    const emitted: number[] = [];
+    const t = createThrottle<number>(150, (v) => emitted.push(v), {
+      set: () => { throw new Error('no timer expected before the window'); },
+      clear: () => undefined,
+      now: () => now,
+      afterPaint: (fn) => { frames.push(fn); return () => { calledOff++; }; },
+    });
+    t.push(1);
+    t.push(2); // the same frame: folded in
+    expect(emitted).toEqual([]);
+    expect(frames).toHaveLength(1);
+    frames.shift()!();
+    expect(emitted).toEqual([2]);
+    now = 500;
+    t.push(3);
+    t.cancel();
+    expect(calledOff).toBe(1);
+    expect(emitted).toEqual([2]);
   });
 });

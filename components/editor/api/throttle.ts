@@ -2,6 +2,10 @@
  * Leading-and-trailing throttle for the live checks: the first change after a quiet spell goes
  * out at once (so a drop shows its findings quickly), changes during the window are folded into
  * one trailing call. Keeps us under the server's rate limit (≈10 a second). Pure timing; no React.
+ *
+ * "At once" means straight after the browser has painted the change (`afterPaint`), not inside
+ * the keystroke or drop that made it: building and sending the request, and the re-render that
+ * marks the findings as being checked, would otherwise delay the frame that shows the edit.
  */
 export interface Throttle<T> {
   push(value: T): void;
@@ -12,6 +16,8 @@ export interface ThrottleTimers {
   set: (fn: () => void, ms: number) => unknown;
   clear: (handle: unknown) => void;
   now: () => number;
+  /** Runs `fn` soon, after the next paint where there is one; returns how to call it off. Absent: at once. */
+  afterPaint?: (fn: () => void) => () => void;
 }
 
 /** Real timers, called as plain functions (a browser refuses setTimeout called as a method of another object). */
@@ -19,14 +25,29 @@ const realTimers: ThrottleTimers = {
   set: (fn, ms) => setTimeout(fn, ms),
   clear: (handle) => clearTimeout(handle as ReturnType<typeof setTimeout>),
   now: () => Date.now(),
+  afterPaint: (fn) => {
+    // A frame callback runs just before the paint; a task queued from it runs after.
+    if (typeof requestAnimationFrame !== 'function') {
+      const t = setTimeout(fn, 0);
+      return () => clearTimeout(t);
+    }
+    let t: ReturnType<typeof setTimeout> | undefined;
+    const frame = requestAnimationFrame(() => (t = setTimeout(fn, 0)));
+    return () => {
+      cancelAnimationFrame(frame);
+      if (t !== undefined) clearTimeout(t);
+    };
+  },
 };
 
 export function createThrottle<T>(windowMs: number, emit: (value: T) => void, timers: ThrottleTimers = realTimers): Throttle<T> {
   let last = -Infinity;
   let pending: { value: T } | null = null;
   let timer: unknown = null;
+  let callOff: (() => void) | null = null;
   const fire = () => {
     timer = null;
+    callOff = null;
     if (!pending) return;
     const v = pending.value;
     pending = null;
@@ -37,12 +58,19 @@ export function createThrottle<T>(windowMs: number, emit: (value: T) => void, ti
     push(value) {
       const since = timers.now() - last;
       pending = { value };
-      if (since >= windowMs && !timer) return fire();
-      if (!timer) timer = timers.set(fire, Math.max(0, windowMs - since));
+      if (timer || callOff) return; // already due: it takes the newest value
+      if (since >= windowMs) {
+        if (!timers.afterPaint) return fire();
+        callOff = timers.afterPaint(fire);
+        return;
+      }
+      timer = timers.set(fire, Math.max(0, windowMs - since));
     },
     cancel() {
       if (timer) timers.clear(timer);
+      callOff?.();
       timer = null;
+      callOff = null;
       pending = null;
     },
   };
