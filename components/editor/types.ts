@@ -18,8 +18,11 @@ export interface EditorProps {
   units: LengthUnit;
   /** Optional additions from other features (sharing: comment pins, viewer links); none by default. */
   extensions?: EditorExtensions;
-  /** The check report of `initialDoc`, begun by the server as the page rendered (null: ask as usual). */
-  initialChecks?: Promise<CheckReport | null> | null;
+  /**
+   * The check report of `initialDoc`, made by the server as the page rendered: the report itself when
+   * it was ready in time, else its promise (streamed); null: ask as usual.
+   */
+  initialChecks?: CheckReport | Promise<CheckReport | null> | null;
 }
 
 /** Hooks other features plug into the editor without the editor knowing what they are. */

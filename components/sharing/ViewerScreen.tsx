@@ -43,7 +43,7 @@ function goneFrom(err: unknown): Gone | null {
  * `preview`: the plan drawn by the server, shown until the drawing runs (see EditorLoader);
  * `initialChecks`: the report of the document shown, begun by the server as the page rendered.
  */
-export function ViewerScreen({ token, initial, preview = null, initialChecks = null }: { token: string; initial: ViewerContentDto; preview?: string | null; initialChecks?: Promise<CheckReport | null> | null }) {
+export function ViewerScreen({ token, initial, preview = null, initialChecks = null }: { token: string; initial: ViewerContentDto; preview?: string | null; initialChecks?: CheckReport | Promise<CheckReport | null> | null }) {
   const [content, setContent] = useState(initial);
   const [fetchGone, setFetchGone] = useState<Gone | null>(null);
   const base = `/api/v/${encodeURIComponent(token)}`;

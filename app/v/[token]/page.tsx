@@ -3,7 +3,7 @@ import { resolveViewerLink } from '@/db/sharing/viewer-links';
 import { ViewerScreen } from '@/components/sharing/ViewerScreen';
 import { ViewerGone } from '@/components/sharing/ViewerGone';
 import { editorPreviewSvg } from '@/lib/sheet/thumbnail';
-import { checksOnOpen } from '@/server/api/checks-on-open';
+import { checksForOpening } from '@/server/api/checks-on-open';
 
 export const dynamic = 'force-dynamic';
 
@@ -20,5 +20,5 @@ export default async function ViewerPage({ params }: { params: Promise<{ token: 
     return <ViewerGone status={resolved.status} at={resolved.status === 'revoked' ? resolved.revokedAt : resolved.status === 'expired' ? resolved.expiresAt : null} />;
   }
   const { checkDefaults, ...content } = resolved.content;
-  return <ViewerScreen token={token} initial={content} preview={editorPreviewSvg(content.doc)} initialChecks={checksOnOpen(`viewer:${token}`, content.doc, checkDefaults)} />;
+  return <ViewerScreen token={token} initial={content} preview={editorPreviewSvg(content.doc)} initialChecks={(await checksForOpening(`viewer:${token}`, content.doc, checkDefaults)).checks} />;
 }

@@ -4,9 +4,10 @@
  * throttled (~150 ms window) and keyed by its content, so an undo back to a checked state is
  * answered from the cache. While a newer document is being checked, the last findings stay on
  * show marked stale. When the service does not answer, the state is "unavailable": findings are
- * never invented here. The document the editor opened with may come with its report already on
- * the way from the server (`initialReport`, begun as the page rendered); it is used for that
- * document instead of asking again, and when it is null (refused or failed) the editor asks.
+ * never invented here. The document the editor opened with may come with its report from the
+ * server (`initialReport`, made as the page rendered): the report itself, shown with the editor's
+ * first frame, or its promise, still on the way. It is used for that document instead of asking
+ * again, and when it is null (refused or failed) the editor asks.
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
@@ -41,12 +42,17 @@ declare global {
 export function useLiveChecks(
   doc: LayoutDoc,
   fetchChecks?: (doc: LayoutDoc, signal?: AbortSignal) => Promise<CheckReport>,
-  initialReport?: Promise<CheckReport | null> | null,
+  initialReport?: CheckReport | Promise<CheckReport | null> | null,
 ): LiveChecks {
   const [opened] = useState<{ doc: LayoutDoc; key: string }>(() => ({ doc, key: contentKey(doc) }));
   const [sent, setSent] = useState(opened);
   const changedAt = useRef(new Map<string, number>());
-  const throttle = useMemo(() => createThrottle<LayoutDoc>(CHECKS_WINDOW_MS, (d) => setSent({ doc: d, key: contentKey(d) })), []);
+  const throttle = useMemo(() => createThrottle<LayoutDoc>(CHECKS_WINDOW_MS, (d) => {
+    const key = contentKey(d);
+    setSent((s) => (s.key === key ? s : { doc: d, key }));
+  }), []);
+  // Read once: the report that came in the page, for the document as opened.
+  const [inPage] = useState(() => (initialReport && !('then' in initialReport) ? initialReport : undefined));
   const currentKey = useMemo(() => contentKey(doc), [doc]);
 
   useEffect(() => {
@@ -65,6 +71,7 @@ export function useLiveChecks(
       if (initialReport && sent.key === opened.key) return Promise.resolve(initialReport).then((report) => report ?? ask(), ask);
       return ask();
     },
+    initialData: inPage && sent.key === opened.key ? inPage : undefined,
     placeholderData: keepPreviousData,
     staleTime: Infinity,
     gcTime: 60_000,

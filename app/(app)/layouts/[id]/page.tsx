@@ -3,7 +3,7 @@ import { notFound, redirect } from 'next/navigation';
 import { currentActor } from '@/server/auth/session';
 import { getLayout } from '@/db/layouts';
 import { getStudio } from '@/db/studios';
-import { checksOnOpen } from '@/server/api/checks-on-open';
+import { checksForOpening } from '@/server/api/checks-on-open';
 import { NotFoundError } from '@/db/errors';
 import { LayoutWorkspace } from '@/components/sharing/LayoutWorkspace';
 import { documentSource } from '@/db/sharing/issued';
@@ -43,7 +43,7 @@ export default async function LayoutPage({ params, searchParams }: { params: Pro
         layoutId={layout.id}
         initialDoc={doc}
         preview={editorPreviewSvg(doc)}
-        initialChecks={checksOnOpen(actor.userId, doc, studio.checkDefaults)}
+        initialChecks={(await checksForOpening(actor.userId, doc, studio.checkDefaults)).checks}
         initialVersion={source?.layoutVersion ?? layout.version}
         canEdit={layout.canEdit && !onShow}
         units={studio.units}
