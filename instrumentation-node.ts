@@ -31,10 +31,14 @@ export async function startServer(): Promise<void> {
   const opening = getHandle();
   const opened = opening.then(() => true, stopOnDatabaseError);
   void opened.then(startBackupSocket).catch((err) => log.error('backups cannot be taken while the app runs', { error: err }));
-  // The work pool's threads start once the database is open (not competing with it for the cores).
+  // The work pool's threads start once the database is open (not competing with it for the cores),
+  // and each runs the checks once, so the first layout opened gets its findings with the page.
   void opened
-    .then(() => import('./lib/workers/pool'))
-    .then((m) => m.workPool().warm())
+    .then(() => Promise.all([import('./lib/workers/pool'), import('./server/api/checks-on-open')]))
+    .then(([pool, opening]) => {
+      pool.workPool().warm();
+      return opening.primeChecks();
+    })
     .catch((err) => log.error('the work pool did not start', { error: err }));
   await startLocalStandIns();
   // Upload files whose layout was deleted (the rows go by cascade) are swept in the background.

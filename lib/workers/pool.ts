@@ -152,6 +152,11 @@ export class WorkPool {
     for (const slot of this.slots) if (!slot.worker) this.attach(slot);
   }
 
+  /** Threads in the pool. */
+  get size(): number {
+    return this.slots.length;
+  }
+
   /** Jobs running and waiting. */
   get load(): { running: number; waiting: number } {
     return { running: this.slots.filter((s) => s.job).length, waiting: this.queue.length };

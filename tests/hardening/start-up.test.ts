@@ -28,25 +28,30 @@ async function startServerWith(getHandle: (client: typeof import('@/db/client'))
   vi.doMock('@/db/uploads', () => ({ sweepOrphanUploads: sweep }));
   const warm = vi.fn();
   vi.doMock('@/lib/workers/pool', () => ({ workPool: () => ({ warm }) }));
+  const prime = vi.fn(async () => {});
+  vi.doMock('@/server/api/checks-on-open', () => ({ primeChecks: prime }));
   const { setLogSink } = await import('@/lib/log');
   const lines: string[] = [];
   setLogSink((l) => lines.push(l));
   const exit: Exit = vi.spyOn(process, 'exit').mockImplementation((() => undefined) as never);
   const { startServer } = await import('@/instrumentation-node');
-  return { startServer, lines, exit, sweep, warm };
+  return { startServer, lines, exit, sweep, warm, prime };
 }
 
 describe('server start-up', () => {
   it('does not wait for the database to open; the upload sweep and the work pool start once it has', async () => {
     let open!: (h: unknown) => void;
     const opening = new Promise((resolve) => (open = resolve));
-    const { startServer, exit, sweep, warm } = await startServerWith(() => opening);
+    const { startServer, exit, sweep, warm, prime } = await startServerWith(() => opening);
     await startServer(); // resolves while the database is still opening
     expect(sweep).not.toHaveBeenCalled();
     expect(warm).not.toHaveBeenCalled();
+    expect(prime).not.toHaveBeenCalled();
     open({ kind: 'postgres', db: {}, close: async () => {} });
     await vi.waitFor(() => expect(sweep).toHaveBeenCalledTimes(1));
     await vi.waitFor(() => expect(warm).toHaveBeenCalledTimes(1));
+    // Each thread then runs the checks once, so the first layout opened gets its findings with the page.
+    await vi.waitFor(() => expect(prime).toHaveBeenCalledTimes(1));
     expect(exit).not.toHaveBeenCalled();
   });
 
