@@ -161,8 +161,9 @@ ${table}
   all) on the same Next.js and React: no page of this stack can ship less. What each route ships, chunk by chunk, is in
   \`bench/bundle-report.md\`.
 - **Web Vitals** (\`bench/vitals.ts\`, \`npm run bench:vitals\`): the \`web-vitals\` library (npm) injected before the
-  page's own scripts. LCP and CLS on a cold load (fresh context, empty cache) of the start page, sign-in, the layouts
-  table, the editor on a 30-module layout, its viewer link and its build planner; INP of one interaction per fresh load
+  page's own scripts. LCP and CLS on cold loads (fresh context, empty cache; three per page, LCP and the bay drawn the
+  median, CLS the worst) of the start page, sign-in, the layouts table, the editor on a 30-module layout, its viewer
+  link and its build planner; INP of one interaction per fresh load
   (drop a module from the Parts shelf, drag a module, type a length in the Details panel, switch arrangement, switch a
   build-plan tab); the editor's bay drawn = the plan's canvas in the page plus two painted frames, from navigation start.
   Twice: unthrottled, and with the CPU slowed 4×. web-vitals reports no INP under 16 ms; such a figure reads 16 ms.
