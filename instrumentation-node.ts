@@ -35,9 +35,9 @@ export async function startServer(): Promise<void> {
   // and each runs the checks once, so the first layout opened gets its findings with the page.
   void opened
     .then(() => Promise.all([import('./lib/workers/pool'), import('./server/api/checks-on-open')]))
-    .then(([pool, opening]) => {
+    .then(([pool, checks]) => {
       pool.workPool().warm();
-      return opening.primeChecks();
+      return checks.primeChecks();
     })
     .catch((err) => log.error('the work pool did not start', { error: err }));
   await startLocalStandIns();
