@@ -4,7 +4,8 @@
  * panels side by side), `tablet` (up to 1279 px wide, or a touch screen up to 1366 px: the plan
  * fills the screen and the panels slide over it as drawers) or `phone` (under 640 px: read-only
  * editor, one column everywhere). Read from CSS media queries, so it follows rotation and resizing.
- * Must never be used during server rendering to decide markup (it answers `desktop` there).
+ * Must never be used during server rendering to decide markup (it answers `desktop` there); markup
+ * the server renders uses the `desktop:` variant of app/globals.css, which keeps these queries.
  */
 import { useSyncExternalStore } from 'react';
 

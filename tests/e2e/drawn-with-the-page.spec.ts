@@ -2,7 +2,9 @@
 // editor and a viewer link show the plan (the server-drawn preview) while the drawing loads. Read
 // with scripts switched off, so nothing here can come from the browser's own fetches. Then, with
 // scripts: the editor and a viewer link open with the findings the server began as the page
-// rendered, so opening asks the browser for no checks; an edit still does.
+// rendered, so opening asks the browser for no checks; an edit still does. On a desktop those
+// findings are in the page as served, where the Checks panel goes, and stay put when the editor
+// takes over.
 import { expect, test } from '@playwright/test';
 import { openNewLayout, signIn } from './helpers';
 
@@ -47,8 +49,57 @@ test('the layouts table, the editor and a viewer link are drawn with the page', 
     expect(w - h).toBe(2000);
     const shown = await img.evaluate((el: HTMLImageElement) => ({ natural: el.naturalWidth, complete: el.complete }));
     expect(shown).toEqual({ natural: 960, complete: true });
+    // The findings, on a desktop, where the Checks panel goes. The server waits only briefly for
+    // them (server/api/checks-on-open.ts), so a busy machine may serve "Checking…": load again.
+    const findings = page.getByTestId('checks-panel-as-served').locator('li[data-finding]');
+    await expect(async () => {
+      await page.reload();
+      expect(await findings.count()).toBeGreaterThan(0);
+    }).toPass({ timeout: 30_000 });
+    await expect(page.getByTestId('checks-panel-as-served').getByRole('button')).toHaveCount(0);
   }
   await noScripts.close();
+
+  // A tablet gets the plan alone, as the editor shows it there (its panels are drawers).
+  const tablet = await browser.newContext({ javaScriptEnabled: false, storageState, viewport: { width: 1024, height: 768 }, hasTouch: true, isMobile: true });
+  const onTablet = await tablet.newPage();
+  await onTablet.goto(`/layouts/${id}`);
+  await expect(onTablet.getByTestId('plan-preview').locator('img')).toBeVisible();
+  await expect(onTablet.getByTestId('checks-panel-as-served')).toBeHidden();
+  await tablet.close();
+});
+
+test('the findings served with the page stay where they are when the editor takes over', async ({ browser }) => {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, 'ivo@saltmarsh.test');
+  const created = await page.request.post('/api/layouts', { data: { name: `Stays put ${stamp}`, starterId: 'starter-rear-bed' } });
+  expect(created.status()).toBe(201);
+  const id: string = (await created.json()).id;
+  const message = (panel: string) => page.getByTestId(panel).locator('li[data-finding] span.block.text-ink').first();
+  const listed = (panel: string) => page.getByTestId(panel).locator('li[data-finding]').evaluateAll((lis) => lis.map((li) => `${li.getAttribute('data-finding')} ${li.getAttribute('data-status')} ${li.textContent}`));
+  const boxOf = async (panel: string) => (await message(panel).boundingBox())!;
+
+  // Hold the scripts back, so the page stays as served until the gate opens.
+  let open!: () => void;
+  const gate = new Promise<void>((resolve) => { open = resolve; });
+  await page.route(/\/_next\/static\/chunks\/.*\.js(\?|$)/, async (route) => { await gate; await route.continue(); });
+  await expect(async () => {
+    await page.goto(`/layouts/${id}`, { waitUntil: 'commit' });
+    await expect(message('checks-panel-as-served')).toBeVisible({ timeout: 5_000 });
+  }).toPass({ timeout: 30_000 });
+  const served = await boxOf('checks-panel-as-served');
+  const servedList = await listed('checks-panel-as-served');
+  open();
+  await expect(page.getByTestId('plan').locator('canvas').first()).toBeVisible({ timeout: 30_000 });
+  await expect(message('checks-panel')).toBeVisible();
+  const live = await boxOf('checks-panel');
+  // Same place, same size: the largest text on the page is painted once, with the page.
+  for (const k of ['x', 'y', 'width', 'height'] as const) expect(Math.abs(live[k] - served[k]), k).toBeLessThanOrEqual(1);
+  // The same findings, and now they are the editor's: a finding is a button that highlights what it names.
+  expect(await listed('checks-panel')).toEqual(servedList);
+  await expect(page.getByTestId('checks-panel').locator('li[data-finding] button').first()).toBeVisible();
+  await context.close();
 });
 
 test('the editor and a viewer link open with their findings, asking the browser for no checks', async ({ browser }) => {
