@@ -4,7 +4,7 @@
  * to its box, and wires pointer input. It only composes; drawing lives in the layers and input in
  * usePlanPointer. Must never draw anything itself.
  */
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { Layer, Stage } from './konva';
 import { worldLayerProps } from './worldTransform';
 import { useShallow } from 'zustand/react/shallow';
@@ -47,18 +47,27 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
     })),
   );
 
+  const measured = useCallback((width: number, height: number) => {
+    const w = Math.max(50, Math.floor(width));
+    const h = Math.max(50, Math.floor(height));
+    setSize((was) => (was && was.w === w && was.h === h ? was : { w, h }));
+    api.getState().resizeViewport(w, h);
+  }, [api]);
+  // The first size is read before the first paint, so the plan is drawn in the editor's first
+  // frame rather than one frame (and one more render) later, when the observer first reports.
+  useLayoutEffect(() => {
+    const el = box.current;
+    if (!el) return;
+    const r = el.getBoundingClientRect();
+    measured(r.width, r.height);
+  }, [measured]);
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const ro = new ResizeObserver(([entry]) => {
-      const w = Math.max(50, Math.floor(entry.contentRect.width));
-      const h = Math.max(50, Math.floor(entry.contentRect.height));
-      setSize({ w, h });
-      api.getState().resizeViewport(w, h);
-    });
+    const ro = new ResizeObserver(([entry]) => measured(entry.contentRect.width, entry.contentRect.height));
     ro.observe(el);
     return () => ro.disconnect();
-  }, [api]);
+  }, [measured]);
 
   const menu = useCallback((x: number, y: number) => onContextMenu(x, y), [onContextMenu]);
   usePlanPointer(box, api, menu, stage);
