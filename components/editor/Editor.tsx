@@ -17,6 +17,7 @@ import { PlanStage } from './canvas/PlanStage';
 import { PartsShelf } from './panels/PartsShelf';
 import { DetailsPanel } from './panels/DetailsPanel';
 import { ChecksPanel } from './panels/ChecksPanel';
+import { DRAWING_TABS } from './panels/bottomTabs';
 import { foldWaiting, statusCounts } from '@/lib/checks/words';
 import { Toolbar } from './panels/Toolbar';
 import { Tabs } from '@/components/ui/Tabs';
@@ -141,9 +142,7 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen,
               onChange={setBottom}
               tabs={[
                 { id: 'checks', title: checksTitle, label: <span className="flex items-center gap-2">Checks{countsBadge}</span> },
-                { id: 'section', title: 'Side section', label: 'Side section' },
-                { id: 'walls', title: 'Wall elevations', label: 'Walls' },
-                { id: 'roof', title: 'Roof plan', label: 'Roof' },
+                ...DRAWING_TABS,
               ]}
             >
               {bottom === 'checks' ? <ChecksPanel checks={checks} layoutId={canEdit ? layoutId : undefined} />

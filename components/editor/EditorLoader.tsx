@@ -17,6 +17,7 @@ import type { EditorProps } from './types';
 import type { CheckReport } from '@/lib/checks/types';
 import { Tabs } from '@/components/ui/Tabs';
 import { ChecksReportView } from './panels/ChecksReportView';
+import { DRAWING_TABS } from './panels/bottomTabs';
 
 const loadEditor = () => import('./Editor');
 // Fetch the editor's chunks as soon as this file runs in the browser, while the page is still
@@ -27,6 +28,7 @@ if (typeof window !== 'undefined') void loadEditor();
 interface AsServed {
   preview: string | null;
   canEdit: boolean;
+  layoutId: string;
   units: EditorProps['units'];
   /** The report when the server had it in time (a promise still on its way is not waited for here). */
   report: CheckReport | null;
@@ -35,12 +37,7 @@ interface AsServed {
 /** What the frame as served shows (next/dynamic gives its placeholder no props). */
 const AsServedContext = createContext<AsServed | null>(null);
 
-const BOTTOM_TABS = [
-  { id: 'checks', title: 'Checks', label: 'Checks' },
-  { id: 'section', title: 'Side section', label: 'Side section' },
-  { id: 'walls', title: 'Wall elevations', label: 'Walls' },
-  { id: 'roof', title: 'Roof plan', label: 'Roof' },
-];
+const BOTTOM_TABS = [{ id: 'checks', title: 'Checks', label: 'Checks' }, ...DRAWING_TABS];
 const ignore = () => {};
 
 /**
@@ -68,7 +65,7 @@ function EditorAsServed() {
           </div>
           <div className="hidden desktop:contents" inert>
             <Tabs className="flex h-64 min-h-0 shrink-0 flex-col border-t border-paper-edge" panelClassName="min-h-0 flex-1 overflow-auto" label="Checks and section" active="checks" onChange={ignore} tabs={BOTTOM_TABS}>
-              <ChecksReportView checks={{ report: report ?? undefined, status: report ? 'ready' : 'checking', stale: false }} units={served?.units ?? 'mm'} />
+              <ChecksReportView checks={{ report: report ?? undefined, status: report ? 'ready' : 'checking', stale: false }} units={served?.units ?? 'mm'} layoutId={served?.canEdit ? served.layoutId : undefined} />
             </Tabs>
           </div>
         </div>
@@ -91,7 +88,7 @@ function inline(checks: EditorProps['initialChecks']): CheckReport | null {
 
 export function EditorLoader({ preview = null, ...props }: EditorLoaderProps) {
   return (
-    <AsServedContext.Provider value={{ preview, canEdit: props.canEdit, units: props.units, report: inline(props.initialChecks) }}>
+    <AsServedContext.Provider value={{ preview, canEdit: props.canEdit, layoutId: props.layoutId, units: props.units, report: inline(props.initialChecks) }}>
       <Editor {...props} />
     </AsServedContext.Provider>
   );
