@@ -125,6 +125,10 @@ ${table}
 - **Check engine** (\`bench/checks.ts\`, \`npm run bench:checks\`): median wall time of \`runChecks\` on generated,
   realistic layouts (a 20-module van cell repeated in proportionally larger bays), after a warm-up; includes the
   build-planning rules.
+- **Proposals** (\`bench/proposals.ts\`, \`npm run bench:proposals\`): \`generateProposals\` with the typical two-sleeper
+  brief on each bay template, in this process; the median of at least 3 runs and at least 0.5 s of runs per template,
+  after one warm-up run of every template (proposals run on the work pool's threads, whose check code the checks
+  keep warm). The rate is candidates laid out and checked per second of the whole run.
 - **API under load** (\`bench/api.ts\`, \`npm run bench:api\`): the production server (\`next start\`) on its own embedded
   database on 127.0.0.1 (PGlite on its worker thread), autocannon with 10 connections for 8 s after a 10 s warm-up of
   the same requests (V8 tiers up PGlite's WebAssembly gradually; the first seconds run at about half the steady rate),
