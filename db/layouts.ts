@@ -19,7 +19,7 @@ import { sharingSummaries, type LayoutSharingSummary } from './sharing/layout-su
 import { Lru } from '../lib/cache/lru';
 import { jsonText, withJsonField, type JsonText } from '../lib/cache/json-text';
 import { readStoredDoc } from './stored-doc';
-import { recordSave } from './saved-version-record';
+import { recordSave, saveOverVersion } from './saved-version-record';
 
 export interface LayoutSummaryDto {
   id: string;
@@ -312,22 +312,16 @@ export async function saveLayout(
   const name = input.name ?? input.doc.name ?? layout.name;
   const doc = { ...input.doc, name };
   const db = await getDb();
-  // The save and the saved version it leaves land together, or neither does.
-  const saved = await db.transaction(async (tx) => {
-    const [row] = await tx
-      .update(layouts)
-      .set({
-        doc,
-        name,
-        ...(input.clientId !== undefined ? { clientId: input.clientId } : {}),
-        version: sql`${layouts.version} + 1`,
-        updatedBy: actor.userId,
-        updatedAt: new Date(),
-      })
-      .where(and(eq(layouts.id, layout.id), eq(layouts.studioId, actor.studioId), eq(layouts.version, baseVersion)))
-      .returning({ id: layouts.id, name: layouts.name, version: layouts.version, updatedAt: layouts.updatedAt });
-    if (row) await recordSave(tx, { layoutId: row.id, version: row.version, name, doc, savedBy: actor.userId, restoredFrom: options.restoredFrom });
-    return row;
+  // The save and the saved version it leaves land together, or neither does (one statement).
+  const saved = await saveOverVersion(db, {
+    layoutId: layout.id,
+    studioId: actor.studioId,
+    baseVersion,
+    name,
+    doc,
+    clientId: input.clientId,
+    savedBy: actor.userId,
+    restoredFrom: options.restoredFrom,
   });
   if (!saved) {
     const current = await getLayout(actor, layout.id);

@@ -1,12 +1,13 @@
 /**
- * Keeping a save: the one place that writes `saved_versions`, called by every save of a layout
- * document inside its transaction (db/layouts.ts). Bounded per layout: the last
+ * Keeping a save: the one place that writes `saved_versions`. A new layout records its first
+ * save inside its creating transaction (`recordSave`); every later save of a layout document is
+ * one statement that saves and keeps it (`saveOverVersion`). Bounded per layout: the last
  * `SAVED_VERSIONS_KEPT` saves, plus every save an issued revision was frozen from.
  */
 import 'server-only';
-import { and, eq, lte, notInArray } from 'drizzle-orm';
+import { and, eq, lte, notInArray, sql } from 'drizzle-orm';
 import type { Db } from './client';
-import { revisions, savedVersions } from './schema';
+import { layouts, revisions, savedVersions } from './schema';
 import type { LayoutDoc } from '../lib/layout/schema';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -32,3 +33,45 @@ export async function recordSave(
     .where(and(eq(savedVersions.layoutId, save.layoutId), lte(savedVersions.version, save.version - SAVED_VERSIONS_KEPT), notInArray(savedVersions.version, issued)));
 }
 
+
+export interface SavedRow {
+  id: string;
+  name: string;
+  version: number;
+  updatedAt: Date;
+}
+
+/**
+ * Saves `doc` over version `baseVersion` of a studio's layout and keeps the save, in one
+ * statement: the compare-and-set UPDATE, the saved version it leaves and the trimming of the
+ * oldest (data-modifying CTEs), so all of it lands or none does without a transaction. The
+ * embedded database serves one transaction at a time, and a BEGIN … COMMIT of four statements
+ * held it for five round trips between the threads; one statement holds it for one. Undefined:
+ * the layout is not at `baseVersion` (someone saved first) or not the studio's.
+ */
+export async function saveOverVersion(
+  db: Db,
+  save: { layoutId: string; studioId: string; baseVersion: number; name: string; doc: LayoutDoc; clientId?: string | null; savedBy: string; restoredFrom?: number },
+): Promise<SavedRow | undefined> {
+  const client = save.clientId !== undefined ? sql`client_id = ${save.clientId},` : sql``;
+  const result = (await db.execute(sql`
+    with saved as (
+      update ${layouts}
+      set doc = ${JSON.stringify(save.doc)}::jsonb, name = ${save.name}, ${client}
+          version = ${layouts.version} + 1, updated_by = ${save.savedBy}, updated_at = now()
+      where ${layouts.id} = ${save.layoutId} and ${layouts.studioId} = ${save.studioId} and ${layouts.version} = ${save.baseVersion}
+      returning id, name, version, updated_at, doc
+    ), kept as (
+      insert into ${savedVersions} (layout_id, version, name, doc, saved_by, restored_from)
+      select id, version, name, doc, ${save.savedBy}::uuid, ${save.restoredFrom ?? null}::integer from saved
+      on conflict do nothing
+    ), trimmed as (
+      delete from ${savedVersions}
+      where layout_id = (select id from saved)
+        and version <= (select version from saved) - ${SAVED_VERSIONS_KEPT}
+        and version not in (select layout_version from ${revisions} where layout_id = (select id from saved))
+    )
+    select id, name, version, updated_at from saved`)) as { rows: { id: string; name: string; version: number; updated_at: Date | string }[] };
+  const [row] = result.rows;
+  return row && { id: row.id, name: row.name, version: Number(row.version), updatedAt: new Date(row.updated_at) };
+}
