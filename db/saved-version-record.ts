@@ -33,7 +33,6 @@ export async function recordSave(
     .where(and(eq(savedVersions.layoutId, save.layoutId), lte(savedVersions.version, save.version - SAVED_VERSIONS_KEPT), notInArray(savedVersions.version, issued)));
 }
 
-
 export interface SavedRow {
   id: string;
   name: string;
