@@ -75,3 +75,19 @@ test('a click on Build plan straight after an edit waits for the save, then open
   await selectFirstModule(page);
   await expect(page.getByTestId('details-length')).toHaveValue(String(after));
 });
+
+test('Enter and then Tab straight after apply an edit once: one undo puts the old length back', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openNewLayout(page, 'Fields — one edit, one undo');
+  await selectFirstModule(page);
+  const length = page.getByTestId('details-length');
+  const before = Number(await length.inputValue());
+  await length.fill(String(before - 10));
+  // Both keys come before the edit's paint; the edit is applied after it, once.
+  await length.press('Enter');
+  await page.keyboard.press('Tab');
+  await expect(length).toHaveValue(String(before - 10));
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press('ControlOrMeta+z');
+  await expect(length).toHaveValue(String(before));
+});

@@ -17,6 +17,7 @@ import { isDirty } from '../store/editorStore';
 import { saveLayout, type FetchLike, type SavedCopy } from './layoutApi';
 import { flushOnLeave } from './leaveFlush';
 import { fieldName } from '@/lib/layout/field-names';
+import { runWaitingNow } from '@/components/ui/afterNextPaint';
 
 export const AUTOSAVE_DELAY_MS = 1200;
 
@@ -151,7 +152,10 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
   // Leave-page guard: the browser's own prompt on unload, and a confirm on in-app links.
   useEffect(() => {
     if (!canEdit) return;
-    const unsaved = () => isDirty(api.getState()) || inFlight.current;
+    const unsaved = () => {
+      runWaitingNow(); // a field left a moment ago may still be committing its edit
+      return isDirty(api.getState()) || inFlight.current;
+    };
     const onBeforeUnload = (e: BeforeUnloadEvent) => {
       if (!unsaved()) return;
       e.preventDefault();
@@ -185,6 +189,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
 
   useEffect(() => () => {
     if (timer.current) clearTimeout(timer.current);
+    runWaitingNow();
     // Leaving with an edit not yet saved (and saving not stopped): send it now, with keepalive (leaveFlush.ts).
     if (canEdit && !inFlight.current && !blocked.current) void flushOnLeave(api, layoutId, fetchFn);
   }, [api, canEdit, fetchFn, layoutId]);

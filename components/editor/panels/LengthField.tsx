@@ -2,10 +2,11 @@
 /**
  * A length input in the person's units that commits whole millimetres when left or on Enter.
  * Text that is not a length is shown as an error and never committed. Never edits the store
- * itself: the caller's onCommit does, and its refusal is shown beside the field.
+ * itself: the caller's onCommit does, after the next paint, and its refusal is shown beside the field.
  */
-import { useId, useState } from 'react';
+import { useId, useRef, useState } from 'react';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
+import { afterNextPaint } from '@/components/ui/afterNextPaint';
 
 export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, min = 0, max, testId, compact = false }: {
   label: string;
@@ -25,6 +26,7 @@ export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, mi
   const shown = String(toUnit(valueMm, unit));
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const pending = useRef<number | null>(null);
   const commit = () => {
     if (draft === null) return;
     const v = parseLength(draft, unit);
@@ -36,10 +38,17 @@ export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, mi
       setError(null);
       return;
     }
-    const r = onCommit(v);
-    if (!r.ok) return setError(r.error ?? 'Refused');
-    setDraft(null);
-    setError(null);
+    // Committed after the paint that answers the key (the focus moving on), as the Details form does;
+    // Enter and then leaving the field within that frame commit once.
+    if (pending.current === v) return;
+    pending.current = v;
+    afterNextPaint(() => {
+      pending.current = null;
+      const r = onCommit(v);
+      if (!r.ok) return setError(r.error ?? 'Refused');
+      setDraft(null);
+      setError(null);
+    });
   };
   return (
     <div className={compact ? '' : 'block'}>

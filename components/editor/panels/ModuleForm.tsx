@@ -20,6 +20,7 @@ import { FACING_WORDS, MOUNT_WORDS, SURFACE_WORDS } from '@/lib/layout/field-wor
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { formValuesOf, moduleFormSchema, readModuleForm, type ModuleFormValues, type ModuleFormOutput, type ModuleFormField } from './moduleForm';
 import { CommandButton } from './CommandButton';
+import { afterNextPaint } from '@/components/ui/afterNextPaint';
 
 
 export default function ModuleForm({ module }: { module: Module }) {
@@ -46,11 +47,22 @@ export default function ModuleForm({ module }: { module: Module }) {
       toast.warning(`Not applied: ${r.reverted.map((f) => f.message).join('; ')}. The last valid value is kept.`);
     }
     if (Object.keys(r.patch).length === 0) return;
-    const res = api.getState().updateModule(module.id, r.patch, `Edit ${Object.keys(r.patch).join(', ')}`);
-    if (!res.ok) {
-      toast.error(`Not applied: ${res.error}`);
-      reset(formValuesOf(module, units));
-    }
+    // The values are read now, while they are this module's; the store takes them after the
+    // paint that shows the focus moving, so the plan's redraw does not hold up that paint.
+    const { patch } = r;
+    const edited = module;
+    afterNextPaint(() => {
+      // Enter and then leaving the field within one frame read the same change twice: what the
+      // store already holds is not applied again (it would be an undo entry that changes nothing).
+      const now = api.getState().doc.modules.find((m) => m.id === edited.id) as Record<string, unknown> | undefined;
+      const changed = Object.fromEntries(Object.entries(patch).filter(([k, v]) => !now || JSON.stringify(now[k]) !== JSON.stringify(v))) as typeof patch;
+      if (Object.keys(changed).length === 0) return;
+      const res = api.getState().updateModule(edited.id, changed, `Edit ${Object.keys(changed).join(', ')}`);
+      if (!res.ok) {
+        toast.error(`Not applied: ${res.error}`);
+        reset(formValuesOf(edited, units));
+      }
+    });
   };
   const onBlurApply = { onBlur: () => apply() };
   /** Escape in a field puts its last valid value back and keeps the focus there. */

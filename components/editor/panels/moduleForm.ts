@@ -42,7 +42,16 @@ function lengthField(unit: LengthUnit, min: number, max: number, what: string) {
   }));
 }
 
+/** Built once per unit (there are three): building a zod schema costs more than a parse with it. */
+const schemas = new Map<LengthUnit, ReturnType<typeof buildSchema>>();
+
 export function moduleFormSchema(unit: LengthUnit) {
+  let schema = schemas.get(unit);
+  if (!schema) schemas.set(unit, (schema = buildSchema(unit)));
+  return schema;
+}
+
+function buildSchema(unit: LengthUnit) {
   return z.object({
     label: z.string().check(z.maxLength(80, 'at most 80 characters'), z.refine((s) => !/[\u0000-\u001F\u007F]/.test(s), 'no control characters')),
     kind: z.enum(MODULE_KINDS),
@@ -74,7 +83,7 @@ export function moduleFormSchema(unit: LengthUnit) {
   });
 }
 
-export type ModuleFormOutput = z.output<ReturnType<typeof moduleFormSchema>>;
+export type ModuleFormOutput = z.output<ReturnType<typeof buildSchema>>;
 
 export function formValuesOf(m: Module, unit: LengthUnit): ModuleFormValues {
   const len = (v: number) => String(toUnit(v, unit));
