@@ -26,26 +26,36 @@ function validZone(zone: string | undefined): string | undefined {
 }
 
 const LOCALE = 'en-GB';
-const dateTime = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: STUDIO_TIME_ZONE, timeZoneName: 'short' });
-const dateOnly = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'short', year: 'numeric', timeZone: STUDIO_TIME_ZONE });
-const longDate = new Intl.DateTimeFormat(LOCALE, { day: 'numeric', month: 'long', year: 'numeric', timeZone: STUDIO_TIME_ZONE });
+
+/**
+ * A date format made on its first use, not as the module loads: the first format with a time zone
+ * loads the zone data, about 100 ms in a fresh browser tab, and most pages that load this module
+ * (the editor among them) write no date while they start.
+ */
+function lazyFormat(options: Intl.DateTimeFormatOptions): () => Intl.DateTimeFormat {
+  let made: Intl.DateTimeFormat | undefined;
+  return () => (made ??= new Intl.DateTimeFormat(LOCALE, { ...options, timeZone: STUDIO_TIME_ZONE }));
+}
+const dateTime = lazyFormat({ day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZoneName: 'short' });
+const dateOnly = lazyFormat({ day: 'numeric', month: 'short', year: 'numeric' });
+const longDate = lazyFormat({ day: 'numeric', month: 'long', year: 'numeric' });
 
 type When = Date | string | number;
 const asDate = (d: When) => (d instanceof Date ? d : new Date(d));
 
 /** "3 Dec 2026, 16:32 GMT". */
 export function formatDateTime(d: When): string {
-  return dateTime.format(asDate(d));
+  return dateTime().format(asDate(d));
 }
 
 /** "3 Dec 2026". */
 export function formatDate(d: When): string {
-  return dateOnly.format(asDate(d));
+  return dateOnly().format(asDate(d));
 }
 
 /** "3 December 2026", for letters and mail. */
 export function formatLongDate(d: When): string {
-  return longDate.format(asDate(d));
+  return longDate().format(asDate(d));
 }
 
 const numberFormats = new Map<string, Intl.NumberFormat>();
