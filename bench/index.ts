@@ -171,6 +171,11 @@ ${table}
   (drop a module from the Parts shelf, drag a module, type a length in the Details panel, switch arrangement, switch a
   build-plan tab); the editor's bay drawn = the plan's canvas in the page plus two painted frames, from navigation start.
   Twice: unthrottled, and with the CPU slowed 4×. web-vitals reports no INP under 16 ms; such a figure reads 16 ms.
+  web-vitals reports INP only when it grows, and getting the page ready can take an interaction of its own (the click
+  that selects a module before a length is typed); so an interaction's INP is the larger of what web-vitals reports
+  after it and its longest Event Timing entry (the entries web-vitals reads; INP is the longest interaction below 50).
+  A drop from the Parts shelf is a drag and drop, which INP does not count (only pointer and key events get an
+  interaction id): its figure is the \`drop\` event's Event Timing duration, to the next paint.
 - **Start-up** (\`bench/startup.ts\`): the \`next\` binary's \`start\` (run with node directly, as a process manager
   would; \`npx\` adds about 0.4 s of its own) to the first 200 of \`/sign-in\`; cold = a new data folder (the cluster
   comes from the empty template \`npm install\` makes, then migrations run), warm = the same folder again (best of

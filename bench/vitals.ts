@@ -16,7 +16,8 @@
  * CDP `Emulation.setCPUThrottlingRate`. Goals at 4×: LCP ≤ 2500 ms, INP ≤ 200 ms, CLS ≤ 0.1 on every
  * page (web.dev's "good" thresholds); unthrottled: bay drawn ≤ 1000 ms, INP ≤ 100 ms.
  * web-vitals reports INP only for interactions of 16 ms or more (its lowest threshold); a missing
- * report is written as 16 ms, an upper bound. Prints only; bench/index.ts writes the report.
+ * report is written as 16 ms, an upper bound. An interaction's INP is also read from the Event
+ * Timing entries after the interaction began (see inpOf), because web-vitals reports only growth. Prints only; bench/index.ts writes the report.
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -37,6 +38,11 @@ const COLLECT = `${VITALS_SOURCE}
   webVitals.onLCP(keep, { reportAllChanges: true });
   webVitals.onCLS(keep, { reportAllChanges: true });
   webVitals.onINP(keep, { reportAllChanges: true, durationThreshold: 16 });
+  // The Event Timing entries INP is made of (those with an interactionId: pointer and key events),
+  // and the drop of a drag and drop, which has none (start, duration), for one interaction's figure.
+  const events = (window.__events = []);
+  new PerformanceObserver((l) => { for (const e of l.getEntries()) if (e.interactionId || e.name === 'drop') events.push([e.startTime, e.duration]); })
+    .observe({ type: 'event', durationThreshold: 16, buffered: true });
   // The editor's bay: its canvas is in the page, then two frames later it has been painted.
   const seen = () => {
     if (v.bayDrawn !== undefined || !document.querySelector('[data-testid="plan"] canvas')) return false;
@@ -94,7 +100,16 @@ async function screenOf(page: Page, x: number, y: number) {
   return { x: box.x + ox + x * scale, y: box.y + oy + y * scale };
 }
 
-/** One interaction on a fresh load of the page; its INP as web-vitals reports it (after a settle). */
+/**
+ * One interaction on a fresh load of the page, after a settle: the longest of its interactions
+ * (INP's own definition below 50 interactions), from the Event Timing entries web-vitals reads.
+ * web-vitals reports INP only when it grows, so when getting the page ready took an interaction
+ * (the click that selects a module before typing a length) longer than the measured one, it says
+ * nothing new: its figure alone would read 16 ms, hiding the measured interaction. The larger
+ * of the two is kept. A drop from the Parts shelf is a drag and drop, which INP does not count
+ * (the browser gives interaction ids to pointer and key events only): its figure is the drop
+ * event's own Event Timing duration, to the next paint, the same measure.
+ */
 async function inpOf(context: BrowserContext, rate: number, url: string, ready: (p: Page) => Promise<void>, act: (p: Page) => Promise<void>): Promise<number> {
   const page = await openPage(context, rate);
   try {
@@ -102,10 +117,13 @@ async function inpOf(context: BrowserContext, rate: number, url: string, ready: 
     await ready(page);
     await page.waitForTimeout(1500); // let start-up work (live checks, lazy chunks) finish first
     await page.evaluate('delete window.__vitals.INP');
+    const from = (await page.evaluate('performance.now()')) as number;
     await act(page);
     await page.waitForTimeout(800);
     const v = (await page.evaluate('({ ...window.__vitals })')) as Record<string, number>;
-    return round(v.INP ?? 16, 0);
+    const events = (await page.evaluate('window.__events')) as [number, number][];
+    const longest = Math.max(0, ...events.filter(([start]) => start >= from).map(([, duration]) => duration));
+    return round(Math.max(v.INP ?? 0, longest, 16), 0);
   } finally {
     await page.close();
   }

@@ -3,10 +3,13 @@
  * out at once (so a drop shows its findings quickly), changes during the window are folded into
  * one trailing call. Keeps us under the server's rate limit (≈10 a second). Pure timing; no React.
  *
- * "At once" means straight after the browser has painted the change (`afterPaint`), not inside
- * the keystroke or drop that made it: building and sending the request, and the re-render that
- * marks the findings as being checked, would otherwise delay the frame that shows the edit.
+ * "At once" means straight after the browser has painted the change (`afterPaint`, in the browser
+ * `afterNextPaint`), not inside the keystroke or drop that made it: building and sending the
+ * request, and the re-render that marks the findings as being checked, would otherwise delay the
+ * frame that shows the edit.
  */
+import { afterNextPaint } from '@/components/ui/afterNextPaint';
+
 export interface Throttle<T> {
   push(value: T): void;
   cancel(): void;
@@ -25,19 +28,7 @@ const realTimers: ThrottleTimers = {
   set: (fn, ms) => setTimeout(fn, ms),
   clear: (handle) => clearTimeout(handle as ReturnType<typeof setTimeout>),
   now: () => Date.now(),
-  afterPaint: (fn) => {
-    // A frame callback runs just before the paint; a task queued from it runs after.
-    if (typeof requestAnimationFrame !== 'function') {
-      const t = setTimeout(fn, 0);
-      return () => clearTimeout(t);
-    }
-    let t: ReturnType<typeof setTimeout> | undefined;
-    const frame = requestAnimationFrame(() => (t = setTimeout(fn, 0)));
-    return () => {
-      cancelAnimationFrame(frame);
-      if (t !== undefined) clearTimeout(t);
-    };
-  },
+  afterPaint: afterNextPaint,
 };
 
 export function createThrottle<T>(windowMs: number, emit: (value: T) => void, timers: ThrottleTimers = realTimers): Throttle<T> {

@@ -17,7 +17,7 @@ import { isDirty } from '../store/editorStore';
 import { saveLayout, type FetchLike, type SavedCopy } from './layoutApi';
 import { flushOnLeave } from './leaveFlush';
 import { fieldName } from '@/lib/layout/field-names';
-import { runWaitingNow } from '@/components/ui/afterNextPaint';
+import { runWaitingCommits } from '@/components/ui/afterNextPaint';
 
 export const AUTOSAVE_DELAY_MS = 1200;
 
@@ -153,7 +153,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
   useEffect(() => {
     if (!canEdit) return;
     const unsaved = () => {
-      runWaitingNow(); // a field left a moment ago may still be committing its edit
+      runWaitingCommits(); // a field left a moment ago may still be committing its edit
       return isDirty(api.getState()) || inFlight.current;
     };
     const onBeforeUnload = (e: BeforeUnloadEvent) => {
@@ -189,7 +189,7 @@ export function useAutosave(api: EditorStore, layoutId: string, canEdit: boolean
 
   useEffect(() => () => {
     if (timer.current) clearTimeout(timer.current);
-    runWaitingNow();
+    runWaitingCommits();
     // Leaving with an edit not yet saved (and saving not stopped): send it now, with keepalive (leaveFlush.ts).
     if (canEdit && !inFlight.current && !blocked.current) void flushOnLeave(api, layoutId, fetchFn);
   }, [api, canEdit, fetchFn, layoutId]);

@@ -10,7 +10,7 @@ import type { EditorStore } from '../store/editorStore';
 import { dispatchKey, isTypingTarget } from './keyboard';
 import { COMMANDS } from './commands';
 import { isMacPlatform } from './shortcuts';
-import { runWaitingNow } from '@/components/ui/afterNextPaint';
+import { runWaitingCommits } from '@/components/ui/afterNextPaint';
 
 export function useEditorKeyboard(api: EditorStore, only?: readonly string[]) {
   const key = only?.join(',');
@@ -23,7 +23,7 @@ export function useEditorKeyboard(api: EditorStore, only?: readonly string[]) {
       if (t?.closest?.('[role="menu"], [role="tablist"], [role="radiogroup"]') && e.key.startsWith('Arrow')) return;
       const inDialog = t?.closest?.('dialog');
       if (inDialog && e.key !== '?' && e.key !== 'Escape') return;
-      runWaitingNow(); // a field's commit still waiting for its paint comes before the command
+      runWaitingCommits(); // a field's commit still waiting for its paint comes before the command
       const { command, result } = dispatchKey(e, api.getState(), mac, commands);
       if (!command) return;
       e.preventDefault();

@@ -9,7 +9,7 @@ import { toast } from 'sonner';
 import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
-import { runWaitingNow } from '@/components/ui/afterNextPaint';
+import { runWaitingCommits } from '@/components/ui/afterNextPaint';
 
 const ICONS: Record<string, ComponentType<LucideProps>> = {
   'edit.rotate': RotateCw, 'edit.duplicate': Copy, 'edit.delete': Trash2, 'edit.undo': Undo2, 'edit.redo': Redo2,
@@ -34,7 +34,7 @@ export function CommandButton({ id, withLabel = false, pressed }: { id: string; 
       title={`${c.label}${step ? `: ${step}` : ''} (${keys})`}
       aria-label={withLabel ? undefined : c.label}
       onClick={() => {
-        runWaitingNow();
+        runWaitingCommits();
         const r = c.run(api.getState());
         if (r && !r.ok && r.error) toast.error(r.error);
       }}

@@ -8,7 +8,7 @@ import { toast } from 'sonner';
 import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';
-import { runWaitingNow } from '@/components/ui/afterNextPaint';
+import { runWaitingCommits } from '@/components/ui/afterNextPaint';
 
 const ITEMS = ['edit.rotate', 'edit.duplicate', 'edit.delete', 'select.all', 'view.fit', 'view.phantom', 'help.shortcuts'];
 
@@ -64,7 +64,7 @@ export function ContextMenu({ at, onClose }: { at: { x: number; y: number }; onC
             role="menuitem"
             disabled={!enabled}
             onClick={() => {
-              runWaitingNow();
+              runWaitingCommits();
               const r = c.run(api.getState());
               if (r && !r.ok && r.error) toast.error(r.error);
               onClose();

@@ -6,7 +6,7 @@
  */
 import { useId, useRef, useState } from 'react';
 import { parseLength, toUnit, type LengthUnit } from '@/lib/layout/units';
-import { afterNextPaint } from '@/components/ui/afterNextPaint';
+import { commitAfterNextPaint } from '@/components/ui/afterNextPaint';
 
 export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, min = 0, max, testId, compact = false }: {
   label: string;
@@ -42,7 +42,7 @@ export function LengthField({ label, hint, valueMm, unit, onCommit, disabled, mi
     // Enter and then leaving the field within that frame commit once.
     if (pending.current === v) return;
     pending.current = v;
-    afterNextPaint(() => {
+    commitAfterNextPaint(() => {
       pending.current = null;
       const r = onCommit(v);
       if (!r.ok) return setError(r.error ?? 'Refused');

@@ -20,7 +20,7 @@ import { FACING_WORDS, MOUNT_WORDS, SURFACE_WORDS } from '@/lib/layout/field-wor
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { formValuesOf, moduleFormSchema, readModuleForm, type ModuleFormValues, type ModuleFormOutput, type ModuleFormField } from './moduleForm';
 import { CommandButton } from './CommandButton';
-import { afterNextPaint } from '@/components/ui/afterNextPaint';
+import { commitAfterNextPaint } from '@/components/ui/afterNextPaint';
 
 
 export default function ModuleForm({ module }: { module: Module }) {
@@ -51,7 +51,7 @@ export default function ModuleForm({ module }: { module: Module }) {
     // paint that shows the focus moving, so the plan's redraw does not hold up that paint.
     const { patch } = r;
     const edited = module;
-    afterNextPaint(() => {
+    commitAfterNextPaint(() => {
       // Enter and then leaving the field within one frame read the same change twice: what the
       // store already holds is not applied again (it would be an undo entry that changes nothing).
       const now = api.getState().doc.modules.find((m) => m.id === edited.id) as Record<string, unknown> | undefined;
