@@ -14,8 +14,9 @@ import { CautionNote } from '@/components/ui/CautionNote';
 import { useEditor } from '../store/EditorStoreContext';
 import { CommandButton } from './CommandButton';
 import { OpeningForm } from './OpeningForm';
+import { loadModuleForm } from './loadModuleForm';
 
-const ModuleForm = lazy(() => import('./ModuleForm'));
+const ModuleForm = lazy(loadModuleForm);
 
 export const DetailsPanel = memo(function DetailsPanel() {
   const live = useEditor(useShallow((s) => ({ selection: s.selection, modules: s.doc.modules })));

@@ -12,6 +12,7 @@ import { formatLength } from '@/lib/layout/units';
 import { kindCaution } from '@/lib/layout/cautions';
 import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';
 import { matchKinds } from './partsSearch';
+import { loadModuleForm } from './loadModuleForm';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';
 import { KIND_DRAG_TYPE } from '../canvas/usePlanPointer';
 import { setDrawer } from '@/components/ui/drawers';
@@ -87,6 +88,7 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan, pickToPlace = fa
                 e.dataTransfer.effectAllowed = 'copy';
               }}
               onClick={(e) => pick(k, e.detail)}
+              onPointerDown={() => void loadModuleForm()}
               data-kind={k.kind}
               aria-label={`Place ${k.title}, ${formatLength(k.length, units)} by ${formatLength(k.width, units)}`}
               aria-describedby={kindCaution(k.kind) ? `shelf-caution-${k.kind}` : undefined}
