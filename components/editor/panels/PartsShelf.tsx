@@ -88,7 +88,7 @@ export const PartsShelf = memo(function PartsShelf({ focusPlan, pickToPlace = fa
                 e.dataTransfer.effectAllowed = 'copy';
               }}
               onClick={(e) => pick(k, e.detail)}
-              onPointerDown={() => void loadModuleForm()}
+              onPointerDown={() => void loadModuleForm().catch(() => undefined)} // the Details panel loads it again, and says so, if this fails
               data-kind={k.kind}
               aria-label={`Place ${k.title}, ${formatLength(k.length, units)} by ${formatLength(k.width, units)}`}
               aria-describedby={kindCaution(k.kind) ? `shelf-caution-${k.kind}` : undefined}
