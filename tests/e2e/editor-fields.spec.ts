@@ -91,3 +91,25 @@ test('Enter and then Tab straight after apply an edit once: one undo puts the ol
   await page.keyboard.press('ControlOrMeta+z');
   await expect(length).toHaveValue(String(before));
 });
+
+test('a drop from the shelf and a key straight after: the module is placed first, and the key acts on it', async ({ page }) => {
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openNewLayout(page, 'Fields — drop, then a key');
+  const undo = page.getByRole('button', { name: 'Undo', exact: true });
+  await expect(undo).toBeDisabled();
+  // The drop is placed after the paint that answers it; a key pressed before that paint (both
+  // events are sent in one script, so no frame comes between them) must still find it placed.
+  await page.getByTestId('plan').evaluate((plan) => {
+    const r = plan.getBoundingClientRect();
+    const data = new DataTransfer();
+    data.setData('application/x-baywright-kind', 'step');
+    plan.dispatchEvent(new DragEvent('drop', { dataTransfer: data, clientX: r.left + r.width / 2, clientY: r.top + r.height / 2, bubbles: true, cancelable: true }));
+    plan.dispatchEvent(new KeyboardEvent('keydown', { key: 'Delete', bubbles: true, cancelable: true }));
+  });
+  // Placed, then deleted: the last step is the deletion of the placed (selected) module.
+  await expect(undo).toHaveAttribute('title', /^Undo: Delete 1 module/);
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press('ControlOrMeta+z');
+  await expect(undo).toHaveAttribute('title', /^Undo: Place module/);
+  await expect(page.getByTestId('selection-announcer')).toContainText(/^Step selected/);
+});

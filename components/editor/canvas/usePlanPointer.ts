@@ -6,7 +6,8 @@
  * Pan and zoom are shown by moving the stage as one picture and reach the store when the gesture
  * ends (viewPreview.ts), so a tablet keeps its frame rate while two fingers zoom. A drag or resize
  * is committed just after the frame that shows where it was let go (the drag layer still draws
- * it there), so the release paints at once and the document, plan and findings follow.
+ * it there), so the release paints at once and the document, plan and findings follow; a drop
+ * from the Parts shelf is placed the same way, just after the frame that ends the drag.
  * Each gesture is begun, dragged and committed through store actions; Escape (a command)
  * cancels it, and the rest of that pointer stroke is ignored. Must never write the document
  * directly.
@@ -21,6 +22,7 @@ import { createViewPreview, type PreviewStage } from './viewPreview';
 import { cursorForHandle, drawOrder, handleAt, moduleAt } from '../geometry/hitTest';
 import { HANDLE_PX } from './OverlayLayer';
 import { isTypingTarget } from '../commands/keyboard';
+import { commitAfterNextPaint, runWaitingCommits } from '@/components/ui/afterNextPaint';
 import { inArrangement, modulesIn } from '@/lib/layout/bay';
 import { openingAt, openingMarks, roofOpeningInside, type OpeningMark } from '../geometry/openingMarks';
 import type { EditorState } from '../store/editorStore';
@@ -103,6 +105,12 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       if (!releasedGesture) return;
       releasedGesture = false;
       report(api.getState().commitGesture());
+    };
+    // Anything still waiting for its paint (a drop from the shelf, a field's edit, a released drag),
+    // in the order it was made: before the next press or key.
+    const commitWaiting = () => {
+      runWaitingCommits();
+      commitReleased();
     };
     const commitAfterPaint = () => {
       releasedGesture = true;
@@ -322,14 +330,16 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       e.preventDefault();
       if (!Object.prototype.hasOwnProperty.call(KINDS, kind)) return void toast.error(`Unknown module kind "${kind}".`);
       const w = world(local(e));
-      report(api.getState().addModule(kind as ModuleKind, w));
       el!.focus({ preventScroll: true });
+      // The drop is answered by the next paint (the end of the drag, the plan focused); the module
+      // is placed in the task after it, or before anything else the person does (runWaitingCommits).
+      commitAfterNextPaint(() => report(api.getState().addModule(kind as ModuleKind, w)));
     }
 
     // Keyboard commands (zoom, fit, nudges) work on the store's view: give it the one on show
     // first (capturing, so before any command's listener).
     function commitBeforeKey() {
-      commitReleased();
+      commitWaiting();
       if (view.pending()) commitView();
     }
     function onKeyDown(e: KeyboardEvent) {
@@ -357,7 +367,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
     el.addEventListener('dragover', onDragOver);
     el.addEventListener('drop', onDrop);
     window.addEventListener('keydown', commitBeforeKey, true);
-    window.addEventListener('pointerdown', commitReleased, true); // a toolbar button (Undo) sees the drag committed
+    window.addEventListener('pointerdown', commitWaiting, true); // a toolbar button (Undo) sees the drag or drop committed
     window.addEventListener('keydown', onKeyDown);
     window.addEventListener('keyup', onKeyUp);
     return () => {
@@ -370,7 +380,7 @@ export function usePlanPointer(container: RefObject<HTMLDivElement | null>, api:
       el.removeEventListener('dragover', onDragOver);
       el.removeEventListener('drop', onDrop);
       window.removeEventListener('keydown', commitBeforeKey, true);
-      window.removeEventListener('pointerdown', commitReleased, true);
+      window.removeEventListener('pointerdown', commitWaiting, true);
       window.removeEventListener('keydown', onKeyDown);
       window.removeEventListener('keyup', onKeyUp);
       stopLongPress();
