@@ -24,6 +24,8 @@ import { Tabs } from '@/components/ui/Tabs';
 import { Drawer } from '@/components/ui/Drawer';
 import { toggleDrawer, useOpenDrawer, type DrawerId } from '@/components/ui/drawers';
 import { useScreenClass } from '@/components/ui/screenClass';
+import { whenIdle } from '@/components/ui/whenIdle';
+import { warmModuleCheck } from './store/moduleEdits';
 import { KINDS } from '@/lib/layout/kinds';
 import { ShortcutSheet } from './panels/ShortcutSheet';
 import { ConflictDialog } from './panels/ConflictDialog';
@@ -68,6 +70,8 @@ function EditorScreen({ layoutId, canEdit, extensions, editingNeedsLargerScreen,
   useEffect(() => {
     if (incoming && !canEdit && incoming.version !== api.getState().version) api.getState().replaceDoc(incoming.doc, incoming.version);
   }, [incoming, canEdit, api]);
+  // Build the module check while idle, so the first drop from the shelf does not pay for it.
+  useEffect(() => (canEdit ? whenIdle(warmModuleCheck) : undefined), [canEdit]);
   const save = useAutosave(api, layoutId, canEdit);
   // Opened from the browser's cache (the back button) or left open while someone saved: catch up with the saved copy.
   useLatestSaved(api, layoutId, { enabled: canEdit });

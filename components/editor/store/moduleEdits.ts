@@ -64,6 +64,15 @@ export function moduleFromKind(kind: ModuleKind, id: string): Module {
   } as Module);
 }
 
+/**
+ * Checks one module of every kind the shelf offers, and throws the results away: zod builds a
+ * schema's parser on its first use (a few ms, four times that on a tablet), so the editor calls
+ * this while idle and the first module placed does not pay for it.
+ */
+export function warmModuleCheck(): void {
+  for (const kind of Object.keys(KINDS) as ModuleKind[]) moduleFromKind(kind, 'warm-up');
+}
+
 /** Where a new module mounted outside the body goes when no point is given: mid-width, behind the rear or mid-bay. */
 function outsideSpot(doc: LayoutDoc, m: Module): { x: number; y: number } {
   const y = Math.round((doc.bay.width - m.width) / 2);
