@@ -3,7 +3,7 @@
 // Text is measured with the product's own face metrics (lib/sheet/font-metrics, generated from
 // fonts/*.woff), the faces the canvas draws with.
 import { describe, expect, it } from 'vitest';
-import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, placePlanLabels, type PlanLabelItem, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
+import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, placePlanLabels, rememberedWidths, type PlanLabelItem, type MeasureText, type TextBox } from '@/components/editor/geometry/labels';
 import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbols/kind-short-names';
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
@@ -132,5 +132,43 @@ describe('module labels on the plan', () => {
     });
     expect(boxes.length).toBeGreaterThan(20);
     for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j])).toBe(false);
+  });
+});
+
+describe('remembered text widths', () => {
+  it('measures each text, face and size once, and answers as the measure did', () => {
+    const asked: string[] = [];
+    const measure: MeasureText = (text, face, size) => {
+      asked.push(`${face} ${size} ${text}`);
+      return text.length * size * (face === 'mono' ? 0.6 : 0.5);
+    };
+    const kept = rememberedWidths(measure);
+    expect(kept('Galley', 'text', 11)).toBe(33);
+    expect(kept('Galley', 'text', 11)).toBe(33);
+    expect(kept('Galley', 'mono', 11)).toBeCloseTo(39.6);
+    expect(kept('Galley', 'text', 10)).toBe(30);
+    expect(asked).toEqual(['text 11 Galley', 'mono 11 Galley', 'text 10 Galley']);
+  });
+
+  it('keeps at most its limit, then starts again', () => {
+    let calls = 0;
+    const kept = rememberedWidths(() => ++calls, 3);
+    for (const t of ['a', 'b', 'c']) kept(t, 'text', 11);
+    kept('a', 'text', 11);
+    expect(calls).toBe(3);
+    kept('d', 'text', 11); // the fourth: forgets the three
+    kept('a', 'text', 11);
+    expect(calls).toBe(5);
+  });
+
+  it('places a plan the same with and without remembering', () => {
+    const measure: MeasureText = (text, _face, size) => text.length * size * 0.55;
+    const items: PlanLabelItem[] = Array.from({ length: 40 }, (_, i) => ({
+      id: `m${i}`, x: (i % 8) * 70, y: Math.floor(i / 8) * 40, width: 60 + (i % 5) * 10, height: 30 + (i % 3) * 15,
+      names: { full: `Cupboard number ${i}`, short: 'Cupboard', abbreviation: 'CB' }, dimension: `${600 + i} × 300`,
+    }));
+    const kept = rememberedWidths(measure);
+    expect(placePlanLabels(items, kept)).toEqual(placePlanLabels(items, measure));
+    expect(placePlanLabels(items, kept)).toEqual(placePlanLabels(items, measure)); // answered from what it kept
   });
 });

@@ -11,7 +11,7 @@ import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
 import { ModuleLabels, ModuleShape } from './ModuleShape';
 import { canvasMeasure, labelRequestOf } from './moduleSymbols';
-import { placePlanLabels } from '../geometry/labels';
+import { placePlanLabels, rememberedWidths } from '../geometry/labels';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -45,13 +45,16 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   }, [modules, arrangement, phantom, hidden]);
   // Labels for the whole plan at this scale, clear of each other (the pan plays no part).
   const scale = viewport.scale;
-  const placements = useMemo(() => {
+  const measure = useMemo(() => {
     const ctx = measuringContext();
-    if (!ctx) return undefined;
     void fontsReady; // measured again once the faces have loaded
+    return ctx ? rememberedWidths(canvasMeasure(ctx, fonts)) : undefined;
+  }, [fonts, fontsReady]);
+  const placements = useMemo(() => {
+    if (!measure) return undefined;
     const items = shown.map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units }) }));
-    return placePlanLabels(items, canvasMeasure(ctx, fonts));
-  }, [shown, scale, units, fonts, fontsReady]);
+    return placePlanLabels(items, measure);
+  }, [shown, scale, units, measure]);
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (

@@ -110,6 +110,25 @@ export function placeModuleLabel(req: LabelRequest, measure: MeasureText): Label
   return result(name ? box(name, W / 2, H / 2) : null, 'outside', box(dim, x1 + gap + dim.w / 2, H / 2), { x0, y0: H / 2, x1, y1: H / 2 });
 }
 
+/**
+ * `measure` with its answers kept: the same names and sizes are measured on every redraw of the
+ * plan, and setting a canvas font and measuring costs more than the placing. Keeps at most `limit`
+ * widths, then starts again. Make a new one when the faces change (a font that has loaded).
+ */
+export function rememberedWidths(measure: MeasureText, limit = 4096): MeasureText {
+  const known = new Map<string, number>();
+  return (text, face, size) => {
+    const key = `${face}\u0000${size}\u0000${text}`;
+    let w = known.get(key);
+    if (w === undefined) {
+      if (known.size >= limit) known.clear();
+      w = measure(text, face, size);
+      known.set(key, w);
+    }
+    return w;
+  };
+}
+
 export interface PlanLabelItem extends LabelRequest {
   id: string;
   /** The module's min corner on the plan, px (mm × scale; the viewport's pan plays no part). */

@@ -3,7 +3,7 @@
  * A toolbar or panel button for one editor command: the same object the keyboard and context
  * menu use, so label, shortcut and enabled state always agree. Never runs anything else.
  */
-import type { ComponentType } from 'react';
+import { memo, type ComponentType } from 'react';
 import { RotateCw, Copy, Trash2, Undo2, Redo2, ZoomIn, ZoomOut, Maximize, Ruler, Keyboard, SquareDashed, Save, type LucideProps } from 'lucide-react';
 import { toast } from 'sonner';
 import { command } from '../commands/commands';
@@ -17,7 +17,8 @@ const ICONS: Record<string, ComponentType<LucideProps>> = {
   'view.phantom': SquareDashed, 'edit.save': Save,
 };
 
-export function CommandButton({ id, withLabel = false, pressed }: { id: string; withLabel?: boolean; pressed?: boolean }) {
+/** Memoised: a toolbar re-rendered for its save status does not rebuild every button and icon. */
+export const CommandButton = memo(function CommandButton({ id, withLabel = false, pressed }: { id: string; withLabel?: boolean; pressed?: boolean }) {
   const api = useEditorApi();
   const c = command(id);
   const enabled = useEditor((s) => c.enabled(s));
@@ -44,4 +45,4 @@ export function CommandButton({ id, withLabel = false, pressed }: { id: string; 
       {withLabel && <span>{c.label}</span>}
     </button>
   );
-}
+});

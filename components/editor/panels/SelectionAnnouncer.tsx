@@ -1,5 +1,6 @@
 'use client';
 /** Tells screen readers what is selected and where it is, as it changes (aria-live). */
+import { memo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { KINDS } from '@/lib/layout/kinds';
 import { formatLength } from '@/lib/layout/units';
@@ -21,7 +22,7 @@ export function openingAnnouncement(bay: Bay, o: Opening, units: LengthUnit): st
   return `${title} selected: on the ${o.wall} wall, ${f(o.position)} from its ${o.wall === 'rear' ? 'left' : 'front'} end, ${f(o.height)} above the bare floor.`;
 }
 
-export function SelectionAnnouncer({ id }: { id: string }) {
+export const SelectionAnnouncer = memo(function SelectionAnnouncer({ id }: { id: string }) {
   const { modules, selection, units, arrangement, bay, openingSelection } = useEditor(useShallow((s) => ({ modules: s.doc.modules, selection: s.selection, units: s.units, arrangement: s.arrangement, bay: s.doc.bay, openingSelection: s.openingSelection })));
   const sel = modules.filter((m) => selection.includes(m.id));
   let text = `Showing ${arrangement}. Nothing selected.`;
@@ -34,4 +35,4 @@ export function SelectionAnnouncer({ id }: { id: string }) {
   return (
     <p id={id} aria-live="polite" className="sr-only" data-testid="selection-announcer">{text}</p>
   );
-}
+});

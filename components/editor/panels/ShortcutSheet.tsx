@@ -1,5 +1,6 @@
 'use client';
 /** The shortcut sheet (`?`): every command with its keys, from the one command list. */
+import { memo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { COMMANDS, type CommandGroup } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
@@ -10,7 +11,8 @@ const GROUPS: { id: CommandGroup; title: string }[] = [
   { id: 'edit', title: 'Edit' }, { id: 'select', title: 'Select' }, { id: 'view', title: 'View' }, { id: 'arrangement', title: 'Arrangements' }, { id: 'help', title: 'Help' },
 ];
 
-export function ShortcutSheet() {
+/** Memoised (no props): an edit that re-renders the editor does not rebuild the closed sheet. */
+export const ShortcutSheet = memo(function ShortcutSheet() {
   const api = useEditorApi();
   const { open, readOnly } = useEditor(useShallow((s) => ({ open: s.shortcutSheetOpen, readOnly: s.readOnly })));
   const mac = isMacPlatform();
@@ -48,4 +50,4 @@ export function ShortcutSheet() {
       </div>
     </Dialog>
   );
-}
+});
