@@ -175,7 +175,9 @@ ${table}
   that selects a module before a length is typed); so an interaction's INP is the larger of what web-vitals reports
   after it and its longest Event Timing entry (the entries web-vitals reads; INP is the longest interaction below 50).
   A drop from the Parts shelf is a drag and drop, which INP does not count (only pointer and key events get an
-  interaction id): its figure is the \`drop\` event's Event Timing duration, to the next paint.
+  interaction id): its figure is the \`drop\` event's Event Timing duration, to the next paint. The editor places the
+  module in the task after that paint, so beside it stands "drop → module drawn": from the drop to two frames after
+  the selection line names the placed module (the frame that drew it, painted), for the time to the module on the plan.
 - **Start-up** (\`bench/startup.ts\`): the \`next\` binary's \`start\` (run with node directly, as a process manager
   would; \`npx\` adds about 0.4 s of its own) to the first 200 of \`/sign-in\`; cold = a new data folder (the cluster
   comes from the empty template \`npm install\` makes, then migrations run), warm = the same folder again (best of

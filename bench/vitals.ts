@@ -41,7 +41,7 @@ const COLLECT = `${VITALS_SOURCE}
   // The Event Timing entries INP is made of (those with an interactionId: pointer and key events),
   // and the drop of a drag and drop, which has none (start, duration), for one interaction's figure.
   const events = (window.__events = []);
-  new PerformanceObserver((l) => { for (const e of l.getEntries()) if (e.interactionId || e.name === 'drop') events.push([e.startTime, e.duration]); })
+  new PerformanceObserver((l) => { for (const e of l.getEntries()) { if (e.interactionId || e.name === 'drop') events.push([e.startTime, e.duration]); if (e.name === 'drop') window.__dropAt = e.startTime; } })
     .observe({ type: 'event', durationThreshold: 16, buffered: true });
   // The editor's bay: its canvas is in the page, then two frames later it has been painted.
   const seen = () => {
@@ -58,7 +58,12 @@ const COLD_LOADS = Number(process.env.BENCH_COLD_LOADS ?? 3);
 export const GOALS = { lcpMs: 2500, clsMax: 0.1, inpThrottledMs: 200, inpMs: 100, bayDrawnMs: 1000 } as const;
 
 export interface PageVitals { page: string; lcpMs: number; cls: number }
-export interface InteractionVitals { interaction: string; inpMs: number }
+export interface InteractionVitals {
+  interaction: string;
+  inpMs: number;
+  /** For the drop: ms from the drop to the frame after the one that drew the placed module (it is selected then). */
+  drawnMs?: number;
+}
 export interface VitalsRun {
   cpuSlowdown: number;
   pages: PageVitals[];
@@ -110,20 +115,24 @@ async function screenOf(page: Page, x: number, y: number) {
  * (the browser gives interaction ids to pointer and key events only): its figure is the drop
  * event's own Event Timing duration, to the next paint, the same measure.
  */
-async function inpOf(context: BrowserContext, rate: number, url: string, ready: (p: Page) => Promise<void>, act: (p: Page) => Promise<void>): Promise<number> {
+async function inpOf(context: BrowserContext, rate: number, url: string, ready: (p: Page) => Promise<void>, act: (p: Page) => Promise<void>): Promise<{ inpMs: number; drawnMs?: number }> {
   const page = await openPage(context, rate);
   try {
     await page.goto(url);
     await ready(page);
     await page.waitForTimeout(1500); // let start-up work (live checks, lazy chunks) finish first
     await page.evaluate('delete window.__vitals.INP');
+    // The placed module is drawn in the frame that shows it selected: two frames after the
+    // selection line changes, that frame has been painted (the bay drawn is timed the same way).
+    await page.evaluate(`window.__drawn = undefined; new MutationObserver((_, o) => { o.disconnect(); requestAnimationFrame(() => requestAnimationFrame(() => { window.__drawn = performance.now(); })); }).observe(document.getElementById('selection-announcer'), { childList: true, subtree: true, characterData: true });`);
     const from = (await page.evaluate('performance.now()')) as number;
     await act(page);
     await page.waitForTimeout(800);
     const v = (await page.evaluate('({ ...window.__vitals })')) as Record<string, number>;
     const events = (await page.evaluate('window.__events')) as [number, number][];
     const longest = Math.max(0, ...events.filter(([start]) => start >= from).map(([, duration]) => duration));
-    return round(Math.max(v.INP ?? 0, longest, 16), 0);
+    const drawn = (await page.evaluate('window.__drawn !== undefined && window.__dropAt !== undefined ? window.__drawn - window.__dropAt : null')) as number | null;
+    return { inpMs: round(Math.max(v.INP ?? 0, longest, 16), 0), ...(drawn !== null ? { drawnMs: round(drawn, 0) } : {}) };
   } finally {
     await page.close();
   }
@@ -162,7 +171,7 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
   try {
     interactions.push({
       interaction: 'drop a module from the Parts shelf',
-      inpMs: await inpOf(context, rate, editor, planReady, async (p) => {
+      ...await inpOf(context, rate, editor, planReady, async (p) => {
         const plan = p.getByTestId('plan');
         const box = (await plan.boundingBox())!;
         const to = await screenOf(p, doc.bay.length / 2, doc.bay.width / 2);
@@ -171,7 +180,7 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
     });
     interactions.push({
       interaction: 'drag a module',
-      inpMs: await inpOf(context, rate, editor, planReady, async (p) => {
+      ...await inpOf(context, rate, editor, planReady, async (p) => {
         const from = await screenOf(p, lounge.x + lounge.length / 2, lounge.y + lounge.width / 2);
         await p.mouse.move(from.x, from.y);
         await p.mouse.down();
@@ -181,7 +190,7 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
     });
     interactions.push({
       interaction: 'type a length in the Details panel',
-      inpMs: await inpOf(context, rate, editor, async (p) => {
+      ...await inpOf(context, rate, editor, async (p) => {
         await planReady(p);
         const at = await screenOf(p, lounge.x + lounge.length / 2, lounge.y + lounge.width / 2);
         await p.mouse.click(at.x, at.y);
@@ -195,13 +204,13 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
     });
     interactions.push({
       interaction: 'switch arrangement',
-      inpMs: await inpOf(context, rate, editor, planReady, async (p) => {
+      ...await inpOf(context, rate, editor, planReady, async (p) => {
         await p.getByTestId('arrangement-sleep').click();
       }),
     });
     interactions.push({
       interaction: 'switch a build-plan tab',
-      inpMs: await inpOf(context, rate, `${base}/layouts/${ids.layout}/build`, async (p) => {
+      ...await inpOf(context, rate, `${base}/layouts/${ids.layout}/build`, async (p) => {
         await p.locator('[data-testid="build-planner"][data-hydrated="true"]').waitFor();
       }, async (p) => {
         await p.getByRole('tab', { name: /^Power/ }).click();
@@ -257,7 +266,11 @@ export function vitalsLines(runs: VitalsRun[]): { what: string; figure: string; 
     if (!throttled) out.push({ what: `Web Vitals, ${tag}: editor bay drawn after navigation`, figure: `${r.bayDrawnMs} ms`, goal: `≤ ${GOALS.bayDrawnMs} ms`, met: r.bayDrawnMs <= GOALS.bayDrawnMs });
     else out.push({ what: `Web Vitals, ${tag}: editor bay drawn after navigation`, figure: `${r.bayDrawnMs} ms`, goal: '—', met: null });
     const goal = throttled ? GOALS.inpThrottledMs : GOALS.inpMs;
-    for (const i of r.interactions) out.push({ what: `Web Vitals, ${tag}: INP, ${i.interaction}`, figure: `${i.inpMs} ms`, goal: `≤ ${goal} ms`, met: i.inpMs <= goal });
+    for (const i of r.interactions) {
+      out.push({ what: `Web Vitals, ${tag}: INP, ${i.interaction}`, figure: `${i.inpMs} ms`, goal: `≤ ${goal} ms`, met: i.inpMs <= goal });
+      // No goal in the issue: shown so the drop's short INP (the module is placed after the paint that answers the drop) is read beside the time to the module on the plan.
+      if (i.drawnMs !== undefined) out.push({ what: `Web Vitals, ${tag}: ${i.interaction}, drop → module drawn`, figure: `${i.drawnMs} ms`, goal: '—', met: null });
+    }
   }
   return out;
 }
