@@ -35,22 +35,24 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
   const outline = useRef<Konva.Rect>(null);
   const scale = viewport.scale;
 
-  // The modules being moved are hidden on the modules layer by hand (no React pass over every
+  // The modules being moved are hidden in the plan's drawing layer by hand (no React pass over every
   // module) while this layer draws them; they are shown again when the gesture ends.
   useEffect(() => {
     if ((kind !== 'move' && kind !== 'resize') || ids.length === 0) return;
-    const modulesLayer = layer.current?.getStage()?.findOne<Konva.Layer>('.modules');
-    if (!modulesLayer) return;
-    const nodes = ids.map((id) => modulesLayer.findOne(`#module-${id}`)).filter((n): n is Konva.Node => !!n);
+    // The modules are a group in the plan's drawing layer (PlanStage), which is what is redrawn.
+    const shown = layer.current?.getStage()?.findOne<Konva.Group>('.modules');
+    const drawing = shown?.getLayer();
+    if (!shown || !drawing) return;
+    const nodes = ids.map((id) => shown.findOne(`#module-${id}`)).filter((n): n is Konva.Node => !!n);
     // Their labels too: the plan writes every label in one shape after the bodies (ModuleLabels).
-    const labels = modulesLayer.findOne<Konva.Shape>('.module-labels');
+    const labels = shown.findOne<Konva.Shape>('.module-labels');
     nodes.forEach((n) => n.visible(false));
     labels?.setAttr('skip', new Set(ids));
-    modulesLayer.batchDraw();
+    drawing.batchDraw();
     return () => {
       nodes.forEach((n) => n.visible(true));
       labels?.setAttr('skip', null);
-      modulesLayer.batchDraw();
+      drawing.batchDraw();
     };
   }, [kind, ids]);
 
