@@ -4,7 +4,7 @@
 // the L4H3 bay template (walls 36 mm), benches 1900 × 600 (cushion top 460 mm), infill 1900 × 528 at
 // 380 + 80 = 460 mm; one bed 1900 long and 600 + 528 + 600 = 1728 mm wide.
 import { expect, test, type Page } from '@playwright/test';
-import { signIn, keepScreenshot } from './helpers';
+import { signIn, keepScreenshot, pageErrors } from './helpers';
 
 // Its own layout on the L4H3 bay, so the shared stock layout other specs draw on stays empty.
 const LAYOUT = `Convertible lounge ${Date.now()}`;
@@ -24,6 +24,7 @@ async function place(page: Page, search: string, kind: string, at: Record<string
 }
 
 test('a convertible lounge: the bed passes in sleep while the benches stay seats in travel', async ({ page }) => {
+  const errors = pageErrors(page);
   await signIn(page, 'ivo@saltmarsh.test');
   const created = await page.request.post('/api/layouts', { data: { name: LAYOUT, bayTemplateId: 'l4h3' } });
   expect(created.status()).toBe(201);
@@ -53,4 +54,5 @@ test('a convertible lounge: the bed passes in sleep while the benches stay seats
   await expect(page.getByTestId('details-in-travel')).toBeChecked();
   await expect(page.getByTestId('details-top-travel')).toHaveValue('seat');
   await keepScreenshot(page, 'convertible-travel');
+  expect(errors).toEqual([]);
 });

@@ -4,7 +4,7 @@
 // and the read-only view a client gets. Screenshots of lounge and sleep kept as artifacts.
 import { expect, test, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { signIn, keepScreenshot } from './helpers';
+import { signIn, keepScreenshot, pageErrors } from './helpers';
 
 const STOCK = 'Workshop stock — L4H3 empty bay';
 
@@ -28,11 +28,8 @@ const numberIn = async (page: Page, field: string) => Number(await detail(page, 
 
 test.describe('layout editor', () => {
   test('place by drag, move with the mouse, sleep findings follow, undo, saved after reload', async ({ page }) => {
-    // Nothing the page does here may end in an error: one thrown in an effect leaves no other trace
-    // (the drag layer once looked for the modules' layer by a name a group had taken).
-    const errors: string[] = [];
-    page.on('console', (m) => void (m.type() === 'error' && errors.push(m.text())));
-    page.on('pageerror', (e) => void errors.push(e.message));
+    // Nothing the page does here may end in an error (the drag layer once threw on every move).
+    const errors = pageErrors(page);
     await signIn(page, 'ivo@saltmarsh.test');
     await openLayout(page, STOCK);
     const { plan, box, scale, at } = await planGeometry(page);

@@ -10,6 +10,17 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await expect(page).toHaveURL(/\/layouts/);
 }
 
+/**
+ * Every console error and uncaught page error from now on, to assert empty at the end of a flow:
+ * an error thrown in an effect or an event handler leaves no other trace on the page.
+ */
+export function pageErrors(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('console', (m) => void (m.type() === 'error' && errors.push(m.text())));
+  page.on('pageerror', (e) => void errors.push(e.message));
+  return errors;
+}
+
 export async function keepScreenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: `artifacts/screenshots/${name}.png`, fullPage: false });
 }

@@ -2,10 +2,11 @@
 // Openings group, find it drawn on the plan and select it by clicking its mark, type its Position
 // in Details, and undo the edit to see the window go back where it was.
 import { expect, test } from '@playwright/test';
-import { keepScreenshot, openNewLayout, signIn } from './helpers';
+import { keepScreenshot, openNewLayout, pageErrors, signIn } from './helpers';
 
 
 test('a window added from the shelf is drawn, selected by a click on its mark, moved in Details, and undo puts it back', async ({ page }) => {
+  const errors = pageErrors(page);
   await signIn(page, 'ivo@saltmarsh.test');
   await openNewLayout(page, 'Openings — window');
   const listed = page.getByTestId('plan-openings').locator('li[data-opening-type="window"]');
@@ -54,6 +55,7 @@ test('a window added from the shelf is drawn, selected by a click on its mark, m
   await page.getByTestId('plan').focus();
   await page.keyboard.press('Control+z');
   await expect(listed).toHaveCount(before + 1);
+  expect(errors).toEqual([]);
 });
 
 test('a heater exhaust by the sliding door fails its clearance; the finding selects it, and moving it in Details clears it', async ({ page }) => {

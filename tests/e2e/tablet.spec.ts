@@ -8,7 +8,7 @@
 // nothing serious or critical. Screenshots of each screen are attached to the test's report.
 import { expect, test, type Page, type TestInfo } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { signIn } from './helpers';
+import { pageErrors, signIn } from './helpers';
 import { pinch, touchDrag, touchHold } from './touch';
 
 /** WCAG 2.2 SC 2.5.5 Target Size (Enhanced), level AAA: at least 44 by 44 CSS pixels. */
@@ -87,6 +87,7 @@ for (const size of SIZES) {
 
     test('create from a template, place by touch, drag, long-press, sleep finding, undo', async ({ page }, info) => {
       test.setTimeout(120_000);
+      const errors = pageErrors(page);
       await page.addInitScript(forgetDrawer);
       await signIn(page, 'ivo@saltmarsh.test');
       const id = await newLayout(page, `Tablet ${size.name} ${Date.now().toString(36)}`);
@@ -153,6 +154,7 @@ for (const size of SIZES) {
       await page.getByRole('button', { name: 'Undo' }).tap();
       expect((await savedModules(page, id)).map((m) => m.kind).sort()).toEqual(['bench-seat', 'kitchen-counter']);
       await shot(page, info, `${size.name}-undone`);
+      expect(errors).toEqual([]);
     });
 
     test('targets of toolbar, drawers and handles are at least 44 × 44 px; axe finds nothing serious', async ({ page }, info) => {

@@ -5,7 +5,7 @@
 // plan sheet whose PDF draws the left wall's elevation true to scale.
 import fs from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { keepScreenshot, openNewLayout, signIn } from './helpers';
+import { keepScreenshot, openNewLayout, pageErrors, signIn } from './helpers';
 import { readPdf } from '../sheet/read-pdf';
 
 const PT = 72 / 25.4; // PDF points per mm (ISO 32000-1 §8.3.2.3: 1/72 inch; 25.4 mm per inch)
@@ -28,6 +28,7 @@ async function typeModuleLength(form: ReturnType<Page['getByRole']>, label: stri
 
 test('a window, a roof vent, two panels and the exhaust: elevations, roof plan, a clearance that fails then passes, and the elevations at scale in the PDF', async ({ page }, info) => {
   test.setTimeout(240_000);
+  const errors = pageErrors(page);
   await page.setViewportSize({ width: 1440, height: 900 });
   await signIn(page, 'ivo@saltmarsh.test');
   // The L2H2 template (public/templates/bay-l2h2.json, invented): 3100 × 1800 × 2000 mm, a sliding door
@@ -123,4 +124,5 @@ test('a window, a roof vent, two panels and the exhaust: elevations, roof plan, 
   // The new window's pane: 800 mm wide = 40 mm = 113.39 pt, 450 mm high = 22.5 mm = 63.78 pt.
   expect(sheet!.segments.some((s) => Math.abs(s.y1 - s.y2) < 0.05 && Math.abs(Math.abs(s.x2 - s.x1) - 40 * PT) < 0.1)).toBe(true);
   expect(sheet!.segments.some((s) => Math.abs(s.x1 - s.x2) < 0.05 && Math.abs(Math.abs(s.y2 - s.y1) - 22.5 * PT) < 0.1)).toBe(true);
+  expect(errors).toEqual([]);
 });
