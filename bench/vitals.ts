@@ -124,7 +124,8 @@ async function inpOf(context: BrowserContext, rate: number, url: string, ready: 
     await page.evaluate('delete window.__vitals.INP');
     // The placed module is drawn in the frame that shows it selected: two frames after the
     // selection line changes, that frame has been painted (the bay drawn is timed the same way).
-    await page.evaluate(`window.__drawn = undefined; new MutationObserver((_, o) => { o.disconnect(); requestAnimationFrame(() => requestAnimationFrame(() => { window.__drawn = performance.now(); })); }).observe(document.getElementById('selection-announcer'), { childList: true, subtree: true, characterData: true });`);
+    // Pages without the editor's selection line (the build planner) have nothing to time.
+    await page.evaluate(`window.__drawn = undefined; const line = document.getElementById('selection-announcer'); if (line) new MutationObserver((_, o) => { o.disconnect(); requestAnimationFrame(() => requestAnimationFrame(() => { window.__drawn = performance.now(); })); }).observe(line, { childList: true, subtree: true, characterData: true });`);
     const from = (await page.evaluate('performance.now()')) as number;
     await act(page);
     await page.waitForTimeout(800);
