@@ -41,8 +41,10 @@ const COLLECT = `${VITALS_SOURCE}
   // The Event Timing entries INP is made of (those with an interactionId: pointer and key events),
   // and the drop of a drag and drop, which has none (start, duration), for one interaction's figure.
   const events = (window.__events = []);
-  new PerformanceObserver((l) => { for (const e of l.getEntries()) { if (e.interactionId || e.name === 'drop') events.push([e.startTime, e.duration]); if (e.name === 'drop') window.__dropAt = e.startTime; } })
+  new PerformanceObserver((l) => { for (const e of l.getEntries()) if (e.interactionId || e.name === 'drop') events.push([e.startTime, e.duration]); })
     .observe({ type: 'event', durationThreshold: 16, buffered: true });
+  // When a drop happened (its Event Timing entry is only there when it took 16 ms or more).
+  addEventListener('drop', (e) => { window.__dropAt = e.timeStamp; }, true);
   // The editor's bay: its canvas is in the page, then two frames later it has been painted.
   const seen = () => {
     if (v.bayDrawn !== undefined || !document.querySelector('[data-testid="plan"] canvas')) return false;
