@@ -4,7 +4,7 @@
 // and Escape puts it back too. Also: a click on "Build plan" straight after an edit is held until
 // the edit is saved, then followed — the edit is there after a reload.
 import { expect, test, type Page } from '@playwright/test';
-import { keepScreenshot, openNewLayout, signIn } from './helpers';
+import { keepScreenshot, openNewLayout, pageErrors, signIn } from './helpers';
 
 
 async function selectFirstModule(page: Page) {
@@ -112,4 +112,41 @@ test('a drop from the shelf and a key straight after: the module is placed first
   await page.keyboard.press('ControlOrMeta+z');
   await expect(undo).toHaveAttribute('title', /^Undo: Place module/);
   await expect(page.getByTestId('selection-announcer')).toContainText(/^Step selected/);
+});
+
+test('what is typed in the next field is kept when the last field\'s edit reaches the plan after the paint', async ({ page }) => {
+  const errors = pageErrors(page);
+  await signIn(page, 'ivo@saltmarsh.test');
+  await openNewLayout(page, 'Fields — typing on while an edit lands');
+  await selectFirstModule(page);
+  const x = page.getByTestId('details-x');
+  const y = page.getByTestId('details-y');
+  const x0 = Number(await x.inputValue());
+  const y0 = Number(await y.inputValue());
+  // In one script, so no frame comes between: a new x and Enter, then on to y and a new value in it.
+  await page.evaluate(([nx, ny]) => {
+    const type = (el: HTMLInputElement, v: string) => {
+      Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')!.set!.call(el, v);
+      el.dispatchEvent(new Event('input', { bubbles: true }));
+    };
+    const xi = document.querySelector<HTMLInputElement>('[data-testid="details-x"]')!;
+    const yi = document.querySelector<HTMLInputElement>('[data-testid="details-y"]')!;
+    xi.focus();
+    type(xi, nx);
+    xi.form!.requestSubmit();
+    yi.focus();
+    type(yi, ny);
+  }, [String(x0 + 10), String(y0 + 10)]);
+  // The x edit lands after the next paint and the form follows the store; y keeps what was typed.
+  await expect(x).toHaveValue(String(x0 + 10));
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(r, 50)))));
+  await expect(y).toHaveValue(String(y0 + 10));
+  await y.press('Enter');
+  await expect(y).toHaveValue(String(y0 + 10));
+  // Both edits are in the document: one undo takes y back, the next x.
+  await page.getByTestId('plan').focus();
+  await page.keyboard.press('ControlOrMeta+z');
+  await expect(y).toHaveValue(String(y0));
+  await expect(x).toHaveValue(String(x0 + 10));
+  expect(errors).toEqual([]);
 });

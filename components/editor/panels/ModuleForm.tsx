@@ -8,8 +8,8 @@
  * on first selection (it carries the form libraries), so the editor's first load stays small.
  * Never writes the document except through store actions.
  */
-import { useEffect, useId, useMemo, type KeyboardEvent } from 'react';
-import { useForm } from 'react-hook-form';
+import { useEffect, useId, useMemo, useState, type KeyboardEvent } from 'react';
+import { useForm, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { useShallow } from 'zustand/react/shallow';
@@ -32,14 +32,21 @@ export default function ModuleForm({ module }: { module: Module }) {
   const form = useForm<ModuleFormValues, unknown, ModuleFormOutput>({ resolver: zodResolver(schema), defaultValues: formValuesOf(module, units), mode: 'onChange', shouldFocusError: false });
   const { register, reset, formState, getValues, setValue, clearErrors } = form;
 
-  // The store is the truth: when the module changes (drag, undo), the fields follow.
+  // Fields typed in and not yet applied (applying reads them all).
+  const [typed] = useState(() => new Set<Path<ModuleFormValues>>());
+  // The store is the truth: when the module changes (drag, undo), the fields follow — except what
+  // is being typed and not yet applied: an edit of another field reaches the store just after the
+  // paint (commitAfterNextPaint), and must not wipe what was typed in the next field since.
   useEffect(() => {
+    const kept = [...typed].map((name) => [name, getValues(name)] as const);
     reset(formValuesOf(module, units));
-  }, [module, units, reset]);
+    for (const [name, value] of kept) setValue(name, value as never, { shouldDirty: true });
+  }, [module, units, reset, getValues, setValue, typed]);
 
   // Leaving a field (or Enter, or a choice): what reads applies as one undo entry; what does not
   // goes back to the last valid value with a note saying why.
   const apply = () => {
+    typed.clear(); // read now: applied below, or put back with a note
     const r = readModuleForm(module, getValues(), units);
     if (r.reverted.length > 0) {
       for (const f of r.reverted) setValue(f.field, f.restored as never, { shouldValidate: false, shouldDirty: false });
@@ -64,11 +71,13 @@ export default function ModuleForm({ module }: { module: Module }) {
       }
     });
   };
-  const onBlurApply = { onBlur: () => apply() };
+  /** A text field: marked as typed in as it changes, applied as it is left. */
+  const typedField = (name: Path<ModuleFormValues>) => ({ onBlur: () => apply(), onChange: () => void typed.add(name) });
   /** Escape in a field puts its last valid value back and keeps the focus there. */
   const revertOnEscape = (name: ModuleFormField) => (e: KeyboardEvent) => {
     if (e.key !== 'Escape') return;
     setValue(name, formValuesOf(module, units)[name] as never, { shouldDirty: false });
+    typed.delete(name);
     clearErrors(name);
   };
   const spec = kindSpec(module.kind);
@@ -83,7 +92,7 @@ export default function ModuleForm({ module }: { module: Module }) {
     <label className="block">
       <span className="text-xs text-ink-soft">{label}{hint ? <span className="text-ink-soft"> · {hint}</span> : null}</span>
       <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
-        <input {...register(name, onBlurApply)} onKeyDown={revertOnEscape(name)} inputMode="decimal" aria-invalid={!!err(name)} aria-describedby={err(name) ? `${formId}-${name}-error` : undefined} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+        <input {...register(name, typedField(name))} onKeyDown={revertOnEscape(name)} inputMode="decimal" aria-invalid={!!err(name)} aria-describedby={err(name) ? `${formId}-${name}-error` : undefined} data-testid={`details-${name}`} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
         <span className="pr-2 font-mono text-xs text-ink-soft">{units}</span>
       </span>
       {err(name) && <span id={`${formId}-${name}-error`} className="mt-0.5 block text-xs text-brick" data-testid={`details-${name}-error`}>{err(name)}</span>}
@@ -103,7 +112,7 @@ export default function ModuleForm({ module }: { module: Module }) {
         <div className="grid grid-cols-2 gap-3">
           <label className="col-span-2 block">
             <span className="text-xs text-ink-soft">Label</span>
-            <input {...register('label', onBlurApply)} onKeyDown={revertOnEscape('label')} aria-invalid={!!err('label')} aria-describedby={err('label') ? `${formId}-label-error` : undefined} placeholder={spec.title} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 outline-none focus:ring-2 focus:ring-copper" />
+            <input {...register('label', typedField('label'))} onKeyDown={revertOnEscape('label')} aria-invalid={!!err('label')} aria-describedby={err('label') ? `${formId}-label-error` : undefined} placeholder={spec.title} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 outline-none focus:ring-2 focus:ring-copper" />
             {err('label') && <span id={`${formId}-label-error`} className="mt-0.5 block text-xs text-brick">{err('label')}</span>}
           </label>
           <label className="col-span-2 block">
@@ -161,7 +170,7 @@ export default function ModuleForm({ module }: { module: Module }) {
         <label className="block">
           <span className="text-xs text-ink-soft">Mass</span>
           <span className="mt-0.5 flex items-center rounded border border-paper-edge bg-paper focus-within:ring-2 focus-within:ring-copper">
-            <input {...register('massKg', onBlurApply)} onKeyDown={revertOnEscape('massKg')} inputMode="decimal" aria-invalid={!!err('massKg')} aria-describedby={err('massKg') ? `${formId}-massKg-error` : undefined} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
+            <input {...register('massKg', typedField('massKg'))} onKeyDown={revertOnEscape('massKg')} inputMode="decimal" aria-invalid={!!err('massKg')} aria-describedby={err('massKg') ? `${formId}-massKg-error` : undefined} className="w-full bg-transparent px-2 py-1 font-mono text-sm outline-none" />
             <span className="pr-2 font-mono text-xs text-ink-soft">kg</span>
           </span>
           {err('massKg') && <span id={`${formId}-massKg-error`} className="mt-0.5 block text-xs text-brick">{err('massKg')}</span>}
@@ -178,7 +187,7 @@ export default function ModuleForm({ module }: { module: Module }) {
               ) : (
                 <label key={k} className="block">
                   <span className="text-xs text-ink-soft">{field.label}</span>
-                  <input {...register(`props.${k}`, onBlurApply)} placeholder={k === 'litres' && drawnLitres !== undefined ? `from its drawn size: ${drawnLitres.toFixed(1)}` : undefined} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
+                  <input {...register(`props.${k}`, typedField(`props.${k}`))} placeholder={k === 'litres' && drawnLitres !== undefined ? `from its drawn size: ${drawnLitres.toFixed(1)}` : undefined} className="mt-0.5 w-full rounded border border-paper-edge bg-paper px-2 py-1 font-mono text-sm" />
                 </label>
               );
             })}
