@@ -4,7 +4,7 @@
 // Settings → Your password changes it again. Screenshots kept as artifacts.
 import { expect, test, type Page } from '@playwright/test';
 import { simpleParser } from 'mailparser';
-import { keepScreenshot, signIn } from './helpers';
+import { keepScreenshot, signInWithForm } from './helpers';
 
 const stamp = Date.now().toString(36);
 const EMAIL = `rowan.${stamp}@selfbuild.test`;
@@ -30,7 +30,7 @@ test('forgot password → mail → new password → change it in Settings', asyn
   const reader = await (await browser.newContext()).newPage();
   const made = await reader.request.post('/api/sign-up', { data: { name: 'Rowan Pike', email: EMAIL, password: FIRST } });
   expect(made.status()).toBe(201);
-  await signIn(reader, EMAIL, FIRST);
+  await signInWithForm(reader, EMAIL, FIRST);
 
   // Asking for a link: the same words for an unknown address and a known one.
   const asker = await (await browser.newContext()).newPage();

@@ -9,7 +9,7 @@ const stamp = Date.now().toString(36);
 test('build plan: autosaved figure, header version as saved, nothing lost by leaving at once', async ({ page }, info) => {
   test.setTimeout(120_000);
   page.on('dialog', (d) => void d.accept());
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const created = await page.request.post('/api/layouts', { data: { name: `Build plan saving ${stamp}`, starterId: 'starter-l-lounge' } });
   expect(created.status()).toBe(201);
   const { id, version: first } = (await created.json()) as { id: string; version: number };

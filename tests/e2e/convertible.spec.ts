@@ -25,7 +25,7 @@ async function place(page: Page, search: string, kind: string, at: Record<string
 
 test('a convertible lounge: the bed passes in sleep while the benches stay seats in travel', async ({ page }) => {
   const errors = pageErrors(page);
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const created = await page.request.post('/api/layouts', { data: { name: LAYOUT, bayTemplateId: 'l4h3' } });
   expect(created.status()).toBe(201);
   await page.goto(`/layouts/${(await created.json()).id}`);

@@ -13,7 +13,7 @@ const stamp = Date.now().toString(36);
 test('the layouts table, the editor and a viewer link are drawn with the page', async ({ browser }) => {
   const designerContext = await browser.newContext();
   const designer = await designerContext.newPage();
-  await signIn(designer, 'ivo@saltmarsh.test');
+  await signIn(designer, 'ivo@saltmarsh.test', { open: null });
   const name = `Drawn with the page ${stamp}`;
   const created = await designer.request.post('/api/layouts', { data: { name, starterId: 'starter-rear-bed' } });
   expect(created.status()).toBe(201);
@@ -72,7 +72,7 @@ test('the layouts table, the editor and a viewer link are drawn with the page', 
 test('the findings served with the page stay where they are when the editor takes over', async ({ browser }) => {
   const context = await browser.newContext();
   const page = await context.newPage();
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const created = await page.request.post('/api/layouts', { data: { name: `Stays put ${stamp}`, starterId: 'starter-rear-bed' } });
   expect(created.status()).toBe(201);
   const id: string = (await created.json()).id;
@@ -105,7 +105,7 @@ test('the findings served with the page stay where they are when the editor take
 test('the editor and a viewer link open with their findings, asking the browser for no checks', async ({ browser }) => {
   const context = await browser.newContext();
   const page = await context.newPage();
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const asked: string[] = [];
   page.on('request', (r) => { if (/\/api\/(checks|v\/[^/]+\/checks)/.test(new URL(r.url()).pathname)) asked.push(`${r.method()} ${new URL(r.url()).pathname}`); });
 

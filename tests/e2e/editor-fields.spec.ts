@@ -14,7 +14,7 @@ async function selectFirstModule(page: Page) {
 }
 
 test('an unreadable length shows why beside its field, lets the focus go, and goes back to the last valid value', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   await openNewLayout(page, 'Fields — invalid values');
   await selectFirstModule(page);
   const length = page.getByTestId('details-length');
@@ -53,7 +53,7 @@ test('an unreadable length shows why beside its field, lets the focus go, and go
 });
 
 test('a click on Build plan straight after an edit waits for the save, then opens the build plan with the edit kept', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const id = await openNewLayout(page, 'Fields — leave while saving');
   await selectFirstModule(page);
   const length = page.getByTestId('details-length');
@@ -77,7 +77,7 @@ test('a click on Build plan straight after an edit waits for the save, then open
 });
 
 test('Enter and then Tab straight after apply an edit once: one undo puts the old length back', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   await openNewLayout(page, 'Fields — one edit, one undo');
   await selectFirstModule(page);
   const length = page.getByTestId('details-length');
@@ -93,7 +93,7 @@ test('Enter and then Tab straight after apply an edit once: one undo puts the ol
 });
 
 test('a drop from the shelf and a key straight after: the module is placed first, and the key acts on it', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   await openNewLayout(page, 'Fields — drop, then a key');
   const undo = page.getByRole('button', { name: 'Undo', exact: true });
   await expect(undo).toBeDisabled();
@@ -116,7 +116,7 @@ test('a drop from the shelf and a key straight after: the module is placed first
 
 test('what is typed in the next field is kept when the last field\'s edit reaches the plan after the paint', async ({ page }) => {
   const errors = pageErrors(page);
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   await openNewLayout(page, 'Fields — typing on while an edit lands');
   await selectFirstModule(page);
   const x = page.getByTestId('details-x');

@@ -1,9 +1,9 @@
 // A designer signs in, creates a layout from a bay template, finds it in the table and opens it.
 import { expect, test } from '@playwright/test';
-import { keepScreenshot, signIn } from './helpers';
+import { keepScreenshot, signIn, signInWithForm } from './helpers';
 
 test('the demo designer creates a layout from a template and opens it from the table', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signInWithForm(page, 'ivo@saltmarsh.test');
   await expect(page.getByRole('link', { name: 'Nair — L2H2 weekender', exact: true })).toBeVisible();
   await keepScreenshot(page, 'layouts-table');
 

@@ -17,7 +17,7 @@ function row(page: Page, name: string) {
 
 test('rename, duplicate as variant, compare variants, restore a saved version, archive and restore', async ({ page }) => {
   test.setTimeout(180_000);
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const created = await page.request.post('/api/layouts', { data: { name: FIRST, starterId: 'starter-l-lounge' } });
   expect(created.status()).toBe(201);
   const layoutId: string = (await created.json()).id;

@@ -7,7 +7,7 @@ import { keepScreenshot, openNewLayout, pageErrors, signIn } from './helpers';
 
 test('a window added from the shelf is drawn, selected by a click on its mark, moved in Details, and undo puts it back', async ({ page }) => {
   const errors = pageErrors(page);
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   await openNewLayout(page, 'Openings — window');
   const listed = page.getByTestId('plan-openings').locator('li[data-opening-type="window"]');
   const before = await listed.count();
@@ -59,7 +59,7 @@ test('a window added from the shelf is drawn, selected by a click on its mark, m
 });
 
 test('a heater exhaust by the sliding door fails its clearance; the finding selects it, and moving it in Details clears it', async ({ page }) => {
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   // The rear-bed starter: 3800 mm long, a sliding door on the right wall from 150 to 1350 mm.
   await openNewLayout(page, 'Openings — exhaust');
   await page.getByRole('button', { name: 'Add heater exhaust' }).click();

@@ -31,7 +31,7 @@ async function fits(page: Page, info: TestInfo, width: number, name: string) {
 
 async function workshopLayout(browser: Browser): Promise<{ id: string; name: string }> {
   const owner = await (await browser.newContext()).newPage();
-  await signIn(owner, 'maren@saltmarsh.test');
+  await signIn(owner, 'maren@saltmarsh.test', { open: null });
   const members = await (await owner.request.get('/api/studio/members')).json();
   const priya = members.members.find((m: { email?: string }) => m.email === 'priya@client.test');
   const name = `Nair — phone widths ${stamp}`;

@@ -99,7 +99,7 @@ test('a client on a phone: viewer link, mark-up, approval, deposit', async ({ br
 
 test('a designer on a phone sees the layout read-only, with the reason', async ({ browser }, info) => {
   const phone = await (await browser.newContext(PHONE)).newPage();
-  await signIn(phone, 'ivo@saltmarsh.test');
+  await signIn(phone, 'ivo@saltmarsh.test', { open: null });
   // Opened by its address: the designer's full layouts table is a desktop screen, wider than a phone.
   const list = await (await phone.request.get('/api/layouts')).json();
   const stock = list.layouts.find((l: { name: string }) => l.name === 'Workshop stock — L4H3 empty bay');

@@ -1,7 +1,7 @@
 // The app works under its Content-Security-Policy (no violations in the console), sends the
 // security headers, and sets the session cookie HttpOnly and SameSite=Lax.
 import { expect, test } from '@playwright/test';
-import { signIn } from './helpers';
+import { signIn, signInWithForm } from './helpers';
 
 test('pages load with no CSP violation and carry the security headers', async ({ page, context }) => {
   const violations: string[] = [];
@@ -15,7 +15,7 @@ test('pages load with no CSP violation and carry the security headers', async ({
   expect(headers['x-content-type-options']).toBe('nosniff');
   expect(headers['referrer-policy']).toBe('strict-origin-when-cross-origin');
 
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signInWithForm(page, 'ivo@saltmarsh.test');
   const cookie = (await context.cookies()).find((c) => c.name === 'authjs.session-token');
   expect(cookie?.httpOnly).toBe(true);
   expect(cookie?.sameSite).toBe('Lax');

@@ -9,7 +9,7 @@ const stamp = Date.now().toString(36);
 
 test('panels drawn on the roof give the Power tab its array; a third one placed and rated in Details joins the sum', async ({ page }) => {
   test.setTimeout(180_000);
-  await signIn(page, 'ivo@saltmarsh.test');
+  await signIn(page, 'ivo@saltmarsh.test', { open: null });
   const created = await page.request.post('/api/layouts', { data: { name: `Solar ${stamp}`, starterId: 'starter-rear-bed' } });
   expect(created.status()).toBe(201);
   const { id } = (await created.json()) as { id: string };
