@@ -10,7 +10,10 @@
  *    interaction alone: drop a module from the Parts shelf, drag a module, type a length in the
  *    Details panel, switch arrangement (editor); switch a build-plan tab (build planner).
  *  - Editor: the bay drawn, ms after navigation start (the plan's canvas is in the page and two
- *    frames have been painted since).
+ *    frames have been painted since), on the cold loads above. Also, for information, on a repeat
+ *    visit: one browser context opens the editor WARM_VISITS (2) times, so Chromium has the
+ *    scripts in its HTTP cache and their compiled code in its code cache (it keeps compiled code
+ *    from a script's second load on), then REPEAT_VISITS (3) more times, timed; the median.
  *
  * Each runs twice: unthrottled, and with Chromium's CPU throttled 4× (a mid-range tablet) through
  * CDP `Emulation.setCPUThrottlingRate`. Goals at 4×: LCP ≤ 2500 ms, INP ≤ 200 ms, CLS ≤ 0.1 on every
@@ -56,6 +59,9 @@ const COLLECT = `${VITALS_SOURCE}
 
 /** Cold loads per page; the figures are their median (CLS: the worst). */
 const COLD_LOADS = Number(process.env.BENCH_COLD_LOADS ?? 3);
+/** Loads of the editor before the repeat visits are timed, and the timed repeat visits. */
+const WARM_VISITS = 2;
+const REPEAT_VISITS = 3;
 
 export const GOALS = { lcpMs: 2500, clsMax: 0.1, inpThrottledMs: 200, inpMs: 100, bayDrawnMs: 1000 } as const;
 
@@ -71,6 +77,8 @@ export interface VitalsRun {
   pages: PageVitals[];
   interactions: InteractionVitals[];
   bayDrawnMs: number;
+  /** The bay drawn on a repeat visit (scripts cached and compiled before); no goal. */
+  repeatBayDrawnMs: number;
 }
 
 async function signIn(page: Page, base: string) {
@@ -166,8 +174,10 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
     if (name.startsWith('editor')) bayDrawnMs = round(median(loads.map((v) => v.bayDrawn)), 0);
   }
 
-  const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, storageState: storage });
   const editor = `${base}/layouts/${ids.layout}`;
+  const repeatBayDrawnMs = await repeatVisitBayDrawn(browser, rate, editor, storage);
+
+  const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, storageState: storage });
   const lounge = doc.modules.filter((m) => inArrangement(m, 'lounge') && m.elevation === 0 && m.kind === 'drawer-unit')[0]
     ?? doc.modules.filter((m) => inArrangement(m, 'lounge') && m.elevation === 0)[0];
   const interactions: InteractionVitals[] = [];
@@ -223,7 +233,29 @@ async function runOnce(browser: Browser, base: string, rate: number, ids: { layo
   } finally {
     await context.close();
   }
-  return { cpuSlowdown: rate, pages, interactions, bayDrawnMs };
+  return { cpuSlowdown: rate, pages, interactions, bayDrawnMs, repeatBayDrawnMs };
+}
+
+/**
+ * The editor's bay drawn as a designer who opened it before sees it: one context (one HTTP cache
+ * and code cache) loads the editor WARM_VISITS times untimed, then REPEAT_VISITS times timed.
+ */
+async function repeatVisitBayDrawn(browser: Browser, rate: number, editor: string, storage: Awaited<ReturnType<BrowserContext['storageState']>>): Promise<number> {
+  const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, storageState: storage });
+  const timed: number[] = [];
+  try {
+    for (let i = 0; i < WARM_VISITS + REPEAT_VISITS; i++) {
+      const page = await openPage(context, rate);
+      await page.goto(editor);
+      await planReady(page);
+      if (i >= WARM_VISITS) timed.push((await page.evaluate('window.__vitals.bayDrawn')) as number);
+      await page.waitForTimeout(500); // the code cache is written after the scripts ran
+      await page.close();
+    }
+  } finally {
+    await context.close();
+  }
+  return round(median(timed), 0);
 }
 
 export async function benchVitals(options: { port?: number } = {}): Promise<VitalsRun[]> {
@@ -268,6 +300,8 @@ export function vitalsLines(runs: VitalsRun[]): { what: string; figure: string; 
     }
     if (!throttled) out.push({ what: `Web Vitals, ${tag}: editor bay drawn after navigation`, figure: `${r.bayDrawnMs} ms`, goal: `≤ ${GOALS.bayDrawnMs} ms`, met: r.bayDrawnMs <= GOALS.bayDrawnMs });
     else out.push({ what: `Web Vitals, ${tag}: editor bay drawn after navigation`, figure: `${r.bayDrawnMs} ms`, goal: '—', met: null });
+    // No goal in the issue for it: the goal above is read on cold loads, the stricter case.
+    out.push({ what: `Web Vitals, ${tag}: editor bay drawn on a repeat visit (scripts cached)`, figure: `${r.repeatBayDrawnMs} ms`, goal: '—', met: null });
     const goal = throttled ? GOALS.inpThrottledMs : GOALS.inpMs;
     for (const i of r.interactions) {
       out.push({ what: `Web Vitals, ${tag}: INP, ${i.interaction}`, figure: `${i.inpMs} ms`, goal: `≤ ${goal} ms`, met: i.inpMs <= goal });
