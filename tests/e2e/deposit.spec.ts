@@ -14,7 +14,7 @@ const LAYOUT = `Nair — deposit run ${stamp}`;
 
 async function signedIn(browser: Browser, email: string): Promise<Page> {
   const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
+  await signIn(page, email, { open: null }); // each test opens its own page first
   return page;
 }
 
