@@ -11,8 +11,10 @@ import { DEMO_PASSWORD } from '../../lib/demo-accounts';
 export async function signIn(page: Page, email: string, { password = DEMO_PASSWORD, open = '/layouts' as string | null } = {}): Promise<void> {
   const { csrfToken } = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
   const res = await page.request.post('/api/auth/callback/credentials', { form: { csrfToken, email, password, callbackUrl: '/layouts' }, maxRedirects: 0 });
+  const to = res.headers().location ?? '';
   const session = (await page.context().cookies()).find((c) => c.name === 'authjs.session-token');
-  expect(session, `signing in as ${email} (status ${res.status()}, to ${res.headers().location ?? 'nowhere'})`).toBeDefined();
+  // A refusal also answers 302, to the sign-in page with an error in its address.
+  expect(res.status() === 302 && !/[?&]error=/.test(to) && session !== undefined, `signing in as ${email} (status ${res.status()}, to ${to || 'nowhere'})`).toBe(true);
   if (open) await page.goto(open);
 }
 
