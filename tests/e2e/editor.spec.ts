@@ -48,11 +48,29 @@ test.describe('layout editor', () => {
     // Move it 100 px rearwards with the mouse: the Details panel shows the new position.
     await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'none');
     const grab = (await planGeometry(page)).at(placedX + 550, placedY + 275);
+    // Count each Konva layer's redraws: while the bench is dragged only the drag layer is redrawn
+    // (it washes the bench's origin and draws the bench where it goes); the plan's drawing layer,
+    // every module and label, is redrawn once the move is committed, not in the frame it starts.
+    const draws = () => page.evaluate(() => ({ ...(window as unknown as { __draws: Record<string, number> }).__draws }));
+    await page.evaluate(() => {
+      const w = window as unknown as { __draws: Record<string, number>; Konva: { Layer: { prototype: { drawScene: (...a: unknown[]) => unknown; name: () => string } } } };
+      w.__draws = {};
+      const proto = w.Konva.Layer.prototype;
+      const original = proto.drawScene;
+      proto.drawScene = function (this: { name: () => string }, ...a: unknown[]) {
+        w.__draws[this.name()] = (w.__draws[this.name()] ?? 0) + 1;
+        return original.apply(this, a);
+      };
+    });
     await page.mouse.move(grab.x, grab.y);
     await page.mouse.down();
     await page.mouse.move(grab.x + 100, grab.y, { steps: 15 });
+    await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'gesture');
+    await expect.poll(async () => (await draws()).drag ?? 0).toBeGreaterThan(0);
+    expect((await draws()).drawing ?? 0).toBe(0);
     await page.mouse.up();
     await expect.poll(() => numberIn(page, 'x')).not.toBe(placedX);
+    await expect.poll(async () => (await draws()).drawing ?? 0).toBeGreaterThan(0);
     const movedX = await numberIn(page, 'x');
     expect(Math.abs(movedX - placedX - 100 / scale)).toBeLessThanOrEqual(40);
     expect(await numberIn(page, 'y')).toBe(placedY);

@@ -4,6 +4,12 @@
  * after that a store subscription updates its few nodes directly (group offset, shape size,
  * snap guides, the live mm readout, the marquee) and redraws this layer only, so a pointer move
  * re-renders no React component and redraws no other layer. Never listens for events.
+ *
+ * The plan's drawing layer is left as it is while a module is moved or resized: this layer lays a
+ * paper wash with a dashed outline over where the module stood (its origin, shown faintly), and
+ * draws the module itself where it is going. Hiding the module in the drawing layer instead would
+ * redraw the whole plan (every module and label) in the frame the drag starts, the one frame a
+ * tablet then drops; the drawing is redrawn once, when the gesture is committed.
  */
 import { useEffect, useRef } from 'react';
 import { Group, Layer, Rect, Shape, Text } from './konva';
@@ -21,6 +27,8 @@ import { worldLayerProps } from './worldTransform';
 import type { CanvasFonts } from './useCanvasFonts';
 
 const NONE: string[] = [];
+/** How much of the plan under a moved module's origin the wash covers: enough to read as "was here" (our own choice, no source). */
+const ORIGIN_WASH = 0.7;
 const NO_MODULES: Module[] = [];
 
 export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; units: LengthUnit; fonts: CanvasFonts }) {
@@ -34,27 +42,6 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
   const marquee = useRef<Konva.Rect>(null);
   const outline = useRef<Konva.Rect>(null);
   const scale = viewport.scale;
-
-  // The modules being moved are hidden in the plan's drawing layer by hand (no React pass over every
-  // module) while this layer draws them; they are shown again when the gesture ends.
-  useEffect(() => {
-    if ((kind !== 'move' && kind !== 'resize') || ids.length === 0) return;
-    // The modules are a group in the plan's drawing layer (PlanStage), which is what is redrawn.
-    const shown = layer.current?.getStage()?.findOne<Konva.Group>('.modules');
-    const drawing = shown?.getLayer();
-    if (!shown || !drawing) return;
-    const nodes = ids.map((id) => shown.findOne(`#module-${id}`)).filter((n): n is Konva.Node => !!n);
-    // Their labels too: the plan writes every label in one shape after the bodies (ModuleLabels).
-    const labels = shown.findOne<Konva.Shape>('.module-labels');
-    nodes.forEach((n) => n.visible(false));
-    labels?.setAttr('skip', new Set(ids));
-    drawing.batchDraw();
-    return () => {
-      nodes.forEach((n) => n.visible(true));
-      labels?.setAttr('skip', null);
-      drawing.batchDraw();
-    };
-  }, [kind, ids]);
 
   useEffect(() => {
     const apply = (g: Gesture | null) => {
@@ -89,10 +76,16 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
   }, [api, scale, units, kind, modules]);
 
   const px = 1 / scale;
+  const moving = kind === 'move' || kind === 'resize';
+  // The snap guides and the readout stay mounted (shown only for a move or resize): making a
+  // Konva Text measures with a canvas of its own, work the frame a drag starts can do without.
   return (
     <Layer ref={layer} {...worldLayerProps(viewport)} listening={false} name="drag" visible={kind !== null}>
-      {(kind === 'move' || kind === 'resize') && (
+      {moving && (
         <>
+          {modules.map((m) => (
+            <Rect key={`from-${m.id}`} x={m.x} y={m.y} width={m.length} height={m.width} fill={theme.paper} stroke={theme.inkFaint} strokeWidth={1 * px} dash={[4 * px, 3 * px]} opacity={ORIGIN_WASH} listening={false} />
+          ))}
           <Group ref={group}>
             {modules.map((m) => (
               <ModuleShape key={m.id} module={m} fonts={fonts} units={units} />
@@ -100,28 +93,29 @@ export function DragLayer({ viewport, units, fonts }: { viewport: Viewport; unit
             {kind === 'move' && modules.map((m) => <Rect key={`sel-${m.id}`} x={m.x} y={m.y} width={m.length} height={m.width} stroke={theme.copper} strokeWidth={1.5 * px} listening={false} />)}
           </Group>
           {kind === 'resize' && modules[0] && <Rect ref={outline} x={modules[0].x} y={modules[0].y} width={modules[0].length} height={modules[0].width} stroke={theme.copper} strokeWidth={1.5 * px} listening={false} />}
-          <Shape
-            ref={guides}
-            guides={[]}
-            listening={false}
-            sceneFunc={(c: Konva.Context, shape: Konva.Shape) => {
-              const list = (shape.getAttr('guides') as SnapGuide[]) ?? [];
-              const ctx = c._context;
-              ctx.save();
-              ctx.strokeStyle = theme.copper;
-              ctx.lineWidth = 1 * px;
-              ctx.setLineDash([4 * px, 3 * px]);
-              ctx.beginPath();
-              for (const g of list) {
-                if (g.axis === 'x') { ctx.moveTo(g.at, g.from - 20 * px); ctx.lineTo(g.at, g.to + 20 * px); } else { ctx.moveTo(g.from - 20 * px, g.at); ctx.lineTo(g.to + 20 * px, g.at); }
-              }
-              ctx.stroke();
-              ctx.restore();
-            }}
-          />
-          <Text ref={readout} text="" fontFamily={fonts.mono} fontSize={11 * px} fill={theme.copperDark} listening={false} />
         </>
       )}
+      <Shape
+        ref={guides}
+        visible={moving}
+        guides={[]}
+        listening={false}
+        sceneFunc={(c: Konva.Context, shape: Konva.Shape) => {
+          const list = (shape.getAttr('guides') as SnapGuide[]) ?? [];
+          const ctx = c._context;
+          ctx.save();
+          ctx.strokeStyle = theme.copper;
+          ctx.lineWidth = 1 * px;
+          ctx.setLineDash([4 * px, 3 * px]);
+          ctx.beginPath();
+          for (const g of list) {
+            if (g.axis === 'x') { ctx.moveTo(g.at, g.from - 20 * px); ctx.lineTo(g.at, g.to + 20 * px); } else { ctx.moveTo(g.from - 20 * px, g.at); ctx.lineTo(g.to + 20 * px, g.at); }
+          }
+          ctx.stroke();
+          ctx.restore();
+        }}
+      />
+      <Text ref={readout} visible={moving} text="" fontFamily={fonts.mono} fontSize={11 * px} fill={theme.copperDark} listening={false} />
       {kind === 'marquee' && (
         <Rect ref={marquee} visible={false} stroke={theme.copper} strokeWidth={1 * px} dash={[4 * px, 3 * px]} fill="rgba(164,82,42,0.06)" listening={false} />
       )}

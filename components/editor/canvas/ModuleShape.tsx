@@ -57,12 +57,9 @@ function labelsSceneFunc(context: Konva.Context, shape: Konva.Shape) {
   const placements = shape.getAttr('placements') as Map<string, LabelPlacement> | undefined;
   const fonts = shape.getAttr('fonts') as CanvasFonts | undefined;
   const units = shape.getAttr('units') as LengthUnit | undefined;
-  // The modules a gesture is moving (DragLayer hides them here and draws them, labelled, itself).
-  const skip = shape.getAttr('skip') as Set<string> | null | undefined;
   const scale = shape.getLayer()?.scaleX() || 1;
   const ctx = context._context;
   for (const m of modules) {
-    if (skip?.has(m.id)) continue;
     ctx.save();
     ctx.translate(m.x, m.y);
     drawModuleLabel(ctx, { kind: m.kind, label: m.label, length: m.length, width: m.width, facing: m.facing, props: m.props, mount: m.mount }, { scale, fonts, units, placement: placements?.get(m.id) });

@@ -1,8 +1,9 @@
 'use client';
 /**
  * The modules of the arrangement on show, in draw order, with the phantom arrangement under
- * them, and then all their labels. Modules being dragged are hidden by the drag layer, by hand, for the gesture. Never listens for
- * events; redrawn only when the document, arrangement or zoom changes, never per pointer move.
+ * them, and then all their labels. Left as drawn during a gesture (the drag layer washes a moved
+ * module's origin and draws it where it goes). Never listens for events; redrawn only when the
+ * document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
 import { Group } from './konva';
@@ -19,7 +20,6 @@ interface Props {
   modules: Module[];
   arrangement: Arrangement;
   phantom: Arrangement | null;
-  hidden: readonly string[];
   /** Redraw when the view moves (line widths follow the scale). */
   viewport: Viewport;
   fonts: CanvasFonts;
@@ -35,14 +35,13 @@ function measuringContext(): CanvasRenderingContext2D | null {
   return measuring;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, hidden, viewport, fonts, fontsReady, units }: Props) {
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, viewport, fonts, fontsReady, units }: Props) {
   const { shown, phantoms } = useMemo(() => {
-    const hide = new Set(hidden);
     return {
-      shown: drawOrder(modules.filter((m) => inArrangement(m, arrangement) && !hide.has(m.id))),
+      shown: drawOrder(modules.filter((m) => inArrangement(m, arrangement))),
       phantoms: phantom ? modules.filter((m) => inArrangement(m, phantom) && !inArrangement(m, arrangement)) : [],
     };
-  }, [modules, arrangement, phantom, hidden]);
+  }, [modules, arrangement, phantom]);
   // Labels for the whole plan at this scale, clear of each other (the pan plays no part).
   const scale = viewport.scale;
   const measure = useMemo(() => {
