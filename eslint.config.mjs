@@ -39,6 +39,8 @@ const NO_FAKES = (who) => fence(`${who} never imports the local fakes (dev/fakes
 const LEAVES = ['@/lib/log', '@/lib/log/*', '**/log', '@/lib/workers/*', '**/workers/*', '@/lib/backup/*', '**/backup/*', '**/data-root', '**/uploads/store', '**/uploads/limits', 'node:*', 'server-only'];
 const NO_LEAVES = (who) => fence(`${who} is pure: no logger, threads, files or other server-side leaves.`, LEAVES);
 const NO_UI = (who) => fence(`${who} is pure: no React, Konva, stores, toasts, Next or icons.`, UI_PATTERNS);
+/** The toast library is loaded on demand by one adapter; a static import would put it back in first loads. */
+const NO_TOAST_LIBRARY = fence("Show toasts with `toast` from '@/components/ui/toast', which loads the toast library when it is first needed (a type is fine).", ['sonner', 'sonner/*'], true);
 const uiPaths = (who, except = []) => UI_PATHS.filter((n) => !except.includes(n)).map((name) => ({ name, message: `${who} is pure: no ${name}.` }));
 
 const layer = (name, files, ignores, paths, patterns) => ({ name: `layers/${name}`, files, ignores, rules: { [RULE]: ['error', { paths, patterns }] } });
@@ -60,13 +62,13 @@ const layers = [
   ]),
   layer('components', under(['components']), [...EDITOR_CORE.map((d) => `${d}/**/*.ts`), '!**/use*.ts'], [], [
     fence('Components run in the browser: from db/ take types only (the DTOs), never code.', DB.slice(0, 3), true),
-    NO_SERVER('Components', true), NO_APP('Components'), NO_FAKES('Components'),
+    NO_SERVER('Components', true), NO_APP('Components'), NO_FAKES('Components'), NO_TOAST_LIBRARY,
   ]),
   layer('db', under(['db']), [], [], [NO_SERVER('db/'), NO_APP('db/'), NO_COMPONENTS('db/'), NO_FAKES('db/')]),
   layer('server', under(['server']), [LOCAL_MODE_SWITCH], [], [NO_APP('server/'), NO_COMPONENTS('server/'), NO_FAKES('server/')]),
   layer('the local-mode switch', [LOCAL_MODE_SWITCH], [], [], [NO_APP('The switch'), NO_COMPONENTS('The switch')]),
   layer('app screens', under(['app']), under(['app/api']), [], [
-    NO_FAKES('app/'),
+    NO_FAKES('app/'), NO_TOAST_LIBRARY,
     { regex: '^(@/app/api/|(\\.\\./)+api/)', message: 'A page does not import from a route folder (app/api): put what both need in server/ (or lib/ when it is pure).' },
   ]),
   layer('route handlers', under(['app/api']), [], [], [NO_FAKES('A route handler'), NO_COMPONENTS('A route handler')]),

@@ -9,7 +9,7 @@
  */
 import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import Link from 'next/link';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { useQueryClient } from '@tanstack/react-query';
 import { Archive, ArchiveRestore, Columns2, Copy, FolderOpen, History, Lightbulb, MoreHorizontal, PencilLine, Trash2 } from 'lucide-react';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';

@@ -5,7 +5,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { BAY_LIMITS } from '@/lib/layout/vocabulary';
 import { LENGTH_UNITS, parseLength, type LengthUnit } from '@/lib/layout/units';

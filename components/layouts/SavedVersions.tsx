@@ -10,7 +10,7 @@ import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { History } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import { formatDateTime } from '@/lib/format';

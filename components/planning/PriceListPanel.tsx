@@ -10,7 +10,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch } from '@/lib/api/client-fetch';
 import { PRICE_KEYS, priceKeyInfo, type PriceKeyInfo } from '@/lib/planning/price-keys';
 import type { PriceList } from '@/lib/planning';

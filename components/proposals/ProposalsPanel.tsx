@@ -8,7 +8,7 @@ import { useEffect, useRef, useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm, type Resolver } from 'react-hook-form';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { NDJSON, readProgressStream } from '@/lib/api/progress-stream';
 import { formatNumber } from '@/lib/format';

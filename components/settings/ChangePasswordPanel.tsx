@@ -9,7 +9,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { NewPasswordFields } from '@/components/auth/NewPasswordFields';
 import { passwordLengthSchema } from '@/lib/auth/password-rules';

@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import type { MemberDto } from '@/db/studios';
 import type { InvitationDto } from '@/db/sharing/invitations';

@@ -5,7 +5,7 @@
  * Never shows a token: the server does not have one to show.
  */
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { Ban, RefreshCw } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { InvitationDto } from '@/db/sharing/invitations';

@@ -9,7 +9,7 @@
  */
 import { useState } from 'react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { CheckCircle2, Hexagon, Pencil, RotateCcw, Trash2, X } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { Arrangement } from '@/lib/layout/schema';

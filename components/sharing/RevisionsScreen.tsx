@@ -10,7 +10,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { CheckCircle2, Lock, Stamp, Undo2 } from 'lucide-react';
 import { decisionWords, ISSUE_STATE_WORD, nextRevisionLetter } from '@/lib/layout/drawing-issue';
 import { RevisionMarkIcon } from './RevisionMarkIcon';

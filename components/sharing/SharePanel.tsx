@@ -7,7 +7,7 @@
  */
 import { useState } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { Ban, Copy, Link2 } from 'lucide-react';
 import { apiFetch } from '@/lib/api/client-fetch';
 import type { ViewerLinkDto } from '@/db/sharing/viewer-links';

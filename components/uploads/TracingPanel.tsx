@@ -7,7 +7,7 @@
  */
 import { useEffect, useRef, useState } from 'react';
 import dynamic from 'next/dynamic';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { Camera, ChevronDown, ImagePlus } from 'lucide-react';
 import { Dialog } from '@/components/editor/panels/Dialog';
 import type { LengthUnit } from '@/lib/layout';

@@ -5,7 +5,7 @@
  * and type are checked here first for a quick answer, and again by the server, which decides.
  */
 import { useRef, useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { FileText, ImageIcon, Trash2, Upload } from 'lucide-react';
 import { ACCEPTED_UPLOADS, UPLOAD_LIMIT_BYTES, type UploadDto } from '@/lib/uploads/dto';
 import { sendFile, type SendHandle } from './sendFile';

@@ -50,6 +50,8 @@ test('rename, duplicate as variant, compare variants, restore a saved version, a
   await rename.getByLabel('Name').fill(RENAMED);
   await page.keyboard.press('Enter');
   await expect(row(page, RENAMED)).toHaveCount(1);
+  // The table confirms it (its toasts once went nowhere: the page had no outlet for them).
+  await expect(page.getByText(`Renamed to “${RENAMED}”.`)).toBeVisible();
   await keepScreenshot(page, 'manage-renamed');
 
   // Duplicate as a variant: a new row, named "… variant 2", linked to its original.

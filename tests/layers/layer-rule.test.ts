@@ -41,6 +41,9 @@ describe('imports that run back up the layers are refused', () => {
     ['components/editor/geometry/probe.ts', "import { useStore } from 'zustand';", /pure: no zustand/],
     ['components/editor/commands/probe.ts', "import { toast } from 'sonner';", /pure: no sonner/],
     ['components/editor/store/probe.ts', "import { PlanCanvas } from '../canvas/PlanCanvas';", /drawing, panels or data hooks/],
+    // The toast library only through its on-demand adapter (components/ui/toast.ts).
+    ['components/planning/Probe.tsx', "import { toast } from 'sonner';", /components\/ui\/toast/],
+    ['app/(app)/probe/page.tsx', "import { Toaster } from 'sonner';", /components\/ui\/toast/],
     // Components: types from db/ and server/ only.
     ['components/planning/Probe.tsx', "import { getCurrentQuote } from '@/db/quotes';", /types only/],
     ['components/planning/Probe.tsx', "import { sendMail } from '@/server/mail/transport';", /services \(server\/\)/],
@@ -75,6 +78,8 @@ describe('imports that run down the layers pass', () => {
     ['components/editor/commands/useProbe.ts', "import { useEffect } from 'react';"],
     ['components/planning/Probe.tsx', "import type { QuoteDto } from '@/db/quotes';"],
     ['components/planning/Probe.tsx', "import { useQuery } from '@tanstack/react-query';"],
+    ['components/planning/Probe.tsx', "import { toast } from '@/components/ui/toast';"],
+    ['components/ui/Probe.tsx', "import type { ToasterProps } from 'sonner';"],
     ['db/probe.ts', "import { hashPassword } from '../lib/auth/password';"],
     ['server/api/probe.ts', "import { loadActor } from '@/db/actor';"],
     ['server/api/probe.ts', "import { NextResponse } from 'next/server';"],

@@ -10,7 +10,7 @@
  * Never saves read-only.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import type { LayoutDoc } from '@/lib/layout';
 import type { EditorStore } from '../store/editorStore';
 import { isDirty } from '../store/editorStore';

@@ -13,7 +13,7 @@
  * directly.
  */
 import { useEffect, useRef, type RefObject } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { KINDS } from '@/lib/layout/kinds';
 import type { ModuleKind } from '@/lib/layout/schema';
 import type { EditorStore } from '../store/editorStore';

@@ -5,7 +5,7 @@
  * only part of the document (the build plan) passes the ids of the commands it offers.
  */
 import { useEffect } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import type { EditorStore } from '../store/editorStore';
 import { dispatchKey, isTypingTarget } from './keyboard';
 import { COMMANDS } from './commands';

@@ -7,7 +7,7 @@
  */
 import { memo } from 'react';
 import { Plus, X } from 'lucide-react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { useShallow } from 'zustand/react/shallow';
 import { BAY_LIMITS } from '@/lib/layout/vocabulary';
 import type { Bay, BuildUp, Door, WheelArch } from '@/lib/layout/schema';

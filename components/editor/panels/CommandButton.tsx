@@ -5,7 +5,7 @@
  */
 import { memo, type ComponentType } from 'react';
 import { RotateCw, Copy, Trash2, Undo2, Redo2, ZoomIn, ZoomOut, Maximize, Ruler, Keyboard, SquareDashed, Save, type LucideProps } from 'lucide-react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
 import { useEditor, useEditorApi } from '../store/EditorStoreContext';

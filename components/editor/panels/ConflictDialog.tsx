@@ -7,7 +7,7 @@
  */
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import type { Conflict } from '../api/useAutosave';
 import { saveCopy } from '../api/layoutApi';
 import { Dialog } from './Dialog';

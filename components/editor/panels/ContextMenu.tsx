@@ -4,7 +4,7 @@
  * pointer, closes on choice, Escape or a click elsewhere; arrow keys move between items.
  */
 import { useEffect, useRef } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { command } from '../commands/commands';
 import { formatShortcut, isMacPlatform } from '../commands/shortcuts';
 import { useEditorApi, useEditor } from '../store/EditorStoreContext';

@@ -11,7 +11,7 @@
 import { useEffect, useId, useMemo, useState, type KeyboardEvent } from 'react';
 import { useForm, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { useShallow } from 'zustand/react/shallow';
 import { ARRANGEMENTS, FACINGS, MOUNTS, SURFACE_CHOICES } from '@/lib/layout/vocabulary';
 import type { Module } from '@/lib/layout/schema';

@@ -8,7 +8,7 @@
  * Never writes the document except through store actions.
  */
 import { useId } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { useShallow } from 'zustand/react/shallow';
 import { Trash2 } from 'lucide-react';
 import type { BodyPoint, Opening, RoofOpening, WindowOpening } from '@/lib/layout/schema';

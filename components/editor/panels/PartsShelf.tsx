@@ -7,7 +7,7 @@
  */
 import { memo, useMemo, useState } from 'react';
 import { Search, TriangleAlert } from 'lucide-react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { formatLength } from '@/lib/layout/units';
 import { kindCaution } from '@/lib/layout/cautions';
 import type { KindSpec, MaterialFamily } from '@/lib/layout/kinds';

@@ -6,7 +6,7 @@
  */
 import { useState } from 'react';
 import { CreditCard } from 'lucide-react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch } from '@/lib/api/client-fetch';
 import { formatMoney } from '../money';
 

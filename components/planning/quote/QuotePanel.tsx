@@ -15,7 +15,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import * as z from 'zod/mini';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Send, ExternalLink, TriangleAlert } from 'lucide-react';
-import { toast } from 'sonner';
+import { toast } from '@/components/ui/toast';
 import { apiFetch, ApiError } from '@/lib/api/client-fetch';
 import { computePartsList, quoteDeposit } from '@/lib/planning';
 import type { LayoutDoc } from '@/lib/layout';
