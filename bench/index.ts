@@ -156,6 +156,11 @@ ${table}
   120-step drag over 200 modules with one finger and a two-finger zoom on the plan (touch emulation, CDP
   \`Input.dispatchTouchEvent\`), at full speed and with Chromium's CPU slowed 4× (CDP \`Emulation.setCPUThrottlingRate\`,
   a mid-range tablet), and the mouse drag at 4×; frame intervals from \`requestAnimationFrame\`, p95 and the worst.
+  Where the worst frames come from (Chromium traces of the 4× one-finger drag, 2026-12-05): since a drag no longer
+  redraws the plan's drawing layer in its first frame, the drag's first frames are about 100 ms; the worst ones left
+  fall mid-drag, in compositor commits that copy every canvas of the plan at once
+  (\`Canvas2DResourceProvider::ProduceCanvasResource\`, about 37 ms each for four canvases, software compositing with
+  the GPU off), while the page's own script in those frames takes under 15 ms.
 - **Gzipped JavaScript** (\`bench/bundles.ts\`, \`npm run bench:bundles\`): every page route the build lists in
   \`.next/diagnostics/route-bundle-stats.json\` (a route with no visit fails the run), opened in a fresh browser context
   (empty cache; signed in as the demo owner where the page needs it): the encoded size of every script response until the

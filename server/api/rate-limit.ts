@@ -8,10 +8,15 @@ export interface Bucket {
   at: number;
 }
 
+/** Every limiter this process made (they are module-level singletons): see forgetAllBuckets. */
+const everyLimiter = new Set<RateLimiter>();
+
 export class RateLimiter {
   private buckets = new Map<string, Bucket>();
 
-  constructor(private readonly capacity: number, private readonly refillPerSecond: number) {}
+  constructor(private readonly capacity: number, private readonly refillPerSecond: number) {
+    everyLimiter.add(this);
+  }
 
   /** Takes one token; false when the key has none left. */
   take(key: string, now = Date.now()): boolean {
@@ -38,4 +43,13 @@ export class RateLimiter {
   private prune(now: number) {
     for (const [k, b] of this.buckets) if (now - b.at > 60_000) this.buckets.delete(k);
   }
+}
+
+/**
+ * Forgets every bucket of every limiter in this process. For the test set-up only: test files that
+ * share one process (vitest.config.mts) each start with full buckets, as they would in a process
+ * of their own.
+ */
+export function forgetAllBuckets(): void {
+  for (const limiter of everyLimiter) limiter.clear();
 }
