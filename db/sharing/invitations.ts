@@ -291,7 +291,11 @@ export async function acceptInvitation(
   const passwordHash = !existingPre && input.password ? await hashPassword(input.password) : null;
   try {
     return await db.transaction(async (tx) => {
-      const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1);
+      // Locked for the transaction: a second accept of the same link waits here for the first to
+      // commit, then reads it as accepted (410). Without the lock, on a PostgreSQL server it could
+      // read the invitation as pending, then the account the first had just made, and answer
+      // "sign in first" (409) instead.
+      const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1).for('update');
       if (!inv) throw new InvitationUnusableError('unknown');
       const status = invitationStatus(inv, now);
       if (status !== 'pending') throw new InvitationUnusableError(status);
