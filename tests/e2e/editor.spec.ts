@@ -62,12 +62,19 @@ test.describe('layout editor', () => {
         return original.apply(this, a);
       };
     });
+    // Every canvas of the plan stays shown when the drag starts (DragLayer.tsx: a layer shown or
+    // hidden changes the page's layers in the frame the drag starts).
+    const shown = () => page.getByTestId('plan').locator('canvas').evaluateAll((cs) => cs.map((c) => getComputedStyle(c).display));
+    const before = await shown();
+    expect(before.length).toBeGreaterThanOrEqual(4);
+    expect(before).not.toContain('none');
     await page.mouse.move(grab.x, grab.y);
     await page.mouse.down();
     await page.mouse.move(grab.x + 100, grab.y, { steps: 15 });
     await expect(page.getByTestId('plan')).toHaveAttribute('data-stroke', 'gesture');
     await expect.poll(async () => (await draws()).drag ?? 0).toBeGreaterThan(0);
     expect((await draws()).drawing ?? 0).toBe(0);
+    expect(await shown()).toEqual(before);
     await page.mouse.up();
     await expect.poll(() => numberIn(page, 'x')).not.toBe(placedX);
     await expect.poll(async () => (await draws()).drawing ?? 0).toBeGreaterThan(0);

@@ -2,8 +2,9 @@
 /**
  * What sits over the modules: outlines of modules that fail a check (brick, with a hatch-free
  * double line so colour is not the only cue), modules a clicked finding names, the selection with
- * its resize handles, and the selected module's size and gaps. Never listens for events; hidden
- * while a move or resize is in progress (the drag layer shows the live state).
+ * its resize handles, and the selected module's size and gaps. Never listens for events; draws
+ * nothing while a move or resize is in progress (the drag layer shows the live state). The layer
+ * itself stays shown, as every layer of the plan does (see DragLayer.tsx).
  */
 import { memo } from 'react';
 import { Layer, Shape } from './konva';
@@ -116,8 +117,8 @@ export const OverlayLayer = memo(function OverlayLayer(p: Props) {
   };
 
   return (
-    <Layer {...worldLayerProps(p.viewport)} listening={false} visible={!p.hidden} name="overlay">
-      <Shape sceneFunc={draw} listening={false} />
+    <Layer {...worldLayerProps(p.viewport)} listening={false} name="overlay">
+      <Shape sceneFunc={draw} listening={false} visible={!p.hidden} />
     </Layer>
   );
 });
