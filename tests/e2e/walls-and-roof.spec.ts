@@ -58,9 +58,26 @@ test('a window, a roof vent, two panels and the exhaust: elevations, roof plan, 
   // 1070–1740, so 60 mm from each side edge (50 mm asked, common practice, no source) and 150 mm behind the
   // template's vent (which ends at 850 mm; 100 mm asked); they end at 2480 mm, 120 mm before the new vent.
   const panelIds: string[] = [];
+  const placed: string[] = [];
   for (const y of [60, 1070]) {
+    // Every state the Details form passes through from here: which module it shows, and whether it takes input.
+    await page.evaluate(() => {
+      const seen: { id: string; inert: boolean }[] = [];
+      (window as unknown as { detailsSeen: typeof seen }).detailsSeen = seen;
+      const note = () => document.querySelectorAll('form[data-module-id]').forEach((f) => seen.push({ id: f.getAttribute('data-module-id')!, inert: !!f.closest('[inert]') }));
+      new MutationObserver(note).observe(document.body, { subtree: true, childList: true, attributes: true, attributeFilter: ['inert', 'data-module-id'] });
+    });
     await page.getByRole('button', { name: 'Place Solar panel, 1480 mm by 670 mm' }).click();
     const details = page.getByRole('form', { name: /^Details of Solar panel/ });
+    // The Details panel follows the selection at low priority: type only once it shows the new panel.
+    await expect(details).toHaveAttribute('data-module-id', /.+/);
+    for (const before of placed) await expect(details).not.toHaveAttribute('data-module-id', before);
+    const now = (await details.getAttribute('data-module-id'))!;
+    const seen = await page.evaluate(() => (window as unknown as { detailsSeen: { id: string; inert: boolean }[] }).detailsSeen);
+    // The last panel's form, on screen until the panel catches up, took no input meanwhile; the new one does.
+    if (placed.length > 0) expect(seen.filter((s) => s.id === placed[0]).at(-1)).toEqual({ id: placed[0], inert: true });
+    expect(seen.at(-1)).toEqual({ id: now, inert: false });
+    placed.push(now);
     await expect(page.getByRole('textbox', { name: 'Rated power (W)' })).toHaveValue('175');
     await typeModuleLength(details, 'Along (x)', 1000);
     await typeModuleLength(details, 'Across (y)', y);

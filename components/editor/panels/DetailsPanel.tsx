@@ -22,7 +22,10 @@ export const DetailsPanel = memo(function DetailsPanel() {
   const live = useEditor(useShallow((s) => ({ selection: s.selection, modules: s.doc.modules })));
   const { units, readOnly } = useEditor(useShallow((s) => ({ units: s.units, readOnly: s.readOnly })));
   // The form follows the selection at low priority, so selecting and starting a drag stays smooth.
+  // Until it has caught up, the form still on screen is the last selection's: it takes no input,
+  // so nothing typed in that moment lands on a module that is no longer selected.
   const { selection, modules } = useDeferredValue(live);
+  const behind = selection !== live.selection;
   const selected = useMemo(() => modules.filter((m) => selection.includes(m.id)), [modules, selection]);
   const opening = useEditor((s) => (s.openingSelection ? s.doc.bay.openings.find((o) => o.id === s.openingSelection) : undefined));
   if (selected.length === 0 && opening) return <OpeningForm key={opening.id} opening={opening} />;
@@ -62,7 +65,9 @@ export const DetailsPanel = memo(function DetailsPanel() {
         <div className="px-4 pt-3"><CautionNote title={caution.title} compact testId="details-caution">{caution.text}</CautionNote></div>
       )}
       <Suspense fallback={<p className="p-4 text-sm text-ink-soft">Opening the details…</p>}>
-        <ModuleForm key={selected[0].id} module={selected[0]} />
+        <div inert={behind} aria-busy={behind}>
+          <ModuleForm key={selected[0].id} module={selected[0]} />
+        </div>
       </Suspense>
     </>
   );

@@ -107,6 +107,7 @@ export default function ModuleForm({ module }: { module: Module }) {
       }}
       className="space-y-4 p-4 text-sm"
       aria-label={`Details of ${module.label || spec.title}`}
+      data-module-id={module.id}
     >
       <fieldset disabled={readOnly} className="space-y-4">
         <div className="grid grid-cols-2 gap-3">
