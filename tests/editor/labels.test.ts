@@ -7,6 +7,10 @@ import { boxesOverlap, LABEL_LOOK, labelNames, placeModuleLabel, placePlanLabels
 import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbols/kind-short-names';
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
+import { markTextBoxes, openingMarks, POINT_RADIUS_PX, type OpeningMark } from '@/components/editor/geometry/openingMarks';
+import { labelRequestOf } from '@/components/editor/canvas/moduleSymbols';
+import { starterLayout } from '@/lib/layout/templates';
+import { inArrangement } from '@/lib/layout/bay';
 
 // textWidth answers mm for a size in pt; the same em widths at a size in px give px: × 72 / 25.4.
 const measure: MeasureText = (text, face, size) => (textWidth(text, size, face === 'mono' ? 'mono' : 'sans') * 72) / 25.4;
@@ -132,6 +136,55 @@ describe('module labels on the plan', () => {
     });
     expect(boxes.length).toBeGreaterThan(20);
     for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j])).toBe(false);
+  });
+});
+
+describe('module labels keep clear of the openings\u2019 words', () => {
+  const onPlan = (placed: ReturnType<typeof placePlanLabels>, items: readonly PlanLabelItem[]) =>
+    items.flatMap((it) => {
+      const p = placed.get(it.id)!;
+      return [p.name, p.dimension].filter((b) => b !== null).map((b) => ({ ...b, cx: b.cx + it.x, cy: b.cy + it.y }));
+    });
+
+  it('a word where the name would go moves the name off it, or drops it', () => {
+    // A 2000 × 550 mm bench at the fitted zoom (444.7 × 122.3 px); its name is centred, its size below.
+    const item: PlanLabelItem = { id: 'bench', x: 0, y: 0, width: 2000 * FITTED, height: 550 * FITTED, names: labelNames(undefined, 'Bench seat', KIND_SHORT_NAMES['bench-seat']), dimension: '2000 × 550 mm' };
+    const alone = placePlanLabels([item], measure).get('bench')!;
+    expect(alone.name).not.toBeNull();
+    // A word written right over where the name went.
+    const word: TextBox = { text: 'exhaust', cx: alone.name!.cx, cy: alone.name!.cy, width: 40, height: 12, rotation: 0 };
+    const placed = placePlanLabels([item], measure, [word]);
+    for (const b of onPlan(placed, [item])) expect(boxesOverlap(b, word), b.text).toBe(false);
+    expect(placed.get('bench')).not.toEqual(alone);
+  });
+
+  it('a body point under the floor writes its word 10 px below its circle; both are boxes to keep clear of', () => {
+    // An intake at 1000, 700 mm under the floor, at 0.25 px/mm: the circle at 250, 175 px, the word at 175 + 10 px.
+    const intake: OpeningMark = { id: 'i', type: 'body-point', underside: true, at: { x: 1000, y: 700 }, foot: { x: 1000, y: 700 }, word: 'intake' };
+    const [word, circle] = markTextBoxes([intake], 0.25, measure);
+    expect(word).toMatchObject({ text: 'intake', cx: 250, cy: 185 });
+    expect(word.width).toBeCloseTo(measure('intake', 'text', 9) + 4, 6);
+    expect(circle).toMatchObject({ cx: 250, cy: 175, width: 2 * POINT_RADIUS_PX + 2, height: 2 * POINT_RADIUS_PX + 2 });
+  });
+
+  it('on both starter layouts, at every zoom from a phone\u2019s to a close look, no module label covers an opening\u2019s word or point', () => {
+    // 0.10–0.40 px/mm: a 3100 mm bay across 310 px (a phone) to 1240 px. Without the openings as
+    // obstacles, the lounge starter's bench and heater labels and the touring starter's bed size
+    // and roof panel label run over "exhaust", "intake", "vent" and "drop vent" in this range.
+    for (const name of ['starter-l-lounge', 'starter-rear-bed']) {
+      const doc = starterLayout(name)!;
+      for (let step = 0; step <= 15; step++) {
+        const scale = 0.1 + step * 0.02;
+        const words = markTextBoxes(openingMarks(doc, 1 / scale), scale, measure);
+        expect(words.length).toBeGreaterThan(1);
+        for (const arrangement of ['travel', 'lounge', 'sleep'] as const) {
+          const items = doc.modules.filter((m) => inArrangement(m, arrangement)).map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units: 'mm' }) }));
+          const boxes = onPlan(placePlanLabels(items, measure, words), items);
+          expect(boxes.length).toBeGreaterThan(3);
+          for (const b of boxes) for (const w of words) expect(boxesOverlap(b, w), `${name} at ${scale.toFixed(2)} px/mm, ${arrangement}: ${b.text} / ${w.text || 'a point'}`).toBe(false);
+        }
+      }
+    }
   });
 });
 

@@ -1,7 +1,7 @@
 'use client';
 /**
  * The modules of the arrangement on show, in draw order, with the phantom arrangement under
- * them, and then all their labels. Left as drawn during a gesture (the drag layer washes a moved
+ * them, and then all their labels, clear of each other and of the openings' words. Left as drawn during a gesture (the drag layer washes a moved
  * module's origin and draws it where it goes). Never listens for events; redrawn only when the
  * document, arrangement or zoom changes, never per pointer move.
  */
@@ -13,6 +13,7 @@ import { drawOrder } from '../geometry/hitTest';
 import { ModuleLabels, ModuleShape } from './ModuleShape';
 import { canvasMeasure, labelRequestOf } from './moduleSymbols';
 import { placePlanLabels, rememberedWidths } from '../geometry/labels';
+import { markTextBoxes, type OpeningMark } from '../geometry/openingMarks';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -26,6 +27,8 @@ interface Props {
   fontsReady: number;
   /** The person's units, for the size written in each module. */
   units: LengthUnit;
+  /** The openings' marks at this zoom: the labels keep clear of their words. */
+  openings: readonly OpeningMark[];
 }
 
 /** A 2D context of its own for measuring label text (never drawn on). */
@@ -35,7 +38,7 @@ function measuringContext(): CanvasRenderingContext2D | null {
   return measuring;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, viewport, fonts, fontsReady, units }: Props) {
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, viewport, fonts, fontsReady, units, openings }: Props) {
   const { shown, phantoms } = useMemo(() => {
     return {
       shown: drawOrder(modules.filter((m) => inArrangement(m, arrangement))),
@@ -52,8 +55,8 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   const placements = useMemo(() => {
     if (!measure) return undefined;
     const items = shown.map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units }) }));
-    return placePlanLabels(items, measure);
-  }, [shown, scale, units, measure]);
+    return placePlanLabels(items, measure, markTextBoxes(openings, scale, measure));
+  }, [shown, scale, units, measure, openings]);
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (

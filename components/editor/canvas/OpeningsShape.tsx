@@ -5,17 +5,16 @@
  * modules; redrawn when the openings, the build-up or the zoom change. The opening being dragged is
  * drawn faint here while the overlay draws where it is going. Never listens for events.
  */
-import { memo, useMemo } from 'react';
+import { memo } from 'react';
 import { Shape } from './konva';
 import type Konva from 'konva';
-import type { LayoutDoc } from '@/lib/layout';
-import { openingMarks } from '../geometry/openingMarks';
+import type { OpeningMark } from '../geometry/openingMarks';
 import { drawOpeningMarks } from './openingsDrawing';
 import type { CanvasFonts } from './useCanvasFonts';
 
-export const OpeningsShape = memo(function OpeningsShape({ bay, buildUp, scale, fonts, dragging }: { bay: LayoutDoc['bay']; buildUp: LayoutDoc['buildUp']; scale: number; fonts: CanvasFonts; dragging: string | null }) {
+/** `marks` are the openings at this zoom (openingMarks with px = 1 / scale), shared with the module labels. */
+export const OpeningsShape = memo(function OpeningsShape({ marks, scale, fonts, dragging }: { marks: readonly OpeningMark[]; scale: number; fonts: CanvasFonts; dragging: string | null }) {
   const px = 1 / scale;
-  const marks = useMemo(() => openingMarks({ bay, buildUp }, px), [bay, buildUp, px]);
   if (marks.length === 0) return null;
   return (
     <Shape

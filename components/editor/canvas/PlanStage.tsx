@@ -4,7 +4,7 @@
  * to its box, and wires pointer input. It only composes; drawing lives in the layers and input in
  * usePlanPointer. Must never draw anything itself.
  */
-import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { Layer, Stage } from './konva';
 import { worldLayerProps } from './worldTransform';
 import { useShallow } from 'zustand/react/shallow';
@@ -15,6 +15,7 @@ import { OverlayLayer } from './OverlayLayer';
 import { DragLayer } from './DragLayer';
 import { RulerLayer } from './RulerLayer';
 import { OpeningsShape } from './OpeningsShape';
+import { openingMarks } from '../geometry/openingMarks';
 import { OpeningsList } from './OpeningsList';
 import { usePlanPointer } from './usePlanPointer';
 import { useCanvasFonts } from './useCanvasFonts';
@@ -72,6 +73,10 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
   usePlanPointer(box, api, menu, stage);
 
   const moving = s.gestureKind === 'move' || s.gestureKind === 'resize';
+  // The openings at this zoom: drawn by OpeningsShape, kept clear of by the module labels.
+  const { bay, buildUp } = s.doc;
+  const scale = s.viewport.scale;
+  const marks = useMemo(() => openingMarks({ bay, buildUp }, 1 / scale), [bay, buildUp, scale]);
   return (
     <div
       ref={box}
@@ -92,8 +97,8 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
           {/* The sheet and the modules share one layer: Konva advises at most 3–5 layers per stage. */}
           <Layer {...worldLayerProps(s.viewport)} listening={false} name="drawing">
             <SheetLayer bay={s.doc.bay} buildUp={s.doc.buildUp} viewport={s.viewport} units={s.units} fonts={fonts} />
-            <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} />
-            <OpeningsShape bay={s.doc.bay} buildUp={s.doc.buildUp} scale={s.viewport.scale} fonts={fonts} dragging={s.openingPreview?.opening.id ?? null} />
+            <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} openings={marks} />
+            <OpeningsShape marks={marks} scale={s.viewport.scale} fonts={fonts} dragging={s.openingPreview?.opening.id ?? null} />
           </Layer>
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} openingSelection={s.openingSelection} openingHighlight={s.openingHighlight} openingPreview={s.openingPreview} />
           {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}

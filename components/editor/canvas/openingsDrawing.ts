@@ -7,7 +7,7 @@
  */
 import { withAlpha } from '@/lib/look';
 import { theme, canvasFonts } from '../theme';
-import { markBox, POINT_RADIUS_PX, ROOF_OPENING_DASH_PX, type OpeningMark, type Segment } from '../geometry/openingMarks';
+import { MARK_WORD_PX, markBox, markWord, POINT_RADIUS_PX, ROOF_OPENING_DASH_PX, type OpeningMark, type Segment } from '../geometry/openingMarks';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -62,7 +62,7 @@ export function drawOpeningMarks(ctx: Ctx, marks: OpeningMark[], px: number, fon
       ctx.lineWidth = 1 * px;
       ctx.stroke();
       ctx.setLineDash([]);
-      label(ctx, m.word, (r.x0 + r.x1) / 2, r.y0 + 8 * px, px, fonts);
+      label(ctx, markWord(m, px)!, px, fonts);
     } else {
       const rad = POINT_RADIUS_PX * px;
       ctx.beginPath();
@@ -88,7 +88,7 @@ export function drawOpeningMarks(ctx: Ctx, marks: OpeningMark[], px: number, fon
         ctx.fillStyle = theme.ink;
         ctx.fill();
       }
-      label(ctx, m.word, m.at.x, m.at.y + (m.underside || m.at.y >= m.foot.y ? 1 : -1) * 10 * px, px, fonts);
+      label(ctx, markWord(m, px)!, px, fonts);
     }
   }
   ctx.restore();
@@ -105,9 +105,10 @@ export function drawOpeningSelection(ctx: Ctx, m: OpeningMark, px: number, style
   ctx.restore();
 }
 
-function label(ctx: Ctx, text: string, x: number, y: number, px: number, fonts: typeof canvasFonts) {
+/** A mark's word where `markWord` puts it (module labels keep clear of that spot: markTextBoxes). */
+function label(ctx: Ctx, { text, x, y }: { text: string; x: number; y: number }, px: number, fonts: typeof canvasFonts) {
   ctx.save();
-  ctx.font = `${9 * px}px ${fonts.text}`;
+  ctx.font = `${MARK_WORD_PX * px}px ${fonts.text}`;
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
   ctx.fillStyle = theme.inkSoft;

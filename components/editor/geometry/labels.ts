@@ -145,10 +145,12 @@ const CELL = 64;
  * Labels for a whole plan, so that no two modules' labels cover each other (a hob on a counter,
  * a locker above them): modules are taken from the top of the draw order down, each gets the first
  * of these that is clear of the labels already placed — name and size, name alone, the next
- * shorter name alone — else none. Placed boxes are filed in a grid of cells; placed boxes never
- * overlap, so a cell holds a bounded number and each module costs a bounded number of tests.
+ * shorter name alone — else none. `obstacles` (plan px, like the items) are what else is written
+ * on the plan — the openings' words — and are kept clear of the same way. Placed boxes are filed
+ * in a grid of cells; placed boxes never overlap, so a cell holds a bounded number and each module
+ * costs a bounded number of tests.
  */
-export function placePlanLabels(items: readonly PlanLabelItem[], measure: MeasureText): Map<string, LabelPlacement> {
+export function placePlanLabels(items: readonly PlanLabelItem[], measure: MeasureText, obstacles: readonly TextBox[] = []): Map<string, LabelPlacement> {
   const grid = new Map<string, TextBox[]>();
   const cellsOf = (b: TextBox, f: (key: string) => boolean | void): boolean => {
     const i0 = Math.floor((b.cx - b.width / 2) / CELL), i1 = Math.floor((b.cx + b.width / 2) / CELL);
@@ -161,6 +163,7 @@ export function placePlanLabels(items: readonly PlanLabelItem[], measure: Measur
   const clashes = (b: TextBox) => cellsOf(b, (key) => grid.get(key)?.some((o) => boxesOverlap(o, b)));
   const file = (b: TextBox) => void cellsOf(b, (key) => { const list = grid.get(key); if (list) list.push(b); else grid.set(key, [b]); });
 
+  for (const b of obstacles) file(b);
   const out = new Map<string, LabelPlacement>();
   for (let k = items.length - 1; k >= 0; k--) {
     const it = items[k];

@@ -12,6 +12,7 @@ import type { Bay, LayoutDoc, Opening } from '@/lib/layout/schema';
 import type { Rect } from '@/lib/geometry/rect';
 import { buildUpThickness } from '@/lib/layout/bay';
 import { bodyPointAt, roofOpeningRect, wallRectInPlan, windowOnWall, type BayWall } from '@/lib/layout/openings';
+import type { MeasureText, TextBox } from './labels';
 
 export interface Segment {
   x0: number; y0: number;
@@ -114,6 +115,33 @@ export function openingMarks(doc: Pick<LayoutDoc, 'bay' | 'buildUp'>, px: number
       const at = o.wall === 'left' ? { x: p.x, y: -off } : o.wall === 'right' ? { x: p.x, y: doc.bay.width + off } : o.wall === 'rear' ? { x: doc.bay.length + off, y: p.y } : foot;
       out.push({ id: o.id, type: 'body-point', underside: o.wall === 'underside', at, foot, word: POINT_WORDS[o.kind] });
     }
+  }
+  return out;
+}
+
+/** The size of a mark's word on screen, px (the plan's text face). */
+export const MARK_WORD_PX = 9;
+
+/** Where a roof opening's or body point's word is written, its centre in mm; a window has none. */
+export function markWord(m: OpeningMark, px: number): { text: string; x: number; y: number } | null {
+  if (m.type === 'roof-opening') return { text: m.word, x: (m.rect.x0 + m.rect.x1) / 2, y: m.rect.y0 + 8 * px };
+  if (m.type === 'body-point') return { text: m.word, x: m.at.x, y: m.at.y + (m.underside || m.at.y >= m.foot.y ? 1 : -1) * 10 * px };
+  return null;
+}
+
+/**
+ * What the marks write or draw small on the plan that a module's label must keep clear of, as
+ * boxes in the plan's px (mm × `scale`, as `placePlanLabels` takes them): each word, and each
+ * body point's circle. Window symbols and roof outlines lie on walls and over modules and are
+ * left to be written across.
+ */
+export function markTextBoxes(marks: readonly OpeningMark[], scale: number, measure: MeasureText): TextBox[] {
+  const px = 1 / scale;
+  const out: TextBox[] = [];
+  for (const m of marks) {
+    const w = markWord(m, px);
+    if (w) out.push({ text: w.text, cx: w.x * scale, cy: w.y * scale, width: measure(w.text, 'text', MARK_WORD_PX) + 4, height: MARK_WORD_PX * 1.3, rotation: 0 });
+    if (m.type === 'body-point') out.push({ text: '', cx: m.at.x * scale, cy: m.at.y * scale, width: 2 * POINT_RADIUS_PX + 2, height: 2 * POINT_RADIUS_PX + 2, rotation: 0 });
   }
   return out;
 }
