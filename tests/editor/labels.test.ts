@@ -8,6 +8,7 @@ import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbol
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
 import { markTextBoxes, openingMarks, POINT_RADIUS_PX, type OpeningMark } from '@/components/editor/geometry/openingMarks';
+import { bayWords, dimensionTextPlace, planTextBoxes } from '@/components/editor/geometry/planWords';
 import { labelRequestOf } from '@/components/editor/canvas/moduleSymbols';
 import { starterLayout } from '@/lib/layout/templates';
 import { inArrangement } from '@/lib/layout/bay';
@@ -167,16 +168,31 @@ describe('module labels keep clear of the openings\u2019 words', () => {
     expect(circle).toMatchObject({ cx: 250, cy: 175, width: 2 * POINT_RADIUS_PX + 2, height: 2 * POINT_RADIUS_PX + 2 });
   });
 
+  it('the bay writes its door words outside their walls and the cab word over the arrow; dimension values sit on the line, or beside it when short', () => {
+    // A 3100 × 1800 mm bay with a right sliding door 150–1350 mm and rear doors 150–1650 mm, at 0.2 px/mm (5 mm a px).
+    const bay = { length: 3100, width: 1800, bulkhead: true, doors: [{ id: 's', wall: 'right' as const, offset: 150, width: 1200 }, { id: 'r', wall: 'rear' as const, offset: 150, width: 1500 }] };
+    expect(bayWords(bay, 5)).toEqual([
+      { text: 'door', x: 750, y: 1800 + 18 * 5, turned: false },
+      { text: 'rear doors', x: 3100 + 14 * 5, y: 900, turned: true },
+      { text: 'cab', x: -22 * 5, y: 900 - 12 * 5, turned: false },
+    ]);
+    // 3100 mm at 0.2 px/mm is 620 px, room for a 50 px value and 12 px of line: on the line.
+    expect(dimensionTextPlace({ role: 'overall', axis: 'x', from: 0, to: 3100, at: -170, value: 3100 }, 0.2, 50)).toEqual({ x: 1550, y: -170, beside: 0, turned: false });
+    // 100 mm is 20 px: the value goes 9 px (45 mm) beside it; along y it reads turned, beside along −x.
+    expect(dimensionTextPlace({ role: 'gap-lining', axis: 'y', from: 0, to: 100, at: 500, value: 100 }, 0.2, 50)).toEqual({ x: 455, y: 50, beside: -45, turned: true });
+  });
+
   it('on both starter layouts, at every zoom from a phone\u2019s to a close look, no module label covers an opening\u2019s word or point', () => {
-    // 0.10–0.40 px/mm: a 3100 mm bay across 310 px (a phone) to 1240 px. Without the openings as
-    // obstacles, the lounge starter's bench and heater labels and the touring starter's bed size
-    // and roof panel label run over "exhaust", "intake", "vent" and "drop vent" in this range.
+    // 0.10–0.40 px/mm: a 3100 mm bay across 310 px (a phone) to 1240 px. Without the plan's other
+    // words as obstacles, the lounge starter's bench and heater labels and the touring starter's bed
+    // size and roof panel label run over "exhaust", "intake", "vent" and "drop vent" in this range,
+    // and on a phone the lounge starter's grey tank size over "rear doors" and the "1800 mm" width.
     for (const name of ['starter-l-lounge', 'starter-rear-bed']) {
       const doc = starterLayout(name)!;
       for (let step = 0; step <= 15; step++) {
         const scale = 0.1 + step * 0.02;
-        const words = markTextBoxes(openingMarks(doc, 1 / scale), scale, measure);
-        expect(words.length).toBeGreaterThan(1);
+        const words = planTextBoxes(doc, openingMarks(doc, 1 / scale), scale, 'mm', measure);
+        expect(words.length).toBeGreaterThan(5);
         for (const arrangement of ['travel', 'lounge', 'sleep'] as const) {
           const items = doc.modules.filter((m) => inArrangement(m, arrangement)).map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units: 'mm' }) }));
           const boxes = onPlan(placePlanLabels(items, measure, words), items);

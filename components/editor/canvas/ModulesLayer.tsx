@@ -1,19 +1,21 @@
 'use client';
 /**
  * The modules of the arrangement on show, in draw order, with the phantom arrangement under
- * them, and then all their labels, clear of each other and of the openings' words. Left as drawn during a gesture (the drag layer washes a moved
+ * them, and then all their labels, clear of each other and of what else the plan writes (door
+ * and cab words, the overall dimensions, the openings' words: planWords.ts). Left as drawn during a gesture (the drag layer washes a moved
  * module's origin and draws it where it goes). Never listens for events; redrawn only when the
  * document, arrangement or zoom changes, never per pointer move.
  */
 import { memo, useMemo } from 'react';
 import { Group } from './konva';
-import type { Arrangement, LengthUnit, Module } from '@/lib/layout';
+import type { Arrangement, LayoutDoc, LengthUnit, Module } from '@/lib/layout';
 import type { Viewport } from '../geometry/viewport';
 import { drawOrder } from '../geometry/hitTest';
 import { ModuleLabels, ModuleShape } from './ModuleShape';
 import { canvasMeasure, labelRequestOf } from './moduleSymbols';
 import { placePlanLabels, rememberedWidths } from '../geometry/labels';
-import { markTextBoxes, type OpeningMark } from '../geometry/openingMarks';
+import type { OpeningMark } from '../geometry/openingMarks';
+import { planTextBoxes } from '../geometry/planWords';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -27,7 +29,8 @@ interface Props {
   fontsReady: number;
   /** The person's units, for the size written in each module. */
   units: LengthUnit;
-  /** The openings' marks at this zoom: the labels keep clear of their words. */
+  /** The bay and its openings' marks at this zoom: the labels keep clear of their words. */
+  bay: LayoutDoc['bay'];
   openings: readonly OpeningMark[];
 }
 
@@ -38,7 +41,7 @@ function measuringContext(): CanvasRenderingContext2D | null {
   return measuring;
 }
 
-export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, viewport, fonts, fontsReady, units, openings }: Props) {
+export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, phantom, viewport, fonts, fontsReady, units, bay, openings }: Props) {
   const { shown, phantoms } = useMemo(() => {
     return {
       shown: drawOrder(modules.filter((m) => inArrangement(m, arrangement))),
@@ -55,8 +58,8 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   const placements = useMemo(() => {
     if (!measure) return undefined;
     const items = shown.map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units }) }));
-    return placePlanLabels(items, measure, markTextBoxes(openings, scale, measure));
-  }, [shown, scale, units, measure, openings]);
+    return placePlanLabels(items, measure, planTextBoxes({ bay }, openings, scale, units, measure));
+  }, [shown, scale, units, measure, bay, openings]);
   return (
     <Group listening={false} name="modules">
       {shown.map((m) => (

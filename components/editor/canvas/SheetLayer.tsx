@@ -12,6 +12,7 @@ import { visibleWorld, type Viewport } from '../geometry/viewport';
 import { drawBay, drawGrid } from './bayDrawing';
 import { drawDimension } from './dimensionDrawing';
 import { overallDimensions } from '../geometry/dimensions';
+import { OVERALL_OFFSET_PX } from '../geometry/planWords';
 import type { CanvasFonts } from './useCanvasFonts';
 
 interface Props {
@@ -34,7 +35,7 @@ export const SheetLayer = memo(function SheetLayer({ bay, buildUp, viewport, uni
       <Shape sceneFunc={(c: Konva.Context) => drawBay(c._context, doc, scale, fonts)} listening={false} />
       <Shape
         sceneFunc={(c: Konva.Context) => {
-          for (const d of overallDimensions(doc, 34 / scale)) drawDimension(c._context, d, scale, units, undefined, fonts);
+          for (const d of overallDimensions(doc, OVERALL_OFFSET_PX / scale)) drawDimension(c._context, d, scale, units, undefined, fonts);
         }}
         listening={false}
       />

@@ -9,6 +9,7 @@ import { theme, canvasFonts } from '../theme';
 import { fillHatch } from './hatching';
 import { archBoxes, buildUpThickness } from '@/lib/layout/bay';
 import { gridSpacing } from '../geometry/viewport';
+import { BAY_WORD_PX, bayWords, CAB_ARROW_PX } from '../geometry/planWords';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -106,18 +107,18 @@ export function drawBay(ctx: Ctx, doc: LayoutDoc, scale: number, fonts = canvasF
       ctx.moveTo(d.offset + d.width, yIn); ctx.lineTo(d.offset + d.width, y);
       ctx.stroke();
     }
-    label(ctx, d.wall === 'rear' ? 'rear doors' : 'door', d.wall === 'rear' ? L + 14 * px : d.offset + d.width / 2, d.wall === 'rear' ? d.offset + d.width / 2 : d.wall === 'left' ? -16 * px : W + 18 * px, px, fonts, d.wall === 'rear' ? -Math.PI / 2 : 0);
   }
+  // The door words and the cab word, where planWords puts them (the module labels keep clear of them).
+  for (const w of bayWords(doc.bay, px)) label(ctx, w.text, w.x, w.y, px, fonts, w.turned ? -Math.PI / 2 : 0);
 
   // Cab arrow at the front.
-  const ax = -22 * px, ay = W / 2;
+  const ax = CAB_ARROW_PX.x * px, ay = W / 2;
   ctx.beginPath();
   ctx.moveTo(ax + 12 * px, ay); ctx.lineTo(ax - 8 * px, ay);
   ctx.moveTo(ax - 2 * px, ay - 5 * px); ctx.lineTo(ax - 8 * px, ay); ctx.lineTo(ax - 2 * px, ay + 5 * px);
   ctx.strokeStyle = theme.ink;
   ctx.lineWidth = 1.25 * px;
   ctx.stroke();
-  label(ctx, doc.bay.bulkhead ? 'cab' : 'cab (open)', ax, ay - 12 * px, px, fonts, 0);
   ctx.restore();
 }
 
@@ -136,7 +137,7 @@ function label(ctx: Ctx, text: string, x: number, y: number, px: number, fonts: 
   ctx.save();
   ctx.translate(x, y);
   if (rotate) ctx.rotate(rotate);
-  ctx.font = `${10 * px}px ${fonts.text}`;
+  ctx.font = `${BAY_WORD_PX * px}px ${fonts.text}`;
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
   ctx.fillStyle = theme.inkSoft;

@@ -6,6 +6,7 @@
 import { formatLength, type LengthUnit } from '@/lib/layout/units';
 import { theme, canvasFonts } from '../theme';
 import type { DimensionString } from '../geometry/dimensions';
+import { DIMENSION_TEXT_PX, dimensionTextPlace } from '../geometry/planWords';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -30,16 +31,15 @@ export function drawDimension(ctx: Ctx, d: DimensionString, scale: number, unit:
   ctx.stroke();
 
   const text = formatLength(d.value, unit);
-  ctx.font = `${10.5 * px}px ${fonts.mono}`;
+  ctx.font = `${DIMENSION_TEXT_PX * px}px ${fonts.mono}`;
   const w = ctx.measureText(text).width;
-  const mid = (d.from + d.to) / 2;
-  ctx.translate(d.axis === 'x' ? mid : at, d.axis === 'x' ? at : mid);
-  if (d.axis === 'y') ctx.rotate(-Math.PI / 2);
-  // Text sits on the line when there is room, beside it otherwise.
-  const fits = lenPx > w * scale + 12;
+  // Text sits on the line when there is room, beside it otherwise (planWords, which the module labels keep clear of).
+  const place = dimensionTextPlace(d, scale, w * scale, offsetPx);
+  ctx.translate(place.x - (place.turned ? place.beside : 0), place.y - (place.turned ? 0 : place.beside));
+  if (place.turned) ctx.rotate(-Math.PI / 2);
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
-  const ty = fits ? 0 : -9 * px;
+  const ty = place.beside;
   ctx.fillStyle = 'rgba(245,242,234,0.92)';
   ctx.fillRect(-w / 2 - 2 * px, ty - 6.5 * px, w + 4 * px, 13 * px);
   ctx.fillStyle = colour;
