@@ -27,7 +27,7 @@ export interface EditorProps {
 
 /** Hooks other features plug into the editor without the editor knowing what they are. */
 export interface EditorExtensions {
-  /** Extra Konva layers drawn over the plan (world space through the viewport given). */
+  /** Extra Konva nodes (a Group, not a Layer) drawn over the plan in the overlay's layer, in world mm. */
   planOverlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;
   /** Extra Konva layers drawn under the plan (tracing photos), never listening for events. */
   planUnderlay?: (view: { viewport: Viewport; arrangement: Arrangement }) => ReactNode;

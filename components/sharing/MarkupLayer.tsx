@@ -5,14 +5,14 @@
  * through the editor's viewport (the point in world millimetres, the symbol a fixed size on
  * screen) so they stay on their spot at any zoom; a dashed symbol marks a mark-up waiting for its
  * text. Reports the viewport and arrangement it was drawn with, so clicks can be turned into plan
- * points (markupGeometry). Loaded in the browser only (Konva), inside the editor's stage.
+ * points (markupGeometry). Loaded in the browser only (Konva), as a group in the editor's overlay
+ * layer (which carries the world transform).
  * Never listens for events itself, never fetches, never touches the editor's store.
  */
 import { useEffect } from 'react';
-import { Circle, Group, Layer, Line, Text } from '../editor/canvas/konva';
+import { Circle, Group, Line, Text } from '../editor/canvas/konva';
 import type { Arrangement } from '@/lib/layout/schema';
 import type { Viewport } from '@/components/editor/geometry/viewport';
-import { worldLayerProps } from '@/components/editor/canvas/worldTransform';
 import { theme, canvasFonts } from '@/components/editor/theme';
 import { hexagonPoints, MARKUP_OFFSET_PX, MARKUP_RADIUS_PX, type MarkupView } from './markupGeometry';
 
@@ -61,13 +61,13 @@ export function MarkupLayer(p: MarkupLayerProps) {
   const s = viewport.scale;
   const here = p.markups.filter((m) => m.arrangement === arrangement);
   return (
-    <Layer {...worldLayerProps(viewport)} listening={false} name="markups">
+    <Group listening={false} name="markups">
       {here.map((m) => (
         <KeyedNote key={m.id} x={m.x} y={m.y} s={s} number={m.number} settled={m.settled} active={m.id === p.activeId} />
       ))}
       {p.pending && p.pending.arrangement === arrangement && (
         <KeyedNote x={p.pending.x} y={p.pending.y} s={s} settled={false} active={false} pending />
       )}
-    </Layer>
+    </Group>
   );
 }

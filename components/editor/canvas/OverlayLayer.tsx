@@ -4,9 +4,10 @@
  * double line so colour is not the only cue), modules a clicked finding names, the selection with
  * its resize handles, and the selected module's size and gaps. Never listens for events; draws
  * nothing while a move or resize is in progress (the drag layer shows the live state). The layer
- * itself stays shown, as every layer of the plan does (see DragLayer.tsx).
+ * itself stays shown, as every layer of the plan does (see DragLayer.tsx). Its children (the
+ * mark-ups and the rulers) share its canvas.
  */
-import { memo } from 'react';
+import { memo, type ReactNode } from 'react';
 import { Layer, Shape } from './konva';
 import type Konva from 'konva';
 import type { Arrangement, LayoutDoc, LengthUnit } from '@/lib/layout';
@@ -41,6 +42,8 @@ interface Props {
   openingSelection?: string | null;
   openingHighlight?: string[];
   openingPreview?: { opening: Opening; guides: SnapGuide[] } | null;
+  /** Drawn over it in the same layer (so the plan keeps to three canvases): mark-ups, then the rulers. */
+  children?: ReactNode;
 }
 
 export const OverlayLayer = memo(function OverlayLayer(p: Props) {
@@ -119,6 +122,7 @@ export const OverlayLayer = memo(function OverlayLayer(p: Props) {
   return (
     <Layer {...worldLayerProps(p.viewport)} listening={false} name="overlay">
       <Shape sceneFunc={draw} listening={false} visible={!p.hidden} />
+      {p.children}
     </Layer>
   );
 });

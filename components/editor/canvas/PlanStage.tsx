@@ -1,6 +1,7 @@
 'use client';
 /**
- * The plan: composes the layers (sheet, modules, overlay, drag, rulers) in one Konva stage sized
+ * The plan: composes the layers (drawing: sheet and modules; overlay: selection, mark-ups and
+ * rulers; drag) in one Konva stage sized
  * to its box, and wires pointer input. It only composes; drawing lives in the layers and input in
  * usePlanPointer. Must never draw anything itself.
  */
@@ -13,7 +14,7 @@ import { SheetLayer } from './SheetLayer';
 import { ModulesLayer } from './ModulesLayer';
 import { OverlayLayer } from './OverlayLayer';
 import { DragLayer } from './DragLayer';
-import { RulerLayer } from './RulerLayer';
+import { Rulers } from './Rulers';
 import { OpeningsShape } from './OpeningsShape';
 import { openingMarks } from '../geometry/openingMarks';
 import { OpeningsList } from './OpeningsList';
@@ -77,6 +78,17 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
   const { bay, buildUp } = s.doc;
   const scale = s.viewport.scale;
   const marks = useMemo(() => openingMarks({ bay, buildUp }, 1 / scale), [bay, buildUp, scale]);
+  // What the overlay's layer draws over its own shape, made again only when it changes (the layer is redrawn when its children are).
+  const { viewport, arrangement, units } = s;
+  const overOverlay = useMemo(
+    () => (
+      <>
+        {overlay?.({ viewport, arrangement })}
+        <Rulers viewport={viewport} units={units} fonts={fonts} />
+      </>
+    ),
+    [overlay, viewport, arrangement, units, fonts],
+  );
   return (
     <div
       ref={box}
@@ -100,10 +112,12 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
             <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} bay={bay} openings={marks} />
             <OpeningsShape marks={marks} scale={s.viewport.scale} fonts={fonts} dragging={s.openingPreview?.opening.id ?? null} />
           </Layer>
-          <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} openingSelection={s.openingSelection} openingHighlight={s.openingHighlight} openingPreview={s.openingPreview} />
-          {overlay?.({ viewport: s.viewport, arrangement: s.arrangement })}
+          {/* Three canvases in all (Chromium copies every canvas of the plan at each compositor commit):
+              the overlay's layer also holds the mark-ups and the rulers, over everything but a drag. */}
+          <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} openingSelection={s.openingSelection} openingHighlight={s.openingHighlight} openingPreview={s.openingPreview}>
+            {overOverlay}
+          </OverlayLayer>
           <DragLayer viewport={s.viewport} units={s.units} fonts={fonts} />
-          <RulerLayer viewport={s.viewport} units={s.units} fonts={fonts} />
         </Stage>
       )}
       <OpeningsList doc={s.doc} viewport={s.viewport} selected={s.openingSelection} />
