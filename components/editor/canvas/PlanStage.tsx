@@ -112,7 +112,7 @@ export function PlanStage({ failing, onContextMenu, describedBy, overlay, underl
             <ModulesLayer modules={s.doc.modules} arrangement={s.arrangement} phantom={s.phantom} viewport={s.viewport} fonts={fonts} fontsReady={ready} units={s.units} bay={bay} openings={marks} />
             <OpeningsShape marks={marks} scale={s.viewport.scale} fonts={fonts} dragging={s.openingPreview?.opening.id ?? null} />
           </Layer>
-          {/* Three canvases in all (Chromium copies every canvas of the plan at each compositor commit):
+          {/* Three canvases in all, four while a photo is traced (Chromium copies every canvas of the plan at each compositor commit):
               the overlay's layer also holds the mark-ups and the rulers, over everything but a drag. */}
           <OverlayLayer doc={s.doc} arrangement={s.arrangement} selection={s.selection} highlight={s.highlight} failing={failing} viewport={s.viewport} units={s.units} fonts={fonts} showHandles={!s.readOnly} hidden={moving} openingSelection={s.openingSelection} openingHighlight={s.openingHighlight} openingPreview={s.openingPreview}>
             {overOverlay}
