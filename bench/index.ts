@@ -163,7 +163,12 @@ ${table}
   the GPU off), while the page's own script in those frames takes under 15 ms. A later trace (same day, after the drag
   and overlay layers stopped being hidden between gestures) shows every commit of the drag producing all five of the
   plan's canvases (595 productions: median 1.0 ms, p90 3.3 ms); in the one slow commit each took about 50 ms, with
-  only the drag layer redrawn in that frame.
+  only the drag layer redrawn in that frame. Traced again (2026-12-05, later): the slow productions come in batches
+  that take every canvas at once, about 40 ms each, busy in the renderer's main thread (thread time about equal to
+  wall time), twice while the editor loads and about once a drag, with no change to the page in the frames before
+  them (Konva redrew only the drag layer). Since then the plan keeps to three canvases (the rulers and the mark-ups
+  draw in the overlay's layer): in three scratch runs each of the 4× one-finger drag, the worst frame went from
+  200–217 ms to 117–150 ms, and the 4× zoom from one 200 ms frame in three runs to none over 17 ms.
 - **Gzipped JavaScript** (\`bench/bundles.ts\`, \`npm run bench:bundles\`): every page route the build lists in
   \`.next/diagnostics/route-bundle-stats.json\` (a route with no visit fails the run), opened in a fresh browser context
   (empty cache; signed in as the demo owner where the page needs it): the encoded size of every script response until the

@@ -16,6 +16,9 @@ export const BAY_WORD_PX = 10;
 export const DIMENSION_TEXT_PX = 10.5;
 export const OVERALL_OFFSET_PX = 34;
 
+/** The cab arrow's centre ahead of the bulkhead and its word above it, screen px. */
+export const CAB_ARROW_PX = { x: -22, wordDy: -12 } as const;
+
 export interface PlanWord {
   text: string;
   /** Its centre, mm. */
@@ -37,12 +40,9 @@ export function bayWords(bay: Pick<Bay, 'length' | 'width' | 'doors' | 'bulkhead
   return out;
 }
 
-/** The cab arrow's centre ahead of the bulkhead and its word above it, screen px. */
-export const CAB_ARROW_PX = { x: -22, wordDy: -12 } as const;
-
 /**
  * Where a dimension string's value goes, for a value `textPx` wide on screen: on the line where
- * there is room, else 9 px beside it. The centre is in mm; `along` is the value's reading direction.
+ * there is room, else 9 px beside it (`beside`, mm). The centre is in mm; `turned` for a value read from below.
  */
 export function dimensionTextPlace(d: DimensionString, scale: number, textPx: number, offsetPx = 0): { x: number; y: number; beside: number; turned: boolean } {
   const px = 1 / scale;
@@ -62,7 +62,7 @@ const boxOf = (text: string, x: number, y: number, turned: boolean, scale: numbe
 export function planTextBoxes(doc: Pick<LayoutDoc, 'bay'>, marks: readonly OpeningMark[], scale: number, units: LengthUnit, measure: MeasureText): TextBox[] {
   const px = 1 / scale;
   const words = bayWords(doc.bay, px).map((w) => boxOf(w.text, w.x, w.y, w.turned, scale, measure(w.text, 'text', BAY_WORD_PX) + 4, BAY_WORD_PX * 1.3));
-  const dims = overallDimensions(doc as LayoutDoc, OVERALL_OFFSET_PX * px).map((d) => {
+  const dims = overallDimensions(doc, OVERALL_OFFSET_PX * px).map((d) => {
     const text = formatLength(d.value, units);
     const w = measure(text, 'mono', DIMENSION_TEXT_PX);
     const at = dimensionTextPlace(d, scale, w);
