@@ -168,7 +168,9 @@ ${table}
   wall time), twice while the editor loads and about once a drag, with no change to the page in the frames before
   them (Konva redrew only the drag layer). Since then the plan keeps to three canvases (the rulers and the mark-ups
   draw in the overlay's layer): in three scratch runs each of the 4× one-finger drag, the worst frame went from
-  200–217 ms to 117–150 ms, and the 4× zoom from one 200 ms frame in three runs to none over 17 ms.
+  200–217 ms to 117–150 ms, and the 4× zoom from one 200 ms frame in three runs to none over 17 ms. Two canvases
+  (the drag layer's nodes in the overlay's layer too) were tried and left: the one-finger drag's worst frame was
+  100–133 ms in three runs, and the mouse drag's second frame grew to 67–100 ms (the overlay is redrawn as it starts).
 - **Gzipped JavaScript** (\`bench/bundles.ts\`, \`npm run bench:bundles\`): every page route the build lists in
   \`.next/diagnostics/route-bundle-stats.json\` (a route with no visit fails the run), opened in a fresh browser context
   (empty cache; signed in as the demo owner where the page needs it): the encoded size of every script response until the
