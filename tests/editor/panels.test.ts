@@ -5,6 +5,9 @@ import { countByStatus, failingModuleIds, groupFindings } from '@/components/edi
 import { KIND_LIST } from '@/lib/layout';
 import type { Finding } from '@/lib/checks/types';
 import { mod } from './harness';
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
+import { ChecksReportView } from '@/components/editor/panels/ChecksReportView';
 
 describe('Parts shelf', () => {
   it('offers at least the 18 kinds the brief lists, each with a size and mass', () => {
@@ -106,5 +109,21 @@ describe('Checks grouping', () => {
   it('outlines only modules failing in the arrangement on show or layout-wide', () => {
     expect(failingModuleIds(findings, 'lounge')).toEqual(['a']);
     expect(failingModuleIds(findings, 'sleep').sort()).toEqual(['a', 'bed']);
+  });
+});
+
+describe('Checks list', () => {
+  const finding = (id: string, status: Finding['status'], arrangement?: Finding['arrangement']): Finding => ({ id, status, arrangement, message: `${id} is ${status}`, source: 'common practice, no source' });
+
+  it('says a group meets everything rather than showing a bare heading when what meets is hidden', () => {
+    const report = { ok: true, findings: [finding('layout.payload', 'warn'), finding('travel.seat-belts', 'pass', 'travel'), finding('travel.walkway', 'pass', 'travel'), finding('lounge.headroom', 'pass', 'lounge')] };
+    const html = renderToStaticMarkup(createElement(ChecksReportView, { checks: { report, status: 'ready', stale: false }, units: 'mm' }));
+    const section = (label: string) => html.match(new RegExp(`<section[^>]*aria-label="${label}"[^>]*>(.*?)</section>`))?.[1] ?? '';
+    expect(section('travel arrangement')).toContain('All 2 checks here meet.');
+    expect(section('lounge arrangement')).toContain('The one check here meets.');
+    expect(section('travel arrangement')).not.toContain('travel.walkway is pass');
+    // A group with something to look at lists it, with no "meets" line.
+    expect(section('Whole layout')).toContain('layout.payload is warn');
+    expect(section('Whole layout')).not.toContain('group-all-meet');
   });
 });

@@ -41,6 +41,15 @@ export interface ChecksReportViewProps {
 
 const NONE: readonly string[] = [];
 
+/** What a group says when every finding in it meets and those are hidden (“show what meets” lists them): not a bare heading. */
+function AllMeet({ count }: { count: number }) {
+  return (
+    <p className="flex items-center gap-1.5 px-2 py-1 text-xs text-ink-soft" data-testid="group-all-meet">
+      <CircleCheck size={13} className="text-moss" aria-hidden /> {count === 1 ? 'The one check here meets.' : `All ${count} checks here meet.`}
+    </p>
+  );
+}
+
 export function ChecksReportView({ checks, units, layoutId, highlight = NONE, openingHighlight = NONE, focus }: ChecksReportViewProps) {
   const [showPass, setShowPass] = useState(false);
   const { report, status, stale, message } = checks;
@@ -68,6 +77,7 @@ export function ChecksReportView({ checks, units, layoutId, highlight = NONE, op
         {folded && groupFindings(folded.judged).map((g) => (
           <section key={g.arrangement} className="mb-3" aria-label={g.arrangement === 'all' ? 'Whole layout' : `${g.arrangement} arrangement`}>
             <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">{g.arrangement === 'all' ? 'Whole layout' : g.arrangement}</h3>
+            {!showPass && g.byStatus.every((b) => b.status === 'pass') && <AllMeet count={g.byStatus.reduce((n, b) => n + b.findings.length, 0)} />}
             {g.byStatus.filter((b) => showPass || b.status !== 'pass').map((b) => (
               <ul key={b.status} className="space-y-1">
                 {b.findings.map((f, i) => {
