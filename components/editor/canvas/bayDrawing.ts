@@ -140,6 +140,10 @@ function label(ctx: Ctx, text: string, x: number, y: number, px: number, fonts: 
   ctx.font = `${BAY_WORD_PX * px}px ${fonts.text}`;
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
+  // On paper, as the dimension values are: the rear doors' swing lines run through their word.
+  const w = ctx.measureText(text).width;
+  ctx.fillStyle = 'rgba(245,242,234,0.92)';
+  ctx.fillRect(-w / 2 - 2 * px, -0.65 * BAY_WORD_PX * px, w + 4 * px, 1.3 * BAY_WORD_PX * px);
   ctx.fillStyle = theme.inkSoft;
   ctx.fillText(text, 0, 0);
   ctx.restore();
