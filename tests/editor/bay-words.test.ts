@@ -4,30 +4,14 @@
 import { describe, expect, it } from 'vitest';
 import { drawBay } from '@/components/editor/canvas/bayDrawing';
 import { starterLayout } from '@/lib/layout/templates';
-
-type Call = { op: string; args: unknown[] };
-
-/** A 2D context that records its calls with their arguments (text 5 units wide a character). */
-function recorder() {
-  const calls: Call[] = [];
-  const ctx = new Proxy({} as Record<string, unknown>, {
-    get(target, key: string) {
-      if (key in target) return target[key];
-      if (key === 'measureText') return (t: string) => ({ width: t.length * 5 });
-      if (key === 'createPattern') return () => null;
-      return (...args: unknown[]) => { calls.push({ op: key, args }); };
-    },
-    set(target, key: string, value) { target[key] = value; calls.push({ op: `set ${key}`, args: [value] }); return true; },
-  });
-  return { ctx: ctx as unknown as CanvasRenderingContext2D, calls };
-}
+import { recordingContext } from './recorder';
 
 describe('the bay’s words on the plan', () => {
   for (const scale of [0.12, 0.27, 0.4]) {
     it(`every door and cab word has paper under it, drawn after the door marks (${scale} px/mm)`, () => {
       const doc = starterLayout('starter-rear-bed')!;
       expect(doc.bay.doors.some((d) => d.wall === 'rear')).toBe(true);
-      const { ctx, calls } = recorder();
+      const { ctx, calls } = recordingContext();
       drawBay(ctx, doc, scale);
       const words = calls.filter((c) => c.op === 'fillText');
       const texts = words.map((c) => c.args[0]);

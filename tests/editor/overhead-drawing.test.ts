@@ -3,29 +3,13 @@
 // memory of the standards' line-type tables): an overhead locker must not paint over the kitchen below it.
 import { describe, expect, it } from 'vitest';
 import { drawModule } from '@/components/editor/canvas/moduleSymbols';
-
-/** A 2D context that records what is drawn, enough for drawModule. */
-function recorder() {
-  const calls: { op: string; dash: number[] }[] = [];
-  let dash: number[] = [];
-  const ctx = new Proxy({} as Record<string, unknown>, {
-    get(target, key: string) {
-      if (key in target) return target[key];
-      if (key === 'setLineDash') return (d: number[]) => { dash = d; };
-      if (key === 'measureText') return (t: string) => ({ width: t.length * 5 });
-      if (key === 'createPattern') return () => null;
-      return (..._args: unknown[]) => { calls.push({ op: key, dash }); };
-    },
-    set(target, key: string, value) { target[key] = value; return true; },
-  });
-  return { ctx: ctx as unknown as CanvasRenderingContext2D, calls };
-}
+import { recordingContext } from './recorder';
 
 const look = (kind: 'overhead-locker' | 'kitchen-counter') => ({ kind, length: 1200, width: 350, facing: 'right' as const });
 
 describe('overhead modules on the plan', () => {
   it('an overhead locker is a dashed outline with no fill of its own', () => {
-    const { ctx, calls } = recorder();
+    const { ctx, calls } = recordingContext();
     drawModule(ctx, look('overhead-locker'), { scale: 0.3 });
     const outline = calls.find((c) => c.op === 'strokeRect');
     expect(outline?.dash.length).toBeGreaterThan(0);
@@ -34,7 +18,7 @@ describe('overhead modules on the plan', () => {
   });
 
   it('a counter below keeps its solid outline and its paper fill', () => {
-    const { ctx, calls } = recorder();
+    const { ctx, calls } = recordingContext();
     drawModule(ctx, look('kitchen-counter'), { scale: 0.3 });
     const outline = calls.find((c) => c.op === 'strokeRect')!;
     expect(outline.dash).toEqual([]);
