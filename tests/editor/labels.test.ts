@@ -8,7 +8,7 @@ import { ABBREVIATION_MAX, KIND_SHORT_NAMES, SHORT_NAME_MAX } from '@/lib/symbol
 import { MODULE_KINDS } from '@/lib/layout/kinds';
 import { textWidth } from '@/lib/sheet/typography';
 import { markTextBoxes, openingMarks, POINT_RADIUS_PX, type OpeningMark } from '@/components/editor/geometry/openingMarks';
-import { bayWords, dimensionTextPlace, planTextBoxes } from '@/components/editor/geometry/planWords';
+import { bayWords, dimensionTextPlace, planLineBoxes, planTextBoxes } from '@/components/editor/geometry/planWords';
 import { labelRequestOf } from '@/components/editor/canvas/moduleSymbols';
 import { starterLayout } from '@/lib/layout/templates';
 import { inArrangement } from '@/lib/layout/bay';
@@ -180,13 +180,21 @@ describe('module labels keep clear of the openings\u2019 words', () => {
     expect(dimensionTextPlace({ role: 'overall', axis: 'x', from: 0, to: 3100, at: -170, value: 3100 }, 0.2, 50)).toEqual({ x: 1550, y: -170, beside: 0, turned: false });
     // 100 mm is 20 px: the value goes 9 px (45 mm) beside it; along y it reads turned, beside along −x.
     expect(dimensionTextPlace({ role: 'gap-lining', axis: 'y', from: 0, to: 100, at: 500, value: 100 }, 0.2, 50)).toEqual({ x: 455, y: 50, beside: -45, turned: true });
+    // The overall dimension lines stand 34 px (170 mm) off the bay, with 4 px of overrun and tick
+    // either side: the length's line along y = −170 mm, the width's along x = 3100 + 170 mm.
+    expect(planLineBoxes({ bay }, 0.2)).toEqual([
+      { text: '', cx: 310, cy: -34, width: (3100 + 40) * 0.2, height: 8, rotation: 0 },
+      { text: '', cx: 654, cy: 180, width: 8, height: (1800 + 40) * 0.2, rotation: 0 },
+    ]);
   });
 
-  it('on both starter layouts, at every zoom from a phone\u2019s to a close look, no module label covers an opening\u2019s word or point', () => {
+  it('on both starter layouts, at every zoom from a phone\u2019s to a close look, no module label covers an opening\u2019s word or point, or crosses an overall dimension line', () => {
     // 0.10–0.40 px/mm: a 3100 mm bay across 310 px (a phone) to 1240 px. Without the plan's other
     // words as obstacles, the lounge starter's bench and heater labels and the touring starter's bed
     // size and roof panel label run over "exhaust", "intake", "vent" and "drop vent" in this range,
     // and on a phone the lounge starter's grey tank size over "rear doors" and the "1800 mm" width.
+    // Without the overall dimension lines as obstacles, the electrics bay's "400 × 300 mm", set
+    // outside it at the rear wall, runs across the width's line on a phone (0.10 px/mm).
     for (const name of ['starter-l-lounge', 'starter-rear-bed']) {
       const doc = starterLayout(name)!;
       for (let step = 0; step <= 15; step++) {
@@ -195,9 +203,11 @@ describe('module labels keep clear of the openings\u2019 words', () => {
         expect(words.length).toBeGreaterThan(5);
         for (const arrangement of ['travel', 'lounge', 'sleep'] as const) {
           const items = doc.modules.filter((m) => inArrangement(m, arrangement)).map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units: 'mm' }) }));
-          const boxes = onPlan(placePlanLabels(items, measure, words), items);
+          const lines = planLineBoxes(doc, scale);
+          const boxes = onPlan(placePlanLabels(items, measure, [...words, ...lines]), items);
           expect(boxes.length).toBeGreaterThan(3);
           for (const b of boxes) for (const w of words) expect(boxesOverlap(b, w), `${name} at ${scale.toFixed(2)} px/mm, ${arrangement}: ${b.text} / ${w.text || 'a point'}`).toBe(false);
+          for (const b of boxes) for (const l of lines) expect(boxesOverlap(b, l), `${name} at ${scale.toFixed(2)} px/mm, ${arrangement}: ${b.text} across an overall dimension line`).toBe(false);
         }
       }
     }

@@ -15,7 +15,7 @@ import { ModuleLabels, ModuleShape } from './ModuleShape';
 import { canvasMeasure, labelRequestOf } from './moduleSymbols';
 import { placePlanLabels, rememberedWidths } from '../geometry/labels';
 import type { OpeningMark } from '../geometry/openingMarks';
-import { planTextBoxes } from '../geometry/planWords';
+import { planLineBoxes, planTextBoxes } from '../geometry/planWords';
 import type { CanvasFonts } from './useCanvasFonts';
 import { inArrangement } from '@/lib/layout/bay';
 
@@ -58,7 +58,7 @@ export const ModulesLayer = memo(function ModulesLayer({ modules, arrangement, p
   const placements = useMemo(() => {
     if (!measure) return undefined;
     const items = shown.map((m) => ({ id: m.id, x: m.x * scale, y: m.y * scale, ...labelRequestOf(m, { scale, units }) }));
-    return placePlanLabels(items, measure, planTextBoxes({ bay }, openings, scale, units, measure));
+    return placePlanLabels(items, measure, [...planTextBoxes({ bay }, openings, scale, units, measure), ...planLineBoxes({ bay }, scale)]);
   }, [shown, scale, units, measure, bay, openings]);
   return (
     <Group listening={false} name="modules">

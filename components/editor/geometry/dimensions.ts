@@ -21,7 +21,7 @@ export interface DimensionString {
   neighbourId?: string;
 }
 
-export function overallDimensions(doc: Pick<LayoutDoc, 'bay'>, offset: number): DimensionString[] {
+export function overallDimensions(doc: { bay: Pick<LayoutDoc['bay'], 'length' | 'width'> }, offset: number): DimensionString[] {
   const { length, width } = doc.bay;
   return [
     { role: 'overall', axis: 'x', from: 0, to: length, at: -offset, value: length },

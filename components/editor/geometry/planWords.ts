@@ -2,8 +2,8 @@
  * What the bay's own drawing writes on the plan, and where: the door words and the cab word
  * (bayDrawing.ts draws them from here) and the overall dimensions' values (dimensionDrawing.ts
  * places them with `dimensionTextPlace`). As boxes in the plan's px (mm × scale, as
- * `placePlanLabels` takes them), with the openings' words, they are what the module labels keep
- * clear of. Pure math in mm (`px` is mm per screen pixel); never draws, never reads the store.
+ * `placePlanLabels` takes them), with the openings' words and the overall dimension lines
+ * (`planLineBoxes`), they are what the module labels keep clear of. Pure math in mm (`px` is mm per screen pixel); never draws, never reads the store.
  */
 import type { Bay, LayoutDoc } from '@/lib/layout/schema';
 import { formatLength, type LengthUnit } from '@/lib/layout/units';
@@ -69,4 +69,24 @@ export function planTextBoxes(doc: Pick<LayoutDoc, 'bay'>, marks: readonly Openi
     return boxOf(text, at.x, at.y, at.turned, scale, w + 4, 13);
   });
   return [...words, ...dims, ...markTextBoxes(marks, scale, measure)];
+}
+
+/** The overall dimension lines' half thickness on screen, px: their 45° ticks reach this far either side. */
+const DIMENSION_LINE_HALF_PX = 4;
+
+/**
+ * The overall dimension lines as thin boxes in plan px, ticks and overrun included: a module's
+ * size set outside its module (on a phone's small scale, beside a module at the rear wall) must
+ * not be written across them.
+ */
+export function planLineBoxes(doc: { bay: Pick<Bay, 'length' | 'width'> }, scale: number): TextBox[] {
+  const px = 1 / scale;
+  return overallDimensions(doc, OVERALL_OFFSET_PX * px).map((d) => {
+    const along = (Math.abs(d.to - d.from) + 8 * px) * scale;
+    const across = 2 * DIMENSION_LINE_HALF_PX;
+    const mid = ((d.from + d.to) / 2) * scale;
+    return d.axis === 'x'
+      ? { text: '', cx: mid, cy: d.at * scale, width: along, height: across, rotation: 0 }
+      : { text: '', cx: d.at * scale, cy: mid, width: across, height: along, rotation: 0 };
+  });
 }
