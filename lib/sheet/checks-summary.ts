@@ -42,7 +42,8 @@ export function flowChecks(flow: ColumnFlow, report: CheckReport | null, unavail
   const { judged, needs, waiting } = foldWaiting(report.findings);
   const counts = countByStatus(judged);
   const summary = `${statusCounts(counts, waiting)}${report.ok ? ' — every requirement checked is met or needs attention only.' : ' — put right every requirement that is not met before building.'}`;
-  flow.place(lh + 2, (x, y) => [{ type: 'text', x, y: y + lh, text: summary, size, font: 'sans-bold' }]);
+  const summaryLines = wrap(summary, size, flow.columnWidth, 'sans-bold');
+  flow.place(summaryLines.length * lh + 2, (x, y) => summaryLines.map((t, i) => ({ type: 'text', x, y: y + (i + 1) * lh, text: t, size, font: 'sans-bold' })));
   if (report.findings.length === 0) {
     flow.place(lh, (x, y) => [{ type: 'text', x, y: y + lh, text: 'The checks found nothing to report.', size, ink: 'soft' }]);
     return;

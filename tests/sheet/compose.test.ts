@@ -7,6 +7,8 @@ import { printable, textWidth, wrap } from '@/lib/sheet/typography';
 import { starterLayout, bayTemplate, emptyLayout, type LayoutDoc } from '@/lib/layout';
 import type { CheckReport } from '@/lib/checks/types';
 import { diffRevisions } from '@/lib/layout/revision-diff';
+import type { Column } from '@/lib/sheet/flow';
+import type { TextItem } from '@/lib/sheet/primitives';
 import { fontsReady } from './sheet-fonts';
 
 const lounge = starterLayout('starter-l-lounge')!;
@@ -230,5 +232,27 @@ describe('mass and balance on the sheet', () => {
     expect(all).toMatch(/1,250/);
     expect(all).toMatch(/Payload left/);
     expect(all).toMatch(/Laden centre of mass \d[\d,]* mm behind the front of the load floor/);
+  });
+});
+
+describe('the check summary in a narrow column', () => {
+  it('wraps every line of the checks to the column, the counts line too', async () => {
+    const { flowChecks } = await import('@/lib/sheet/checks-summary');
+    const { ColumnFlow } = await import('@/lib/sheet/flow');
+    // Counts in three figures make the opening line about twice as long as a 70 mm column.
+    const finding = (i: number, status: 'fail' | 'warn' | 'pass') => ({ id: 'fit.overlap', status, message: `Finding ${i}`, source: 'Layout geometry' });
+    const big: CheckReport = {
+      ok: false,
+      findings: [...Array.from({ length: 112 }, (_, i) => finding(i, 'fail')), ...Array.from({ length: 124 }, (_, i) => finding(i, 'warn')), ...Array.from({ length: 156 }, (_, i) => finding(i, 'pass'))],
+    };
+    const width = 70;
+    const columns: Column[] = [];
+    const flow = new ColumnFlow({ next: () => { const c: Column = { x: 10, y: 10, width, height: 2000, items: [], fresh: true }; columns.push(c); return c; } }, width);
+    flowChecks(flow, big);
+    const texts = columns.flatMap((c) => c.items).filter((i): i is TextItem => i.type === 'text');
+    const counts = texts.filter((t) => t.font === 'sans-bold' && /do not meet|need attention|meet/.test(t.text) && !/·/.test(t.text));
+    expect(counts.length).toBeGreaterThanOrEqual(2); // the counts line, wrapped
+    expect(counts.map((t) => t.text).join(' ')).toContain('112 do not meet');
+    for (const t of texts) expect(t.x - 10 + textWidth(t.text, t.size, t.font ?? 'sans'), t.text).toBeLessThanOrEqual(width + 0.01);
   });
 });
