@@ -3,7 +3,8 @@
  * (bayDrawing.ts draws them from here) and the overall dimensions' values (dimensionDrawing.ts
  * places them with `dimensionTextPlace`). As boxes in the plan's px (mm × scale, as
  * `placePlanLabels` takes them), with the openings' words and the overall dimension lines
- * (`planLineBoxes`), they are what the module labels keep clear of. Pure math in mm (`px` is mm per screen pixel); never draws, never reads the store.
+ * (`planLineBoxes`), they are what the module labels keep clear of. Pure math in mm (`px` is mm
+ * per screen pixel); never draws, never reads the store.
  */
 import type { Bay, LayoutDoc } from '@/lib/layout/schema';
 import { formatLength, type LengthUnit } from '@/lib/layout/units';
